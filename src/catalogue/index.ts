@@ -1,0 +1,7 @@
+// Catalogues: sections, strands, fabrics and claddings read from data/.
+export type { Catalogue, ChsSection, Strand, Fabric, Cladding } from "./types";
+export { chsFromDimensions, parseChsCatalogue, STEEL_DENSITY_KG_PER_M3 } from "./chs";
+export { parseStrandCatalogue, parseFabricCatalogue, parseCladdingCatalogue } from "./tables";
+export { buildCatalogue, type CatalogueTexts } from "./build-catalogue";
+export { pickLightestChs, chsResistance, type ChsDemand, type ChsChoice } from "./pick-chs";
+export { parseCsvTable, CsvError, type CsvProblem, type ColumnSpec } from "./csv-table";

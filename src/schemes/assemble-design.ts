@@ -1,0 +1,96 @@
+import type { Brief } from "../study/brief";
+import type { Check, Design, DrawingLine, MemberGroup, SchemeId, SchemeModel, SummaryItem } from "./types";
+import type { TakeoffRow } from "../takeoff/takeoff-row";
+import { sphericalCap } from "../mechanics/spherical-cap";
+import { enclosedAirMassKg } from "../mechanics/air";
+
+export interface DesignParts {
+  summary: SummaryItem[];
+  members: MemberGroup[];
+  takeoff: TakeoffRow[];
+  checks: Check[];
+  warnings: string[];
+  iterations: number;
+  usableFloorM2: number;
+  roofSurfaceM2: number;
+  /** Enclosed volume, m³ (walls to eaves plus the roof's own volume). */
+  enclosedVolumeM3: number;
+  drawing: Design["drawing"];
+  /** A reason the scheme cannot be built, beyond failed checks ("" if none). */
+  reason?: string;
+}
+
+/**
+ * Completes a Design from its parts: totals, self-weight per m² of plan, the governing check, the
+ * valid-range flag and the feasibility verdict (infeasible when any check fails or a reason is given).
+ */
+export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "label">, brief: Brief, parts: DesignParts): Design {
+  const planAreaM2 = Math.PI * (brief.spanM / 2) ** 2;
+  const totalMassKg = parts.takeoff.reduce((sum, row) => sum + row.massKg, 0);
+  const governingCheck = parts.checks.reduce<Check | undefined>((worst, c) => (worst === undefined || c.utilisation > worst.utilisation ? c : worst), undefined);
+  const failed = parts.checks.filter((c) => !c.passed);
+  const outsideValidRange = brief.spanM < model.validSpanM.min || brief.spanM > model.validSpanM.max;
+  const warnings = [...parts.warnings];
+  if (outsideValidRange) {
+    warnings.unshift(`span ${brief.spanM} m is outside the method's valid range for ${model.label.toLowerCase()} (${model.validSpanM.min}–${model.validSpanM.max} m)`);
+  }
+  const reason =
+    parts.reason && parts.reason.length > 0
+      ? parts.reason
+      : failed.length > 0
+        ? `fails ${failed.map((c) => `${c.name} (utilisation ${c.utilisation.toFixed(2)})`).join(", ")}`
+        : "";
+  return {
+    schemeId: model.id,
+    feasible: reason === "",
+    reason,
+    outsideValidRange,
+    summary: parts.summary,
+    members: parts.members,
+    takeoff: parts.takeoff,
+    checks: parts.checks,
+    warnings,
+    iterations: parts.iterations,
+    totalMassKg,
+    selfWeightKgPerM2: totalMassKg / planAreaM2,
+    usableFloorM2: parts.usableFloorM2,
+    planAreaM2,
+    roofSurfaceM2: parts.roofSurfaceM2,
+    enclosedAirKg: enclosedAirMassKg(parts.enclosedVolumeM3),
+    governing: governingCheck ? governingCheck.name : "",
+    maxUtilisation: governingCheck ? governingCheck.utilisation : 0,
+    drawing: parts.drawing,
+  };
+}
+
+/** An infeasible Design for a scheme that could not be computed at all (e.g. self-weight diverged). */
+export function infeasibleDesign(id: SchemeId, brief: Brief, reason: string, warnings: string[] = [], section: DrawingLine[] = []): Design {
+  const cap = sphericalCap(brief.spanM, brief.riseM);
+  return {
+    schemeId: id,
+    feasible: false,
+    reason,
+    outsideValidRange: false,
+    summary: [],
+    members: [],
+    takeoff: [],
+    checks: [],
+    warnings,
+    iterations: 0,
+    totalMassKg: 0,
+    selfWeightKgPerM2: 0,
+    usableFloorM2: 0,
+    planAreaM2: cap.planAreaM2,
+    roofSurfaceM2: cap.surfaceM2,
+    enclosedAirKg: enclosedAirMassKg(cap.planAreaM2 * brief.eavesHeightM + cap.volumeM3),
+    governing: "",
+    maxUtilisation: 0,
+    drawing: { section },
+  };
+}
+
+/** A check record from demand and capacity (utilisation = demand / capacity, passed when ≤ 1). */
+export function check(name: string, clause: string, demand: number, capacity: number, unit: string): Check {
+  const utilisation = capacity > 0 ? Math.abs(demand) / capacity : Number.POSITIVE_INFINITY;
+  return { name, clause, demand, capacity, unit, utilisation, passed: utilisation <= 1 };
+}

@@ -1,0 +1,15 @@
+// Schemes: one module per structural system, all with the same SchemeModel interface.
+import type { SchemeModel, SchemeId, SchemeOptions } from "./types";
+
+export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
+export { SCHEME_IDS } from "./types";
+export { assembleDesign, infeasibleDesign, check, type DesignParts } from "./assemble-design";
+export { iterateSelfWeight, ConvergenceError, type Converged } from "./converge";
+
+/** Every scheme, in the order pages list them. Each scheme module adds itself here. */
+export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [];
+
+/** The scheme with this id, or undefined. */
+export function schemeById(id: string): SchemeModel<SchemeOptions> | undefined {
+  return SCHEMES.find((s) => s.id === (id as SchemeId));
+}

@@ -1,0 +1,121 @@
+import type { Brief } from "../study/brief";
+import type { Catalogue } from "../catalogue/types";
+import type { MaterialId } from "../materials";
+import type { TakeoffRow } from "../takeoff/takeoff-row";
+
+export type SchemeId = "cable-dome" | "cable-net" | "geodesic-dome" | "truss-roof" | "concrete-shell";
+export const SCHEME_IDS: readonly SchemeId[] = ["cable-dome", "cable-net", "geodesic-dome", "truss-roof", "concrete-shell"];
+
+/** A scheme option's value as the study file stores it. */
+export type OptionValue = number | string | boolean;
+export type SchemeOptions = Record<string, OptionValue>;
+
+/** How an option is shown and validated. Every option has a default, a unit and where it comes from. */
+export type OptionSpec =
+  | {
+      key: string;
+      label: string;
+      kind: "number";
+      unit: string;
+      min: number;
+      max: number;
+      step: number;
+      /** Whole numbers only (counts). */
+      integer?: boolean;
+      source: string;
+    }
+  | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string }
+  | { key: string; label: string; kind: "toggle"; unit: ""; source: string };
+
+/** A number the page shows in the scheme's summary. */
+export interface SummaryItem {
+  key: string;
+  label: string;
+  value: number;
+  unit: string;
+}
+
+/** A group of alike members, sized together. Forces signed: + tension, − compression. */
+export interface MemberGroup {
+  element: string;
+  material: MaterialId;
+  count: number;
+  /** Length of one member (mean where they vary), m. */
+  lengthM: number;
+  /** Section chosen from the catalogue (designation). */
+  section: string;
+  /** Design force of the worst member, N (+ tension, − compression). */
+  designForceN: number;
+  /** Design resistance for the governing check, N (positive). */
+  resistanceN: number;
+  /** designForce / resistance, absolute. */
+  utilisation: number;
+  /** The check that governs, with its clause, e.g. "flexural buckling, EN 1993-1-1 §6.3.1". */
+  governing: string;
+}
+
+/** One design check. */
+export interface Check {
+  name: string;
+  /** Clause or published source of the check. */
+  clause: string;
+  demand: number;
+  capacity: number;
+  unit: string;
+  utilisation: number;
+  passed: boolean;
+}
+
+/** A polyline for a drawing; x horizontal from the centre, y up (section) or plan y, m. */
+export interface DrawingLine {
+  /** What it is, e.g. "ridge cable", "post", "shell"; the chart colours by role. */
+  role: string;
+  points: readonly (readonly [number, number])[];
+}
+
+/** The preliminary design of one scheme for one brief: plain data, comparable and serialisable. */
+export interface Design {
+  schemeId: SchemeId;
+  feasible: boolean;
+  /** Why it is infeasible, in words a person can act on; "" when feasible. */
+  reason: string;
+  /** Span outside the method's valid range (still computed where possible). */
+  outsideValidRange: boolean;
+  summary: SummaryItem[];
+  members: MemberGroup[];
+  takeoff: TakeoffRow[];
+  checks: Check[];
+  warnings: string[];
+  /** Self-weight iterations to converge. */
+  iterations: number;
+  /** Total structure and envelope mass, kg (sum of take-off masses). */
+  totalMassKg: number;
+  /** Self-weight per m² of plan, kg/m². */
+  selfWeightKgPerM2: number;
+  /** Plan area with at least the brief's clear height under the structure, m². */
+  usableFloorM2: number;
+  /** Plan area inside the roof edge, m². */
+  planAreaM2: number;
+  /** Roof surface area, m². */
+  roofSurfaceM2: number;
+  /** Mass of the air enclosed, kg. */
+  enclosedAirKg: number;
+  /** Name of the check with the highest utilisation. */
+  governing: string;
+  maxUtilisation: number;
+  drawing: { section: DrawingLine[]; plan?: DrawingLine[] };
+}
+
+/** A scheme: its description, its valid range, its options and its designer. */
+export interface SchemeModel<O extends SchemeOptions = SchemeOptions> {
+  id: SchemeId;
+  label: string;
+  /** One plain paragraph on the structural system. */
+  description: string;
+  /** Span range in which the method is valid, m. */
+  validSpanM: { min: number; max: number };
+  options: readonly OptionSpec[];
+  defaults: O;
+  /** Preliminary design. Never throws for a valid brief: infeasible is an answer. */
+  design(brief: Brief, options: O, catalogue: Catalogue): Design;
+}

@@ -1,0 +1,28 @@
+import { defineConfig } from "vitest/config";
+
+// Two projects: "node" (unit, reference, property; fast, no browser) and "browser" (the built
+// site served by `vite preview`, driven in Debian's Chromium by playwright-core).
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: "node",
+          include: ["test/unit/**/*.test.ts", "test/reference/**/*.test.ts", "test/property/**/*.test.ts"],
+          environment: "node",
+        },
+      },
+      {
+        test: {
+          name: "browser",
+          include: ["test/browser/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["test/browser/serve.ts"],
+          testTimeout: 60_000,
+          hookTimeout: 60_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
