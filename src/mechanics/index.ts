@@ -15,3 +15,14 @@ export {
   STEEL_E_PA,
   type BucklingCurve,
 } from "./flexural-buckling";
+
+// concrete (EN 1992-1-1)
+export {
+  concreteProperties,
+  concreteDesignStrengthPa,
+  rebarDesignStrengthPa,
+  CONCRETE_CLASSES,
+  REINFORCED_CONCRETE_DENSITY_KG_PER_M3,
+  type ConcreteClass,
+  type ConcreteProperties,
+} from "./concrete";
