@@ -1,0 +1,81 @@
+import * as v from "valibot";
+
+/**
+ * Shared valibot building blocks so every field's message says the value and what is allowed,
+ * e.g. `-3 (expected a number from 0.5 to 250 m)`. The field path is added by formatIssues.
+ */
+
+function show(value: unknown): string {
+  if (typeof value === "string") return JSON.stringify(value);
+  if (typeof value === "number" || typeof value === "boolean" || value === null) return String(value);
+  if (value === undefined) return "nothing";
+  return Array.isArray(value) ? "a list" : typeof value === "object" ? "an object" : String(value);
+}
+
+/** A finite number in [min, max] with its unit in the message. */
+export function numberIn(min: number, max: number, unit = "") {
+  const allowed = `expected a number from ${min} to ${max}${unit ? ` ${unit}` : ""}`;
+  return v.pipe(
+    v.number((issue) => `${show(issue.input)} (${allowed})`),
+    v.check((x) => Number.isFinite(x), (issue) => `${show(issue.input)} (${allowed})`),
+    v.minValue(min, (issue) => `${show(issue.input)} (${allowed})`),
+    v.maxValue(max, (issue) => `${show(issue.input)} (${allowed})`),
+  );
+}
+
+/** A whole number in [min, max]. */
+export function integerIn(min: number, max: number, unit = "") {
+  const allowed = `expected a whole number from ${min} to ${max}${unit ? ` ${unit}` : ""}`;
+  return v.pipe(
+    v.number((issue) => `${show(issue.input)} (${allowed})`),
+    v.integer((issue) => `${show(issue.input)} (${allowed})`),
+    v.minValue(min, (issue) => `${show(issue.input)} (${allowed})`),
+    v.maxValue(max, (issue) => `${show(issue.input)} (${allowed})`),
+  );
+}
+
+/** One of a fixed list of strings. */
+export function oneOf<const T extends readonly [string, ...string[]]>(choices: T) {
+  return v.picklist(choices, (issue) => `${show(issue.input)} (expected one of ${choices.join(", ")})`);
+}
+
+/** Any string (labels, sources, notes), with a length cap. */
+export function textUpTo(maxLength: number) {
+  return v.pipe(
+    v.string((issue) => `${show(issue.input)} (expected text)`),
+    v.maxLength(maxLength, (issue) => `text of ${String(issue.input).length} characters (expected at most ${maxLength})`),
+  );
+}
+
+/** A boolean. */
+export function flag() {
+  return v.boolean((issue) => `${show(issue.input)} (expected true or false)`);
+}
+
+/** One problem found by validation: where, what was there, what is allowed. */
+export interface FieldProblem {
+  /** Dotted path, e.g. "brief.riseM" or "carbon.factors[3].a1a3KgCO2ePerKg". */
+  path: string;
+  message: string;
+}
+
+/** Turns valibot issues into field problems with dotted paths. */
+export function formatIssues(issues: readonly v.BaseIssue<unknown>[]): FieldProblem[] {
+  return issues.map((issue) => {
+    let path = "";
+    for (const item of issue.path ?? []) {
+      const key = (item as { key: unknown }).key;
+      path += typeof key === "number" ? `[${key}]` : path === "" ? String(key) : `.${String(key)}`;
+    }
+    return { path: path === "" ? "(study)" : path, message: issue.message };
+  });
+}
+
+/** Validates input against a schema; returns the typed value or every problem found. */
+export function validateWith<S extends v.GenericSchema>(
+  schema: S,
+  input: unknown,
+): { ok: true; value: v.InferOutput<S> } | { ok: false; problems: FieldProblem[] } {
+  const result = v.safeParse(schema, input);
+  return result.success ? { ok: true, value: result.output } : { ok: false, problems: formatIssues(result.issues) };
+}
