@@ -25,3 +25,20 @@ export {
 
 // CSV with schema-checked rows (shared with cost)
 export { parseSchemaCsv, rowsToCsv, type CsvColumn } from "./schema-csv";
+
+// Life-cycle modules (EN 15978 as in IStructE, How to calculate embodied carbon, 2nd ed. 2022)
+export { wasteFactor } from "./waste-factor";
+export { transportFactorKgCO2ePerKg, type TransportLeg } from "./transport-factor";
+export { biogenicCo2StoredKg, biogenicCo2PerKg, CO2_PER_C, WOOD_CARBON_FRACTION } from "./biogenic-carbon";
+export { materialCarbon, type ModuleCarbon, type WastageScope } from "./material-carbon";
+
+// Assessment of a take-off
+export { type AssessmentAreas, checkAreas, areaForBasis } from "./assessment-areas";
+export {
+  assessCarbon,
+  type CarbonAssessment,
+  type CarbonRowResult,
+  type CarbonTotals,
+  type CarbonPerM2,
+  type CarbonGroup,
+} from "./assess-carbon";

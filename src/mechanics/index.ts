@@ -26,3 +26,31 @@ export {
   type ConcreteClass,
   type ConcreteProperties,
 } from "./concrete";
+
+// cables and membranes
+export { parabolicCable, inclinedParabolicCable, parabolaLengthM, type ParabolicCable } from "./parabolic-cable";
+export { membraneStripForceNPerM } from "./membrane-strip";
+export {
+  cableDomeSelfStress,
+  cableDomeLoadState,
+  combineCableDomeStates,
+  cableDomeNodeResiduals,
+  validateCableDomeTrussGeometry,
+  type CableDomeTrussGeometry,
+  type CableDomeTrussLoads,
+  type CableDomeTrussForces,
+} from "./cable-dome-truss";
+export { ringBucklingForceN, ringForceFromPullsN } from "./ring-buckling";
+
+// shells, lattices and beams
+export {
+  sphericalMembraneSurfaceLoad,
+  sphericalMembranePlanLoad,
+  sphericalMembraneForces,
+  hoopSignChangeAngleRad,
+  type MembraneForces,
+} from "./spherical-membrane";
+export { zoellyCoefficient, zoellyPressurePa, continuumShellPressurePa } from "./shell-buckling";
+export { threeWayGridStiffness, doubleLayerGridStiffness, threeWayGridBarForces, type GridStiffness, type GridBarForces } from "./three-way-grid";
+export { geodesicCap, strutLengths, geodesicFrequencyFor, MEAN_CHORD_FACTOR, type GeodesicCap, type StrutLengths, type Vec3 } from "./geodesic";
+export { simplySupportedUdl, type BeamResponse } from "./beam";

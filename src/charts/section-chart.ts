@@ -1,0 +1,51 @@
+import * as Plot from "@observablehq/plot";
+import type { Brief } from "../study/brief";
+import type { DrawingLine } from "../schemes/types";
+import { roofProfile, envelope } from "../takeoff/envelope";
+
+export interface SectionChartInput {
+  brief: Brief;
+  /** Scheme members to draw over the roof line (half or full section, x from the centre). */
+  lines?: readonly DrawingLine[];
+  title: string;
+  caption: string;
+  width?: number;
+}
+
+/**
+ * Plot options for the roof section: roof profile, walls, the floor with its usable part, and the
+ * minimum clear height; optionally a scheme's members. Pure: no DOM access.
+ */
+export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions {
+  const { brief } = input;
+  const a = brief.spanM / 2;
+  const env = envelope(brief);
+  const roof = roofProfile(brief).map(([x, y]) => ({ x, y }));
+  const walls = [
+    { x: -a, y: 0, side: "left" },
+    { x: -a, y: brief.eavesHeightM, side: "left" },
+    { x: a, y: 0, side: "right" },
+    { x: a, y: brief.eavesHeightM, side: "right" },
+  ];
+  const members = (input.lines ?? []).flatMap((line, index) => line.points.map(([x, y]) => ({ x, y, role: line.role, index })));
+  const top = brief.eavesHeightM + brief.riseM;
+  return {
+    title: input.title,
+    caption: input.caption,
+    width: input.width ?? 760,
+    height: Math.max(220, Math.min(420, 760 * ((top * 1.25) / brief.spanM) + 120)),
+    marginLeft: 50,
+    x: { label: "Distance from centre (m)", domain: [-a * 1.05, a * 1.05] },
+    y: { label: "Height above floor (m)", domain: [0, top * 1.2] },
+    color: { legend: members.length > 0 },
+    marks: [
+      Plot.ruleY([0]),
+      Plot.rect([{ x1: -env.usableRadiusM, x2: env.usableRadiusM, y1: 0, y2: brief.minClearHeightM }], { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#c9e3c5", fillOpacity: 0.6 }),
+      Plot.ruleY([brief.minClearHeightM], { stroke: "#3a7d32", strokeDasharray: "4 3" }),
+      Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => `usable floor ⌀ ${(2 * env.usableRadiusM).toFixed(0)} m at ≥ ${brief.minClearHeightM} m clear`, dy: -6, fill: "#3a7d32" }),
+      Plot.line(walls, { x: "x", y: "y", z: "side", stroke: "#555", strokeWidth: 2 }),
+      Plot.line(roof, { x: "x", y: "y", stroke: "#1b1f24", strokeWidth: 2 }),
+      ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "index", stroke: "role", strokeWidth: 1.2 })] : []),
+    ],
+  };
+}

@@ -1,0 +1,283 @@
+/**
+ * Geodesic subdivision of the icosahedron, class I (alternate breakdown), projected radially onto a
+ * sphere, and cut to a spherical cap. Method: Kenner, Geodesic Math and How to Use It (1976), ch. 5
+ * ("method 1": subdivide each flat face into v² triangles, push every point out to the sphere).
+ * The icosahedron stands on a vertex (a vertex at the crown), so a cap is centred on a five-way node.
+ */
+export type Vec3 = readonly [number, number, number];
+
+/** A geodesic cap: nodes, struts and triangular faces, on a sphere of radius R, z up from the centre. */
+export interface GeodesicCap {
+  /** Frequency v (subdivisions per icosahedron edge). */
+  frequency: number;
+  /** Sphere radius R, m. */
+  radiusM: number;
+  /** Half-angle of the cap φ0 from the crown, rad (π for the whole sphere). */
+  capAngleRad: number;
+  /** Height of the cut plane above the sphere centre, R cos φ0, m. */
+  cutHeightM: number;
+  /** Node coordinates, m; boundary nodes moved onto the cut circle. */
+  nodes: Vec3[];
+  /** Struts as pairs of node indices (every edge of the kept faces, boundary edges included). */
+  edges: [number, number][];
+  /** Triangles as node index triples. */
+  faces: [number, number, number][];
+  /** Nodes of the boundary ring in azimuth order (empty for the whole sphere). */
+  ringNodes: number[];
+  /** For each edge, true when it lies on the boundary ring. */
+  edgeOnRing: boolean[];
+  /** Chord length of each edge, m. */
+  edgeLengthsM: number[];
+}
+
+const ICOSA_VERTICES: Vec3[] = (() => {
+  const z = 1 / Math.sqrt(5);
+  const r = 2 / Math.sqrt(5);
+  const v: Vec3[] = [[0, 0, 1]];
+  for (let k = 0; k < 5; k++) v.push([r * Math.cos((2 * Math.PI * k) / 5), r * Math.sin((2 * Math.PI * k) / 5), z]);
+  for (let k = 0; k < 5; k++) v.push([r * Math.cos((2 * Math.PI * k) / 5 + Math.PI / 5), r * Math.sin((2 * Math.PI * k) / 5 + Math.PI / 5), -z]);
+  v.push([0, 0, -1]);
+  return v;
+})();
+
+/** The 20 faces: 5 round the crown, 10 in the middle belt, 5 round the foot. */
+const ICOSA_FACES: [number, number, number][] = (() => {
+  const f: [number, number, number][] = [];
+  for (let k = 0; k < 5; k++) {
+    const u = 1 + k;
+    const u1 = 1 + ((k + 1) % 5);
+    const l = 6 + k;
+    const l1 = 6 + ((k + 1) % 5);
+    f.push([0, u, u1], [u, l, u1], [l, l1, u1], [11, l1, l]);
+  }
+  return f;
+})();
+
+/** Angular radius of an icosahedron face about its centroid, rad (≈ 37.38°). */
+const FACE_ANGULAR_RADIUS = (() => {
+  const [a, b, c] = [ICOSA_VERTICES[0]!, ICOSA_VERTICES[1]!, ICOSA_VERTICES[2]!];
+  const m = normalise([(a[0] + b[0] + c[0]) / 3, (a[1] + b[1] + c[1]) / 3, (a[2] + b[2] + c[2]) / 3]);
+  return Math.acos(m[0] * a[0] + m[1] * a[1] + m[2] * a[2]);
+})();
+
+/** Key of the point `steps` along icosahedron edge p–q (counted from p), the same from either face. */
+function sharedEdgeKey(p: number, q: number, steps: number, v: number): number {
+  return p < q ? 12 + (p * 12 + q) * (v + 1) + steps : 12 + (q * 12 + p) * (v + 1) + (v - steps);
+}
+
+function normalise(p: Vec3): Vec3 {
+  const n = Math.hypot(p[0], p[1], p[2]);
+  return [p[0] / n, p[1] / n, p[2] / n];
+}
+
+/**
+ * Class I geodesic sphere (capAngle = π) or cap of half-angle φ0: keeps the sub-triangles whose three
+ * corners lie on or above the cut plane z = R cos φ0, with their edges and nodes; the nodes on the
+ * boundary of the kept faces form the ring and are moved along their meridian onto the cut circle
+ * (so the ring is plane and the cap has the intended rise; struts next to the ring lengthen).
+ * Only icosahedron faces that can reach the cap are subdivided, so a shallow cap costs little.
+ * @param frequency v ≥ 1 (integer)
+ * @param radiusM sphere radius R, m
+ * @param capAngleRad φ0, 0 < φ0 ≤ π
+ * @throws when v is not a whole number 1–400, R ≤ 0 or φ0 outside (0, π]
+ */
+export function geodesicCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
+  if (!(Number.isInteger(frequency) && frequency >= 1 && frequency <= 400)) throw new RangeError(`invalid geodesic frequency: ${frequency} (expected a whole number 1–400)`);
+  if (!(radiusM > 0)) throw new RangeError(`invalid sphere radius: ${radiusM} m (expected > 0)`);
+  if (!(capAngleRad > 0 && capAngleRad <= Math.PI)) throw new RangeError(`invalid cap angle: ${capAngleRad} rad (expected 0 < φ0 ≤ π)`);
+  const v = frequency;
+  const zCut = Math.cos(capAngleRad);
+  const tolerance = 1e-9;
+  const unit: number[] = []; // x, y, z of each node on the unit sphere
+  const keyToNode = new Map<number, number>(); // nodes shared between icosahedron faces
+  const faces: [number, number, number][] = [];
+  const localCount = ((v + 1) * (v + 2)) / 2;
+  const rowStart: number[] = [];
+  for (let i = 0, s = 0; i <= v; i++) {
+    rowStart.push(s);
+    s += v + 1 - i;
+  }
+  const lx = new Float64Array(localCount);
+  const ly = new Float64Array(localCount);
+  const lz = new Float64Array(localCount);
+  const localNode = new Int32Array(localCount);
+
+  const keep = new Uint8Array(localCount);
+  const used = new Uint8Array(localCount);
+  for (const [ia, ib, ic] of ICOSA_FACES) {
+    const A = ICOSA_VERTICES[ia]!;
+    const B = ICOSA_VERTICES[ib]!;
+    const C = ICOSA_VERTICES[ic]!;
+    const centre = normalise([A[0] + B[0] + C[0], A[1] + B[1] + C[1], A[2] + B[2] + C[2]]);
+    if (Math.acos(Math.max(-1, Math.min(1, centre[2]))) > capAngleRad + FACE_ANGULAR_RADIUS + 1e-9) continue;
+    // Grid point (i, j) = A + (B − A) i/v + (C − A) j/v, pushed out to the sphere; local index rowStart[i] + j.
+    for (let i = 0; i <= v; i++) {
+      const s = i / v;
+      for (let j = 0; i + j <= v; j++) {
+        const t = j / v;
+        const x = A[0] + (B[0] - A[0]) * s + (C[0] - A[0]) * t;
+        const y = A[1] + (B[1] - A[1]) * s + (C[1] - A[1]) * t;
+        const z = A[2] + (B[2] - A[2]) * s + (C[2] - A[2]) * t;
+        const n = Math.sqrt(x * x + y * y + z * z);
+        const k = rowStart[i]! + j;
+        lx[k] = x / n;
+        ly[k] = y / n;
+        lz[k] = z / n;
+        keep[k] = z / n >= zCut - tolerance ? 1 : 0;
+        used[k] = 0;
+      }
+    }
+    // Sub-triangles with all three corners kept: "up" (i,j)(i+1,j)(i,j+1) and "down" (i+1,j)(i+1,j+1)(i,j+1).
+    let anyKept = false;
+    for (let i = 0; i < v; i++) {
+      const r0 = rowStart[i]!;
+      const r1 = rowStart[i + 1]!;
+      for (let j = 0; i + j < v; j++) {
+        if (keep[r0 + j] && keep[r1 + j] && keep[r0 + j + 1]) {
+          used[r0 + j] = used[r1 + j] = used[r0 + j + 1] = 1;
+          anyKept = true;
+        }
+        if (i + j < v - 1 && keep[r1 + j] && keep[r1 + j + 1] && keep[r0 + j + 1]) {
+          used[r1 + j] = used[r1 + j + 1] = used[r0 + j + 1] = 1;
+          anyKept = true;
+        }
+      }
+    }
+    if (!anyKept) continue;
+    // Number the used points; points on the face's edges and corners are shared with the
+    // neighbouring face, so they are keyed by icosahedron edge and step.
+    for (let i = 0; i <= v; i++) {
+      for (let j = 0; i + j <= v; j++) {
+        const k = rowStart[i]! + j;
+        if (!used[k]) continue;
+        let key = -1;
+        if (i === 0 && j === 0) key = ia;
+        else if (i === v) key = ib;
+        else if (j === v) key = ic;
+        else if (j === 0) key = sharedEdgeKey(ia, ib, i, v);
+        else if (i === 0) key = sharedEdgeKey(ia, ic, j, v);
+        else if (i + j === v) key = sharedEdgeKey(ib, ic, j, v);
+        let index = key >= 0 ? keyToNode.get(key) : undefined;
+        if (index === undefined) {
+          index = unit.length / 3;
+          unit.push(lx[k]!, ly[k]!, lz[k]!);
+          if (key >= 0) keyToNode.set(key, index);
+        }
+        localNode[k] = index;
+      }
+    }
+    for (let i = 0; i < v; i++) {
+      const r0 = rowStart[i]!;
+      const r1 = rowStart[i + 1]!;
+      for (let j = 0; i + j < v; j++) {
+        if (keep[r0 + j] && keep[r1 + j] && keep[r0 + j + 1]) faces.push([localNode[r0 + j]!, localNode[r1 + j]!, localNode[r0 + j + 1]!]);
+        if (i + j < v - 1 && keep[r1 + j] && keep[r1 + j + 1] && keep[r0 + j + 1]) faces.push([localNode[r1 + j]!, localNode[r1 + j + 1]!, localNode[r0 + j + 1]!]);
+      }
+    }
+  }
+
+  // Edges of the kept faces, each once, with the number of faces using it. A node has at most six
+  // neighbours, so each edge is found by scanning its lower node's six slots.
+  const nodeCount = unit.length / 3;
+  const slots = new Int32Array(nodeCount * 6).fill(-1);
+  const slotEdge = new Int32Array(nodeCount * 6);
+  const edges: [number, number][] = [];
+  const faceUse: number[] = [];
+  const addEdge = (p: number, q: number): void => {
+    const lo = p < q ? p : q;
+    const hi = p < q ? q : p;
+    for (let s = lo * 6; s < lo * 6 + 6; s++) {
+      const other = slots[s]!;
+      if (other === hi) {
+        const e = slotEdge[s]!;
+        faceUse[e] = faceUse[e]! + 1;
+        return;
+      }
+      if (other === -1) {
+        slots[s] = hi;
+        slotEdge[s] = edges.length;
+        edges.push([lo, hi]);
+        faceUse.push(1);
+        return;
+      }
+    }
+    throw new Error(`geodesic node ${lo} has more than six neighbours`);
+  };
+  for (const [a, b, c] of faces) {
+    addEdge(a, b);
+    addEdge(b, c);
+    addEdge(c, a);
+  }
+  const edgeOnRing = faceUse.map((n) => n === 1);
+  const onRing = new Set<number>();
+  edges.forEach(([p, q], e) => {
+    if (edgeOnRing[e]) {
+      onRing.add(p);
+      onRing.add(q);
+    }
+  });
+  // Move ring nodes along their meridian onto the cut circle.
+  const ringRadius = Math.sqrt(Math.max(0, 1 - zCut * zCut));
+  for (const n of onRing) {
+    const r = Math.hypot(unit[3 * n]!, unit[3 * n + 1]!);
+    if (r > 0) {
+      unit[3 * n] = (unit[3 * n]! / r) * ringRadius;
+      unit[3 * n + 1] = (unit[3 * n + 1]! / r) * ringRadius;
+      unit[3 * n + 2] = zCut;
+    }
+  }
+  const nodes: Vec3[] = [];
+  for (let n = 0; n < nodeCount; n++) nodes.push([unit[3 * n]! * radiusM, unit[3 * n + 1]! * radiusM, unit[3 * n + 2]! * radiusM]);
+  const ringNodes = [...onRing].sort((a, b) => Math.atan2(nodes[a]![1], nodes[a]![0]) - Math.atan2(nodes[b]![1], nodes[b]![0]));
+  const edgeLengthsM = edges.map(([p, q]) => {
+    const a = nodes[p]!;
+    const b = nodes[q]!;
+    return Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
+  });
+  return { frequency: v, radiusM, capAngleRad, cutHeightM: zCut * radiusM, nodes, edges, faces, ringNodes, edgeOnRing, edgeLengthsM };
+}
+
+/** Strut length statistics, m. */
+export interface StrutLengths {
+  minM: number;
+  meanM: number;
+  maxM: number;
+  totalM: number;
+  count: number;
+}
+
+/** Minimum, mean, maximum and total of a set of strut lengths (all struts when no filter is given). */
+export function strutLengths(lengthsM: readonly number[], include?: (index: number) => boolean): StrutLengths {
+  let min = Number.POSITIVE_INFINITY;
+  let max = 0;
+  let total = 0;
+  let count = 0;
+  lengthsM.forEach((length, i) => {
+    if (include && !include(i)) return;
+    min = Math.min(min, length);
+    max = Math.max(max, length);
+    total += length;
+    count++;
+  });
+  if (count === 0) throw new RangeError("strut lengths require at least one strut");
+  return { minM: min, meanM: total / count, maxM: max, totalM: total, count };
+}
+
+/**
+ * Mean chord of a class I icosahedral subdivision divided by R/v. A flat equilateral net of the
+ * sphere's area gives √(16π/(20√3)) = 1.2046; the projected net measures slightly less
+ * (measured on the full sphere: 1.165 at v = 2, 1.193 at v = 4, 1.199–1.203 for v = 6…40; see
+ * test/reference/geodesic.test.ts). On a cap, the struts next to the ring are stretched by moving
+ * the ring nodes onto the cut circle, so a cap's mean runs a few per cent above the target.
+ */
+export const MEAN_CHORD_FACTOR = 1.2;
+
+/**
+ * The frequency whose mean strut length is nearest a target: v = round(1.2 R / L), at least 1.
+ * @param radiusM sphere radius R, m; @param targetStrutLengthM L, m
+ */
+export function geodesicFrequencyFor(radiusM: number, targetStrutLengthM: number): number {
+  if (!(radiusM > 0)) throw new RangeError(`invalid sphere radius: ${radiusM} m (expected > 0)`);
+  if (!(targetStrutLengthM > 0)) throw new RangeError(`invalid target strut length: ${targetStrutLengthM} m (expected > 0)`);
+  return Math.max(1, Math.round((MEAN_CHORD_FACTOR * radiusM) / targetStrutLengthM));
+}

@@ -1,0 +1,84 @@
+import { effect } from "@preact/signals-core";
+
+/** What a cell's render function may return. */
+export type CellContent = Node | string | null | undefined;
+
+export interface CellOptions {
+  /** Stable id, used for the element id and by tests. */
+  id: string;
+  /** Heading shown above the cell. */
+  title?: string;
+  /** Extra CSS class. */
+  className?: string;
+}
+
+export interface Cell {
+  element: HTMLElement;
+  /** Stops the cell's reactive effect. */
+  dispose(): void;
+}
+
+/**
+ * A reactive cell: `render` reads signals; when any signal it read changes, the cell re-renders
+ * (and only then). A render that throws shows the error in place of the content; the rest of the
+ * page is unaffected. `data-renders` counts renders so tests can see which cells ran.
+ */
+export function reactiveCell(parent: HTMLElement, options: CellOptions, render: () => CellContent): Cell {
+  const element = document.createElement("section");
+  element.className = `cell${options.className ? ` ${options.className}` : ""}`;
+  element.id = `cell-${options.id}`;
+  element.dataset.renders = "0";
+  if (options.title) {
+    const heading = document.createElement("h2");
+    heading.textContent = options.title;
+    element.append(heading);
+  }
+  const body = document.createElement("div");
+  body.className = "cell-body";
+  element.append(body);
+  parent.append(element);
+
+  const dispose = effect(() => {
+    let content: CellContent;
+    try {
+      content = render();
+      element.classList.remove("cell-failed");
+    } catch (error) {
+      element.classList.add("cell-failed");
+      content = errorBox(error);
+    }
+    body.replaceChildren(...(content === null || content === undefined ? [] : [typeof content === "string" ? textNode(content) : content]));
+    element.dataset.renders = String(Number(element.dataset.renders) + 1);
+  });
+  return { element, dispose };
+}
+
+function textNode(text: string): Node {
+  const p = document.createElement("p");
+  p.textContent = text;
+  return p;
+}
+
+/** The error box shown in a failed cell. */
+export function errorBox(error: unknown): HTMLElement {
+  const box = document.createElement("div");
+  box.className = "cell-error";
+  box.setAttribute("role", "alert");
+  box.textContent = `This cell could not be computed: ${error instanceof Error ? error.message : String(error)}`;
+  return box;
+}
+
+/** A cell whose content is built once (controls, prose): it reads no signals and never re-renders. */
+export function staticCell(parent: HTMLElement, options: CellOptions, content: Node | string): HTMLElement {
+  const element = document.createElement("section");
+  element.className = `cell${options.className ? ` ${options.className}` : ""}`;
+  element.id = `cell-${options.id}`;
+  if (options.title) {
+    const heading = document.createElement("h2");
+    heading.textContent = options.title;
+    element.append(heading);
+  }
+  element.append(typeof content === "string" ? textNode(content) : content);
+  parent.append(element);
+  return element;
+}

@@ -1,0 +1,12 @@
+// The notebook runtime: reactive cells, controls, page layout, study store, downloads.
+export { reactiveCell, staticCell, errorBox, type Cell, type CellContent, type CellOptions } from "./cell";
+export { numberControl, selectControl, toggleControl, controlGroup, type Binding, type NumberControlOptions } from "./controls";
+export { startPage, type Page, type PageOptions } from "./page";
+export { createStudyStore, type StudyStore } from "./study-store";
+export { PAGES, CAUTION, type PageId } from "./pages";
+export { downloadText, downloadBlob } from "./download";
+export { fmt, tableElement } from "./format";
+export { signal, computed, effect, batch, type Signal, type ReadonlySignal } from "@preact/signals-core";
+export { chartFigure, svgText, svgToPng } from "./chart";
+export { briefControls } from "./brief-controls";
+export { keyValues } from "./key-values";

@@ -1,0 +1,21 @@
+import { DEFAULT_BRIEF } from "./brief";
+import { SCHEMES } from "../schemes";
+import { defaultFactorRows, DEFAULT_CARBON_SETTINGS } from "../carbon";
+import { defaultRateRows, DEFAULT_ON_COSTS } from "../cost";
+import { STUDY_SCHEMA_VERSION, type Study } from "./study";
+import type { SchemeId } from "../schemes/types";
+import type { SchemeSetting } from "./study";
+
+/** A study with every default: the tool's own starting point (the demo study is a separate file). */
+export function defaultStudy(): Study {
+  const schemes = Object.fromEntries(SCHEMES.map((m) => [m.id, { enabled: true, options: { ...m.defaults } }])) as Record<SchemeId, SchemeSetting>;
+  return {
+    schemaVersion: STUDY_SCHEMA_VERSION,
+    meta: { title: "Untitled study", author: "", date: "2026-01-01", notes: "" },
+    brief: structuredClone(DEFAULT_BRIEF),
+    schemes,
+    carbon: { factors: defaultFactorRows(), settings: structuredClone(DEFAULT_CARBON_SETTINGS) },
+    cost: { rates: defaultRateRows(), onCosts: structuredClone(DEFAULT_ON_COSTS) },
+    seed: 20261202,
+  };
+}

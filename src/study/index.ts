@@ -1,0 +1,14 @@
+// The study: the brief, the schemes' options, the carbon and cost tables, the seed; schema,
+// defaults, loading, saving, links.
+export type { Brief, PartialFactors, TerrainCategory, UlsExpression } from "./brief";
+export { DEFAULT_BRIEF, DEFAULT_FACTORS, BRIEF_LIMITS, TERRAIN_CATEGORIES } from "./brief";
+export type { Study, StudyMeta, SchemeSetting } from "./study";
+export { STUDY_SCHEMA_VERSION } from "./study";
+export { studySchema, validateStudy, BriefSchema } from "./study-schema";
+export { defaultStudy } from "./defaults";
+export { migrateStudy, MIGRATIONS, type Migration } from "./migrate";
+export { studyFromJson, studyFromObject, studyToJson, describeProblems, type LoadResult } from "./load-study";
+export { encodeStudyLink, decodeStudyLink } from "./link";
+export { readStoredStudy, writeStoredStudy, STORAGE_KEY, type KeyValueStore } from "./storage";
+export { setIn, getIn, diff, mergeDiff } from "./patch";
+export type { FieldProblem } from "./schema-helpers";

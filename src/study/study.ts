@@ -1,0 +1,35 @@
+import type { Brief } from "./brief";
+import type { SchemeId, SchemeOptions } from "../schemes/types";
+import type { FactorRow, CarbonSettings } from "../carbon";
+import type { RateRow, OnCosts } from "../cost";
+
+/** The version of the study file this code writes. Older files are migrated on load. */
+export const STUDY_SCHEMA_VERSION = 1;
+
+export interface StudyMeta {
+  title: string;
+  author: string;
+  /** ISO date, YYYY-MM-DD. */
+  date: string;
+  notes: string;
+}
+
+export interface SchemeSetting {
+  enabled: boolean;
+  options: SchemeOptions;
+}
+
+/**
+ * One study: everything needed to reproduce every number on every page. Plain data, saved as
+ * JSON, encoded in links. The price base and currency are kept with the on-costs.
+ */
+export interface Study {
+  schemaVersion: number;
+  meta: StudyMeta;
+  brief: Brief;
+  schemes: Record<SchemeId, SchemeSetting>;
+  carbon: { factors: FactorRow[]; settings: CarbonSettings };
+  cost: { rates: RateRow[]; onCosts: OnCosts };
+  /** Seed for every random draw (risk sampling). */
+  seed: number;
+}

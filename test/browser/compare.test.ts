@@ -1,0 +1,77 @@
+import { describe, it, expect, beforeAll, afterAll, inject } from "vitest";
+import type { Browser } from "playwright-core";
+import { launchChromium, openPage } from "./browser";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("compare page", () => {
+  it("changing the span updates the section chart and the derived numbers, with no console errors", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-section svg");
+    const radiusBefore = await page.locator("#cell-geometry dd").first().textContent();
+    const chartBefore = await page.locator("#cell-section svg").first().innerHTML();
+    const briefRendersBefore = await page.locator("#cell-loads").getAttribute("data-renders");
+
+    await page.fill("#spanM", "120");
+    await page.waitForFunction((before) => document.querySelector("#cell-geometry dd")?.textContent !== before, radiusBefore);
+
+    const radiusAfter = await page.locator("#cell-geometry dd").first().textContent();
+    const chartAfter = await page.locator("#cell-section svg").first().innerHTML();
+    expect(radiusAfter).not.toBe(radiusBefore);
+    expect(chartAfter).not.toBe(chartBefore);
+    expect(await page.locator("#cell-section figure, #cell-section svg").count()).toBeGreaterThan(0);
+    expect(Number(await page.locator("#cell-loads").getAttribute("data-renders"))).toBeGreaterThan(Number(briefRendersBefore));
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("an out-of-range value shows an inline message and changes nothing", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-geometry dd");
+    const before = await page.locator("#cell-geometry").innerText();
+    await page.fill("#spanM", "900");
+    await expect.poll(() => page.locator("#spanM-message").textContent()).toMatch(/out of range/);
+    expect(await page.locator("#cell-geometry").innerText()).toBe(before);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("a cell that fails shows its error in place and the others keep working", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-geometry dd");
+    // A rise of more than half the span is refused by the geometry: the cells depending on it fail in place.
+    await page.fill("#spanM", "40");
+    await page.fill("#riseM", "30");
+    await page.waitForSelector("#cell-geometry .cell-error");
+    expect(await page.locator("#cell-geometry .cell-error").textContent()).toMatch(/rise/);
+    await page.fill("#riseM", "10");
+    await page.waitForSelector("#cell-geometry dd");
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("the study survives a reload (browser storage) and the link reopens it", async () => {
+    const { page } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-geometry dd");
+    await page.fill("#spanM", "210");
+    await page.waitForFunction(() => location.hash.startsWith("#s="));
+    const link = page.url();
+    const geometry = await page.locator("#cell-geometry").innerText();
+    await page.reload();
+    await page.waitForSelector("#cell-geometry dd");
+    expect(await page.locator("#cell-geometry").innerText()).toBe(geometry);
+    const fresh = await browser.newContext();
+    const other = await fresh.newPage();
+    await other.goto(link);
+    await other.waitForSelector("#cell-geometry dd");
+    expect(await other.locator("#cell-geometry").innerText()).toBe(geometry);
+    await fresh.close();
+    await page.close();
+  });
+});
