@@ -1,0 +1,177 @@
+// `npm run evaluate -- FILE [options]`: the whole pipeline on a study file, from the command line.
+import { readFileSync } from "node:fs";
+import { pathToFileURL } from "node:url";
+import { csvFormat } from "d3";
+import { studyFromJson, describeProblems, BRIEF_LIMITS, type Study } from "./study";
+import { SCHEMES } from "./schemes";
+import type { SchemeId } from "./schemes/types";
+import { defaultCatalogue } from "./catalogue/default-catalogue";
+import { parseFactorCsv } from "./carbon";
+import { parseRateCsv } from "./cost";
+import { evaluateStudy, headline, type Headline } from "./pipeline";
+import { CAUTION } from "./notebook/pages";
+
+export const USAGE = `usage: npm run evaluate -- FILE [--json] [--span M] [--sweep FROM:TO:STEP] [--schemes a,b]
+                              [--factors FILE.csv] [--rates FILE.csv]
+  FILE              a study file (.json)
+  --json            machine-readable results
+  --span M          evaluate at span M (m), keeping the rise-to-span ratio
+  --sweep F:T:S     evaluate every span from F to T in steps of S (m) and print CSV
+  --schemes a,b     only these schemes (${SCHEMES.map((s) => s.id).join(", ")})
+  --factors FILE    replace the study's carbon factor table with this CSV for the run
+  --rates FILE      replace the study's rate table with this CSV for the run`;
+
+export interface CliResult {
+  code: number;
+  stdout: string;
+  stderr: string;
+}
+
+class UsageError extends Error {}
+
+interface Parsed {
+  file: string;
+  json: boolean;
+  spanM?: number;
+  sweep?: { from: number; to: number; step: number };
+  schemes?: SchemeId[];
+  factors?: string;
+  rates?: string;
+}
+
+function spanIn(value: number, what: string): number {
+  const { min, max } = BRIEF_LIMITS.spanM;
+  if (!(value >= min && value <= max)) throw new UsageError(`invalid ${what}: ${value} m (expected a span from ${min} to ${max} m)`);
+  return value;
+}
+
+function parseArgs(args: readonly string[]): Parsed | "help" {
+  const parsed: Partial<Parsed> & { json: boolean } = { json: false };
+  for (let i = 0; i < args.length; i++) {
+    const arg = args[i] ?? "";
+    const next = (): string => {
+      const value = args[++i];
+      if (value === undefined) throw new UsageError(`missing value for ${arg}`);
+      return value;
+    };
+    if (arg === "--help" || arg === "-h") return "help";
+    else if (arg === "--json") parsed.json = true;
+    else if (arg === "--span") parsed.spanM = spanIn(Number(next()), "--span");
+    else if (arg === "--sweep") {
+      const text = next();
+      const parts = text.split(":").map(Number);
+      if (parts.length !== 3 || parts.some((p) => !Number.isFinite(p))) throw new UsageError(`invalid --sweep: ${text} (expected FROM:TO:STEP in m, e.g. 40:400:10)`);
+      const [from, to, step] = parts as [number, number, number];
+      spanIn(from, "--sweep start");
+      spanIn(to, "--sweep end");
+      if (!(step > 0) || to < from) throw new UsageError(`invalid --sweep: ${text} (expected FROM ≤ TO and STEP > 0)`);
+      if ((to - from) / step > 1000) throw new UsageError(`invalid --sweep: ${text} (expected at most 1000 spans)`);
+      parsed.sweep = { from, to, step };
+    } else if (arg === "--schemes") {
+      const ids = next().split(",").map((s) => s.trim());
+      for (const id of ids) {
+        if (!SCHEMES.some((s) => s.id === id)) throw new UsageError(`unknown scheme: ${id} (expected one of ${SCHEMES.map((s) => s.id).join(", ")})`);
+      }
+      parsed.schemes = ids as SchemeId[];
+    } else if (arg === "--factors") parsed.factors = next();
+    else if (arg === "--rates") parsed.rates = next();
+    else if (arg.startsWith("-")) throw new UsageError(`unknown option: ${arg} (see --help)`);
+    else if (parsed.file === undefined) parsed.file = arg;
+    else throw new UsageError(`unexpected argument: ${arg} (only one study file)`);
+  }
+  if (parsed.file === undefined) throw new UsageError("missing study file (usage: npm run evaluate -- FILE [options])");
+  return parsed as Parsed;
+}
+
+function read(path: string, what: string, readText: (p: string) => string): string {
+  try {
+    return readText(path);
+  } catch (error) {
+    const code = (error as { code?: string }).code;
+    throw new UsageError(`cannot read ${what} ${path}${code === "ENOENT" ? ": no such file" : code ? `: ${code}` : ""}`);
+  }
+}
+
+function oneLine(text: string): string {
+  return text.replace(/\s*\n\s*/g, "; ");
+}
+
+/** Loads the study and applies the table overrides; all checked before any work. */
+function loadStudy(parsed: Parsed, readText: (p: string) => string): Study {
+  const result = studyFromJson(read(parsed.file, "study file", readText));
+  if (!result.ok) throw new UsageError(`invalid study ${parsed.file}: ${oneLine(describeProblems(result.problems, 5))}`);
+  let study = result.study;
+  try {
+    if (parsed.factors) study = { ...study, carbon: { ...study.carbon, factors: parseFactorCsv(read(parsed.factors, "factor file", readText)) } };
+    if (parsed.rates) study = { ...study, cost: { ...study.cost, rates: parseRateCsv(read(parsed.rates, "rate file", readText)) } };
+  } catch (error) {
+    if (error instanceof UsageError) throw error;
+    throw new UsageError(`invalid table: ${oneLine(error instanceof Error ? error.message : String(error))}`);
+  }
+  return study;
+}
+
+const SWEEP_COLUMNS = ["span_m", "id", "feasible", "self_weight_kg_per_m2", "total_mass_t", "mass_to_air", "usable_floor_m2", "carbon_kgco2e_per_m2_floor", "cost_per_m2_floor", "governing", "reason"] as const;
+
+function round(x: number | null, digits = 3): number | null {
+  return x === null || !Number.isFinite(x) ? null : Number(x.toPrecision(digits + 3));
+}
+
+function table(rows: readonly Headline[]): string {
+  const header = ["scheme", "feasible", "kg/m² plan", "steel t", "cable t", "fabric m²", "concrete m³", "kgCO2e/m² floor", "cost/m² floor", "governing"];
+  const body = rows.map((h) => [
+    h.id,
+    h.feasible ? "yes" : "no",
+    h.self_weight_kg_per_m2.toFixed(1),
+    h.steel_t.toFixed(0),
+    h.cable_t.toFixed(0),
+    h.fabric_m2.toFixed(0),
+    h.concrete_m3.toFixed(0),
+    h.carbon_kgco2e_per_m2_floor === null ? "–" : h.carbon_kgco2e_per_m2_floor.toFixed(0),
+    h.cost_per_m2_floor === null ? "–" : `${h.cost_per_m2_floor.toFixed(0)} ${h.currency ?? ""}`.trim(),
+    h.feasible ? h.governing : h.reason,
+  ]);
+  const widths = header.map((_, i) => Math.max(header[i]?.length ?? 0, ...body.map((r) => r[i]?.length ?? 0)));
+  const line = (cells: readonly string[]) => cells.map((c, i) => (i === 0 || i === cells.length - 1 ? c.padEnd(widths[i] ?? 0) : c.padStart(widths[i] ?? 0))).join("  ").trimEnd();
+  return [line(header), ...body.map(line)].join("\n");
+}
+
+/** Runs the command line; never throws. Exit status 2 for bad input with one line on stderr. */
+export function runCli(args: readonly string[], readText: (path: string) => string = (p) => readFileSync(p, "utf8")): CliResult {
+  try {
+    const parsed = parseArgs(args);
+    if (parsed === "help") return { code: 0, stdout: `${USAGE}\n`, stderr: "" };
+    const study = loadStudy(parsed, readText);
+    const catalogue = defaultCatalogue();
+    const schemeIds = parsed.schemes;
+    if (parsed.sweep) {
+      const rows: Record<string, unknown>[] = [];
+      const { from, to, step } = parsed.sweep;
+      for (let span = from; span <= to + 1e-9; span += step) {
+        const evaluation = evaluateStudy(study, catalogue, { spanM: Number(span.toFixed(6)), ...(schemeIds ? { schemeIds } : {}) });
+        for (const result of evaluation.results) {
+          const h = headline(result);
+          rows.push({ ...h, span_m: evaluation.brief.spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air) });
+        }
+      }
+      return { code: 0, stdout: `${csvFormat(rows, [...SWEEP_COLUMNS])}\n`, stderr: "" };
+    }
+    const evaluation = evaluateStudy(study, catalogue, { ...(parsed.spanM !== undefined ? { spanM: parsed.spanM } : {}), ...(schemeIds ? { schemeIds } : {}) });
+    const headlines = evaluation.results.map(headline);
+    if (parsed.json) {
+      const out = { span_m: evaluation.brief.spanM, caution: CAUTION, schemes: headlines };
+      return { code: 0, stdout: `${JSON.stringify(out, null, 2)}\n`, stderr: "" };
+    }
+    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(headlines)}\n\n${CAUTION}\n`, stderr: "" };
+  } catch (error) {
+    if (error instanceof UsageError) return { code: 2, stdout: "", stderr: `spanbook: ${error.message}\n` };
+    return { code: 1, stdout: "", stderr: `spanbook: internal error: ${error instanceof Error ? error.message : String(error)}\n` };
+  }
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  const result = runCli(process.argv.slice(2));
+  process.stdout.write(result.stdout);
+  process.stderr.write(result.stderr);
+  process.exitCode = result.code;
+}

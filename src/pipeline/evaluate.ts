@@ -1,0 +1,75 @@
+import type { Study } from "../study/study";
+import type { Brief } from "../study/brief";
+import type { Catalogue } from "../catalogue/types";
+import type { Design, SchemeId, SchemeModel } from "../schemes/types";
+import { SCHEMES, infeasibleDesign } from "../schemes";
+import { assessCarbon, type CarbonAssessment } from "../carbon";
+import { assessCost, type CostAssessment } from "../cost";
+
+/** One scheme's design with its carbon and cost. */
+export interface SchemeResult {
+  id: SchemeId;
+  label: string;
+  design: Design;
+  /** Null when the design has no take-off or the assessment failed (see `error`). */
+  carbon: CarbonAssessment | null;
+  cost: CostAssessment | null;
+  /** Why carbon or cost could not be assessed, or "". */
+  error: string;
+}
+
+export interface Evaluation {
+  brief: Brief;
+  results: SchemeResult[];
+}
+
+export interface EvaluateOptions {
+  /** Evaluate at this span instead of the brief's (the rise keeps the brief's rise/span ratio). */
+  spanM?: number;
+  /** Only these schemes (default: the study's enabled schemes). */
+  schemeIds?: readonly SchemeId[];
+}
+
+/** The brief at another span, keeping the rise-to-span ratio. */
+export function briefAtSpan(brief: Brief, spanM: number): Brief {
+  return { ...brief, spanM, riseM: (brief.riseM / brief.spanM) * spanM };
+}
+
+/** Designs one scheme for a brief with the study's options for it; a bug inside becomes an infeasible answer. */
+export function designScheme(model: SchemeModel, brief: Brief, study: Study, catalogue: Catalogue): Design {
+  const options = { ...model.defaults, ...(study.schemes[model.id]?.options ?? {}) };
+  try {
+    return model.design(brief, options, catalogue);
+  } catch (error) {
+    return infeasibleDesign(model.id, brief, `could not be computed: ${error instanceof Error ? error.message : String(error)}`);
+  }
+}
+
+/** Carbon and cost of a design, with the study's tables. */
+export function assessDesign(design: Design, study: Study): Pick<SchemeResult, "carbon" | "cost" | "error"> {
+  if (design.takeoff.length === 0) return { carbon: null, cost: null, error: design.feasible ? "no take-off" : "" };
+  const areas = { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
+  try {
+    return {
+      carbon: assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areas),
+      cost: assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areas),
+      error: "",
+    };
+  } catch (error) {
+    return { carbon: null, cost: null, error: error instanceof Error ? error.message : String(error) };
+  }
+}
+
+/**
+ * The whole pipeline for a study: each scheme designed, taken off, and assessed for carbon and
+ * cost. Deterministic: the same study gives the same numbers.
+ */
+export function evaluateStudy(study: Study, catalogue: Catalogue, options: EvaluateOptions = {}): Evaluation {
+  const brief = options.spanM === undefined ? study.brief : briefAtSpan(study.brief, options.spanM);
+  const chosen = options.schemeIds ? SCHEMES.filter((m) => options.schemeIds?.includes(m.id)) : SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
+  const results = chosen.map((model) => {
+    const design = designScheme(model, brief, study, catalogue);
+    return { id: model.id, label: model.label, design, ...assessDesign(design, study) };
+  });
+  return { brief, results };
+}

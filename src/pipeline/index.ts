@@ -1,0 +1,3 @@
+// The pipeline: study → designs → take-off → carbon and cost → headline numbers.
+export { evaluateStudy, designScheme, assessDesign, briefAtSpan, type Evaluation, type SchemeResult, type EvaluateOptions } from "./evaluate";
+export { headline, type Headline } from "./headline";
