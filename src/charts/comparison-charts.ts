@@ -1,0 +1,122 @@
+import * as Plot from "@observablehq/plot";
+import type { SchemeResult } from "../pipeline";
+import { headline } from "../pipeline";
+import { materialInfo, type MaterialKind } from "../materials";
+import { paretoFront } from "../comparison/pareto";
+import { SCHEME_COLOURS } from "./palette";
+
+const KIND_ORDER: readonly MaterialKind[] = ["steel", "cable", "fabric", "cladding", "concrete", "rebar", "timber"];
+const KIND_COLOURS = ["#4c6a8c", "#0072B2", "#9ad0c2", "#c9b27c", "#a7a7a7", "#7a4e2d", "#b8860b"];
+
+interface Common {
+  title: string;
+  caption: string;
+  width?: number;
+}
+
+function schemeColour(results: readonly SchemeResult[]) {
+  return { domain: results.map((r) => r.label), range: results.map((r) => SCHEME_COLOURS[r.id]) };
+}
+
+/** Stacked bars: self-weight per m² of plan by material kind, one bar per scheme. */
+export function massByMaterialChart(results: readonly SchemeResult[], common: Common): Plot.PlotOptions {
+  const data = results.flatMap((r) => {
+    const byKind = new Map<MaterialKind, number>();
+    for (const row of r.design.takeoff) {
+      const kind = row.material === null ? undefined : materialInfo(row.material)?.kind;
+      if (kind) byKind.set(kind, (byKind.get(kind) ?? 0) + row.massKg);
+    }
+    return [...byKind.entries()].map(([kind, massKg]) => ({ scheme: r.label, kind, kgPerM2: massKg / r.design.planAreaM2 }));
+  });
+  return {
+    ...common,
+    width: common.width ?? 640,
+    marginLeft: 150,
+    x: { label: "Self-weight (kg/m² of plan)", grid: true },
+    y: { label: null, domain: results.map((r) => r.label) },
+    color: { legend: true, domain: KIND_ORDER as unknown as string[], range: KIND_COLOURS },
+    marks: [Plot.barX(data, { x: "kgPerM2", y: "scheme", fill: "kind", order: KIND_ORDER as unknown as string[], tip: true }), Plot.ruleX([0])],
+  };
+}
+
+/** Stacked bars: counted carbon per m² of usable floor by life-cycle module; module D drawn apart as a tick. */
+export function carbonByModuleChart(results: readonly SchemeResult[], common: Common): Plot.PlotOptions {
+  // `code` is the module's name as the carbon assessment lists it in modulesCounted.
+  const modules = [
+    { key: "a1a3", code: "A1–A3", label: "A1–A3 product" },
+    { key: "a4", code: "A4", label: "A4 transport" },
+    { key: "a5", code: "A5", label: "A5 wastage" },
+    { key: "c", code: "C1–C4", label: "C1–C4 end of life" },
+  ] as const;
+  const data = results.flatMap((r) => {
+    const per = r.carbon?.perM2UsableFloor.perM2;
+    if (!per || !r.design.feasible) return [];
+    const counted = new Set(r.carbon?.modulesCounted ?? []);
+    return modules.filter((m) => counted.has(m.code)).map((m) => ({ scheme: r.label, module: m.label, value: per[m.key] }));
+  });
+  const moduleD = results.flatMap((r) => {
+    const per = r.carbon?.perM2UsableFloor.perM2;
+    return per && r.design.feasible ? [{ scheme: r.label, value: per.moduleD }] : [];
+  });
+  return {
+    ...common,
+    width: common.width ?? 640,
+    marginLeft: 150,
+    x: { label: "Embodied carbon (kgCO2e/m² of usable floor)", grid: true },
+    y: { label: null, domain: results.filter((r) => r.design.feasible).map((r) => r.label) },
+    color: { legend: true, domain: modules.map((m) => m.label), range: ["#3b6e8f", "#86a8c4", "#d9a441", "#8f8f8f"] },
+    marks: [
+      Plot.barX(data, { x: "value", y: "scheme", fill: "module", tip: true }),
+      Plot.tickX(moduleD, { x: "value", y: "scheme", stroke: "#2a7a2a", strokeWidth: 2, strokeDasharray: "3 2" }),
+      Plot.ruleX([0]),
+    ],
+  };
+}
+
+/** Bars: cost per m² of usable floor, with the low–high range of the rates as a rule. */
+export function costPerM2Chart(results: readonly SchemeResult[], common: Common): Plot.PlotOptions {
+  const data = results.flatMap((r) => {
+    const cost = r.cost;
+    if (!cost || !r.design.feasible || r.design.usableFloorM2 <= 0) return [];
+    return [{ scheme: r.label, value: cost.totals.total / r.design.usableFloorM2, low: cost.totals.totalLow / r.design.usableFloorM2, high: cost.totals.totalHigh / r.design.usableFloorM2 }];
+  });
+  const currency = results.find((r) => r.cost)?.cost?.currency ?? "";
+  return {
+    ...common,
+    width: common.width ?? 640,
+    marginLeft: 150,
+    x: { label: `Cost (${currency}/m² of usable floor)`, grid: true },
+    y: { label: null, domain: data.map((d) => d.scheme) },
+    color: schemeColour(results),
+    marks: [
+      Plot.barX(data, { x: "value", y: "scheme", fill: "scheme", tip: true }),
+      Plot.ruleY(data, { x1: "low", x2: "high", y: "scheme", stroke: "#222", strokeWidth: 1.5 }),
+      Plot.ruleX([0]),
+    ],
+  };
+}
+
+/** Scatter: carbon against cost per m² of floor; schemes no other beats on both are ringed and named. */
+export function carbonVsCostChart(results: readonly SchemeResult[], common: Common): Plot.PlotOptions {
+  const data = results.flatMap((r) => {
+    const h = headline(r);
+    if (!h.feasible || h.carbon_kgco2e_per_m2_floor === null || h.cost_per_m2_floor === null) return [];
+    return [{ id: r.id, scheme: r.label, carbon: h.carbon_kgco2e_per_m2_floor, cost: h.cost_per_m2_floor }];
+  });
+  const front = new Set(paretoFront(data.map((d) => ({ id: d.id, x: d.cost, y: d.carbon }))));
+  const best = data.filter((d) => front.has(d.id));
+  const currency = results.find((r) => r.cost)?.cost?.currency ?? "";
+  return {
+    ...common,
+    width: common.width ?? 640,
+    inset: 20,
+    x: { label: `Cost (${currency}/m² of usable floor)`, grid: true },
+    y: { label: "Embodied carbon (kgCO2e/m² of usable floor)", grid: true },
+    color: { ...schemeColour(results), legend: true },
+    marks: [
+      Plot.dot(best, { x: "cost", y: "carbon", r: 11, stroke: "#111", strokeWidth: 1.5 }),
+      Plot.dot(data, { x: "cost", y: "carbon", fill: "scheme", r: 6, tip: true }),
+      Plot.text(data, { x: "cost", y: "carbon", text: (d: { scheme: string; id: string }) => (front.has(d.id) ? `${d.scheme} — not beaten on both` : d.scheme), dy: -16, fontSize: 11 }),
+    ],
+  };
+}

@@ -1,0 +1,59 @@
+/** One span's value of a metric for each scheme (NaN or missing where the scheme is infeasible). */
+export interface SpanValues {
+  spanM: number;
+  values: Readonly<Record<string, number>>;
+}
+
+/** A change of the best (lowest) scheme between two consecutive spans. */
+export interface Crossover {
+  /** Last span at which `from` was best, m. */
+  fromSpanM: number;
+  /** First span at which `to` is best, m. */
+  toSpanM: number;
+  from: string | null;
+  to: string | null;
+}
+
+/** The scheme with the lowest finite value at one span, or null when none is feasible. */
+export function bestAt(values: Readonly<Record<string, number>>): string | null {
+  let best: string | null = null;
+  let bestValue = Number.POSITIVE_INFINITY;
+  for (const [id, value] of Object.entries(values)) {
+    if (Number.isFinite(value) && value < bestValue) {
+      best = id;
+      bestValue = value;
+    }
+  }
+  return best;
+}
+
+/**
+ * The spans at which the best (lowest) scheme changes, scanning the spans in order. Between two
+ * sampled spans the change is known only to lie in that interval; both ends are reported.
+ */
+export function crossovers(rows: readonly SpanValues[]): Crossover[] {
+  const sorted = [...rows].sort((a, b) => a.spanM - b.spanM);
+  const out: Crossover[] = [];
+  let previous: { spanM: number; best: string | null } | undefined;
+  for (const row of sorted) {
+    const best = bestAt(row.values);
+    if (previous && best !== previous.best) out.push({ fromSpanM: previous.spanM, toSpanM: row.spanM, from: previous.best, to: best });
+    previous = { spanM: row.spanM, best };
+  }
+  return out;
+}
+
+/** The crossovers in words, e.g. "the cable dome is lightest up to 120 m; from 130 m the cable net is". */
+export function describeCrossovers(rows: readonly SpanValues[], quality: string, label: (id: string) => string): string {
+  const sorted = [...rows].sort((a, b) => a.spanM - b.spanM);
+  const first = sorted[0];
+  const last = sorted[sorted.length - 1];
+  if (!first || !last) return "No spans were evaluated.";
+  const changes = crossovers(sorted);
+  const name = (id: string | null) => (id === null ? "no scheme" : label(id));
+  const start = bestAt(first.values);
+  if (changes.length === 0) return `${name(start)} is ${quality} across the whole range (${first.spanM}–${last.spanM} m).`;
+  const parts = [`${name(start)} is ${quality} from ${first.spanM} m`];
+  for (const c of changes) parts.push(`${name(c.to)} from ${c.toSpanM} m (the change lies between ${c.fromSpanM} and ${c.toSpanM} m)`);
+  return `${parts.join("; then ")}, up to ${last.spanM} m.`;
+}
