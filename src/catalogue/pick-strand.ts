@@ -37,7 +37,7 @@ export function strandResistanceN(minBreakingForceN: number, gammaR = 1.0): numb
 }
 
 /**
- * The lightest strand group (one strand, or up to maxParallel equal strands side by side) from the
+ * The strand group with the fewest strands (one, or up to maxParallel equal strands side by side), and the lightest of those, from the
  * catalogue whose EN 1993-1-11 design resistance carries the tension. Returns null when even the
  * largest group is too weak. A force ≤ 0 returns the smallest strand (a nominal member).
  */
@@ -46,8 +46,9 @@ export function pickLightestStrand(strands: readonly Strand[], tensionN: number,
   if (!Number.isFinite(tensionN)) throw new RangeError(`invalid cable tension: ${tensionN} N (expected a finite number)`);
   if (!(Number.isInteger(maxParallel) && maxParallel >= 1)) throw new RangeError(`invalid maxParallel: ${maxParallel} (expected a whole number ≥ 1)`);
   if (strands.length === 0) throw new RangeError("invalid strand catalogue: empty (expected at least one strand)");
-  let best: StrandChoice | null = null;
+  // Fewest strands first (each strand needs its own sockets and anchorage), then the lightest.
   for (let count = 1; count <= maxParallel; count++) {
+    let best: StrandChoice | null = null;
     for (const strand of strands) {
       const resistanceN = count * strandResistanceN(strand.minBreakingForceN, gammaR);
       if (resistanceN < tensionN) continue;
@@ -64,6 +65,7 @@ export function pickLightestStrand(strands: readonly Strand[], tensionN: number,
         };
       }
     }
+    if (best) return best;
   }
-  return best;
+  return null;
 }

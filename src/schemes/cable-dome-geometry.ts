@@ -18,9 +18,10 @@ export interface CableDomeLayout {
 /** Perimeter spacing of the ridges the automatic truss count aims at, m (common practice for fabric panels, no source). */
 export const AUTO_RIDGE_SPACING_M = 12;
 
-/** Automatic number of radial trusses: the even count giving a perimeter ridge spacing ≤ 12 m, at least 12. */
-export function autoTrussCount(spanM: number): number {
-  return Math.max(12, 2 * Math.ceil((Math.PI * spanM) / 2 / AUTO_RIDGE_SPACING_M));
+/** Automatic number of radial trusses: the even count giving a perimeter ridge spacing ≤ the given spacing (≤ 12 m), at least 12. */
+export function autoTrussCount(spanM: number, maxSpacingM = AUTO_RIDGE_SPACING_M): number {
+  const spacing = Math.min(AUTO_RIDGE_SPACING_M, maxSpacingM);
+  return Math.max(12, 2 * Math.ceil((Math.PI * spanM) / 2 / spacing));
 }
 
 /** Automatic number of hoops: one per 27.5 m of radius (the middle of the 20–35 m common practice, no source), 1 to 8. */
@@ -34,10 +35,10 @@ export function autoHoopCount(spanM: number): number {
  * compression ring at the eaves; each post is long enough that the diagonal from its foot rises by
  * postHeightRatio × bay to the head of the next post (or to the ring).
  */
-export function cableDomeLayout(brief: Brief, trussesOption: number, hoopsOption: number, centralRingRatio: number, postHeightRatio: number): CableDomeLayout {
+export function cableDomeLayout(brief: Brief, trussesOption: number, hoopsOption: number, centralRingRatio: number, postHeightRatio: number, maxRidgeSpacingM = AUTO_RIDGE_SPACING_M): CableDomeLayout {
   const cap = sphericalCap(brief.spanM, brief.riseM);
   const a = cap.baseRadiusM;
-  const trusses = trussesOption > 0 ? trussesOption : autoTrussCount(brief.spanM);
+  const trusses = trussesOption > 0 ? trussesOption : autoTrussCount(brief.spanM, maxRidgeSpacingM);
   const hoops = hoopsOption > 0 ? hoopsOption : autoHoopCount(brief.spanM);
   const r0 = centralRingRatio * a;
   const bayM = (a - r0) / (hoops + 1);
