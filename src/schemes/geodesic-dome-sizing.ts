@@ -1,0 +1,216 @@
+import type { Brief } from "../study/brief";
+import type { ChsSection } from "../catalogue/types";
+import type { ChsChoice } from "../catalogue/pick-chs";
+import type { RoofActions } from "../loads/roof-actions";
+import type { GeodesicCap } from "../mechanics/geodesic";
+import type { BucklingCurve } from "../mechanics/flexural-buckling";
+import { STEEL_E_PA } from "../mechanics/flexural-buckling";
+import { STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
+import { sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../mechanics/spherical-membrane";
+import { threeWayGridBarForces, threeWayGridStiffness, doubleLayerGridStiffness } from "../mechanics/three-way-grid";
+import { continuumShellPressurePa } from "../mechanics/shell-buckling";
+import { kPaFromKgPerM2, pickChsFor, ulsFactors } from "./compression-common";
+
+/** Struts of one band of the lattice, crown to edge (ring struts excluded). */
+export interface StrutBand {
+  index: number;
+  /** True for the struts that meet the ring (lengthened when the ring nodes move onto the cut circle). */
+  edge: boolean;
+  /** Band limits as meridional angle from the crown, rad. */
+  fromRad: number;
+  toRad: number;
+  count: number;
+  totalLengthM: number;
+  meanLengthM: number;
+  maxLengthM: number;
+}
+
+/**
+ * Groups the non-ring struts of a geodesic cap into equal bands of meridional angle (by strut
+ * midpoint), crown to edge, plus a last group of the struts that meet the ring (their lengths vary
+ * most, so they are sized apart, for the forces of the outer band).
+ */
+export function strutBands(cap: GeodesicCap, bandCount: number): StrutBand[] {
+  const phi0 = cap.capAngleRad;
+  const ringNode = new Uint8Array(cap.nodes.length);
+  for (const n of cap.ringNodes) ringNode[n] = 1;
+  const bands: StrutBand[] = Array.from({ length: bandCount + 1 }, (_, i) => ({
+    index: i,
+    edge: i === bandCount,
+    fromRad: (phi0 * Math.min(i, bandCount - 1)) / bandCount,
+    toRad: (phi0 * Math.min(i + 1, bandCount)) / bandCount,
+    count: 0,
+    totalLengthM: 0,
+    meanLengthM: 0,
+    maxLengthM: 0,
+  }));
+  cap.edges.forEach(([p, q], e) => {
+    if (cap.edgeOnRing[e]) return;
+    const a = cap.nodes[p]!;
+    const b = cap.nodes[q]!;
+    const mx = (a[0] + b[0]) / 2;
+    const my = (a[1] + b[1]) / 2;
+    const mz = (a[2] + b[2]) / 2;
+    const phi = Math.atan2(Math.hypot(mx, my), mz);
+    const band = bands[ringNode[p] || ringNode[q] ? bandCount : Math.min(bandCount - 1, Math.floor((phi / phi0) * bandCount))]!;
+    const length = cap.edgeLengthsM[e]!;
+    band.count++;
+    band.totalLengthM += length;
+    band.maxLengthM = Math.max(band.maxLengthM, length);
+  });
+  for (const b of bands) b.meanLengthM = b.count > 0 ? b.totalLengthM / b.count : 0;
+  return bands.filter((b) => b.count > 0);
+}
+
+export interface LatticeInputs {
+  brief: Brief;
+  actions: RoofActions;
+  radiusM: number;
+  capAngleRad: number;
+  baseRadiusM: number;
+  surfaceM2: number;
+  bands: StrutBand[];
+  sections: readonly ChsSection[];
+  steel: { yieldPa: number; curve: BucklingCurve };
+  knockDown: number;
+  /** Double-layer depth, m (0 = single layer). */
+  doubleLayerDepthM: number;
+  /** Web members of a double layer: count and length, m. */
+  webCount: number;
+  webLengthM: number;
+  nodeAllowance: number;
+  claddingKgPerM2: number;
+}
+
+export interface BandResult {
+  band: StrutBand;
+  choice: ChsChoice;
+  compressionN: number;
+  tensionN: number;
+  /** ULS normal pressure the band must resist, Pa, and the knocked-down buckling pressure, Pa. */
+  pressurePa: number;
+  bucklingPa: number;
+  barMassKg: number;
+}
+
+export interface LatticeResult {
+  bands: BandResult[];
+  /** Band for which no catalogue section sufficed, or -1. */
+  failedBand: number;
+  failedWhy: string;
+  webChoice: ChsChoice | null;
+  barMassKg: number;
+  webMassKg: number;
+  nodeMassKg: number;
+  claddingMassKg: number;
+  /** Meridional force at the edge under ULS gravity, N/m (negative). */
+  edgeMeridionalNPerM: number;
+  /** Ring tension T = H a, N, with H = |N_φ| cos φ0. */
+  ringTensionN: number;
+  ringAreaM2: number;
+  ringMassKg: number;
+  ulsExpression: string;
+}
+
+/**
+ * Sizes a lattice dome for an assumed self-weight g (kPa of surface): membrane forces
+ * (Timoshenko ch. 14) resolved into the three-way grid, bars from the CHS catalogue per band for
+ * tension and flexural buckling (EN 1993-1-1 §6.2.3, §6.3.1; node-to-node length), upsized until
+ * the band passes general buckling k·p_cl ≥ p (equivalent continuum, 4√(DB)/R²), and the tension
+ * ring for the edge thrust.
+ */
+export function sizeLattice(input: LatticeInputs, selfWeightKPa: number): LatticeResult {
+  const { brief, actions, radiusM: R, capAngleRad: phi0 } = input;
+  const layers = input.doubleLayerDepthM > 0 ? 2 : 1;
+  const servicesKPa = actions.servicesKPa;
+  const variableKPa = actions.leadingVariableKPa;
+  const f = ulsFactors(brief, selfWeightKPa + servicesKPa, variableKPa);
+  const surfacePa = f.permanent * selfWeightKPa * 1000;
+  const planPa = (f.permanent * servicesKPa + f.variable * variableKPa) * 1000;
+  // Net uplift with permanent load favourable (EN 1990 Table A1.2(B)), taken as a surface load.
+  const upliftSurfacePa = (brief.factors.gammaGInf * (selfWeightKPa + servicesKPa) - brief.factors.gammaQ * actions.upliftKPa) * 1000;
+  const pressurePa = surfacePa + planPa;
+  const results: BandResult[] = [];
+  let failedBand = -1;
+  let failedWhy = "";
+  let largestBarForceN = 0;
+  for (const band of input.bands) {
+    let compressionN = 0;
+    let tensionN = 0;
+    for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, phi0)]) {
+      const n = sphericalMembraneForces(surfacePa, planPa, R, phi);
+      const bars = threeWayGridBarForces(n.meridionalNPerM / layers, n.hoopNPerM / layers, band.maxLengthM);
+      const up = sphericalMembraneSurfaceLoad(upliftSurfacePa, R, phi);
+      const barsUp = threeWayGridBarForces(up.meridionalNPerM / layers, up.hoopNPerM / layers, band.maxLengthM);
+      compressionN = Math.min(compressionN, bars.compressionN, barsUp.compressionN);
+      tensionN = Math.max(tensionN, bars.tensionN, barsUp.tensionN);
+    }
+    largestBarForceN = Math.max(largestBarForceN, -compressionN, tensionN);
+    const bucklingOf = (s: ChsSection): number => {
+      const single = threeWayGridStiffness(STEEL_E_PA * s.areaM2, STEEL_E_PA * s.secondMomentM4, band.meanLengthM);
+      const grid = layers === 2 ? doubleLayerGridStiffness(single, input.doubleLayerDepthM) : single;
+      return input.knockDown * continuumShellPressurePa(grid.bendingNm, grid.membraneNPerM, R);
+    };
+    const demands = [
+      { forceN: compressionN, effectiveLengthM: band.maxLengthM },
+      { forceN: tensionN, effectiveLengthM: band.maxLengthM },
+    ];
+    const choice = pickChsFor(input.sections, demands, input.steel, (s) => bucklingOf(s) >= pressurePa);
+    if (choice === null) {
+      failedBand = band.index;
+      const memberOnly = pickChsFor(input.sections, demands, input.steel);
+      failedWhy =
+        memberOnly === null
+          ? `no catalogue hollow section carries the bar force of ${(-compressionN / 1000).toFixed(0)} kN over ${band.maxLengthM.toFixed(1)} m`
+          : `no catalogue hollow section gives the lattice enough general-buckling resistance (${(pressurePa / 1000).toFixed(2)} kPa needed)`;
+      break;
+    }
+    results.push({
+      band,
+      choice,
+      compressionN,
+      tensionN,
+      pressurePa,
+      bucklingPa: bucklingOf(choice.section),
+      barMassKg: band.totalLengthM * choice.section.massKgPerM * layers,
+    });
+  }
+  const barMassKg = results.reduce((s, r) => s + r.barMassKg, 0);
+  // Web members of a double layer: nominal force 2.5 % of the largest bar force (common practice, no source).
+  let webChoice: ChsChoice | null = null;
+  let webMassKg = 0;
+  if (layers === 2 && failedBand < 0) {
+    webChoice = pickChsFor(input.sections, [{ forceN: -0.025 * largestBarForceN, effectiveLengthM: input.webLengthM }], input.steel);
+    if (webChoice === null) {
+      failedBand = input.bands.length;
+      failedWhy = `no catalogue hollow section is stocky enough for the ${input.webLengthM.toFixed(1)} m web members`;
+    } else webMassKg = input.webCount * input.webLengthM * webChoice.section.massKgPerM;
+  }
+  const nodeMassKg = input.nodeAllowance * (barMassKg + webMassKg);
+  const claddingMassKg = input.claddingKgPerM2 * input.surfaceM2;
+  const edge = sphericalMembraneForces(surfacePa, planPa, R, Math.min(phi0, Math.PI / 2 - 1e-9));
+  const ringTensionN = Math.abs(edge.meridionalNPerM) * Math.cos(phi0) * input.baseRadiusM;
+  // EN 1993-1-1 eq. 6.6 with γ_M0 = 1.0; area rounded up to a 25 cm² step of plate (a box of plates).
+  const ringAreaM2 = Math.max(25e-4, Math.ceil(ringTensionN / input.steel.yieldPa / 25e-4) * 25e-4);
+  const ringMassKg = ringAreaM2 * 2 * Math.PI * input.baseRadiusM * STEEL_DENSITY_KG_PER_M3 * (1 + input.nodeAllowance);
+  return {
+    bands: results,
+    failedBand,
+    failedWhy,
+    webChoice,
+    barMassKg,
+    webMassKg,
+    nodeMassKg,
+    claddingMassKg,
+    edgeMeridionalNPerM: edge.meridionalNPerM,
+    ringTensionN,
+    ringAreaM2,
+    ringMassKg,
+    ulsExpression: f.expression,
+  };
+}
+
+/** Self-weight of lattice and cladding per m² of surface, kPa (the ring sits on the supports). */
+export function latticeSelfWeightKPa(r: LatticeResult, surfaceM2: number): number {
+  return kPaFromKgPerM2((r.barMassKg + r.webMassKg + r.nodeMassKg + r.claddingMassKg) / surfaceM2);
+}
