@@ -1,7 +1,6 @@
 // Schemes: one module per structural system, all with the same SchemeModel interface.
 import type { SchemeModel, SchemeId, SchemeOptions } from "./types";
 import { cableDome } from "./cable-dome";
-import { geodesicDome } from "./geodesic-dome";
 
 export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
 export { SCHEME_IDS } from "./types";
@@ -10,9 +9,7 @@ export { iterateSelfWeight, ConvergenceError, type Converged } from "./converge"
 
 /** Every scheme, in the order pages list them. Each scheme module adds itself here. */
 export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
-  // tension schemes (cable dome, cable net) go first
-  cableDome as unknown as SchemeModel<SchemeOptions>,
-  geodesicDome,
+  cableDome,
 ];
 
 /** The scheme with this id, or undefined. */
