@@ -1,6 +1,7 @@
 // Schemes: one module per structural system, all with the same SchemeModel interface.
 import type { SchemeModel, SchemeId, SchemeOptions } from "./types";
 import { cableDome } from "./cable-dome";
+import { geodesicDome } from "./geodesic-dome";
 
 export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
 export { SCHEME_IDS } from "./types";
@@ -9,7 +10,9 @@ export { iterateSelfWeight, ConvergenceError, type Converged } from "./converge"
 
 /** Every scheme, in the order pages list them. Each scheme module adds itself here. */
 export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
+  // tension schemes (cable dome, cable net) go first
   cableDome,
+  geodesicDome,
 ];
 
 /** The scheme with this id, or undefined. */
