@@ -1,10 +1,38 @@
 // Compare page: the brief, the loads and geometry it implies, and the schemes side by side.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, briefControls, keyValues, chartFigure, computed, fmt } from "../src/notebook";
+import {
+  startPage,
+  reactiveCell,
+  staticCell,
+  briefControls,
+  keyValues,
+  chartFigure,
+  computed,
+  fmt,
+  studySignals,
+  controlGroup,
+  toggleControl,
+  tableElement,
+  schemeSummary,
+  memberTable,
+  checkTable,
+  takeoffTable,
+  schemeOptionControls,
+} from "../src/notebook";
 import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
-import { sectionChartOptions, chartCaption } from "../src/charts";
+import {
+  sectionChartOptions,
+  planChartOptions,
+  chartCaption,
+  massByMaterialChart,
+  carbonByModuleChart,
+  costPerM2Chart,
+  carbonVsCostChart,
+  SCHEME_COLOURS,
+} from "../src/charts";
+import { comparisonTable, comparisonRows } from "../src/comparison";
 
 const { store, main } = startPage({
   id: "compare",
@@ -59,3 +87,81 @@ reactiveCell(main, { id: "section", title: "Roof section" }, () =>
     "roof-section",
   ),
 );
+
+// ——— the schemes ———
+const { schemes, results } = studySignals(store);
+
+staticCell(
+  main,
+  { id: "scheme-switches", title: "Schemes to compare" },
+  controlGroup(
+    "Switch schemes on and off",
+    schemes.map((s) => toggleControl(store.bind<boolean>(["schemes", s.model.id, "enabled"]), { id: `enable-${s.model.id}`, label: s.model.label })),
+  ),
+);
+
+reactiveCell(main, { id: "comparison", title: "Side by side" }, () => {
+  const list = results.value;
+  if (list.length === 0) return "Switch on at least one scheme to compare.";
+  const { header, rows } = comparisonRows(comparisonTable(list));
+  const table = tableElement(header, rows, { caption: `The schemes at ${brief.value.spanM} m span (per m² figures on usable floor unless stated)`, numeric: header.map((_, i) => i > 0 && i < header.length - 3) });
+  const wrap = document.createElement("div");
+  wrap.style.overflowX = "auto";
+  wrap.append(table);
+  return wrap;
+});
+
+reactiveCell(main, { id: "comparison-charts", title: "Option charts" }, () => {
+  const list = results.value;
+  if (list.length === 0) return null;
+  const caption = chartCaption(store.study.value);
+  const grid = document.createElement("div");
+  grid.className = "grid charts";
+  grid.append(
+    chartFigure(massByMaterialChart(list, { title: "Self-weight per m² of plan, by material", caption }), "mass-by-material"),
+    chartFigure(carbonByModuleChart(list, { title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)", caption }), "carbon-by-module"),
+    chartFigure(costPerM2Chart(list, { title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)", caption }), "cost-per-m2"),
+    chartFigure(carbonVsCostChart(list, { title: "Carbon against cost per m² of usable floor", caption }), "carbon-vs-cost"),
+  );
+  return grid;
+});
+
+for (const s of schemes) {
+  const id = s.model.id;
+  const panel = document.createElement("div");
+  panel.className = "scheme-panel";
+  panel.id = `scheme-${id}`;
+  main.append(panel);
+  const heading = document.createElement("h2");
+  heading.textContent = s.model.label;
+  heading.style.borderLeft = `6px solid ${SCHEME_COLOURS[id]}`;
+  heading.style.paddingLeft = "0.5rem";
+  const about = document.createElement("p");
+  about.className = "intro";
+  about.textContent = `${s.model.description} Method valid for spans of ${s.model.validSpanM.min}–${s.model.validSpanM.max} m.`;
+  panel.append(heading, about);
+  reactiveCell(panel, { id: `${id}-summary` }, () => (s.enabled.value ? schemeSummary(s.result.value) : "Switched off."));
+  reactiveCell(panel, { id: `${id}-drawing` }, () => {
+    if (!s.enabled.value) return null;
+    const design = s.design.value;
+    const wrap = document.createElement("div");
+    wrap.className = "grid charts";
+    wrap.append(
+      chartFigure(
+        sectionChartOptions({ brief: brief.value, lines: design.drawing.section, title: `${s.model.label}: section`, caption: chartCaption(store.study.value), width: 620 }),
+        `${id}-section`,
+      ),
+    );
+    if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, title: `${s.model.label}: plan`, caption: chartCaption(store.study.value) }), `${id}-plan`));
+    return wrap;
+  });
+  reactiveCell(panel, { id: `${id}-tables` }, () => {
+    if (!s.enabled.value) return null;
+    const design = s.design.value;
+    const wrap = document.createElement("div");
+    wrap.style.overflowX = "auto";
+    wrap.append(memberTable(design), checkTable(design), takeoffTable(design));
+    return wrap;
+  });
+  staticCell(panel, { id: `${id}-options` }, schemeOptionControls(store, s.model));
+}

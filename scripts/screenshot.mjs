@@ -18,6 +18,13 @@ try {
     await page.waitForTimeout(Number(process.env.WAIT ?? 800));
     await page.screenshot({ path: `/tmp/spanbook-${name}.png`, fullPage: true });
     console.log(`/tmp/spanbook-${name}.png`);
+    // SHOT_CELLS=comparison,comparison-charts also writes one picture per cell, easier to read.
+    for (const cell of (process.env.SHOT_CELLS ?? "").split(",").filter(Boolean)) {
+      const target = page.locator(`#cell-${cell}, #${cell}`).first();
+      if ((await target.count()) === 0) continue;
+      await target.screenshot({ path: `/tmp/spanbook-${name}-${cell}.png` });
+      console.log(`/tmp/spanbook-${name}-${cell}.png`);
+    }
     await page.close();
   }
 } finally {

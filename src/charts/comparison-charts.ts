@@ -30,8 +30,9 @@ export function massByMaterialChart(results: readonly SchemeResult[], common: Co
   });
   return {
     ...common,
-    width: common.width ?? 640,
+    width: common.width ?? 580,
     marginLeft: 150,
+    height: 70 + 34 * results.length,
     x: { label: "Self-weight (kg/m² of plan)", grid: true },
     y: { label: null, domain: results.map((r) => r.label) },
     color: { legend: true, domain: KIND_ORDER as unknown as string[], range: KIND_COLOURS },
@@ -60,8 +61,9 @@ export function carbonByModuleChart(results: readonly SchemeResult[], common: Co
   });
   return {
     ...common,
-    width: common.width ?? 640,
+    width: common.width ?? 580,
     marginLeft: 150,
+    height: 70 + 34 * results.length,
     x: { label: "Embodied carbon (kgCO2e/m² of usable floor)", grid: true },
     y: { label: null, domain: results.filter((r) => r.design.feasible).map((r) => r.label) },
     color: { legend: true, domain: modules.map((m) => m.label), range: ["#3b6e8f", "#86a8c4", "#d9a441", "#8f8f8f"] },
@@ -83,8 +85,9 @@ export function costPerM2Chart(results: readonly SchemeResult[], common: Common)
   const currency = results.find((r) => r.cost)?.cost?.currency ?? "";
   return {
     ...common,
-    width: common.width ?? 640,
+    width: common.width ?? 580,
     marginLeft: 150,
+    height: 70 + 34 * results.length,
     x: { label: `Cost (${currency}/m² of usable floor)`, grid: true },
     y: { label: null, domain: data.map((d) => d.scheme) },
     color: schemeColour(results),
@@ -108,15 +111,17 @@ export function carbonVsCostChart(results: readonly SchemeResult[], common: Comm
   const currency = results.find((r) => r.cost)?.cost?.currency ?? "";
   return {
     ...common,
-    width: common.width ?? 640,
-    inset: 20,
+    width: common.width ?? 580,
+    height: 380,
+    inset: 40,
+    marginRight: 30,
     x: { label: `Cost (${currency}/m² of usable floor)`, grid: true },
     y: { label: "Embodied carbon (kgCO2e/m² of usable floor)", grid: true },
     color: { ...schemeColour(results), legend: true },
     marks: [
       Plot.dot(best, { x: "cost", y: "carbon", r: 11, stroke: "#111", strokeWidth: 1.5 }),
       Plot.dot(data, { x: "cost", y: "carbon", fill: "scheme", r: 6, tip: true }),
-      Plot.text(data, { x: "cost", y: "carbon", text: (d: { scheme: string; id: string }) => (front.has(d.id) ? `${d.scheme} — not beaten on both` : d.scheme), dy: -16, fontSize: 11 }),
+      Plot.text(data, { x: "cost", y: "carbon", text: (d: { scheme: string; id: string }) => (front.has(d.id) ? `${d.scheme} (not beaten on both)` : d.scheme), dy: -16, fontSize: 11, textAnchor: "middle", clip: false }),
     ],
   };
 }

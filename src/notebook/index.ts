@@ -10,3 +10,6 @@ export { signal, computed, effect, batch, type Signal, type ReadonlySignal } fro
 export { chartFigure, svgText, svgToPng } from "./chart";
 export { briefControls } from "./brief-controls";
 export { keyValues } from "./key-values";
+export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary } from "./scheme-panel";
+export { studySignals, type SchemeSignals, type StudySignals } from "./scheme-signals";
+export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";

@@ -1,7 +1,7 @@
 import type { Study } from "../study/study";
 import type { Brief } from "../study/brief";
 import type { Catalogue } from "../catalogue/types";
-import type { Design, SchemeId, SchemeModel } from "../schemes/types";
+import type { Design, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
 import { SCHEMES, infeasibleDesign } from "../schemes";
 import { assessCarbon, type CarbonAssessment } from "../carbon";
 import { assessCost, type CostAssessment } from "../cost";
@@ -35,18 +35,17 @@ export function briefAtSpan(brief: Brief, spanM: number): Brief {
   return { ...brief, spanM, riseM: (brief.riseM / brief.spanM) * spanM };
 }
 
-/** Designs one scheme for a brief with the study's options for it; a bug inside becomes an infeasible answer. */
-export function designScheme(model: SchemeModel, brief: Brief, study: Study, catalogue: Catalogue): Design {
-  const options = { ...model.defaults, ...(study.schemes[model.id]?.options ?? {}) };
+/** Designs one scheme for a brief with the given options (defaults fill the rest); a bug inside becomes an infeasible answer. */
+export function designScheme(model: SchemeModel, brief: Brief, options: SchemeOptions | undefined, catalogue: Catalogue): Design {
   try {
-    return model.design(brief, options, catalogue);
+    return model.design(brief, { ...model.defaults, ...(options ?? {}) }, catalogue);
   } catch (error) {
     return infeasibleDesign(model.id, brief, `could not be computed: ${error instanceof Error ? error.message : String(error)}`);
   }
 }
 
 /** Carbon and cost of a design, with the study's tables. */
-export function assessDesign(design: Design, study: Study): Pick<SchemeResult, "carbon" | "cost" | "error"> {
+export function assessDesign(design: Design, study: Pick<Study, "carbon" | "cost">): Pick<SchemeResult, "carbon" | "cost" | "error"> {
   if (design.takeoff.length === 0) return { carbon: null, cost: null, error: design.feasible ? "no take-off" : "" };
   const areas = { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
   try {
@@ -68,7 +67,7 @@ export function evaluateStudy(study: Study, catalogue: Catalogue, options: Evalu
   const brief = options.spanM === undefined ? study.brief : briefAtSpan(study.brief, options.spanM);
   const chosen = options.schemeIds ? SCHEMES.filter((m) => options.schemeIds?.includes(m.id)) : SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
   const results = chosen.map((model) => {
-    const design = designScheme(model, brief, study, catalogue);
+    const design = designScheme(model, brief, study.schemes[model.id]?.options, catalogue);
     return { id: model.id, label: model.label, design, ...assessDesign(design, study) };
   });
   return { brief, results };

@@ -1,0 +1,89 @@
+// Span study: every enabled scheme across a range of spans, with the spans where the best one changes.
+import "../src/notebook/style.css";
+import demoStudy from "../data/demo-study.json";
+import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, numberControl, controlGroup, spanStudyRunner, fmt } from "../src/notebook";
+import { spanMetricChart, spanValidityChart, chartCaption, type SpanMetric } from "../src/charts";
+import { describeCrossovers, valuesBySpan, type SpanRange, type SpanPoint } from "../src/comparison";
+import { SCHEMES } from "../src/schemes";
+
+const { store, main } = startPage({
+  id: "span-study",
+  demoStudy,
+  intro:
+    "Each enabled scheme redesigned at every span of the range, the rise kept in proportion to the span as in the brief. Lines are drawn only where a scheme is feasible; dashed where the span is outside its method's valid range.",
+});
+
+const range = signal<SpanRange>({ fromM: 40, toM: 400, stepM: 10 });
+const part = (key: keyof SpanRange) => ({
+  value: computed(() => range.value[key]),
+  set: (x: number) => {
+    range.value = { ...range.value, [key]: x };
+  },
+});
+staticCell(
+  main,
+  { id: "range", title: "Span range" },
+  controlGroup("Spans to evaluate", [
+    numberControl(part("fromM"), { id: "fromM", label: "From", unit: "m", min: 30, max: 500, step: 10 }),
+    numberControl(part("toM"), { id: "toM", label: "To", unit: "m", min: 30, max: 500, step: 10 }),
+    numberControl(part("stepM"), { id: "stepM", label: "Step", unit: "m", min: 1, max: 100, step: 1 }),
+  ]),
+);
+
+const state = spanStudyRunner(store.study, range);
+const points = computed(() => (state.value.status === "failed" ? null : state.value.points));
+const labelOf = (id: string) => SCHEMES.find((m) => m.id === id)?.label ?? id;
+
+reactiveCell(main, { id: "status" }, () => {
+  const s = state.value;
+  if (s.status === "failed") throw new Error(s.error);
+  if (s.status === "running") return "Computing the span study…";
+  const spans = new Set(s.points.map((p) => p.spanM)).size;
+  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (in a background worker).`;
+});
+
+reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {
+  const list = points.value;
+  if (!list) return null;
+  const ranges = SCHEMES.filter((m) => list.some((p) => p.id === m.id)).map((m) => ({ id: m.id, label: m.label, min: m.validSpanM.min, max: m.validSpanM.max }));
+  return chartFigure(
+    spanValidityChart(list, ranges, { title: "Valid span range of each method (shaded) and spans where the scheme is infeasible (×)", caption: chartCaption(store.study.value, "hover a cross for the reason") }),
+    "span-validity",
+  );
+});
+
+const METRICS: { metric: SpanMetric; title: string; y: string; file: string }[] = [
+  { metric: "selfWeightKgPerM2", title: "Self-weight per m² of plan against span", y: "Self-weight (kg/m² of plan)", file: "span-self-weight" },
+  { metric: "carbonKgCO2ePerM2Floor", title: "Embodied carbon per m² of usable floor against span", y: "Embodied carbon (kgCO2e/m² of usable floor)", file: "span-carbon" },
+  { metric: "costPerM2Floor", title: "Cost per m² of usable floor against span", y: "Cost per m² of usable floor", file: "span-cost" },
+  { metric: "massToAir", title: "Structure mass ÷ mass of the enclosed air against span", y: "Structure mass ÷ enclosed air mass (–)", file: "span-mass-to-air" },
+];
+
+reactiveCell(main, { id: "span-charts", title: "Across the span range" }, () => {
+  const list = points.value;
+  if (!list) return null;
+  const grid = document.createElement("div");
+  grid.className = "grid charts";
+  const currency = store.study.value.cost.onCosts.currency;
+  for (const m of METRICS) {
+    const y = m.metric === "costPerM2Floor" ? `Cost (${currency}/m² of usable floor)` : m.y;
+    grid.append(chartFigure(spanMetricChart(list, m.metric, y, { title: m.title, caption: chartCaption(store.study.value, "span varied, rise/span fixed") }), m.file));
+  }
+  return grid;
+});
+
+reactiveCell(main, { id: "crossovers", title: "Where the best scheme changes" }, () => {
+  const list: SpanPoint[] | null = points.value;
+  if (!list) return null;
+  const ul = document.createElement("ul");
+  for (const [metric, quality] of [
+    ["selfWeightKgPerM2", "the lightest"],
+    ["carbonKgCO2ePerM2Floor", "the lowest-carbon"],
+    ["costPerM2Floor", "the cheapest"],
+  ] as const) {
+    const li = document.createElement("li");
+    li.textContent = describeCrossovers(valuesBySpan(list, metric), quality, labelOf);
+    ul.append(li);
+  }
+  return ul;
+});

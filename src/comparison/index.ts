@@ -1,0 +1,5 @@
+// Comparison: the side-by-side table, the Pareto front, the span study and its crossovers.
+export { comparisonTable, comparisonRows, COMPARISON_COLUMNS } from "./comparison-table";
+export { paretoFront, type ParetoPoint } from "./pareto";
+export { crossovers, describeCrossovers, bestAt, type Crossover, type SpanValues } from "./crossovers";
+export { runSpanStudy, spansOf, valuesBySpan, type SpanPoint, type SpanRange } from "./span-study";
