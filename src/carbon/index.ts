@@ -42,3 +42,6 @@ export {
   type CarbonPerM2,
   type CarbonGroup,
 } from "./assess-carbon";
+
+// Table editing (pages' cell editors)
+export { checkRowEdit, type RowEditResult } from "./check-row-edit";

@@ -43,6 +43,8 @@ export type CostAssessment = {
   /** Per m² of usable floor, currency/m²; null when there is no usable floor. */
   perM2UsableFloor: { works: number; total: number } | null;
   perM2Plan: { works: number; total: number } | null;
+  /** The areas the per-m² figures were divided by. */
+  areas: AssessmentAreas;
   currency: string;
   priceBase: string;
   estimateClass: EstimateClass;
@@ -104,6 +106,7 @@ export function assessCost(rows: readonly TakeoffRow[], rates: readonly RateRow[
     totals: { works, total: main.total, totalLow: low.total, totalHigh: high.total },
     perM2UsableFloor: per(areas.usableFloorM2),
     perM2Plan: per(areas.planAreaM2),
+    areas: { ...areas },
     currency: onCosts.currency,
     priceBase: onCosts.priceBase,
     estimateClass: CONCEPT_SCREENING,

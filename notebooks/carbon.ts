@@ -1,0 +1,267 @@
+// Carbon page: the factor table edited in place, the carbon settings, and what each edit does to
+// every scheme's embodied carbon, by module and by material.
+import "../src/notebook/style.css";
+import demoStudy from "../data/demo-study.json";
+import {
+  startPage,
+  reactiveCell,
+  staticCell,
+  chartFigure,
+  computed,
+  signal,
+  fmt,
+  tableElement,
+  numberControl,
+  selectControl,
+  toggleControl,
+  controlGroup,
+  type Binding,
+} from "../src/notebook";
+import { setIn } from "../src/study";
+import {
+  assessCarbon,
+  defaultFactorRows,
+  factorRowsToCsv,
+  parseFactorCsv,
+  FactorRowSchema,
+  MaterialIdSchema,
+  FACTOR_LIMITS,
+  DEFAULT_CARBON_SETTINGS,
+  type CarbonAssessment,
+  type FactorRow,
+  type TransportMode,
+} from "../src/carbon";
+import { carbonChartOptions, chartCaption, CARBON_METRICS, targetApplies, type CarbonMetric, type SchemeCarbon } from "../src/charts";
+import { tableEditor, type EditorColumn } from "./table-editor";
+import { schemeDesigns, designAreas } from "./scheme-designs";
+import * as v from "valibot";
+
+const { store, main } = startPage({
+  id: "carbon",
+  demoStudy,
+  intro:
+    "Edit the embodied-carbon factor of any material — A1–A3 per kg, transport distances, site waste rate, end of life — or import a whole table as CSV; every scheme's carbon below follows each edit at once. Module D and biogenic carbon are reported apart and never netted.",
+});
+
+const factors = computed(() => store.study.value.carbon.factors);
+const settings = computed(() => store.study.value.carbon.settings);
+const designs = schemeDesigns(store);
+
+type SchemeCarbonResult = { id: string; label: string; feasible: boolean; reason: string; carbon: CarbonAssessment | null; error: string };
+const carbonBySchemes = computed<SchemeCarbonResult[]>(() =>
+  designs.value.map(({ id, label, design }) => {
+    const base = { id, label, feasible: design.feasible, reason: design.reason };
+    if (design.takeoff.length === 0) return { ...base, carbon: null, error: design.feasible ? "no take-off" : design.reason };
+    try {
+      return { ...base, carbon: assessCarbon(design.takeoff, factors.value, settings.value, designAreas(design)), error: "" };
+    } catch (error) {
+      return { ...base, carbon: null, error: error instanceof Error ? error.message : String(error) };
+    }
+  }),
+);
+
+// ── Settings ────────────────────────────────────────────────────────────────────────────────
+const path = ["carbon", "settings"] as const;
+const modeBinding = (mode: TransportMode["mode"]): Binding<number> => ({
+  value: computed(() => settings.value.transportModes.find((m) => m.mode === mode)?.kgCO2ePerTonneKm ?? 0),
+  set(next) {
+    const modes = settings.peek().transportModes.map((m) => (m.mode === mode ? { ...m, kgCO2ePerTonneKm: next } : m));
+    store.study.value = setIn(store.study.value, [...path, "transportModes"], modes);
+  },
+});
+let lastTarget = 300;
+const targetOn: Binding<boolean> = {
+  value: computed(() => settings.value.targetKgCO2ePerM2 !== null),
+  set(on) {
+    store.study.value = setIn(store.study.value, [...path, "targetKgCO2ePerM2"], on ? lastTarget : null);
+  },
+};
+const targetValue: Binding<number> = {
+  value: computed(() => settings.value.targetKgCO2ePerM2 ?? lastTarget),
+  set(next) {
+    lastTarget = next;
+    store.study.value = setIn(store.study.value, [...path, "targetKgCO2ePerM2"], next);
+  },
+};
+
+staticCell(
+  main,
+  { id: "settings", title: "What is counted" },
+  (() => {
+    const grid = document.createElement("div");
+    grid.className = "grid";
+    grid.append(
+      controlGroup("Life-cycle modules (A1–A3 always counted)", [
+        toggleControl(store.bind<boolean>([...path, "countA4"]), { label: "A4 transport to site", id: "countA4" }),
+        toggleControl(store.bind<boolean>([...path, "countA5"]), { label: "A5 site wastage", id: "countA5" }),
+        toggleControl(store.bind<boolean>([...path, "countC"]), { label: "C1–C4 end of life", id: "countC" }),
+      ]),
+      controlGroup("Quantities and area", [
+        numberControl(store.bind<number>([...path, "quantityAllowancePct"]), {
+          label: "Design-stage quantity allowance",
+          unit: "%",
+          min: 0,
+          max: 50,
+          step: 1,
+          id: "quantityAllowancePct",
+          hint: "Added to every mass, never to a factor (10 %: common practice, no source).",
+        }),
+        selectControl(store.bind<string>([...path, "areaBasis"]), {
+          label: "Per-m² basis for the target",
+          id: "areaBasis",
+          choices: [
+            { value: "usable-floor", label: "Usable floor" },
+            { value: "covered-plan", label: "Covered plan" },
+            { value: "roof-surface", label: "Roof surface" },
+          ],
+        }),
+        toggleControl(targetOn, { label: "Compare with a target", id: "targetOn" }),
+        numberControl(targetValue, { label: "Target", unit: "kgCO2e/m²", min: 0, max: 100000, step: 10, id: "targetKgCO2ePerM2", hint: "On the basis above; typing a value switches the target on." }),
+      ]),
+      controlGroup("Transport (A4) mode factors", [
+        numberControl(modeBinding("road"), { label: "Road, HGV average laden", unit: "kgCO2e/t·km", min: 0, max: 5, step: 0.001, id: "modeRoad", hint: DEFAULT_CARBON_SETTINGS.transportModes[0]?.source ?? "" }),
+        numberControl(modeBinding("sea"), { label: "Sea, cargo ship average", unit: "kgCO2e/t·km", min: 0, max: 5, step: 0.001, id: "modeSea", hint: DEFAULT_CARBON_SETTINGS.transportModes[1]?.source ?? "" }),
+      ]),
+    );
+    return grid;
+  })(),
+);
+
+// ── Factor table ────────────────────────────────────────────────────────────────────────────
+const L = FACTOR_LIMITS;
+const columns: EditorColumn<FactorRow>[] = [
+  { field: "material", label: "Material", kind: "text", readOnly: true },
+  { field: "label", label: "Label", kind: "text", wide: true },
+  { field: "a1a3KgCO2ePerKg", label: "A1–A3", kind: "number", unit: L.a1a3KgCO2ePerKg.unit },
+  { field: "densityKgPerM3", label: "Density", kind: "number", unit: L.densityKgPerM3.unit },
+  { field: "transportKmRoad", label: "Road", kind: "number", unit: "km" },
+  { field: "transportKmSea", label: "Sea", kind: "number", unit: "km" },
+  { field: "wasteRatePct", label: "Waste rate", kind: "number", unit: "%" },
+  { field: "endOfLifeKgCO2ePerKg", label: "C1–C4", kind: "number", unit: L.endOfLifeKgCO2ePerKg.unit },
+  { field: "moduleDKgCO2ePerKg", label: "Module D", kind: "number", unit: L.moduleDKgCO2ePerKg.unit },
+  { field: "biogenicKgCO2ePerKg", label: "Biogenic stored", kind: "number", unit: L.biogenicKgCO2ePerKg.unit },
+  { field: "source", label: "Source", kind: "text", wide: true },
+  { field: "notes", label: "Notes", kind: "text", wide: true },
+];
+
+staticCell(
+  main,
+  { id: "factors", title: "Factor table" },
+  tableEditor<FactorRow>({
+    id: "factors",
+    rowNoun: "material",
+    rows: factors,
+    setRows(next) {
+      store.study.value = setIn(store.study.value, ["carbon", "factors"], next);
+    },
+    defaults: defaultFactorRows,
+    keyField: "material",
+    columns,
+    schema: FactorRowSchema,
+    parseCsv: parseFactorCsv,
+    toCsv: factorRowsToCsv,
+    csvFilename: "carbon-factors.csv",
+    newRow(id, rows) {
+      const checked = v.safeParse(MaterialIdSchema, id);
+      if (!checked.success) return `material id: ${checked.issues[0]?.message ?? "invalid"}`;
+      if (rows.some((r) => r.material === id)) return `material id: ${JSON.stringify(id)} is already in the table (expected a new id)`;
+      return {
+        material: id,
+        label: id,
+        a1a3KgCO2ePerKg: 0,
+        densityKgPerM3: 1000,
+        transportKmRoad: 0,
+        transportKmSea: 0,
+        wasteRatePct: 0,
+        endOfLifeKgCO2ePerKg: 0,
+        moduleDKgCO2ePerKg: 0,
+        biogenicKgCO2ePerKg: 0,
+        source: "added on the carbon page: name the inventory or EPD and its year",
+        notes: "take-off rows use it once a scheme names this material id",
+      };
+    },
+  }),
+);
+
+// ── Results ─────────────────────────────────────────────────────────────────────────────────
+const t = (kg: number) => fmt.one(kg / 1000);
+const perM2 = (x: number | undefined) => (x === undefined ? "–" : fmt.int(x));
+
+reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, () => {
+  const results = carbonBySchemes.value;
+  if (results.length === 0) return "No scheme is registered or enabled yet, so there is no take-off to assess.";
+  const s = settings.value;
+  const table = tableElement(
+    ["Scheme", "Mass (t)", "A1–A3 (tCO2e)", "A4", "A5", "C1–C4", `Counted (tCO2e)`, "kgCO2e/m² usable floor", "kgCO2e/m² plan", "Module D (tCO2e, apart)", "Biogenic stored (tCO2, apart)"],
+    results.map((r) => {
+      if (!r.carbon) return [r.label, r.error || r.reason, "", "", "", "", "", "", "", "", ""];
+      const c = r.carbon;
+      const mass = c.rows.reduce((sum, row) => sum + row.massKg, 0);
+      return [
+        r.label,
+        t(mass),
+        t(c.totals.a1a3),
+        s.countA4 ? t(c.totals.a4) : "not counted",
+        s.countA5 ? t(c.totals.a5) : "not counted",
+        s.countC ? t(c.totals.c) : "not counted",
+        t(c.totals.counted),
+        perM2(c.perM2UsableFloor.perM2?.counted),
+        perM2(c.perM2Plan.perM2?.counted),
+        t(c.totals.moduleD),
+        t(c.totals.biogenic),
+      ];
+    }),
+    {
+      caption: `Counted = ${results.find((r) => r.carbon)?.carbon?.modulesCounted.join(" + ") ?? "A1–A3"}; masses include the ${s.quantityAllowancePct} % quantity allowance. Module D and biogenic storage are shown apart, never netted.`,
+      numeric: [false, true, true, true, true, true, true, true, true, true, true],
+    },
+  );
+  const notes = document.createElement("div");
+  notes.className = "warnings";
+  const lines: string[] = [];
+  for (const r of results) {
+    if (r.carbon?.target) lines.push(`${r.label}: ${r.carbon.target.met ? "meets" : "exceeds"} the target of ${r.carbon.target.kgCO2ePerM2} kgCO2e/m² of ${s.areaBasis.replace("-", " ")} (${fmt.int(r.carbon.perM2.perM2?.counted ?? NaN)}).`);
+    for (const w of r.carbon?.warnings ?? []) lines.push(`${r.label}: ${w}`);
+  }
+  notes.textContent = lines.join("\n");
+  notes.style.whiteSpace = "pre-wrap";
+  const wrap = document.createElement("div");
+  wrap.append(table, notes);
+  return wrap;
+});
+
+const metric = signal<CarbonMetric>("per-m2-floor");
+const metricBinding: Binding<string> = { value: metric, set: (next) => (metric.value = next as CarbonMetric) };
+staticCell(main, { id: "chart-controls", title: "Charts" }, selectControl(metricBinding, { label: "Show", id: "carbonMetric", choices: CARBON_METRICS.map((m) => ({ value: m.value, label: m.label })) }));
+
+function chartInput(by: "module" | "material") {
+  const schemes: SchemeCarbon[] = carbonBySchemes.value.flatMap((r) => (r.carbon ? [{ id: r.id, label: r.label, carbon: r.carbon }] : []));
+  const s = settings.value;
+  const targetNote = s.targetKgCO2ePerM2 !== null && !targetApplies(metric.value, s.areaBasis) ? ` · target (${s.areaBasis.replace("-", " ")} basis) not drawn on this measure` : "";
+  return {
+    schemes,
+    by,
+    metric: metric.value,
+    target: s.targetKgCO2ePerM2,
+    targetBasis: s.areaBasis,
+    title: by === "module" ? "Embodied carbon of each scheme by life-cycle module" : "Embodied carbon of each scheme by material",
+    caption: chartCaption(store.study.value, `counted ${schemes[0]?.carbon.modulesCounted.join(" + ") ?? "A1–A3"}, ${s.quantityAllowancePct} % quantity allowance${targetNote}`),
+  };
+}
+
+reactiveCell(main, { id: "chart-module" }, () => {
+  const input = chartInput("module");
+  if (input.schemes.length === 0) return "No scheme has a carbon result to chart.";
+  return chartFigure(carbonChartOptions(input), "carbon-by-module");
+});
+reactiveCell(main, { id: "chart-material" }, () => {
+  const input = chartInput("material");
+  if (input.schemes.length === 0) return null;
+  return chartFigure(carbonChartOptions(input), "carbon-by-material");
+});
+
+staticCell(
+  main,
+  { id: "method", title: "Method" },
+  "Embodied carbon by EN 15978 module as set out in IStructE, How to calculate embodied carbon, 2nd ed. (2022), followed from memory: A1–A3 = mass × factor; A4 = mass × Σ(distance × mode factor per t·km); A5 wastage = mass × WF × (A1–A3 + A4 + C factors) with WF = 1/(1 − WR) − 1, the wasted mass counted once, in A5; C1–C4 = mass × end-of-life factor; module D and biogenic CO2 stored (EN 16449: (44/12) · 0.5 · ρV / (1 + ω/100)) reported apart. A5 site activities (plant and energy) are not included. The bundled factors are a small set of cited defaults, most recalled from memory: replace them with the EPDs of the products you will buy.",
+);

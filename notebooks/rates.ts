@@ -1,0 +1,227 @@
+// Rates page: the unit-rate table and the on-costs, edited in place, and the cost of every scheme
+// per element and per m² of usable floor.
+import "../src/notebook/style.css";
+import demoStudy from "../data/demo-study.json";
+import * as v from "valibot";
+import {
+  startPage,
+  reactiveCell,
+  staticCell,
+  chartFigure,
+  computed,
+  signal,
+  effect,
+  fmt,
+  tableElement,
+  numberControl,
+  toggleControl,
+  controlGroup,
+  type Binding,
+} from "../src/notebook";
+import { setIn } from "../src/study";
+import { assessCost, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
+import { costChartOptions, chartCaption, type SchemeCost } from "../src/charts";
+import { tableEditor, type EditorColumn } from "./table-editor";
+import { schemeDesigns, designAreas } from "./scheme-designs";
+
+const { store, main } = startPage({
+  id: "rates",
+  demoStudy,
+  intro: `Edit the unit rates (with their low and high ends) and the on-costs — preliminaries, overheads and profit, design fees, risk, inflation, location factor — and see every scheme's cost per element and per m² of usable floor. Every cost is a ${CONCEPT_SCREENING.label} estimate.`,
+});
+
+const rates = computed(() => store.study.value.cost.rates);
+const onCosts = computed(() => store.study.value.cost.onCosts);
+const designs = schemeDesigns(store);
+
+type SchemeCostResult = { id: string; label: string; cost: CostAssessment | null; error: string };
+const costBySchemes = computed<SchemeCostResult[]>(() =>
+  designs.value.map(({ id, label, design }) => {
+    if (design.takeoff.length === 0) return { id, label, cost: null, error: design.feasible ? "no take-off" : design.reason };
+    try {
+      return { id, label, cost: assessCost(design.takeoff, rates.value, onCosts.value, designAreas(design)), error: "" };
+    } catch (error) {
+      return { id, label, cost: null, error: error instanceof Error ? error.message : String(error) };
+    }
+  }),
+);
+
+// ── On-costs ────────────────────────────────────────────────────────────────────────────────
+const path = ["cost", "onCosts"] as const;
+const pct = (field: keyof OnCosts, label: string, max: number, hint: string, min = 0) =>
+  numberControl(store.bind<number>([...path, field]), { label, unit: "%", min, max, step: 0.5, id: field, hint });
+
+/** A text field checked by one field of the on-costs schema; an invalid value is not applied. */
+function textField(field: "priceBase" | "currency", label: string, hint: string): HTMLElement {
+  const wrap = document.createElement("div");
+  wrap.className = "control";
+  const l = document.createElement("label");
+  l.htmlFor = field;
+  l.textContent = label;
+  const input = document.createElement("input");
+  input.type = "text";
+  input.id = field;
+  input.size = 8;
+  const message = document.createElement("div");
+  message.className = "control-message";
+  message.id = `${field}-message`;
+  input.setAttribute("aria-describedby", message.id);
+  const h = document.createElement("div");
+  h.className = "control-hint";
+  h.textContent = hint;
+  input.addEventListener("input", () => {
+    const result = v.safeParse(OnCostsSchema.entries[field], input.value.trim());
+    message.textContent = result.success ? "" : `${label}: ${result.issues[0]?.message ?? "invalid"}`;
+    wrap.classList.toggle("invalid", !result.success);
+    if (result.success) store.study.value = setIn(store.study.value, [...path, field], result.output);
+  });
+  effect(() => {
+    const value = onCosts.value[field];
+    if (wrap.classList.contains("invalid") && document.activeElement === input) return;
+    input.value = value;
+    wrap.classList.remove("invalid");
+    message.textContent = "";
+  });
+  wrap.append(l, input, message, h);
+  return wrap;
+}
+
+staticCell(
+  main,
+  { id: "on-costs", title: "On-costs" },
+  (() => {
+    const grid = document.createElement("div");
+    grid.className = "grid";
+    grid.append(
+      controlGroup("Added in this order, each on the subtotal before it", [
+        pct("preliminariesPct", "1. Main contractor's preliminaries", 50, "% of works (15 %: common practice, no source)"),
+        pct("overheadsProfitPct", "2. Overheads and profit", 50, "% of works + preliminaries (6 %: common practice, no source)"),
+        pct("designFeesPct", "3. Project and design team fees", 50, "% of the subtotal (10 %: common practice, no source)"),
+        pct("riskPct", "4. Risk allowance", 100, "% of the subtotal (15 %: common practice, no source)"),
+        pct("inflationPct", "5. Inflation to the construction mid-point", 100, "% of the subtotal; set it for the programme", -20),
+      ]),
+      controlGroup("Location and price base", [
+        numberControl(store.bind<number>([...path, "locationFactor"]), { label: "Location factor", unit: "×", min: 0.2, max: 5, step: 0.01, id: "locationFactor", hint: "Multiplies every rate (1 = the rate table's location)." }),
+        textField("priceBase", "Price base (YYYY-MM)", "The date the rates are priced at."),
+        textField("currency", "Currency (ISO 4217 code)", "Labels every cost; rates are not converted."),
+      ]),
+    );
+    return grid;
+  })(),
+);
+
+// ── Rate table ──────────────────────────────────────────────────────────────────────────────
+const columns: EditorColumn<RateRow>[] = [
+  { field: "item", label: "Item", kind: "text", readOnly: true },
+  { field: "label", label: "Label", kind: "text", wide: true },
+  { field: "unit", label: "Unit", kind: "text", readOnly: true },
+  { field: "rate", label: "Rate", kind: "number", unit: "per unit" },
+  { field: "low", label: "Low", kind: "number", unit: "per unit" },
+  { field: "high", label: "High", kind: "number", unit: "per unit" },
+  { field: "basis", label: "Includes", kind: "text", wide: true },
+  { field: "source", label: "Source", kind: "text", wide: true },
+  { field: "notes", label: "Notes", kind: "text", wide: true },
+];
+
+staticCell(
+  main,
+  { id: "rates", title: "Unit rates" },
+  (() => {
+    const wrap = document.createElement("div");
+    const note = document.createElement("p");
+    note.className = "control-hint";
+    note.textContent = "The bundled rates are plausible invented figures for demonstration, not market data: replace them with current local rates. Items and their units are fixed by the take-off.";
+    wrap.append(
+      note,
+      tableEditor<RateRow>({
+        id: "rates",
+        rowNoun: "item",
+        rows: rates,
+        setRows(next) {
+          store.study.value = setIn(store.study.value, ["cost", "rates"], next);
+        },
+        defaults: defaultRateRows,
+        keyField: "item",
+        columns,
+        schema: RateRowSchema,
+        parseCsv: parseRateCsv,
+        toCsv: rateRowsToCsv,
+        csvFilename: "cost-rates.csv",
+      }),
+    );
+    return wrap;
+  })(),
+);
+
+// ── Results ─────────────────────────────────────────────────────────────────────────────────
+const money = (x: number) => fmt.int(x);
+
+reactiveCell(main, { id: "cost-table", title: "Cost per scheme" }, () => {
+  const results = costBySchemes.value;
+  if (results.length === 0) return "No scheme is registered or enabled yet, so there is no take-off to price.";
+  const o = onCosts.value;
+  const table = tableElement(
+    ["Scheme", `Works (${o.currency})`, "Prelims", "OH&P", "Fees", "Risk", "Inflation", `Total (${o.currency})`, `Low–high (${o.currency})`, `${o.currency}/m² usable floor`, `${o.currency}/m² plan`],
+    results.map((r) => {
+      if (!r.cost) return [r.label, r.error, "", "", "", "", "", "", "", "", ""];
+      const c = r.cost;
+      return [
+        r.label,
+        money(c.totals.works),
+        ...c.onCostLines.map((l) => money(l.amount)),
+        money(c.totals.total),
+        `${money(c.totals.totalLow)} – ${money(c.totals.totalHigh)}`,
+        c.perM2UsableFloor ? money(c.perM2UsableFloor.total) : "–",
+        c.perM2Plan ? money(c.perM2Plan.total) : "–",
+      ];
+    }),
+    {
+      caption: `${CONCEPT_SCREENING.label} (${CONCEPT_SCREENING.source}). Price base ${o.priceBase}, location factor ${o.locationFactor}. Low–high uses the low and high rates with the same on-costs; it is not the estimate class's range.`,
+      numeric: [false, true, true, true, true, true, true, true, true, true, true],
+    },
+  );
+  return table;
+});
+
+reactiveCell(main, { id: "cost-elements", title: "Cost per element" }, () => {
+  const results = costBySchemes.value.filter((r) => r.cost);
+  if (results.length === 0) return null;
+  const wrap = document.createElement("div");
+  wrap.className = "grid";
+  for (const r of results) {
+    const c = r.cost as CostAssessment;
+    wrap.append(
+      tableElement(
+        ["Element", `Cost (${c.currency})`, `${c.currency}/m² usable floor`],
+        c.byElement.map((g) => [g.key, money(g.cost), c.areas.usableFloorM2 > 0 ? money(g.cost / c.areas.usableFloorM2) : "–"]),
+        { caption: `${r.label}: works by element (location factor applied, before on-costs)`, numeric: [false, true, true] },
+      ),
+    );
+  }
+  return wrap;
+});
+
+const perM2 = signal(true);
+const perM2Binding: Binding<boolean> = { value: perM2, set: (next) => (perM2.value = next) };
+staticCell(main, { id: "cost-chart-controls", title: "Chart" }, toggleControl(perM2Binding, { label: "Per m² of usable floor (off: whole roof)", id: "costPerM2" }));
+
+reactiveCell(main, { id: "cost-chart" }, () => {
+  const schemes: SchemeCost[] = costBySchemes.value.flatMap((r) => (r.cost ? [{ id: r.id, label: r.label, cost: r.cost }] : []));
+  if (schemes.length === 0) return "No scheme has a cost to chart.";
+  const o = onCosts.value;
+  return chartFigure(
+    costChartOptions({
+      schemes,
+      perM2Floor: perM2.value,
+      title: perM2.value ? "Cost of each scheme per m² of usable floor, by element" : "Cost of each scheme, by element",
+      caption: chartCaption(store.study.value, `${CONCEPT_SCREENING.label}; price base ${o.priceBase}, ${o.currency}, location factor ${o.locationFactor}; whiskers: low and high rates`),
+    }),
+    perM2.value ? "cost-per-m2" : "cost-total",
+  );
+});
+
+staticCell(
+  main,
+  { id: "method", title: "Method" },
+  "Elemental order-of-cost estimate: each take-off row costs quantity × unit rate × location factor, its unit checked against the rate's; the on-costs then compound in the order works → preliminaries → overheads and profit → design fees → risk → inflation, each a percentage of the subtotal before it (the order of RICS NRM 1, from memory). Rates can be moved between price dates with a price index (rate × new index / old index). Foundations beyond the listed anchors, services, fit-out and VAT are not included.",
+);
