@@ -1,0 +1,138 @@
+import type { Brief } from "../study/brief";
+import type { DrawingLine } from "./types";
+import { sphericalCap, capHeightAt, type SphericalCap } from "../mechanics/spherical-cap";
+
+/** One bay of radial cables from the mast heads: outwards to the edge, or inwards to the central ring. */
+export interface NetBay {
+  /** Plan span of the cable, m. */
+  spanM: number;
+  /** Height of the mast head above the cable's other end, m (≥ 0). */
+  riseM: number;
+  /** Sag of the suspension cable below its chord at mid-span (the cable meets the roof there), m. */
+  sagM: number;
+  /** Plan radius of the cable's lower end, m. */
+  endRadiusM: number;
+  /** Height above the eaves of the cable's lower end, m. */
+  endHeightM: number;
+  /** Plan area carried by the bay (all masts), m². */
+  areaM2: number;
+}
+
+/** Geometry of a mast-supported cable net (heights above the eaves, m). */
+export interface CableNetLayout {
+  cap: SphericalCap;
+  masts: number;
+  /** Radial cables per mast and side (inner and outer). */
+  cablesPerSide: number;
+  mastRadiusM: number;
+  /** Mast head above the eaves, m. */
+  mastHeadM: number;
+  /** Mast length, floor to head, m. */
+  mastLengthM: number;
+  centralRingRadiusM: number;
+  outer: NetBay;
+  inner: NetBay;
+  /** Backstay: plan run from mast to ground anchor, and its length, m. */
+  backstayRunM: number;
+  backstayLengthM: number;
+  /** Radii of the circumferential cables, m. */
+  hoopRadiiM: number[];
+}
+
+/** Central ring radius / plan radius (common practice, no source). */
+export const NET_CENTRAL_RING_RATIO = 0.06;
+/** Backstay slope, from the horizontal, rad (45°, common practice, no source). */
+export const BACKSTAY_SLOPE_RAD = Math.PI / 4;
+
+/**
+ * Lays out the net on the brief's cap (the fabric's mean surface): masts on a ring of radius
+ * ratio × a with heads `mastAboveRoofRatio × span` above the roof; half of each mast's radial cables
+ * run out to the edge at the eaves, half in to a central ring at the crown. Each suspension cable is a
+ * parabola whose mid-span point lies on the roof. Circumferential cables every `hangerSpacingM` from
+ * the central ring outwards.
+ */
+export function cableNetLayout(brief: Brief, masts: number, mastRingRatio: number, mastAboveRoofRatio: number, radialCablesPerMast: number, hangerSpacingM: number): CableNetLayout {
+  const cap = sphericalCap(brief.spanM, brief.riseM);
+  const a = cap.baseRadiusM;
+  const rm = mastRingRatio * a;
+  const rc = NET_CENTRAL_RING_RATIO * a;
+  const head = capHeightAt(cap, rm) + mastAboveRoofRatio * brief.spanM;
+  const bay = (endR: number): NetBay => {
+    const endH = capHeightAt(cap, endR);
+    const spanM = Math.abs(endR - rm);
+    const mid = (endR + rm) / 2;
+    return {
+      spanM,
+      riseM: head - endH,
+      sagM: (head + endH) / 2 - capHeightAt(cap, mid),
+      endRadiusM: endR,
+      endHeightM: endH,
+      areaM2: Math.PI * Math.abs(endR > rm ? a * a - rm * rm : rm * rm),
+    };
+  };
+  const mastLengthM = head + brief.eavesHeightM;
+  const backstayRunM = mastLengthM / Math.tan(BACKSTAY_SLOPE_RAD);
+  const hoopRadiiM: number[] = [];
+  for (let r = rc + hangerSpacingM; r < a - hangerSpacingM / 2; r += hangerSpacingM) hoopRadiiM.push(r);
+  return {
+    cap,
+    masts,
+    cablesPerSide: radialCablesPerMast / 2,
+    mastRadiusM: rm,
+    mastHeadM: head,
+    mastLengthM,
+    centralRingRadiusM: rc,
+    outer: bay(a),
+    inner: bay(rc),
+    backstayRunM,
+    backstayLengthM: Math.hypot(backstayRunM, mastLengthM),
+    hoopRadiiM,
+  };
+}
+
+/** Points of a parabola with sag f below the chord between two points. */
+function parabola(from: readonly [number, number], to: readonly [number, number], sagM: number, steps = 16): [number, number][] {
+  return Array.from({ length: steps + 1 }, (_, i) => {
+    const t = i / steps;
+    return [from[0] + (to[0] - from[0]) * t, from[1] + (to[1] - from[1]) * t - 4 * sagM * t * (1 - t)] as [number, number];
+  });
+}
+
+/** The section through two masts, mirrored, heights above the floor. */
+export function cableNetSection(layout: CableNetLayout, eavesM: number): DrawingLine[] {
+  const lines: DrawingLine[] = [];
+  const both = (role: string, pts: [number, number][]) => {
+    lines.push({ role, points: pts });
+    lines.push({ role, points: pts.map(([x, y]) => [-x, y] as const) });
+  };
+  const headPt: [number, number] = [layout.mastRadiusM, layout.mastHeadM + eavesM];
+  for (const bay of [layout.outer, layout.inner]) {
+    const end: [number, number] = [bay.endRadiusM, bay.endHeightM + eavesM];
+    both("radial cable", parabola(headPt, end, bay.sagM));
+    const valley: [number, number][] = [];
+    for (let i = 0; i <= 16; i++) {
+      const r = bay.endRadiusM + ((layout.mastRadiusM - bay.endRadiusM) * i) / 16;
+      valley.push([r, capHeightAt(layout.cap, r) + eavesM]);
+    }
+    both("valley cable", valley);
+  }
+  both("mast", [[layout.mastRadiusM, 0], headPt]);
+  both("backstay", [headPt, [layout.mastRadiusM + layout.backstayRunM, 0]]);
+  const a = layout.cap.baseRadiusM;
+  both("anchor", [[a, 0], [a, eavesM]]);
+  const steps = 40;
+  const fabric: [number, number][] = [];
+  for (let s = -steps; s <= steps; s++) {
+    const x = (s / steps) * a;
+    fabric.push([x, capHeightAt(layout.cap, x) + eavesM]);
+  }
+  lines.push({ role: "fabric", points: fabric });
+  const rc = layout.centralRingRadiusM;
+  lines.push({ role: "ring", points: [[-rc, layout.inner.endHeightM + eavesM], [rc, layout.inner.endHeightM + eavesM]] });
+  const tick = a * 0.005;
+  for (const r of layout.hoopRadiiM) {
+    const y = capHeightAt(layout.cap, r) + eavesM;
+    both("circumferential cable", [[r - tick, y], [r + tick, y]]);
+  }
+  return lines;
+}

@@ -1,0 +1,77 @@
+import { describe, it, expect } from "vitest";
+import { cableNet } from "../../../src/schemes/cable-net";
+import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
+import { expectRelClose } from "../../helpers/close";
+
+const catalogue = defaultCatalogue();
+const design = (brief = DEFAULT_BRIEF, options = cableNet.defaults) => cableNet.design(brief, options, catalogue);
+const cableKg = (d: ReturnType<typeof design>) => d.takeoff.filter((r) => r.material === "steel-strand").reduce((s, r) => s + r.massKg, 0);
+
+describe("cableNet.design", () => {
+  const d = design();
+
+  it("is feasible at 160 m with the default brief", () => {
+    expect(d.reason).toBe("");
+    expect(d.feasible).toBe(true);
+    expect(d.outsideValidRange).toBe(false);
+  });
+
+  it("converges on its self-weight in a bounded number of iterations", () => {
+    expect(d.iterations).toBeGreaterThanOrEqual(1);
+    expect(d.iterations).toBeLessThanOrEqual(60);
+  });
+
+  it("take-off masses sum to totalMassKg", () => expectRelClose(d.takeoff.reduce((s, r) => s + r.massKg, 0), d.totalMassKg, 1e-12));
+
+  it("names cables, masts, anchors and fabric in its take-off", () => {
+    const elements = d.takeoff.map((r) => r.element);
+    for (const e of ["radial cables", "valley cables", "circumferential cables", "backstays", "masts", "anchors", "fabric"]) expect(elements).toContain(e);
+    expect(d.takeoff.find((r) => r.element === "anchors")?.costItem).toBe("anchor");
+  });
+
+  it("more snow needs more cable", () => {
+    const heavier = design({ ...DEFAULT_BRIEF, snowGroundKPa: 2.0 });
+    expect(heavier.feasible).toBe(true);
+    expect(cableKg(heavier)).toBeGreaterThan(cableKg(d));
+  });
+
+  it("more wind uplift needs more anchor concrete", () => {
+    const windier = design({ ...DEFAULT_BRIEF, windBasicMPerS: 32 });
+    const anchors = (x: typeof d) => x.takeoff.find((r) => r.element === "anchors")?.quantity ?? 0;
+    expect(anchors(windier)).toBeGreaterThan(anchors(d));
+  });
+
+  it("a plain mast (full buckling length) is heavier than a braced one", () => {
+    const plain = design(DEFAULT_BRIEF, { ...cableNet.defaults, mastType: "plain" });
+    const masts = (x: typeof d) => x.takeoff.find((r) => r.element === "masts")?.massKg ?? 0;
+    expect(masts(plain)).toBeGreaterThan(masts(d));
+  });
+
+  it("flags spans outside 60–400 m", () => {
+    const small = design({ ...DEFAULT_BRIEF, spanM: 40, riseM: 6 });
+    expect(small.outsideValidRange).toBe(true);
+    expect(small.warnings[0]).toMatch(/outside the method's valid range/);
+  });
+
+  it("answers infeasible with a reason, not a throw, where the masts are too short to hang the net", () => {
+    const low = design(DEFAULT_BRIEF, { ...cableNet.defaults, mastHeightRatio: 0.03 });
+    expect(low.feasible).toBe(false);
+    expect(low.reason).toMatch(/raise the mast height ratio/);
+  });
+
+  it("answers infeasible with a reason when no mast can carry the load", () => {
+    const few = design({ ...DEFAULT_BRIEF, spanM: 400, riseM: 60, snowGroundKPa: 10 }, { ...cableNet.defaults, masts: 3, mastType: "plain" });
+    expect(few.feasible).toBe(false);
+    expect(few.reason).toMatch(/mast/);
+  });
+
+  it("throws on a bad option, naming it", () => {
+    expect(() => design(DEFAULT_BRIEF, { ...cableNet.defaults, masts: 2.5 })).toThrow(/invalid masts: 2.5/);
+  });
+
+  it("draws masts, cables and fabric", () => {
+    const roles = new Set(d.drawing.section.map((l) => l.role));
+    for (const role of ["radial cable", "valley cable", "mast", "backstay", "fabric", "ring"]) expect(roles.has(role)).toBe(true);
+  });
+});
