@@ -1,6 +1,7 @@
 // Schemes: one module per structural system, all with the same SchemeModel interface.
 import type { SchemeModel, SchemeId, SchemeOptions } from "./types";
 import { cableDome } from "./cable-dome";
+import { cableNet } from "./cable-net";
 import { geodesicDome } from "./geodesic-dome";
 
 export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
@@ -12,6 +13,7 @@ export { iterateSelfWeight, ConvergenceError, type Converged } from "./converge"
 export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
   // tension schemes (cable dome, cable net) go first
   cableDome,
+  cableNet,
   geodesicDome,
 ];
 
