@@ -3,6 +3,7 @@ import type { SchemeModel, SchemeId, SchemeOptions } from "./types";
 import { cableDome } from "./cable-dome";
 import { cableNet } from "./cable-net";
 import { geodesicDome } from "./geodesic-dome";
+import { trussRoof } from "./truss-roof";
 
 export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
 export { SCHEME_IDS } from "./types";
@@ -15,6 +16,7 @@ export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
   cableDome,
   cableNet,
   geodesicDome,
+  trussRoof,
 ];
 
 /** The scheme with this id, or undefined. */
