@@ -90,7 +90,8 @@ function fail(what: string, problems: { path: string; message: string }[]): neve
  * following IStructE, How to calculate embodied carbon, 2nd ed. (2022) (from memory). A1–A3 are
  * always counted; A4, A5 and C as the settings say; module D and biogenic storage are reported
  * apart and never netted. The design-stage quantity allowance multiplies every mass, never a
- * factor. Rows with no material carry no carbon. Knows materials and masses, not schemes.
+ * factor. The A5 wastage term carries the wasted mass's A4 and C only when those modules are
+ * counted. Rows with no material carry no carbon. Knows materials and masses, not schemes.
  * @throws Error naming the field for invalid factors, settings, areas or row masses, and naming
  * the material for a row whose material has no factor row
  */
