@@ -3,3 +3,4 @@ export { comparisonTable, comparisonRows, COMPARISON_COLUMNS } from "./compariso
 export { paretoFront, type ParetoPoint } from "./pareto";
 export { crossovers, describeCrossovers, bestAt, type Crossover, type SpanValues } from "./crossovers";
 export { runSpanStudy, spansOf, valuesBySpan, type SpanPoint, type SpanRange } from "./span-study";
+export { compareStudies, HEADLINE_METRICS, type StudyComparison, type InputChange, type SchemeDelta, type MetricKey } from "./compare-studies";

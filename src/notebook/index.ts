@@ -13,3 +13,4 @@ export { keyValues } from "./key-values";
 export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary } from "./scheme-panel";
 export { studySignals, type SchemeSignals, type StudySignals } from "./scheme-signals";
 export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
+export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";

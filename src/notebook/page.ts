@@ -66,7 +66,7 @@ export function startPage(options: PageOptions): Page {
     notice.hidden = store.notice.value === "";
   });
   main.append(title, intro, caution, notice);
-  if (!options.readOnly) main.append(studyTools(store));
+  main.append(studyTools(store, options.readOnly ?? false));
   document.body.replaceChildren(header, main);
   return { store, main };
 }
@@ -79,8 +79,8 @@ function button(label: string, onClick: () => void): HTMLButtonElement {
   return b;
 }
 
-/** Open / save / copy-link tools for the study. An invalid file changes nothing and says why. */
-function studyTools(store: StudyStore): HTMLElement {
+/** Open / save / copy-link tools for the study (read-only pages: open only). An invalid file changes nothing and says why. */
+function studyTools(store: StudyStore, readOnly: boolean): HTMLElement {
   const bar = document.createElement("div");
   bar.className = "study-tools";
   const name = document.createElement("span");
@@ -119,6 +119,6 @@ function studyTools(store: StudyStore): HTMLElement {
       store.notice.value = `Copy this link to share the study:\n${url}`;
     }
   });
-  bar.append(name, open, save, copy, file);
+  bar.append(name, open, ...(readOnly ? [] : [save, copy]), file);
   return bar;
 }

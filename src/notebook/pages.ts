@@ -6,7 +6,7 @@ export const PAGES = [
   { id: "rates", title: "Rates and on-costs", file: "rates.html", who: "cost adviser" },
   { id: "risk", title: "Risk", file: "risk.html", who: "project lead" },
   { id: "client", title: "Client view", file: "client.html", who: "client" },
-  { id: "method", title: "Method and sources", file: "method.html", who: "everyone" },
+  { id: "method", title: "Method and assumptions", file: "method.html", who: "everyone" },
 ] as const;
 
 export type PageId = (typeof PAGES)[number]["id"];

@@ -1,0 +1,118 @@
+// Client view: read-only headline table, option charts, cautions and assumptions; exports one HTML file.
+import "../src/notebook/style.css";
+import css from "../src/notebook/style.css?inline";
+import demoStudy from "../data/demo-study.json";
+import { startPage, reactiveCell, staticCell, chartFigure, studySignals, tableElement, keyValues, downloadText, clientExportHtml, CAUTION, fmt } from "../src/notebook";
+import { chartCaption, massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart } from "../src/charts";
+import { comparisonTable, comparisonRows } from "../src/comparison";
+import { assumptionsRecord, type Study } from "../src/study";
+import type { SchemeResult } from "../src/pipeline";
+
+const { store, main } = startPage({
+  id: "client",
+  demoStudy,
+  readOnly: true,
+  intro: "The roof options for this study, read-only: the headline comparison, the option charts, the cautions and the assumptions behind them. Open a study file or a link from the project lead; nothing here changes the study.",
+});
+const { results } = studySignals(store);
+
+function headlineTable(list: readonly SchemeResult[], study: Study) {
+  const { header, rows } = comparisonRows(comparisonTable(list));
+  return { caption: `The schemes at ${study.brief.spanM} m span (per m² figures on usable floor)`, header, rows };
+}
+
+function figures(list: readonly SchemeResult[], study: Study): HTMLElement[] {
+  const caption = chartCaption(study);
+  return [
+    chartFigure(massByMaterialChart(list, { title: "Self-weight per m² of plan, by material", caption }), "client-mass"),
+    chartFigure(carbonByModuleChart(list, { title: "Embodied carbon per m² of usable floor, by life-cycle module", caption }), "client-carbon"),
+    chartFigure(costPerM2Chart(list, { title: "Cost per m² of usable floor", caption }), "client-cost"),
+    chartFigure(carbonVsCostChart(list, { title: "Carbon against cost per m² of usable floor", caption }), "client-carbon-vs-cost"),
+  ];
+}
+
+function assumptionSections(study: Study): { heading: string; items: [string, string][] }[] {
+  const b = study.brief;
+  const changed = assumptionsRecord(study).filter((a) => a.changed && a.group !== "brief");
+  return [
+    {
+      heading: "Brief",
+      items: [
+        ["Clear span, rise", `${b.spanM} m, ${b.riseM} m (span/rise ${fmt.one(b.spanM / b.riseM)})`],
+        ["Eaves, minimum clear height", `${b.eavesHeightM} m, ${b.minClearHeightM} m`],
+        ["Ground snow, basic wind, terrain", `${b.snowGroundKPa} kPa, ${b.windBasicMPerS} m/s, category ${b.terrain}`],
+        ["Imposed roof load, services", `${b.imposedRoofKPa} kPa, ${b.servicesKPa} kPa`],
+        ["Carbon factors", `${study.carbon.settings.factorSetName}; modules A1–A3${study.carbon.settings.countA4 ? ", A4" : ""}${study.carbon.settings.countA5 ? ", A5" : ""}${study.carbon.settings.countC ? ", C1–C4" : ""}; module D reported apart`],
+        ["Costs", `${study.cost.onCosts.currency} at price base ${study.cost.onCosts.priceBase}, location factor ${study.cost.onCosts.locationFactor}`],
+      ],
+    },
+    {
+      heading: `Inputs changed from spanbook's defaults (${changed.length})`,
+      items: changed.slice(0, 60).map((a) => [a.label, `${a.value}${a.unit ? ` ${a.unit}` : ""} (default ${a.default || "none"})`]),
+    },
+  ];
+}
+
+reactiveCell(main, { id: "meta", title: "Study" }, () => {
+  const s = store.study.value;
+  return keyValues([
+    ["Title", s.meta.title],
+    ["Prepared by", s.meta.author || "—"],
+    ["Date", s.meta.date],
+    ["Notes", s.meta.notes || "—"],
+  ]);
+});
+
+reactiveCell(main, { id: "headline", title: "Headline comparison" }, () => {
+  const t = headlineTable(results.value, store.study.value);
+  const wrap = document.createElement("div");
+  wrap.style.overflowX = "auto";
+  wrap.append(tableElement(t.header, t.rows, { caption: t.caption, numeric: t.header.map((_, i) => i > 0 && i < t.header.length - 3) }));
+  return wrap;
+});
+
+reactiveCell(main, { id: "charts", title: "Option charts" }, () => {
+  const grid = document.createElement("div");
+  grid.className = "grid charts";
+  grid.append(...figures(results.value, store.study.value));
+  return grid;
+});
+
+reactiveCell(main, { id: "assumptions", title: "Assumptions" }, () => {
+  const wrap = document.createElement("div");
+  for (const section of assumptionSections(store.study.value)) {
+    const h = document.createElement("h3");
+    h.textContent = section.heading;
+    wrap.append(h, keyValues(section.items));
+  }
+  return wrap;
+});
+
+const exportButton = document.createElement("button");
+exportButton.type = "button";
+exportButton.id = "export-client";
+exportButton.textContent = "Export for the client (one HTML file)";
+exportButton.addEventListener("click", () => {
+  const study = store.study.value;
+  const list = results.value;
+  const html = clientExportHtml({
+    title: study.meta.title,
+    subtitle: `Roof options at ${study.brief.spanM} m clear span — ${study.meta.author || "spanbook study"}, ${study.meta.date}.`,
+    caution: CAUTION,
+    css,
+    table: headlineTable(list, study),
+    chartsHtml: figures(list, study).map((f) => f.querySelector("figure, svg")?.outerHTML ?? ""),
+    assumptions: assumptionSections(study),
+    generated: `Exported from spanbook. Every figure is a feasibility-stage estimate.`,
+  });
+  const slug = study.meta.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || "study";
+  downloadText(`${slug}-client.html`, html, "text/html");
+});
+const printButton = document.createElement("button");
+printButton.type = "button";
+printButton.textContent = "Print (A4)";
+printButton.addEventListener("click", () => window.print());
+const tools = document.createElement("div");
+tools.className = "study-tools";
+tools.append(exportButton, printButton);
+staticCell(main, { id: "export", title: "Take it away" }, tools);

@@ -1,0 +1,122 @@
+// Method and assumptions: the published methods behind every number, the record of every input,
+// and the comparison of two study files.
+import "../src/notebook/style.css";
+import demoStudy from "../data/demo-study.json";
+import { startPage, reactiveCell, staticCell, tableElement, downloadText, signal, fmt } from "../src/notebook";
+import { SCHEMES } from "../src/schemes";
+import { assumptionsRecord, studyFromJson, describeProblems, type Study } from "../src/study";
+import { compareStudies, HEADLINE_METRICS, type SchemeDelta } from "../src/comparison";
+import { defaultCatalogue } from "../src/catalogue/default-catalogue";
+import { csvFormat } from "d3";
+
+const { store, main } = startPage({
+  id: "method",
+  demoStudy,
+  intro: "How each number is made, from which published method, and every input the current study uses — with its default, its source and whether it was changed. Compare two study files to see what changed and what each change does.",
+});
+
+const methods: [string, string][] = [
+  ["Actions", "EN 1990 eq. 6.10 or the less favourable of 6.10a/6.10b (Table A1.2(B)); uplift 1.0 G − 1.5 W. Snow EN 1991-1-3: μ1 Table 5.2, μ3 §5.3.5 (drifted case applied as its plan mean 0.75 μ3 — common practice, no source). Wind EN 1991-1-4 eqs 4.3–4.8 at the crown height, flat terrain; net uplift coefficient an editable assumption."],
+  ["Geometry", "Spherical cap from span and rise; usable floor is the plan area with at least the minimum clear height under the lowest structure; enclosed air at ISA sea-level density 1.225 kg/m³ (ISO 2533)."],
+  ["Steel members", "EN 1993-1-1 §6.2.3 tension and §6.3.1 flexural buckling (eqs 6.47–6.50, curve a for hot-finished CHS); sections from EN 10210-2 sizes, properties computed from D and t."],
+  ["Cables", "Strands sized for EN 1993-1-11 §6.2 (F_Rd = F_uk / (1.5 γR)); parabolic sag–tension H = wL²/8f (Irvine, Cable Structures, ch. 1); fabric strip n = p s²/(8f)."],
+  ["Shells and lattices", "Membrane forces of the spherical dome (Timoshenko & Woinowsky-Krieger, ch. 14); classical buckling p_cl = 2E t²/(R²√(3(1−ν²))) times a knock-down; lattice shells through an equivalent continuum 4√(DB)/R²."],
+  ["Concrete", "EN 1992-1-1 Table 3.1 (f_cm, E_cm), f_cd = α_cc f_ck / γ_C, minimum reinforcement eq. 9.1N."],
+  ["Embodied carbon", "EN 15978 modules as in IStructE, How to calculate embodied carbon (2nd ed.): A1–A3 = mass × factor; A4 by distance and mode; A5 wastage with WF = 1/(1−WR) − 1; C1–C4 where given; module D and biogenic storage (EN 16449) reported apart, never netted."],
+  ["Cost", "Elemental order of cost: quantity × rate × location factor, on-costs compounding works → preliminaries → overheads and profit → fees → risk → inflation. Estimate class: concept screening, roughly −50 % to +100 %."],
+];
+staticCell(main, { id: "methods", title: "Methods" }, tableElement(["Topic", "Method and source"], methods));
+
+staticCell(
+  main,
+  { id: "scheme-methods", title: "Schemes" },
+  tableElement(
+    ["Scheme", "Structural system", "Valid spans (m)"],
+    SCHEMES.map((m) => [m.label, m.description, `${m.validSpanM.min}–${m.validSpanM.max}`]),
+  ),
+);
+
+reactiveCell(main, { id: "record", title: "Assumptions record" }, () => {
+  const record = assumptionsRecord(store.study.value);
+  const wrap = document.createElement("div");
+  const changed = record.filter((r) => r.changed).length;
+  const p = document.createElement("p");
+  p.textContent = `${record.length} inputs, ${changed} changed from spanbook's defaults (marked ●).`;
+  const button = document.createElement("button");
+  button.type = "button";
+  button.id = "download-record";
+  button.textContent = "Download the record (CSV)";
+  button.addEventListener("click", () => {
+    const rows = record.map(({ raw: _raw, ...r }) => ({ ...r, changed: r.changed ? "yes" : "no" }));
+    downloadText("assumptions.csv", `${csvFormat(rows, ["group", "path", "label", "value", "unit", "default", "source", "changed"])}\n`, "text/csv");
+  });
+  const table = tableElement(
+    ["", "Group", "Input", "Value", "Unit", "Default", "Source"],
+    record.map((r) => [r.changed ? "●" : "", r.group, r.label, r.value, r.unit, r.default, r.source]),
+  );
+  const scroll = document.createElement("div");
+  scroll.style.maxHeight = "32rem";
+  scroll.style.overflow = "auto";
+  scroll.append(table);
+  wrap.append(p, button, scroll);
+  return wrap;
+});
+
+// ——— compare two study files ———
+const other = signal<{ name: string; study: Study } | null>(null);
+const otherNotice = signal("");
+const picker = document.createElement("div");
+const label = document.createElement("label");
+label.htmlFor = "other-study";
+label.textContent = "Study file to compare with the current study (A = current, B = the file): ";
+const input = document.createElement("input");
+input.type = "file";
+input.id = "other-study";
+input.accept = ".json,application/json";
+input.addEventListener("change", async () => {
+  const file = input.files?.[0];
+  if (!file) return;
+  const result = studyFromJson(await file.text());
+  if (result.ok) {
+    other.value = { name: file.name, study: result.study };
+    otherNotice.value = "";
+  } else {
+    otherNotice.value = `${file.name} was not opened:\n${describeProblems(result.problems)}`;
+  }
+});
+picker.append(label, input);
+staticCell(main, { id: "compare-studies-picker", title: "Compare two studies" }, picker);
+
+function cell(d: SchemeDelta, key: (typeof HEADLINE_METRICS)[number]["key"]): string {
+  const a = d.a[key];
+  const b = d.b[key];
+  if (a === null || b === null) return `${a === null ? "infeasible" : fmt.sig3(a)} → ${b === null ? "infeasible" : fmt.sig3(b)}`;
+  const change = b - a;
+  return `${fmt.sig3(a)} → ${fmt.sig3(b)} (${change >= 0 ? "+" : "−"}${fmt.sig3(Math.abs(change))})`;
+}
+
+reactiveCell(main, { id: "compare-studies" }, () => {
+  if (otherNotice.value) throw new Error(otherNotice.value);
+  const o = other.value;
+  if (!o) return "Choose a study file to compare.";
+  const comparison = compareStudies(store.study.value, o.study, defaultCatalogue());
+  const wrap = document.createElement("div");
+  const header = ["Scheme", ...HEADLINE_METRICS.map((m) => `${m.label} (${m.unit})`)];
+  wrap.append(
+    tableElement(header, comparison.overall.map((d) => [d.label, ...HEADLINE_METRICS.map((m) => cell(d, m.key))]), { caption: `All changes together: current study → ${o.name}` }),
+  );
+  for (const change of comparison.changes) {
+    const h = document.createElement("h3");
+    h.textContent = `${change.label}: ${change.valueA} → ${change.valueB}${change.unit ? ` ${change.unit}` : ""}`;
+    wrap.append(h);
+    if (change.effect) wrap.append(tableElement(header, change.effect.map((d) => [d.label, ...HEADLINE_METRICS.map((m) => cell(d, m.key))]), { caption: "This change alone" }));
+    else wrap.append("(effect of this change alone not computed)");
+  }
+  if (comparison.changes.length === 0) wrap.append("The two studies have the same inputs.");
+  if (comparison.onlyInA.length + comparison.onlyInB.length > 0) {
+    const p = document.createElement("p");
+    p.textContent = `Only in the current study: ${comparison.onlyInA.length} inputs; only in ${o.name}: ${comparison.onlyInB.length} inputs (table rows added or removed).`;
+    wrap.append(p);
+  }
+  return wrap;
+});

@@ -1,0 +1,54 @@
+/** Escapes text for HTML. */
+export function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
+}
+
+export interface ClientExportInput {
+  title: string;
+  subtitle: string;
+  caution: string;
+  /** Stylesheet text, inlined. */
+  css: string;
+  table: { caption: string; header: readonly string[]; rows: readonly (readonly string[])[] };
+  /** Rendered chart figures as HTML (inline SVG), already serialised. */
+  chartsHtml: readonly string[];
+  assumptions: { heading: string; items: readonly (readonly [string, string])[] }[];
+  generated: string;
+}
+
+/**
+ * One self-contained HTML file for the client: styles inlined, charts as inline SVG, no script
+ * and no network access, clean A4 pages when printed.
+ */
+export function clientExportHtml(input: ClientExportInput): string {
+  const t = input.table;
+  const table = `<table><caption>${escapeHtml(t.caption)}</caption><thead><tr>${t.header.map((h) => `<th scope="col">${escapeHtml(h)}</th>`).join("")}</tr></thead><tbody>${t.rows
+    .map((r) => `<tr>${r.map((c, i) => `<td${i > 0 && /^[−\-\d.,–]+$/.test(c) ? ' class="num"' : ""}>${escapeHtml(c)}</td>`).join("")}</tr>`)
+    .join("")}</tbody></table>`;
+  const assumptions = input.assumptions
+    .map((section) => `<h3>${escapeHtml(section.heading)}</h3><dl class="kv">${section.items.map(([k, v]) => `<dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd>`).join("")}</dl>`)
+    .join("");
+  return `<!doctype html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">
+<title>${escapeHtml(input.title)}</title>
+<style>${input.css}</style>
+</head>
+<body>
+<main class="notebook client-export">
+<h1>${escapeHtml(input.title)}</h1>
+<p class="intro">${escapeHtml(input.subtitle)}</p>
+<p class="caution" role="note">${escapeHtml(input.caution)}</p>
+<section class="cell"><h2>Headline comparison</h2><div style="overflow-x:auto">${table}</div></section>
+<section class="cell"><h2>Option charts</h2><div class="grid charts">${input.chartsHtml.join("\n")}</div></section>
+<section class="cell"><h2>Assumptions</h2>${assumptions}</section>
+<p class="caution">${escapeHtml(input.caution)}</p>
+<footer class="intro">${escapeHtml(input.generated)}</footer>
+</main>
+</body>
+</html>
+`;
+}

@@ -1,0 +1,138 @@
+import type { Study } from "./study";
+import { defaultStudy } from "./defaults";
+import { SCHEMES } from "../schemes";
+import { getIn } from "./patch";
+
+/** One input of a study, as the assumptions record lists it. */
+export interface Assumption {
+  /** Stable key: the path with table rows named by their material or item id, e.g. "carbon.factors[steel-plate].wasteRatePct". */
+  key: string;
+  /** The value itself (for applying a change to another study). */
+  raw: unknown;
+  /** brief, scheme, carbon factor, carbon setting, rate, on-cost, risk. */
+  group: string;
+  /** Dotted path in the study file, e.g. "brief.spanM". */
+  path: string;
+  label: string;
+  value: string;
+  unit: string;
+  default: string;
+  source: string;
+  changed: boolean;
+}
+
+type FieldInfo = { label: string; unit: string; source: string };
+
+/** Labels, units and sources of the brief's fields (the defaults' sources are in src/study/brief.ts). */
+const BRIEF_FIELDS: Record<string, FieldInfo> = {
+  spanM: { label: "Clear span (plan diameter)", unit: "m", source: "brief" },
+  riseM: { label: "Rise above the eaves", unit: "m", source: "brief" },
+  eavesHeightM: { label: "Eaves height", unit: "m", source: "brief" },
+  minClearHeightM: { label: "Minimum clear height for usable floor", unit: "m", source: "brief" },
+  snowGroundKPa: { label: "Ground snow load s_k", unit: "kPa", source: "site (EN 1991-1-3 §4 and national annex)" },
+  windBasicMPerS: { label: "Basic wind velocity v_b", unit: "m/s", source: "site (EN 1991-1-4 §4.2 and national annex)" },
+  terrain: { label: "Terrain category", unit: "", source: "EN 1991-1-4 Table 4.1" },
+  airDensityKgPerM3: { label: "Air density for wind", unit: "kg/m³", source: "EN 1991-1-4 §4.5 note 2" },
+  upliftCoefficient: { label: "Net uplift pressure coefficient", unit: "–", source: "editable assumption (from memory: EN 1991-1-4 Fig. 7.12 crown about −0.8)" },
+  imposedRoofKPa: { label: "Roof imposed load, category H", unit: "kPa", source: "EN 1991-1-1 Table 6.10" },
+  servicesKPa: { label: "Services and hung load", unit: "kPa", source: "common practice, no source" },
+  "factors.gammaGSup": { label: "γ_G,sup", unit: "–", source: "EN 1990 Table A1.2(B)" },
+  "factors.gammaGInf": { label: "γ_G,inf", unit: "–", source: "EN 1990 Table A1.2(B)" },
+  "factors.gammaQ": { label: "γ_Q", unit: "–", source: "EN 1990 Table A1.2(B)" },
+  "factors.xi": { label: "ξ", unit: "–", source: "EN 1990 Table A1.2(B)" },
+  "factors.psi0Snow": { label: "ψ0 snow", unit: "–", source: "EN 1990 Table A1.1" },
+  "factors.psi0Wind": { label: "ψ0 wind", unit: "–", source: "EN 1990 Table A1.1" },
+  ulsExpression: { label: "ULS expression", unit: "", source: "EN 1990 §6.4.3.2" },
+};
+
+const FACTOR_FIELDS: Record<string, FieldInfo> = {
+  a1a3KgCO2ePerKg: { label: "A1–A3", unit: "kgCO2e/kg", source: "" },
+  transportKmRoad: { label: "A4 road distance", unit: "km", source: "" },
+  transportKmSea: { label: "A4 sea distance", unit: "km", source: "" },
+  wasteRatePct: { label: "A5 waste rate", unit: "%", source: "" },
+  endOfLifeKgCO2ePerKg: { label: "C1–C4", unit: "kgCO2e/kg", source: "" },
+  moduleDKgCO2ePerKg: { label: "module D (reported apart)", unit: "kgCO2e/kg", source: "" },
+  biogenicKgCO2ePerKg: { label: "biogenic storage (reported apart)", unit: "kgCO2/kg", source: "" },
+};
+
+const ON_COST_FIELDS: Record<string, FieldInfo> = {
+  preliminariesPct: { label: "Preliminaries", unit: "%", source: "" },
+  overheadsProfitPct: { label: "Overheads and profit", unit: "%", source: "" },
+  designFeesPct: { label: "Design fees", unit: "%", source: "" },
+  riskPct: { label: "Risk allowance", unit: "%", source: "" },
+  inflationPct: { label: "Inflation", unit: "%", source: "" },
+  locationFactor: { label: "Location factor", unit: "–", source: "" },
+  priceBase: { label: "Price base", unit: "", source: "" },
+  currency: { label: "Currency", unit: "", source: "" },
+};
+
+function show(value: unknown): string {
+  if (value === undefined) return "";
+  if (typeof value === "number") return String(Number(value.toPrecision(10)));
+  if (typeof value === "object" && value !== null) return JSON.stringify(value);
+  return String(value);
+}
+
+function dotted(path: readonly (string | number)[]): string {
+  return path.map((p, i) => (typeof p === "number" ? `[${p}]` : i === 0 ? p : `.${p}`)).join("");
+}
+
+function row(group: string, path: (string | number)[], info: FieldInfo, study: Study, defaults: Study, defaultPath = path, key = dotted(path)): Assumption {
+  const value = getIn(study, path);
+  const dflt = getIn(defaults, defaultPath);
+  return {
+    key,
+    raw: value,
+    group,
+    path: dotted(path),
+    label: info.label,
+    value: show(value),
+    unit: info.unit,
+    default: show(dflt),
+    source: info.source,
+    changed: dflt === undefined ? true : show(value) !== show(dflt),
+  };
+}
+
+/**
+ * Every input of a study — brief, scheme options, carbon factors and settings, rates, on-costs —
+ * with its value, unit, default, source and whether it differs from the default. Table rows are
+ * matched to their defaults by material or item id, so a reordered table is not "changed".
+ */
+export function assumptionsRecord(study: Study, defaults: Study = defaultStudy()): Assumption[] {
+  const out: Assumption[] = [];
+  for (const [key, info] of Object.entries(BRIEF_FIELDS)) out.push(row("brief", ["brief", ...key.split(".")], info, study, defaults));
+  for (const model of SCHEMES) {
+    out.push(row("scheme", ["schemes", model.id, "enabled"], { label: `${model.label}: compared`, unit: "", source: "study" }, study, defaults));
+    for (const spec of model.options) {
+      out.push(row("scheme", ["schemes", model.id, "options", spec.key], { label: `${model.label}: ${spec.label}`, unit: spec.unit, source: spec.source }, study, defaults));
+    }
+  }
+  study.carbon.factors.forEach((factor, index) => {
+    const d = defaults.carbon.factors.findIndex((f) => f.material === factor.material);
+    for (const [key, info] of Object.entries(FACTOR_FIELDS)) {
+      out.push(
+        row("carbon factor", ["carbon", "factors", index, key], { ...info, label: `${factor.label}: ${info.label}`, source: factor.source }, study, defaults, ["carbon", "factors", d < 0 ? -1 : d, key], `carbon.factors[${factor.material}].${key}`),
+      );
+    }
+  });
+  for (const key of Object.keys(study.carbon.settings)) {
+    if (key === "transportModes") continue;
+    out.push(row("carbon setting", ["carbon", "settings", key], { label: key, unit: key.endsWith("Pct") ? "%" : "", source: "study" }, study, defaults));
+  }
+  study.carbon.settings.transportModes.forEach((mode, index) => {
+    const d = defaults.carbon.settings.transportModes.findIndex((m) => m.mode === mode.mode);
+    out.push(
+      row("carbon setting", ["carbon", "settings", "transportModes", index, "kgCO2ePerTonneKm"], { label: `A4 ${mode.mode} factor`, unit: "kgCO2e/t·km", source: mode.source }, study, defaults, ["carbon", "settings", "transportModes", d < 0 ? -1 : d, "kgCO2ePerTonneKm"], `carbon.settings.transportModes[${mode.mode}].kgCO2ePerTonneKm`),
+    );
+  });
+  study.cost.rates.forEach((rate, index) => {
+    const d = defaults.cost.rates.findIndex((r) => r.item === rate.item);
+    for (const key of ["rate", "low", "high"] as const) {
+      out.push(row("rate", ["cost", "rates", index, key], { label: `${rate.label}: ${key}`, unit: `per ${rate.unit}`, source: rate.source }, study, defaults, ["cost", "rates", d < 0 ? -1 : d, key], `cost.rates[${rate.item}].${key}`));
+    }
+  });
+  for (const [key, info] of Object.entries(ON_COST_FIELDS)) out.push(row("on-cost", ["cost", "onCosts", key], { ...info, source: "study" }, study, defaults));
+  out.push(row("study", ["seed"], { label: "Random seed", unit: "", source: "study" }, study, defaults));
+  return out;
+}
