@@ -6,7 +6,7 @@ import { roofActions } from "../loads/roof-actions";
 import { usableFloorAreaM2 } from "../mechanics/usable-floor";
 import { assembleDesign, check, infeasibleDesign } from "./assemble-design";
 import { iterateSelfWeight, ConvergenceError } from "./converge";
-import { cableDomeLayout, cableDomeSection, cableDomeUndersideM } from "./cable-dome-geometry";
+import { autoHoopCount, cableDomeLayout, cableDomeSection, cableDomeUndersideM } from "./cable-dome-geometry";
 import { sizeCableDome, SizingError, type DomeSizing } from "./cable-dome-sizing";
 import { designCompressionRing, PLAIN_CONCRETE_DENSITY_KG_PER_M3, type RingMaterial } from "./compression-ring";
 import { FABRIC_CHOICES, fabricCostItem, findFabric, validateOptions } from "./tension-common";
@@ -14,7 +14,7 @@ import { FABRIC_CHOICES, fabricCostItem, findFabric, validateOptions } from "./t
 export type CableDomeOptions = {
   /** Radial trusses N; 0 = automatic (even count with ridges ≤ 12 m apart at the perimeter, closer where the fabric needs it, at least 12). */
   radialTrusses: number;
-  /** Hoops n; 0 = automatic (one per 27.5 m of radius, 1 to 8). */
+  /** Hoops n; 0 = automatic (one per 27.5 m of radius, 1 to 8; fewer where the outer members cannot be made). */
   hoops: number;
   /** Central tension ring radius / plan radius, –. */
   centralRingRatio: number;
@@ -54,7 +54,7 @@ const defaults: CableDomeOptions = {
 
 const options: readonly OptionSpec[] = [
   { key: "radialTrusses", label: "Radial trusses (0 = automatic)", kind: "number", unit: "", min: 0, max: 120, step: 2, integer: true, source: "automatic: perimeter ridge spacing ≤ 12 m (common practice, no source), closer where the fabric panel needs it; at least 12" },
-  { key: "hoops", label: "Hoops (0 = automatic)", kind: "number", unit: "", min: 0, max: 8, step: 1, integer: true, source: "automatic: one per 27.5 m of radius, common practice 20–35 m (no source)" },
+  { key: "hoops", label: "Hoops (0 = automatic)", kind: "number", unit: "", min: 0, max: 8, step: 1, integer: true, source: "automatic: one per 27.5 m of radius, common practice 20–35 m (no source); fewer where the outer members cannot be made" },
   { key: "centralRingRatio", label: "Central ring radius / plan radius", kind: "number", unit: "", min: 0.03, max: 0.3, step: 0.01, source: "common practice, no source" },
   { key: "postHeightRatio", label: "Diagonal rise per bay", kind: "number", unit: "", min: 0.05, max: 1.0, step: 0.01, source: "common practice, no source" },
   { key: "residualPrestress", label: "Residual prestress under ULS", kind: "number", unit: "", min: 0, max: 0.5, step: 0.05, source: "common practice, no source" },
@@ -72,6 +72,18 @@ const identity = { id: "cable-dome" as const, label: "Cable dome", validSpanM };
 
 function design(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue): Design {
   validateOptions(options, opts);
+  if (opts.hoops > 0) return designWith(brief, opts, catalogue, opts.hoops);
+  // Automatic hoops: one per 27.5 m of radius, fewer where the outer members cannot be made (the
+  // force grows by a factor at each hoop outwards).
+  const first = designWith(brief, opts, catalogue, autoHoopCount(brief.spanM));
+  for (let hoops = autoHoopCount(brief.spanM) - 1; !first.feasible && hoops >= 1; hoops--) {
+    const fewer = designWith(brief, opts, catalogue, hoops);
+    if (fewer.feasible) return { ...fewer, warnings: [...fewer.warnings, `${hoops} hoops instead of the usual ${autoHoopCount(brief.spanM)}: with more, ${first.reason}`] };
+  }
+  return first;
+}
+
+function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, hoops: number): Design {
   const fabric = findFabric(catalogue, opts.fabric);
   const actions = roofActions(brief);
   // Widest fabric panel the automatic truss count allows: n = p s/(8·sag ratio) ≤ allowable, with the
@@ -80,7 +92,7 @@ function design(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue): Des
   const permanentEstimateKPa = brief.servicesKPa + 0.35 + (fabric.massKgPerM2 * 9.81) / 1000;
   const panelKPa = Math.max(permanentEstimateKPa + actions.leadingVariableKPa, actions.upliftKPa - permanentEstimateKPa);
   const maxSpacingM = (0.95 * 8 * opts.fabricSagRatio * allowable) / (panelKPa * 1000);
-  const layout = cableDomeLayout(brief, opts.radialTrusses, opts.hoops, opts.centralRingRatio, opts.postHeightRatio, maxSpacingM);
+  const layout = cableDomeLayout(brief, opts.radialTrusses, hoops, opts.centralRingRatio, opts.postHeightRatio, maxSpacingM);
   const section = cableDomeSection(layout, brief.eavesHeightM);
   const yieldPa = opts.steelYieldMPa * 1e6;
   const input = {
