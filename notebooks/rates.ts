@@ -19,7 +19,7 @@ import {
   type Binding,
 } from "../src/notebook";
 import { setIn } from "../src/study";
-import { assessCost, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
+import { assessCost, rebaseRateRows, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
 import { costChartOptions, chartCaption, type SchemeCost } from "../src/charts";
 import { tableEditor, type EditorColumn } from "./table-editor";
 import { schemeDesigns, designAreas } from "./scheme-designs";
@@ -148,6 +148,61 @@ staticCell(
         toCsv: rateRowsToCsv,
         csvFilename: "cost-rates.csv",
       }),
+    );
+    return wrap;
+  })(),
+);
+
+// ── Rebase to another price date ──────────────────────────────────────────────────────────
+staticCell(
+  main,
+  { id: "rebase", title: "Move every rate to another price date" },
+  (() => {
+    const from = signal(100);
+    const to = signal(100);
+    const month = signal(onCosts.peek().priceBase);
+    const wrap = document.createElement("div");
+    const result = document.createElement("div");
+    result.id = "rebase-status";
+    result.setAttribute("aria-live", "polite");
+    const apply = document.createElement("button");
+    apply.type = "button";
+    apply.id = "rebase-apply";
+    apply.textContent = "Rebase every rate";
+    apply.addEventListener("click", () => {
+      const checked = v.safeParse(OnCostsSchema.entries.priceBase, month.peek());
+      if (!checked.success) {
+        result.className = "control-message";
+        result.textContent = `new price base: ${checked.issues[0]?.message ?? "invalid"}`;
+        return;
+      }
+      const rebased = rebaseRateRows(rates.peek(), from.peek(), to.peek());
+      let next = setIn(store.study.value, ["cost", "rates"], rebased);
+      next = setIn(next, [...path, "priceBase"], checked.output);
+      store.study.value = next;
+      result.className = "control-hint";
+      result.textContent = `Every rate × ${fmt.two(to.peek() / from.peek())}; price base now ${checked.output}.`;
+    });
+    const monthInput = document.createElement("input");
+    monthInput.type = "text";
+    monthInput.id = "rebase-month";
+    monthInput.size = 8;
+    monthInput.value = month.peek();
+    monthInput.addEventListener("input", () => (month.value = monthInput.value.trim()));
+    const monthLabel = document.createElement("label");
+    monthLabel.htmlFor = monthInput.id;
+    monthLabel.textContent = "New price base (YYYY-MM)";
+    const monthWrap = document.createElement("div");
+    monthWrap.className = "control";
+    monthWrap.append(monthLabel, monthInput);
+    wrap.append(
+      controlGroup("Price index (any published construction price index, same series at both dates)", [
+        numberControl({ value: from, set: (x) => (from.value = x) }, { label: "Index at the rates' price base", unit: "", min: 0.001, max: 1e6, step: 0.1, id: "rebase-from" }),
+        numberControl({ value: to, set: (x) => (to.value = x) }, { label: "Index at the new date", unit: "", min: 0.001, max: 1e6, step: 0.1, id: "rebase-to" }),
+        monthWrap,
+      ]),
+      apply,
+      result,
     );
     return wrap;
   })(),

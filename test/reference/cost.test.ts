@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
-import { applyOnCosts, assessCost, CONCEPT_SCREENING, DEFAULT_ON_COSTS, ON_COST_ORDER, rebaseRate, type OnCosts, type RateRow } from "../../src/cost";
+import { applyOnCosts, assessCost, CONCEPT_SCREENING, DEFAULT_ON_COSTS, defaultRateRows, ON_COST_ORDER, rebaseRate, rebaseRateRows, type OnCosts, type RateRow } from "../../src/cost";
 import type { TakeoffRow } from "../../src/takeoff/takeoff-row";
 import { expectRelClose } from "../helpers/close";
 
@@ -97,4 +97,19 @@ describe("rebaseRate", () => {
 
 describe("DEFAULT_ON_COSTS", () => {
   it("passes its own schema", () => expect(() => applyOnCosts(1, DEFAULT_ON_COSTS)).not.toThrow());
+});
+
+describe("rebaseRateRows", () => {
+  const rows = defaultRateRows();
+  it("moves rate, low and high by the index ratio (100 → 110 for 250 → 275)", () => {
+    const moved = rebaseRateRows(rows, 250, 275);
+    moved.forEach((row, i) => {
+      expectRelClose(row.rate, (rows[i]?.rate ?? NaN) * 1.1, 1e-12);
+      expectRelClose(row.low, (rows[i]?.low ?? NaN) * 1.1, 1e-12);
+      expectRelClose(row.high, (rows[i]?.high ?? NaN) * 1.1, 1e-12);
+    });
+  });
+  it("there and back gives the table back", () => {
+    rebaseRateRows(rebaseRateRows(rows, 250, 275), 275, 250).forEach((row, i) => expectRelClose(row.rate, rows[i]?.rate ?? NaN, 1e-14));
+  });
 });
