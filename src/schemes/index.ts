@@ -4,6 +4,7 @@ import { cableDome } from "./cable-dome";
 import { cableNet } from "./cable-net";
 import { geodesicDome } from "./geodesic-dome";
 import { trussRoof } from "./truss-roof";
+import { concreteShell } from "./concrete-shell";
 
 export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
 export { SCHEME_IDS } from "./types";
@@ -17,6 +18,7 @@ export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
   cableNet,
   geodesicDome,
   trussRoof,
+  concreteShell,
 ];
 
 /** The scheme with this id, or undefined. */
