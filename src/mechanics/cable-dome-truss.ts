@@ -16,9 +16,8 @@
  * (P_i, R_(i+1)) and B_i (H_i, D_(i+1)). The structure has one self-stress state (4n + 5 forces,
  * 4n + 4 equations); it is fixed by the central upper-ring force. Any load state is found with that
  * force set to zero; total forces are load state + α·(self-stress state), linear superposition
- * (first-order, small displacements — the method of the dome's designers for preliminary sizing,
- * see Geiger's cable-dome concept as described in Pellegrino's Deployable Structures notes; here
- * derived from first principles).
+ * (first-order, small displacements: the usual idealisation for preliminary sizing of a prestressed
+ * cable truss; derived here from node equilibrium, not taken from a published solution).
  * Signs: + tension, − compression. Loads: vertical, + downwards, N per truss at each node.
  */
 

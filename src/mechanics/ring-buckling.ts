@@ -4,7 +4,7 @@
  *
  * Without foundation the classical result for a ring under uniform normal pressure is
  * q_cr = 3EI/R³, i.e. a ring force N_cr = q_cr·R = 3EI/R² (Timoshenko & Gere, Theory of Elastic
- * Stability, 2nd ed. 1961, §7.3, mode n = 2). With a radial foundation of modulus k (N/m per m of
+ * Stability, 2nd ed. 1961, ch. 7, ring under uniform external pressure, mode n = 2; section number from memory). With a radial foundation of modulus k (N/m per m of
  * ring) the inextensional mode n gives N_cr,n = (n² − 1)EI/R² + kR²/(n² − 1) (energy method, the
  * ring counterpart of Hetényi's beam on elastic foundation; Brush & Almroth, Buckling of Bars,
  * Plates and Shells 1975, ch. 4 — recalled, from memory), minimised over n = 2…n_max. Springs at

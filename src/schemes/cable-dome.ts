@@ -25,6 +25,8 @@ export type CableDomeOptions = {
   /** γR of EN 1993-1-11 §6.2, –. */
   gammaR: number;
   ringMaterial: RingMaterial;
+  /** Count the radial stiffness of the ridge cables as an elastic foundation restraining the ring's in-plane buckling. */
+  ringCableRestraint: boolean;
   /** Fabric id (data/fabrics.csv). */
   fabric: string;
   /** Seams, overlaps and cutting waste, % of the roof surface. */
@@ -45,6 +47,7 @@ const defaults: CableDomeOptions = {
   residualPrestress: 0.1, // common practice, no source
   gammaR: 1.0, // EN 1993-1-11:2006 Table 6.2 (from memory); 1.0 is the safe side
   ringMaterial: "concrete",
+  ringCableRestraint: true, // the cables do restrain the ring; false gives the bare-ring 3EI/R³ (Timoshenko & Gere ch. 7)
   fabric: "ptfe-glass-iii",
   fabricAllowancePct: 10, // common practice, no source
   fabricSagRatio: 0.1, // common practice, no source
@@ -60,6 +63,7 @@ const options: readonly OptionSpec[] = [
   { key: "residualPrestress", label: "Residual prestress under ULS", kind: "number", unit: "", min: 0, max: 0.5, step: 0.05, source: "common practice, no source" },
   { key: "gammaR", label: "γR for strands", kind: "number", unit: "", min: 0.9, max: 1.5, step: 0.05, source: "EN 1993-1-11:2006 §6.2 (from memory)" },
   { key: "ringMaterial", label: "Compression ring", kind: "select", unit: "", choices: [{ value: "concrete", label: "Reinforced concrete" }, { value: "steel", label: "Steel box" }], source: "design choice" },
+  { key: "ringCableRestraint", label: "Ridge cables restrain ring buckling", kind: "toggle", unit: "", source: "ring on elastic foundation (from memory); off: bare ring 3EI/R³, Timoshenko & Gere ch. 7" },
   { key: "fabric", label: "Fabric", kind: "select", unit: "", choices: FABRIC_CHOICES, source: "data/fabrics.csv" },
   { key: "fabricAllowancePct", label: "Fabric seams and waste", kind: "number", unit: "%", min: 0, max: 30, step: 1, source: "common practice, no source" },
   { key: "fabricSagRatio", label: "Fabric panel sag / span", kind: "number", unit: "", min: 0.04, max: 0.15, step: 0.01, source: "common practice, no source" },
@@ -119,7 +123,7 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
     return sum + m.lengthM / (m.modulusPa * m.areaM2 * cos * cos);
   }, 0);
   const foundation = layout.trusses / chainFlexibility / (2 * Math.PI * a);
-  const ring = designCompressionRing({ compressionN: sized.ringCompressionN, radiusM: a, foundationNPerM2: foundation, spokes: layout.trusses, material: opts.ringMaterial, yieldPa });
+  const ring = designCompressionRing({ compressionN: sized.ringCompressionN, radiusM: a, foundationNPerM2: opts.ringCableRestraint ? foundation : 0, spokes: layout.trusses, material: opts.ringMaterial, yieldPa });
 
   const checks: Check[] = sized.groups.map((m) => check(m.name, m.governing, m.designForceN, m.resistanceN, "N"));
   const fabricClause = "n = p s²/(8f) (Irvine 1981 ch. 1) against strength / factor (common practice)";

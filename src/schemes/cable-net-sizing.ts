@@ -159,15 +159,25 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   strands("edge", "edge cables", lines, parabolaLengthM(edgeSpan, NET_SECONDARY_SAG_RATIO * edgeSpan), Math.hypot((fabricUlsNPerM * edgeSpan) / (8 * NET_SECONDARY_SAG_RATIO), (fabricUlsNPerM * edgeSpan) / 2));
   const backstayN = Math.max(0, ...horizontal) / Math.cos(BACKSTAY_SLOPE_RAD);
   strands("backstay", "backstays", layout.masts, layout.backstayLengthM, Math.max(backstayN, 1));
-  const mastN = Math.max(...upperV) + backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
+  const cableMastN = Math.max(...upperV) + backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
   const effective = input.braced ? layout.mastLengthM / 2 : layout.mastLengthM;
-  const demand = { forceN: -mastN, effectiveLengthM: effective, yieldPa: input.yieldPa };
-  const catalogueMast = pickLightestChs(catalogue.chs, demand);
-  const mast = catalogueMast ?? pickLightestChs(FABRICATED_TUBES, { ...demand, curve: "b" });
-  if (!mast) throw new SizingError(`no mast section up to a 4 m tube carries ${(mastN / 1e6).toFixed(1)} MN over ${effective.toFixed(0)} m: use braced masts, more masts or shorter masts`);
+  // The mast's own weight (γ_G,sup, EN 1990 Table A1.2(B)) adds to the cable forces: size, add, resize.
+  let mastN = cableMastN;
+  let catalogueMast: ReturnType<typeof pickLightestChs> = null;
+  let mast: ReturnType<typeof pickLightestChs> = null;
+  for (let pass = 0; pass < 6; pass++) {
+    const demand = { forceN: -mastN, effectiveLengthM: effective, yieldPa: input.yieldPa };
+    catalogueMast = pickLightestChs(catalogue.chs, demand);
+    mast = catalogueMast ?? pickLightestChs(FABRICATED_TUBES, { ...demand, curve: "b" });
+    if (!mast) break;
+    const withWeight = cableMastN + brief.factors.gammaGSup * mast.section.massKgPerM * layout.mastLengthM * GRAVITY_M_PER_S2;
+    if (withWeight <= mastN) break;
+    mastN = withWeight;
+  }
+  if (!mast || mastN > mast.resistanceN) throw new SizingError(`no mast section up to a 4 m tube carries ${(mastN / 1e6).toFixed(1)} MN over ${effective.toFixed(0)} m: use braced masts, more masts or shorter masts`);
   groups.push({
     kind: "mast", name: "masts", count: layout.masts, lengthM: layout.mastLengthM, designForceN: -mastN, designation: mast.section.designation, resistanceN: mast.resistanceN,
-    utilisation: mast.utilisation, governing: mast.governing, massKg: mast.section.massKgPerM * layout.mastLengthM * layout.masts, fabricated: catalogueMast === null,
+    utilisation: mastN / mast.resistanceN, governing: mast.governing, massKg: mast.section.massKgPerM * layout.mastLengthM * layout.masts, fabricated: catalogueMast === null,
   });
   const ringN = ringForceFromPullsN(ringPull, lines);
   const ringArea = Math.ceil((ringN / input.yieldPa) * 1e4) / 1e4;

@@ -85,3 +85,12 @@ describe("cableDome.design", () => {
     expectRelClose(tall.usableFloorM2, tall.planAreaM2, 1e-9);
   });
 });
+
+describe("cableDome ring restraint", () => {
+  it("without the cables' restraint (bare ring, 3EI/R³) the compression ring is heavier", () => {
+    const restrained = cableDome.design(DEFAULT_BRIEF, { ...cableDome.defaults, ringMaterial: "steel" }, catalogue);
+    const bare = cableDome.design(DEFAULT_BRIEF, { ...cableDome.defaults, ringMaterial: "steel", ringCableRestraint: false }, catalogue);
+    const ringKg = (x: typeof bare) => x.takeoff.filter((r) => r.element === "compression ring").reduce((s, r) => s + r.massKg, 0);
+    expect(ringKg(bare)).toBeGreaterThan(ringKg(restrained));
+  });
+});
