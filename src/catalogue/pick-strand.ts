@@ -2,7 +2,7 @@ import type { Strand } from "./types";
 
 /** Options for strand sizing. */
 export type StrandDesignOptions = {
-  /** γR, EN 1993-1-11:2006 §6.2 (recommended 0.90 where the breaking force is verified by tests on the assembled component, 1.0 otherwise — from memory); default 1.0. */
+  /** γR, EN 1993-1-11:2006 §6.2(2), nationally determined (recommended 0.90 where the breaking force is verified by tests on the assembled component, 1.0 otherwise — from memory); default 1.0, the safe side. */
   gammaR?: number;
   /** Most strands allowed side by side in one member (parallel strands), default 8 (common practice, no source). */
   maxParallel?: number;
@@ -23,8 +23,10 @@ export interface StrandChoice {
 }
 
 /**
- * Design tension resistance of a strand, EN 1993-1-11:2006 §6.2 eq. 6.1 (recalled, from memory; the
- * clause text was not found in the sources searched): F_Rd = min(F_uk/(1.5 γR), F_k/γR). The proof
+ * Design tension resistance of a strand, EN 1993-1-11:2006 (Design of structures with tension
+ * components) §6.2: F_Rd = min(F_uk/(1.5 γR), F_k/γR). γR is a nationally determined parameter of
+ * §6.2(2) (a published national annex lists that clause among its NDPs); the formula and its
+ * recommended γR values are recalled, from memory — the clause text itself was not found. The proof
  * force F_k of a strand is about 0.8–0.85 F_uk, so the first term governs and is the one used:
  * F_Rd = F_uk / (1.5 γR).
  * @param minBreakingForceN F_uk, N
