@@ -79,7 +79,8 @@ function normalise(p: Vec3): Vec3 {
  * @param frequency v ≥ 1 (integer)
  * @param radiusM sphere radius R, m
  * @param capAngleRad φ0, 0 < φ0 ≤ π
- * @throws when v is not a whole number 1–400, R ≤ 0 or φ0 outside (0, π]
+ * @throws when v is not a whole number 1–400, R ≤ 0 or φ0 outside (0, π], or when not one
+ *   sub-triangle fits inside the cap
  */
 export function geodesicCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
   if (!(Number.isInteger(frequency) && frequency >= 1 && frequency <= 400)) throw new RangeError(`invalid geodesic frequency: ${frequency} (expected a whole number 1–400)`);
@@ -176,6 +177,9 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
     }
   }
 
+  if (faces.length === 0) {
+    throw new RangeError(`invalid cap: no whole triangle of frequency ${v} fits within φ0 = ${capAngleRad.toFixed(4)} rad (expected a larger cap or a higher frequency)`);
+  }
   // Edges of the kept faces, each once, with the number of faces using it. A node has at most six
   // neighbours, so each edge is found by scanning its lower node's six slots.
   const nodeCount = unit.length / 3;

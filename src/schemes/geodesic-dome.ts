@@ -84,7 +84,13 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue) {
   const frequency = geodesicFrequencyFor(R, opts.targetStrutLengthM);
   const section = sectionLines(brief, cap.radiusM, depthM);
   if (frequency > 400) return infeasibleDesign("geodesic-dome", brief, `the mesh would need frequency ${frequency} (over 400): increase the target strut length`, [], section);
-  const mesh = geodesicCap(frequency, R, cap.edgeAngleRad);
+  let mesh;
+  try {
+    mesh = geodesicCap(frequency, R, cap.edgeAngleRad);
+  } catch (e) {
+    if (e instanceof RangeError && e.message.startsWith("invalid cap")) return infeasibleDesign("geodesic-dome", brief, "the mesh is too coarse for so small a cap: reduce the target strut length", [], section);
+    throw e;
+  }
   const bands = strutBands(mesh, Math.min(opts.bands, Math.max(1, Math.floor(frequency / 2))));
   const lengths = strutLengths(mesh.edgeLengthsM);
   const webLengthM = double ? Math.hypot(depthM, lengths.meanM / Math.sqrt(3)) : 0;

@@ -54,5 +54,6 @@ describe("geodesicCap, class I icosahedral subdivision (Kenner, Geodesic Math an
       expectAbsClose(Math.hypot(p[0], p[1]), 100 * Math.sin(0.6), 1e-9);
     }
   });
+  it("throws when not one sub-triangle fits in the cap", () => expect(() => geodesicCap(1, 1, 0.3)).toThrow(/invalid cap: no whole triangle of frequency 1/));
   it("rejects a fractional frequency", () => expect(() => geodesicCap(2.5, 1, 1)).toThrow(/invalid geodesic frequency: 2.5/));
 });
