@@ -258,6 +258,7 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
     try {
       const rows = options.parseCsv(text, name);
       options.setRows(rows);
+      status.removeAttribute("role");
       status.className = "import-ok";
       status.textContent = `Imported ${rows.length} rows from ${name}.`;
     } catch (error) {

@@ -64,6 +64,26 @@ describe("carbon page", () => {
   });
 });
 
+describe("carbon page export", () => {
+  it("exports the edited table as CSV that holds the edit", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/carbon.html`);
+    await page.waitForSelector("#factors-table");
+    await page.fill("#factors-glulam-a1a3KgCO2ePerKg", "0.6");
+    const download = page.waitForEvent("download");
+    await page.click("#factors-export");
+    const file = await download;
+    expect(file.suggestedFilename()).toBe("carbon-factors.csv");
+    const stream = await file.createReadStream();
+    const chunks: Buffer[] = [];
+    for await (const chunk of stream) chunks.push(chunk as Buffer);
+    const text = Buffer.concat(chunks).toString("utf8");
+    expect(text.split("\n")[0]).toBe("material,label,a1a3_kgco2e_per_kg,density_kg_per_m3,transport_km_road,transport_km_sea,waste_rate_pct,end_of_life_kgco2e_per_kg,module_d_kgco2e_per_kg,biogenic_kgco2e_per_kg,source,notes");
+    expect(text).toMatch(/\nglulam,Glued laminated timber,0\.6,470,/);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
+
 describe("rates page", () => {
   it("a rate edit changes the cost; a rate above its high end is refused with a message", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/rates.html`);
