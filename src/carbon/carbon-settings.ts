@@ -65,9 +65,9 @@ export const CarbonSettingsSchema = v.object({
 /**
  * Defaults. Mode factors: UK Government GHG conversion factors for company reporting, freighting
  * goods — road HGV (all, average laden) 0.10749 and sea cargo 0.01614 kgCO2e/t·km, the values the
- * IStructE guide (2nd ed. 2022) uses for its default A4 scenarios (edition year not checked: from
- * memory; tank-to-wheel only). Quantity allowance 10 %: common practice for a concept design
- * (no source).
+ * IStructE guide (2nd ed. 2022) uses for its default A4 scenarios (from memory; the conversion-factor
+ * edition year is not recorded, and whether well-to-tank is included was not checked — taken as
+ * not included). Quantity allowance 10 %: common practice for a concept design (no source).
  */
 export const DEFAULT_CARBON_SETTINGS: CarbonSettings = {
   countA4: true,
@@ -80,13 +80,13 @@ export const DEFAULT_CARBON_SETTINGS: CarbonSettings = {
       mode: "road",
       kgCO2ePerTonneKm: 0.10749,
       wellToTankIncluded: false,
-      source: "UK Government GHG conversion factors, freighting goods, HGV all diesel average laden, as quoted by IStructE 2nd ed. 2022 (edition year from memory)",
+      source: "UK Government GHG conversion factors, freighting goods, HGV all diesel average laden, as quoted by IStructE 2nd ed. 2022 (values from the brief; the conversion-factor edition year is not recorded: from memory)",
     },
     {
       mode: "sea",
       kgCO2ePerTonneKm: 0.01614,
       wellToTankIncluded: false,
-      source: "UK Government GHG conversion factors, freighting goods, cargo ship average, as quoted by IStructE 2nd ed. 2022 (edition year from memory)",
+      source: "UK Government GHG conversion factors, freighting goods, cargo ship average, as quoted by IStructE 2nd ed. 2022 (values from the brief; the conversion-factor edition year is not recorded: from memory)",
     },
   ],
   targetKgCO2ePerM2: null,
