@@ -1,0 +1,104 @@
+import { describe, it, expect, beforeAll, afterAll, inject } from "vitest";
+import type { Browser } from "playwright-core";
+import { mkdtempSync, readFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { launchChromium, openPage } from "./browser";
+import { PAGES } from "../../src/notebook/pages";
+import { SCHEMES } from "../../src/schemes";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("every page", () => {
+  for (const page of [{ file: "index.html", id: "index" }, ...PAGES]) {
+    it(`${page.file} loads with no console errors and carries the caution`, async () => {
+      const { page: p, errors } = await openPage(browser, `${inject("baseUrl")}/${page.file}`);
+      await p.waitForLoadState("networkidle");
+      await p.waitForTimeout(300);
+      expect(await p.locator(".caution").count()).toBeGreaterThan(0);
+      expect(await p.locator(".cell-error").count()).toBe(0);
+      expect(errors).toEqual([]);
+      await p.close();
+    });
+  }
+});
+
+describe("span study", () => {
+  it("draws a line for every scheme that is feasible somewhere in the range", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/span-study.html`);
+    await page.waitForSelector("#cell-span-charts svg", { timeout: 60_000 });
+    const status = await page.locator("#cell-status").innerText();
+    expect(status).toMatch(/37 spans × \d schemes/);
+    const legend = await page.locator("#cell-span-charts").first().innerText();
+    for (const model of SCHEMES) expect(legend).toContain(model.label);
+    // Each scheme has at least one drawn (non-empty) line path in the self-weight chart.
+    const paths = await page.locator("#cell-span-charts figure").first().locator("path[d*='L']").count();
+    expect(paths).toBeGreaterThanOrEqual(1);
+    expect(await page.locator("#cell-crossovers li").count()).toBe(3);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
+
+describe("client export", () => {
+  it("writes one HTML file that opens from disk with no network and holds the charts and the table", async () => {
+    const context = await browser.newContext({ acceptDownloads: true });
+    const page = await context.newPage();
+    await page.goto(`${inject("baseUrl")}/client.html`);
+    await page.waitForSelector("#cell-charts svg");
+    const [download] = await Promise.all([page.waitForEvent("download"), page.click("#export-client")]);
+    const path = join(mkdtempSync(join(tmpdir(), "spanbook-")), "client.html");
+    await download.saveAs(path);
+    const html = readFileSync(path, "utf8");
+    expect(html).not.toMatch(/<script/i);
+
+    const offline = await browser.newContext({ offline: true });
+    const view = await offline.newPage();
+    const requests: string[] = [];
+    view.on("request", (r) => {
+      if (!r.url().startsWith("file:")) requests.push(r.url());
+    });
+    await view.goto(`file://${path}`);
+    expect(await view.locator("table tbody tr").count()).toBe(SCHEMES.length);
+    expect(await view.locator("svg").count()).toBeGreaterThanOrEqual(4);
+    expect(await view.locator(".caution").first().innerText()).toMatch(/licensed engineers/);
+    expect(requests).toEqual([]);
+    await offline.close();
+    await context.close();
+  });
+});
+
+describe("study files", () => {
+  it("saving a study, reloading the page and reopening the file gives the same numbers", async () => {
+    const context = await browser.newContext({ acceptDownloads: true });
+    const page = await context.newPage();
+    await page.goto(`${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-comparison table");
+    await page.fill("#spanM", "140");
+    await page.waitForFunction(() => document.querySelector("#cell-comparison caption")?.textContent?.includes("140 m"));
+    const before = await page.locator("#cell-comparison table").innerText();
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Save study file" }).click()]);
+    const path = join(mkdtempSync(join(tmpdir(), "spanbook-")), "study.json");
+    await download.saveAs(path);
+    // A fresh page (nothing in storage) opens the demo study; opening the file brings the numbers back.
+    const fresh = await browser.newContext();
+    const other = await fresh.newPage();
+    await other.goto(`${inject("baseUrl")}/compare.html`);
+    await other.waitForSelector("#cell-comparison table");
+    expect(await other.locator("#cell-comparison table").innerText()).not.toBe(before);
+    await other.setInputFiles("input[type=file]", path);
+    await other.waitForFunction(() => document.querySelector("#cell-comparison caption")?.textContent?.includes("140 m"));
+    expect(await other.locator("#cell-comparison table").innerText()).toBe(before);
+    await other.reload();
+    await other.waitForSelector("#cell-comparison table");
+    expect(await other.locator("#cell-comparison table").innerText()).toBe(before);
+    await fresh.close();
+    await context.close();
+  });
+});

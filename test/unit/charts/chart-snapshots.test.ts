@@ -1,0 +1,44 @@
+// Deterministic snapshots of chart output: fixed study, pinned number format (d3's en-US), no randomness.
+import { describe, it, expect } from "vitest";
+import { Window } from "happy-dom";
+import * as Plot from "@observablehq/plot";
+import { defaultStudy } from "../../../src/study";
+import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
+import { evaluateStudy } from "../../../src/pipeline";
+import { sectionChartOptions, massByMaterialChart, carbonVsCostChart, spanMetricChart, chartCaption } from "../../../src/charts";
+import { runSpanStudy } from "../../../src/comparison";
+
+const window = new Window();
+const document = window.document as unknown as Document;
+const render = (options: Plot.PlotOptions) => (Plot.plot({ ...options, document }) as unknown as HTMLElement).outerHTML;
+
+const study = defaultStudy();
+const results = evaluateStudy(study, defaultCatalogue()).results;
+const caption = chartCaption(study);
+
+describe("chart specifications (snapshots)", () => {
+  it("roof section", () => {
+    expect(render(sectionChartOptions({ brief: study.brief, title: "Roof section", caption }))).toMatchSnapshot();
+  });
+  it("mass by material", () => {
+    const html = render(massByMaterialChart(results, { title: "Mass", caption }));
+    for (const r of results) expect(html).toContain(r.label);
+    expect(html).toMatchSnapshot();
+  });
+  it("carbon against cost names the schemes not beaten on both", () => {
+    const html = render(carbonVsCostChart(results, { title: "Carbon against cost", caption }));
+    expect(html).toMatch(/not beaten on both/);
+    expect(html).toMatchSnapshot();
+  });
+  it("span study lines carry labelled axes", () => {
+    const points = runSpanStudy(study, defaultCatalogue(), { fromM: 60, toM: 120, stepM: 30 });
+    const html = render(spanMetricChart(points, "selfWeightKgPerM2", "Self-weight (kg/m² of plan)", { title: "Self-weight against span", caption }));
+    expect(html).toContain("Clear span (m)");
+    expect(html).toContain("Self-weight (kg/m² of plan)");
+    expect(html).toMatchSnapshot();
+  });
+  it("captions name the span, the brief and the factor set", () => {
+    expect(caption).toMatch(/^Span 160 m, rise 24 m/);
+    expect(caption).toContain(study.carbon.settings.factorSetName);
+  });
+});
