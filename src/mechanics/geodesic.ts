@@ -213,31 +213,38 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
     addEdge(c, a);
   }
   const edgeOnRing = faceUse.map((n) => n === 1);
-  const onRing = new Set<number>();
-  edges.forEach(([p, q], e) => {
+  const onRing = new Uint8Array(nodeCount);
+  for (let e = 0; e < edges.length; e++) {
     if (edgeOnRing[e]) {
-      onRing.add(p);
-      onRing.add(q);
+      onRing[edges[e]![0]] = 1;
+      onRing[edges[e]![1]] = 1;
     }
-  });
+  }
   // Move ring nodes along their meridian onto the cut circle.
   const ringRadius = Math.sqrt(Math.max(0, 1 - zCut * zCut));
-  for (const n of onRing) {
+  const ring: { node: number; azimuth: number }[] = [];
+  for (let n = 0; n < nodeCount; n++) {
+    if (!onRing[n]) continue;
     const r = Math.hypot(unit[3 * n]!, unit[3 * n + 1]!);
     if (r > 0) {
       unit[3 * n] = (unit[3 * n]! / r) * ringRadius;
       unit[3 * n + 1] = (unit[3 * n + 1]! / r) * ringRadius;
       unit[3 * n + 2] = zCut;
     }
+    ring.push({ node: n, azimuth: Math.atan2(unit[3 * n + 1]!, unit[3 * n]!) });
   }
-  const nodes: Vec3[] = [];
-  for (let n = 0; n < nodeCount; n++) nodes.push([unit[3 * n]! * radiusM, unit[3 * n + 1]! * radiusM, unit[3 * n + 2]! * radiusM]);
-  const ringNodes = [...onRing].sort((a, b) => Math.atan2(nodes[a]![1], nodes[a]![0]) - Math.atan2(nodes[b]![1], nodes[b]![0]));
-  const edgeLengthsM = edges.map(([p, q]) => {
-    const a = nodes[p]!;
-    const b = nodes[q]!;
-    return Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
-  });
+  const ringNodes = ring.sort((p, q) => p.azimuth - q.azimuth).map((r) => r.node);
+  const nodes: Vec3[] = new Array<Vec3>(nodeCount);
+  for (let n = 0; n < nodeCount; n++) nodes[n] = [unit[3 * n]! * radiusM, unit[3 * n + 1]! * radiusM, unit[3 * n + 2]! * radiusM];
+  const edgeLengthsM = new Array<number>(edges.length);
+  for (let e = 0; e < edges.length; e++) {
+    const p = 3 * edges[e]![0];
+    const q = 3 * edges[e]![1];
+    const dx = unit[p]! - unit[q]!;
+    const dy = unit[p + 1]! - unit[q + 1]!;
+    const dz = unit[p + 2]! - unit[q + 2]!;
+    edgeLengthsM[e] = Math.sqrt(dx * dx + dy * dy + dz * dz) * radiusM;
+  }
   return { frequency: v, radiusM, capAngleRad, cutHeightM: zCut * radiusM, nodes, edges, faces, ringNodes, edgeOnRing, edgeLengthsM };
 }
 
