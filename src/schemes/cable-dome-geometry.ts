@@ -112,3 +112,21 @@ export function cableDomeSection(layout: CableDomeLayout, eavesM: number): Drawi
   lines.push({ role: "fabric", points: fabric });
   return lines;
 }
+
+/** The plan: a ridge line per truss, the hoops and the rings as polygons through the truss lines (plan x, y, m). */
+export function cableDomePlan(layout: CableDomeLayout): DrawingLine[] {
+  const { radiiM, ringRadiusM } = layout.truss;
+  const N = layout.trusses;
+  const angle = (k: number) => (2 * Math.PI * k) / N;
+  const polygon = (r: number) => Array.from({ length: N + 1 }, (_, k) => [r * Math.cos(angle(k)), r * Math.sin(angle(k))] as const);
+  const lines: DrawingLine[] = [];
+  for (let k = 0; k < N; k++) {
+    const c = Math.cos(angle(k));
+    const s = Math.sin(angle(k));
+    lines.push({ role: "ridge cable", points: [[(radiiM[0] as number) * c, (radiiM[0] as number) * s], [ringRadiusM * c, ringRadiusM * s]] });
+  }
+  for (const r of radiiM.slice(1)) lines.push({ role: "hoop", points: polygon(r) });
+  lines.push({ role: "ring", points: polygon(radiiM[0] as number) });
+  lines.push({ role: "ring", points: polygon(ringRadiusM) });
+  return lines;
+}

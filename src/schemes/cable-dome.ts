@@ -6,7 +6,7 @@ import { roofActions } from "../loads/roof-actions";
 import { usableFloorAreaM2 } from "../mechanics/usable-floor";
 import { assembleDesign, check, infeasibleDesign } from "./assemble-design";
 import { iterateSelfWeight, ConvergenceError } from "./converge";
-import { autoHoopCount, cableDomeLayout, cableDomeSection, cableDomeUndersideM } from "./cable-dome-geometry";
+import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeUndersideM } from "./cable-dome-geometry";
 import { sizeCableDome, SizingError, type DomeSizing } from "./cable-dome-sizing";
 import { designCompressionRing, PLAIN_CONCRETE_DENSITY_KG_PER_M3, type RingMaterial } from "./compression-ring";
 import { FABRIC_CHOICES, fabricCostItem, findFabric, validateOptions } from "./tension-common";
@@ -182,7 +182,7 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
     usableFloorM2,
     roofSurfaceM2: layout.cap.surfaceM2,
     enclosedVolumeM3: plan * brief.eavesHeightM + layout.cap.volumeM3,
-    drawing: { section },
+    drawing: { section, plan: cableDomePlan(layout) },
     reason: ring ? "" : `no ${opts.ringMaterial} compression ring up to 8 m wide carries ${(sized.ringCompressionN / 1e6).toFixed(0)} MN with in-plane buckling: use more radial trusses (stiffer restraint) or the other ring material`,
   });
 }

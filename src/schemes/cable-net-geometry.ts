@@ -8,7 +8,7 @@ export interface NetBay {
   spanM: number;
   /** Height of the mast head above the cable's other end, m (≥ 0). */
   riseM: number;
-  /** Sag of the suspension cable below its chord at mid-span (the cable meets the roof there), m. */
+  /** Sag of the suspension cable below its chord at mid-span: the deepest that keeps the cable on or above the roof, m. */
   sagM: number;
   /** Plan radius of the cable's lower end, m. */
   endRadiusM: number;
@@ -47,8 +47,8 @@ export const BACKSTAY_SLOPE_RAD = Math.PI / 4;
 /**
  * Lays out the net on the brief's cap (the fabric's mean surface): masts on a ring of radius
  * ratio × a with heads `mastAboveRoofRatio × span` above the roof; half of each mast's radial cables
- * run out to the edge at the eaves, half in to a central ring at the crown. Each suspension cable is a
- * parabola whose mid-span point lies on the roof. Circumferential cables every `hangerSpacingM` from
+ * run out to the edge at the eaves, half in to a central ring at the crown. Each suspension cable is
+ * the deepest parabola on its chord that stays on or above the roof (hangers carry the fabric). Circumferential cables every `hangerSpacingM` from
  * the central ring outwards.
  */
 export function cableNetLayout(brief: Brief, masts: number, mastRingRatio: number, mastAboveRoofRatio: number, radialCablesPerMast: number, hangerSpacingM: number): CableNetLayout {
@@ -60,11 +60,19 @@ export function cableNetLayout(brief: Brief, masts: number, mastRingRatio: numbe
   const bay = (endR: number): NetBay => {
     const endH = capHeightAt(cap, endR);
     const spanM = Math.abs(endR - rm);
-    const mid = (endR + rm) / 2;
+    // The deepest parabola that stays on or above the roof everywhere (it touches the roof once; hangers
+    // carry the fabric elsewhere): f = min over the span of (chord − roof) / (4t(1 − t)).
+    let sagM = Number.POSITIVE_INFINITY;
+    for (let i = 1; i < 100; i++) {
+      const t = i / 100;
+      const chord = head + (endH - head) * t;
+      const roof = capHeightAt(cap, rm + (endR - rm) * t);
+      sagM = Math.min(sagM, (chord - roof) / (4 * t * (1 - t)));
+    }
     return {
       spanM,
       riseM: head - endH,
-      sagM: (head + endH) / 2 - capHeightAt(cap, mid),
+      sagM,
       endRadiusM: endR,
       endHeightM: endH,
       areaM2: Math.PI * Math.abs(endR > rm ? a * a - rm * rm : rm * rm),
@@ -134,5 +142,31 @@ export function cableNetSection(layout: CableNetLayout, eavesM: number): Drawing
     const y = capHeightAt(layout.cap, r) + eavesM;
     both("circumferential cable", [[r - tick, y], [r + tick, y]]);
   }
+  return lines;
+}
+
+/** The plan: masts (a cross each), their radial cables fanned over each mast's sector, the circumferential cables and the rings (plan x, y, m). */
+export function cableNetPlan(layout: CableNetLayout): DrawingLine[] {
+  const lines: DrawingLine[] = [];
+  const a = layout.cap.baseRadiusM;
+  const sector = (2 * Math.PI) / layout.masts;
+  const circle = (r: number, steps = 96) => Array.from({ length: steps + 1 }, (_, k) => [r * Math.cos((2 * Math.PI * k) / steps), r * Math.sin((2 * Math.PI * k) / steps)] as const);
+  const n = layout.cablesPerSide;
+  for (let m = 0; m < layout.masts; m++) {
+    const theta = m * sector;
+    const mx = layout.mastRadiusM * Math.cos(theta);
+    const my = layout.mastRadiusM * Math.sin(theta);
+    const arm = a * 0.01;
+    lines.push({ role: "mast", points: [[mx - arm, my], [mx + arm, my]] });
+    lines.push({ role: "mast", points: [[mx, my - arm], [mx, my + arm]] });
+    for (let j = 0; j < n; j++) {
+      const phi = theta + sector * ((j + 0.5) / n - 0.5);
+      lines.push({ role: "radial cable", points: [[mx, my], [a * Math.cos(phi), a * Math.sin(phi)]] });
+      lines.push({ role: "radial cable", points: [[mx, my], [layout.centralRingRadiusM * Math.cos(phi), layout.centralRingRadiusM * Math.sin(phi)]] });
+    }
+  }
+  for (const r of layout.hoopRadiiM) lines.push({ role: "circumferential cable", points: circle(r) });
+  lines.push({ role: "ring", points: circle(layout.centralRingRadiusM) });
+  lines.push({ role: "fabric", points: circle(a) });
   return lines;
 }

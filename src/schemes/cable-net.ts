@@ -7,7 +7,7 @@ import { usableFloorAreaM2 } from "../mechanics/usable-floor";
 import { capHeightAt } from "../mechanics/spherical-cap";
 import { assembleDesign, check, infeasibleDesign } from "./assemble-design";
 import { iterateSelfWeight, ConvergenceError } from "./converge";
-import { cableNetLayout, cableNetSection } from "./cable-net-geometry";
+import { cableNetLayout, cableNetPlan, cableNetSection } from "./cable-net-geometry";
 import { sizeCableNet, type NetSizing } from "./cable-net-sizing";
 import { SizingError } from "./cable-dome-sizing";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "./compression-ring";
@@ -165,7 +165,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     usableFloorM2,
     roofSurfaceM2: layout.cap.surfaceM2,
     enclosedVolumeM3: plan * brief.eavesHeightM + layout.cap.volumeM3,
-    drawing: { section },
+    drawing: { section, plan: cableNetPlan(layout) },
   });
 }
 
