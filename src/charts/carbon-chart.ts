@@ -49,7 +49,7 @@ export function carbonChartOptions(input: CarbonChartInput): Plot.PlotOptions {
       ...(showTarget && input.target !== null
         ? [
             Plot.ruleY([input.target], { stroke: "#a11d1d", strokeDasharray: "6 4", strokeWidth: 1.5 }),
-            Plot.text([input.target], { y: (d: number) => d, frameAnchor: "right", text: () => `target ${input.target} kgCO2e/m²`, dy: -6, fill: "#a11d1d" }),
+            Plot.text([input.target], { y: (d: number) => d, frameAnchor: "right", textAnchor: "end", text: () => `target ${input.target} kgCO2e/m²`, dy: -7, fill: "#a11d1d", stroke: "white", strokeWidth: 3, paintOrder: "stroke" }),
           ]
         : []),
     ],
