@@ -128,6 +128,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue) {
   }
   if (cap.edgeAngleRad > hoopSignChangeAngleRad()) warnings.push("edge angle beyond 51.8°: hoop forces turn to tension near the edge (bars sized for it)");
   warnings.push("membrane forces from the plan-mean snow load; drifted snow and point loads bend a lattice and are not covered at this stage");
+  warnings.push("the supports under the edge ring (walls or columns to the eaves) are not included");
   if (r.failedBand >= 0) {
     const reason = double ? `${r.failedWhy}: use a deeper double layer or a shorter mesh` : `${r.failedWhy}: choose the double-layer option or a shorter mesh`;
     return infeasibleDesign("geodesic-dome", brief, reason, warnings, section);

@@ -103,14 +103,20 @@ function design(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue) {
   try {
     converged = converge(ratio);
     if (opts.optimiseDepth) {
-      // Search span/depth at the converged self-weight, then converge again at the best ratio.
+      // Search span/depth at the converged self-weight (whole ratios, then ±0.5 about the best),
+      // then converge again at the best ratio.
       const g = converged.selfWeightKPa;
       let best = { ratio, massKg: Number.POSITIVE_INFINITY };
-      for (let q = DEPTH_RATIO_RANGE.min; q <= DEPTH_RATIO_RANGE.max; q += 0.5) {
+      const tryRatio = (q: number) => {
+        if (q < DEPTH_RATIO_RANGE.min || q > DEPTH_RATIO_RANGE.max) return;
         const r = designTrussRoof(inputsFor(q), g);
         const massKg = r.trussMassKg + r.connectionMassKg + r.bracingMassKg;
         if (r.failure === "" && massKg < best.massKg) best = { ratio: q, massKg };
-      }
+      };
+      for (let q = DEPTH_RATIO_RANGE.min; q <= DEPTH_RATIO_RANGE.max; q += 1) tryRatio(q);
+      const whole = best.ratio;
+      tryRatio(whole - 0.5);
+      tryRatio(whole + 0.5);
       if (Number.isFinite(best.massKg)) {
         ratio = best.ratio;
         converged = converge(ratio);
