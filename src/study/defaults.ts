@@ -5,11 +5,12 @@ import { defaultRateRows, DEFAULT_ON_COSTS } from "../cost";
 import { STUDY_SCHEMA_VERSION, type Study } from "./study";
 import type { SchemeId } from "../schemes/types";
 import type { SchemeSetting } from "./study";
+import { defaultRiskSettings } from "../risk/default-risk-settings";
 
 /** A study with every default: the tool's own starting point (the demo study is a separate file). */
 export function defaultStudy(): Study {
   const schemes = Object.fromEntries(SCHEMES.map((m) => [m.id, { enabled: true, options: { ...m.defaults } }])) as Record<SchemeId, SchemeSetting>;
-  return {
+  const study: Omit<Study, "risk"> = {
     schemaVersion: STUDY_SCHEMA_VERSION,
     meta: { title: "Untitled study", author: "", date: "2026-01-01", notes: "" },
     brief: structuredClone(DEFAULT_BRIEF),
@@ -18,4 +19,5 @@ export function defaultStudy(): Study {
     cost: { rates: defaultRateRows(), onCosts: structuredClone(DEFAULT_ON_COSTS) },
     seed: 20261202,
   };
+  return { ...study, risk: defaultRiskSettings(study) };
 }

@@ -6,6 +6,8 @@ import type { OptionSpec, SchemeModel } from "../schemes/types";
 import { FactorRowSchema, CarbonSettingsSchema, defaultFactorRows, DEFAULT_CARBON_SETTINGS } from "../carbon";
 import { RateRowSchema, OnCostsSchema, defaultRateRows, DEFAULT_ON_COSTS } from "../cost";
 import { STUDY_SCHEMA_VERSION, type Study } from "./study";
+import { RiskSettingsSchema } from "../risk/risk-settings";
+import { defaultRiskSettings } from "../risk/default-risk-settings";
 
 const L = BRIEF_LIMITS;
 
@@ -71,7 +73,7 @@ const isoDate = v.pipe(
 
 /** The study schema. Built on demand because the scheme registry defines the option fields. */
 export function studySchema() {
-  return v.object({
+  return v.pipe(v.object({
     schemaVersion: v.literal(STUDY_SCHEMA_VERSION, (issue) => `${String(issue.input)} (expected ${STUDY_SCHEMA_VERSION})`),
     meta: v.object({ title: textUpTo(200), author: textUpTo(200), date: isoDate, notes: v.optional(textUpTo(5000), "") }),
     brief: BriefSchema,
@@ -91,8 +93,10 @@ export function studySchema() {
       ),
       onCosts: OnCostsSchema,
     }), () => ({ rates: defaultRateRows(), onCosts: structuredClone(DEFAULT_ON_COSTS) }) as never),
+    // A file without risk settings takes the defaults for its own tables (the demo study does).
+    risk: v.optional(RiskSettingsSchema),
     seed: v.optional(integerIn(0, 2 ** 31 - 1), 20261202),
-  });
+  }), v.transform((study) => (study.risk ? study : { ...study, risk: defaultRiskSettings(study as unknown as Omit<Study, "risk">) })));
 }
 
 /** Validates a (migrated) study object: the study with defaults filled in, or every problem with its field path. */

@@ -2,6 +2,7 @@ import type { Brief } from "./brief";
 import type { SchemeId, SchemeOptions } from "../schemes/types";
 import type { FactorRow, CarbonSettings } from "../carbon";
 import type { RateRow, OnCosts } from "../cost";
+import type { RiskSettings } from "../risk/risk-settings";
 
 /** The version of the study file this code writes. Older files are migrated on load. */
 export const STUDY_SCHEMA_VERSION = 1;
@@ -30,6 +31,8 @@ export interface Study {
   schemes: Record<SchemeId, SchemeSetting>;
   carbon: { factors: FactorRow[]; settings: CarbonSettings };
   cost: { rates: RateRow[]; onCosts: OnCosts };
+  /** Uncertain inputs and sample counts of the risk analysis (a file without them takes defaultRiskSettings). */
+  risk: RiskSettings;
   /** Seed for every random draw (risk sampling). */
   seed: number;
 }

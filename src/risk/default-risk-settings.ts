@@ -1,0 +1,129 @@
+import type { Study } from "../study/study";
+import { BRIEF_LIMITS } from "../study/brief";
+import { SCHEMES } from "../schemes";
+import { materialInfo, type MaterialKind } from "../materials";
+import { FACTOR_LIMITS } from "../carbon";
+import { MAX_RATE } from "../cost";
+import { RISK_LIMITS, type RiskSettings, type UncertainInput, type PathStep } from "./risk-settings";
+
+/** A default range as multiples of the study's value, with where it comes from. */
+type Spread = { low: number; high: number; source: string };
+
+/**
+ * The default spreads. Every one is common practice for a concept-stage risk register, no source:
+ * they say how far the study's own values might plausibly be off, and should be replaced by the
+ * project's own judgement.
+ */
+export const DEFAULT_SPREADS = {
+  snow: { low: 0.75, high: 1.5, source: "site value and national annex not yet confirmed (common practice, no source)" },
+  wind: { low: 0.9, high: 1.15, source: "site value and national annex not yet confirmed (common practice, no source)" },
+  services: { low: 0.6, high: 2, source: "hung loads tend to grow through design (common practice, no source)" },
+  knockDown: { low: 0.8, high: 1.1, source: "buckling knock-down factors scatter widely in tests (common practice, no source)" },
+  allowance: { low: 0.5, high: 1.5, source: "design-stage allowances (common practice, no source)" },
+  steelCarbon: { low: 0.6, high: 1.3, source: "between recycled-content electric-arc and blast-furnace routes (common practice, no source)" },
+  concreteCarbon: { low: 0.75, high: 1.3, source: "mix design and cement supply (common practice, no source)" },
+  fabricCarbon: { low: 0.6, high: 1.6, source: "few published EPDs for coated fabrics (common practice, no source)" },
+  otherCarbon: { low: 0.7, high: 1.4, source: "generic inventory value (common practice, no source)" },
+  waste: { low: 0.5, high: 2, source: "site waste rates (common practice, no source)" },
+  transport: { low: 0.5, high: 2, source: "supplier not yet known (common practice, no source)" },
+  onCost: { low: 0.67, high: 1.33, source: "on-cost percentages at concept stage (common practice, no source)" },
+} as const satisfies Record<string, Spread>;
+
+/** Option keys treated as buckling knock-downs or design allowances (matched on the scheme modules' own keys). */
+const KNOCK_DOWN_KEY = /knock|imperfection/i;
+const ALLOWANCE_KEY = /allowance|node|connection|fitting|splice|joint/i;
+
+/** Material kinds whose factors get default ranges, with the group name and spread. */
+const CARBON_KINDS: Partial<Record<MaterialKind, { group: string; spread: Spread }>> = {
+  steel: { group: "steel", spread: DEFAULT_SPREADS.steelCarbon },
+  cable: { group: "steel", spread: DEFAULT_SPREADS.steelCarbon },
+  rebar: { group: "steel", spread: DEFAULT_SPREADS.steelCarbon },
+  concrete: { group: "concrete", spread: DEFAULT_SPREADS.concreteCarbon },
+  fabric: { group: "fabric", spread: DEFAULT_SPREADS.fabricCarbon },
+  cladding: { group: "cladding", spread: DEFAULT_SPREADS.otherCarbon },
+};
+
+const STEEL_RATE_ITEMS = new Set(["steel-lattice", "steel-truss", "steel-secondary", "steel-column", "steel-ring", "steel-mast"]);
+const FABRIC_RATE_ITEMS = new Set(["fabric-ptfe-glass", "fabric-pvc-polyester"]);
+
+function clamp(x: number, min: number, max: number): number {
+  return Math.min(max, Math.max(min, x));
+}
+
+function spreadInput(
+  id: string,
+  label: string,
+  path: PathStep[],
+  value: number,
+  spread: Spread,
+  limits: { min: number; max: number },
+  group: string | null,
+): UncertainInput | null {
+  if (!(Number.isFinite(value) && value > 0)) return null;
+  const low = Math.min(value, clamp(value * spread.low, limits.min, limits.max));
+  const high = Math.max(value, clamp(value * spread.high, limits.min, limits.max));
+  if (low === high) return null;
+  return { id, label, path, low, mode: value, high, distribution: "pert", group };
+}
+
+/**
+ * Default uncertain inputs for a study, all Beta-PERT with the study's own value as the mode:
+ * snow, wind and services loads; the buckling knock-downs and design allowances the registered
+ * scheme modules offer as options; A1–A3 factors, waste rates and road distances of steel, strand,
+ * rebar, concrete, fabric and cladding (grouped by kind: all steel factors move together); the
+ * carbon quantity allowance; every unit rate over its own low–high range (steel rates grouped,
+ * the two fabric rates grouped); and the on-cost percentages. Span, rise and the other brief
+ * geometry stay fixed. The spreads are DEFAULT_SPREADS (common practice, no source).
+ */
+export function defaultRiskSettings(study: Omit<Study, "risk">): RiskSettings {
+  const inputs: UncertainInput[] = [];
+  const add = (input: UncertainInput | null) => {
+    if (input) inputs.push(input);
+  };
+  const b = study.brief;
+  add(spreadInput("snow", "Ground snow load s_k (kPa)", ["brief", "snowGroundKPa"], b.snowGroundKPa, DEFAULT_SPREADS.snow, BRIEF_LIMITS.snowGroundKPa, null));
+  add(spreadInput("wind", "Basic wind velocity v_b (m/s)", ["brief", "windBasicMPerS"], b.windBasicMPerS, DEFAULT_SPREADS.wind, BRIEF_LIMITS.windBasicMPerS, null));
+  add(spreadInput("services", "Services and hung load (kPa)", ["brief", "servicesKPa"], b.servicesKPa, DEFAULT_SPREADS.services, BRIEF_LIMITS.servicesKPa, null));
+
+  for (const model of SCHEMES) {
+    for (const spec of model.options) {
+      if (spec.kind !== "number" || spec.integer) continue;
+      const spread = KNOCK_DOWN_KEY.test(spec.key) ? DEFAULT_SPREADS.knockDown : ALLOWANCE_KEY.test(spec.key) ? DEFAULT_SPREADS.allowance : null;
+      if (!spread) continue;
+      const value = study.schemes[model.id]?.options[spec.key] ?? model.defaults[spec.key];
+      if (typeof value !== "number") continue;
+      const unit = spec.unit ? ` (${spec.unit})` : "";
+      add(spreadInput(`${model.id}.${spec.key}`, `${model.label}: ${spec.label}${unit}`, ["schemes", model.id, "options", spec.key], value, spread, spec, null));
+    }
+  }
+
+  study.carbon.factors.forEach((row, index) => {
+    const kind = materialInfo(row.material)?.kind;
+    const rule = kind ? CARBON_KINDS[kind] : undefined;
+    if (!rule) return;
+    // The two coated fabrics move together; ETFE foil is a different product.
+    const group = rule.group === "fabric" && !row.material.startsWith("fabric-") ? null : rule.group;
+    add(spreadInput(`carbon-${row.material}`, `A1–A3: ${row.label} (kgCO2e/kg)`, ["carbon", "factors", index, "a1a3KgCO2ePerKg"], row.a1a3KgCO2ePerKg, rule.spread, FACTOR_LIMITS.a1a3KgCO2ePerKg, group === null ? null : `${group}-carbon`));
+    add(spreadInput(`waste-${row.material}`, `Waste rate: ${row.label} (%)`, ["carbon", "factors", index, "wasteRatePct"], row.wasteRatePct, DEFAULT_SPREADS.waste, FACTOR_LIMITS.wasteRatePct, `${rule.group}-waste`));
+    add(spreadInput(`transport-${row.material}`, `Road transport: ${row.label} (km)`, ["carbon", "factors", index, "transportKmRoad"], row.transportKmRoad, DEFAULT_SPREADS.transport, FACTOR_LIMITS.transportKmRoad, `${rule.group}-transport`));
+  });
+  add(spreadInput("quantity-allowance", "Carbon quantity allowance (%)", ["carbon", "settings", "quantityAllowancePct"], study.carbon.settings.quantityAllowancePct, DEFAULT_SPREADS.allowance, { min: 0, max: 50 }, null));
+
+  const currency = study.cost.onCosts.currency;
+  study.cost.rates.forEach((row, index) => {
+    if (!(row.low < row.high)) return;
+    const group = STEEL_RATE_ITEMS.has(row.item) ? "steel-rates" : FABRIC_RATE_ITEMS.has(row.item) ? "fabric-rates" : null;
+    inputs.push({ id: `rate-${row.item}`, label: `Rate: ${row.label} (${currency}/${row.unit})`, path: ["cost", "rates", index, "rate"], low: row.low, mode: row.rate, high: Math.min(row.high, MAX_RATE), distribution: "pert", group });
+  });
+  const oc = study.cost.onCosts;
+  const onCost = (field: "preliminariesPct" | "overheadsProfitPct" | "designFeesPct" | "riskPct", label: string, max: number) =>
+    add(spreadInput(`oncost-${field}`, `${label} (%)`, ["cost", "onCosts", field], oc[field], DEFAULT_SPREADS.onCost, { min: 0, max }, null));
+  onCost("preliminariesPct", "Preliminaries", 50);
+  onCost("overheadsProfitPct", "Overheads and profit", 50);
+  onCost("designFeesPct", "Design fees", 50);
+  onCost("riskPct", "Risk allowance", 100);
+  // Inflation: programme slip moves it up more readily than down (common practice, no source).
+  inputs.push({ id: "oncost-inflationPct", label: "Inflation to mid-point (%)", path: ["cost", "onCosts", "inflationPct"], low: Math.max(-20, oc.inflationPct - 2), mode: oc.inflationPct, high: Math.min(100, oc.inflationPct + 8), distribution: "pert", group: null });
+
+  return { inputs, samples: RISK_LIMITS.samples.default, designSamples: RISK_LIMITS.designSamples.default };
+}

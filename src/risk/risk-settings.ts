@@ -1,0 +1,146 @@
+import * as v from "valibot";
+import { integerIn, oneOf, textUpTo } from "../study/schema-helpers";
+import { DISTRIBUTION_KINDS, type DistributionKind } from "./distribution";
+
+/** A step of a path into the study: an object key or an array index. */
+export type PathStep = string | number;
+
+/**
+ * One uncertain input of the risk analysis: a number in the study (found by `path`) given a
+ * three-point range and a distribution. Inputs with the same `group` share one draw per sample (as
+ * a quantile u, so each maps through its own range): fully correlated, e.g. all steel rates.
+ */
+export type UncertainInput = {
+  /** Unique id, e.g. "snow" or "rate-steel-lattice". */
+  id: string;
+  label: string;
+  /** Where the number is in the study, e.g. ["brief", "snowGroundKPa"] or ["cost", "rates", 0, "rate"]. */
+  path: PathStep[];
+  /** Lowest plausible value, in the field's own unit. */
+  low: number;
+  /** Most likely value (normally the study's own value). */
+  mode: number;
+  /** Highest plausible value. */
+  high: number;
+  distribution: DistributionKind;
+  /** Inputs of the same group are drawn together (rank-perfectly correlated); null: independent. */
+  group: string | null;
+};
+
+/** The risk analysis settings a study carries. */
+export type RiskSettings = {
+  inputs: UncertainInput[];
+  /** Monte Carlo samples, 10–50,000 (default 5000). */
+  samples: number;
+  /**
+   * Distinct draws of the inputs that change a design (loads, scheme options), 1–5000 (default
+   * 64): each is designed once and paired with many draws of the assessment-only inputs.
+   */
+  designSamples: number;
+};
+
+export const RISK_LIMITS = {
+  samples: { min: 10, max: 50000, default: 5000 },
+  designSamples: { min: 1, max: 5000, default: 64 },
+  inputs: { max: 400 },
+} as const;
+
+const FINITE = 1e12;
+
+function finiteNumber(what: string) {
+  return v.pipe(
+    v.number((issue) => `${String(issue.input)} (expected a number for ${what})`),
+    v.check((x) => Number.isFinite(x) && Math.abs(x) <= FINITE, (issue) => `${String(issue.input)} (expected a finite number for ${what})`),
+  );
+}
+
+const pathStep = v.union(
+  [
+    v.pipe(v.string(), v.minLength(1)),
+    v.pipe(v.number(), v.integer(), v.minValue(0)),
+  ],
+  (issue) => `${JSON.stringify(issue.input)} (expected a key or an index ≥ 0)`,
+);
+
+/** Checks one uncertain input; the range message names the input. */
+export const UncertainInputSchema = v.pipe(
+  v.object({
+    id: v.pipe(
+      textUpTo(80),
+      v.regex(/^[A-Za-z0-9][A-Za-z0-9._-]*$/, (issue) => `${JSON.stringify(issue.input)} (expected letters, digits, ".", "_" or "-", e.g. snow)`),
+    ),
+    label: textUpTo(200),
+    path: v.pipe(
+      v.array(pathStep, () => "expected a path: a list of keys and indexes"),
+      v.minLength(1, () => "empty path (expected a path into the study, e.g. [\"brief\", \"snowGroundKPa\"])"),
+      v.maxLength(8, () => "path too long (expected at most 8 steps)"),
+      v.check((p) => ["brief", "schemes", "carbon", "cost"].includes(String(p[0])), (issue) => `${JSON.stringify((issue.input as PathStep[])[0])} (expected a path starting with brief, schemes, carbon or cost)`),
+    ),
+    low: finiteNumber("low"),
+    mode: finiteNumber("mode"),
+    high: finiteNumber("high"),
+    distribution: oneOf(DISTRIBUTION_KINDS),
+    group: v.nullable(
+      v.pipe(
+        textUpTo(60),
+        v.minLength(1, () => `empty group (expected a name, or null for an independent input)`),
+      ),
+      null,
+    ),
+  }),
+  v.forward(
+    v.partialCheck(
+      [["id"], ["low"], ["mode"]],
+      (input) => input.low <= input.mode,
+      (issue) => {
+        const input = issue.input as UncertainInput;
+        return `input "${input.id}": low ${input.low} is above the mode ${input.mode} (expected low ≤ mode ≤ high)`;
+      },
+    ),
+    ["low"],
+  ),
+  v.forward(
+    v.partialCheck(
+      [["id"], ["mode"], ["high"]],
+      (input) => input.mode <= input.high,
+      (issue) => {
+        const input = issue.input as UncertainInput;
+        return `input "${input.id}": high ${input.high} is below the mode ${input.mode} (expected low ≤ mode ≤ high)`;
+      },
+    ),
+    ["high"],
+  ),
+);
+
+/** Checks the risk settings: each input, unique ids, unique paths, the sample counts. */
+export const RiskSettingsSchema = v.pipe(
+  v.object({
+    inputs: v.pipe(
+      v.array(UncertainInputSchema, () => "expected a list of uncertain inputs"),
+      v.maxLength(RISK_LIMITS.inputs.max, () => `too many inputs (expected at most ${RISK_LIMITS.inputs.max})`),
+    ),
+    samples: v.optional(integerIn(RISK_LIMITS.samples.min, RISK_LIMITS.samples.max, "samples"), RISK_LIMITS.samples.default),
+    designSamples: v.optional(integerIn(RISK_LIMITS.designSamples.min, RISK_LIMITS.designSamples.max, "design samples"), RISK_LIMITS.designSamples.default),
+  }),
+  v.forward(
+    v.check(
+      (s) => new Set(s.inputs.map((i) => i.id)).size === s.inputs.length,
+      (issue) => {
+        const ids = (issue.input as RiskSettings).inputs.map((i) => i.id);
+        return `input id "${ids.find((id, k) => ids.indexOf(id) !== k) ?? ""}" is used twice (expected each id once)`;
+      },
+    ),
+    ["inputs"],
+  ),
+  v.forward(
+    v.check(
+      (s) => new Set(s.inputs.map((i) => JSON.stringify(i.path))).size === s.inputs.length,
+      (issue) => {
+        const paths = (issue.input as RiskSettings).inputs.map((i) => JSON.stringify(i.path));
+        const k = paths.findIndex((p, j) => paths.indexOf(p) !== j);
+        return `input "${(issue.input as RiskSettings).inputs[k]?.id ?? ""}" varies the same study value as another input (expected each path once)`;
+      },
+    ),
+    ["inputs"],
+  ),
+);

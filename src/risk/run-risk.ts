@@ -1,0 +1,281 @@
+import type { Study } from "../study/study";
+import type { Catalogue } from "../catalogue/types";
+import type { Design, SchemeId, SchemeModel } from "../schemes/types";
+import { SCHEMES } from "../schemes";
+import { evaluateStudy, designScheme, assessDesign, headline } from "../pipeline";
+import { CONCEPT_SCREENING } from "../cost";
+import { getIn } from "../study/patch";
+import { createPrng } from "./prng";
+import { makeDistribution } from "./make-distribution";
+import type { Distribution } from "./distribution";
+import { applyValues, compilePaths } from "./apply-values";
+import { checkRiskInputs } from "./check-risk-inputs";
+import { designQuantities, assessmentIntensities, linearAssessment, type DesignQuantities } from "./linear-assessment";
+import { summariseMetric, lowestProbabilities, pairwiseProbabilities, rankCorrelationsWith, type Clusters } from "./risk-summaries";
+import { ranks } from "./rank-correlation";
+import { RISK_LIMITS, type UncertainInput } from "./risk-settings";
+import { RISK_COVERAGE, RISK_METRICS, type RankCorrelation, type RiskMetric, type RiskResult, type SchemeRisk } from "./risk-result";
+
+export type RiskProgress = { phase: "designs" | "samples"; done: number; total: number };
+
+export type RunRiskOptions = {
+  /** Samples (default: the study's risk.samples). */
+  samples?: number;
+  /** Seed (default: the study's seed). */
+  seed?: number;
+  /** Distinct design draws (default: the study's risk.designSamples), never more than the samples. */
+  designSamples?: number;
+  onProgress?: (progress: RiskProgress) => void;
+  /** Checked between batches; returning true stops the run with a RiskCancelledError. */
+  shouldStop?: () => boolean;
+};
+
+/** Thrown when shouldStop asked the run to stop. */
+export class RiskCancelledError extends Error {
+  constructor() {
+    super("risk run cancelled");
+    this.name = "RiskCancelledError";
+  }
+}
+
+/** True for inputs that change a design (loads, scheme options); the rest change only carbon and cost. */
+export function affectsDesign(input: UncertainInput): boolean {
+  return input.path[0] === "brief" || input.path[0] === "schemes";
+}
+
+/** True when an input changes the design of this scheme. */
+function affectsScheme(input: UncertainInput, id: SchemeId): boolean {
+  return input.path[0] === "brief" || (input.path[0] === "schemes" && input.path[1] === id);
+}
+
+type DesignEntry = { design: Design; quantities: DesignQuantities; direct?: { carbon: number; cost: number } };
+
+function checkCount(value: number, what: string, min: number, max: number): number {
+  if (!(Number.isInteger(value) && value >= min && value <= max)) throw new Error(`invalid ${what}: ${value} (expected a whole number from ${min} to ${max})`);
+  return value;
+}
+
+/**
+ * Monte Carlo risk analysis of a study: the whole pipeline (designScheme, then carbon and cost)
+ * run for `samples` draws of the study's uncertain inputs, by inverse transform from a seeded
+ * xoshiro128** stream; per scheme P10/P50/P90, mean and standard errors of self-weight, carbon and
+ * cost per m² beside the deterministic value, the probability of being lowest in carbon and in
+ * cost among the schemes feasible in each sample, P(A beats B) for each pair, and Spearman rank
+ * correlations of each input with each output. The same study and seed give the same result, byte
+ * for byte.
+ *
+ * Speed. Inputs are split: those that change a design (brief loads, scheme options) are drawn
+ * `designSamples` times by Latin hypercube sampling (McKay, Beckman and Conover, Technometrics
+ * 21(2), 1979), and each scheme is designed once per distinct draw of the inputs that affect it;
+ * sample i uses design draw i mod designSamples with its own independent draw of the
+ * assessment-only inputs (factors, waste, transport, rates, on-costs). Carbon and cost are linear
+ * in the take-off, so each sample's tables are reduced to unit intensities once and applied to
+ * every design (linear-assessment.ts); samples at the study's own assessment values use
+ * assessDesign itself. Standard errors treat samples sharing a design draw as a cluster.
+ * @throws Error naming the input for invalid risk settings, or naming samples, designSamples or seed
+ * @throws RiskCancelledError when shouldStop returns true
+ */
+export function runRisk(study: Study, catalogue: Catalogue, options: RunRiskOptions = {}): RiskResult {
+  const samples = checkCount(options.samples ?? study.risk.samples, "samples", RISK_LIMITS.samples.min, RISK_LIMITS.samples.max);
+  const seed = checkCount(options.seed ?? study.seed, "seed", 0, 2 ** 31 - 1);
+  const designSamples = Math.min(samples, checkCount(options.designSamples ?? study.risk.designSamples, "designSamples", RISK_LIMITS.designSamples.min, RISK_LIMITS.designSamples.max));
+  const check = checkRiskInputs(study);
+  if (check.problems.length > 0) throw new Error(`invalid risk inputs: ${check.problems.map((p) => p.message).join("; ")}`);
+
+  const inputs = study.risk.inputs;
+  const distributions = inputs.map((i) => makeDistribution(i.distribution, i.low, i.mode, i.high));
+  const isDesign = inputs.map(affectsDesign);
+  const models: SchemeModel[] = SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
+
+  // Groups in order of first appearance; a group with any design-affecting input is drawn with the designs.
+  const groupKeys: string[] = [];
+  const groupOf = inputs.map((input) => {
+    const key = input.group ?? `#${input.id}`;
+    let g = groupKeys.indexOf(key);
+    if (g < 0) g = groupKeys.push(key) - 1;
+    return g;
+  });
+  const designGroup = groupKeys.map((_, g) => inputs.some((input, k) => groupOf[k] === g && isDesign[k]));
+
+  const rng = createPrng(seed);
+  // Latin hypercube for the design groups: one stratum of width 1/designSamples per draw, shuffled per group.
+  const poolU = groupKeys.map((_, g) => {
+    if (!designGroup[g]) return null;
+    const strata = Int32Array.from({ length: designSamples }, (_, j) => j);
+    for (let j = designSamples - 1; j > 0; j--) {
+      const r = Math.floor(rng.uniform() * (j + 1));
+      const t = strata[j] as number;
+      strata[j] = strata[r] as number;
+      strata[r] = t;
+    }
+    return Float64Array.from(strata, (s) => (s + rng.uniform()) / designSamples);
+  });
+
+  const deterministic = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, headline(r)]));
+
+  // Designs: once per scheme per distinct draw of the inputs that affect it.
+  const designTotal = models.length * designSamples;
+  const every = (total: number) => Math.max(1, Math.floor(total / 100));
+  const entries = models.map(() => [] as DesignEntry[]);
+  const entryOf = models.map(() => new Int32Array(designSamples));
+  let done = 0;
+  models.forEach((model, s) => {
+    const relevant = inputs.map((input, k) => (affectsScheme(input, model.id) ? k : -1)).filter((k) => k >= 0);
+    const paths = relevant.map((k) => (inputs[k] as UncertainInput).path);
+    const seen = new Map<string, number>();
+    for (let j = 0; j < designSamples; j++) {
+      const values = relevant.map((k) => (distributions[k] as ReturnType<typeof makeDistribution>).quantile((poolU[groupOf[k] as number] as Float64Array)[j] as number));
+      const key = values.join(",");
+      let index = seen.get(key);
+      if (index === undefined) {
+        const drawn = applyValues(study, paths, values);
+        const design = designScheme(model, drawn.brief, drawn.schemes[model.id]?.options, catalogue);
+        index = (entries[s] as DesignEntry[]).push({ design, quantities: designQuantities(design) }) - 1;
+        seen.set(key, index);
+      }
+      (entryOf[s] as Int32Array)[j] = index;
+      done += 1;
+      if (done % every(designTotal) === 0) {
+        if (options.shouldStop?.()) throw new RiskCancelledError();
+        options.onProgress?.({ phase: "designs", done, total: designTotal });
+      }
+    }
+  });
+
+  const materials = new Set<string>();
+  const items = new Set<string>();
+  for (const list of entries) {
+    for (const e of list) {
+      for (const [m] of e.quantities.massKgByMaterial) materials.add(m);
+      for (const [c] of e.quantities.quantityByItem) items.add(c);
+    }
+  }
+
+  // Samples.
+  const assessIndex = inputs.map((_, k) => k).filter((k) => !isDesign[k]);
+  const assessPaths = compilePaths(assessIndex.map((k) => (inputs[k] as UncertainInput).path));
+  const baseValues = assessIndex.map((k) => getIn(study, (inputs[k] as UncertainInput).path) as number);
+  const inputValues = inputs.map(() => new Float64Array(samples));
+  const outputs = models.map(() => RISK_METRICS.map(() => new Float64Array(samples)));
+  const clusters: Clusters = { of: new Int32Array(samples), count: designSamples };
+  const sampleU = new Float64Array(groupKeys.length);
+  const values = new Float64Array(assessIndex.length);
+  const shared = new Map<string, number>();
+  const shareKey = distributions.map((d, k) => `${groupOf[k] as number}|${d.shapeKey}`);
+  for (let i = 0; i < samples; i++) {
+    const j = i % designSamples;
+    clusters.of[i] = j;
+    for (let g = 0; g < groupKeys.length; g++) sampleU[g] = designGroup[g] ? ((poolU[g] as Float64Array)[j] as number) : rng.uniform();
+    // Inputs of one group with the same standardized shape share one quantile evaluation.
+    shared.clear();
+    for (let k = 0; k < inputs.length; k++) {
+      const d = distributions[k] as Distribution;
+      const key = shareKey[k] as string;
+      let z = shared.get(key);
+      if (z === undefined) {
+        z = d.standardQuantile(sampleU[groupOf[k] as number] as number);
+        shared.set(key, z);
+      }
+      (inputValues[k] as Float64Array)[i] = d.high === d.low ? d.low : d.low + (d.high - d.low) * z;
+    }
+    let atBase = true;
+    assessIndex.forEach((k, a) => {
+      values[a] = (inputValues[k] as Float64Array)[i] as number;
+      if (values[a] !== baseValues[a]) atBase = false;
+    });
+    const intensities = atBase ? null : assessmentIntensities(applyValues(study, assessPaths, values), materials, items);
+    models.forEach((_, s) => {
+      const entry = (entries[s] as DesignEntry[])[(entryOf[s] as Int32Array)[j] as number] as DesignEntry;
+      const [weight, carbon, cost] = outputs[s] as [Float64Array, Float64Array, Float64Array];
+      if (!entry.design.feasible) {
+        weight[i] = carbon[i] = cost[i] = Number.NaN;
+        return;
+      }
+      weight[i] = entry.design.selfWeightKgPerM2;
+      let metrics: { carbon: number; cost: number };
+      if (intensities === null) {
+        if (!entry.direct) {
+          const direct = assessDesign(entry.design, study);
+          entry.direct = { carbon: direct.carbon?.perM2UsableFloor.perM2?.counted ?? Number.NaN, cost: direct.cost?.perM2UsableFloor?.total ?? Number.NaN };
+        }
+        metrics = entry.direct;
+      } else {
+        const linear = linearAssessment(entry.quantities, intensities);
+        metrics = { carbon: linear.carbonPerM2Floor, cost: linear.costPerM2Floor };
+      }
+      carbon[i] = metrics.carbon;
+      cost[i] = metrics.cost;
+    });
+    if ((i + 1) % every(samples) === 0) {
+      if (options.shouldStop?.()) throw new RiskCancelledError();
+      options.onProgress?.({ phase: "samples", done: i + 1, total: samples });
+    }
+  }
+
+  // Summaries.
+  const carbonOutputs = outputs.map((o) => o[1] as Float64Array);
+  const costOutputs = outputs.map((o) => o[2] as Float64Array);
+  const lowestCarbon = lowestProbabilities(carbonOutputs, clusters);
+  const lowestCost = lowestProbabilities(costOutputs, clusters);
+  const ids = models.map((m) => m.id);
+  const varying = inputs.map((i) => i.low < i.high);
+  const inputRanks = inputValues.map((x, k) => (varying[k] ? ranks(x) : null));
+  const rankCorrelations: RankCorrelation[] = [];
+  models.forEach((model, s) => {
+    RISK_METRICS.forEach((metric, m) => {
+      // Self-weight depends only on design-affecting inputs; the others would show noise.
+      const usable = inputRanks.map((r, k) => (metric === "selfWeightKgPerM2" && !isDesign[k] ? null : r));
+      const rho = rankCorrelationsWith((outputs[s] as Float64Array[])[m] as Float64Array, inputValues, usable);
+      inputs.forEach((input, k) => {
+        if (usable[k]) rankCorrelations.push({ scheme: model.id, metric, inputId: input.id, rho: rho[k] ?? null });
+      });
+    });
+  });
+
+  const warnings = [...check.warnings];
+  const schemes: SchemeRisk[] = models.map((model, s) => {
+    const h = deterministic.get(model.id);
+    const feasibleSamples = (outputs[s] as Float64Array[])[0]?.reduce((n, x) => (Number.isFinite(x) ? n + 1 : n), 0) ?? 0;
+    const reasons = new Map<string, number>();
+    for (let j = 0; j < designSamples; j++) {
+      const e = (entries[s] as DesignEntry[])[(entryOf[s] as Int32Array)[j] as number] as DesignEntry;
+      if (!e.design.feasible) reasons.set(e.design.reason, (reasons.get(e.design.reason) ?? 0) + 1);
+    }
+    const commonReason = [...reasons].sort((a, b) => b[1] - a[1])[0]?.[0] ?? "";
+    if (feasibleSamples < samples) warnings.push(`${model.label}: infeasible in ${samples - feasibleSamples} of ${samples} samples${commonReason ? ` (${commonReason})` : ""}`);
+    const det: Record<RiskMetric, number | null> = {
+      selfWeightKgPerM2: h?.feasible ? h.self_weight_kg_per_m2 : null,
+      carbonKgCO2ePerM2Floor: h?.feasible ? h.carbon_kgco2e_per_m2_floor : null,
+      costPerM2Floor: h?.feasible ? h.cost_per_m2_floor : null,
+    };
+    const metrics = Object.fromEntries(RISK_METRICS.map((metric, m) => [metric, summariseMetric((outputs[s] as Float64Array[])[m] as Float64Array, clusters, det[metric])])) as Record<RiskMetric, SchemeRisk["metrics"][RiskMetric]>;
+    return {
+      id: model.id,
+      label: model.label,
+      pFeasible: feasibleSamples / samples,
+      commonReason,
+      metrics,
+      pLowestCarbon: lowestCarbon.p[s] as number,
+      pLowestCost: lowestCost.p[s] as number,
+      seLowestCarbon: lowestCarbon.se[s] as number,
+      seLowestCost: lowestCost.se[s] as number,
+    };
+  });
+
+  return {
+    samples,
+    seed,
+    designSamples,
+    designsPerScheme: Object.fromEntries(models.map((m, s) => [m.id, (entries[s] as DesignEntry[]).length])),
+    samplesWithFeasible: lowestCarbon.samplesWithAny,
+    schemes,
+    pairwise: [...pairwiseProbabilities(ids, carbonOutputs, "carbonKgCO2ePerM2Floor"), ...pairwiseProbabilities(ids, costOutputs, "costPerM2Floor")],
+    rankCorrelations,
+    designInputs: inputs.filter((_, k) => isDesign[k]).map((i) => i.id),
+    assessmentInputs: inputs.filter((_, k) => !isDesign[k]).map((i) => i.id),
+    estimateClass: CONCEPT_SCREENING,
+    coverage: RISK_COVERAGE,
+    currency: study.cost.onCosts.currency,
+    warnings,
+  };
+}
