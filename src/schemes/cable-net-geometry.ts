@@ -98,6 +98,21 @@ export function cableNetLayout(brief: Brief, masts: number, mastRingRatio: numbe
   };
 }
 
+/**
+ * Span of a circumferential cable at plan radius r between the radial cables that carry it: the
+ * cables of one mast fan from its head to points spread evenly over its sector at the edge (outer)
+ * or at the central ring (inner), so near the masts they are bunched and the widest gap is the one
+ * between neighbouring masts' fans: 2πr/masts less the fan's own width at r (never below the even
+ * spacing 2πr/(masts·cablesPerSide)).
+ */
+export function circumferentialSpanM(layout: CableNetLayout, rM: number): number {
+  const { masts, cablesPerSide: n, mastRadiusM: rm, centralRingRadiusM: rc } = layout;
+  const a = layout.cap.baseRadiusM;
+  const spread = rM >= rm ? ((2 * Math.PI * a) / masts) * ((rM - rm) / (a - rm)) : ((2 * Math.PI * rc) / masts) * ((rm - rM) / (rm - rc));
+  const gap = (2 * Math.PI * rM) / masts - ((n - 1) / n) * spread;
+  return Math.max((2 * Math.PI * rM) / (masts * n), gap);
+}
+
 /** Points of a parabola with sag f below the chord between two points. */
 function parabola(from: readonly [number, number], to: readonly [number, number], sagM: number, steps = 16): [number, number][] {
   return Array.from({ length: steps + 1 }, (_, i) => {

@@ -8,7 +8,7 @@ import { ringForceFromPullsN } from "../mechanics/ring-buckling";
 import { pickLightestStrand } from "../catalogue/pick-strand";
 import { pickLightestChs } from "../catalogue/pick-chs";
 import { chsFromDimensions, STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
-import { BACKSTAY_SLOPE_RAD, type CableNetLayout, type NetBay } from "./cable-net-geometry";
+import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./cable-net-geometry";
 import { SizingError } from "./cable-dome-sizing";
 import { GRAVITY_M_PER_S2, kPaOfMass } from "./tension-common";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "./compression-ring";
@@ -148,7 +148,7 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   const a = layout.cap.baseRadiusM;
   const worstP = Math.max(...cases.map(Math.abs));
   for (const [i, r] of layout.hoopRadiiM.entries()) {
-    const span = (2 * Math.PI * r) / lines;
+    const span = circumferentialSpanM(layout, r);
     const w = worstP * input.hangerSpacingM;
     const H = (w * span) / (8 * NET_SECONDARY_SAG_RATIO);
     strands("circumferential", `circumferential cable ${i + 1}`, 1, 2 * Math.PI * r, Math.hypot(H, (w * span) / 2));

@@ -3,6 +3,7 @@ import { cableNet } from "../../../src/schemes/cable-net";
 import { DEFAULT_BRIEF } from "../../../src/study/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
+import { cableNetLayout, circumferentialSpanM } from "../../../src/schemes/cable-net-geometry";
 
 const catalogue = defaultCatalogue();
 const design = (brief = DEFAULT_BRIEF, options = cableNet.defaults) => cableNet.design(brief, options, catalogue);
@@ -73,5 +74,17 @@ describe("cableNet.design", () => {
   it("draws masts, cables and fabric", () => {
     const roles = new Set(d.drawing.section.map((l) => l.role));
     for (const role of ["radial cable", "valley cable", "mast", "backstay", "fabric", "ring"]) expect(roles.has(role)).toBe(true);
+  });
+});
+
+describe("circumferentialSpanM", () => {
+  const layout = cableNetLayout(DEFAULT_BRIEF, 12, 0.6, 0.15, 8, 6);
+  it("at the mast ring the fans are bunched: the span is the gap between masts, 2πr/masts", () =>
+    expectRelClose(circumferentialSpanM(layout, layout.mastRadiusM), (2 * Math.PI * layout.mastRadiusM) / 12, 1e-12));
+  it("at the edge the fan is spread evenly: 2πa/(masts·cables per side)", () =>
+    expectRelClose(circumferentialSpanM(layout, layout.cap.baseRadiusM), (2 * Math.PI * layout.cap.baseRadiusM) / 48, 1e-12));
+  it("every suspension cable stays on or above the roof", () => {
+    expect(layout.outer.sagM).toBeGreaterThan(0);
+    expect(layout.inner.sagM).toBeGreaterThan(0);
   });
 });
