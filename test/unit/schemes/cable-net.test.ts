@@ -4,6 +4,7 @@ import { DEFAULT_BRIEF } from "../../../src/study/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
 import { cableNetLayout, circumferentialSpanM } from "../../../src/schemes/cable-net-geometry";
+import { capHeightAt } from "../../../src/mechanics/spherical-cap";
 
 const catalogue = defaultCatalogue();
 const design = (brief = DEFAULT_BRIEF, options = cableNet.defaults) => cableNet.design(brief, options, catalogue);
@@ -83,8 +84,17 @@ describe("circumferentialSpanM", () => {
     expectRelClose(circumferentialSpanM(layout, layout.mastRadiusM), (2 * Math.PI * layout.mastRadiusM) / 12, 1e-12));
   it("at the edge the fan is spread evenly: 2πa/(masts·cables per side)", () =>
     expectRelClose(circumferentialSpanM(layout, layout.cap.baseRadiusM), (2 * Math.PI * layout.cap.baseRadiusM) / 48, 1e-12));
-  it("every suspension cable stays on or above the roof", () => {
-    expect(layout.outer.sagM).toBeGreaterThan(0);
-    expect(layout.inner.sagM).toBeGreaterThan(0);
+  it("every suspension cable stays on or above the roof, and touches it", () => {
+    for (const bay of [layout.outer, layout.inner]) {
+      let closest = Number.POSITIVE_INFINITY;
+      for (let i = 1; i < 400; i++) {
+        const t = i / 400;
+        const cable = layout.mastHeadM + (bay.endHeightM - layout.mastHeadM) * t - 4 * bay.sagM * t * (1 - t);
+        const roof = capHeightAt(layout.cap, layout.mastRadiusM + (bay.endRadiusM - layout.mastRadiusM) * t);
+        closest = Math.min(closest, cable - roof);
+      }
+      expect(closest).toBeGreaterThan(-0.02); // sampled 4× finer than the layout's own search
+      expect(closest).toBeLessThan(0.05);
+    }
   });
 });
