@@ -190,7 +190,19 @@ function design(brief: Brief, opts: ConcreteShellOptions, _catalogue: Catalogue)
   ];
   return assembleDesign(concreteShell, brief, {
     summary,
-    members: [],
+    members: [
+      {
+        element: opts.ringTie === "prestress" ? "ring prestressing tendons" : "ring tie bars",
+        material: tieMaterial,
+        count: 1,
+        lengthM: ringLengthM,
+        section: `${(tieAreaM2 * 1e4).toFixed(0)} cm² in a ${Math.sqrt(ringAreaM2).toFixed(2)} m square ring`,
+        designForceN: ringTensionUlsN,
+        resistanceN: tieCapacityN,
+        utilisation: ringTensionUlsN / tieCapacityN,
+        governing: opts.ringTie === "prestress" ? "ULS f_p0.1k/γ_S or no decompression under SLS" : "ULS f_yd or crack control σ_s ≤ 240 MPa under SLS",
+      },
+    ],
     takeoff,
     checks,
     warnings: [`thickness set by ${s.governing}`, ...warnings],

@@ -82,7 +82,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue) {
   const cladding = findCladding(catalogue, opts.cladding);
   const steel = STEEL_GRADES[opts.steelGrade as SteelGrade];
   const frequency = geodesicFrequencyFor(R, opts.targetStrutLengthM);
-  const section = sectionLines(brief, cap.radiusM, depthM);
+  const section = sectionLines(brief, depthM);
   if (frequency > 400) return infeasibleDesign("geodesic-dome", brief, `the mesh would need frequency ${frequency} (over 400): increase the target strut length`, [], section);
   let mesh;
   try {
@@ -205,7 +205,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue) {
   });
 }
 
-function sectionLines(brief: Brief, radiusM: number, depthM: number): DrawingLine[] {
+function sectionLines(brief: Brief, depthM: number): DrawingLine[] {
   const cap = sphericalCap(brief.spanM, brief.riseM);
   const arc = (offset: number): [number, number][] =>
     Array.from({ length: 41 }, (_, i) => {
@@ -214,7 +214,6 @@ function sectionLines(brief: Brief, radiusM: number, depthM: number): DrawingLin
     });
   const lines: DrawingLine[] = [{ role: "lattice", points: arc(0) }];
   if (depthM > 0) lines.push({ role: "lattice", points: arc(depthM) });
-  void radiusM;
   for (const side of [-1, 1]) lines.push({ role: "support", points: [[side * cap.baseRadiusM, 0], [side * cap.baseRadiusM, brief.eavesHeightM]] });
   return lines;
 }
