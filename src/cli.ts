@@ -10,16 +10,19 @@ import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
 import { evaluateStudy, headline, type Headline } from "./pipeline";
 import { CAUTION } from "./notebook/pages";
+import { runRisk, RISK_LIMITS, type RiskResult } from "./risk";
 
 export const USAGE = `usage: npm run evaluate -- FILE [--json] [--span M] [--sweep FROM:TO:STEP] [--schemes a,b]
-                              [--factors FILE.csv] [--rates FILE.csv]
+                              [--factors FILE.csv] [--rates FILE.csv] [--risk N [--seed S]]
   FILE              a study file (.json)
   --json            machine-readable results
   --span M          evaluate at span M (m), keeping the rise-to-span ratio
   --sweep F:T:S     evaluate every span from F to T in steps of S (m) and print CSV
   --schemes a,b     only these schemes (${SCHEMES.map((s) => s.id).join(", ")})
   --factors FILE    replace the study's carbon factor table with this CSV for the run
-  --rates FILE      replace the study's rate table with this CSV for the run`;
+  --rates FILE      replace the study's rate table with this CSV for the run
+  --risk N          also run N Monte Carlo samples of the study's uncertain inputs (P10/P50/P90)
+  --seed S          seed for --risk (default: the study's seed)`;
 
 export interface CliResult {
   code: number;
@@ -37,6 +40,14 @@ interface Parsed {
   schemes?: SchemeId[];
   factors?: string;
   rates?: string;
+  risk?: number;
+  seed?: number;
+}
+
+function wholeNumber(text: string, what: string, min: number, max: number, unit: string): number {
+  const value = Number(text);
+  if (text.trim() === "" || !Number.isInteger(value) || value < min || value > max) throw new UsageError(`invalid ${what}: ${text} (expected a whole number${unit ? ` of ${unit}` : ""} from ${min} to ${max})`);
+  return value;
 }
 
 function spanIn(value: number, what: string): number {
@@ -75,11 +86,15 @@ function parseArgs(args: readonly string[]): Parsed | "help" {
       parsed.schemes = ids as SchemeId[];
     } else if (arg === "--factors") parsed.factors = next();
     else if (arg === "--rates") parsed.rates = next();
+    else if (arg === "--risk") parsed.risk = wholeNumber(next(), "--risk", RISK_LIMITS.samples.min, RISK_LIMITS.samples.max, "samples");
+    else if (arg === "--seed") parsed.seed = wholeNumber(next(), "--seed", 0, 2 ** 31 - 1, "");
     else if (arg.startsWith("-")) throw new UsageError(`unknown option: ${arg} (see --help)`);
     else if (parsed.file === undefined) parsed.file = arg;
     else throw new UsageError(`unexpected argument: ${arg} (only one study file)`);
   }
   if (parsed.file === undefined) throw new UsageError("missing study file (usage: npm run evaluate -- FILE [options])");
+  if (parsed.seed !== undefined && parsed.risk === undefined) throw new UsageError("--seed applies only with --risk N");
+  if (parsed.risk !== undefined && parsed.sweep) throw new UsageError("--risk cannot be combined with --sweep (run one span at a time)");
   return parsed as Parsed;
 }
 
@@ -136,6 +151,60 @@ function table(rows: readonly Headline[]): string {
   return [line(header), ...body.map(line)].join("\n");
 }
 
+/** The risk run for the CLI: the study at the evaluated brief, only the chosen schemes enabled. */
+function riskRun(study: Study, brief: Study["brief"], schemeIds: readonly SchemeId[] | undefined, samples: number, seed: number | undefined, catalogue: ReturnType<typeof defaultCatalogue>): RiskResult {
+  const schemes = schemeIds
+    ? (Object.fromEntries(Object.entries(study.schemes).map(([id, setting]) => [id, { ...setting, enabled: schemeIds.includes(id as SchemeId) }])) as Study["schemes"])
+    : study.schemes;
+  try {
+    return runRisk({ ...study, brief, schemes }, catalogue, { samples, ...(seed !== undefined ? { seed } : {}) });
+  } catch (error) {
+    throw new UsageError(oneLine(error instanceof Error ? error.message : String(error)));
+  }
+}
+
+function band(risk: RiskResult, id: string, metric: "carbonKgCO2ePerM2Floor" | "costPerM2Floor" | "selfWeightKgPerM2") {
+  const m = risk.schemes.find((s) => s.id === id)?.metrics[metric];
+  return m ? { p10: round(m.p10), p50: round(m.p50), p90: round(m.p90), mean: round(m.mean), se_mean: round(m.seMean) } : null;
+}
+
+function riskJson(risk: RiskResult, id: string) {
+  const s = risk.schemes.find((x) => x.id === id);
+  if (!s) return null;
+  return {
+    carbon_kgco2e_per_m2_floor: band(risk, id, "carbonKgCO2ePerM2Floor"),
+    cost_per_m2_floor: band(risk, id, "costPerM2Floor"),
+    self_weight_kg_per_m2: band(risk, id, "selfWeightKgPerM2"),
+    p_feasible: round(s.pFeasible),
+    p_lowest_carbon: round(s.pLowestCarbon),
+    p_lowest_cost: round(s.pLowestCost),
+  };
+}
+
+function riskMeta(risk: RiskResult) {
+  return {
+    samples: risk.samples,
+    seed: risk.seed,
+    design_samples: risk.designSamples,
+    estimate_class: risk.estimateClass.label,
+    coverage: risk.coverage,
+    warnings: risk.warnings,
+  };
+}
+
+function riskTable(risk: RiskResult): string {
+  const f = (x: number | undefined) => (x === undefined ? "–" : x.toFixed(0));
+  const header = ["scheme", "kgCO2e/m² P10", "P50", "P90", `cost/m² P10`, "P50", "P90", "P(lowest CO2e)", "P(cheapest)"];
+  const body = risk.schemes.map((s) => {
+    const c = s.metrics.carbonKgCO2ePerM2Floor;
+    const k = s.metrics.costPerM2Floor;
+    return [s.id, f(c?.p10), f(c?.p50), f(c?.p90), f(k?.p10), f(k?.p50), f(k?.p90), s.pLowestCarbon.toFixed(2), s.pLowestCost.toFixed(2)];
+  });
+  const widths = header.map((_, i) => Math.max(header[i]?.length ?? 0, ...body.map((r) => r[i]?.length ?? 0)));
+  const line = (cells: readonly string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(widths[i] ?? 0) : c.padStart(widths[i] ?? 0))).join("  ").trimEnd();
+  return [`Risk: ${risk.samples} samples, seed ${risk.seed}, ${risk.designSamples} design draws (${risk.currency}, ${risk.estimateClass.label})`, line(header), ...body.map(line), risk.coverage].join("\n");
+}
+
 /** Runs the command line; never throws. Exit status 2 for bad input with one line on stderr. */
 export function runCli(args: readonly string[], readText: (path: string) => string = (p) => readFileSync(p, "utf8")): CliResult {
   try {
@@ -158,11 +227,14 @@ export function runCli(args: readonly string[], readText: (path: string) => stri
     }
     const evaluation = evaluateStudy(study, catalogue, { ...(parsed.spanM !== undefined ? { spanM: parsed.spanM } : {}), ...(schemeIds ? { schemeIds } : {}) });
     const headlines = evaluation.results.map(headline);
+    const risk = parsed.risk === undefined ? null : riskRun(study, evaluation.brief, schemeIds, parsed.risk, parsed.seed, catalogue);
     if (parsed.json) {
-      const out = { span_m: evaluation.brief.spanM, caution: CAUTION, schemes: headlines };
+      const schemes = risk ? headlines.map((h) => ({ ...h, risk: riskJson(risk, h.id) })) : headlines;
+      const out = { span_m: evaluation.brief.spanM, caution: CAUTION, schemes, ...(risk ? { risk: riskMeta(risk) } : {}) };
       return { code: 0, stdout: `${JSON.stringify(out, null, 2)}\n`, stderr: "" };
     }
-    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(headlines)}\n\n${CAUTION}\n`, stderr: "" };
+    const riskText = risk ? `\n\n${riskTable(risk)}` : "";
+    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(headlines)}${riskText}\n\n${CAUTION}\n`, stderr: "" };
   } catch (error) {
     if (error instanceof UsageError) return { code: 2, stdout: "", stderr: `spanbook: ${error.message}\n` };
     return { code: 1, stdout: "", stderr: `spanbook: internal error: ${error instanceof Error ? error.message : String(error)}\n` };
