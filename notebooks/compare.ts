@@ -9,7 +9,9 @@ import {
   keyValues,
   chartFigure,
   computed,
+  signal,
   fmt,
+  type ReadonlySignal,
   studySignals,
   controlGroup,
   toggleControl,
@@ -126,6 +128,22 @@ reactiveCell(main, { id: "comparison-charts", title: "Option charts" }, () => {
   return grid;
 });
 
+/** A <details> block whose open state is a signal, so the cells inside compute only while it is open. */
+function lazyDetails(parent: HTMLElement, id: string, summaryText: string): { body: HTMLElement; open: ReadonlySignal<boolean> } {
+  const details = document.createElement("details");
+  details.id = id;
+  const summary = document.createElement("summary");
+  summary.textContent = summaryText;
+  const body = document.createElement("div");
+  details.append(summary, body);
+  parent.append(details);
+  const open = signal(false);
+  details.addEventListener("toggle", () => {
+    open.value = details.open;
+  });
+  return { body, open };
+}
+
 for (const s of schemes) {
   const id = s.model.id;
   const panel = document.createElement("div");
@@ -141,8 +159,9 @@ for (const s of schemes) {
   about.textContent = `${s.model.description} Method valid for spans of ${s.model.validSpanM.min}–${s.model.validSpanM.max} m.`;
   panel.append(heading, about);
   reactiveCell(panel, { id: `${id}-summary` }, () => (s.enabled.value ? schemeSummary(s.result.value) : "Switched off."));
-  reactiveCell(panel, { id: `${id}-drawing` }, () => {
-    if (!s.enabled.value) return null;
+  const detail = lazyDetails(panel, `${id}-details`, "Drawings, members, checks and take-off");
+  reactiveCell(detail.body, { id: `${id}-drawing` }, () => {
+    if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;
     const wrap = document.createElement("div");
     wrap.className = "grid charts";
@@ -155,13 +174,14 @@ for (const s of schemes) {
     if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, title: `${s.model.label}: plan`, caption: chartCaption(store.study.value) }), `${id}-plan`));
     return wrap;
   });
-  reactiveCell(panel, { id: `${id}-tables` }, () => {
-    if (!s.enabled.value) return null;
+  reactiveCell(detail.body, { id: `${id}-tables` }, () => {
+    if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;
     const wrap = document.createElement("div");
     wrap.style.overflowX = "auto";
     wrap.append(memberTable(design), checkTable(design), takeoffTable(design));
     return wrap;
   });
-  staticCell(panel, { id: `${id}-options` }, schemeOptionControls(store, s.model));
+  const options = lazyDetails(panel, `${id}-options-panel`, "Options");
+  staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model));
 }

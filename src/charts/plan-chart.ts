@@ -1,6 +1,7 @@
 import * as Plot from "@observablehq/plot";
 import type { Brief } from "../study/brief";
 import type { DrawingLine } from "../schemes/types";
+import { joinByRole } from "./join-lines";
 
 export interface PlanChartInput {
   brief: Brief;
@@ -14,7 +15,7 @@ export interface PlanChartInput {
 export function planChartOptions(input: PlanChartInput): Plot.PlotOptions {
   const a = input.brief.spanM / 2;
   const circle = Array.from({ length: 121 }, (_, i) => ({ x: a * Math.cos((2 * Math.PI * i) / 120), y: a * Math.sin((2 * Math.PI * i) / 120) }));
-  const segments = input.lines.flatMap((line, index) => line.points.map(([x, y]) => ({ x, y, role: line.role, index })));
+  const segments = joinByRole(input.lines);
   const size = input.width ?? 460;
   return {
     title: input.title,
@@ -24,6 +25,6 @@ export function planChartOptions(input: PlanChartInput): Plot.PlotOptions {
     x: { label: "x (m)", domain: [-a * 1.05, a * 1.05] },
     y: { label: "y (m)", domain: [-a * 1.05, a * 1.05] },
     color: { legend: true },
-    marks: [Plot.line(circle, { x: "x", y: "y", stroke: "#999" }), Plot.line(segments, { x: "x", y: "y", z: "index", stroke: "role", strokeWidth: 0.6 })],
+    marks: [Plot.line(circle, { x: "x", y: "y", stroke: "#999" }), Plot.line(segments, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 0.6 })],
   };
 }

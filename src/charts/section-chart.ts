@@ -2,6 +2,7 @@ import * as Plot from "@observablehq/plot";
 import type { Brief } from "../study/brief";
 import type { DrawingLine } from "../schemes/types";
 import { roofProfile, envelope } from "../takeoff/envelope";
+import { joinByRole } from "./join-lines";
 
 export interface SectionChartInput {
   brief: Brief;
@@ -27,7 +28,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
     { x: a, y: 0, side: "right" },
     { x: a, y: brief.eavesHeightM, side: "right" },
   ];
-  const members = (input.lines ?? []).flatMap((line, index) => line.points.map(([x, y]) => ({ x, y, role: line.role, index })));
+  const members = joinByRole(input.lines ?? []);
   const top = brief.eavesHeightM + brief.riseM;
   return {
     title: input.title,
@@ -45,7 +46,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
       Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => `usable floor ⌀ ${(2 * env.usableRadiusM).toFixed(0)} m at ≥ ${brief.minClearHeightM} m clear`, dy: -6, fill: "#3a7d32" }),
       Plot.line(walls, { x: "x", y: "y", z: "side", stroke: "#555", strokeWidth: 2 }),
       Plot.line(roof, { x: "x", y: "y", stroke: "#1b1f24", strokeWidth: 2 }),
-      ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "index", stroke: "role", strokeWidth: 1.2 })] : []),
+      ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 1.2 })] : []),
     ],
   };
 }

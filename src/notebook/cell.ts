@@ -39,6 +39,7 @@ export function reactiveCell(parent: HTMLElement, options: CellOptions, render: 
   parent.append(element);
 
   const dispose = effect(() => {
+    const started = performance.now();
     let content: CellContent;
     try {
       content = render();
@@ -49,6 +50,7 @@ export function reactiveCell(parent: HTMLElement, options: CellOptions, render: 
     }
     body.replaceChildren(...(content === null || content === undefined ? [] : [typeof content === "string" ? textNode(content) : content]));
     element.dataset.renders = String(Number(element.dataset.renders) + 1);
+    element.dataset.ms = (performance.now() - started).toFixed(1);
   });
   return { element, dispose };
 }

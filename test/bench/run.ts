@@ -1,0 +1,163 @@
+// `npm run bench`: prints timings and sizes. Nothing here is asserted; figures go in the issue notes.
+//   npm run bench               everything
+//   npm run bench -- designs    only the design() timings (no build, no browser)
+import { execFileSync } from "node:child_process";
+import { readFileSync, readdirSync, existsSync, statSync } from "node:fs";
+import { gzipSync } from "node:zlib";
+import { join } from "node:path";
+import { preview } from "vite";
+import { chromium, type Page } from "playwright-core";
+import { defaultStudy } from "../../src/study";
+import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
+import { SCHEMES } from "../../src/schemes";
+import { designScheme, assessDesign, briefAtSpan } from "../../src/pipeline";
+import { CHROMIUM_ARGS } from "../browser/browser";
+
+const only = process.argv[2];
+
+function stats(samples: number[]): { median: number; p95: number; max: number } {
+  const sorted = [...samples].sort((a, b) => a - b);
+  const at = (q: number) => sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1))] ?? Number.NaN;
+  return { median: at(0.5), p95: at(0.95), max: sorted[sorted.length - 1] ?? Number.NaN };
+}
+const ms = (x: number) => `${x.toFixed(2)} ms`;
+
+function benchDesigns(): void {
+  console.log("\n## design() per scheme (median of repeated calls, node)");
+  const study = defaultStudy();
+  const catalogue = defaultCatalogue();
+  for (const model of SCHEMES) {
+    for (const spanM of [60, 160, 300]) {
+      const brief = briefAtSpan(study.brief, spanM);
+      const times: number[] = [];
+      let design = designScheme(model, brief, undefined, catalogue);
+      const deadline = performance.now() + 400;
+      while (performance.now() < deadline || times.length < 5) {
+        const t = performance.now();
+        design = designScheme(model, brief, undefined, catalogue);
+        times.push(performance.now() - t);
+      }
+      const assess: number[] = [];
+      for (let i = 0; i < 30; i++) {
+        const t = performance.now();
+        assessDesign(design, study);
+        assess.push(performance.now() - t);
+      }
+      console.log(
+        `${model.id.padEnd(15)} ${String(spanM).padStart(3)} m  design median ${ms(stats(times).median)} (n=${times.length})  carbon+cost ${ms(stats(assess).median)}  iterations ${design.iterations}  ${design.feasible ? "feasible" : `infeasible: ${design.reason}`}  ${design.selfWeightKgPerM2.toFixed(1)} kg/m²`,
+      );
+    }
+  }
+}
+
+function benchBuild(): void {
+  console.log("\n## build");
+  const t = performance.now();
+  execFileSync("node_modules/.bin/vite", ["build", "--logLevel", "error"], { stdio: "inherit" });
+  console.log(`vite build: ${(performance.now() - t).toFixed(0)} ms`);
+  console.log("\n## JavaScript shipped per page (gzip, entry and its imported chunks; workers apart)");
+  for (const file of readdirSync("dist").filter((f) => f.endsWith(".html"))) {
+    const html = readFileSync(join("dist", file), "utf8");
+    const assets = [...html.matchAll(/(?:src|href)="\.\/(assets\/[^"]+\.js)"/g)].map((m) => m[1] ?? "");
+    const gzip = assets.reduce((sum, a) => sum + gzipSync(readFileSync(join("dist", a))).length, 0);
+    console.log(`${file.padEnd(18)} ${(gzip / 1024).toFixed(1)} kB gzip in ${assets.length} files`);
+  }
+  for (const worker of readdirSync("dist/assets").filter((f) => /worker/i.test(f))) {
+    console.log(`worker ${worker}: ${(gzipSync(readFileSync(join("dist/assets", worker))).length / 1024).toFixed(1)} kB gzip`);
+  }
+}
+
+/** Dispatches an input event on a control and returns the time to the synchronous re-render and to the next frame. */
+async function timeInput(page: Page, selector: string, value: string): Promise<{ syncMs: number; frameMs: number }> {
+  return page.evaluate(
+    ([sel, v]) =>
+      new Promise<{ syncMs: number; frameMs: number }>((resolve) => {
+        const input = document.querySelector<HTMLInputElement>(sel);
+        if (!input) throw new Error(`no ${sel}`);
+        const t0 = performance.now();
+        input.value = v;
+        input.dispatchEvent(new Event("input", { bubbles: true }));
+        const syncMs = performance.now() - t0;
+        requestAnimationFrame(() => requestAnimationFrame(() => resolve({ syncMs, frameMs: performance.now() - t0 })));
+      }),
+    [selector, value] as const,
+  );
+}
+
+async function benchBrowser(): Promise<void> {
+  if (!existsSync("dist/compare.html")) throw new Error("run the build first");
+  const server = await preview({ preview: { host: "127.0.0.1", port: 4191, strictPort: true }, logLevel: "silent" });
+  const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: CHROMIUM_ARGS });
+  const base = "http://127.0.0.1:4191";
+  try {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await page.goto(`${base}/compare.html`);
+    await page.waitForSelector("#cell-section svg");
+    console.log("\n## compare page: span change → every dependent cell re-rendered (50 changes, headless Chromium)");
+    const sync: number[] = [];
+    const frame: number[] = [];
+    for (let i = 0; i < 50; i++) {
+      const r = await timeInput(page, "#spanM", String(120 + (i % 10) * 8));
+      sync.push(r.syncMs);
+      frame.push(r.frameMs);
+    }
+    const s = stats(sync);
+    const f = stats(frame);
+    console.log(`synchronous re-render (all schemes redesigned, tables and charts redrawn): median ${ms(s.median)}, p95 ${ms(s.p95)}`);
+    console.log(`to the second animation frame after the change: median ${ms(f.median)}, p95 ${ms(f.p95)}`);
+
+    console.log("\n## span study: range change → recomputed in the worker and redrawn");
+    const span = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await span.goto(`${base}/span-study.html`);
+    await span.waitForSelector("#cell-span-charts svg", { timeout: 120_000 });
+    await span.evaluate(() => {
+      const w = window as unknown as { __long: number[] };
+      w.__long = [];
+      new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__long.push(e.duration))).observe({ type: "longtask", buffered: false });
+    });
+    const times: number[] = [];
+    const workerMs: number[] = [];
+    for (let i = 0; i < 8; i++) {
+      const renders = Number(await span.locator("#cell-span-charts").getAttribute("data-renders"));
+      const t0 = Date.now();
+      await span.fill("#toM", String(400 - (i % 2) * 10));
+      await span.waitForFunction((n) => Number(document.querySelector("#cell-span-charts")?.getAttribute("data-renders")) > n && /computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), renders, { timeout: 120_000 });
+      times.push(Date.now() - t0);
+      workerMs.push(Number(/in ([\d,]+) ms/.exec((await span.locator("#cell-status").innerText()) ?? "")?.[1]?.replace(/,/g, "") ?? Number.NaN));
+    }
+    const longest = await span.evaluate(() => Math.max(0, ...(window as unknown as { __long: number[] }).__long));
+    const st = stats(times);
+    console.log(`change → redrawn: median ${st.median} ms, p95 ${st.p95} ms (worker compute median ${stats(workerMs).median} ms)`);
+    console.log(`longest main-thread task meanwhile: ${longest.toFixed(0)} ms`);
+
+    console.log("\n## client export");
+    const context = await browser.newContext({ acceptDownloads: true });
+    const client = await context.newPage();
+    await client.goto(`${base}/client.html`);
+    await client.waitForSelector("#cell-charts svg");
+    const [download] = await Promise.all([client.waitForEvent("download"), client.click("#export-client")]);
+    const path = await download.path();
+    console.log(`exported client file: ${(statSync(path).size / 1024).toFixed(1)} kB (${(gzipSync(readFileSync(path)).length / 1024).toFixed(1)} kB gzip)`);
+
+    const carbon = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await carbon.goto(`${base}/carbon.html`);
+    const factor = "#factors-steel-hot-finished-hollow-a1a3KgCO2ePerKg";
+    if ((await carbon.locator(factor).count()) > 0) {
+      console.log("\n## carbon page: factor edit → every chart updated (30 edits)");
+      const edits: number[] = [];
+      for (let i = 0; i < 30; i++) edits.push((await timeInput(carbon, factor, String(1.5 + (i % 5) * 0.1))).frameMs);
+      const e = stats(edits);
+      console.log(`to the second animation frame: median ${ms(e.median)}, p95 ${ms(e.p95)}`);
+    }
+  } finally {
+    await browser.close();
+    server.httpServer.close();
+  }
+}
+
+if (!only || only === "designs") benchDesigns();
+if (!only || only === "build") benchBuild();
+if (!only || only === "browser") await benchBrowser();
+// The risk benchmark is its own script (test/bench/risk.ts) when present.
+const riskBench = "./risk.ts";
+if (existsSync("test/bench/risk.ts") && (!only || only === "risk")) await import(riskBench);
