@@ -53,6 +53,9 @@ const ICOSA_FACES: [number, number, number][] = (() => {
   return f;
 })();
 
+/** Radius of the sphere inscribed in the unit icosahedron (touching its face centres), ≈ 0.7947. */
+const INSCRIBED_RADIUS = Math.sqrt((5 + 2 * Math.sqrt(5)) / 15);
+
 /** Angular radius of an icosahedron face about its centroid, rad (≈ 37.38°). */
 const FACE_ANGULAR_RADIUS = (() => {
   const [a, b, c] = [ICOSA_VERTICES[0]!, ICOSA_VERTICES[1]!, ICOSA_VERTICES[2]!];
@@ -119,13 +122,19 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
         const x = A[0] + (B[0] - A[0]) * s + (C[0] - A[0]) * t;
         const y = A[1] + (B[1] - A[1]) * s + (C[1] - A[1]) * t;
         const z = A[2] + (B[2] - A[2]) * s + (C[2] - A[2]) * t;
-        const n = Math.sqrt(x * x + y * y + z * z);
         const k = rowStart[i]! + j;
+        used[k] = 0;
+        // A flat-face point lies at least the inscribed radius from the centre, so z/|p| ≤ z/r_in:
+        // points that cannot reach the cut are dropped before the square root.
+        if (zCut > 0 && z < INSCRIBED_RADIUS * (zCut - tolerance)) {
+          keep[k] = 0;
+          continue;
+        }
+        const n = Math.sqrt(x * x + y * y + z * z);
         lx[k] = x / n;
         ly[k] = y / n;
         lz[k] = z / n;
         keep[k] = z / n >= zCut - tolerance ? 1 : 0;
-        used[k] = 0;
       }
     }
     // Sub-triangles with all three corners kept: "up" (i,j)(i+1,j)(i,j+1) and "down" (i+1,j)(i+1,j+1)(i,j+1).
