@@ -1,5 +1,5 @@
 import type { TakeoffRow } from "../takeoff/takeoff-row";
-import { validateWith } from "../study/schema-helpers";
+import { validateOnce } from "../study/schema-helpers";
 import { FactorTableSchema, type FactorRow } from "./factor-table";
 import { CarbonSettingsSchema, type AreaBasis, type CarbonSettings } from "./carbon-settings";
 import { areaForBasis, checkAreas, type AssessmentAreas } from "./assessment-areas";
@@ -101,9 +101,9 @@ export function assessCarbon(
   settings: CarbonSettings,
   areas: AssessmentAreas,
 ): CarbonAssessment {
-  const checkedFactors = validateWith(FactorTableSchema, factors);
+  const checkedFactors = validateOnce(FactorTableSchema, factors);
   if (!checkedFactors.ok) fail("carbon factors", checkedFactors.problems.map((p) => ({ ...p, path: `factors${p.path === "(study)" ? "" : p.path}` })));
-  const checkedSettings = validateWith(CarbonSettingsSchema, settings);
+  const checkedSettings = validateOnce(CarbonSettingsSchema, settings);
   if (!checkedSettings.ok) fail("carbon settings", checkedSettings.problems);
   checkAreas(areas);
 

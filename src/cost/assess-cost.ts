@@ -1,5 +1,5 @@
 import type { TakeoffRow } from "../takeoff/takeoff-row";
-import { validateWith } from "../study/schema-helpers";
+import { validateOnce } from "../study/schema-helpers";
 import { checkAreas, type AssessmentAreas } from "../carbon/assessment-areas";
 import { RateTableSchema, type RateRow } from "./rate-table";
 import type { OnCosts } from "./on-costs";
@@ -60,7 +60,7 @@ export type CostAssessment = {
  * the field for invalid rates, on-costs, areas or quantities
  */
 export function assessCost(rows: readonly TakeoffRow[], rates: readonly RateRow[], onCosts: OnCosts, areas: AssessmentAreas): CostAssessment {
-  const checked = validateWith(RateTableSchema, rates);
+  const checked = validateOnce(RateTableSchema, rates);
   if (!checked.ok) throw new Error(`invalid rates: ${checked.problems.map((p) => `rates${p.path === "(study)" ? "" : p.path}: ${p.message}`).join("; ")}`);
   checkAreas(areas);
   const byItem = new Map(rates.map((r) => [r.item, r]));

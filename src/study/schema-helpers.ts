@@ -79,3 +79,24 @@ export function validateWith<S extends v.GenericSchema>(
   const result = v.safeParse(schema, input);
   return result.success ? { ok: true, value: result.output } : { ok: false, problems: formatIssues(result.issues) };
 }
+
+const validated = new WeakMap<v.GenericSchema, WeakMap<object, ReturnType<typeof validateWith>>>();
+
+/**
+ * validateWith, remembered per schema and object: the study's tables are never mutated (every
+ * edit makes a new object), so a table checked once need not be checked again on each of the
+ * thousands of assessments a span study or a risk run makes. Non-objects are always checked.
+ */
+export function validateOnce<S extends v.GenericSchema>(schema: S, input: unknown): ReturnType<typeof validateWith<S>> {
+  if (typeof input !== "object" || input === null) return validateWith(schema, input);
+  let bySchema = validated.get(schema);
+  if (!bySchema) {
+    bySchema = new WeakMap();
+    validated.set(schema, bySchema);
+  }
+  const known = bySchema.get(input);
+  if (known) return known as ReturnType<typeof validateWith<S>>;
+  const result = validateWith(schema, input);
+  bySchema.set(input, result);
+  return result;
+}

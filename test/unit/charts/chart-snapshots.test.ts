@@ -1,19 +1,18 @@
-// Deterministic snapshots of chart output: fixed study, pinned number format (d3's en-US), no randomness.
+// Deterministic snapshots of chart output: fixed inputs (test/helpers/fixtures.ts), pinned number
+// format (d3's en-US), no randomness.
 import { describe, it, expect } from "vitest";
 import { Window } from "happy-dom";
 import * as Plot from "@observablehq/plot";
 import { defaultStudy } from "../../../src/study";
-import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
-import { evaluateStudy } from "../../../src/pipeline";
 import { sectionChartOptions, massByMaterialChart, carbonVsCostChart, spanMetricChart, chartCaption } from "../../../src/charts";
-import { runSpanStudy } from "../../../src/comparison";
+import { fixtureResults, fixtureSpanPoints } from "../../helpers/fixtures";
 
 const window = new Window();
 const document = window.document as unknown as Document;
 const render = (options: Plot.PlotOptions) => (Plot.plot({ ...options, document }) as unknown as HTMLElement).outerHTML;
 
 const study = defaultStudy();
-const results = evaluateStudy(study, defaultCatalogue()).results;
+const results = fixtureResults();
 const caption = chartCaption(study);
 
 describe("chart specifications (snapshots)", () => {
@@ -31,7 +30,7 @@ describe("chart specifications (snapshots)", () => {
     expect(html).toMatchSnapshot();
   });
   it("span study lines carry labelled axes", () => {
-    const points = runSpanStudy(study, defaultCatalogue(), { fromM: 60, toM: 120, stepM: 30 });
+    const points = fixtureSpanPoints();
     const html = render(spanMetricChart(points, "selfWeightKgPerM2", "Self-weight (kg/m² of plan)", { title: "Self-weight against span", caption }));
     expect(html).toContain("Clear span (m)");
     expect(html).toContain("Self-weight (kg/m² of plan)");
