@@ -1,6 +1,8 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { trussRoof } from "../../src/schemes/truss-roof";
+import { geodesicDome } from "../../src/schemes/geodesic-dome";
+import type { OptionSpec, OptionValue, SchemeModel, SchemeOptions } from "../../src/schemes/types";
 import { concreteShell } from "../../src/schemes/concrete-shell";
 import { geodesicCap } from "../../src/mechanics";
 import { DEFAULT_BRIEF } from "../../src/study/brief";
@@ -67,4 +69,28 @@ describe("geodesicCap topology", () => {
       { numRuns: 300 },
     );
   });
+});
+
+describe("compression and bending schemes never throw for valid input", () => {
+  // Any option inside its spec, any span in the brief's range: a Design comes back (feasible or
+  // not, with a reason when not), its take-off adds up and no number is NaN.
+  const optionArb = (spec: OptionSpec): fc.Arbitrary<OptionValue> => {
+    if (spec.kind === "number") return spec.integer ? fc.integer({ min: spec.min, max: spec.max }) : fc.double({ min: spec.min, max: spec.max, noNaN: true });
+    if (spec.kind === "select") return fc.constantFrom(...spec.choices.map((c) => c.value));
+    return fc.boolean();
+  };
+  for (const model of [geodesicDome, trussRoof, concreteShell] as unknown as SchemeModel[]) {
+    it(`${model.id}`, () => {
+      const options = fc.record(Object.fromEntries(model.options.map((s) => [s.key, optionArb(s)])) as Record<string, fc.Arbitrary<OptionValue>>);
+      fc.assert(
+        fc.property(options, fc.integer({ min: 30, max: 320 }), fc.double({ min: 0.05, max: 0.5, noNaN: true }), (opts, spanM, riseRatio) => {
+          const d = model.design({ ...DEFAULT_BRIEF, spanM, riseM: riseRatio * spanM }, opts as SchemeOptions, catalogue);
+          expect(d.feasible || d.reason.length > 0).toBe(true);
+          expect(Number.isFinite(d.totalMassKg)).toBe(true);
+          if (d.feasible) expect(d.totalMassKg).toBeGreaterThan(0);
+        }),
+        { numRuns: 25 },
+      );
+    });
+  }
 });
