@@ -1,6 +1,8 @@
 import { describe, it, expect } from "vitest";
 import { readFileSync } from "node:fs";
 import { runCli } from "../../../src/cli";
+import { SCHEMES } from "../../../src/schemes";
+import { defaultFactorRows, factorRowsToCsv } from "../../../src/carbon";
 
 const files: Record<string, string> = {
   "demo.json": readFileSync("data/demo-study.json", "utf8"),
@@ -39,12 +41,26 @@ describe("runCli bad input: exit 2, one line on stderr naming the field", () => 
 });
 
 describe("runCli results", () => {
-  it("--json gives the span and one entry per enabled scheme", () => {
+  it("--json gives the span and one entry per enabled scheme with the documented keys", () => {
     const result = run("demo.json", "--json");
     expect(result.code).toBe(0);
-    const out = JSON.parse(result.stdout) as { span_m: number; schemes: { id: string }[] };
+    const out = JSON.parse(result.stdout) as { span_m: number; schemes: Record<string, unknown>[] };
     expect(out.span_m).toBe(160);
-    expect(Array.isArray(out.schemes)).toBe(true);
+    expect(out.schemes.map((s) => s.id)).toEqual(SCHEMES.map((m) => m.id));
+    const keys = ["id", "label", "feasible", "reason", "self_weight_kg_per_m2", "steel_t", "cable_t", "fabric_m2", "fabric_t", "concrete_m3", "rebar_t", "total_mass_t", "enclosed_air_t", "usable_floor_m2", "governing", "warnings"];
+    const carbonCost = ["carbon_a1a3_kgco2e", "carbon_a1a5_kgco2e", "carbon_total_kgco2e", "carbon_kgco2e_per_m2_floor", "module_d_kgco2e", "cost_total", "cost_per_m2_floor", "currency"];
+    for (const scheme of out.schemes) for (const key of [...keys, ...carbonCost]) expect(scheme).toHaveProperty(key);
+  });
+  it("--schemes picks schemes", () => {
+    const out = JSON.parse(run("demo.json", "--json", "--schemes", "truss-roof,cable-net").stdout) as { schemes: { id: string }[] };
+    expect(out.schemes.map((s) => s.id).sort()).toEqual(["cable-net", "truss-roof"]);
+  });
+  it("--factors replaces the factor table for the run: doubling every A1–A3 factor doubles A1–A3", () => {
+    const base = JSON.parse(run("demo.json", "--json").stdout) as { schemes: { carbon_a1a3_kgco2e: number }[] };
+    const rows = defaultFactorRows().map((r) => ({ ...r, a1a3KgCO2ePerKg: 2 * r.a1a3KgCO2ePerKg }));
+    files["doubled.csv"] = factorRowsToCsv(rows);
+    const doubled = JSON.parse(run("demo.json", "--json", "--factors", "doubled.csv").stdout) as { schemes: { carbon_a1a3_kgco2e: number }[] };
+    doubled.schemes.forEach((s, i) => expect(s.carbon_a1a3_kgco2e).toBeCloseTo(2 * (base.schemes[i]?.carbon_a1a3_kgco2e ?? Number.NaN), 6));
   });
   it("--span overrides the span", () => {
     expect((JSON.parse(run("demo.json", "--json", "--span", "120").stdout) as { span_m: number }).span_m).toBe(120);
@@ -54,6 +70,7 @@ describe("runCli results", () => {
     expect(result.code).toBe(0);
     const lines = result.stdout.trim().split("\n");
     expect(lines[0]).toMatch(/^span_m,id,feasible/);
+    expect(lines).toHaveLength(1 + 3 * SCHEMES.length);
   });
   it("prints the caution with the table", () => {
     expect(run("demo.json").stdout).toMatch(/Feasibility-stage/);
