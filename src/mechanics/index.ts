@@ -54,3 +54,6 @@ export { zoellyCoefficient, zoellyPressurePa, continuumShellPressurePa } from ".
 export { threeWayGridStiffness, doubleLayerGridStiffness, threeWayGridBarForces, type GridStiffness, type GridBarForces } from "./three-way-grid";
 export { geodesicCap, strutLengths, geodesicFrequencyFor, MEAN_CHORD_FACTOR, type GeodesicCap, type StrutLengths, type Vec3 } from "./geodesic";
 export { simplySupportedUdl, type BeamResponse } from "./beam";
+
+// units
+export { GRAVITY_M_PER_S2, kPaOfMass, kPaFromKgPerM2 } from "./gravity";

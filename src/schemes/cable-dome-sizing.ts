@@ -8,7 +8,7 @@ import { pickLightestStrand, type StrandChoice } from "../catalogue/pick-strand"
 import { pickLightestChs, type ChsChoice } from "../catalogue/pick-chs";
 import { STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
 import { cableDomeNodalLoads, type CableDomeLayout } from "./cable-dome-geometry";
-import { kPaOfMass } from "./tension-common";
+import { kPaOfMass } from "../mechanics/gravity";
 
 /** A design step that cannot be completed (no section is strong enough, geometry cannot be prestressed). */
 export class SizingError extends Error {

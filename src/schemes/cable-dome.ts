@@ -9,7 +9,8 @@ import { iterateSelfWeight, ConvergenceError } from "./converge";
 import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeUndersideM } from "./cable-dome-geometry";
 import { sizeCableDome, SizingError, type DomeSizing } from "./cable-dome-sizing";
 import { designCompressionRing, PLAIN_CONCRETE_DENSITY_KG_PER_M3, type RingMaterial } from "./compression-ring";
-import { FABRIC_CHOICES, fabricCostItem, findFabric, validateOptions } from "./tension-common";
+import { FABRIC_CHOICES, fabricCostItem, findFabric } from "./tension-common";
+import { checkSchemeOptions } from "./check-options";
 
 export type CableDomeOptions = {
   /** Radial trusses N; 0 = automatic (even count with ridges ≤ 12 m apart at the perimeter, closer where the fabric needs it, at least 12). */
@@ -75,7 +76,7 @@ const validSpanM = { min: 40, max: 250 };
 const identity = { id: "cable-dome" as const, label: "Cable dome", validSpanM };
 
 function design(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue): Design {
-  validateOptions(options, opts);
+  checkSchemeOptions(options, opts);
   if (opts.hoops > 0) return designWith(brief, opts, catalogue, opts.hoops);
   // Automatic hoops: one per 27.5 m of radius, fewer where the outer members cannot be made (the
   // force grows by a factor at each hoop outwards).

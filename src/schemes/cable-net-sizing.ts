@@ -10,7 +10,7 @@ import { pickLightestChs } from "../catalogue/pick-chs";
 import { chsFromDimensions, STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
 import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./cable-net-geometry";
 import { SizingError } from "./cable-dome-sizing";
-import { GRAVITY_M_PER_S2, kPaOfMass } from "./tension-common";
+import { GRAVITY_M_PER_S2, kPaOfMass } from "../mechanics/gravity";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "./compression-ring";
 
 export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring";

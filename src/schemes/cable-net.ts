@@ -11,7 +11,8 @@ import { cableNetLayout, cableNetPlan, cableNetSection } from "./cable-net-geome
 import { sizeCableNet, type NetSizing } from "./cable-net-sizing";
 import { SizingError } from "./cable-dome-sizing";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "./compression-ring";
-import { FABRIC_CHOICES, fabricCostItem, findFabric, validateOptions } from "./tension-common";
+import { FABRIC_CHOICES, fabricCostItem, findFabric } from "./tension-common";
+import { checkSchemeOptions } from "./check-options";
 
 export type CableNetOptions = {
   /** Masts on the mast ring. */
@@ -77,7 +78,7 @@ const validSpanM = { min: 60, max: 400 };
 const identity = { id: "cable-net" as const, label: "Mast-supported cable net", validSpanM };
 
 function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Design {
-  validateOptions(options, opts);
+  checkSchemeOptions(options, opts);
   const fabric = findFabric(catalogue, opts.fabric);
   const layout = cableNetLayout(brief, opts.masts, opts.mastRingRatio, opts.mastHeightRatio, opts.radialCablesPerMast, opts.hangerSpacingM);
   const section = cableNetSection(layout, brief.eavesHeightM);

@@ -4,37 +4,6 @@ import type { CostItemId } from "../takeoff/takeoff-row";
 import type { BucklingCurve } from "../mechanics/flexural-buckling";
 import { chsResistance, type ChsChoice } from "../catalogue/pick-chs";
 import { ulsGravity } from "../loads/combinations";
-import type { OptionSpec, SchemeOptions } from "./types";
-
-/** Standard acceleration of gravity, m/s² (ISO 80000-3 conventional value). */
-export const G_M_PER_S2 = 9.80665;
-
-/** Pressure of a mass per unit area, kPa (kg/m² × g / 1000). */
-export function kPaFromKgPerM2(massKgPerM2: number): number {
-  return (massKgPerM2 * G_M_PER_S2) / 1000;
-}
-
-/**
- * Checks every option against its spec before any work: numbers finite and in range (whole where
- * asked), selects one of their choices, toggles boolean.
- * @throws RangeError naming the option, the value and what is allowed
- */
-export function checkSchemeOptions(specs: readonly OptionSpec[], options: SchemeOptions): void {
-  for (const spec of specs) {
-    const value = options[spec.key];
-    if (spec.kind === "number") {
-      if (typeof value !== "number" || !(value >= spec.min && value <= spec.max) || (spec.integer === true && !Number.isInteger(value))) {
-        throw new RangeError(`invalid ${spec.key}: ${String(value)}${spec.unit ? " " + spec.unit : ""} (expected ${spec.integer ? "a whole number " : ""}${spec.min} to ${spec.max})`);
-      }
-    } else if (spec.kind === "select") {
-      if (typeof value !== "string" || !spec.choices.some((c) => c.value === value)) {
-        throw new RangeError(`invalid ${spec.key}: ${String(value)} (expected one of ${spec.choices.map((c) => c.value).join(", ")})`);
-      }
-    } else if (typeof value !== "boolean") {
-      throw new RangeError(`invalid ${spec.key}: ${String(value)} (expected true or false)`);
-    }
-  }
-}
 
 /** Structural steel grades offered: f_y for t ≤ 40 mm (EN 1993-1-1 Table 3.1) and the hot-finished CHS buckling curve (Table 6.2). */
 export const STEEL_GRADES = {

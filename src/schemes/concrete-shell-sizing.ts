@@ -3,7 +3,8 @@ import type { RoofActions } from "../loads/roof-actions";
 import { sphericalMembraneForces } from "../mechanics/spherical-membrane";
 import { zoellyCoefficient, zoellyPressurePa } from "../mechanics/shell-buckling";
 import { REINFORCED_CONCRETE_DENSITY_KG_PER_M3 } from "../mechanics/concrete";
-import { kPaFromKgPerM2, ulsFactors } from "./compression-common";
+import { ulsFactors } from "./compression-common";
+import { kPaFromKgPerM2 } from "../mechanics/gravity";
 
 /** Poisson's ratio of uncracked concrete, EN 1992-1-1 §3.1.3(4). */
 export const CONCRETE_POISSON = 0.2;

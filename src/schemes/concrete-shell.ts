@@ -11,7 +11,7 @@ import { STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
 import { roofActions } from "../loads/roof-actions";
 import { assembleDesign, check, infeasibleDesign } from "./assemble-design";
 import { iterateSelfWeight, ConvergenceError } from "./converge";
-import { checkSchemeOptions } from "./compression-common";
+import { checkSchemeOptions } from "./check-options";
 import { minimumReinforcementRatio, shellSelfWeightKPa, shellThickness, type ShellThickness } from "./concrete-shell-sizing";
 
 export type ConcreteShellOptions = {

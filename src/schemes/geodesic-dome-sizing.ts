@@ -9,7 +9,8 @@ import { STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
 import { sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../mechanics/spherical-membrane";
 import { threeWayGridBarForces, threeWayGridStiffness, doubleLayerGridStiffness } from "../mechanics/three-way-grid";
 import { continuumShellPressurePa } from "../mechanics/shell-buckling";
-import { kPaFromKgPerM2, pickChsFor, ulsFactors } from "./compression-common";
+import { pickChsFor, ulsFactors } from "./compression-common";
+import { kPaFromKgPerM2 } from "../mechanics/gravity";
 
 /** Struts of one band of the lattice, crown to edge (ring struts excluded). */
 export interface StrutBand {

@@ -9,7 +9,9 @@ import { hoopSignChangeAngleRad } from "../mechanics/spherical-membrane";
 import { roofActions } from "../loads/roof-actions";
 import { assembleDesign, check, infeasibleDesign } from "./assemble-design";
 import { iterateSelfWeight, ConvergenceError } from "./converge";
-import { CLADDING_CHOICES, STEEL_GRADE_CHOICES, STEEL_GRADES, checkSchemeOptions, claddingCostItem, findCladding, kPaFromKgPerM2, type SteelGrade } from "./compression-common";
+import { CLADDING_CHOICES, STEEL_GRADE_CHOICES, STEEL_GRADES, claddingCostItem, findCladding, type SteelGrade } from "./compression-common";
+import { checkSchemeOptions } from "./check-options";
+import { kPaFromKgPerM2 } from "../mechanics/gravity";
 import { latticeSelfWeightKPa, sizeLattice, strutBands, type LatticeResult } from "./geodesic-dome-sizing";
 
 export type GeodesicDomeOptions = {

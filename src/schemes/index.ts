@@ -10,6 +10,7 @@ export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, 
 export { SCHEME_IDS } from "./types";
 export { assembleDesign, infeasibleDesign, check, type DesignParts } from "./assemble-design";
 export { iterateSelfWeight, ConvergenceError, type Converged } from "./converge";
+export { checkSchemeOptions } from "./check-options";
 
 /** Every scheme, in the order pages list them. Each scheme module adds itself here. */
 export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [

@@ -4,7 +4,8 @@ import type { BucklingCurve } from "../mechanics/flexural-buckling";
 import type { RoofActions } from "../loads/roof-actions";
 import { sizeTruss, type TrussResult } from "./truss-sizing";
 import { bracingRestraintLoadNPerM, pickChsForMoment, pickColumn, sizePurlin, type PurlinResult } from "./truss-secondary";
-import { kPaFromKgPerM2, pickChsFor, ulsFactors } from "./compression-common";
+import { pickChsFor, ulsFactors } from "./compression-common";
+import { kPaFromKgPerM2 } from "../mechanics/gravity";
 import type { ChsChoice } from "../catalogue/pick-chs";
 import type { ChsSection } from "../catalogue/types";
 

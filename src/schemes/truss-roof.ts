@@ -6,7 +6,9 @@ import { roofActions } from "../loads/roof-actions";
 import { snowShapeMu1 } from "../loads/snow";
 import { assembleDesign, check, infeasibleDesign } from "./assemble-design";
 import { iterateSelfWeight, ConvergenceError } from "./converge";
-import { CLADDING_CHOICES, STEEL_GRADE_CHOICES, STEEL_GRADES, checkSchemeOptions, claddingCostItem, findCladding, kPaFromKgPerM2, type SteelGrade } from "./compression-common";
+import { CLADDING_CHOICES, STEEL_GRADE_CHOICES, STEEL_GRADES, claddingCostItem, findCladding, type SteelGrade } from "./compression-common";
+import { checkSchemeOptions } from "./check-options";
+import { kPaFromKgPerM2 } from "../mechanics/gravity";
 import { designTrussRoof, trussLayout, trussRoofSelfWeightKPa, type TrussRoofInputs, type TrussRoofResult } from "./truss-roof-layout";
 import { PURLIN_REDUCTION, PURLIN_YIELD_PA } from "./truss-secondary";
 
