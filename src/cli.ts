@@ -126,7 +126,7 @@ function loadStudy(parsed: Parsed, readText: (p: string) => string): Study {
   return study;
 }
 
-const SWEEP_COLUMNS = ["span_m", "id", "feasible", "self_weight_kg_per_m2", "total_mass_t", "mass_to_air", "usable_floor_m2", "carbon_kgco2e_per_m2_floor", "cost_per_m2_floor", "governing", "reason"] as const;
+const SWEEP_COLUMNS = ["span_m", "id", "feasible", "self_weight_kg_per_m2", "total_mass_t", "roof_mass_t", "mass_to_air", "usable_floor_m2", "carbon_kgco2e_per_m2_floor", "cost_per_m2_floor", "governing", "reason"] as const;
 
 function round(x: number | null, digits = 3): number | null {
   return x === null || !Number.isFinite(x) ? null : Number(x.toPrecision(digits + 3));

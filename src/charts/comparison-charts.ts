@@ -4,6 +4,7 @@ import { headline } from "../pipeline";
 import { materialInfo, type MaterialKind } from "../materials";
 import { paretoFront } from "../comparison/pareto";
 import { SCHEME_COLOURS } from "./palette";
+import { isSubstructure } from "../schemes/assemble-design";
 
 const KIND_ORDER: readonly MaterialKind[] = ["steel", "cable", "fabric", "cladding", "concrete", "rebar", "timber"];
 const KIND_COLOURS = ["#4c6a8c", "#0072B2", "#9ad0c2", "#c9b27c", "#a7a7a7", "#7a4e2d", "#b8860b"];
@@ -18,11 +19,12 @@ function schemeColour(results: readonly SchemeResult[]) {
   return { domain: results.map((r) => r.label), range: results.map((r) => SCHEME_COLOURS[r.id]) };
 }
 
-/** Stacked bars: self-weight per m² of plan by material kind, one bar per scheme. */
+/** Stacked bars: roof self-weight per m² of plan by material kind, one bar per scheme (substructure such as ground anchors left out, as in the self-weight). */
 export function massByMaterialChart(results: readonly SchemeResult[], common: Common): Plot.PlotOptions {
   const data = results.flatMap((r) => {
     const byKind = new Map<MaterialKind, number>();
     for (const row of r.design.takeoff) {
+      if (isSubstructure(row)) continue;
       const kind = row.material === null ? undefined : materialInfo(row.material)?.kind;
       if (kind) byKind.set(kind, (byKind.get(kind) ?? 0) + row.massKg);
     }

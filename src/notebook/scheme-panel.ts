@@ -49,7 +49,7 @@ export function takeoffTable(design: Design): HTMLElement {
   return tableElement(
     ["Element", "Material", "Quantity", "Unit", "Mass (t)", "kg/m² plan"],
     design.takeoff.map((r) => [r.element, r.material === null ? "—" : (materialInfo(r.material)?.label ?? r.material), r.quantity, r.unit, r.massKg / 1000, r.massKg / design.planAreaM2]),
-    { caption: `Take-off (total ${fmt.int(design.totalMassKg / 1000)} t, ${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan)`, numeric: [false, false, true, false, true, true] },
+    { caption: `Take-off (total ${fmt.int(design.totalMassKg / 1000)} t; roof without anchors ${fmt.int(design.roofMassKg / 1000)} t, ${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan)`, numeric: [false, false, true, false, true, true] },
   );
 }
 
@@ -64,7 +64,7 @@ export function schemeSummary(result: SchemeResult): HTMLElement {
     : `Not feasible: ${design.reason}`;
   wrap.append(verdict);
   const items: [string, string][] = design.summary.map((s) => [s.label, `${fmt.sig3(s.value)}${s.unit ? ` ${s.unit}` : ""}`]);
-  items.push(["Self-weight", `${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan`], ["Usable floor", `${fmt.int(design.usableFloorM2)} m²`], ["Structure ÷ enclosed air", fmt.two(design.totalMassKg / design.enclosedAirKg)]);
+  items.push(["Self-weight", `${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan`], ["Usable floor", `${fmt.int(design.usableFloorM2)} m²`], ["Roof mass ÷ enclosed air", fmt.two(design.roofMassKg / design.enclosedAirKg)]);
   if (result.carbon?.perM2UsableFloor.perM2) items.push(["Embodied carbon (counted modules)", `${fmt.int(result.carbon.totals.counted / 1000)} tCO2e, ${fmt.int(result.carbon.perM2UsableFloor.perM2.counted)} kgCO2e/m² floor`]);
   if (result.cost?.perM2UsableFloor) items.push(["Cost", `${fmt.one(result.cost.totals.total / 1e6)} million ${result.cost.currency}, ${fmt.int(result.cost.perM2UsableFloor.total)} ${result.cost.currency}/m² floor`]);
   if (result.error) items.push(["Assessment", result.error]);

@@ -16,6 +16,8 @@ export interface Headline {
   rebar_t: number;
   cladding_t: number;
   total_mass_t: number;
+  /** Roof mass without substructure (anchors), t; self-weight and mass ÷ air use this. */
+  roof_mass_t: number;
   enclosed_air_t: number;
   mass_to_air: number;
   usable_floor_m2: number;
@@ -59,7 +61,8 @@ export function headline(result: SchemeResult): Headline {
     cladding_t: massByKind(result, "cladding") / 1000,
     total_mass_t: design.totalMassKg / 1000,
     enclosed_air_t: design.enclosedAirKg / 1000,
-    mass_to_air: design.enclosedAirKg > 0 ? design.totalMassKg / design.enclosedAirKg : Number.NaN,
+    roof_mass_t: design.roofMassKg / 1000,
+    mass_to_air: design.enclosedAirKg > 0 ? design.roofMassKg / design.enclosedAirKg : Number.NaN,
     usable_floor_m2: design.usableFloorM2,
     plan_area_m2: design.planAreaM2,
     governing: design.governing,

@@ -20,6 +20,11 @@ export interface DesignParts {
   reason?: string;
 }
 
+/** Take-off rows that are substructure, not roof: ground anchors and dead-weight foundations. */
+export function isSubstructure(row: TakeoffRow): boolean {
+  return row.costItem === "anchor";
+}
+
 /**
  * Completes a Design from its parts: totals, self-weight per m² of plan, the governing check, the
  * valid-range flag and the feasibility verdict (infeasible when any check fails or a reason is given).
@@ -27,6 +32,7 @@ export interface DesignParts {
 export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "label">, brief: Brief, parts: DesignParts): Design {
   const planAreaM2 = Math.PI * (brief.spanM / 2) ** 2;
   const totalMassKg = parts.takeoff.reduce((sum, row) => sum + row.massKg, 0);
+  const roofMassKg = totalMassKg - parts.takeoff.filter(isSubstructure).reduce((sum, row) => sum + row.massKg, 0);
   const governingCheck = parts.checks.reduce<Check | undefined>((worst, c) => (worst === undefined || c.utilisation > worst.utilisation ? c : worst), undefined);
   const failed = parts.checks.filter((c) => !c.passed);
   const outsideValidRange = brief.spanM < model.validSpanM.min || brief.spanM > model.validSpanM.max;
@@ -52,7 +58,8 @@ export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "l
     warnings,
     iterations: parts.iterations,
     totalMassKg,
-    selfWeightKgPerM2: totalMassKg / planAreaM2,
+    roofMassKg,
+    selfWeightKgPerM2: roofMassKg / planAreaM2,
     usableFloorM2: parts.usableFloorM2,
     planAreaM2,
     roofSurfaceM2: parts.roofSurfaceM2,
@@ -78,6 +85,7 @@ export function infeasibleDesign(id: SchemeId, brief: Brief, reason: string, war
     warnings,
     iterations: 0,
     totalMassKg: 0,
+    roofMassKg: 0,
     selfWeightKgPerM2: 0,
     usableFloorM2: 0,
     planAreaM2: cap.planAreaM2,

@@ -88,9 +88,11 @@ export interface Design {
   warnings: string[];
   /** Self-weight iterations to converge. */
   iterations: number;
-  /** Total structure and envelope mass, kg (sum of take-off masses). */
+  /** Total structure and envelope mass, kg (sum of take-off masses, substructure included). */
   totalMassKg: number;
-  /** Self-weight per m² of plan, kg/m². */
+  /** Mass of the roof itself, kg: the total less substructure (ground anchors, dead-weight blocks). */
+  roofMassKg: number;
+  /** Self-weight of the roof per m² of plan, kg/m² (roofMassKg / plan; substructure excluded). */
   selfWeightKgPerM2: number;
   /** Plan area with at least the brief's clear height under the structure, m². */
   usableFloorM2: number;

@@ -22,6 +22,7 @@ function design(id: Design["schemeId"], rows: Design["takeoff"], feasible = true
     warnings: [],
     iterations: 3,
     totalMassKg,
+    roofMassKg: totalMassKg,
     selfWeightKgPerM2: totalMassKg / planAreaM2,
     usableFloorM2: 8_000,
     planAreaM2,
