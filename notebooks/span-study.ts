@@ -39,7 +39,7 @@ reactiveCell(main, { id: "status" }, () => {
   if (s.status === "failed") throw new Error(s.error);
   if (s.status === "running") return "Computing the span study…";
   const spans = new Set(s.points.map((p) => p.spanM)).size;
-  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (in a background worker).`;
+  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (in ${s.workers} background worker${s.workers > 1 ? "s" : ""}).`;
 });
 
 reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {

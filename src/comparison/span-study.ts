@@ -35,12 +35,12 @@ export function spansOf(range: SpanRange): number[] {
 }
 
 /**
- * Evaluates the study's enabled schemes at each span (rise kept in proportion). Infeasible
+ * Evaluates the study's enabled schemes at each span of a range or list (rise kept in proportion). Infeasible
  * points keep NaN metrics so charts break their lines there.
  */
-export function runSpanStudy(study: Study, catalogue: Catalogue, range: SpanRange): SpanPoint[] {
+export function runSpanStudy(study: Study, catalogue: Catalogue, range: SpanRange | readonly number[]): SpanPoint[] {
   const points: SpanPoint[] = [];
-  for (const spanM of spansOf(range)) {
+  for (const spanM of Array.isArray(range) ? range : spansOf(range as SpanRange)) {
     for (const result of evaluateStudy(study, catalogue, { spanM }).results) {
       const h = headline(result);
       const model = SCHEMES.find((m) => m.id === result.id);

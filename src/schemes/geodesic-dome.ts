@@ -73,6 +73,19 @@ const options = [
  * until the lattice passes general buckling k·4√(DB)/R²; a tension ring for the edge thrust; the
  * self-weight iterated to convergence. Validity: axisymmetric membrane state; 40–250 m.
  */
+/** The last few generated caps: the same geometry is asked for again whenever only loads, factors or rates change (compare page, risk runs). Read-only. */
+const capCache = new Map<string, ReturnType<typeof geodesicCap>>();
+function cachedCap(frequency: number, radiusM: number, capAngleRad: number): ReturnType<typeof geodesicCap> {
+  const key = `${frequency}|${radiusM}|${capAngleRad}`;
+  let mesh = capCache.get(key);
+  if (!mesh) {
+    mesh = geodesicCap(frequency, radiusM, capAngleRad);
+    if (capCache.size >= 16) capCache.delete(capCache.keys().next().value as string);
+    capCache.set(key, mesh);
+  }
+  return mesh;
+}
+
 function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue) {
   checkSchemeOptions(options, opts);
   const model = geodesicDome;
@@ -88,7 +101,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue) {
   if (frequency > 400) return infeasibleDesign("geodesic-dome", brief, `the mesh would need frequency ${frequency} (over 400): increase the target strut length`, [], section);
   let mesh;
   try {
-    mesh = geodesicCap(frequency, R, cap.edgeAngleRad);
+    mesh = cachedCap(frequency, R, cap.edgeAngleRad);
   } catch (e) {
     if (e instanceof RangeError && e.message.startsWith("invalid cap")) return infeasibleDesign("geodesic-dome", brief, "the mesh is too coarse for so small a cap: reduce the target strut length", [], section);
     throw e;
