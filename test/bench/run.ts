@@ -96,15 +96,19 @@ async function benchBrowser(): Promise<void> {
     console.log("\n## compare page: span change → every dependent cell re-rendered (50 changes, headless Chromium)");
     const sync: number[] = [];
     const frame: number[] = [];
+    const own: number[] = [];
     for (let i = 0; i < 50; i++) {
       const r = await timeInput(page, "#spanM", String(120 + (i % 10) * 8));
       sync.push(r.syncMs);
       frame.push(r.frameMs);
+      own.push(await page.evaluate(() => ["loads", "geometry", "section"].reduce((sum, id) => sum + Number(document.querySelector(`#cell-${id}`)?.getAttribute("data-ms") ?? 0), 0)));
     }
     const s = stats(sync);
     const f = stats(frame);
     console.log(`synchronous re-render (all schemes redesigned, tables and charts redrawn): median ${ms(s.median)}, p95 ${ms(s.p95)}`);
     console.log(`to the second animation frame after the change: median ${ms(f.median)}, p95 ${ms(f.p95)}`);
+    const o = stats(own);
+    console.log(`of which the brief's own cells (loads, geometry, section chart): median ${ms(o.median)}, p95 ${ms(o.p95)}`);
 
     console.log("\n## span study: range change → recomputed in the worker and redrawn");
     const span = await browser.newPage({ viewport: { width: 1280, height: 900 } });
