@@ -163,15 +163,16 @@ for (const s of schemes) {
   reactiveCell(detail.body, { id: `${id}-drawing` }, () => {
     if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;
+    const roles = [...new Set([...design.drawing.section, ...(design.drawing.plan ?? [])].map((l) => l.role))].sort();
     const wrap = document.createElement("div");
     wrap.className = "grid charts";
     wrap.append(
       chartFigure(
-        sectionChartOptions({ brief: brief.value, lines: design.drawing.section, title: `${s.model.label}: section`, caption: chartCaption(store.study.value), width: 620 }),
+        sectionChartOptions({ brief: brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: chartCaption(store.study.value), width: 620 }),
         `${id}-section`,
       ),
     );
-    if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, title: `${s.model.label}: plan`, caption: chartCaption(store.study.value) }), `${id}-plan`));
+    if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, roles, title: `${s.model.label}: plan`, caption: chartCaption(store.study.value) }), `${id}-plan`));
     return wrap;
   });
   reactiveCell(detail.body, { id: `${id}-tables` }, () => {

@@ -9,6 +9,8 @@ export interface PlanChartInput {
   title: string;
   caption: string;
   width?: number;
+  /** Member roles in colour order, shared with the section. */
+  roles?: readonly string[];
 }
 
 /** Plot options for a scheme's plan (e.g. the geodesic pattern from its generated nodes), with the plan circle. Pure. */
@@ -24,7 +26,7 @@ export function planChartOptions(input: PlanChartInput): Plot.PlotOptions {
     height: size,
     x: { label: "x (m)", domain: [-a * 1.05, a * 1.05] },
     y: { label: "y (m)", domain: [-a * 1.05, a * 1.05] },
-    color: { legend: true },
+    color: { legend: true, ...(input.roles ? { domain: [...input.roles] } : {}) },
     marks: [Plot.line(circle, { x: "x", y: "y", stroke: "#999" }), Plot.line(segments, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 0.6 })],
   };
 }

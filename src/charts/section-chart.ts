@@ -11,6 +11,8 @@ export interface SectionChartInput {
   title: string;
   caption: string;
   width?: number;
+  /** Member roles in colour order, shared with the plan so a role has one colour in both. */
+  roles?: readonly string[];
 }
 
 /**
@@ -38,7 +40,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
     marginLeft: 50,
     x: { label: "Distance from centre (m)", domain: [-a * 1.05, a * 1.05] },
     y: { label: "Height above floor (m)", domain: [0, top * 1.2] },
-    color: { legend: members.length > 0 },
+    color: { legend: members.length > 0, ...(input.roles ? { domain: [...input.roles] } : {}) },
     marks: [
       Plot.ruleY([0]),
       Plot.rect([{ x1: -env.usableRadiusM, x2: env.usableRadiusM, y1: 0, y2: brief.minClearHeightM }], { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#c9e3c5", fillOpacity: 0.6 }),

@@ -49,7 +49,7 @@ export function takeoffTable(design: Design): HTMLElement {
   return tableElement(
     ["Element", "Material", "Quantity", "Unit", "Mass (t)", "kg/m² plan"],
     design.takeoff.map((r) => [r.element, r.material === null ? "—" : (materialInfo(r.material)?.label ?? r.material), r.quantity, r.unit, r.massKg / 1000, r.massKg / design.planAreaM2]),
-    { caption: `Take-off (total ${fmt.int(design.totalMassKg / 1000)} t; roof without anchors ${fmt.int(design.roofMassKg / 1000)} t, ${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan)`, numeric: [false, false, true, false, true, true] },
+    { caption: `Take-off (total ${fmt.int(design.totalMassKg / 1000)} t${design.roofMassKg < design.totalMassKg ? `; roof without anchors ${fmt.int(design.roofMassKg / 1000)} t` : ""}, ${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan)`, numeric: [false, false, true, false, true, true] },
   );
 }
 
