@@ -46,6 +46,9 @@ const { store, main } = startPage({
 const brief = computed(() => store.study.value.brief);
 const actions = computed(() => roofActions(brief.value));
 const env = computed(() => envelope(brief.value));
+// The caption reads the brief and the factor set's name only; as a computed string it changes
+// (and re-renders the charts) only when those do, not on every edit of the study.
+const caption = computed(() => chartCaption(store.study.value));
 
 staticCell(main, { id: "brief", title: "Brief" }, briefControls(store));
 
@@ -84,7 +87,7 @@ reactiveCell(main, { id: "section", title: "Roof section" }, () =>
     sectionChartOptions({
       brief: brief.value,
       title: "Roof section through the centre: roof surface, walls and usable floor",
-      caption: chartCaption(store.study.value),
+      caption: caption.value,
     }),
     "roof-section",
   ),
@@ -116,14 +119,13 @@ reactiveCell(main, { id: "comparison", title: "Side by side" }, () => {
 reactiveCell(main, { id: "comparison-charts", title: "Option charts" }, () => {
   const list = results.value;
   if (list.length === 0) return null;
-  const caption = chartCaption(store.study.value);
   const grid = document.createElement("div");
   grid.className = "grid charts";
   grid.append(
-    chartFigure(massByMaterialChart(list, { title: "Self-weight per m² of plan, by material", caption }), "mass-by-material"),
-    chartFigure(carbonByModuleChart(list, { title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)", caption }), "carbon-by-module"),
-    chartFigure(costPerM2Chart(list, { title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)", caption }), "cost-per-m2"),
-    chartFigure(carbonVsCostChart(list, { title: "Carbon against cost per m² of usable floor", caption }), "carbon-vs-cost"),
+    chartFigure(massByMaterialChart(list, { title: "Self-weight per m² of plan, by material", caption: caption.value }), "mass-by-material"),
+    chartFigure(carbonByModuleChart(list, { title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)", caption: caption.value }), "carbon-by-module"),
+    chartFigure(costPerM2Chart(list, { title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)", caption: caption.value }), "cost-per-m2"),
+    chartFigure(carbonVsCostChart(list, { title: "Carbon against cost per m² of usable floor", caption: caption.value }), "carbon-vs-cost"),
   );
   return grid;
 });
@@ -168,11 +170,11 @@ for (const s of schemes) {
     wrap.className = "grid charts";
     wrap.append(
       chartFigure(
-        sectionChartOptions({ brief: brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: chartCaption(store.study.value), width: 620 }),
+        sectionChartOptions({ brief: brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: caption.value, width: 620 }),
         `${id}-section`,
       ),
     );
-    if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, roles, title: `${s.model.label}: plan`, caption: chartCaption(store.study.value) }), `${id}-plan`));
+    if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, roles, title: `${s.model.label}: plan`, caption: caption.value }), `${id}-plan`));
     return wrap;
   });
   reactiveCell(detail.body, { id: `${id}-tables` }, () => {

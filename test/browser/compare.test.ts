@@ -31,6 +31,21 @@ describe("compare page", () => {
     await page.close();
   });
 
+  it("a scheme option re-renders exactly the cells that depend on it", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-comparison table");
+    const renders = (id: string) => page.locator(`#cell-${id}`).getAttribute("data-renders").then(Number);
+    const ids = ["loads", "geometry", "section", "geodesic-dome-summary", "cable-dome-summary", "truss-roof-summary", "comparison"];
+    const before = Object.fromEntries(await Promise.all(ids.map(async (id) => [id, await renders(id)] as const)));
+    await page.click("#truss-roof-options-panel summary");
+    await page.fill("#truss-roof-spanDepthRatio", "12");
+    await expect.poll(() => renders("truss-roof-summary")).toBeGreaterThan(before["truss-roof-summary"] ?? 0);
+    expect(await renders("comparison")).toBeGreaterThan(before.comparison ?? 0);
+    for (const untouched of ["loads", "geometry", "section", "geodesic-dome-summary", "cable-dome-summary"]) expect(await renders(untouched)).toBe(before[untouched]);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("an out-of-range value shows an inline message and changes nothing", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
     await page.waitForSelector("#cell-geometry dd");
