@@ -8,3 +8,4 @@ export { carbonByModuleData, carbonByMaterialData, CARBON_METRICS, COUNTED_MODUL
 export { costChartOptions, costByElementData, ON_COSTS_PART, type SchemeCost, type CostBarDatum, type CostChartInput } from "./cost-chart";
 export { planChartOptions, type PlanChartInput } from "./plan-chart";
 export { spanMetricChart, spanValidityChart, type SpanMetric } from "./span-charts";
+export * from "./risk-charts";
