@@ -1,0 +1,58 @@
+import { describe, it, expect, beforeAll, afterAll, inject } from "vitest";
+import type { Browser } from "playwright-core";
+import { launchChromium, openPage } from "./browser";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("risk page", () => {
+  it("a small run in the worker shows progress, results, charts and no console errors", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/risk.html`);
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    expect(await page.locator("#risk-inputs-table tbody tr").count()).toBeGreaterThan(10);
+    await page.fill("#risk-samples", "60");
+    await page.click("#risk-run");
+    await page.waitForSelector("#risk-results-table", { timeout: 60_000 });
+    expect(await page.locator("#risk-status").textContent()).toMatch(/Done: 60 samples/);
+    expect(await page.locator("#risk-results-table tbody tr").count()).toBeGreaterThan(0);
+    expect(await page.locator("#cell-risk-ranges svg").count()).toBeGreaterThanOrEqual(3);
+    expect(await page.locator("#cell-risk-lowest svg").count()).toBeGreaterThan(0);
+    expect(await page.locator("#cell-risk-sensitivity svg").count()).toBeGreaterThan(0);
+    expect(await page.locator("#cell-risk-run").innerText()).toMatch(/Cancel/);
+    expect(await page.locator(".caution").textContent()).toMatch(/licensed engineers/);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("an invalid range shows an inline message naming the input and is not applied", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/risk.html`);
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    const before = await page.inputValue("#risk-low-0");
+    await page.fill("#risk-low-0", "999");
+    await page.press("#risk-low-0", "Enter");
+    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toMatch(/input "snow": low 999 is above the mode/);
+    await page.reload();
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    expect(await page.inputValue("#risk-low-0")).toBe(before);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("cancel stops a long run and leaves the page responsive", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/risk.html`);
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    await page.fill("#risk-samples", "50000");
+    await page.click("#risk-run");
+    await expect.poll(() => page.locator("#risk-status").textContent(), { timeout: 20_000 }).toMatch(/Designing|Sampling/);
+    await page.click("#risk-cancel");
+    await expect.poll(() => page.locator("#risk-status").textContent()).toMatch(/Cancelled/);
+    expect(await page.locator("#risk-run").isEnabled()).toBe(true);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
