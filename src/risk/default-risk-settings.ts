@@ -20,6 +20,8 @@ export const DEFAULT_SPREADS = {
   services: { low: 0.6, high: 2, source: "hung loads tend to grow through design (common practice, no source)" },
   knockDown: { low: 0.8, high: 1.1, source: "buckling knock-down factors scatter widely in tests (common practice, no source)" },
   allowance: { low: 0.5, high: 1.5, source: "design-stage allowances (common practice, no source)" },
+  reinforcement: { low: 0.75, high: 1.5, source: "reinforcement rates before detailing (common practice, no source)" },
+  creep: { low: 0.75, high: 1.3, source: "creep coefficient before the mix and programme are known (common practice, no source)" },
   steelCarbon: { low: 0.6, high: 1.3, source: "between recycled-content electric-arc and blast-furnace routes (common practice, no source)" },
   concreteCarbon: { low: 0.75, high: 1.3, source: "mix design and cement supply (common practice, no source)" },
   fabricCarbon: { low: 0.6, high: 1.6, source: "few published EPDs for coated fabrics (common practice, no source)" },
@@ -32,6 +34,10 @@ export const DEFAULT_SPREADS = {
 /** Option keys treated as buckling knock-downs or design allowances (matched on the scheme modules' own keys). */
 const KNOCK_DOWN_KEY = /knock|imperfection/i;
 const ALLOWANCE_KEY = /allowance|node|connection|fitting|splice|joint/i;
+/** Scheme options that are loads (finishes, kPa), reinforcement rates (kg/m³) or creep: uncertain at concept stage too. */
+const LOAD_KEY = /KPa$/;
+const REINFORCEMENT_KEY = /RateKgPerM3$/;
+const CREEP_KEY = /creep/i;
 
 /** Material kinds whose factors get default ranges, with the group name and spread. */
 const CARBON_KINDS: Partial<Record<MaterialKind, { group: string; spread: Spread }>> = {
@@ -50,6 +56,11 @@ function clamp(x: number, min: number, max: number): number {
   return Math.min(max, Math.max(min, x));
 }
 
+/** Rounds away binary noise (0.16000000000000003 → 0.16): 12 significant figures. */
+function tidy(x: number): number {
+  return x === 0 ? 0 : Number(x.toPrecision(12));
+}
+
 function spreadInput(
   id: string,
   label: string,
@@ -60,16 +71,17 @@ function spreadInput(
   group: string | null,
 ): UncertainInput | null {
   if (!(Number.isFinite(value) && value > 0)) return null;
-  const low = Math.min(value, clamp(value * spread.low, limits.min, limits.max));
-  const high = Math.max(value, clamp(value * spread.high, limits.min, limits.max));
+  const low = Math.min(value, clamp(tidy(value * spread.low), limits.min, limits.max));
+  const high = Math.max(value, clamp(tidy(value * spread.high), limits.min, limits.max));
   if (low === high) return null;
   return { id, label, path, low, mode: value, high, distribution: "pert", group };
 }
 
 /**
  * Default uncertain inputs for a study, all Beta-PERT with the study's own value as the mode:
- * snow, wind and services loads; the buckling knock-downs and design allowances the registered
- * scheme modules offer as options; A1–A3 factors, waste rates and road distances of steel, strand,
+ * snow, wind and services loads; the buckling knock-downs, design allowances (nodes, connections,
+ * fabric seams), reinforcement rates, creep and finishes loads the registered scheme modules offer
+ * as options (matched on their option keys); A1–A3 factors, waste rates and road distances of steel, strand,
  * rebar, concrete, fabric and cladding (grouped by kind: all steel factors move together); the
  * carbon quantity allowance; every unit rate over its own low–high range (steel rates grouped,
  * the two fabric rates grouped); and the on-cost percentages. Span, rise and the other brief
@@ -88,7 +100,17 @@ export function defaultRiskSettings(study: Omit<Study, "risk">): RiskSettings {
   for (const model of SCHEMES) {
     for (const spec of model.options) {
       if (spec.kind !== "number" || spec.integer) continue;
-      const spread = KNOCK_DOWN_KEY.test(spec.key) ? DEFAULT_SPREADS.knockDown : ALLOWANCE_KEY.test(spec.key) ? DEFAULT_SPREADS.allowance : null;
+      const spread = KNOCK_DOWN_KEY.test(spec.key)
+        ? DEFAULT_SPREADS.knockDown
+        : ALLOWANCE_KEY.test(spec.key)
+          ? DEFAULT_SPREADS.allowance
+          : REINFORCEMENT_KEY.test(spec.key)
+            ? DEFAULT_SPREADS.reinforcement
+            : LOAD_KEY.test(spec.key)
+              ? DEFAULT_SPREADS.services
+              : CREEP_KEY.test(spec.key)
+                ? DEFAULT_SPREADS.creep
+                : null;
       if (!spread) continue;
       const value = study.schemes[model.id]?.options[spec.key] ?? model.defaults[spec.key];
       if (typeof value !== "number") continue;

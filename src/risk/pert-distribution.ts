@@ -81,7 +81,7 @@ export function pertDistribution(low: number, mode: number, high: number): Distr
       checkProbability(u);
       return a + width * standardQuantile(u);
     },
-    shapeKey: `pert:${alpha}:${beta}`,
+    shapeKey: `pert:${alpha.toPrecision(12)}:${beta.toPrecision(12)}`,
     standardQuantile(u) {
       checkProbability(u);
       return standardQuantile(u);

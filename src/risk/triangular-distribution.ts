@@ -28,7 +28,7 @@ export function triangularDistribution(low: number, mode: number, high: number):
       if (width === 0) return a;
       return u < split ? a + Math.sqrt(u * width * (m - a)) : b - Math.sqrt((1 - u) * width * (b - m));
     },
-    shapeKey: width === 0 ? "point" : `triangular:${split}`,
+    shapeKey: width === 0 ? "point" : `triangular:${split.toPrecision(12)}`,
     standardQuantile(u) {
       checkProbability(u);
       if (width === 0) return 0;
