@@ -138,8 +138,8 @@ reactiveCell(main, { id: "risk-results", title: "Results" }, () => {
   const res = r.result;
   const wrap = document.createElement("div");
   const note = document.createElement("p");
-  note.className = "risk-stale";
-  note.textContent = `${stale(r)}${res.samples} samples, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost is a ${res.estimateClass.label} estimate in ${res.currency}. ${res.coverage}`;
+  if (stale(r)) note.className = "risk-stale";
+  note.textContent = `${stale(r)}${res.samples} samples, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost in ${res.currency}, estimate class ${res.estimateClass.label}. ${res.coverage}`;
   const rows = res.schemes.flatMap((s) =>
     RISK_METRICS.map((metric) => {
       const m = s.metrics[metric];
@@ -223,7 +223,7 @@ reactiveCell(main, { id: "risk-sensitivity", title: "Sensitivity: tornado and ra
     if (tornado) wrap.append(chartFigure(riskTornadoChart(tornado, r.result.currency, { title: `${name}: ${RISK_METRIC_LABELS[metric]} with each input at its low and high end`, caption: caption("one input at a time, the others at the study's values") }), `risk-tornado-${chosen}-${metric}`));
   }
   for (const metric of RISK_METRICS as readonly RiskMetric[]) {
-    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { title: `${name}: rank correlation of each input with ${RISK_METRIC_LABELS[metric].toLowerCase()}`, caption: caption(`Spearman ρ over ${r.result.samples} samples, seed ${r.result.seed}`) }), `risk-rank-${chosen}-${metric}`));
+    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { title: `${name}: rank correlation of each input with ${RISK_METRIC_LABELS[metric]}`, caption: caption(`Spearman ρ over ${r.result.samples} samples, seed ${r.result.seed}; inputs of one group are drawn together, so they show the same ρ whether or not this scheme uses them`) }), `risk-rank-${chosen}-${metric}`));
   }
   return wrap;
 });

@@ -24,6 +24,7 @@ export function riskLowestChart(result: RiskResult, common: RiskChartCommon): Pl
     width: common.width ?? 640,
     height: 110 + 34 * Math.max(1, labels.length) * 2,
     marginLeft: 150,
+    marginRight: 110,
     x: { label: "Probability of being lowest (fraction of samples)", domain: [0, 1], grid: true, percent: false },
     y: { label: null, domain: labels },
     fy: { label: null, domain: ["Lowest carbon", "Cheapest"] },

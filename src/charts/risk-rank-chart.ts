@@ -25,9 +25,9 @@ export function riskRankChart(correlations: readonly RankCorrelation[], inputs: 
   return {
     title: common.title,
     caption: common.caption,
-    width: common.width ?? 640,
+    width: common.width ?? 780,
     height: 90 + 24 * Math.max(1, data.length),
-    marginLeft: 270,
+    marginLeft: 360,
     x: { label: "Spearman rank correlation ρ with the output (–1 to 1)", domain: [-1, 1], grid: true },
     y: { label: null, domain: data.map((d) => d.input) },
     marks: [Plot.barX(data, { x: "rho", y: "input", fill: SCHEME_COLOURS[scheme], tip: true }), Plot.ruleX([0])],

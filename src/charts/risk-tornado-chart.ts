@@ -23,9 +23,9 @@ export function riskTornadoChart(tornado: Tornado, currency: string, common: Ris
   return {
     title: common.title,
     caption: common.caption,
-    width: common.width ?? 640,
+    width: common.width ?? 780,
     height: 90 + 24 * Math.max(1, order.length),
-    marginLeft: 270,
+    marginLeft: 360,
     x: { label: riskMetricAxisLabel(tornado.metric, currency), grid: true },
     y: { label: null, domain: order },
     color: { legend: true, domain: ["input at its low end", "input at its high end"], range: ["#56B4E9", "#D55E00"] },

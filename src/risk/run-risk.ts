@@ -223,8 +223,13 @@ export function runRisk(study: Study, catalogue: Catalogue, options: RunRiskOpti
   const rankCorrelations: RankCorrelation[] = [];
   models.forEach((model, s) => {
     RISK_METRICS.forEach((metric, m) => {
-      // Self-weight depends only on design-affecting inputs; the others would show noise.
-      const usable = inputRanks.map((r, k) => (metric === "selfWeightKgPerM2" && !isDesign[k] ? null : r));
+      // Only inputs that can move this output: self-weight only the design inputs of this scheme,
+      // carbon and cost also every assessment input (another scheme's options would show noise).
+      const usable = inputRanks.map((r, k) => {
+        const input = inputs[k] as UncertainInput;
+        if (isDesign[k] && !affectsScheme(input, model.id)) return null;
+        return metric === "selfWeightKgPerM2" && !isDesign[k] ? null : r;
+      });
       const rho = rankCorrelationsWith((outputs[s] as Float64Array[])[m] as Float64Array, inputValues, usable);
       inputs.forEach((input, k) => {
         if (usable[k]) rankCorrelations.push({ scheme: model.id, metric, inputId: input.id, rho: rho[k] ?? null });
