@@ -1,13 +1,22 @@
 import { diff, mergeDiff } from "./patch";
 import { studyFromObject, type LoadResult } from "./load-study";
+import { defaultRiskSettings } from "../risk/default-risk-settings";
 import type { Study } from "./study";
+
+/** The study without its risk settings when they are the ones its own tables imply (the usual case). */
+function withoutDerivedRisk(study: Study): Partial<Study> {
+  const { risk, ...rest } = study;
+  return JSON.stringify(risk) === JSON.stringify(defaultRiskSettings(rest)) ? rest : study;
+}
 
 /**
  * Encodes a study in a URL fragment: the difference from the default study, as JSON, in
- * base64url (UTF-8). A link therefore stays short while the study is close to the defaults.
+ * base64url (UTF-8). A link therefore stays short while the study is close to the defaults; risk
+ * settings that are the defaults for the study's own tables are left out and rebuilt on opening.
  */
 export function encodeStudyLink(study: Study, defaults: Study): string {
-  const patch = diff(defaults, study) ?? {};
+  const { risk: _risk, ...base } = defaults;
+  const patch = diff(base, withoutDerivedRisk(study)) ?? {};
   const bytes = new TextEncoder().encode(JSON.stringify({ v: study.schemaVersion, d: patch }));
   let binary = "";
   for (const byte of bytes) binary += String.fromCharCode(byte);
@@ -25,6 +34,7 @@ export function decodeStudyLink(fragment: string, defaults: Study): LoadResult {
     return { ok: false, problems: [{ path: "(link)", message: "the link is damaged (expected a study link made by spanbook)" }] };
   }
   if (typeof payload !== "object" || payload === null) return { ok: false, problems: [{ path: "(link)", message: "the link holds no study" }] };
-  const merged = mergeDiff({ ...defaults, schemaVersion: payload.v }, payload.d);
+  const { risk: _risk, ...base } = defaults;
+  const merged = mergeDiff({ ...base, schemaVersion: payload.v }, payload.d);
   return studyFromObject(merged);
 }

@@ -126,3 +126,21 @@ describe("browser storage", () => {
     expect(readStoredStudy(memoryStore(), defaultStudy)).toBeNull();
   });
 });
+
+describe("study links and risk settings", () => {
+  it("leave out risk settings derived from the study's own tables, and rebuild them", () => {
+    const defaults = defaultStudy();
+    const study = validateStudy(demo);
+    if (!study.ok) throw new Error("demo study invalid");
+    const link = encodeStudyLink(study.study, defaults);
+    expect(link.length).toBeLessThan(2000);
+    const back = decodeStudyLink(link, defaults);
+    expect(back.ok && back.study).toEqual(study.study);
+  });
+  it("keep edited risk settings", () => {
+    const defaults = defaultStudy();
+    const edited = setIn(defaults, ["risk", "samples"], 1234);
+    const back = decodeStudyLink(encodeStudyLink(edited, defaults), defaults);
+    expect(back.ok && back.study.risk.samples).toBe(1234);
+  });
+});
