@@ -32,8 +32,10 @@ export interface ChsChoice {
  */
 export function pickLightestChs(sections: readonly ChsSection[], demand: ChsDemand): ChsChoice | null {
   const { forceN, effectiveLengthM, yieldPa, curve = "a", gammaM0 = 1.0, gammaM1 = 1.0, maxSlenderness = 180, minMassKgPerM = 0 } = demand;
+  // No resistance exceeds A f_y / γ_M, so sections below that area need no check.
+  const areaNeededM2 = (Math.abs(forceN) * Math.min(gammaM0, gammaM1)) / yieldPa;
   for (const section of sections) {
-    if (section.massKgPerM < minMassKgPerM) continue;
+    if (section.massKgPerM < minMassKgPerM || section.areaM2 < areaNeededM2) continue;
     const choice = chsResistance(section, { forceN, effectiveLengthM, yieldPa, curve, gammaM0, gammaM1, maxSlenderness });
     if (choice !== null && choice.utilisation <= 1) return choice;
   }

@@ -75,8 +75,10 @@ export function pickChsFor(
   accept: (section: ChsSection) => boolean = () => true,
   minMassKgPerM = 0,
 ): ChsChoice | null {
+  // No resistance exceeds A f_y (γ_M = 1 here), so smaller areas can be skipped without a check.
+  const areaNeededM2 = demands.reduce((m, d) => Math.max(m, Math.abs(d.forceN)), 0) / steel.yieldPa;
   for (const section of sections) {
-    if (section.massKgPerM < minMassKgPerM) continue;
+    if (section.massKgPerM < minMassKgPerM || section.areaM2 < areaNeededM2) continue;
     let worst: ChsChoice | null = null;
     let ok = true;
     for (const d of demands) {

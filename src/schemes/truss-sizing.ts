@@ -111,50 +111,55 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
   let failure = "";
   let deflectionM = 0;
   const limitM = L / d.deflectionLimit;
+  // Per zone: the forces, and the sections for strength alone (they do not change between the
+  // deflection attempts below, which only raise the chord areas).
+  const withBendingFor = (chordN: number) => (s: ChsSection) => {
+    if (localMomentNm === 0) return true;
+    const c = chsResistance(s, { forceN: -chordN, effectiveLengthM: topLengthM, yieldPa: steel.yieldPa, curve: steel.curve });
+    return c !== null && c.utilisation + localMomentNm / (s.plasticModulusM3 * steel.yieldPa) <= 1;
+  };
+  const zoneBase = Array.from({ length: d.zones }, (_, z) => {
+    const x0 = edges[z]!;
+    const x1 = edges[z + 1]!;
+    const chordN = moment(d.ulsNPerM, x1) / d.depthM;
+    const chordUpN = moment(Math.min(0, d.upliftNPerM), x1) / d.depthM; // ≤ 0
+    const topForces = [
+      { forceN: -chordN, effectiveLengthM: topLengthM },
+      { forceN: -chordUpN, effectiveLengthM: topLengthM },
+    ];
+    const bottomForces = [
+      { forceN: chordN, effectiveLengthM: bottomLengthM },
+      { forceN: chordUpN, effectiveLengthM: bottomLengthM },
+    ];
+    const withBending = withBendingFor(chordN);
+    const shearN = Math.max(d.ulsNPerM, -d.upliftNPerM) * (half - x0);
+    const diagonalN = shearN / sinTheta;
+    const diagonal = pickChsFor(
+      sections,
+      [
+        { forceN: -diagonalN, effectiveLengthM: diagonalLengthM },
+        { forceN: diagonalN, effectiveLengthM: diagonalLengthM },
+      ],
+      steel,
+    );
+    return { x0, x1, chordN, topForces, bottomForces, withBending, diagonalN, diagonal, baseTop: pickChsFor(sections, topForces, steel, withBending), baseBottom: pickChsFor(sections, bottomForces, steel) };
+  });
   for (let attempt = 0; attempt < 12; attempt++) {
     zones.length = 0;
-    for (let z = 0; z < d.zones; z++) {
-      const x0 = edges[z]!;
-      const x1 = edges[z + 1]!;
-      const chordN = moment(d.ulsNPerM, x1) / d.depthM;
-      const chordUpN = moment(Math.min(0, d.upliftNPerM), x1) / d.depthM; // ≤ 0
-      const minArea = (force: number) => (s: ChsSection) => s.areaM2 >= areaScale.value * force;
-      const topForces = [
-        { forceN: -chordN, effectiveLengthM: topLengthM },
-        { forceN: -chordUpN, effectiveLengthM: topLengthM },
-      ];
-      const bottomForces = [
-        { forceN: chordN, effectiveLengthM: bottomLengthM },
-        { forceN: chordUpN, effectiveLengthM: bottomLengthM },
-      ];
-      const withBending = (s: ChsSection) => {
-        if (localMomentNm === 0) return true;
-        const c = chsResistance(s, { forceN: -chordN, effectiveLengthM: topLengthM, yieldPa: steel.yieldPa, curve: steel.curve });
-        return c !== null && c.utilisation + localMomentNm / (s.plasticModulusM3 * steel.yieldPa) <= 1;
-      };
-      const baseTop = pickChsFor(sections, topForces, steel, withBending);
-      const baseBottom = pickChsFor(sections, bottomForces, steel);
+    for (const b of zoneBase) {
+      const { baseTop, baseBottom, diagonal } = b;
       if (baseTop === null || baseBottom === null) {
-        failure = `no catalogue hollow section carries the chord force of ${(chordN / 1000).toFixed(0)} kN`;
+        failure = `no catalogue hollow section carries the chord force of ${(b.chordN / 1000).toFixed(0)} kN`;
         break;
       }
-      const top = pickChsFor(sections, topForces, steel, (s) => minArea(baseTop.section.areaM2)(s) && withBending(s));
-      const bottom = pickChsFor(sections, bottomForces, steel, minArea(baseBottom.section.areaM2));
-      const shearN = Math.max(d.ulsNPerM, -d.upliftNPerM) * (half - x0);
-      const diagonalN = shearN / sinTheta;
-      const diagonal = pickChsFor(
-        sections,
-        [
-          { forceN: -diagonalN, effectiveLengthM: diagonalLengthM },
-          { forceN: diagonalN, effectiveLengthM: diagonalLengthM },
-        ],
-        steel,
-      );
+      const minArea = (force: number) => (s: ChsSection) => s.areaM2 >= areaScale.value * force;
+      const top = attempt === 0 ? baseTop : pickChsFor(sections, b.topForces, steel, (s) => minArea(baseTop.section.areaM2)(s) && b.withBending(s));
+      const bottom = attempt === 0 ? baseBottom : pickChsFor(sections, b.bottomForces, steel, minArea(baseBottom.section.areaM2));
       if (top === null || bottom === null || diagonal === null) {
-        failure = diagonal === null ? `no catalogue hollow section carries the diagonal force of ${(diagonalN / 1000).toFixed(0)} kN over ${diagonalLengthM.toFixed(1)} m` : "no catalogue hollow section gives the chords the stiffness the deflection limit needs";
+        failure = diagonal === null ? `no catalogue hollow section carries the diagonal force of ${(b.diagonalN / 1000).toFixed(0)} kN over ${diagonalLengthM.toFixed(1)} m` : "no catalogue hollow section gives the chords the stiffness the deflection limit needs";
         break;
       }
-      zones.push({ x0M: x0, x1M: x1, top, bottom, diagonal, topForceN: -chordN, topMomentNm: localMomentNm, bottomForceN: chordN, diagonalForceN: diagonalN });
+      zones.push({ x0M: b.x0, x1M: b.x1, top, bottom, diagonal, topForceN: -b.chordN, topMomentNm: localMomentNm, bottomForceN: b.chordN, diagonalForceN: b.diagonalN });
     }
     if (failure !== "") break;
     const ei = zones.map((z) => {
