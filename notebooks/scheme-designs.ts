@@ -1,22 +1,13 @@
-// The designs of the study's enabled schemes, recomputed only when the brief or the scheme
-// settings change (not when a carbon factor or a rate is edited). Shared by the carbon and rates pages.
-import { computed, type ReadonlySignal } from "../src/notebook";
-import type { StudyStore } from "../src/notebook";
-import { SCHEMES, type Design } from "../src/schemes";
-import { designScheme } from "../src/pipeline";
-import { defaultCatalogue } from "../src/catalogue/default-catalogue";
+// The designs of the study's enabled schemes for the carbon and rates pages: each scheme's design
+// is the per-scheme signal of studySignals, so a factor or rate edit re-designs nothing.
+import { computed, studySignals, type ReadonlySignal, type StudyStore } from "../src/notebook";
+import type { Design } from "../src/schemes";
 
 export type SchemeDesign = { id: string; label: string; design: Design };
 
 export function schemeDesigns(store: StudyStore): ReadonlySignal<SchemeDesign[]> {
-  const brief = computed(() => store.study.value.brief);
-  const schemes = computed(() => store.study.value.schemes);
-  const catalogue = defaultCatalogue();
-  return computed(() => {
-    const b = brief.value;
-    const s = schemes.value;
-    return SCHEMES.filter((m) => s[m.id]?.enabled !== false).map((m) => ({ id: m.id, label: m.label, design: designScheme(m, b, s[m.id]?.options, catalogue) }));
-  });
+  const { schemes } = studySignals(store);
+  return computed(() => schemes.filter((s) => s.enabled.value).map((s) => ({ id: s.model.id, label: s.model.label, design: s.design.value })));
 }
 
 /** The areas of a design the assessments divide by. */
