@@ -72,6 +72,7 @@ reactiveCell(main, { id: "loads", title: "Design loads" }, () => {
 reactiveCell(main, { id: "geometry", title: "Roof geometry and floor" }, () => {
   const e = env.value;
   return keyValues([
+    ["Span / rise", `${fmt.one(brief.value.spanM / brief.value.riseM)} (rise/span ${fmt.two(brief.value.riseM / brief.value.spanM)})`],
     ["Sphere radius R", `${fmt.one(e.cap.radiusM)} m`],
     ["Edge angle φ0", `${fmt.one((e.cap.edgeAngleRad * 180) / Math.PI)}°`],
     ["Roof surface", `${fmt.int(e.cap.surfaceM2)} m²`],

@@ -1,7 +1,7 @@
 import { effect } from "@preact/signals-core";
 import { PAGES, CAUTION, type PageId } from "./pages";
 import { createStudyStore, type StudyStore } from "./study-store";
-import { studyFromJson, studyToJson, describeProblems } from "../study";
+import { studyFromJson, studyFileText, describeProblems } from "../study";
 import { downloadText } from "./download";
 
 export interface Page {
@@ -108,7 +108,7 @@ function studyTools(store: StudyStore, readOnly: boolean): HTMLElement {
   const open = button("Open study file…", () => file.click());
   const save = button("Save study file", () => {
     const slug = store.study.value.meta.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || "study";
-    downloadText(`${slug}.spanbook.json`, studyToJson(store.study.value), "application/json");
+    downloadText(`${slug}.spanbook.json`, studyFileText(store.study.value), "application/json");
   });
   const copy = button("Copy link", async () => {
     const url = `${location.origin}${location.pathname}${store.link.value}`;

@@ -2,6 +2,7 @@ import type { Study } from "./study";
 import { defaultStudy } from "./defaults";
 import { SCHEMES } from "../schemes";
 import { getIn } from "./patch";
+import { studyToJson } from "./load-study";
 
 /** One input of a study, as the assumptions record lists it. */
 export interface Assumption {
@@ -135,4 +136,14 @@ export function assumptionsRecord(study: Study, defaults: Study = defaultStudy()
   for (const [key, info] of Object.entries(ON_COST_FIELDS)) out.push(row("on-cost", ["cost", "onCosts", key], { ...info, source: "study" }, study, defaults));
   out.push(row("study", ["seed"], { label: "Random seed", unit: "", source: "study" }, study, defaults));
   return out;
+}
+
+/**
+ * The study as a file to keep: the study itself plus, under `assumptionsRecord`, every input with
+ * its default, unit, source and changed flag, so a reader of the file sees them without spanbook.
+ * The record is derived: on opening it is ignored (the schema drops unknown keys) and rebuilt.
+ */
+export function studyFileText(study: Study): string {
+  const record = assumptionsRecord(study).map(({ raw: _raw, key: _key, ...row }) => row);
+  return studyToJson({ ...study, assumptionsRecord: record } as Study);
 }

@@ -12,4 +12,4 @@ export { encodeStudyLink, decodeStudyLink } from "./link";
 export { readStoredStudy, writeStoredStudy, STORAGE_KEY, type KeyValueStore } from "./storage";
 export { setIn, getIn, diff, mergeDiff } from "./patch";
 export type { FieldProblem } from "./schema-helpers";
-export { assumptionsRecord, type Assumption } from "./assumptions";
+export { assumptionsRecord, studyFileText, type Assumption } from "./assumptions";

@@ -12,6 +12,7 @@ import {
   writeStoredStudy,
   STORAGE_KEY,
   setIn,
+  studyFileText,
   type KeyValueStore,
 } from "../../../src/study";
 
@@ -65,6 +66,15 @@ describe("validateStudy", () => {
 });
 
 describe("study files", () => {
+  it("keep the assumptions record beside the study, and reopen to the same study", () => {
+    const study = setIn(defaultStudy(), ["brief", "snowGroundKPa"], 1.1);
+    const text = studyFileText(study);
+    const parsed = JSON.parse(text) as { assumptionsRecord: { path: string; changed: boolean }[] };
+    expect(parsed.assumptionsRecord.filter((r) => r.changed).map((r) => r.path)).toEqual(["brief.snowGroundKPa"]);
+    const back = studyFromJson(text);
+    expect(back.ok && back.study).toEqual(study);
+  });
+
   it("round-trips through JSON", () => {
     const study = defaultStudy();
     const back = studyFromJson(studyToJson(study));
