@@ -10,6 +10,9 @@ export default defineConfig({
           name: "node",
           include: ["test/unit/**/*.test.ts", "test/reference/**/*.test.ts", "test/property/**/*.test.ts"],
           environment: "node",
+          // Property tests that run the risk pipeline take seconds; on a loaded 2-core machine the
+          // 5 s default was seen to cut one off. Wall time is never asserted, so allow plenty.
+          testTimeout: 60_000,
         },
       },
       {
