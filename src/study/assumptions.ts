@@ -3,6 +3,7 @@ import { defaultStudy } from "./defaults";
 import { SCHEMES } from "../schemes";
 import { getIn } from "./patch";
 import { studyToJson } from "./load-study";
+import { defaultRiskSettings } from "../risk/default-risk-settings";
 
 /** One input of a study, as the assumptions record lists it. */
 export interface Assumption {
@@ -96,7 +97,7 @@ function row(group: string, path: (string | number)[], info: FieldInfo, study: S
 }
 
 /**
- * Every input of a study — brief, scheme options, carbon factors and settings, rates, on-costs —
+ * Every input of a study — brief, scheme options, carbon factors and settings, rates, on-costs, risk ranges —
  * with its value, unit, default, source and whether it differs from the default. Table rows are
  * matched to their defaults by material or item id, so a reordered table is not "changed".
  */
@@ -135,6 +136,18 @@ export function assumptionsRecord(study: Study, defaults: Study = defaultStudy()
   });
   for (const [key, info] of Object.entries(ON_COST_FIELDS)) out.push(row("on-cost", ["cost", "onCosts", key], { ...info, source: "study" }, study, defaults));
   out.push(row("study", ["seed"], { label: "Random seed", unit: "", source: "study" }, study, defaults));
+  // Risk ranges: their defaults are the ones the study's own values imply (defaultRiskSettings).
+  const { risk, ...rest } = study;
+  const riskDefaults = { risk: defaultRiskSettings(rest) } as Study;
+  out.push(row("risk", ["risk", "samples"], { label: "Monte Carlo samples", unit: "", source: "study" }, study, riskDefaults));
+  risk.inputs.forEach((input, index) => {
+    const d = riskDefaults.risk.inputs.findIndex((i) => i.id === input.id);
+    for (const key of ["low", "mode", "high", "distribution", "group"] as const) {
+      out.push(
+        row("risk", ["risk", "inputs", index, key], { label: `${input.label}: ${key}`, unit: "", source: "risk range (common practice, no source)" }, study, riskDefaults, ["risk", "inputs", d < 0 ? -1 : d, key], `risk.inputs[${input.id}].${key}`),
+      );
+    }
+  });
   return out;
 }
 

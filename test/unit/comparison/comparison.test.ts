@@ -45,10 +45,17 @@ describe("spansOf", () => {
 describe("assumptionsRecord", () => {
   it("marks nothing changed for the defaults, and exactly the edited input otherwise", () => {
     expect(assumptionsRecord(defaultStudy()).filter((r) => r.changed)).toEqual([]);
+    const edited = setIn(defaultStudy(), ["brief", "eavesHeightM"], 15);
+    const changed = assumptionsRecord(edited).filter((r) => r.changed);
+    expect(changed.map((r) => r.path)).toEqual(["brief.eavesHeightM"]);
+    expect(changed[0]?.default).toBe("12");
+  });
+  it("flags a risk range left behind by an edit of its input", () => {
     const edited = setIn(defaultStudy(), ["brief", "snowGroundKPa"], 1.2);
     const changed = assumptionsRecord(edited).filter((r) => r.changed);
-    expect(changed.map((r) => r.path)).toEqual(["brief.snowGroundKPa"]);
-    expect(changed[0]?.default).toBe("0.6");
+    expect(changed[0]?.path).toBe("brief.snowGroundKPa");
+    expect(changed.slice(1).every((r) => r.group === "risk")).toBe(true);
+    expect(changed.some((r) => r.group === "risk" && r.path.endsWith(".mode"))).toBe(true);
   });
   it("lists every factor and rate row", () => {
     const study = defaultStudy();

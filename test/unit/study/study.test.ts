@@ -67,10 +67,10 @@ describe("validateStudy", () => {
 
 describe("study files", () => {
   it("keep the assumptions record beside the study, and reopen to the same study", () => {
-    const study = setIn(defaultStudy(), ["brief", "snowGroundKPa"], 1.1);
+    const study = setIn(defaultStudy(), ["brief", "eavesHeightM"], 15);
     const text = studyFileText(study);
     const parsed = JSON.parse(text) as { assumptionsRecord: { path: string; changed: boolean }[] };
-    expect(parsed.assumptionsRecord.filter((r) => r.changed).map((r) => r.path)).toEqual(["brief.snowGroundKPa"]);
+    expect(parsed.assumptionsRecord.filter((r) => r.changed).map((r) => r.path)).toEqual(["brief.eavesHeightM"]);
     const back = studyFromJson(text);
     expect(back.ok && back.study).toEqual(study);
   });
