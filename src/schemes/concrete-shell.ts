@@ -149,14 +149,16 @@ function design(brief: Brief, opts: ConcreteShellOptions, _catalogue: Catalogue)
 
   // Shell, thickened edge, ring: volumes and reinforcement.
   const edgeWidthM = Math.min(2.4 * Math.sqrt(R * t), R * phi0);
-  const edgeExtraM3 = 0.5 * (opts.edgeThickening - 1) * t * edgeWidthM * ringLengthM;
+  // The edge zone is the spherical zone from φ0 − w/R to φ0: 2πR²(cos(φ0 − w/R) − cos φ0), never more than the cap.
+  const edgeAreaM2 = 2 * Math.PI * R * R * (Math.cos(phi0 - edgeWidthM / R) - Math.cos(phi0));
+  const edgeExtraM3 = 0.5 * (opts.edgeThickening - 1) * t * edgeAreaM2;
   const shellM3 = t * cap.surfaceM2;
-  const edgeZoneM3 = t * edgeWidthM * ringLengthM + edgeExtraM3;
+  const edgeZoneM3 = t * edgeAreaM2 + edgeExtraM3;
   const rhoMin = minimumReinforcementRatio(concrete.fctmPa);
   const minimumRateKgPerM3 = 2 * rhoMin * 0.8 * STEEL_DENSITY_KG_PER_M3; // both ways, d ≈ 0.8 t
   const shellRate = Math.max(opts.shellRateKgPerM3, minimumRateKgPerM3);
   const hoopTieKg = s.maxHoopTensionNPerM > 0 ? (s.maxHoopTensionNPerM / fyd) * STEEL_DENSITY_KG_PER_M3 * 2 * Math.PI * R * R * (Math.cos(hoopSignChangeAngleRad()) - Math.cos(phi0)) : 0;
-  const shellRebarKg = shellRate * (shellM3 - t * edgeWidthM * ringLengthM) + hoopTieKg;
+  const shellRebarKg = shellRate * Math.max(0, shellM3 - t * edgeAreaM2) + hoopTieKg;
   const edgeRebarKg = Math.max(opts.edgeRateKgPerM3, minimumRateKgPerM3) * edgeZoneM3;
   const ringRebarKg = opts.ringRateKgPerM3 * ringVolumeM3;
   const concreteM3 = shellM3 + edgeExtraM3 + ringVolumeM3;
