@@ -32,8 +32,8 @@ import {
   type TransportMode,
 } from "../src/carbon";
 import { carbonChartOptions, chartCaption, CARBON_METRICS, targetApplies, type CarbonMetric, type SchemeCarbon } from "../src/charts";
-import { tableEditor, type EditorColumn } from "./table-editor";
-import { schemeDesigns, designAreas } from "./scheme-designs";
+import { tableEditor, type EditorColumn } from "../src/notebook";
+import { schemeDesigns, designAreas } from "../src/notebook";
 import * as v from "valibot";
 
 const { store, main } = startPage({

@@ -6,7 +6,7 @@ import { startPage, reactiveCell, staticCell, tableElement, downloadText, signal
 import { SCHEMES } from "../src/schemes";
 import { assumptionsRecord, studyFromJson, describeProblems, type Study } from "../src/study";
 import { compareStudies, HEADLINE_METRICS, type SchemeDelta } from "../src/comparison";
-import { defaultCatalogue } from "../src/catalogue/default-catalogue";
+import { defaultCatalogue } from "../src/catalogue";
 import { csvFormat } from "d3";
 
 const { store, main } = startPage({

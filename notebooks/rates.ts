@@ -21,8 +21,8 @@ import {
 import { setIn } from "../src/study";
 import { assessCost, rebaseRateRows, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
 import { costChartOptions, chartCaption, type SchemeCost } from "../src/charts";
-import { tableEditor, type EditorColumn } from "./table-editor";
-import { schemeDesigns, designAreas } from "./scheme-designs";
+import { tableEditor, type EditorColumn } from "../src/notebook";
+import { schemeDesigns, designAreas } from "../src/notebook";
 
 const { store, main } = startPage({
   id: "rates",

@@ -9,7 +9,7 @@ import { checkRiskInputs, RISK_LIMITS, RISK_METRICS, RISK_METRIC_LABELS, type Ri
 import type { RiskWorkerReply, RiskWorkerRequest } from "../src/risk/risk-worker-messages";
 import type { Study } from "../src/study";
 import type { SchemeId } from "../src/schemes";
-import { riskInputsEditor, ensureRiskStyle } from "./risk-inputs-editor";
+import { riskInputsEditor, ensureRiskStyle } from "../src/notebook";
 
 const { store, main } = startPage({
   id: "risk",

@@ -6,3 +6,4 @@ export { buildCatalogue, type CatalogueTexts } from "./build-catalogue";
 export { pickLightestChs, chsResistance, type ChsDemand, type ChsChoice } from "./pick-chs";
 export { parseCsvTable, CsvError, type CsvProblem, type ColumnSpec } from "./csv-table";
 export { pickLightestStrand, strandResistanceN, type StrandChoice, type StrandDesignOptions } from "./pick-strand";
+export { defaultCatalogue, CATALOGUE_TEXTS } from "./default-catalogue";

@@ -14,3 +14,6 @@ export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSumm
 export { studySignals, type SchemeSignals, type StudySignals } from "./scheme-signals";
 export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";
+export { tableEditor, type EditorColumn } from "./table-editor";
+export { schemeDesigns, designAreas, type SchemeDesign } from "./scheme-designs";
+export { riskInputsEditor, ensureRiskStyle } from "./risk-inputs-editor";

@@ -3,9 +3,10 @@
 // add or remove rows the defaults do not have, import CSV (every bad line and column listed,
 // nothing applied unless the whole file is valid) and export CSV. Shared by the carbon and rates pages.
 import type * as v from "valibot";
-import { effect, computed, downloadText, type ReadonlySignal } from "../src/notebook";
-import { checkRowEdit } from "../src/carbon";
-import { CsvError } from "../src/catalogue";
+import { effect, computed, type ReadonlySignal } from "@preact/signals-core";
+import { downloadText } from "./download";
+import { checkRowEdit } from "../carbon";
+import { CsvError } from "../catalogue";
 
 export type EditorColumn<R> = {
   field: keyof R & string;

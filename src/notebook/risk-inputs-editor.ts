@@ -1,9 +1,10 @@
 // The uncertain-inputs table of the risk page: low / mode / high / distribution / group per input,
 // each edit checked against the whole study (checkRiskInputs) before it is applied; an invalid
 // edit shows its message in the row and changes nothing.
-import { computed, effect, type StudyStore } from "../src/notebook";
-import { setIn, getIn } from "../src/study";
-import { checkRiskInputs, defaultRiskSettings, formatPath, DISTRIBUTION_KINDS, type UncertainInput } from "../src/risk";
+import { computed, effect } from "@preact/signals-core";
+import type { StudyStore } from "./study-store";
+import { setIn, getIn } from "../study";
+import { checkRiskInputs, defaultRiskSettings, formatPath, DISTRIBUTION_KINDS, type UncertainInput } from "../risk";
 
 const STYLE_ID = "risk-editor-style";
 const CSS = `

@@ -1,7 +1,9 @@
 // The designs of the study's enabled schemes for the carbon and rates pages: each scheme's design
 // is the per-scheme signal of studySignals, so a factor or rate edit re-designs nothing.
-import { computed, studySignals, type ReadonlySignal, type StudyStore } from "../src/notebook";
-import type { Design } from "../src/schemes";
+import { computed, type ReadonlySignal } from "@preact/signals-core";
+import { studySignals } from "./scheme-signals";
+import type { StudyStore } from "./study-store";
+import type { Design } from "../schemes";
 
 export type SchemeDesign = { id: string; label: string; design: Design };
 
