@@ -9,7 +9,7 @@ import { iterateSelfWeight, ConvergenceError } from "./converge";
 import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeUndersideM } from "./cable-dome-geometry";
 import { sizeCableDome, SizingError, type DomeSizing } from "./cable-dome-sizing";
 import { designCompressionRing, PLAIN_CONCRETE_DENSITY_KG_PER_M3, type RingMaterial } from "./compression-ring";
-import { FABRIC_CHOICES, fabricCostItem, findFabric } from "./tension-common";
+import { FABRIC_CHOICES, TENSION_COMMON_OPTIONS, fabricCostItem, findFabric } from "./tension-common";
 import { checkSchemeOptions } from "./check-options";
 
 export type CableDomeOptions = {
@@ -61,15 +61,10 @@ const options: readonly OptionSpec[] = [
   { key: "hoops", label: "Hoops (0 = automatic)", kind: "number", unit: "", min: 0, max: 8, step: 1, integer: true, source: "automatic: one per 27.5 m of radius, common practice 20–35 m (no source); fewer where the outer members cannot be made" },
   { key: "centralRingRatio", label: "Central ring radius / plan radius", kind: "number", unit: "", min: 0.03, max: 0.3, step: 0.01, source: "common practice, no source" },
   { key: "postHeightRatio", label: "Diagonal rise per bay", kind: "number", unit: "", min: 0.05, max: 1.0, step: 0.01, source: "common practice, no source" },
-  { key: "residualPrestress", label: "Residual prestress under ULS", kind: "number", unit: "", min: 0, max: 0.5, step: 0.05, source: "common practice, no source" },
-  { key: "gammaR", label: "γR for strands", kind: "number", unit: "", min: 0.9, max: 1.5, step: 0.05, source: "EN 1993-1-11:2006 §6.2 (from memory)" },
   { key: "ringMaterial", label: "Compression ring", kind: "select", unit: "", choices: [{ value: "concrete", label: "Reinforced concrete" }, { value: "steel", label: "Steel box" }], source: "design choice" },
   { key: "ringCableRestraint", label: "Ridge cables restrain ring buckling", kind: "toggle", unit: "", source: "ring on elastic foundation (from memory); off: bare ring 3EI/R³, Timoshenko & Gere ch. 7" },
   { key: "fabric", label: "Fabric", kind: "select", unit: "", choices: FABRIC_CHOICES, source: "data/fabrics.csv" },
-  { key: "fabricAllowancePct", label: "Fabric seams and waste", kind: "number", unit: "%", min: 0, max: 30, step: 1, source: "common practice, no source" },
-  { key: "fabricSagRatio", label: "Fabric panel sag / span", kind: "number", unit: "", min: 0.04, max: 0.15, step: 0.01, source: "common practice, no source" },
-  { key: "fabricStrengthFactor", label: "Fabric strength factor", kind: "number", unit: "", min: 2, max: 10, step: 0.5, source: "common practice for coated fabrics (from memory)" },
-  { key: "steelYieldMPa", label: "Steel yield strength", kind: "number", unit: "MPa", min: 235, max: 460, step: 5, source: "EN 1993-1-1 Table 3.1" },
+  ...TENSION_COMMON_OPTIONS,
 ];
 
 const validSpanM = { min: 40, max: 250 };

@@ -11,7 +11,7 @@ import { cableNetLayout, cableNetPlan, cableNetSection } from "./cable-net-geome
 import { sizeCableNet, type NetSizing } from "./cable-net-sizing";
 import { SizingError } from "./cable-dome-sizing";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "./compression-ring";
-import { FABRIC_CHOICES, fabricCostItem, findFabric } from "./tension-common";
+import { FABRIC_CHOICES, TENSION_COMMON_OPTIONS, fabricCostItem, findFabric } from "./tension-common";
 import { checkSchemeOptions } from "./check-options";
 
 export type CableNetOptions = {
@@ -66,12 +66,7 @@ const options: readonly OptionSpec[] = [
   { key: "fabric", label: "Fabric", kind: "select", unit: "", choices: FABRIC_CHOICES, source: "data/fabrics.csv" },
   { key: "mastType", label: "Mast type", kind: "select", unit: "", choices: [{ value: "plain", label: "Plain tube (buckles over full length)" }, { value: "braced", label: "Braced at mid-height (half length)" }], source: "assumption: braced L_cr = L/2" },
   { key: "anchorUpliftMargin", label: "Anchor weight / uplift", kind: "number", unit: "", min: 1.0, max: 3.0, step: 0.05, source: "EN 1990 Table A1.2(A): 1/0.9" },
-  { key: "residualPrestress", label: "Residual prestress under ULS", kind: "number", unit: "", min: 0, max: 0.5, step: 0.05, source: "common practice, no source" },
-  { key: "gammaR", label: "γR for strands", kind: "number", unit: "", min: 0.9, max: 1.5, step: 0.05, source: "EN 1993-1-11:2006 §6.2 (from memory)" },
-  { key: "fabricAllowancePct", label: "Fabric seams and waste", kind: "number", unit: "%", min: 0, max: 30, step: 1, source: "common practice, no source" },
-  { key: "fabricSagRatio", label: "Fabric panel sag / span", kind: "number", unit: "", min: 0.04, max: 0.15, step: 0.01, source: "common practice, no source" },
-  { key: "fabricStrengthFactor", label: "Fabric strength factor", kind: "number", unit: "", min: 2, max: 10, step: 0.5, source: "common practice for coated fabrics (from memory)" },
-  { key: "steelYieldMPa", label: "Steel yield strength", kind: "number", unit: "MPa", min: 235, max: 460, step: 5, source: "EN 1993-1-1 Table 3.1" },
+  ...TENSION_COMMON_OPTIONS,
 ];
 
 const validSpanM = { min: 60, max: 400 };

@@ -1,5 +1,6 @@
 import type { Catalogue, Fabric } from "../catalogue/types";
 import type { CostItemId } from "../takeoff/takeoff-row";
+import type { OptionSpec } from "./types";
 
 /** Fabric ids offered by the tension schemes (rows of data/fabrics.csv). */
 export const FABRIC_CHOICES = [
@@ -23,3 +24,13 @@ export function fabricCostItem(fabric: Fabric): CostItemId {
   if (fabric.material === "fabric-pvc-polyester") return "fabric-pvc-polyester";
   return "etfe-cushion";
 }
+
+/** Options both tension schemes have, with the same ranges and sources: prestress, strands, fabric, steel. */
+export const TENSION_COMMON_OPTIONS: readonly OptionSpec[] = [
+  { key: "residualPrestress", label: "Residual prestress under ULS", kind: "number", unit: "", min: 0, max: 0.5, step: 0.05, source: "common practice, no source" },
+  { key: "gammaR", label: "γR for strands", kind: "number", unit: "", min: 0.9, max: 1.5, step: 0.05, source: "EN 1993-1-11:2006 §6.2 (from memory)" },
+  { key: "fabricAllowancePct", label: "Fabric seams and waste", kind: "number", unit: "%", min: 0, max: 30, step: 1, source: "common practice, no source" },
+  { key: "fabricSagRatio", label: "Fabric panel sag / span", kind: "number", unit: "", min: 0.04, max: 0.15, step: 0.01, source: "common practice, no source" },
+  { key: "fabricStrengthFactor", label: "Fabric strength factor", kind: "number", unit: "", min: 2, max: 10, step: 0.5, source: "common practice for coated fabrics (from memory)" },
+  { key: "steelYieldMPa", label: "Steel yield strength", kind: "number", unit: "MPa", min: 235, max: 460, step: 5, source: "EN 1993-1-1 Table 3.1" },
+];
