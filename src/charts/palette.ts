@@ -8,9 +8,3 @@ export const SCHEME_COLOURS: Readonly<Record<SchemeId, string>> = {
   "truss-roof": "#CC79A7",
   "concrete-shell": "#7f7f7f",
 };
-
-/** Plot colour scale options for schemes, in a fixed domain order. */
-export function schemeColourScale(labels: Readonly<Record<SchemeId, string>>) {
-  const ids = Object.keys(SCHEME_COLOURS) as SchemeId[];
-  return { domain: ids.map((id) => labels[id]), range: ids.map((id) => SCHEME_COLOURS[id]), legend: true };
-}

@@ -1,15 +1,5 @@
 import type { PartialFactors, UlsExpression } from "../study/brief";
 
-/** Characteristic actions on a roof, all as uniform pressures, kPa. */
-export interface CharacteristicActions {
-  /** Permanent G_k. */
-  permanentKPa: number;
-  /** Leading variable action Q_k,1 (snow or imposed). */
-  leadingKPa: number;
-  /** Accompanying wind pressure (downward), W_k. */
-  windKPa: number;
-}
-
 export interface UlsResult {
   valueKPa: number;
   /** Which expression gave the value. */

@@ -1,7 +1,7 @@
 // Mechanics: small pure published formulas. Schemes compose these; they do not re-derive them.
 
 // geometry
-export { sphericalCap, capHeightAt, capAngleAt, type SphericalCap } from "./spherical-cap";
+export { sphericalCap, capHeightAt, type SphericalCap } from "./spherical-cap";
 export { usableFloorAreaM2, capUsableRadiusM } from "./usable-floor";
 export { airDensityKgPerM3, enclosedAirMassKg } from "./air";
 

@@ -46,8 +46,3 @@ export function capHeightAt(cap: SphericalCap, rM: number): number {
   const r = Math.min(Math.abs(rM), cap.baseRadiusM);
   return Math.sqrt(cap.radiusM * cap.radiusM - r * r) - (cap.radiusM - cap.riseM);
 }
-
-/** Meridional angle φ from the crown at plan radius r, rad. */
-export function capAngleAt(cap: SphericalCap, rM: number): number {
-  return Math.asin(Math.min(1, Math.abs(rM) / cap.radiusM));
-}

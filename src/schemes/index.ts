@@ -1,5 +1,5 @@
 // Schemes: one module per structural system, all with the same SchemeModel interface.
-import type { SchemeModel, SchemeId, SchemeOptions } from "./types";
+import type { SchemeModel, SchemeOptions } from "./types";
 import { cableDome } from "./cable-dome";
 import { cableNet } from "./cable-net";
 import { geodesicDome } from "./geodesic-dome";
@@ -7,7 +7,6 @@ import { trussRoof } from "./truss-roof";
 import { concreteShell } from "./concrete-shell";
 
 export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
-export { SCHEME_IDS } from "./types";
 export { assembleDesign, infeasibleDesign, check, type DesignParts } from "./assemble-design";
 export { iterateSelfWeight, ConvergenceError, type Converged } from "./converge";
 export { checkSchemeOptions } from "./check-options";
@@ -21,8 +20,3 @@ export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
   trussRoof,
   concreteShell,
 ];
-
-/** The scheme with this id, or undefined. */
-export function schemeById(id: string): SchemeModel<SchemeOptions> | undefined {
-  return SCHEMES.find((s) => s.id === (id as SchemeId));
-}

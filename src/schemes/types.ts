@@ -4,7 +4,6 @@ import type { MaterialId } from "../materials";
 import type { TakeoffRow } from "../takeoff/takeoff-row";
 
 export type SchemeId = "cable-dome" | "cable-net" | "geodesic-dome" | "truss-roof" | "concrete-shell";
-export const SCHEME_IDS: readonly SchemeId[] = ["cable-dome", "cable-net", "geodesic-dome", "truss-roof", "concrete-shell"];
 
 /** A scheme option's value as the study file stores it. */
 export type OptionValue = number | string | boolean;
