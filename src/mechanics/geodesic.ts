@@ -73,6 +73,14 @@ function normalise(p: Vec3): Vec3 {
   return [p[0] / n, p[1] / n, p[2] / n];
 }
 
+/** Raised when not one sub-triangle of the given frequency fits inside the cap (the mesh is too coarse). */
+export class CapTooSmallError extends RangeError {
+  constructor(message: string) {
+    super(message);
+    this.name = "CapTooSmallError";
+  }
+}
+
 /**
  * Class I geodesic sphere (capAngle = π) or cap of half-angle φ0: keeps the sub-triangles whose three
  * corners lie on or above the cut plane z = R cos φ0, with their edges and nodes; the nodes on the
@@ -83,7 +91,7 @@ function normalise(p: Vec3): Vec3 {
  * @param radiusM sphere radius R, m
  * @param capAngleRad φ0, 0 < φ0 ≤ π
  * @throws when v is not a whole number 1–400, R ≤ 0 or φ0 outside (0, π], or when not one
- *   sub-triangle fits inside the cap
+ *   sub-triangle fits inside the cap (CapTooSmallError)
  */
 export function geodesicCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
   if (!(Number.isInteger(frequency) && frequency >= 1 && frequency <= 400)) throw new RangeError(`invalid geodesic frequency: ${frequency} (expected a whole number 1–400)`);
@@ -187,7 +195,7 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
   }
 
   if (faces.length === 0) {
-    throw new RangeError(`invalid cap: no whole triangle of frequency ${v} fits within φ0 = ${capAngleRad.toFixed(4)} rad (expected a larger cap or a higher frequency)`);
+    throw new CapTooSmallError(`invalid cap: no whole triangle of frequency ${v} fits within φ0 = ${capAngleRad.toFixed(4)} rad (expected a larger cap or a higher frequency)`);
   }
   // Edges of the kept faces, each once, with the number of faces using it. A node has at most six
   // neighbours, so each edge is found by scanning its lower node's six slots.

@@ -4,7 +4,7 @@ import type { TakeoffRow } from "../takeoff/takeoff-row";
 import type { Check, DrawingLine, MemberGroup, SchemeModel } from "./types";
 import { sphericalCap, capHeightAt } from "../mechanics/spherical-cap";
 import { capUsableRadiusM } from "../mechanics/usable-floor";
-import { geodesicCap, geodesicFrequencyFor, strutLengths } from "../mechanics/geodesic";
+import { CapTooSmallError, geodesicCap, geodesicFrequencyFor, strutLengths } from "../mechanics/geodesic";
 import { hoopSignChangeAngleRad } from "../mechanics/spherical-membrane";
 import { roofActions } from "../loads/roof-actions";
 import { assembleDesign, check, infeasibleDesign } from "./assemble-design";
@@ -103,7 +103,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue) {
   try {
     mesh = cachedCap(frequency, R, cap.edgeAngleRad);
   } catch (e) {
-    if (e instanceof RangeError && e.message.startsWith("invalid cap")) return infeasibleDesign("geodesic-dome", brief, "the mesh is too coarse for so small a cap: reduce the target strut length", [], section);
+    if (e instanceof CapTooSmallError) return infeasibleDesign("geodesic-dome", brief, "the mesh is too coarse for so small a cap: reduce the target strut length", [], section);
     throw e;
   }
   const bands = strutBands(mesh, Math.min(opts.bands, Math.max(1, Math.floor(frequency / 2))));
