@@ -15,7 +15,7 @@ for (const page of PAGES) {
   const a = document.createElement("a");
   a.href = `./${page.file}`;
   a.textContent = page.title;
-  li.append(a, ` — for the ${page.who}`);
+  li.append(a, ` — for ${page.who === "everyone" ? "everyone" : `the ${page.who}`}`);
   list.append(li);
 }
 main.append(caution, list);
