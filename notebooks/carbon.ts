@@ -15,7 +15,11 @@ import {
   selectControl,
   toggleControl,
   controlGroup,
+  tableEditor,
+  schemeDesigns,
+  designAreas,
   type Binding,
+  type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
 import {
@@ -32,8 +36,6 @@ import {
   type TransportMode,
 } from "../src/carbon";
 import { carbonChartOptions, chartCaption, CARBON_METRICS, targetApplies, type CarbonMetric, type SchemeCarbon } from "../src/charts";
-import { tableEditor, type EditorColumn } from "../src/notebook";
-import { schemeDesigns, designAreas } from "../src/notebook";
 import * as v from "valibot";
 
 const { store, main } = startPage({

@@ -10,19 +10,21 @@ import {
   chartFigure,
   computed,
   signal,
-  effect,
   fmt,
   tableElement,
   numberControl,
   toggleControl,
+  textControl,
   controlGroup,
+  tableEditor,
+  schemeDesigns,
+  designAreas,
   type Binding,
+  type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
 import { assessCost, rebaseRateRows, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
 import { costChartOptions, chartCaption, type SchemeCost } from "../src/charts";
-import { tableEditor, type EditorColumn } from "../src/notebook";
-import { schemeDesigns, designAreas } from "../src/notebook";
 
 const { store, main } = startPage({
   id: "rates",
@@ -53,37 +55,15 @@ const pct = (field: keyof OnCosts, label: string, max: number, hint: string, min
 
 /** A text field checked by one field of the on-costs schema; an invalid value is not applied. */
 function textField(field: "priceBase" | "currency", label: string, hint: string): HTMLElement {
-  const wrap = document.createElement("div");
-  wrap.className = "control";
-  const l = document.createElement("label");
-  l.htmlFor = field;
-  l.textContent = label;
-  const input = document.createElement("input");
-  input.type = "text";
-  input.id = field;
-  input.size = 8;
-  const message = document.createElement("div");
-  message.className = "control-message";
-  message.id = `${field}-message`;
-  input.setAttribute("aria-describedby", message.id);
-  const h = document.createElement("div");
-  h.className = "control-hint";
-  h.textContent = hint;
-  input.addEventListener("input", () => {
-    const result = v.safeParse(OnCostsSchema.entries[field], input.value.trim());
-    message.textContent = result.success ? "" : `${label}: ${result.issues[0]?.message ?? "invalid"}`;
-    wrap.classList.toggle("invalid", !result.success);
-    if (result.success) store.study.value = setIn(store.study.value, [...path, field], result.output);
+  return textControl(store.bind<string>([...path, field]), {
+    id: field,
+    label,
+    hint,
+    check: (raw) => {
+      const result = v.safeParse(OnCostsSchema.entries[field], raw);
+      return result.success ? null : (result.issues[0]?.message ?? "invalid");
+    },
   });
-  effect(() => {
-    const value = onCosts.value[field];
-    if (wrap.classList.contains("invalid") && document.activeElement === input) return;
-    input.value = value;
-    wrap.classList.remove("invalid");
-    message.textContent = "";
-  });
-  wrap.append(l, input, message, h);
-  return wrap;
 }
 
 staticCell(

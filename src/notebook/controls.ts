@@ -108,6 +108,57 @@ export function numberControl(binding: Binding<number>, options: NumberControlOp
   return wrap;
 }
 
+export interface TextControlOptions {
+  label: string;
+  id?: string;
+  hint?: string;
+  size?: number;
+  /** The message for a value that is not allowed, or null when it is (then it is applied). */
+  check: (raw: string) => string | null;
+}
+
+/** A text field checked on every keystroke: an inline message for a value not allowed, which is then not applied. */
+export function textControl(binding: Binding<string>, options: TextControlOptions): HTMLElement {
+  const id = options.id ?? uid("txt");
+  const wrap = document.createElement("div");
+  wrap.className = "control control-text";
+  const label = document.createElement("label");
+  label.htmlFor = id;
+  label.textContent = options.label;
+  const input = document.createElement("input");
+  input.type = "text";
+  input.id = id;
+  input.size = options.size ?? 8;
+  const message = document.createElement("div");
+  message.className = "control-message";
+  message.id = `${id}-message`;
+  message.setAttribute("aria-live", "polite");
+  input.setAttribute("aria-describedby", message.id);
+  wrap.append(label, input, message);
+  if (options.hint) {
+    const hint = document.createElement("div");
+    hint.className = "control-hint";
+    hint.textContent = options.hint;
+    wrap.append(hint);
+  }
+  input.addEventListener("input", () => {
+    const raw = input.value.trim();
+    const problem = options.check(raw);
+    message.textContent = problem === null ? "" : `${options.label}: ${problem}`;
+    input.setAttribute("aria-invalid", problem === null ? "false" : "true");
+    wrap.classList.toggle("invalid", problem !== null);
+    if (problem === null) binding.set(raw);
+  });
+  effect(() => {
+    const value = binding.value.value;
+    if (wrap.classList.contains("invalid") && document.activeElement === input) return;
+    input.value = value;
+    wrap.classList.remove("invalid");
+    message.textContent = "";
+  });
+  return wrap;
+}
+
 export interface SelectControlOptions {
   label: string;
   choices: readonly { value: string; label: string }[];

@@ -1,6 +1,6 @@
 // The notebook runtime: reactive cells, controls, page layout, study store, downloads.
 export { reactiveCell, staticCell, errorBox, type Cell, type CellContent, type CellOptions } from "./cell";
-export { numberControl, selectControl, toggleControl, controlGroup, type Binding, type NumberControlOptions } from "./controls";
+export { numberControl, selectControl, toggleControl, textControl, controlGroup, type Binding, type NumberControlOptions, type TextControlOptions } from "./controls";
 export { startPage, type Page, type PageOptions } from "./page";
 export { createStudyStore, type StudyStore } from "./study-store";
 export { PAGES, CAUTION, type PageId } from "./pages";
