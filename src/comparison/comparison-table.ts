@@ -1,4 +1,3 @@
-import * as aq from "arquero";
 import { headline, type Headline, type SchemeResult } from "../pipeline";
 
 /** Columns of the side-by-side table: key in the headline, heading with unit, digits. */
@@ -24,12 +23,15 @@ function concreteTonnes(result: SchemeResult): number {
   return result.design.takeoff.filter((r) => r.unit === "m3" && r.material !== null && r.material.startsWith("concrete")).reduce((s, r) => s + r.massKg, 0) / 1000;
 }
 
+/** One row of the side-by-side comparison: the columns of COMPARISON_COLUMNS, plus `id`. */
+export type ComparisonRow = Record<(typeof COMPARISON_COLUMNS)[number]["key"] | "id", string | number | null>;
+
 /**
- * The side-by-side comparison as an arquero table, one row per scheme, with the columns of
- * COMPARISON_COLUMNS (plus `id`).
+ * The side-by-side comparison, one row per scheme, with the columns of COMPARISON_COLUMNS (plus
+ * `id`). Plain objects: five rows and two derived columns need no table library.
  */
-export function comparisonTable(results: readonly SchemeResult[]): aq.ColumnTable {
-  const rows = results.map((r) => {
+export function comparisonTable(results: readonly SchemeResult[]): ComparisonRow[] {
+  return results.map((r) => {
     const h: Headline = headline(r);
     return {
       id: h.id,
@@ -40,26 +42,19 @@ export function comparisonTable(results: readonly SchemeResult[]): aq.ColumnTabl
       cable_t: h.cable_t,
       fabric_t: h.fabric_t,
       concrete_t: concreteTonnes(r),
-      carbon_kgco2e: h.carbon_total_kgco2e,
+      carbon_t: h.carbon_total_kgco2e === null ? null : h.carbon_total_kgco2e / 1000,
       carbon_kgco2e_per_m2_floor: h.carbon_kgco2e_per_m2_floor,
-      cost_total: h.cost_total,
+      cost_m: h.cost_total === null ? null : h.cost_total / 1e6,
       cost_per_m2_floor: h.cost_per_m2_floor,
       governing: h.feasible ? `${h.governing} (${h.max_utilisation.toFixed(2)})` : "",
       verdict: h.feasible ? "yes" : `no: ${h.reason}`,
       warning_count: h.warnings.length,
     };
   });
-  return aq
-    .from(rows)
-    .derive({
-      carbon_t: (d: { carbon_kgco2e: number | null }) => (d.carbon_kgco2e === null ? null : d.carbon_kgco2e / 1000),
-      cost_m: (d: { cost_total: number | null }) => (d.cost_total === null ? null : d.cost_total / 1e6),
-    });
 }
 
 /** The table as header + text rows for display and CSV, formatted with each column's digits. */
-export function comparisonRows(table: aq.ColumnTable): { header: string[]; rows: string[][] } {
-  const objects = table.objects() as Record<string, unknown>[];
+export function comparisonRows(objects: readonly ComparisonRow[]): { header: string[]; rows: string[][] } {
   return {
     header: COMPARISON_COLUMNS.map((c) => c.heading),
     rows: objects.map((o) =>
