@@ -16,6 +16,14 @@ export {
   type BucklingCurve,
 } from "./flexural-buckling";
 
+// timber members (EN 1995-1-1, EN 1995-1-2)
+export { timberRelativeSlenderness, timberBucklingFactor, GLULAM_BETA_C } from "./timber-column-buckling";
+export { glulamKMod, GLULAM_K_MOD, LOAD_DURATION_CLASSES, type LoadDurationClass, type ServiceClass } from "./timber-kmod";
+export { timberDesignStrengthPa, TIMBER_GAMMA_M } from "./timber-gamma-m";
+export { timberCompressionBendingUtilisation, type TimberCompressionBending } from "./timber-combined-compression";
+export { creepReducedModulusPa, GLULAM_K_DEF } from "./timber-creep";
+export { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "./timber-charring";
+
 // concrete (EN 1992-1-1)
 export {
   concreteProperties,

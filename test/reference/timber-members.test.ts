@@ -1,0 +1,74 @@
+import { describe, it, expect } from "vitest";
+import {
+  timberRelativeSlenderness,
+  timberBucklingFactor,
+  glulamKMod,
+  TIMBER_GAMMA_M,
+  timberDesignStrengthPa,
+  timberCompressionBendingUtilisation,
+  creepReducedModulusPa,
+  GLULAM_K_DEF,
+  GLULAM_BETA_C,
+} from "../../src/mechanics";
+import { expectAbsClose, expectRelClose } from "../helpers/close";
+
+describe("k_c of a glulam column (EN 1995-1-1 §6.3.2, eqs 6.25–6.29, β_c = 0.1)", () => {
+  // By hand from eqs 6.27/6.25: k = 0.5[1 + β_c(λ_rel − 0.3) + λ_rel²], k_c = 1/(k + √(k² − λ_rel²)).
+  it("β_c = 0.1 for glulam (eq. 6.29)", () => expect(GLULAM_BETA_C).toBe(0.1));
+  it("λ_rel = 0.5 → k = 0.635, √(0.403225 − 0.25) = 0.391440, k_c = 1/1.026440 = 0.97424", () =>
+    expectAbsClose(timberBucklingFactor(0.5), 0.97424, 1e-5));
+  it("λ_rel = 1.0 → k = 1.035, √(1.071225 − 1) = 0.266880, k_c = 1/1.301880 = 0.76812", () =>
+    expectAbsClose(timberBucklingFactor(1.0), 0.76812, 1e-5));
+  it("λ_rel = 2.0 → k = 2.585, √(6.682225 − 4) = 1.637750, k_c = 1/4.222750 = 0.23681", () =>
+    expectAbsClose(timberBucklingFactor(2.0), 0.23681, 1e-5));
+  it("k_c = 1 at and below λ_rel = 0.3 (§6.3.2(2))", () => {
+    expect(timberBucklingFactor(0.3)).toBe(1);
+    expect(timberBucklingFactor(0)).toBe(1);
+  });
+  it("solid timber (β_c = 0.2) buckles earlier than glulam at the same λ_rel", () =>
+    expect(timberBucklingFactor(1.0, 0.2)).toBeLessThan(timberBucklingFactor(1.0)));
+  it("λ_rel,c = (λ/π)√(f_c,0,k/E_0,05) (eq. 6.21): GL24h, λ = 100 → (100/π)·√(24/9600) = 31.831 × 0.05 = 1.59155", () =>
+    expectAbsClose(timberRelativeSlenderness(100, 24e6, 9.6e9), 1.59155, 1e-5));
+  it("refuses a negative slenderness, naming it", () => expect(() => timberBucklingFactor(-1)).toThrow(/relative slenderness/));
+});
+
+describe("k_mod, γ_M and design strength (EN 1995-1-1 Tables 3.1 and 2.3, eq. 2.14)", () => {
+  // Table 3.1, glued laminated timber (EN 14080) rows, service classes 1 and 2 equal.
+  const sc12 = { permanent: 0.6, "long-term": 0.7, "medium-term": 0.8, "short-term": 0.9, instantaneous: 1.1 } as const;
+  const sc3 = { permanent: 0.5, "long-term": 0.55, "medium-term": 0.65, "short-term": 0.7, instantaneous: 0.9 } as const;
+  for (const [duration, value] of Object.entries(sc12)) {
+    it(`k_mod(${duration}, SC1) = k_mod(${duration}, SC2) = ${value}`, () => {
+      expect(glulamKMod(duration as keyof typeof sc12, 1)).toBe(value);
+      expect(glulamKMod(duration as keyof typeof sc12, 2)).toBe(value);
+    });
+  }
+  for (const [duration, value] of Object.entries(sc3)) {
+    it(`k_mod(${duration}, SC3) = ${value}`, () => expect(glulamKMod(duration as keyof typeof sc3, 3)).toBe(value));
+  }
+  it("γ_M = 1.25 for glued laminated timber, 1.3 solid timber and connections (Table 2.3)", () => {
+    expect(TIMBER_GAMMA_M.glulam).toBe(1.25);
+    expect(TIMBER_GAMMA_M.solidTimber).toBe(1.3);
+    expect(TIMBER_GAMMA_M.connections).toBe(1.3);
+  });
+  it("f_c,0,d of GL24h, short-term, SC2: 0.9 × 24 / 1.25 = 17.28 MPa (eq. 2.14)", () =>
+    expectRelClose(timberDesignStrengthPa(24e6, glulamKMod("short-term", 2), TIMBER_GAMMA_M.glulam), 17.28e6, 1e-12));
+  it("names an unknown service class", () => expect(() => glulamKMod("permanent", 4 as 1)).toThrow(/service class/));
+});
+
+describe("combined compression and bending with buckling (EN 1995-1-1 eqs 6.23/6.24)", () => {
+  // By hand: σc = 8, fc = 16, kc,y = 0.8, kc,z = 0.5, σm,y = 4, fm = 16 MPa, km = 0.7 (rectangular, §6.1.6(2)).
+  // eq. 6.23: 8/(0.8·16) + 4/16 = 0.625 + 0.25 = 0.875; eq. 6.24: 8/(0.5·16) + 0.7·4/16 = 1 + 0.175 = 1.175.
+  const member = { compressionPa: 8e6, compressionStrengthPa: 16e6, kcY: 0.8, kcZ: 0.5, bendingYPa: 4e6, bendingZPa: 0, bendingStrengthYPa: 16e6, bendingStrengthZPa: 16e6 };
+  it("takes the larger of eqs 6.23 and 6.24: 1.175", () => expectAbsClose(timberCompressionBendingUtilisation(member), 1.175, 1e-12));
+  it("eq. 6.23 governs when k_c,y is the smaller: 8/(0.5·16) + 4/16 = 1.25", () =>
+    expectAbsClose(timberCompressionBendingUtilisation({ ...member, kcY: 0.5, kcZ: 0.8 }), 1.25, 1e-12));
+  it("names a k_c out of range", () => expect(() => timberCompressionBendingUtilisation({ ...member, kcZ: 1.2 })).toThrow(/kcZ/));
+});
+
+describe("k_def and the creep-reduced stiffness (EN 1995-1-1 Table 3.2, §2.3.2.2 eq. 2.7)", () => {
+  it("k_def of glulam: SC1 0.6, SC2 0.8, SC3 2.0 (Table 3.2)", () => expect(GLULAM_K_DEF).toEqual({ 1: 0.6, 2: 0.8, 3: 2.0 }));
+  it("GL24h E_0,mean 11.5 GPa in SC2, ψ2 = 1: 11.5/(1 + 0.8) = 6.389 GPa", () =>
+    expectRelClose(creepReducedModulusPa(11.5e9, GLULAM_K_DEF[2]), 11.5e9 / 1.8, 1e-12));
+  it("ψ2 = 0.3 (from memory: eq. 2.7 weights k_def by ψ2): 11.5/(1 + 0.24) = 9.274 GPa", () =>
+    expectRelClose(creepReducedModulusPa(11.5e9, 0.8, 0.3), 11.5e9 / 1.24, 1e-12));
+});
