@@ -1,6 +1,7 @@
 import type { Catalogue } from "./types";
 import { parseChsCatalogue } from "./chs";
 import { parseCladdingCatalogue, parseFabricCatalogue, parseStrandCatalogue } from "./tables";
+import { parseGlulamCatalogue } from "./glulam";
 
 /** The CSV texts of the catalogue files in `data/`. */
 export interface CatalogueTexts {
@@ -8,6 +9,7 @@ export interface CatalogueTexts {
   strands: string;
   fabrics: string;
   claddings: string;
+  glulam: string;
 }
 
 /** Builds the catalogue from the texts of its CSV files (the page bundles them; the CLI reads them). */
@@ -17,5 +19,6 @@ export function buildCatalogue(texts: CatalogueTexts): Catalogue {
     strands: parseStrandCatalogue(texts.strands),
     fabrics: parseFabricCatalogue(texts.fabrics),
     claddings: parseCladdingCatalogue(texts.claddings),
+    glulam: parseGlulamCatalogue(texts.glulam),
   };
 }

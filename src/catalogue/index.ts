@@ -1,7 +1,8 @@
 // Catalogues: sections, strands, fabrics and claddings read from data/.
-export type { Catalogue, ChsSection, Strand, Fabric, Cladding } from "./types";
+export type { Catalogue, ChsSection, Strand, Fabric, Cladding, GlulamClass } from "./types";
 export { chsFromDimensions, parseChsCatalogue, STEEL_DENSITY_KG_PER_M3 } from "./chs";
 export { parseStrandCatalogue, parseFabricCatalogue, parseCladdingCatalogue } from "./tables";
+export { parseGlulamCatalogue } from "./glulam";
 export { buildCatalogue, type CatalogueTexts } from "./build-catalogue";
 export { pickLightestChs, chsResistance, type ChsDemand, type ChsChoice } from "./pick-chs";
 export { parseCsvTable, CsvError, type CsvProblem, type ColumnSpec } from "./csv-table";

@@ -62,10 +62,34 @@ export interface Cladding {
   source: string;
 }
 
+/** A glued laminated timber strength class, EN 14080:2013 Table 5 (characteristic values). */
+export interface GlulamClass {
+  /** e.g. "GL24h". */
+  strengthClass: string;
+  /** f_m,g,k, bending, Pa. */
+  bendingPa: number;
+  /** f_t,0,g,k, tension parallel to grain, Pa. */
+  tensionPa: number;
+  /** f_c,0,g,k, compression parallel to grain, Pa. */
+  compressionPa: number;
+  /** f_v,g,k, shear, Pa. */
+  shearPa: number;
+  /** E_0,g,mean, Pa. */
+  modulusMeanPa: number;
+  /** E_0,g,05, 5 % fractile, Pa. */
+  modulus5PctPa: number;
+  /** ρ_g,k, characteristic density, kg/m³. */
+  densityCharacteristicKgPerM3: number;
+  /** ρ_g,mean, mean density, kg/m³. */
+  densityMeanKgPerM3: number;
+  source: string;
+}
+
 /** Everything a scheme designer may pick from. */
 export interface Catalogue {
   chs: ChsSection[];
   strands: Strand[];
   fabrics: Fabric[];
   claddings: Cladding[];
+  glulam: GlulamClass[];
 }
