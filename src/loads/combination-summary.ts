@@ -57,11 +57,14 @@ export function summariseCase(load: PressureCase, cap: SphericalCap): LoadSummar
  * Plan points where a combination of the basis takes its extremes. Every case of the basis depends
  * on the plan position only through x and r, and at fixed x a larger |y| can only take the snow
  * away (slopes over 60°): so the largest value lies on the diameter y = 0 and the smallest on the
- * diameter or the rim. Both are sampled finely, with the breakpoints x = −a, 0⁻, 0⁺, a.
+ * diameter or the rim. Both are sampled finely, with the breakpoints x = −a, 0⁻, 0⁺, a and ± each
+ * radial break (where a case ends or steps), at which the extremes of these piecewise-monotone maps
+ * lie.
  */
-function extremePoints(cap: SphericalCap, count = 720): [number, number][] {
-  const a = cap.baseRadiusM * (1 - 1e-12);
+function extremePoints(cap: SphericalCap, radialBreaksM: readonly number[], count = 720): [number, number][] {
+  const a = cap.baseRadiusM;
   const points: [number, number][] = [[-a, 0], [-1e-9 * a, 0], [1e-9 * a, 0], [a, 0]];
+  for (const r of radialBreaksM) points.push([-r, 0], [r, 0]);
   for (let k = 0; k <= count; k++) {
     const psi = (2 * Math.PI * k) / count;
     points.push([-a * Math.cos(psi), a * Math.sin(psi)], [-a * Math.cos(psi / 2), 0]);
@@ -79,7 +82,8 @@ export function summariseCombination(basis: DesignBasis, combination: Combinatio
   const at = combinationAtPlanKPa(basis, combination, selfWeightKPa);
   let peakKPa = -Infinity;
   let minKPa = Infinity;
-  for (const [x, y] of extremePoints(basis.cap)) {
+  const breaks = combination.terms.flatMap((t) => basis.cases[t.caseId].radialBreaksM);
+  for (const [x, y] of extremePoints(basis.cap, breaks)) {
     const v = at(x, y);
     peakKPa = Math.max(peakKPa, v);
     minKPa = Math.min(minKPa, v);

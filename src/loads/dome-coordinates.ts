@@ -23,3 +23,8 @@ export function angleFromCrownAt(cap: SphericalCap, xM: number, yM: number): num
 export function radiusAtSlope(cap: SphericalCap, slopeRad: number): number {
   return slopeRad >= cap.edgeAngleRad ? cap.baseRadiusM : cap.radiusM * Math.sin(slopeRad);
 }
+
+/** Whether plan point (x, y) lies within `radiusM` of the centre (the plan by default), with a relative 1e-12 for rounding on the rim. */
+export function withinRadius(cap: SphericalCap, xM: number, yM: number, radiusM = cap.baseRadiusM): boolean {
+  return Math.hypot(xM, yM) <= radiusM * (1 + 1e-12);
+}

@@ -1,5 +1,6 @@
 import type { SphericalCap } from "../mechanics/spherical-cap";
 import type { PressureCase } from "./load-case";
+import { withinRadius } from "./dome-coordinates";
 
 /** One line of EN 1991-1-4 Fig. 7.12: c_pe,10 at f/d = 0 and at f/d = 0.5 for one h/d, read as straight. */
 interface CpeLine {
@@ -107,7 +108,7 @@ export function windCase(cap: SphericalCap, cpe: DomeCpe, peakVelocityPressureKP
     label: internal === "pressure" ? "wind with internal pressure" : "wind with internal suction",
     action: "wind",
     direction: "normal",
-    atPlanKPa: (x, y) => (Math.hypot(x, y) > cap.baseRadiusM ? 0 : q * (domeCpeAt(cpe, cap, x) - cpi)),
+    atPlanKPa: (x, y) => (withinRadius(cap, x, y) ? q * (domeCpeAt(cpe, cap, x) - cpi) : 0),
     peakKPa,
     minKPa,
     radialBreaksM: [],

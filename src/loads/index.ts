@@ -6,7 +6,7 @@ export { roofActions, designPressures, type RoofActions, type DesignPressures } 
 // The design basis shared by every scheme: named load cases as distributions over the plan, and
 // the EN 1990 combinations that can govern.
 export type { Action, LoadCaseId, LoadCase, PressureCase, TemperatureCase, UniformEquivalent } from "./load-case";
-export { planPointOf, angleFromCrownAt, radiusAtSlope } from "./dome-coordinates";
+export { planPointOf, angleFromCrownAt, radiusAtSlope, withinRadius } from "./dome-coordinates";
 export { gaussLegendre, integrate1d } from "./gauss-legendre";
 export { integrateOverPlan, caseResultants, type PlanRegion, type CaseResultants } from "./plan-integral";
 export { uniformSnowCase, driftedSnowCase, MU1_CURVED_ROOF, SNOW_MAX_SLOPE_RAD } from "./snow-cases";

@@ -58,6 +58,17 @@ export interface CaseResultants {
  * pushes downwind).
  */
 export function caseResultants(load: PressureCase, cap: SphericalCap): CaseResultants {
+  const known = remembered.get(load);
+  if (known?.cap === cap) return known.result;
+  const result = integrateCase(load, cap);
+  remembered.set(load, { cap, result });
+  return result;
+}
+
+/** Resultants already integrated, per case object and cap (cases are never mutated). */
+const remembered = new WeakMap<PressureCase, { cap: SphericalCap; result: CaseResultants }>();
+
+function integrateCase(load: PressureCase, cap: SphericalCap): CaseResultants {
   const region = { radiusM: cap.baseRadiusM, radialBreaksM: load.radialBreaksM };
   const verticalKN = integrateOverPlan((x, y) => load.atPlanKPa(x, y), region);
   let alongWindKN = 0;

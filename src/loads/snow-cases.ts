@@ -1,6 +1,6 @@
 import type { SphericalCap } from "../mechanics/spherical-cap";
 import type { PressureCase } from "./load-case";
-import { radiusAtSlope } from "./dome-coordinates";
+import { radiusAtSlope, withinRadius } from "./dome-coordinates";
 import { snowShapeMu3 } from "./snow";
 
 /** EN 1991-1-3 Fig. 5.6 case (i): the undrifted shape coefficient on a cylindrical roof, μ1 = 0.8. */
@@ -25,7 +25,7 @@ export function uniformSnowCase(cap: SphericalCap, groundSnowKPa: number): Press
     label: "uniform snow",
     action: "snow",
     direction: "vertical",
-    atPlanKPa: (x, y) => (Math.hypot(x, y) <= covered ? value : 0),
+    atPlanKPa: (x, y) => (withinRadius(cap, x, y, covered) ? value : 0),
     peakKPa: value,
     minKPa: covered < cap.baseRadiusM ? 0 : value,
     radialBreaksM: covered < cap.baseRadiusM ? [covered] : [],
@@ -61,7 +61,7 @@ export function driftedSnowCase(cap: SphericalCap, groundSnowKPa: number): Press
     label: "drifted snow",
     action: "snow",
     direction: "vertical",
-    atPlanKPa: (x, y) => (Math.hypot(x, y) > covered ? 0 : x <= 0 ? heavy : light),
+    atPlanKPa: (x, y) => (!withinRadius(cap, x, y, covered) ? 0 : x <= 0 ? heavy : light),
     peakKPa: heavy,
     minKPa: covered < cap.baseRadiusM ? 0 : light,
     radialBreaksM: covered < cap.baseRadiusM ? [covered] : [],
