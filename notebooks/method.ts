@@ -7,6 +7,7 @@ import { SCHEMES } from "../src/schemes";
 import { assumptionsRecord, studyFromJson, describeProblems, type Study } from "../src/study";
 import { compareStudies, HEADLINE_METRICS, type SchemeDelta } from "../src/comparison";
 import { defaultCatalogue } from "../src/catalogue";
+import { designBasis, summariseCase, summariseCombination, type DesignBasis } from "../src/loads";
 import { csvFormat } from "d3";
 
 const { store, main } = startPage({
@@ -35,6 +36,43 @@ staticCell(
     SCHEMES.map((m) => [m.label, m.description, `${m.validSpanM.min}–${m.validSpanM.max}`]),
   ),
 );
+
+// ——— design basis: load cases and combinations (src/loads/design-basis.ts) ———
+const kPa = (x: number) => fmt.sig3(x);
+const EXPRESSION_SOURCE = { "6.10": "EN 1990 eq. 6.10", "6.10a": "EN 1990 eq. 6.10a", "6.10b": "EN 1990 eq. 6.10b" } as const;
+
+function designBasisTables(basis: DesignBasis): HTMLElement {
+  const wrap = document.createElement("div");
+  const intro = document.createElement("p");
+  intro.textContent =
+    `The load cases and EN 1990 combinations every scheme is to design for, at this study's brief. Distributed cases are maps over the plan (x along the wind). ` +
+    `Wind: f/d = ${fmt.sig3(basis.fOverD)}, h/d = ${fmt.sig3(basis.hOverD)}; c_pe,10 at the windward base A ${fmt.sig3(basis.cpe.A)}, crown B ${fmt.sig3(basis.cpe.B)}, leeward base C ${fmt.sig3(basis.cpe.C)} ` +
+    `(EN 1991-1-4 Fig. 7.12 — values from memory, the figure could not be read here; linear along the wind, constant across it); q_p = ${kPa(basis.peakVelocityPressureKPa)} kPa at z_e = h + f = ${fmt.sig3(basis.windReferenceHeightM)} m. ` +
+    `Snow on a dome by the cylindrical-roof rule of EN 1991-1-3 §5.3.5 is common practice, not an EN clause. ` +
+    `The schemes move onto this basis next; until then they design for the uniform loads under Methods → Actions.`;
+  const cases = Object.values(basis.cases).map((c) => {
+    const s = summariseCase(c, basis.cap);
+    return [c.label, c.direction === "vertical" ? "vertical, on plan" : "normal to surface", kPa(s.peakKPa), kPa(s.minKPa), kPa(s.meanKPa), `${kPa(s.uniformEquivalentKPa)} — ${s.uniformRule}`, c.source];
+  });
+  const t = basis.temperature;
+  cases.push([t.label, "uniform ΔT of the cables", `+${t.riseK} K`, `${t.fallK} K`, "—", "—", `${t.source}; from T0 = ${t.installationC} °C, for cable roofs`]);
+  const combinations = basis.combinations.map((c) => {
+    const s = summariseCombination(basis, c, 0);
+    const temperature = c.temperatureSensitiveOnly ? "cable roofs only" : `× ${fmt.sig3(c.temperatureFactor)} for cable roofs`;
+    return [c.name, c.formula, kPa(s.peakKPa), kPa(s.minKPa), kPa(s.meanKPa), temperature, `${EXPRESSION_SOURCE[c.expression]}, Table A1.2(B); ψ0 Table A1.1`];
+  });
+  wrap.append(
+    intro,
+    tableElement(["Case", "Acts", "Peak (kPa)", "Min (kPa)", "Plan mean (kPa)", "Uniform equivalent (kPa)", "Source"], cases, { caption: "Load cases (characteristic)", numeric: [false, false, true, true, true] }),
+    tableElement(["Combination", "Design load", "Peak (kPa)", "Min (kPa)", "Plan mean (kPa)", "Temperature", "Source"], combinations, {
+      caption: "Combinations: design values with G = services only (each scheme adds its self-weight × the factor on G); downward positive",
+      numeric: [false, false, true, true, true],
+    }),
+  );
+  return wrap;
+}
+
+reactiveCell(main, { id: "design-basis", title: "Design basis: load cases and combinations" }, () => designBasisTables(designBasis(store.study.value.brief)));
 
 reactiveCell(main, { id: "record", title: "Assumptions record" }, () => {
   const record = assumptionsRecord(store.study.value);
