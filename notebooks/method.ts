@@ -55,7 +55,7 @@ function designBasisTables(basis: DesignBasis): HTMLElement {
     return [c.label, c.direction === "vertical" ? "vertical, on plan" : "normal to surface", kPa(s.peakKPa), kPa(s.minKPa), kPa(s.meanKPa), `${kPa(s.uniformEquivalentKPa)} — ${s.uniformRule}`, c.source];
   });
   const t = basis.temperature;
-  cases.push([t.label, "uniform ΔT of the cables", `+${t.riseK} K`, `${t.fallK} K`, "—", "—", `${t.source}; from T0 = ${t.installationC} °C, for cable roofs`]);
+  cases.push([t.label, "uniform ΔT of the cables", `+${t.riseK} K`, `−${Math.abs(t.fallK)} K`, "—", "—", `${t.source}; from T0 = ${t.installationC} °C, for cable roofs`]);
   const combinations = basis.combinations.map((c) => {
     const s = summariseCombination(basis, c, 0);
     const temperature = c.temperatureSensitiveOnly ? "cable roofs only" : `× ${fmt.sig3(c.temperatureFactor)} for cable roofs`;
