@@ -44,5 +44,7 @@ export function sphericalCap(spanM: number, riseM: number): SphericalCap {
 /** Height of the cap surface above its base plane at plan radius r (0 ≤ r ≤ a), m. */
 export function capHeightAt(cap: SphericalCap, rM: number): number {
   const r = Math.min(Math.abs(rM), cap.baseRadiusM);
-  return Math.sqrt(cap.radiusM * cap.radiusM - r * r) - (cap.radiusM - cap.riseM);
+  // At rise = span/2 (a hemisphere) R = a, and R² − a² can round to a tiny negative: clamp it to 0
+  // so the edge lies on the base plane instead of giving NaN.
+  return Math.sqrt(Math.max(0, cap.radiusM * cap.radiusM - r * r)) - (cap.radiusM - cap.riseM);
 }
