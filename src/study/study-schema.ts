@@ -2,11 +2,12 @@ import * as v from "valibot";
 import { BRIEF_LIMITS, TERRAIN_CATEGORIES } from "./brief";
 import { numberIn, integerIn, oneOf, textUpTo, flag, validateWith, type FieldProblem } from "./schema-helpers";
 import { SCHEMES } from "../schemes";
-import type { OptionSpec, SchemeModel } from "../schemes/types";
+import type { OptionSpec, SchemeModel, SchemeOptions } from "../schemes/types";
 import { FactorRowSchema, CarbonSettingsSchema, defaultFactorRows, DEFAULT_CARBON_SETTINGS } from "../carbon";
 import { RateRowSchema, OnCostsSchema, defaultRateRows, DEFAULT_ON_COSTS } from "../cost";
 import { STUDY_SCHEMA_VERSION, type Study } from "./study";
 import { RiskSettingsSchema } from "../risk/risk-settings";
+import { OPTION_RULES } from "./option-rules";
 import { defaultRiskSettings } from "../risk/default-risk-settings";
 
 const L = BRIEF_LIMITS;
@@ -36,8 +37,9 @@ export const BriefSchema = v.pipe(
     factors: FactorsSchema,
     ulsExpression: oneOf(["6.10", "6.10a/b"] as const),
   }),
+  // Cross-field: checked whenever span and rise are themselves valid, even if another field is not.
   v.forward(
-    v.check((b) => b.riseM <= b.spanM / 2, (issue) => `${(issue.input as { riseM: number }).riseM} m (expected 0 < rise ≤ span/2 = ${(issue.input as { spanM: number }).spanM / 2} m)`),
+    v.partialCheck([["riseM"], ["spanM"]], (b) => b.riseM <= b.spanM / 2, (issue) => `${(issue.input as { riseM: number }).riseM} m (expected 0 < rise ≤ span/2 = ${(issue.input as { spanM: number }).spanM / 2} m)`),
     ["riseM"],
   ),
 );
@@ -53,13 +55,21 @@ function optionSchema(spec: OptionSpec) {
   }
 }
 
-/** The options of one scheme: every key optional (a missing one takes the default), unknown keys refused. */
+/** The options of one scheme: every key optional (a missing one takes the default), unknown keys refused, the scheme's OPTION_RULES applied. */
 function schemeSettingSchema(model: SchemeModel) {
   const entries = Object.fromEntries(model.options.map((spec) => [spec.key, v.optional(optionSchema(spec), model.defaults[spec.key])]));
-  return v.object({
+  const setting = v.object({
     enabled: v.optional(flag(), true),
     options: v.optional(v.strictObject(entries, (issue) => `unknown option ${JSON.stringify((issue as { key?: unknown }).key ?? "")} (expected one of ${model.options.map((o) => o.key).join(", ")})`), {}),
   });
+  const optionsOf = (s: unknown) => ({ ...model.defaults, ...((s as { options?: SchemeOptions }).options ?? {}) });
+  const rules = OPTION_RULES.filter((rule) => rule.scheme === model.id).map((rule) =>
+    v.forward(
+      v.check((s: v.InferOutput<typeof setting>) => rule.problem(optionsOf(s)) === null, (issue) => rule.problem(optionsOf(issue.input)) ?? ""),
+      ["options", rule.option] as never,
+    ),
+  );
+  return v.pipe(setting, ...(rules as [])) as unknown as typeof setting;
 }
 
 function schemesSchema() {
