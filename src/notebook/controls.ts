@@ -1,9 +1,31 @@
 import { effect, type ReadonlySignal } from "@preact/signals-core";
 
-/** A value a control shows and changes: read reactively, written through a callback. */
+/**
+ * A value a control shows and changes: read reactively, written through a callback. A binding
+ * may `check` a value first (a study binding checks the candidate study against the schema): a
+ * message means the control applies nothing and shows it.
+ */
 export interface Binding<T> {
   value: ReadonlySignal<T>;
   set(next: T): void;
+  check?(next: T): string | null;
+}
+
+/** Applies `next` unless the binding's check refuses it; returns the refusal or null. */
+function refused<T>(binding: Binding<T>, next: T): string | null {
+  const problem = binding.check?.(next) ?? null;
+  if (problem === null) binding.set(next);
+  return problem;
+}
+
+/** An inline message element tied to an input for screen readers. */
+function messageFor(input: HTMLElement, id: string): HTMLDivElement {
+  const message = document.createElement("div");
+  message.className = "control-message";
+  message.id = `${id}-message`;
+  message.setAttribute("aria-live", "polite");
+  input.setAttribute("aria-describedby", message.id);
+  return message;
 }
 
 let counter = 0;
@@ -29,7 +51,8 @@ export interface NumberControlOptions {
 
 /**
  * A number field with its unit, min/max/step, an inline message when the typed value is not
- * allowed (the value is then not applied), and optionally a slider bound to the same value.
+ * allowed (the value is then not applied, and the one in force named: see editField), and
+ * optionally a slider bound to the same value.
  */
 export function numberControl(binding: Binding<number>, options: NumberControlOptions): HTMLElement {
   const id = options.id ?? uid("num");
@@ -48,11 +71,7 @@ export function numberControl(binding: Binding<number>, options: NumberControlOp
   input.max = String(options.max);
   input.step = String(options.step);
   input.inputMode = "decimal";
-  const message = document.createElement("div");
-  message.className = "control-message";
-  message.id = `${id}-message`;
-  message.setAttribute("aria-live", "polite");
-  input.setAttribute("aria-describedby", message.id);
+  const message = messageFor(input, id);
   const row = document.createElement("div");
   row.className = "control-row";
   row.append(input, unit);
@@ -82,30 +101,96 @@ export function numberControl(binding: Binding<number>, options: NumberControlOp
     if (options.integer && !Number.isInteger(x)) return `${options.label}: ${x} is not a whole number`;
     return null;
   };
-  const apply = (raw: string) => {
-    const text = problem(raw);
-    message.textContent = text ?? "";
+  const unitText = options.unit && options.unit !== "–" ? ` ${options.unit}` : "";
+  const field = editField<number>(binding, { input, wrap, message, label: options.label }, {
+    parse: (raw) => {
+      const text = problem(raw);
+      return text === null ? { value: Number(raw) } : { problem: text };
+    },
+    shows: (raw, value) => raw !== "" && Number(raw) === value,
+    show: (value) => String(value),
+    inForce: (value) => `${value}${unitText}`,
+    slider,
+  });
+  slider?.addEventListener("input", () => {
+    if (slider) field.applyOnce(slider.value);
+  });
+  return wrap;
+}
+
+interface FieldParts {
+  input: HTMLInputElement;
+  wrap: HTMLElement;
+  message: HTMLElement;
+  label: string;
+}
+
+interface FieldRules<T> {
+  parse(raw: string): { value: T } | { problem: string };
+  /** Whether the raw text already shows this value (then it is left alone while typing). */
+  shows(raw: string, value: T): boolean;
+  show(value: T): string;
+  inForce(value: T): string;
+  slider?: HTMLInputElement | undefined;
+}
+
+/**
+ * Ties a typed field to a binding. Every keystroke is checked (the field's own rules, then the
+ * binding's check of the candidate study) and a valid value applied at once; when the text is
+ * not allowed, the value in force before this edit began is put back, so a valid prefix (typing
+ * "1e308" passes through "1") is never left applied, and the message says which value is in force.
+ * Enter or leaving the field replaces invalid text by that value; the message stays until the value changes.
+ */
+function editField<T>(binding: Binding<T>, parts: FieldParts, rules: FieldRules<T>): { applyOnce(raw: string): void } {
+  const { input, wrap, message } = parts;
+  let committed = binding.value.peek();
+  let holding = false;
+  const apply = (raw: string, fromField: boolean) => {
+    const parsed = rules.parse(raw);
+    let text = "problem" in parsed ? parsed.problem : null;
+    if (!("problem" in parsed)) {
+      const refusal = refused(binding, parsed.value);
+      if (refusal !== null) text = `${parts.label}: ${refusal}`;
+    }
+    holding = text !== null && fromField;
+    if (text !== null) {
+      if (!Object.is(binding.value.peek(), committed)) binding.set(committed);
+      text += ` — not applied; in force: ${rules.inForce(committed)}`;
+    }
     input.setAttribute("aria-invalid", text ? "true" : "false");
     wrap.classList.toggle("invalid", text !== null);
-    if (text === null) binding.set(Number(raw));
+    message.textContent = text ?? "";
   };
-  input.addEventListener("input", () => apply(input.value));
-  slider?.addEventListener("input", () => {
-    if (slider) {
-      input.value = slider.value;
-      apply(slider.value);
+  input.addEventListener("focus", () => {
+    committed = binding.value.peek();
+  });
+  input.addEventListener("input", () => apply(input.value, true));
+  input.addEventListener("change", () => {
+    if (!holding) committed = binding.value.peek();
+    else {
+      holding = false;
+      input.value = rules.show(binding.value.peek());
     }
   });
   effect(() => {
     const value = binding.value.value;
-    if (!wrap.classList.contains("invalid") || document.activeElement !== input) {
-      if (Number(input.value) !== value || input.value === "") input.value = String(value);
-      wrap.classList.remove("invalid");
-      message.textContent = "";
-    }
-    if (slider) slider.value = String(value);
+    if (rules.slider) rules.slider.value = rules.show(value);
+    if (holding) return;
+    if (document.activeElement !== input) committed = value;
+    if (!rules.shows(input.value, value)) input.value = rules.show(value);
+    wrap.classList.remove("invalid");
+    input.setAttribute("aria-invalid", "false");
+    message.textContent = "";
   });
-  return wrap;
+  return {
+    /** One step of a slider: checked and applied like a keystroke, and put back at once if refused. */
+    applyOnce(raw: string) {
+      committed = binding.value.peek();
+      apply(raw, false);
+      input.value = rules.show(binding.value.peek());
+      if (rules.slider) rules.slider.value = rules.show(binding.value.peek());
+    },
+  };
 }
 
 export interface TextControlOptions {
@@ -117,7 +202,7 @@ export interface TextControlOptions {
   check: (raw: string) => string | null;
 }
 
-/** A text field checked on every keystroke: an inline message for a value not allowed, which is then not applied. */
+/** A text field checked on every keystroke: an inline message for a value not allowed, which is then not applied (see editField). */
 export function textControl(binding: Binding<string>, options: TextControlOptions): HTMLElement {
   const id = options.id ?? uid("txt");
   const wrap = document.createElement("div");
@@ -129,11 +214,7 @@ export function textControl(binding: Binding<string>, options: TextControlOption
   input.type = "text";
   input.id = id;
   input.size = options.size ?? 8;
-  const message = document.createElement("div");
-  message.className = "control-message";
-  message.id = `${id}-message`;
-  message.setAttribute("aria-live", "polite");
-  input.setAttribute("aria-describedby", message.id);
+  const message = messageFor(input, id);
   wrap.append(label, input, message);
   if (options.hint) {
     const hint = document.createElement("div");
@@ -141,20 +222,14 @@ export function textControl(binding: Binding<string>, options: TextControlOption
     hint.textContent = options.hint;
     wrap.append(hint);
   }
-  input.addEventListener("input", () => {
-    const raw = input.value.trim();
-    const problem = options.check(raw);
-    message.textContent = problem === null ? "" : `${options.label}: ${problem}`;
-    input.setAttribute("aria-invalid", problem === null ? "false" : "true");
-    wrap.classList.toggle("invalid", problem !== null);
-    if (problem === null) binding.set(raw);
-  });
-  effect(() => {
-    const value = binding.value.value;
-    if (wrap.classList.contains("invalid") && document.activeElement === input) return;
-    input.value = value;
-    wrap.classList.remove("invalid");
-    message.textContent = "";
+  editField<string>(binding, { input, wrap, message, label: options.label }, {
+    parse: (raw) => {
+      const problem = options.check(raw.trim());
+      return problem === null ? { value: raw.trim() } : { problem: `${options.label}: ${problem}` };
+    },
+    shows: (raw, value) => raw.trim() === value,
+    show: (value) => value,
+    inForce: (value) => `"${value}"`,
   });
   return wrap;
 }
@@ -181,11 +256,16 @@ export function selectControl(binding: Binding<string>, options: SelectControlOp
     option.textContent = choice.label;
     select.append(option);
   }
-  select.addEventListener("change", () => binding.set(select.value));
+  const message = messageFor(select, id);
+  select.addEventListener("change", () => {
+    const refusal = refused(binding, select.value);
+    message.textContent = refusal === null ? "" : `${options.label}: ${refusal} — not applied`;
+    if (refusal !== null) select.value = binding.value.peek();
+  });
   effect(() => {
     select.value = binding.value.value;
   });
-  wrap.append(label, select);
+  wrap.append(label, select, message);
   return wrap;
 }
 
@@ -200,11 +280,16 @@ export function toggleControl(binding: Binding<boolean>, options: { label: strin
   const label = document.createElement("label");
   label.htmlFor = id;
   label.textContent = options.label;
-  input.addEventListener("change", () => binding.set(input.checked));
+  const message = messageFor(input, id);
+  input.addEventListener("change", () => {
+    const refusal = refused(binding, input.checked);
+    message.textContent = refusal === null ? "" : `${options.label}: ${refusal} — not applied`;
+    if (refusal !== null) input.checked = binding.value.peek();
+  });
   effect(() => {
     input.checked = binding.value.value;
   });
-  wrap.append(input, label);
+  wrap.append(input, label, message);
   return wrap;
 }
 

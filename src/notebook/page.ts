@@ -65,10 +65,37 @@ export function startPage(options: PageOptions): Page {
     notice.textContent = store.notice.value;
     notice.hidden = store.notice.value === "";
   });
-  main.append(title, intro, caution, notice);
+  main.append(title, intro, caution, notice, bannerList(store));
   main.append(studyTools(store, options.readOnly ?? false));
   document.body.replaceChildren(header, main);
   return { store, main };
+}
+
+/** The store's banners (a study kept as a backup, another tab's change), each with its actions and a dismiss button. */
+function bannerList(store: StudyStore): HTMLElement {
+  const list = document.createElement("div");
+  list.className = "banners";
+  const dismissed = new Set<string>();
+  effect(() => {
+    const shown = store.banners.value.filter((b) => !dismissed.has(`${b.id}:${b.text}`));
+    list.replaceChildren(
+      ...shown.map((banner) => {
+        const box = document.createElement("div");
+        box.className = "notice banner";
+        box.dataset.banner = banner.id;
+        box.setAttribute("role", "alert");
+        const text = document.createElement("p");
+        text.textContent = banner.text;
+        const close = button("Dismiss", () => {
+          dismissed.add(`${banner.id}:${banner.text}`);
+          box.remove();
+        });
+        box.append(text, ...banner.actions.map((a) => button(a.label, a.run)), close);
+        return box;
+      }),
+    );
+  });
+  return list;
 }
 
 function button(label: string, onClick: () => void): HTMLButtonElement {
@@ -97,12 +124,8 @@ function studyTools(store: StudyStore, readOnly: boolean): HTMLElement {
     const chosen = file.files?.[0];
     if (!chosen) return;
     const result = studyFromJson(await chosen.text());
-    if (result.ok) {
-      store.replace(result.study);
-      store.notice.value = `Opened ${chosen.name}.`;
-    } else {
-      store.notice.value = `${chosen.name} was not opened; nothing changed:\n${describeProblems(result.problems)}`;
-    }
+    const problems = result.ok ? store.replace(result.study) : describeProblems(result.problems);
+    store.notice.value = problems === null ? `Opened ${chosen.name}.` : `${chosen.name} was not opened; nothing changed:\n${problems}`;
     file.value = "";
   });
   const open = button("Open study file…", () => file.click());

@@ -5,22 +5,44 @@ import {
   encodeStudyLink,
   readStoredStudy,
   writeStoredStudy,
+  backupUnreadable,
   studyFromObject,
+  studyFromJson,
+  studyToJson,
+  validateStudy,
   describeProblems,
   getIn,
   setIn,
+  STORAGE_KEY,
+  BEFORE_LINK_KEY,
   type Study,
+  type FieldProblem,
 } from "../study";
 import type { Binding } from "./controls";
+import { downloadText } from "./download";
+
+/** A message on the page about the study's safety, with what the user can do about it. */
+export interface Banner {
+  id: string;
+  text: string;
+  actions: { label: string; run: () => void }[];
+}
 
 export interface StudyStore {
+  /** The working study. Prefer `replace` or `bind` to change it: they check the candidate against the schema. */
   study: Signal<Study>;
   /** Messages for the user about loading and saving (empty when all is well). */
   notice: Signal<string>;
-  /** A binding to one field of the study, by path. */
+  /** Messages with actions: an unreadable stored study kept, a study replaced by a link or by another tab. */
+  banners: ReadonlySignal<readonly Banner[]>;
+  /**
+   * A binding to one field of the study, by path. Its `check` tests the candidate study (the
+   * study with the edit) against the schema and gives the message of a refusal; `set` applies
+   * only a candidate that passes.
+   */
   bind<T>(path: readonly (string | number)[]): Binding<T>;
-  /** Replaces the whole study (after validation by the caller). */
-  replace(study: Study): void;
+  /** Replaces the whole study if it validates; else changes nothing and returns the problems as text. */
+  replace(study: Study): string | null;
   /** The link that reopens the current study. */
   link: ReadonlySignal<string>;
 }
@@ -32,65 +54,214 @@ export interface StoreOptions {
   persist: boolean;
 }
 
-/**
- * The page's study, opened from (in order) the link's fragment, browser storage, or the demo
- * study; saved back to storage and to the link on every change. An invalid link or corrupt storage
- * changes nothing and sets a notice.
- */
-export function createStudyStore(options: StoreOptions): StudyStore {
-  const defaults = defaultStudy();
-  const notices: string[] = [];
-  let initial: Study | undefined;
+const dotted = (path: readonly (string | number)[]): string => path.map((p, i) => (typeof p === "number" ? `[${p}]` : i === 0 ? p : `.${p}`)).join("");
+
+/** The message for a refused edit at `path`: the problem at that field alone, else the other field named. */
+function refusal(problems: readonly FieldProblem[], path: readonly (string | number)[]): string {
+  const here = problems.find((p) => p.path === dotted(path));
+  if (here) return here.message;
+  const first = problems[0];
+  return first ? `it would leave ${first.path} at ${first.message}` : "refused by the study schema";
+}
+
+function slug(study: Study): string {
+  return study.meta.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || "study";
+}
+
+function readText(key: string): string | null {
+  try {
+    return localStorage.getItem(key);
+  } catch {
+    return null;
+  }
+}
+
+interface Opened {
+  study: Study;
+  notices: string[];
+  banners: Banner[];
+  /** Write the opened study to storage at once (a link the user opened), else only after a change. */
+  writeNow: boolean;
+}
+
+/** Opens the study from (in order) the link's fragment, browser storage, or the demo study. */
+function openStudy(options: StoreOptions, defaults: Study, restore: (key: string) => void): Opened {
+  const out: Opened = { study: defaults, notices: [], banners: [], writeNow: false };
+  const stored = options.persist ? readStoredStudy(localStorage, () => defaults) : null;
+  if (stored?.unreadable) {
+    const { text } = stored.unreadable;
+    out.banners.push({
+      id: "unreadable",
+      text: `The study saved in this browser could not be read, so the defaults are shown. ${stored.message ?? ""}`,
+      actions: [{ label: "Download the unreadable study", run: () => downloadText("unreadable-study.spanbook.json", text, "application/json") }],
+    });
+  } else if (stored?.message) out.notices.push(stored.message);
 
   const fragment = location.hash.startsWith("#s=") ? location.hash.slice(3) : "";
   if (fragment) {
     const result = decodeStudyLink(fragment, defaults);
-    if (result.ok) initial = result.study;
-    else notices.push(`The link's study could not be opened:\n${describeProblems(result.problems)}`);
-  }
-  if (!initial && options.persist) {
-    const stored = readStoredStudy(localStorage, () => defaults);
-    if (stored) {
-      initial = stored.study;
-      if (stored.message) notices.push(stored.message);
+    if (result.ok) {
+      out.study = result.study;
+      out.writeNow = options.persist;
+      const local = stored && !stored.unreadable ? stored.study : null;
+      if (local && studyToJson(local) !== studyToJson(result.study)) {
+        try {
+          localStorage.setItem(BEFORE_LINK_KEY, studyToJson(local));
+          out.banners.push({
+            id: "link",
+            text: `This page opened the study in the link (“${result.study.meta.title}”). The study you had in this browser (“${local.meta.title}”) is kept: restore it or download it.`,
+            actions: [
+              { label: "Restore previous study", run: () => restore(BEFORE_LINK_KEY) },
+              { label: "Download previous study", run: () => downloadText(`${slug(local)}.spanbook.json`, studyToJson(local), "application/json") },
+            ],
+          });
+        } catch {
+          // The local study cannot be kept: show the link's study without saving it.
+          out.writeNow = false;
+          out.notices.push("The link's study is shown but not saved: the study in this browser could not be backed up, so it is left as it is.");
+        }
+      }
+      return out;
     }
+    out.notices.push(`The link's study could not be opened:\n${describeProblems(result.problems)}`);
   }
-  if (!initial) {
-    const demo = studyFromObject(options.initial);
-    if (demo.ok) initial = demo.study;
-    else {
-      notices.push(`The demo study is invalid, so the defaults are shown:\n${describeProblems(demo.problems)}`);
-      initial = defaults;
-    }
+  if (stored) {
+    out.study = stored.study;
+    return out;
   }
+  const demo = studyFromObject(options.initial);
+  if (demo.ok) out.study = demo.study;
+  else out.notices.push(`The demo study is invalid, so the defaults are shown:\n${describeProblems(demo.problems)}`);
+  return out;
+}
 
-  const study = signal(initial);
-  const notice = signal(notices.join("\n"));
+/**
+ * The page's study, opened from (in order) the link's fragment, browser storage, or the demo
+ * study. Every change through `bind` or `replace` is checked against the study schema first.
+ * Browser storage is written only after a change (or when a link is opened, after keeping the
+ * local study under BEFORE_LINK_KEY); an unreadable stored study is kept under a backup key.
+ * Another tab's save is taken over at once, with a banner offering this tab's version back.
+ */
+export function createStudyStore(options: StoreOptions): StudyStore {
+  const defaults = defaultStudy();
+  const banners = signal<readonly Banner[]>([]);
+  const show = (banner: Banner) => {
+    banners.value = [...banners.value.filter((b) => b.id !== banner.id), banner];
+  };
+  const replace = (next: Study): string | null => {
+    const checked = validateStudy(next);
+    if (!checked.ok) return describeProblems(checked.problems);
+    study.value = next;
+    return null;
+  };
+  const restore = (key: string) => {
+    const text = readText(key);
+    const result = text === null ? null : studyFromJson(text);
+    if (!result?.ok) {
+      notice.value = `The previous study could not be restored: ${result ? describeProblems(result.problems) : "it is no longer in browser storage"}`;
+      return;
+    }
+    const current = study.value;
+    try {
+      localStorage.setItem(key, studyToJson(current)); // swap, so the link's study is kept in turn
+    } catch {
+      notice.value = "The previous study was not restored: the current one could not be kept in browser storage.";
+      return;
+    }
+    replace(result.study);
+    show({
+      id: "link",
+      text: `The previous study (“${result.study.meta.title}”) is restored. The link's study (“${current.meta.title}”) is kept in its place.`,
+      actions: [{ label: "Switch back to the link's study", run: () => restore(key) }],
+    });
+  };
+
+  const opened = openStudy(options, defaults, restore);
+  const study = signal(opened.study);
+  const notice = signal(opened.notices.join("\n"));
+  banners.value = opened.banners;
   const link = computed(() => `#s=${encodeStudyLink(study.value, defaults)}`);
 
   if (options.persist) {
-    effect(() => {
-      const current = study.value;
-      const error = writeStoredStudy(localStorage, current);
-      if (error) notice.value = error;
-      history.replaceState(null, "", link.value);
-    });
+    const fromOtherTab = persist(study, link, notice, opened);
+    followOtherTabs(study, fromOtherTab, show, replace);
   }
 
   return {
     study,
     notice,
+    banners,
     link,
-    replace(next) {
-      study.value = next;
-    },
+    replace,
     bind<T>(path: readonly (string | number)[]): Binding<T> {
+      let passed: { base: Study; next: T } | null = null; // the last edit check() let through
+      const problem = (next: T): { candidate: Study; message: string | null } => {
+        const candidate = setIn(study.value, path, next);
+        if (candidate === study.value || (passed?.base === study.value && Object.is(passed.next, next))) return { candidate, message: null };
+        const checked = validateStudy(candidate);
+        return { candidate, message: checked.ok ? null : refusal(checked.problems, path) };
+      };
       return {
         value: computed(() => getIn(study.value, path) as T),
-        set(next: T) {
-          study.value = setIn(study.value, path, next);
+        check(next: T): string | null {
+          const { message } = problem(next);
+          passed = message === null ? { base: study.value, next } : null;
+          return message;
+        },
+        set(next: T): void {
+          const { candidate, message } = problem(next);
+          passed = null;
+          if (message === null) study.value = candidate;
+          else notice.value = `${dotted(path)}: ${message}`;
         },
       };
     },
   };
+}
+
+/**
+ * Saves the study to storage and the link to the URL on every change, not on opening (unless a
+ * link was opened) and not for a study taken over from another tab. A study that fails the
+ * schema (written around `replace`) is not saved, and the notice says why.
+ */
+function persist(study: Signal<Study>, link: ReadonlySignal<string>, notice: Signal<string>, opened: Opened): { current: Study | null } {
+  const fromOtherTab: { current: Study | null } = { current: null };
+  let first = true;
+  effect(() => {
+    const current = study.value;
+    const skip = (first && !opened.writeNow) || current === fromOtherTab.current;
+    first = false;
+    history.replaceState(null, "", link.value);
+    if (skip) return;
+    const checked = validateStudy(current);
+    if (!checked.ok) {
+      notice.value = `This change was not saved (the study would not open again):\n${describeProblems(checked.problems)}`;
+      return;
+    }
+    const error = writeStoredStudy(localStorage, current);
+    if (error) notice.value = error;
+  });
+  return fromOtherTab;
+}
+
+/** Takes over the study another tab saves (the `storage` event), with a banner to keep this tab's version instead. */
+function followOtherTabs(study: Signal<Study>, fromOtherTab: { current: Study | null }, show: (b: Banner) => void, replace: (s: Study) => string | null): void {
+  window.addEventListener("storage", (event) => {
+    if (event.key !== STORAGE_KEY || event.newValue === null) return;
+    const result = studyFromJson(event.newValue);
+    if (!result.ok) {
+      backupUnreadable(localStorage, event.newValue);
+      show({ id: "other-tab", text: `Another tab saved a study this page cannot read (${describeProblems(result.problems, 1)}). This page keeps its own study; the other one is kept in browser storage and is backed up before anything is saved over it.`, actions: [] });
+      return;
+    }
+    const mine = study.value;
+    if (studyToJson(result.study) === studyToJson(mine)) return;
+    fromOtherTab.current = result.study;
+    study.value = result.study;
+    show({
+      id: "other-tab",
+      text: `Another tab changed the study (“${result.study.meta.title}”); this page now shows that version, so both tabs agree.`,
+      actions: [{ label: "Keep this tab's version instead", run: () => void replace(mine) }],
+    });
+  });
 }
