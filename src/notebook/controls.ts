@@ -105,7 +105,7 @@ export function numberControl(binding: Binding<number>, options: NumberControlOp
   const field = editField<number>(binding, { input, wrap, message, label: options.label }, {
     parse: (raw) => {
       const text = problem(raw);
-      return text === null ? { value: Number(raw) } : { problem: text };
+      return text === null ? { value: Number(raw) + 0 } : { problem: text }; // + 0: "-0" is stored as 0
     },
     shows: (raw, value) => raw !== "" && Number(raw) === value,
     show: (value) => String(value),

@@ -13,6 +13,7 @@ import {
   describeProblems,
   getIn,
   setIn,
+  sameValue,
   STORAGE_KEY,
   BEFORE_LINK_KEY,
   type Study,
@@ -104,7 +105,7 @@ function openStudy(options: StoreOptions, defaults: Study, restore: (key: string
       out.study = result.study;
       out.writeNow = options.persist;
       const local = stored && !stored.unreadable ? stored.study : null;
-      if (local && studyToJson(local) !== studyToJson(result.study)) {
+      if (local && !sameValue(local, result.study)) {
         try {
           localStorage.setItem(BEFORE_LINK_KEY, studyToJson(local));
           out.banners.push({
@@ -255,7 +256,7 @@ function followOtherTabs(study: Signal<Study>, fromOtherTab: { current: Study | 
       return;
     }
     const mine = study.value;
-    if (studyToJson(result.study) === studyToJson(mine)) return;
+    if (sameValue(result.study, mine)) return;
     fromOtherTab.current = result.study;
     study.value = result.study;
     show({

@@ -10,6 +10,6 @@ export { migrateStudy, MIGRATIONS, type Migration } from "./migrate";
 export { studyFromJson, studyFromObject, studyToJson, describeProblems, type LoadResult } from "./load-study";
 export { encodeStudyLink, decodeStudyLink } from "./link";
 export { readStoredStudy, writeStoredStudy, backupUnreadable, STORAGE_KEY, UNREADABLE_KEY, BEFORE_LINK_KEY, type KeyValueStore, type StoredStudy } from "./storage";
-export { setIn, getIn, diff, mergeDiff } from "./patch";
+export { setIn, getIn, diff, mergeDiff, sameValue } from "./patch";
 export type { FieldProblem } from "./schema-helpers";
 export { assumptionsRecord, studyFileText, type Assumption } from "./assumptions";
