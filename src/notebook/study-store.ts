@@ -103,7 +103,9 @@ function openStudy(options: StoreOptions, defaults: Study, restore: (key: string
     const result = decodeStudyLink(fragment, defaults);
     if (result.ok) {
       out.study = result.study;
-      out.writeNow = options.persist;
+      // Saved at once so every page shows it, unless the stored entry is unreadable: then only
+      // after a change, like any page opened over an unreadable entry (item 4).
+      out.writeNow = options.persist && !stored?.unreadable;
       const local = stored && !stored.unreadable ? stored.study : null;
       if (local && !sameValue(local, result.study)) {
         try {

@@ -144,6 +144,15 @@ describe("item 4: a stored study that fails validation is never overwritten", ()
     expect(localStorage.getItem(UNREADABLE_KEY)).toBe(newer);
   });
 
+  it("a link opened over an unreadable entry is shown but not saved until a change", () => {
+    localStorage.setItem(STORAGE_KEY, "{garbage");
+    history.replaceState(null, "", `/compare.html#s=${encodeStudyLink(setIn(defaultStudy(), ["brief", "spanM"], 90), defaultStudy())}`);
+    const store = open();
+    expect(store.study.value.brief.spanM).toBe(90);
+    expect(localStorage.getItem(STORAGE_KEY)).toBe("{garbage");
+    expect(localStorage.getItem(UNREADABLE_KEY)).toBe("{garbage");
+  });
+
   it("opening a page writes nothing to storage", () => {
     open();
     expect(localStorage.length).toBe(0);
