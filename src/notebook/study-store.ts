@@ -93,7 +93,7 @@ function openStudy(options: StoreOptions, defaults: Study, restore: (key: string
     const { text } = stored.unreadable;
     out.banners.push({
       id: "unreadable",
-      text: `The study saved in this browser could not be read, so the defaults are shown. ${stored.message ?? ""}`,
+      text: (stored.message ?? "").replace(/^the saved study/, "The study saved in this browser"),
       actions: [{ label: "Download the unreadable study", run: () => downloadText("unreadable-study.spanbook.json", text, "application/json") }],
     });
   } else if (stored?.message) out.notices.push(stored.message);

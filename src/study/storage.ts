@@ -60,10 +60,10 @@ export function readStoredStudy(store: KeyValueStore, fallback: () => Study): St
   if (result.ok) return { study: result.study, message: null };
   const first = result.problems[0];
   const backupKey = backupUnreadable(store, text);
-  const kept = backupKey ? `it is kept in browser storage under "${backupKey}"` : "it could not be copied, but it is left in place";
+  const kept = backupKey ? `It is kept in browser storage under "${backupKey}"` : "It could not be copied, but it is left in place";
   return {
     study: fallback(),
-    message: `the saved study could not be used (${first ? `${first.path}: ${first.message}` : "unknown problem"}); started from the defaults. Nothing is overwritten until you change something, and ${kept}.`,
+    message: `the saved study could not be used (${first ? `${first.path}: ${first.message}` : "unknown problem"}), so the defaults are shown. ${kept}, and nothing is saved over it until you change something.`,
     unreadable: { text, backupKey },
   };
 }

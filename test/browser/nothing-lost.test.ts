@@ -53,7 +53,7 @@ describe("nothing lost (issue 10)", () => {
     await page.evaluate((text) => localStorage.setItem("spanbook.study", text), newer);
     await page.reload();
     await page.waitForSelector("[data-banner=unreadable]");
-    expect(await page.locator("[data-banner=unreadable]").innerText()).toMatch(/could not be read.*schemaVersion: 99/s);
+    expect(await page.locator("[data-banner=unreadable]").innerText()).toMatch(/could not be used.*schemaVersion: 99/s);
     // Another page opens: still nothing written over it.
     await page.goto(url("carbon.html"));
     await page.waitForSelector("[data-banner=unreadable]");

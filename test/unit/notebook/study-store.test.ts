@@ -137,7 +137,7 @@ describe("item 4: a stored study that fails validation is never overwritten", ()
     expect(localStorage.getItem(STORAGE_KEY)).toBe(newer);
     expect(localStorage.getItem(UNREADABLE_KEY)).toBe(newer);
     const banner = store.banners.value.find((b) => b.id === "unreadable");
-    expect(banner?.text).toMatch(/could not be read.*schemaVersion/s);
+    expect(banner?.text).toMatch(/could not be used \(schemaVersion.*kept in browser storage under "spanbook\.study\.unreadable"/s);
     expect(banner?.actions.map((a) => a.label)).toEqual(["Download the unreadable study"]);
     store.bind<number>(["brief", "spanM"]).set(150);
     expect(stored()?.brief.spanM).toBe(150);
