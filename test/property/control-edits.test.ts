@@ -9,7 +9,7 @@ import { createStudyStore } from "../../src/notebook/study-store";
 import { briefControls } from "../../src/notebook/brief-controls";
 import { schemeOptionControls } from "../../src/notebook/scheme-panel";
 import { SCHEMES } from "../../src/schemes";
-import { validateStudy, studyToJson, readStoredStudy, defaultStudy, getIn } from "../../src/study";
+import { validateStudy, readStoredStudy, defaultStudy, getIn } from "../../src/study";
 
 /** The number fields on the page: id and the study path each is bound to. */
 function fields(): { id: string; path: (string | number)[] }[] {
