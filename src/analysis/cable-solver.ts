@@ -1,0 +1,311 @@
+/**
+ * Geometrically nonlinear statics of a pin-jointed cable-and-strut model: Newton–Raphson on the
+ * out-of-balance force with the tangent stiffness (elastic + geometric), load stepping (the step is
+ * halved when Newton fails) and a backtracking line search on the residual norm; cables that would
+ * shorten below their unstressed length carry nothing (slack) and come back when they lengthen.
+ *
+ * Member law (see model.ts): N = EA(l − L_u)/L_u, engineering strain on the unstressed length L_u;
+ * loads are dead (they keep their direction) unless `loadAt` supplies deformation-dependent loads.
+ * Tangent of a member with unit vector e: K = (EA/L_u)·e eᵀ + (N/l)·(I − e eᵀ) (for a slack cable a
+ * token 1e-9·EA/L_u is kept in the tangent only, so a node held by slack cables alone does not stop
+ * the factorisation; the residual, and so the converged answer, is unaffected).
+ *
+ * Convergence: ‖R‖ ≤ tolerance × the applied load (the larger of the norm of the loads on the free
+ * freedoms and of the support reactions). Otherwise the result says `converged: false` and why.
+ */
+import { type CableModel, checkCableModel, flatCoordinates, flatLoads, restLengths } from "./model";
+import { type EnvelopeMatrix, factorLDL, numberEquations } from "./sparse";
+
+export interface CableSolverOptions {
+  /** Load steps (equal increments of the load factor), default 1. */
+  steps?: number;
+  /** Newton iterations allowed per step, default 40. */
+  maxIterations?: number;
+  /** Residual tolerance relative to the applied load, default 1e-6. */
+  tolerance?: number;
+  /** Times a failing step may be halved, default 8. */
+  maxStepHalvings?: number;
+  /** Extra loads that depend on the current coordinates (e.g. pressure on the deformed surface), flat N. */
+  loadAt?: (coordinates: Float64Array) => Float64Array;
+}
+
+export interface CableSolution {
+  converged: boolean;
+  /** Why it did not converge (absent when it did). */
+  reason?: string;
+  /** Flat displacements, m, and deformed coordinates. */
+  displacementsM: Float64Array;
+  coordinatesM: Float64Array;
+  /** Member forces, N (tension positive), and which cables are slack. */
+  forcesN: Float64Array;
+  slack: boolean[];
+  /** Flat support reactions, N (zero at free freedoms). */
+  reactionsN: Float64Array;
+  /** Newton iterations in all, and per load step. */
+  iterations: number;
+  iterationsPerStep: number[];
+  /** Final residual norm and the applied load it is measured against, N. */
+  residualN: number;
+  appliedN: number;
+}
+
+interface Prepared {
+  model: CableModel;
+  x0: Float64Array;
+  restM: Float64Array;
+  load: Float64Array;
+  prescribed: Float64Array;
+  equationOf: Int32Array;
+  matrix: () => EnvelopeMatrix;
+}
+
+function prepare(model: CableModel): Prepared {
+  checkCableModel(model);
+  const n = model.nodes.length;
+  const fixed = new Uint8Array(3 * n);
+  const prescribed = new Float64Array(3 * n);
+  for (const s of model.supports) {
+    for (let d = 0; d < 3; d++) {
+      if (!s.fixed[d]) continue;
+      fixed[3 * s.node + d] = 1;
+      prescribed[3 * s.node + d] = s.displacementM?.[d] ?? 0;
+    }
+  }
+  const { equationOf, matrix } = numberEquations(n, 3, model.members.map((m) => [m.i, m.j]), (node, d) => fixed[3 * node + d] === 1);
+  return { model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix };
+}
+
+/** Member forces and the internal force vector at displacements u; optionally the tangent. */
+function internal(p: Prepared, u: Float64Array, tangent?: EnvelopeMatrix): { forces: Float64Array; fint: Float64Array; slack: boolean[] } {
+  const { model, x0, restM, equationOf } = p;
+  const forces = new Float64Array(model.members.length);
+  const fint = new Float64Array(x0.length);
+  const slack: boolean[] = new Array<boolean>(model.members.length).fill(false);
+  const e = [0, 0, 0];
+  model.members.forEach((m, k) => {
+    const a = 3 * m.i;
+    const b = 3 * m.j;
+    let l = 0;
+    for (let d = 0; d < 3; d++) {
+      e[d] = x0[b + d]! + u[b + d]! - x0[a + d]! - u[a + d]!;
+      l += e[d]! * e[d]!;
+    }
+    l = Math.sqrt(l);
+    for (let d = 0; d < 3; d++) e[d]! /= l;
+    const lu = restM[k]!;
+    let force = (m.eaN * (l - lu)) / lu;
+    let axial = m.eaN / lu;
+    if (m.kind === "cable" && force < 0) {
+      force = 0;
+      axial *= 1e-9;
+      slack[k] = true;
+    }
+    forces[k] = force;
+    for (let d = 0; d < 3; d++) {
+      fint[a + d]! -= force * e[d]!;
+      fint[b + d]! += force * e[d]!;
+    }
+    if (tangent) addBarTangent(tangent, equationOf, m.i, m.j, e, axial, force / l);
+  });
+  return { forces, fint, slack };
+}
+
+/** Adds the 6×6 bar tangent [k −k; −k k], k = axial·e eᵀ + geometric·(I − e eᵀ). */
+function addBarTangent(K: EnvelopeMatrix, equationOf: Int32Array, i: number, j: number, e: number[], axial: number, geometric: number): void {
+  for (let r = 0; r < 3; r++) {
+    for (let c = 0; c < 3; c++) {
+      const k = (axial - geometric) * e[r]! * e[c]! + (r === c ? geometric : 0);
+      const ir = equationOf[3 * i + r]!;
+      const jr = equationOf[3 * j + r]!;
+      const ic = equationOf[3 * i + c]!;
+      const jc = equationOf[3 * j + c]!;
+      if (ir >= 0 && ic >= 0 && ir >= ic) K.add(ir, ic, k);
+      if (jr >= 0 && jc >= 0 && jr >= jc) K.add(jr, jc, k);
+      if (ir >= 0 && jc >= 0) K.add(ir, jc, -k);
+    }
+  }
+}
+
+interface State {
+  u: Float64Array;
+  forces: Float64Array;
+  slack: boolean[];
+  residual: Float64Array;
+  residualN: number;
+  appliedN: number;
+  reactions: Float64Array;
+}
+
+/** Residual (free freedoms) and reactions at load factor λ. */
+function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSolverOptions, tangent?: EnvelopeMatrix): State {
+  const { forces, fint, slack } = internal(p, u, tangent);
+  const extra = options.loadAt ? options.loadAt(Float64Array.from(p.x0, (x, k) => x + u[k]!)) : undefined;
+  const residual = new Float64Array(tangent ? tangent.n : countFree(p));
+  const reactions = new Float64Array(u.length);
+  let free2 = 0;
+  let react2 = 0;
+  let r2 = 0;
+  for (let k = 0; k < u.length; k++) {
+    const applied = lambda * p.load[k]! + (extra ? lambda * extra[k]! : 0);
+    const eq = p.equationOf[k]!;
+    if (eq >= 0) {
+      residual[eq] = applied - fint[k]!;
+      r2 += residual[eq]! ** 2;
+      free2 += applied * applied;
+    } else {
+      reactions[k] = fint[k]! - applied;
+      react2 += reactions[k]! ** 2;
+    }
+  }
+  return { u, forces, slack, residual, residualN: Math.sqrt(r2), appliedN: Math.max(Math.sqrt(free2), Math.sqrt(react2)), reactions };
+}
+
+function countFree(p: Prepared): number {
+  let n = 0;
+  for (const e of p.equationOf) if (e >= 0) n++;
+  return n;
+}
+
+function withPrescribed(p: Prepared, u: Float64Array, lambda: number): Float64Array {
+  const v = Float64Array.from(u);
+  for (let k = 0; k < v.length; k++) if (p.equationOf[k]! < 0) v[k] = lambda * p.prescribed[k]!;
+  return v;
+}
+
+function describeEquation(p: Prepared, equation: number): string {
+  const k = p.equationOf.indexOf(equation);
+  return `node ${Math.floor(k / 3)} (${"xyz"[k % 3]})`;
+}
+
+type NewtonOutcome = { ok: true; state: State; iterations: number } | { ok: false; reason: string; iterations: number; state: State };
+
+/** Newton–Raphson with a line search from state u to equilibrium at load factor λ. */
+function newton(p: Prepared, start: Float64Array, lambda: number, options: CableSolverOptions): NewtonOutcome {
+  const tolerance = options.tolerance ?? 1e-6;
+  const maxIterations = options.maxIterations ?? 40;
+  let u = withPrescribed(p, start, lambda);
+  const K = p.matrix();
+  let state = evaluate(p, u, lambda, options, K);
+  for (let iteration = 0; ; iteration++) {
+    if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
+    if (state.residualN <= tolerance * state.appliedN || state.appliedN === 0) return { ok: true, state, iterations: iteration };
+    if (iteration >= maxIterations) return { ok: false, reason: `no equilibrium after ${iteration} Newton iterations (residual ${state.residualN.toExponential(2)} N against ${state.appliedN.toExponential(2)} N applied)`, iterations: iteration, state };
+    const f = factorLDL(K);
+    if (!f.ok) return { ok: false, reason: `the stiffness is singular at ${describeEquation(p, f.equation)}: a mechanism (a node held only by slack cables, or too few supports)`, iterations: iteration, state };
+    const du = f.solve(state.residual);
+    let best: State | undefined;
+    for (let s = 1, tries = 0; tries < 8; s /= 2, tries++) {
+      const trial = Float64Array.from(u);
+      for (let k = 0; k < trial.length; k++) {
+        const eq = p.equationOf[k]!;
+        if (eq >= 0) trial[k]! += s * du[eq]!;
+      }
+      const t = evaluate(p, trial, lambda, options);
+      if (!best || t.residualN < best.residualN) best = t;
+      if (t.residualN < state.residualN) break;
+    }
+    u = best!.u;
+    K.values.fill(0);
+    state = evaluate(p, u, lambda, options, K);
+  }
+}
+
+/** Solves the model under its loads (and prescribed support displacements), stepping the load. */
+export function solveCableModel(model: CableModel, options: CableSolverOptions = {}): CableSolution {
+  const p = prepare(model);
+  const steps = Math.max(1, Math.round(options.steps ?? 1));
+  const maxHalvings = options.maxStepHalvings ?? 8;
+  let u: Float64Array = new Float64Array(p.x0.length);
+  let lambda = 0;
+  let increment = 1 / steps;
+  let halvings = 0;
+  let iterations = 0;
+  const perStep: number[] = [];
+  let last: NewtonOutcome | undefined;
+  while (lambda < 1 - 1e-12) {
+    const target = Math.min(1, lambda + increment);
+    const outcome = newton(p, u, target, options);
+    iterations += outcome.iterations;
+    last = outcome;
+    if (outcome.ok) {
+      u = outcome.state.u;
+      lambda = target;
+      perStep.push(outcome.iterations);
+      continue;
+    }
+    if (++halvings > maxHalvings) break;
+    increment /= 2;
+  }
+  const final = last!;
+  const state = final.state;
+  return {
+    converged: final.ok && lambda >= 1 - 1e-12,
+    ...(final.ok ? {} : { reason: `${final.reason} at load factor ${(lambda + increment).toFixed(4)}` }),
+    displacementsM: state.u,
+    coordinatesM: Float64Array.from(p.x0, (x, k) => x + state.u[k]!),
+    forcesN: state.forces,
+    slack: state.slack,
+    reactionsN: state.reactions,
+    iterations,
+    iterationsPerStep: perStep,
+    residualN: state.residualN,
+    appliedN: state.appliedN,
+  };
+}
+
+/**
+ * First-order (linear) analysis about the initial geometry: K·u = P with K the tangent there
+ * (elastic plus the geometric stiffness of the initial forces), member forces
+ * N = N0 + (EA/L_u)·e·Δu. Cables are not allowed to slacken (a linear analysis cannot tell);
+ * prescribed support displacements are not supported here.
+ */
+export function solveCableModelLinear(model: CableModel): CableSolution {
+  const p = prepare(model);
+  if (p.prescribed.some((v) => v !== 0)) throw new RangeError("invalid model.supports: prescribed displacements need the nonlinear solver (expected none in a linear analysis)");
+  const zero = new Float64Array(p.x0.length);
+  const K = p.matrix();
+  const initial = internal(p, zero, K);
+  const u = new Float64Array(p.x0.length);
+  const f = factorLDL(K);
+  const rhs = new Float64Array(K.n);
+  for (let k = 0; k < u.length; k++) if (p.equationOf[k]! >= 0) rhs[p.equationOf[k]!] = p.load[k]! - initial.fint[k]!;
+  const ok = f.ok;
+  if (f.ok) {
+    const du = f.solve(rhs);
+    for (let k = 0; k < u.length; k++) if (p.equationOf[k]! >= 0) u[k] = du[p.equationOf[k]!]!;
+  }
+  const forces = new Float64Array(model.members.length);
+  const reactions = new Float64Array(u.length);
+  model.members.forEach((m, k) => {
+    const a = 3 * m.i;
+    const b = 3 * m.j;
+    const l = Math.hypot(p.x0[b]! - p.x0[a]!, p.x0[b + 1]! - p.x0[a + 1]!, p.x0[b + 2]! - p.x0[a + 2]!);
+    const e = [0, 1, 2].map((d) => (p.x0[b + d]! - p.x0[a + d]!) / l);
+    const du = [0, 1, 2].map((d) => u[b + d]! - u[a + d]!);
+    const stretch = e[0]! * du[0]! + e[1]! * du[1]! + e[2]! * du[2]!;
+    const n0 = initial.forces[k]!;
+    forces[k] = n0 + (m.eaN / p.restM[k]!) * stretch;
+    // Linearised end force on node j: N e + (N0/l)(Δu − e (e·Δu)); on node i the opposite.
+    for (let d = 0; d < 3; d++) {
+      const end = forces[k]! * e[d]! + (n0 / l) * (du[d]! - e[d]! * stretch);
+      if (p.equationOf[b + d]! < 0) reactions[b + d]! += end;
+      if (p.equationOf[a + d]! < 0) reactions[a + d]! -= end;
+    }
+  });
+  for (let k = 0; k < u.length; k++) if (p.equationOf[k]! < 0) reactions[k]! -= p.load[k]!;
+  let applied2 = 0;
+  for (let k = 0; k < u.length; k++) if (p.equationOf[k]! >= 0) applied2 += p.load[k]! ** 2;
+  return {
+    converged: ok,
+    ...(f.ok ? {} : { reason: `the stiffness is singular at ${describeEquation(p, f.equation)}: a mechanism (too few supports or members)` }),
+    displacementsM: u,
+    coordinatesM: Float64Array.from(p.x0, (x, k) => x + u[k]!),
+    forcesN: forces,
+    slack: model.members.map(() => false),
+    reactionsN: reactions,
+    iterations: 1,
+    iterationsPerStep: [1],
+    residualN: 0,
+    appliedN: Math.sqrt(applied2),
+  };
+}
