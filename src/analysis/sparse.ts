@@ -33,8 +33,8 @@ export class EnvelopeMatrix {
 
   /** Adds v to entry (i, j) (and so to (j, i)); i, j must lie inside the envelope. */
   add(i: number, j: number, v: number): void {
-    if (i < j) [i, j] = [j, i];
-    this.values[this.start[i]! + j - this.first[i]!]! += v;
+    if (i < j) this.values[this.start[j]! + i - this.first[j]!]! += v;
+    else this.values[this.start[i]! + j - this.first[i]!]! += v;
   }
 
   /** Entry (i, j), 0 outside the envelope. */

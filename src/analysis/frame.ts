@@ -1,0 +1,168 @@
+/**
+ * A 3D frame of prismatic members with rigid joints: 12 freedoms per member (three translations and
+ * three rotations at each end), the linear elastic stiffness of the Euler–Bernoulli beam and the
+ * geometric stiffness of its axial force (cubic shape functions; the consistent matrix of
+ * McGuire, Gallagher & Ziemian, Matrix Structural Analysis, 2nd ed., 2000, §9.3 — from memory —
+ * keeping the axial-force terms only: the bending-moment terms of the full matrix are left out,
+ * as usual for a linear buckling analysis of members loaded mainly in compression).
+ * Node freedoms: ux, uy, uz, θx, θy, θz (right-hand rotations about the global axes).
+ */
+import type { Vec3 } from "./model";
+import { type EnvelopeMatrix, factorLDL, numberEquations } from "./sparse";
+
+export interface FrameSection {
+  /** E·A, N */
+  eaN: number;
+  /** E·I about the two principal axes, N·m² (equal for a tube). */
+  eiyNm2: number;
+  eizNm2: number;
+  /** G·J, N·m² */
+  gjNm2: number;
+  /** Polar radius of gyration squared I_p/A, m² (for the torsional term of the geometric stiffness). */
+  polarRadius2M2: number;
+}
+
+export interface FrameMember {
+  i: number;
+  j: number;
+  section: FrameSection;
+}
+
+export interface FrameModel {
+  nodes: readonly Vec3[];
+  members: readonly FrameMember[];
+  /** Restrained freedoms of each supported node (ux, uy, uz, θx, θy, θz). */
+  supports: readonly { node: number; fixed: readonly boolean[] }[];
+  /** Flat nodal loads, 6 per node (forces N, moments N·m). */
+  loads: Float64Array;
+}
+
+/** Rotation from global to member axes: rows are the member's local x (along it), y and z. */
+function memberAxes(p: Vec3, q: Vec3): { R: number[]; L: number } {
+  const dx = q[0] - p[0];
+  const dy = q[1] - p[1];
+  const dz = q[2] - p[2];
+  const L = Math.hypot(dx, dy, dz);
+  const x = [dx / L, dy / L, dz / L];
+  // Local y normal to x and to a reference axis (global z, or global x for a vertical member).
+  const ref = Math.abs(x[2]!) > 0.999 ? [1, 0, 0] : [0, 0, 1];
+  let y = [ref[1]! * x[2]! - ref[2]! * x[1]!, ref[2]! * x[0]! - ref[0]! * x[2]!, ref[0]! * x[1]! - ref[1]! * x[0]!];
+  const ny = Math.hypot(y[0]!, y[1]!, y[2]!);
+  y = y.map((c) => c / ny);
+  const z = [x[1]! * y[2]! - x[2]! * y[1]!, x[2]! * y[0]! - x[0]! * y[2]!, x[0]! * y[1]! - x[1]! * y[0]!];
+  return { R: [...x, ...y, ...z], L };
+}
+
+/** 12×12 local stiffness (row-major): elastic, plus the geometric stiffness of axial force N (tension +). */
+function localStiffness(s: FrameSection, L: number, axialN: number, elastic: boolean): Float64Array {
+  const k = new Float64Array(144);
+  const put = (dofs: number[], m: number[][]) => {
+    for (let a = 0; a < dofs.length; a++) for (let b = 0; b < dofs.length; b++) k[dofs[a]! * 12 + dofs[b]!]! += m[a]![b]!;
+  };
+  const L2 = L * L;
+  if (elastic) {
+    const ea = s.eaN / L;
+    const gj = s.gjNm2 / L;
+    put([0, 6], [[ea, -ea], [-ea, ea]]);
+    put([3, 9], [[gj, -gj], [-gj, gj]]);
+    const bz = s.eizNm2 / (L2 * L);
+    put([1, 5, 7, 11], [[12 * bz, 6 * L * bz, -12 * bz, 6 * L * bz], [6 * L * bz, 4 * L2 * bz, -6 * L * bz, 2 * L2 * bz], [-12 * bz, -6 * L * bz, 12 * bz, -6 * L * bz], [6 * L * bz, 2 * L2 * bz, -6 * L * bz, 4 * L2 * bz]]);
+    const by = s.eiyNm2 / (L2 * L);
+    put([2, 4, 8, 10], [[12 * by, -6 * L * by, -12 * by, -6 * L * by], [-6 * L * by, 4 * L2 * by, 6 * L * by, 2 * L2 * by], [-12 * by, 6 * L * by, 12 * by, 6 * L * by], [-6 * L * by, 2 * L2 * by, 6 * L * by, 4 * L2 * by]]);
+  }
+  if (axialN !== 0) {
+    const g = axialN / L;
+    const a = (6 / 5) * g;
+    const b = (L / 10) * g;
+    const c = ((2 * L2) / 15) * g;
+    const d = (-L2 / 30) * g;
+    put([1, 5, 7, 11], [[a, b, -a, b], [b, c, -b, d], [-a, -b, a, -b], [b, d, -b, c]]);
+    put([2, 4, 8, 10], [[a, -b, -a, -b], [-b, c, b, d], [-a, b, a, b], [-b, d, b, c]]);
+    const t = g * s.polarRadius2M2;
+    put([3, 9], [[t, -t], [-t, t]]);
+  }
+  return k;
+}
+
+/** Tᵀ·k·T with T = diag(R, R, R, R): the member stiffness in global axes. */
+function toGlobal(k: Float64Array, R: number[]): Float64Array {
+  const kr = new Float64Array(144); // k·T
+  for (let a = 0; a < 12; a++) {
+    for (let blk = 0; blk < 4; blk++) {
+      for (let c = 0; c < 3; c++) {
+        let sum = 0;
+        for (let r = 0; r < 3; r++) sum += k[a * 12 + blk * 3 + r]! * R[r * 3 + c]!;
+        kr[a * 12 + blk * 3 + c] = sum;
+      }
+    }
+  }
+  const out = new Float64Array(144);
+  for (let blk = 0; blk < 4; blk++) {
+    for (let c = 0; c < 3; c++) {
+      for (let b = 0; b < 12; b++) {
+        let sum = 0;
+        for (let r = 0; r < 3; r++) sum += R[r * 3 + c]! * kr[(blk * 3 + r) * 12 + b]!;
+        out[(blk * 3 + c) * 12 + b] = sum;
+      }
+    }
+  }
+  return out;
+}
+
+/** The frame's equation numbering and its assembler. */
+export function frameSystem(model: FrameModel) {
+  const n = model.nodes.length;
+  const fixed = new Uint8Array(6 * n);
+  for (const s of model.supports) s.fixed.forEach((f, d) => f && (fixed[6 * s.node + d] = 1));
+  const { equationOf, matrix, count } = numberEquations(n, 6, model.members.map((m) => [m.i, m.j]), (node, d) => fixed[6 * node + d] === 1);
+  const axes = model.members.map((m) => memberAxes(model.nodes[m.i]!, model.nodes[m.j]!));
+  /** Assembles Σ Tᵀ k T over the members (elastic, and/or geometric with the given axial forces). */
+  const assemble = (elastic: boolean, axialN?: Float64Array): EnvelopeMatrix => {
+    const K = matrix();
+    model.members.forEach((m, e) => {
+      const { R, L } = axes[e]!;
+      const kg = toGlobal(localStiffness(m.section, L, axialN ? axialN[e]! : 0, elastic), R);
+      const eqs = [...Array(12).keys()].map((a) => equationOf[(a < 6 ? 6 * m.i : 6 * m.j) + (a % 6)]!);
+      for (let a = 0; a < 12; a++) {
+        if (eqs[a]! < 0) continue;
+        for (let b = 0; b < 12; b++) if (eqs[b]! >= 0 && eqs[b]! <= eqs[a]!) K.add(eqs[a]!, eqs[b]!, kg[a * 12 + b]!);
+      }
+    });
+    return K;
+  };
+  /** Axial force of each member (tension +) from global displacements. */
+  const axialForces = (u: Float64Array): Float64Array =>
+    Float64Array.from(model.members, (m, e) => {
+      const { R, L } = axes[e]!;
+      let stretch = 0;
+      for (let d = 0; d < 3; d++) stretch += R[d]! * (u[6 * m.j + d]! - u[6 * m.i + d]!);
+      return (m.section.eaN / L) * stretch;
+    });
+  return { equationOf, count, assemble, axialForces, lengthsM: axes.map((a) => a.L) };
+}
+
+export interface FrameSolution {
+  ok: boolean;
+  reason?: string;
+  /** Flat displacements, 6 per node (m, rad). */
+  displacements: Float64Array;
+  /** Axial force per member, N (tension +). */
+  axialN: Float64Array;
+  /** Solves with the factorised elastic stiffness (equation numbering), when it factored. */
+  solve?: (b: Float64Array) => Float64Array;
+}
+
+/** Linear static solution K·u = P (the system and its elastic stiffness may be passed in, K is not modified). */
+export function solveFrameLinear(model: FrameModel, system = frameSystem(model), K = system.assemble(true)): FrameSolution {
+  const f = factorLDL(K.copy());
+  const u = new Float64Array(6 * model.nodes.length);
+  if (!f.ok) {
+    const k = system.equationOf.indexOf(f.equation);
+    return { ok: false, reason: `the frame's stiffness is singular at node ${Math.floor(k / 6)} (freedom ${k % 6}): a mechanism`, displacements: u, axialN: new Float64Array(model.members.length) };
+  }
+  const rhs = new Float64Array(system.count);
+  system.equationOf.forEach((eq, k) => eq >= 0 && (rhs[eq] = model.loads[k]!));
+  const x = f.solve(rhs);
+  system.equationOf.forEach((eq, k) => eq >= 0 && (u[k] = x[eq]!));
+  return { ok: true, displacements: u, axialN: system.axialForces(u), solve: f.solve };
+}
