@@ -171,4 +171,6 @@ if (!only || only === "build") benchBuild();
 if (!only || only === "browser") await benchBrowser();
 // The risk benchmark is its own script (test/bench/risk.ts) when present.
 const riskBench = "./risk.ts";
+const analysisBench = "./analysis.ts";
+if (!only || only === "analysis") await import(analysisBench);
 if (existsSync("test/bench/risk.ts") && (!only || only === "risk")) await import(riskBench);

@@ -1,0 +1,72 @@
+// The analysis layer's budgets (issue 13): a 160 m cable net and cable dome through every load case
+// (median ≤ 100 ms in node), and a 160 m geodesic lattice's buckling analysis (≤ 1 s). Printed, not
+// asserted. Run alone: npm run bench -- analysis
+import { saddleNet } from "../../src/analysis/models/saddle-net";
+import { radialCableDome } from "../../src/analysis/models/radial-cable-dome";
+import { roofCases, solveRoofCase } from "../../src/analysis/models/roof-cases";
+import { latticeBuckling, latticeFrame, latticePlanLoads, tubeSection } from "../../src/analysis/lattice";
+import { geodesicCap, geodesicFrequencyFor } from "../../src/mechanics/geodesic";
+import type { NetModel } from "../../src/analysis/models/saddle-net";
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+
+// Illustrative actions (kPa-scale roof loads; not a design case): dead 0.3 kPa, snow 1.0 kPa,
+// suction 1.2 → 0.4 kPa windward → leeward.
+const actions = { deadPa: 300, snowPa: 1000, suctionWindwardPa: 1200, suctionLeewardPa: 400 };
+
+function benchTension(name: string, net: NetModel, halfWidthM: number, repeats: number): void {
+  const cases = roofCases(net, actions, halfWidthM);
+  const dofs = 3 * net.free.length;
+  console.log(`${name}: ${net.model.nodes.length} nodes, ${net.model.members.length} members, ${dofs} dofs`);
+  const times: number[] = [];
+  let lines: string[] = [];
+  for (let r = 0; r < repeats; r++) {
+    const t = performance.now();
+    lines = cases.map((c) => {
+      const s = solveRoofCase(net.model, c);
+      let maxDisp = 0;
+      for (let k = 0; k < s.displacementsM.length; k += 3) maxDisp = Math.max(maxDisp, Math.hypot(s.displacementsM[k]!, s.displacementsM[k + 1]!, s.displacementsM[k + 2]!));
+      return `  ${c.name.padEnd(22)} ${s.converged ? "converged" : `NOT converged: ${s.reason}`}  iterations ${s.iterations}  max displacement ${maxDisp.toFixed(3)} m  slack ${s.slack.filter(Boolean).length}`;
+    });
+    times.push(performance.now() - t);
+  }
+  lines.forEach((l) => console.log(l));
+  console.log(`  every case: median ${median(times).toFixed(1)} ms (n=${repeats}; budget 100 ms)`);
+}
+
+function benchLattice(): void {
+  // 160 m span, rise 1/6 of the span; struts about 5 m (the scheme's default target); CHS 273 × 10.
+  const span = 160;
+  const rise = span / 6;
+  const R = ((span / 2) ** 2 + rise ** 2) / (2 * rise);
+  const cap = geodesicCap(geodesicFrequencyFor(R, 5), R, Math.asin(span / 2 / R));
+  const frame = latticeFrame(cap, tubeSection(210e9, 0.3, 0.273, 0.01));
+  const cases: [string, (x: number, y: number) => number][] = [
+    ["uniform snow 1 kPa", () => 1000],
+    ["drifted snow 1 / 0.5 kPa", (x) => (x < 0 ? 1000 : 500)],
+  ];
+  for (const [name, load] of cases) {
+    const times: number[] = [];
+    let result = latticeBuckling(frame, latticePlanLoads(cap, load), 3);
+    for (let r = 0; r < 3; r++) {
+      const t = performance.now();
+      result = latticeBuckling(frame, latticePlanLoads(cap, load), 3);
+      times.push(performance.now() - t);
+    }
+    const b = result.buckling;
+    console.log(
+      `160 m geodesic lattice (v = ${cap.frequency}, R = ${R.toFixed(1)} m), ${name}: ${result.nodes} nodes, ${result.members} members, ${result.dofs} dofs; ` +
+        `buckling factors ${b.factors.map((f) => f.toFixed(2)).join(", ")} (${b.converged ? "converged" : b.reason}) in ${b.steps} Lanczos steps; median ${median(times).toFixed(0)} ms (budget 1 s)`,
+    );
+  }
+}
+
+console.log("\n## analysis layer (node)");
+const load = (await import("node:os")).loadavg()[0]!;
+console.log(`(load average ${load.toFixed(1)} on ${(await import("node:os")).cpus().length} cores while measuring)`);
+// Prestress about 190 kN per metre of net width each way, cables about 200 MN of EA per metre.
+benchTension("160 m saddle cable net, 8 m mesh", saddleNet({ spanM: 160, spacingM: 8, riseM: 20, prestressN: 1.5e6, eaN: 1.6e9 }), 80, 5);
+benchTension("160 m saddle cable net, 4 m mesh", saddleNet({ spanM: 160, spacingM: 4, riseM: 20, prestressN: 0.75e6, eaN: 0.8e9 }), 80, 3);
+const dome = radialCableDome({ spanM: 160, trusses: 32, panels: 8, hubRatio: 0.12, ringDepthM: 4, hubDepthM: 14, prestressN: 4e6, cableEaN: 4e9, postEaN: 8e9 });
+benchTension("160 m radial cable-truss dome, 32 trusses × 8 panels", dome, 80, 5);
+benchLattice();

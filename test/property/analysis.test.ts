@@ -1,0 +1,85 @@
+// Properties of the nonlinear cable solver (src/analysis/cable-solver.ts) on random small nets:
+// equilibrium at convergence, slack cables carry nothing, and first-order behaviour at small load.
+import { describe, it, expect } from "vitest";
+import fc from "fast-check";
+import { solveCableModel, solveCableModelLinear } from "../../src/analysis/cable-solver";
+import { saddleNet } from "../../src/analysis/models/saddle-net";
+import type { CableModel, Vec3 } from "../../src/analysis/model";
+
+const netArb: fc.Arbitrary<NetParameters> = fc.record({
+  cells: fc.integer({ min: 2, max: 6 }),
+  spacingM: fc.double({ min: 0.5, max: 5, noNaN: true }),
+  riseRatio: fc.double({ min: 0.02, max: 0.2, noNaN: true }),
+  prestressN: fc.double({ min: 1e3, max: 1e6, noNaN: true }),
+  stiffnessRatio: fc.double({ min: 50, max: 5000, noNaN: true }),
+});
+
+/** The saddle net with loads (per node, N) scaled to the prestress by `loadRatio`. */
+type NetParameters = { cells: number; spacingM: number; riseRatio: number; prestressN: number; stiffnessRatio: number };
+function loaded(p: NetParameters, loadRatio: number, pattern: (u: number, v: number) => Vec3): CableModel {
+  const span = p.cells * p.spacingM;
+  const net = saddleNet({ spanM: span, spacingM: p.spacingM, riseM: p.riseRatio * span, prestressN: p.prestressN, eaN: p.prestressN * p.stiffnessRatio });
+  return { ...net.model, loads: net.free.map((node) => ({ node, forceN: pattern(net.model.nodes[node]![0], net.model.nodes[node]![1]).map((c) => c * loadRatio * p.prestressN) as unknown as Vec3 })) };
+}
+
+/** Largest free-node force imbalance, recomputed here from the member forces the solver returns. */
+function imbalance(model: CableModel, coordinates: Float64Array, forces: Float64Array): { worst: number; load: number } {
+  const r = new Float64Array(coordinates.length);
+  for (const l of model.loads) for (let d = 0; d < 3; d++) r[3 * l.node + d]! += l.forceN[d]!;
+  model.members.forEach((m, k) => {
+    const e = [0, 1, 2].map((d) => coordinates[3 * m.j + d]! - coordinates[3 * m.i + d]!);
+    const l = Math.hypot(e[0]!, e[1]!, e[2]!);
+    for (let d = 0; d < 3; d++) {
+      r[3 * m.i + d]! += (forces[k]! * e[d]!) / l;
+      r[3 * m.j + d]! -= (forces[k]! * e[d]!) / l;
+    }
+  });
+  const fixed = new Set(model.supports.map((s) => s.node));
+  let worst = 0;
+  let load = 0;
+  for (let n = 0; n < model.nodes.length; n++) if (!fixed.has(n)) worst += r[3 * n]! ** 2 + r[3 * n + 1]! ** 2 + r[3 * n + 2]! ** 2;
+  for (const l of model.loads) load += l.forceN[0]! ** 2 + l.forceN[1]! ** 2 + l.forceN[2]! ** 2;
+  return { worst: Math.sqrt(worst), load: Math.sqrt(load) };
+}
+
+describe("nonlinear cable solver: properties", () => {
+  it("at convergence the free nodes are in equilibrium to 1e-6 of the load, and slack cables carry 0", () => {
+    fc.assert(
+      fc.property(netArb, fc.double({ min: 0.01, max: 1, noNaN: true }), fc.boolean(), (p, ratio, half) => {
+        const model = loaded(p, ratio, (u) => [0, 0, half && u > 0 ? 0 : -1]);
+        const r = solveCableModel(model, { steps: 2 });
+        if (!r.converged) {
+          // Never a silent result: a reason is given.
+          expect(r.reason).toMatch(/\w/);
+          return;
+        }
+        const { worst, load } = imbalance(model, r.coordinatesM, r.forcesN);
+        expect(worst).toBeLessThanOrEqual(1e-6 * Math.max(load, r.appliedN) * 1.0001);
+        r.slack.forEach((s, k) => {
+          if (s) expect(r.forcesN[k]).toBe(0);
+          else expect(r.forcesN[k]).toBeGreaterThanOrEqual(0);
+        });
+      }),
+      { numRuns: 40 },
+    );
+  });
+  it("at a small load the nonlinear answer is the linear one, and doubling the load doubles it", () => {
+    fc.assert(
+      fc.property(netArb, (p) => {
+        const model = loaded(p, 1e-6, (u, v) => [0.1, -0.2, -1 + 0.01 * (u - v)]);
+        const nonlinear = solveCableModel(model, { tolerance: 1e-12 });
+        const linear = solveCableModelLinear(model);
+        const doubled = solveCableModelLinear({ ...model, loads: model.loads.map((l) => ({ node: l.node, forceN: l.forceN.map((c) => 2 * c) as unknown as Vec3 })) });
+        expect(nonlinear.converged).toBe(true);
+        let scale = 0;
+        for (const x of linear.displacementsM) scale = Math.max(scale, Math.abs(x));
+        linear.displacementsM.forEach((x, k) => {
+          expect(Math.abs(nonlinear.displacementsM[k]! - x)).toBeLessThanOrEqual(1e-4 * scale);
+          // (not exact to round-off: the form-found state is in equilibrium to about 1e-13 of the prestress)
+          expect(Math.abs(doubled.displacementsM[k]! - 2 * x)).toBeLessThanOrEqual(1e-6 * scale);
+        });
+      }),
+      { numRuns: 30 },
+    );
+  });
+});
