@@ -25,6 +25,13 @@ export interface CableSolverOptions {
   tolerance?: number;
   /** Times a failing step may be halved, default 8. */
   maxStepHalvings?: number;
+  /**
+   * Accept equilibrium states reached through a tangent that is not positive definite (default
+   * false: a load step whose tangent loses definiteness fails — a limit point or bifurcation — so
+   * load control never jumps silently past a snap-through to a remote equilibrium). Set it for
+   * displacement-controlled paths that are meant to go past a limit point.
+   */
+  allowUnstable?: boolean;
   /** Extra loads that depend on the current coordinates (e.g. pressure on the deformed surface), flat N. */
   loadAt?: (coordinates: Float64Array) => Float64Array;
 }
@@ -236,6 +243,9 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
     if (iteration >= maxIterations) return { ok: false, reason: `no equilibrium after ${iteration} Newton iterations (residual ${state.residualN.toExponential(2)} N against ${state.appliedN.toExponential(2)} N applied)`, iterations: iteration, state };
     const f = factorLDL(K);
     if (!f.ok) return { ok: false, reason: `the stiffness is singular at ${describeEquation(p, f.equation)}: a mechanism (a node held only by slack cables, or too few supports)`, iterations: iteration, state };
+    if (f.negativePivots > 0 && !options.allowUnstable) {
+      return { ok: false, reason: `the tangent stiffness lost positive definiteness (${f.negativePivots} negative pivots): a limit point or bifurcation, the structure is unstable under this load`, iterations: iteration, state };
+    }
     const du = f.solve(state.residual);
     u = lineSearch(p, u, du, state, lambda, options).u;
     K.values.fill(0);
