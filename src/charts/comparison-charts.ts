@@ -4,7 +4,7 @@ import { headline } from "../pipeline";
 import { materialInfo, type MaterialKind } from "../materials";
 import { paretoFront } from "../comparison/pareto";
 import { SCHEME_COLOURS } from "./palette";
-import { isSubstructure } from "../schemes/assemble-design";
+import { isSubstructure } from "../schemes/kit";
 
 const KIND_ORDER: readonly MaterialKind[] = ["steel", "cable", "fabric", "cladding", "concrete", "rebar", "timber"];
 const KIND_COLOURS = ["#4c6a8c", "#0072B2", "#9ad0c2", "#c9b27c", "#a7a7a7", "#7a4e2d", "#b8860b"];

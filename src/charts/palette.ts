@@ -1,10 +1,5 @@
 import type { SchemeId } from "../schemes/types";
+import { SCHEMES } from "../schemes";
 
-/** One colour per scheme, the same on every page and export (colour-blind-safe set, Okabe–Ito). */
-export const SCHEME_COLOURS: Readonly<Record<SchemeId, string>> = {
-  "cable-dome": "#0072B2",
-  "cable-net": "#009E73",
-  "geodesic-dome": "#E69F00",
-  "truss-roof": "#CC79A7",
-  "concrete-shell": "#7f7f7f",
-};
+/** One colour per scheme, the same on every page and export: each scheme declares its own (colour-blind-safe set, Okabe–Ito). */
+export const SCHEME_COLOURS: Readonly<Record<SchemeId, string>> = Object.fromEntries(SCHEMES.map((m) => [m.id, m.colour])) as Record<SchemeId, string>;

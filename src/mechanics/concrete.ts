@@ -11,6 +11,8 @@ export type ConcreteClass = keyof typeof CONCRETE_CLASSES;
 
 /** Density of normal-weight reinforced concrete, kg/m³ (EN 1991-1-1 Table A.1: 25 kN/m³). */
 export const REINFORCED_CONCRETE_DENSITY_KG_PER_M3 = 2500;
+/** Density of normal-weight plain concrete, kg/m³ (EN 1991-1-1 Table A.1: 24 kN/m³): take-off masses where the reinforcement is counted apart, and dead-weight anchors. */
+export const PLAIN_CONCRETE_DENSITY_KG_PER_M3 = 2400;
 
 export interface ConcreteProperties {
   /** Characteristic cylinder strength f_ck, Pa. */
@@ -50,4 +52,13 @@ export function concreteDesignStrengthPa(fckPa: number, alphaCc = 1.0, gammaC = 
 /** Design yield strength of reinforcement f_yd = f_yk / γ_S, EN 1992-1-1 §3.2.7 (γ_S = 1.15). */
 export function rebarDesignStrengthPa(fykPa = 500e6, gammaS = 1.15): number {
   return fykPa / gammaS;
+}
+
+/**
+ * Minimum longitudinal reinforcement ratio A_s,min/(b_t d) of EN 1992-1-1 eq. 9.1N:
+ * max(0.26 f_ctm/f_yk, 0.0013).
+ * @example minimumReinforcementRatio(2.9e6) // 0.001508 (C30/37, f_yk 500 MPa)
+ */
+export function minimumReinforcementRatio(fctmPa: number, fykPa = 500e6): number {
+  return Math.max((0.26 * fctmPa) / fykPa, 0.0013);
 }

@@ -31,6 +31,8 @@ export {
   rebarDesignStrengthPa,
   CONCRETE_CLASSES,
   REINFORCED_CONCRETE_DENSITY_KG_PER_M3,
+  PLAIN_CONCRETE_DENSITY_KG_PER_M3,
+  minimumReinforcementRatio,
   type ConcreteClass,
   type ConcreteProperties,
 } from "./concrete";
@@ -56,9 +58,10 @@ export {
   sphericalMembranePlanLoad,
   sphericalMembraneForces,
   hoopSignChangeAngleRad,
+  edgeRingTensionN,
   type MembraneForces,
 } from "./spherical-membrane";
-export { zoellyCoefficient, zoellyPressurePa, continuumShellPressurePa } from "./shell-buckling";
+export { zoellyCoefficient, zoellyPressurePa, zoellyThicknessM, continuumShellPressurePa } from "./shell-buckling";
 export { threeWayGridStiffness, doubleLayerGridStiffness, threeWayGridBarForces, type GridStiffness, type GridBarForces } from "./three-way-grid";
 export { geodesicCap, strutLengths, geodesicFrequencyFor, MEAN_CHORD_FACTOR, type GeodesicCap, type StrutLengths, type Vec3 } from "./geodesic";
 export { simplySupportedUdl, type BeamResponse } from "./beam";

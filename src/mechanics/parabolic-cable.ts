@@ -60,12 +60,12 @@ export function parabolaLengthM(spanM: number, sagM: number): number {
 export function inclinedParabolicCable(loadNPerM: number, spanM: number, sagM: number, riseM: number): ParabolicCable & { lowerVerticalN: number } {
   if (!(riseM >= 0)) throw new RangeError(`invalid chord rise: ${riseM} m (expected ≥ 0)`);
   const level = parabolicCable(loadNPerM, spanM, sagM);
-  const chordSlope = riseM / spanM;
-  const upper = level.verticalN + level.horizontalN * chordSlope;
-  const lower = level.verticalN - level.horizontalN * chordSlope;
+  const shearN = (level.horizontalN * riseM) / spanM;
+  const upper = level.verticalN + shearN;
+  const lower = level.verticalN - shearN;
   // Length: the parabola sheared onto the chord; its length is that of the level parabola on the
   // chord's slope, taken here as level length × secant of the chord (good for shallow chords).
-  const lengthM = level.lengthM * Math.sqrt(1 + chordSlope * chordSlope);
+  const lengthM = level.lengthM * Math.hypot(1, riseM / spanM);
   return {
     horizontalN: level.horizontalN,
     verticalN: upper,

@@ -39,3 +39,18 @@ export function continuumShellPressurePa(bendingStiffnessNm: number, membraneSti
   if (!(radiusM > 0)) throw new RangeError(`invalid sphere radius: ${radiusM} m (expected > 0)`);
   return (4 * Math.sqrt(bendingStiffnessNm * membraneStiffnessNPerM)) / (radiusM * radiusM);
 }
+
+/**
+ * The thickness at which a spherical shell's knocked-down classical buckling pressure k·p_cl equals
+ * a design pressure: the Zoelly formula p = k·2E t²/(R² √(3(1 − ν²))) solved for t,
+ * t = R √(p / (k · 2/√(3(1 − ν²)) · E)) (Zoelly–van der Neut; Timoshenko & Gere §11.9).
+ * @param pressurePa design pressure p, Pa (≥ 0)
+ * @param knockDown k, the fraction of p_cl the real shell reaches (0 < k ≤ 1)
+ * @example zoellyThicknessM(254.2e3, 210e9, 10, 0.3) // ≈ 0.01 (the inverse of the zoellyPressurePa example)
+ */
+export function zoellyThicknessM(pressurePa: number, modulusPa: number, radiusM: number, poissonRatio: number, knockDown = 1): number {
+  if (!(pressurePa >= 0)) throw new RangeError(`invalid pressure: ${pressurePa} Pa (expected ≥ 0)`);
+  if (!(modulusPa > 0)) throw new RangeError(`invalid elastic modulus: ${modulusPa} Pa (expected > 0)`);
+  if (!(knockDown > 0 && knockDown <= 1)) throw new RangeError(`invalid knock-down: ${knockDown} (expected 0 < k ≤ 1)`);
+  return radiusM * Math.sqrt(pressurePa / (knockDown * zoellyCoefficient(poissonRatio) * modulusPa));
+}

@@ -60,3 +60,16 @@ export function sphericalMembraneForces(surfacePressurePa: number, planPressureP
 export function hoopSignChangeAngleRad(): number {
   return Math.acos((Math.sqrt(5) - 1) / 2);
 }
+
+/**
+ * Tension in the edge ring of a spherical dome from the horizontal thrust of its meridional force:
+ * H = |N_φ| cos φ0 per metre of edge, T = H·a (equilibrium of a ring under uniform radial load;
+ * Timoshenko & Woinowsky-Krieger ch. 14 §129, the supporting ring of a dome).
+ * @param edgeMeridionalNPerM N_φ at the edge, N/m (the sign is ignored: the thrust acts outwards)
+ * @param edgeAngleRad φ0, the meridional angle of the edge, rad
+ * @param baseRadiusM a, the plan radius of the ring, m
+ * @example edgeRingTensionN(-75_000, Math.PI / 3, 40) // 75 kN/m × 0.5 × 40 m = 1.5 MN
+ */
+export function edgeRingTensionN(edgeMeridionalNPerM: number, edgeAngleRad: number, baseRadiusM: number): number {
+  return Math.abs(edgeMeridionalNPerM) * Math.cos(edgeAngleRad) * baseRadiusM;
+}

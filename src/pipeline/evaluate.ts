@@ -2,7 +2,7 @@ import type { Study } from "../study/study";
 import type { Brief } from "../study/brief";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
-import { SCHEMES, infeasibleDesign } from "../schemes";
+import { SCHEMES, infeasibleDesign, isDesignAnswer } from "../schemes";
 import { assessCarbon, type CarbonAssessment } from "../carbon";
 import { assessCost, type CostAssessment } from "../cost";
 
@@ -35,12 +35,17 @@ export function briefAtSpan(brief: Brief, spanM: number): Brief {
   return { ...brief, spanM, riseM: (brief.riseM / brief.spanM) * spanM };
 }
 
-/** Designs one scheme for a brief with the given options (defaults fill the rest); a bug inside becomes an infeasible answer. */
+/**
+ * Designs one scheme for a brief with the given options (defaults fill the rest). An input the
+ * scheme refuses (a RangeError) or a step it cannot complete becomes an infeasible answer with the
+ * reason; any other error (a TypeError, a bug) propagates as an internal error.
+ */
 export function designScheme(model: SchemeModel, brief: Brief, options: SchemeOptions | undefined, catalogue: Catalogue): Design {
   try {
     return model.design(brief, { ...model.defaults, ...(options ?? {}) }, catalogue);
   } catch (error) {
-    return infeasibleDesign(model.id, brief, `could not be computed: ${error instanceof Error ? error.message : String(error)}`);
+    if (!isDesignAnswer(error)) throw error;
+    return infeasibleDesign(model.id, brief, `could not be computed: ${error.message}`);
   }
 }
 

@@ -1,6 +1,6 @@
 import type { Study } from "../study/study";
 import { BRIEF_LIMITS } from "../study/brief";
-import { SCHEMES } from "../schemes";
+import { SCHEMES, type UncertaintyKind } from "../schemes";
 import { materialInfo, type MaterialKind } from "../materials";
 import { FACTOR_LIMITS } from "../carbon";
 import { MAX_RATE } from "../cost";
@@ -31,13 +31,14 @@ export const DEFAULT_SPREADS = {
   onCost: { low: 0.67, high: 1.33, source: "on-cost percentages at concept stage (common practice, no source)" },
 } as const satisfies Record<string, Spread>;
 
-/** Option keys treated as buckling knock-downs or design allowances (matched on the scheme modules' own keys). */
-const KNOCK_DOWN_KEY = /knock|imperfection/i;
-const ALLOWANCE_KEY = /allowance|node|connection|fitting|splice|joint/i;
-/** Scheme options that are loads (finishes, kPa), reinforcement rates (kg/m³) or creep: uncertain at concept stage too. */
-const LOAD_KEY = /KPa$/;
-const REINFORCEMENT_KEY = /RateKgPerM3$/;
-const CREEP_KEY = /creep/i;
+/** The default spread of each kind of uncertain scheme option (declared with the option, `uncertainty`). */
+const OPTION_SPREADS: Record<UncertaintyKind, Spread> = {
+  "knock-down": DEFAULT_SPREADS.knockDown,
+  allowance: DEFAULT_SPREADS.allowance,
+  reinforcement: DEFAULT_SPREADS.reinforcement,
+  load: DEFAULT_SPREADS.services,
+  creep: DEFAULT_SPREADS.creep,
+};
 
 /** Material kinds whose factors get default ranges, with the group name and spread. */
 const CARBON_KINDS: Partial<Record<MaterialKind, { group: string; spread: Spread }>> = {
@@ -81,7 +82,7 @@ function spreadInput(
  * Default uncertain inputs for a study, all Beta-PERT with the study's own value as the mode:
  * snow, wind and services loads; the buckling knock-downs, design allowances (nodes, connections,
  * fabric seams), reinforcement rates, creep and finishes loads the registered scheme modules offer
- * as options (matched on their option keys); A1–A3 factors, waste rates and road distances of steel, strand,
+ * as options (each option declares its kind of uncertainty); A1–A3 factors, waste rates and road distances of steel, strand,
  * rebar, concrete, fabric and cladding (grouped by kind: all steel factors move together); the
  * carbon quantity allowance; every unit rate over its own low–high range (steel rates grouped,
  * the two fabric rates grouped); and the on-cost percentages. Span, rise and the other brief
@@ -100,18 +101,8 @@ export function defaultRiskSettings(study: Omit<Study, "risk">): RiskSettings {
   for (const model of SCHEMES) {
     for (const spec of model.options) {
       if (spec.kind !== "number" || spec.integer) continue;
-      const spread = KNOCK_DOWN_KEY.test(spec.key)
-        ? DEFAULT_SPREADS.knockDown
-        : ALLOWANCE_KEY.test(spec.key)
-          ? DEFAULT_SPREADS.allowance
-          : REINFORCEMENT_KEY.test(spec.key)
-            ? DEFAULT_SPREADS.reinforcement
-            : LOAD_KEY.test(spec.key)
-              ? DEFAULT_SPREADS.services
-              : CREEP_KEY.test(spec.key)
-                ? DEFAULT_SPREADS.creep
-                : null;
-      if (!spread) continue;
+      if (!spec.uncertainty) continue;
+      const spread = OPTION_SPREADS[spec.uncertainty];
       const value = study.schemes[model.id]?.options[spec.key] ?? model.defaults[spec.key];
       if (typeof value !== "number") continue;
       const unit = spec.unit ? ` (${spec.unit})` : "";

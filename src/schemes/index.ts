@@ -1,4 +1,5 @@
-// Schemes: one module per structural system, all with the same SchemeModel interface.
+// Schemes: one folder per structural system, each a SchemeModel built on the kit (./kit). Adding a
+// scheme is one folder and one line here.
 import type { SchemeModel, SchemeOptions } from "./types";
 import { cableDome } from "./cable-dome";
 import { cableNet } from "./cable-net";
@@ -6,12 +7,12 @@ import { geodesicDome } from "./geodesic-dome";
 import { trussRoof } from "./truss-roof";
 import { concreteShell } from "./concrete-shell";
 
-export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine } from "./types";
-export { assembleDesign, infeasibleDesign, check, type DesignParts } from "./assemble-design";
-export { iterateSelfWeight, ConvergenceError, type Converged } from "./converge";
-export { checkSchemeOptions } from "./check-options";
+export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind } from "./types";
+export { assembleDesign, infeasibleDesign, check, isSubstructure, isDesignAnswer, SchemeError, type DesignParts } from "./kit";
+export { iterateSelfWeight, ConvergenceError, type Converged } from "./kit";
+export { checkSchemeOptions } from "./kit";
 
-/** Every scheme, in the order pages list them. Each scheme module adds itself here. */
+/** Every scheme, in the order pages list them. */
 export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
   // tension schemes (cable dome, cable net) go first
   cableDome,

@@ -9,6 +9,13 @@ export type SchemeId = "cable-dome" | "cable-net" | "geodesic-dome" | "truss-roo
 export type OptionValue = number | string | boolean;
 export type SchemeOptions = Record<string, OptionValue>;
 
+/**
+ * What kind of uncertain quantity a number option is, for the risk defaults: a load, a buckling
+ * knock-down, a design allowance (nodes, connections, seams), a creep coefficient or a
+ * reinforcement rate. Options without one are design choices, not uncertainties.
+ */
+export type UncertaintyKind = "load" | "knock-down" | "allowance" | "creep" | "reinforcement";
+
 /** How an option is shown and validated. Every option has a default, a unit and where it comes from. */
 export type OptionSpec =
   | {
@@ -22,6 +29,8 @@ export type OptionSpec =
       /** Whole numbers only (counts). */
       integer?: boolean;
       source: string;
+      /** Set when the value is uncertain at concept stage (the risk page offers it a range). */
+      uncertainty?: UncertaintyKind;
     }
   | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string }
   | { key: string; label: string; kind: "toggle"; unit: ""; source: string };
@@ -108,9 +117,11 @@ export interface Design {
 }
 
 /** A scheme: its description, its valid range, its options and its designer. */
-export interface SchemeModel<O extends SchemeOptions = SchemeOptions> {
-  id: SchemeId;
+export interface SchemeModel<O extends SchemeOptions = SchemeOptions, Id extends string = SchemeId> {
+  id: Id;
   label: string;
+  /** Colour of the scheme on every chart and export (CSS colour). */
+  colour: string;
   /** One plain paragraph on the structural system. */
   description: string;
   /** Span range in which the method is valid, m. */

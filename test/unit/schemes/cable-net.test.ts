@@ -3,7 +3,7 @@ import { cableNet } from "../../../src/schemes/cable-net";
 import { DEFAULT_BRIEF } from "../../../src/study/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
-import { cableNetLayout, circumferentialSpanM } from "../../../src/schemes/cable-net-geometry";
+import { cableNetLayout, circumferentialSpanM } from "../../../src/schemes/cable-net/geometry";
 import { capHeightAt } from "../../../src/mechanics/spherical-cap";
 
 const catalogue = defaultCatalogue();

@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { concreteShell } from "../../../src/schemes/concrete-shell";
-import { minimumReinforcementRatio } from "../../../src/schemes/concrete-shell-sizing";
+import { minimumReinforcementRatio } from "../../../src/mechanics/concrete";
 import { concreteProperties, zoellyPressurePa } from "../../../src/mechanics";
 import { DEFAULT_BRIEF } from "../../../src/study/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";

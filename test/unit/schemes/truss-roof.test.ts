@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
 import { trussRoof } from "../../../src/schemes/truss-roof";
-import { trussLayout } from "../../../src/schemes/truss-roof-layout";
-import { gradedBeamDeflectionM } from "../../../src/schemes/truss-sizing";
+import { trussLayout } from "../../../src/schemes/truss-roof/layout";
+import { gradedBeamDeflectionM } from "../../../src/schemes/truss-roof/truss";
 import { simplySupportedUdl } from "../../../src/mechanics";
 import { DEFAULT_BRIEF } from "../../../src/study/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";

@@ -1,10 +1,10 @@
-import type { ChsSection } from "../catalogue/types";
-import type { ChsChoice } from "../catalogue/pick-chs";
-import type { BucklingCurve } from "../mechanics/flexural-buckling";
-import { STEEL_E_PA } from "../mechanics/flexural-buckling";
-import { STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
-import { simplySupportedUdl } from "../mechanics/beam";
-import { pickChsFor } from "./compression-common";
+import type { ChsSection } from "../../catalogue/types";
+import type { ChsChoice } from "../../catalogue/pick-chs";
+import type { BucklingCurve } from "../../mechanics/flexural-buckling";
+import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
+import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
+import { simplySupportedUdl } from "../../mechanics/beam";
+import { pickChs } from "../kit";
 
 /** Yield strength of cold-formed purlin steel S350GD (EN 10346), Pa. */
 export const PURLIN_YIELD_PA = 350e6;
@@ -47,7 +47,7 @@ export function pickChsForMoment(sections: readonly ChsSection[], momentNm: numb
 
 /** A CHS column or strut for axial load only, pinned at both ends. */
 export function pickColumn(sections: readonly ChsSection[], forceN: number, lengthM: number, steel: { yieldPa: number; curve: BucklingCurve }): ChsChoice | null {
-  return pickChsFor(sections, [{ forceN: -Math.abs(forceN), effectiveLengthM: lengthM }], steel);
+  return pickChs(sections, [{ forceN: -Math.abs(forceN), effectiveLengthM: lengthM }], steel);
 }
 
 /**

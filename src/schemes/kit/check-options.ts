@@ -1,4 +1,4 @@
-import type { OptionSpec, SchemeOptions } from "./types";
+import type { OptionSpec, SchemeOptions } from "../types";
 
 /**
  * Checks every option against its spec before any work: numbers finite and in range (whole where

@@ -1,8 +1,8 @@
-import type { Brief } from "../study/brief";
-import type { Check, Design, DrawingLine, MemberGroup, SchemeId, SchemeModel, SummaryItem } from "./types";
-import type { TakeoffRow } from "../takeoff/takeoff-row";
-import { sphericalCap } from "../mechanics/spherical-cap";
-import { enclosedAirMassKg } from "../mechanics/air";
+import type { Brief } from "../../study/brief";
+import type { Check, Design, DrawingLine, MemberGroup, SchemeId, SchemeModel, SummaryItem } from "../types";
+import type { TakeoffRow } from "../../takeoff/takeoff-row";
+import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
+import { enclosedAirMassKg } from "../../mechanics/air";
 
 export interface DesignParts {
   summary: SummaryItem[];
@@ -18,6 +18,11 @@ export interface DesignParts {
   drawing: Design["drawing"];
   /** A reason the scheme cannot be built, beyond failed checks ("" if none). */
   reason?: string;
+}
+
+/** The envelope of a roof on the brief's spherical cap: its surface, and the volume enclosed by the walls to the eaves and the cap. */
+export function capEnvelope(cap: SphericalCap, eavesHeightM: number): Pick<DesignParts, "roofSurfaceM2" | "enclosedVolumeM3"> {
+  return { roofSurfaceM2: cap.surfaceM2, enclosedVolumeM3: cap.planAreaM2 * eavesHeightM + cap.volumeM3 };
 }
 
 /** Take-off rows that are substructure, not roof: ground anchors and dead-weight foundations. */

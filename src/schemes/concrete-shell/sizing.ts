@@ -1,10 +1,10 @@
-import type { Brief } from "../study/brief";
-import type { RoofActions } from "../loads/roof-actions";
-import { sphericalMembraneForces } from "../mechanics/spherical-membrane";
-import { zoellyCoefficient, zoellyPressurePa } from "../mechanics/shell-buckling";
-import { REINFORCED_CONCRETE_DENSITY_KG_PER_M3 } from "../mechanics/concrete";
-import { ulsFactors } from "./compression-common";
-import { kPaFromKgPerM2 } from "../mechanics/gravity";
+import type { Brief } from "../../study/brief";
+import type { RoofActions } from "../../loads/roof-actions";
+import { ulsFactors } from "../../loads/uls-factors";
+import { sphericalMembraneForces } from "../../mechanics/spherical-membrane";
+import { zoellyPressurePa, zoellyThicknessM } from "../../mechanics/shell-buckling";
+import { REINFORCED_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
+import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 
 /** Poisson's ratio of uncracked concrete, EN 1992-1-1 §3.1.3(4). */
 export const CONCRETE_POISSON = 0.2;
@@ -60,7 +60,7 @@ export function shellThickness(input: ShellInputs, selfWeightKPa: number): Shell
   const surfacePa = f.permanent * selfWeightKPa * 1000;
   const planPa = (f.permanent * actions.servicesKPa + f.variable * variableKPa) * 1000;
   const designPressurePa = surfacePa + planPa;
-  const bucklingThicknessM = R * Math.sqrt(designPressurePa / (input.knockDown * zoellyCoefficient(CONCRETE_POISSON) * input.effectiveModulusPa));
+  const bucklingThicknessM = zoellyThicknessM(designPressurePa, input.effectiveModulusPa, R, CONCRETE_POISSON, input.knockDown);
   let maxCompression = 0;
   let maxHoopTension = 0;
   const steps = 24;
@@ -92,9 +92,4 @@ export function shellThickness(input: ShellInputs, selfWeightKPa: number): Shell
 /** Self-weight of a shell of thickness t plus finishes, kPa of surface (25 kN/m³, EN 1991-1-1 Table A.1). */
 export function shellSelfWeightKPa(thicknessM: number, finishesKPa: number): number {
   return kPaFromKgPerM2(REINFORCED_CONCRETE_DENSITY_KG_PER_M3 * thicknessM) + finishesKPa;
-}
-
-/** Minimum longitudinal reinforcement ratio of EN 1992-1-1 eq. 9.1N: max(0.26 f_ctm/f_yk, 0.0013). */
-export function minimumReinforcementRatio(fctmPa: number, fykPa = 500e6): number {
-  return Math.max((0.26 * fctmPa) / fykPa, 0.0013);
 }

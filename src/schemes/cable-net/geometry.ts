@@ -1,6 +1,6 @@
-import type { Brief } from "../study/brief";
-import type { DrawingLine } from "./types";
-import { sphericalCap, capHeightAt, type SphericalCap } from "../mechanics/spherical-cap";
+import type { Brief } from "../../study/brief";
+import type { DrawingLine } from "../kit";
+import { sphericalCap, capHeightAt, type SphericalCap } from "../../mechanics/spherical-cap";
 
 /** One bay of radial cables from the mast heads: outwards to the edge, or inwards to the central ring. */
 export interface NetBay {

@@ -1,16 +1,11 @@
+import { ConvergenceError } from "./errors";
+
 /** Result of a self-weight fixed-point iteration. */
 export interface Converged<T> {
   value: T;
   /** Self-weight, kPa, at convergence. */
   selfWeightKPa: number;
   iterations: number;
-}
-
-export class ConvergenceError extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = "ConvergenceError";
-  }
 }
 
 /**

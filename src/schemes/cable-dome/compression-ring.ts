@@ -1,10 +1,7 @@
-import { ringBucklingForceN } from "../mechanics/ring-buckling";
-import { bucklingReduction, STEEL_E_PA } from "../mechanics/flexural-buckling";
-import { concreteProperties, concreteDesignStrengthPa, rebarDesignStrengthPa, type ConcreteClass } from "../mechanics/concrete";
-import { STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
-
-/** Density of plain concrete, kg/m³ (EN 1991-1-1 Table A.1: 24 kN/m³ normal weight). */
-export const PLAIN_CONCRETE_DENSITY_KG_PER_M3 = 2400;
+import { ringBucklingForceN } from "../../mechanics/ring-buckling";
+import { bucklingReduction, STEEL_E_PA } from "../../mechanics/flexural-buckling";
+import { concreteProperties, concreteDesignStrengthPa, rebarDesignStrengthPa, type ConcreteClass } from "../../mechanics/concrete";
+import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
 
 export type RingMaterial = "concrete" | "steel";
 

@@ -1,10 +1,10 @@
-import type { ChsSection } from "../catalogue/types";
-import type { ChsChoice } from "../catalogue/pick-chs";
-import type { BucklingCurve } from "../mechanics/flexural-buckling";
-import { STEEL_E_PA } from "../mechanics/flexural-buckling";
-import { simplySupportedUdl } from "../mechanics/beam";
-import { chsResistance } from "../catalogue/pick-chs";
-import { pickChsFor } from "./compression-common";
+import type { ChsSection } from "../../catalogue/types";
+import type { ChsChoice } from "../../catalogue/pick-chs";
+import type { BucklingCurve } from "../../mechanics/flexural-buckling";
+import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
+import { simplySupportedUdl } from "../../mechanics/beam";
+import { chsResistance } from "../../catalogue/pick-chs";
+import { pickChs } from "../kit";
 
 /** What one parallel-chord Warren truss must carry. Loads in N/m along the span. */
 export interface TrussDemand {
@@ -82,6 +82,57 @@ export function gradedBeamDeflectionM(loadNPerM: number, spanM: number, zoneEnds
   return 2 * total;
 }
 
+interface TrussGeometry {
+  edges: number[];
+  topLengthM: number;
+  bottomLengthM: number;
+  diagonalLengthM: number;
+  sinTheta: number;
+  localMomentNm: number;
+}
+
+/**
+ * Per zone: the chord and diagonal forces, and the sections for strength alone (they do not change
+ * between the deflection attempts, which only raise the chord areas).
+ */
+function strengthZones(d: TrussDemand, sections: readonly ChsSection[], steel: { yieldPa: number; curve: BucklingCurve }, g: TrussGeometry) {
+  const { edges, topLengthM, bottomLengthM, diagonalLengthM, sinTheta, localMomentNm } = g;
+  const L = d.spanM;
+  const half = L / 2;
+  const moment = (w: number, x: number) => (w * x * (L - x)) / 2;
+  const withBendingFor = (chordN: number) => (s: ChsSection) => {
+    if (localMomentNm === 0) return true;
+    const c = chsResistance(s, { forceN: -chordN, effectiveLengthM: topLengthM, yieldPa: steel.yieldPa, curve: steel.curve });
+    return c !== null && c.utilisation + localMomentNm / (s.plasticModulusM3 * steel.yieldPa) <= 1;
+  };
+  return Array.from({ length: d.zones }, (_, z) => {
+    const x0 = edges[z]!;
+    const x1 = edges[z + 1]!;
+    const chordN = moment(d.ulsNPerM, x1) / d.depthM;
+    const chordUpN = moment(Math.min(0, d.upliftNPerM), x1) / d.depthM; // ≤ 0
+    const topForces = [
+      { forceN: -chordN, effectiveLengthM: topLengthM },
+      { forceN: -chordUpN, effectiveLengthM: topLengthM },
+    ];
+    const bottomForces = [
+      { forceN: chordN, effectiveLengthM: bottomLengthM },
+      { forceN: chordUpN, effectiveLengthM: bottomLengthM },
+    ];
+    const withBending = withBendingFor(chordN);
+    const shearN = Math.max(d.ulsNPerM, -d.upliftNPerM) * (half - x0);
+    const diagonalN = shearN / sinTheta;
+    const diagonal = pickChs(
+      sections,
+      [
+        { forceN: -diagonalN, effectiveLengthM: diagonalLengthM },
+        { forceN: diagonalN, effectiveLengthM: diagonalLengthM },
+      ],
+      steel,
+    );
+    return { x0, x1, chordN, topForces, bottomForces, withBending, diagonalN, diagonal, baseTop: pickChs(sections, topForces, steel, withBending), baseBottom: pickChs(sections, bottomForces, steel) };
+  });
+}
+
 /**
  * Sizes one parallel-chord Warren truss from the CHS catalogue: chords for M/d per zone, diagonals
  * for V/sin θ (EN 1993-1-1 §6.2.3 tension, §6.3.1 flexural buckling), then chords upsized together
@@ -98,7 +149,6 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
   const L = d.spanM;
   const half = L / 2;
   const beam = simplySupportedUdl(d.ulsNPerM, L, 1);
-  const moment = (w: number, x: number) => (w * x * (L - x)) / 2;
   const diagonalRunM = d.panelM / 2;
   const diagonalLengthM = Math.hypot(d.depthM, diagonalRunM);
   const topLengthM = Math.max(d.panelM, d.purlinSpacingM);
@@ -111,39 +161,7 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
   let failure = "";
   let deflectionM = 0;
   const limitM = L / d.deflectionLimit;
-  // Per zone: the forces, and the sections for strength alone (they do not change between the
-  // deflection attempts below, which only raise the chord areas).
-  const withBendingFor = (chordN: number) => (s: ChsSection) => {
-    if (localMomentNm === 0) return true;
-    const c = chsResistance(s, { forceN: -chordN, effectiveLengthM: topLengthM, yieldPa: steel.yieldPa, curve: steel.curve });
-    return c !== null && c.utilisation + localMomentNm / (s.plasticModulusM3 * steel.yieldPa) <= 1;
-  };
-  const zoneBase = Array.from({ length: d.zones }, (_, z) => {
-    const x0 = edges[z]!;
-    const x1 = edges[z + 1]!;
-    const chordN = moment(d.ulsNPerM, x1) / d.depthM;
-    const chordUpN = moment(Math.min(0, d.upliftNPerM), x1) / d.depthM; // ≤ 0
-    const topForces = [
-      { forceN: -chordN, effectiveLengthM: topLengthM },
-      { forceN: -chordUpN, effectiveLengthM: topLengthM },
-    ];
-    const bottomForces = [
-      { forceN: chordN, effectiveLengthM: bottomLengthM },
-      { forceN: chordUpN, effectiveLengthM: bottomLengthM },
-    ];
-    const withBending = withBendingFor(chordN);
-    const shearN = Math.max(d.ulsNPerM, -d.upliftNPerM) * (half - x0);
-    const diagonalN = shearN / sinTheta;
-    const diagonal = pickChsFor(
-      sections,
-      [
-        { forceN: -diagonalN, effectiveLengthM: diagonalLengthM },
-        { forceN: diagonalN, effectiveLengthM: diagonalLengthM },
-      ],
-      steel,
-    );
-    return { x0, x1, chordN, topForces, bottomForces, withBending, diagonalN, diagonal, baseTop: pickChsFor(sections, topForces, steel, withBending), baseBottom: pickChsFor(sections, bottomForces, steel) };
-  });
+  const zoneBase = strengthZones(d, sections, steel, { edges, topLengthM, bottomLengthM, diagonalLengthM, sinTheta, localMomentNm });
   for (let attempt = 0; attempt < 12; attempt++) {
     zones.length = 0;
     for (const b of zoneBase) {
@@ -153,8 +171,8 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
         break;
       }
       const minArea = (force: number) => (s: ChsSection) => s.areaM2 >= areaScale.value * force;
-      const top = attempt === 0 ? baseTop : pickChsFor(sections, b.topForces, steel, (s) => minArea(baseTop.section.areaM2)(s) && b.withBending(s));
-      const bottom = attempt === 0 ? baseBottom : pickChsFor(sections, b.bottomForces, steel, minArea(baseBottom.section.areaM2));
+      const top = attempt === 0 ? baseTop : pickChs(sections, b.topForces, steel, (s) => minArea(baseTop.section.areaM2)(s) && b.withBending(s));
+      const bottom = attempt === 0 ? baseBottom : pickChs(sections, b.bottomForces, steel, minArea(baseBottom.section.areaM2));
       if (top === null || bottom === null || diagonal === null) {
         failure = diagonal === null ? `no catalogue hollow section carries the diagonal force of ${(b.diagonalN / 1000).toFixed(0)} kN over ${diagonalLengthM.toFixed(1)} m` : "no catalogue hollow section gives the chords the stiffness the deflection limit needs";
         break;

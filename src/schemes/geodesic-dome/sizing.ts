@@ -1,16 +1,18 @@
-import type { Brief } from "../study/brief";
-import type { ChsSection } from "../catalogue/types";
-import type { ChsChoice } from "../catalogue/pick-chs";
-import type { RoofActions } from "../loads/roof-actions";
-import type { GeodesicCap } from "../mechanics/geodesic";
-import type { BucklingCurve } from "../mechanics/flexural-buckling";
-import { STEEL_E_PA } from "../mechanics/flexural-buckling";
-import { STEEL_DENSITY_KG_PER_M3 } from "../catalogue/chs";
-import { sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../mechanics/spherical-membrane";
-import { threeWayGridBarForces, threeWayGridStiffness, doubleLayerGridStiffness } from "../mechanics/three-way-grid";
-import { continuumShellPressurePa } from "../mechanics/shell-buckling";
-import { pickChsFor, ulsFactors } from "./compression-common";
-import { kPaFromKgPerM2 } from "../mechanics/gravity";
+import type { Brief } from "../../study/brief";
+import type { ChsSection } from "../../catalogue/types";
+import type { ChsChoice } from "../../catalogue/pick-chs";
+import type { RoofActions } from "../../loads/roof-actions";
+import type { GeodesicCap } from "../../mechanics/geodesic";
+import type { BucklingCurve } from "../../mechanics/flexural-buckling";
+import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
+import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
+import { edgeRingTensionN, sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";
+import { threeWayGridBarForces, threeWayGridStiffness, doubleLayerGridStiffness } from "../../mechanics/three-way-grid";
+import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
+import { kPaFromKgPerM2 } from "../../mechanics/gravity";
+import { ulsFactors } from "../../loads/uls-factors";
+import { ulsUplift } from "../../loads/combinations";
+import { pickChs } from "../kit";
 
 /** Struts of one band of the lattice, crown to edge (ring struts excluded). */
 export interface StrutBand {
@@ -113,6 +115,55 @@ export interface LatticeResult {
   ulsExpression: string;
 }
 
+/** ULS pressures on the lattice, Pa: self-weight per m² of surface, plan loads, their sum, and the net uplift (a surface load). */
+interface LatticeLoads {
+  surfacePa: number;
+  planPa: number;
+  pressurePa: number;
+  upliftSurfacePa: number;
+}
+
+/**
+ * One band: its worst bar forces over the band (gravity and uplift, resolved into the three-way
+ * grid) and the lightest CHS that carries them and gives the lattice its general-buckling
+ * resistance; or why none does.
+ */
+function sizeBand(input: LatticeInputs, band: StrutBand, loads: LatticeLoads, layers: number): { result: BandResult | null; failedWhy: string; largestBarForceN: number } {
+  const { radiusM: R, capAngleRad: phi0 } = input;
+  const { surfacePa, planPa, pressurePa, upliftSurfacePa } = loads;
+  let compressionN = 0;
+  let tensionN = 0;
+  for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, phi0)]) {
+    const n = sphericalMembraneForces(surfacePa, planPa, R, phi);
+    const bars = threeWayGridBarForces(n.meridionalNPerM / layers, n.hoopNPerM / layers, band.maxLengthM);
+    const up = sphericalMembraneSurfaceLoad(upliftSurfacePa, R, phi);
+    const barsUp = threeWayGridBarForces(up.meridionalNPerM / layers, up.hoopNPerM / layers, band.maxLengthM);
+    compressionN = Math.min(compressionN, bars.compressionN, barsUp.compressionN);
+    tensionN = Math.max(tensionN, bars.tensionN, barsUp.tensionN);
+  }
+  const largestBarForceN = Math.max(-compressionN, tensionN);
+  const bucklingOf = (s: ChsSection): number => {
+    const single = threeWayGridStiffness(STEEL_E_PA * s.areaM2, STEEL_E_PA * s.secondMomentM4, band.meanLengthM);
+    const grid = layers === 2 ? doubleLayerGridStiffness(single, input.doubleLayerDepthM) : single;
+    return input.knockDown * continuumShellPressurePa(grid.bendingNm, grid.membraneNPerM, R);
+  };
+  const demands = [
+    { forceN: compressionN, effectiveLengthM: band.maxLengthM },
+    { forceN: tensionN, effectiveLengthM: band.maxLengthM },
+  ];
+  const choice = pickChs(input.sections, demands, input.steel, (s) => bucklingOf(s) >= pressurePa);
+  if (choice === null) {
+    const memberOnly = pickChs(input.sections, demands, input.steel);
+    const failedWhy =
+      memberOnly === null
+        ? `no catalogue hollow section carries the bar force of ${(-compressionN / 1000).toFixed(0)} kN over ${band.maxLengthM.toFixed(1)} m`
+        : `no catalogue hollow section gives the lattice enough general-buckling resistance (${(pressurePa / 1000).toFixed(2)} kPa needed)`;
+    return { result: null, failedWhy, largestBarForceN };
+  }
+  const result = { band, choice, compressionN, tensionN, pressurePa, bucklingPa: bucklingOf(choice.section), barMassKg: band.totalLengthM * choice.section.massKgPerM * layers };
+  return { result, failedWhy: "", largestBarForceN };
+}
+
 /**
  * Sizes a lattice dome for an assumed self-weight g (kPa of surface): membrane forces
  * (Timoshenko ch. 14) resolved into the three-way grid, bars from the CHS catalogue per band for
@@ -129,68 +180,35 @@ export function sizeLattice(input: LatticeInputs, selfWeightKPa: number): Lattic
   const surfacePa = f.permanent * selfWeightKPa * 1000;
   const planPa = (f.permanent * servicesKPa + f.variable * variableKPa) * 1000;
   // Net uplift with permanent load favourable (EN 1990 Table A1.2(B)), taken as a surface load.
-  const upliftSurfacePa = (brief.factors.gammaGInf * (selfWeightKPa + servicesKPa) - brief.factors.gammaQ * actions.upliftKPa) * 1000;
-  const pressurePa = surfacePa + planPa;
+  const loads = { surfacePa, planPa, pressurePa: surfacePa + planPa, upliftSurfacePa: ulsUplift(selfWeightKPa + servicesKPa, actions.upliftKPa, brief.factors) * 1000 };
   const results: BandResult[] = [];
   let failedBand = -1;
   let failedWhy = "";
   let largestBarForceN = 0;
   for (const band of input.bands) {
-    let compressionN = 0;
-    let tensionN = 0;
-    for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, phi0)]) {
-      const n = sphericalMembraneForces(surfacePa, planPa, R, phi);
-      const bars = threeWayGridBarForces(n.meridionalNPerM / layers, n.hoopNPerM / layers, band.maxLengthM);
-      const up = sphericalMembraneSurfaceLoad(upliftSurfacePa, R, phi);
-      const barsUp = threeWayGridBarForces(up.meridionalNPerM / layers, up.hoopNPerM / layers, band.maxLengthM);
-      compressionN = Math.min(compressionN, bars.compressionN, barsUp.compressionN);
-      tensionN = Math.max(tensionN, bars.tensionN, barsUp.tensionN);
-    }
-    largestBarForceN = Math.max(largestBarForceN, -compressionN, tensionN);
-    const bucklingOf = (s: ChsSection): number => {
-      const single = threeWayGridStiffness(STEEL_E_PA * s.areaM2, STEEL_E_PA * s.secondMomentM4, band.meanLengthM);
-      const grid = layers === 2 ? doubleLayerGridStiffness(single, input.doubleLayerDepthM) : single;
-      return input.knockDown * continuumShellPressurePa(grid.bendingNm, grid.membraneNPerM, R);
-    };
-    const demands = [
-      { forceN: compressionN, effectiveLengthM: band.maxLengthM },
-      { forceN: tensionN, effectiveLengthM: band.maxLengthM },
-    ];
-    const choice = pickChsFor(input.sections, demands, input.steel, (s) => bucklingOf(s) >= pressurePa);
-    if (choice === null) {
+    const sized = sizeBand(input, band, loads, layers);
+    largestBarForceN = Math.max(largestBarForceN, sized.largestBarForceN);
+    if (sized.result === null) {
       failedBand = band.index;
-      const memberOnly = pickChsFor(input.sections, demands, input.steel);
-      failedWhy =
-        memberOnly === null
-          ? `no catalogue hollow section carries the bar force of ${(-compressionN / 1000).toFixed(0)} kN over ${band.maxLengthM.toFixed(1)} m`
-          : `no catalogue hollow section gives the lattice enough general-buckling resistance (${(pressurePa / 1000).toFixed(2)} kPa needed)`;
+      failedWhy = sized.failedWhy;
       break;
     }
-    results.push({
-      band,
-      choice,
-      compressionN,
-      tensionN,
-      pressurePa,
-      bucklingPa: bucklingOf(choice.section),
-      barMassKg: band.totalLengthM * choice.section.massKgPerM * layers,
-    });
+    results.push(sized.result);
   }
   const barMassKg = results.reduce((s, r) => s + r.barMassKg, 0);
   // Web members of a double layer: nominal force 2.5 % of the largest bar force (common practice, no source).
   let webChoice: ChsChoice | null = null;
   let webMassKg = 0;
   if (layers === 2 && failedBand < 0) {
-    webChoice = pickChsFor(input.sections, [{ forceN: -0.025 * largestBarForceN, effectiveLengthM: input.webLengthM }], input.steel);
+    webChoice = pickChs(input.sections, [{ forceN: -0.025 * largestBarForceN, effectiveLengthM: input.webLengthM }], input.steel);
     if (webChoice === null) {
       failedBand = input.bands.length;
       failedWhy = `no catalogue hollow section is stocky enough for the ${input.webLengthM.toFixed(1)} m web members`;
     } else webMassKg = input.webCount * input.webLengthM * webChoice.section.massKgPerM;
   }
   const nodeMassKg = input.nodeAllowance * (barMassKg + webMassKg);
-  const claddingMassKg = input.claddingKgPerM2 * input.surfaceM2;
   const edge = sphericalMembraneForces(surfacePa, planPa, R, Math.min(phi0, Math.PI / 2 - 1e-9));
-  const ringTensionN = Math.abs(edge.meridionalNPerM) * Math.cos(phi0) * input.baseRadiusM;
+  const ringTensionN = edgeRingTensionN(edge.meridionalNPerM, phi0, input.baseRadiusM);
   // EN 1993-1-1 eq. 6.6 with γ_M0 = 1.0; area rounded up to a 25 cm² step of plate (a box of plates).
   const ringAreaM2 = Math.max(25e-4, Math.ceil(ringTensionN / input.steel.yieldPa / 25e-4) * 25e-4);
   const ringMassKg = ringAreaM2 * 2 * Math.PI * input.baseRadiusM * STEEL_DENSITY_KG_PER_M3 * (1 + input.nodeAllowance);
@@ -202,7 +220,7 @@ export function sizeLattice(input: LatticeInputs, selfWeightKPa: number): Lattic
     barMassKg,
     webMassKg,
     nodeMassKg,
-    claddingMassKg,
+    claddingMassKg: input.claddingKgPerM2 * input.surfaceM2,
     edgeMeridionalNPerM: edge.meridionalNPerM,
     ringTensionN,
     ringAreaM2,

@@ -1,7 +1,7 @@
-import type { Brief } from "../study/brief";
-import type { DrawingLine } from "./types";
-import { sphericalCap, capHeightAt, type SphericalCap } from "../mechanics/spherical-cap";
-import type { CableDomeTrussGeometry, CableDomeTrussLoads } from "../mechanics/cable-dome-truss";
+import type { Brief } from "../../study/brief";
+import type { DrawingLine } from "../kit";
+import { sphericalCap, capHeightAt, type SphericalCap } from "../../mechanics/spherical-cap";
+import type { CableDomeTrussGeometry, CableDomeTrussLoads } from "../../mechanics/cable-dome-truss";
 
 /** Layout of a cable dome: counts and the radial-truss geometry (heights above the eaves, m). */
 export interface CableDomeLayout {

@@ -1,0 +1,126 @@
+import type { Brief } from "../../study/brief";
+import type { Catalogue, Fabric } from "../../catalogue/types";
+import type { TakeoffRow } from "../../takeoff/takeoff-row";
+import type { DesignParts, OptionValues } from "../kit";
+import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, SchemeError, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
+import { roofActions } from "../../loads/roof-actions";
+import { usableFloorAreaM2 } from "../../mechanics/usable-floor";
+import { capHeightAt } from "../../mechanics/spherical-cap";
+import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
+import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
+import { sizeCableNet, type NetSizing } from "./sizing";
+
+const declarations = {
+  // default: common practice for large nets, no source
+  masts: { kind: "number", label: "Masts", unit: "", min: 3, max: 48, step: 1, integer: true, default: 12, source: "common practice, no source" },
+  mastRingRatio: { kind: "number", label: "Mast ring radius / plan radius", unit: "", min: 0.3, max: 0.9, step: 0.05, default: 0.6, source: "common practice, no source" },
+  // default: mast head above the roof ≈ span/7 (common practice, no source)
+  mastHeightRatio: { kind: "number", label: "Mast height above roof / span", unit: "", min: 0.03, max: 0.4, step: 0.01, default: 0.15, source: "common practice, no source" },
+  /** Radial cables from each mast head (half out to the edge, half in to the central ring). */
+  radialCablesPerMast: { kind: "number", label: "Radial cables per mast", unit: "", min: 2, max: 40, step: 2, integer: true, default: 8, source: "common practice, no source" },
+  // default: fabric panels 5–8 m (common practice, no source)
+  hangerSpacingM: { kind: "number", label: "Hanger (circumferential cable) spacing", unit: "m", min: 2, max: 15, step: 0.5, default: 6, source: "common practice, no source" },
+  ...FABRIC_OPTION,
+  /** Plain masts buckle over their full length; braced masts over half (guyed at mid-height). */
+  mastType: { kind: "select", label: "Mast type", choices: [{ value: "plain", label: "Plain tube (buckles over full length)" }, { value: "braced", label: "Braced at mid-height (half length)" }], default: "braced", source: "assumption: braced L_cr = L/2" },
+  // default ≈ 1/0.9: EN 1990 Table A1.2(A) (EQU) γ_G,inf = 0.9 on the stabilising weight
+  anchorUpliftMargin: { kind: "number", label: "Anchor weight / uplift", unit: "", min: 1.0, max: 3.0, step: 0.05, default: 1.1, source: "EN 1990 Table A1.2(A): 1/0.9" },
+  ...TENSION_COMMON_OPTIONS,
+} as const;
+export type CableNetOptions = OptionValues<typeof declarations>;
+
+/** The radial cables must hang between 3 % and half their span below their chord. */
+function checkSags(layout: CableNetLayout, section: ReturnType<typeof cableNetSection>): void {
+  for (const [name, bay] of [["outer", layout.outer], ["inner", layout.inner]] as const) {
+    if (!(bay.sagM > 0.03 * bay.spanM)) {
+      throw new SchemeError(`the ${name} radial cables would hang less than 3 % of their span below their chord (${bay.sagM.toFixed(1)} m over ${bay.spanM.toFixed(0)} m): raise the mast height ratio`, { section });
+    }
+    if (bay.sagM > 0.5 * bay.spanM) {
+      throw new SchemeError(`the ${name} radial cables would sag more than half their span (${bay.sagM.toFixed(1)} m over ${bay.spanM.toFixed(0)} m): lower the mast height ratio or move the mast ring`, { section });
+    }
+  }
+}
+
+function netTakeoff(sized: NetSizing, fabric: Fabric): TakeoffRow[] {
+  const mast = sized.groups.find((g) => g.kind === "mast");
+  const cables = (element: string, kind: NetSizing["groups"][number]["kind"]) => tonnesRow(element, "steel-strand", "cable", massOfKinds(sized.groups, [kind]));
+  return [
+    cables("radial cables", "suspension"),
+    cables("valley cables", "valley"),
+    cables("circumferential cables", "circumferential"),
+    cables("edge cables", "edge"),
+    cables("backstays", "backstay"),
+    tonnesRow("masts", mast?.fabricated ? "steel-plate" : "steel-hot-finished-hollow", "steel-mast", massOfKinds(sized.groups, ["mast"])),
+    tonnesRow("central tension ring", "steel-plate", "steel-ring", massOfKinds(sized.groups, ["central ring"])),
+    { element: "fabric", material: fabric.material, costItem: fabricCostItem(fabric), quantity: sized.fabricAreaM2, unit: "m2", massKg: sized.fabricMassKg },
+    { element: "anchors", material: "concrete-c30-37", costItem: "anchor", quantity: sized.anchorConcreteM3, unit: "m3", massKg: sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3 },
+  ];
+}
+
+function netSummary(layout: CableNetLayout, sized: NetSizing) {
+  const perM2 = (kg: number) => kg / layout.cap.planAreaM2;
+  return [
+    { key: "masts", label: "Masts", value: layout.masts, unit: "" },
+    { key: "mastLength", label: "Mast length", value: layout.mastLengthM, unit: "m" },
+    { key: "mastForce", label: "Mast force (ULS)", value: sized.mastForceN / 1000, unit: "kN" },
+    { key: "backstayForce", label: "Backstay force (ULS)", value: sized.backstayForceN / 1000, unit: "kN" },
+    { key: "prestressOuter", label: "Valley pull on the net, outer bay", value: sized.prestressOuterNPerM / 1000, unit: "kN/m" },
+    { key: "prestressInner", label: "Valley pull on the net, inner bay", value: sized.prestressInnerNPerM / 1000, unit: "kN/m" },
+    { key: "gravityUls", label: `ULS gravity (EN 1990 eq. ${sized.gravityExpression})`, value: sized.gravityPa / 1000, unit: "kPa" },
+    { key: "upliftUls", label: "ULS net pressure, uplift case (negative up)", value: sized.upliftPa / 1000, unit: "kPa" },
+    { key: "cableKgPerM2", label: "Cables", value: perM2(massOfKinds(sized.groups, ["suspension", "valley", "circumferential", "edge", "backstay"])), unit: "kg/m²" },
+    { key: "mastKgPerM2", label: "Masts", value: perM2(massOfKinds(sized.groups, ["mast"])), unit: "kg/m²" },
+    { key: "fabricKgPerM2", label: "Fabric", value: perM2(sized.fabricMassKg), unit: "kg/m²" },
+    { key: "anchorKgPerM2", label: "Anchors (concrete)", value: perM2(sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3), unit: "kg/m²" },
+  ];
+}
+
+function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): DesignParts {
+  const fabric = findFabric(catalogue, opts.fabric);
+  const layout = cableNetLayout(brief, opts.masts, opts.mastRingRatio, opts.mastHeightRatio, opts.radialCablesPerMast, opts.hangerSpacingM);
+  const section = cableNetSection(layout, brief.eavesHeightM);
+  checkSags(layout, section);
+  const input = {
+    brief, actions: roofActions(brief), layout, catalogue, fabric,
+    residualPrestress: opts.residualPrestress, gammaR: opts.gammaR, yieldPa: opts.steelYieldMPa * 1e6, hangerSpacingM: opts.hangerSpacingM,
+    braced: opts.mastType === "braced", anchorUpliftMargin: opts.anchorUpliftMargin, fabricAllowancePct: opts.fabricAllowancePct, fabricSagRatio: opts.fabricSagRatio,
+  };
+  const converged = convergeSelfWeight<NetSizing>((g) => {
+    const value = sizeCableNet(input, g);
+    return { value, selfWeightKPa: value.selfWeightKPa };
+  }, 0.1, { section });
+  const sized = converged.value;
+  const checks = sized.groups.map((g) => check(g.element, g.governing, g.designForceN, g.resistanceN, "N"));
+  checks.push(...fabricPanelChecks(sized.fabricGravityNPerM, sized.fabricUpliftNPerM, fabricAllowableNPerM(fabric, opts.fabricStrengthFactor)));
+  const mast = sized.groups.find((g) => g.kind === "mast");
+  const warnings = [
+    "axisymmetric first-order analysis: asymmetric snow and wind, fan angles of the cables in plan and large displacements are not analysed",
+    "uplift is resisted by an idealised valley-cable family sharing load equally with the radial cables (equal sag and stiffness assumed)",
+    "anchors are checked for uplift only (sliding and the mast foundations are not designed)",
+  ];
+  if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);
+  if (layout.mastRadiusM + layout.backstayRunM < layout.cap.baseRadiusM) warnings.push("backstay anchors fall inside the plan: raise the mast ring ratio or check the floor layout");
+  return {
+    summary: netSummary(layout, sized),
+    members: sized.groups.map(memberOf),
+    takeoff: netTakeoff(sized, fabric),
+    checks,
+    warnings,
+    iterations: converged.iterations,
+    usableFloorM2: usableFloorAreaM2(layout.cap.baseRadiusM, (r) => brief.eavesHeightM + capHeightAt(layout.cap, r), brief.minClearHeightM),
+    ...capEnvelope(layout.cap, brief.eavesHeightM),
+    drawing: { section, plan: cableNetPlan(layout) },
+  };
+}
+
+/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against valley cables, masts stayed by backstays. */
+export const cableNet = defineScheme({
+  id: "cable-net",
+  label: "Mast-supported cable net",
+  colour: "#009E73",
+  description:
+    "Masts on a ring inside the plan carry radial cables that hang the fabric: half run out to anchors at the edge, half in to a central tension ring. Circumferential cables between the radial cables carry the fabric panels. A second family of valley cables, prestressed against the radial ones, holds the roof down in wind uplift. Backstays take the difference of pull at each mast head down to ground anchors.",
+  validSpanM: { min: 60, max: 400 },
+  options: defineOptions(declarations),
+  design,
+});

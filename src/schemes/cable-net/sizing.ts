@@ -1,0 +1,215 @@
+import type { Brief } from "../../study/brief";
+import type { Catalogue, ChsSection, Fabric } from "../../catalogue/types";
+import type { RoofActions } from "../../loads/roof-actions";
+import { designPressures } from "../../loads/roof-actions";
+import { membraneStripForceNPerM } from "../../mechanics/membrane-strip";
+import { inclinedParabolicCable, parabolaLengthM, parabolicCable } from "../../mechanics/parabolic-cable";
+import { ringForceFromPullsN } from "../../mechanics/ring-buckling";
+import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
+import { GRAVITY_M_PER_S2, kPaOfMass } from "../../mechanics/gravity";
+import { chsFromDimensions } from "../../catalogue/chs";
+import { fabricCover, pickChs, pickStrandGroup, SizingError, steelTensionRing, type SizedGroup } from "../kit";
+import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./geometry";
+
+export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring";
+
+/** A member group of the net; a mast may be fabricated from plate (not a catalogue section). */
+export type NetMemberGroup = SizedGroup<NetMemberKind, { fabricated?: boolean }>;
+
+export interface NetSizing {
+  gravityPa: number;
+  upliftPa: number;
+  gravityExpression: string;
+  groups: NetMemberGroup[];
+  /** Prestress as the downward pull of the valley cables on the net, outer and inner bays, N per m of plan span. */
+  prestressOuterNPerM: number;
+  prestressInnerNPerM: number;
+  mastForceN: number;
+  backstayForceN: number;
+  anchorUpliftN: number;
+  anchorConcreteM3: number;
+  fabricAreaM2: number;
+  fabricMassKg: number;
+  fabricGravityNPerM: number;
+  fabricUpliftNPerM: number;
+  selfWeightKPa: number;
+}
+
+export type NetSizingInput = {
+  brief: Brief;
+  actions: RoofActions;
+  layout: CableNetLayout;
+  catalogue: Catalogue;
+  fabric: Fabric;
+  residualPrestress: number;
+  gammaR: number;
+  yieldPa: number;
+  hangerSpacingM: number;
+  braced: boolean;
+  anchorUpliftMargin: number;
+  fabricAllowancePct: number;
+  fabricSagRatio: number;
+};
+
+/** Sag / span of circumferential and edge cables between radial cables (common practice, no source). */
+export const NET_SECONDARY_SAG_RATIO = 0.1;
+
+/** Fabricated tubes for masts beyond the catalogue: D 1.3–4.0 m, D/t = 50 (class 3 at S355, EN 1993-1-1 Table 5.2: D/t ≤ 90ε²). */
+const FABRICATED_TUBES: ChsSection[] = Array.from({ length: 28 }, (_, i) => {
+  const d = 1.3 + 0.1 * i;
+  return chsFromDimensions(d, d / 50, `fabricated tube ${(d * 1000).toFixed(0)}×${(d * 20).toFixed(0)}`);
+});
+
+/**
+ * Horizontal tension, the vertical reaction at the mast head and the tension there of a parabolic
+ * cable on its inclined chord (inclinedParabolicCable, Irvine 1981 ch. 1); the mast head is the
+ * upper support when the chord rises to it, the lower one otherwise.
+ */
+function cableEnd(wNPerM: number, bay: NetBay): { H: number; Vup: number; T: number } {
+  const cable = inclinedParabolicCable(wNPerM, bay.spanM, bay.sagM, Math.abs(bay.riseM));
+  const Vup = bay.riseM >= 0 ? cable.verticalN : cable.lowerVerticalN;
+  return { H: cable.horizontalN, Vup, T: Math.hypot(cable.horizontalN, Vup) };
+}
+
+/**
+ * Sizes a mast-supported cable net for an assumed self-weight (kPa on plan). Each radial
+ * suspension cable is a parabola on its inclined chord carrying its tributary plan load
+ * (H = wL²/(8f), Irvine 1981 ch. 1). Uplift is resisted by prestress against a second, opposite
+ * family of valley cables of the same sag: with equal sags and stiffnesses a load is shared equally
+ * by the two families (linear theory of the pretensioned cable truss, from memory), so the valley
+ * pull w_p on the net must be ≥ |w|/(2(1 − residual)) for both ULS cases. The inner prestress is
+ * raised where needed so the inner cables always pull the mast heads at least as hard as the outer
+ * ones; the difference goes down a backstay at 45° to a ground anchor. Masts carry the vertical
+ * reactions; anchors are concrete dead weights: volume = uplift × margin / (ρ g).
+ * @throws SizingError when a member cannot be sized
+ */
+export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetSizing {
+  const { brief, actions, layout, fabric } = input;
+  const permanentKPa = selfWeightKPa + brief.servicesKPa;
+  const pressures = designPressures(brief, actions, permanentKPa);
+  const cases = [pressures.gravity.valueKPa * 1000, pressures.upliftNetKPa * 1000];
+  const lines = layout.masts * layout.cablesPerSide;
+  const groups: NetMemberGroup[] = [];
+  const strands = (kind: NetMemberKind, element: string, count: number, lengthM: number, forceN: number) => {
+    const choice = pickStrandGroup(input.catalogue.strands, forceN, input.gammaR, `no strand group in the catalogue carries the ${element} (${(forceN / 1e6).toFixed(1)} MN): add masts or radial cables per mast`);
+    groups.push({ kind, element, material: "steel-strand", count, lengthM, section: choice.designation, designForceN: forceN, resistanceN: choice.resistanceN, utilisation: choice.utilisation, governing: choice.governing, massKg: choice.massKgPerM * lengthM * count });
+  };
+  const radial = radialFamilies(input, cases, strands);
+  const a = layout.cap.baseRadiusM;
+  const worstP = Math.max(...cases.map(Math.abs));
+  for (const [i, r] of layout.hoopRadiiM.entries()) {
+    const span = circumferentialSpanM(layout, r);
+    strands("circumferential", `circumferential cable ${i + 1}`, 1, 2 * Math.PI * r, parabolicCable(worstP * input.hangerSpacingM, span, NET_SECONDARY_SAG_RATIO * span).maxTensionN);
+  }
+  const fabricSag = input.fabricSagRatio * input.hangerSpacingM;
+  const fabricUlsNPerM = membraneStripForceNPerM(worstP, input.hangerSpacingM, fabricSag);
+  const edgeSpan = (2 * Math.PI * a) / lines;
+  const edgeCable = parabolicCable(fabricUlsNPerM, edgeSpan, NET_SECONDARY_SAG_RATIO * edgeSpan);
+  strands("edge", "edge cables", lines, edgeCable.lengthM, edgeCable.maxTensionN);
+  const backstayN = Math.max(0, ...radial.horizontal) / Math.cos(BACKSTAY_SLOPE_RAD);
+  strands("backstay", "backstays", layout.masts, layout.backstayLengthM, Math.max(backstayN, 1));
+  const mast = sizeMast(input, Math.max(...radial.upperV) + backstayN * Math.sin(BACKSTAY_SLOPE_RAD));
+  groups.push(mast);
+  const ringN = ringForceFromPullsN(radial.ringPull, lines);
+  const ringLength = 2 * Math.PI * layout.centralRingRadiusM;
+  groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: ringN, ...steelTensionRing(ringN, input.yieldPa, ringLength) });
+  const anchorUpliftN = lines * radial.edgeUplift + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
+  const anchorConcreteM3 = (anchorUpliftN * input.anchorUpliftMargin) / (PLAIN_CONCRETE_DENSITY_KG_PER_M3 * GRAVITY_M_PER_S2);
+  const fabricCut = fabricCover(layout.cap.surfaceM2, input.fabricAllowancePct, fabric);
+  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay").reduce((s, g) => s + g.massKg, 0) + fabricCut.massKg;
+  return {
+    gravityPa: cases[0] as number,
+    upliftPa: cases[1] as number,
+    gravityExpression: pressures.gravity.expression,
+    groups,
+    prestressOuterNPerM: radial.wpOuter,
+    prestressInnerNPerM: radial.wpInner,
+    mastForceN: -mast.designForceN,
+    backstayForceN: backstayN,
+    anchorUpliftN,
+    anchorConcreteM3,
+    fabricAreaM2: fabricCut.areaM2,
+    fabricMassKg: fabricCut.massKg,
+    fabricGravityNPerM: membraneStripForceNPerM((permanentKPa + actions.leadingVariableKPa) * 1000, input.hangerSpacingM, fabricSag),
+    fabricUpliftNPerM: membraneStripForceNPerM(Math.max(0, actions.upliftKPa - permanentKPa) * 1000, input.hangerSpacingM, fabricSag),
+    selfWeightKPa: kPaOfMass(roofKg, layout.cap.planAreaM2),
+  };
+}
+
+/**
+ * The radial suspension and valley cables of both bays (sized through `strands`), with the valley
+ * pull that prestresses the net, and what they bring to the mast heads (vertical, and the horizontal
+ * difference the backstay takes), to the edge anchors (uplift) and to the central ring (pull).
+ */
+function radialFamilies(input: NetSizingInput, cases: readonly number[], strands: (kind: NetMemberKind, element: string, count: number, lengthM: number, forceN: number) => void) {
+  const { layout } = input;
+  const lines = layout.masts * layout.cablesPerSide;
+  const m = input.residualPrestress;
+  const perLine = (bay: NetBay, p: number) => (p * bay.areaM2) / lines / bay.spanM; // N per m of plan span
+  const outerW = cases.map((p) => perLine(layout.outer, p));
+  const innerW = cases.map((p) => perLine(layout.inner, p));
+  const wpOuter = Math.max(...outerW.map(Math.abs)) / (2 * (1 - m));
+  let wpInner = Math.max(...innerW.map(Math.abs)) / (2 * (1 - m));
+  const outerH = outerW.map((w) => cableEnd(wpOuter + w / 2, layout.outer).H);
+  outerW.forEach((_, k) => {
+    // inner pull ≥ outer pull at the mast head: w_A,in ≥ H_out 8 f_in / L_in²
+    const need = ((outerH[k] as number) * 8 * layout.inner.sagM) / layout.inner.spanM ** 2 - (innerW[k] as number) / 2;
+    wpInner = Math.max(wpInner, need);
+  });
+  const upperV = [0, 0];
+  const horizontal = [0, 0];
+  let edgeUplift = 0;
+  let ringPull = 0;
+  for (const { bay, w, wp, label } of [
+    { bay: layout.outer, w: outerW, wp: wpOuter, label: "outer" },
+    { bay: layout.inner, w: innerW, wp: wpInner, label: "inner" },
+  ]) {
+    const ridge = w.map((wk) => cableEnd(wp + wk / 2, bay));
+    const valley = w.map((wk) => cableEnd(wp - wk / 2, bay));
+    const length = parabolaLengthM(bay.spanM, bay.sagM) * Math.hypot(1, bay.riseM / bay.spanM);
+    strands("suspension", `${label} radial cables`, lines, length, Math.max(...ridge.map((e) => e.T)));
+    strands("valley", `${label} valley cables`, lines, length, Math.max(...valley.map((e) => e.T)));
+    ridge.forEach((e, k) => {
+      upperV[k] = (upperV[k] as number) + layout.cablesPerSide * e.Vup;
+      horizontal[k] = (horizontal[k] as number) + (label === "inner" ? 1 : -1) * layout.cablesPerSide * e.H;
+    });
+    if (label === "outer") {
+      ridge.forEach((e, k) => {
+        const v = valley[k] as { H: number };
+        const up = (e.H * (bay.riseM - 4 * bay.sagM)) / bay.spanM + (v.H * (bay.riseM + 4 * bay.sagM)) / bay.spanM;
+        edgeUplift = Math.max(edgeUplift, up);
+      });
+    } else {
+      ringPull = Math.max(...ridge.map((e, k) => e.H + (valley[k] as { H: number }).H));
+    }
+  }
+  return { wpOuter, wpInner, upperV, horizontal, edgeUplift, ringPull };
+}
+
+/**
+ * The masts: a CHS from the catalogue, else a fabricated tube, for the cable forces plus the mast's
+ * own weight (γ_G,sup, EN 1990 Table A1.2(B)): size, add the weight, resize.
+ * @throws SizingError when not even the largest fabricated tube carries it
+ */
+function sizeMast(input: NetSizingInput, cableMastN: number): NetMemberGroup {
+  const { layout, brief } = input;
+  const effective = input.braced ? layout.mastLengthM / 2 : layout.mastLengthM;
+  let mastN = cableMastN;
+  let catalogueMast: ReturnType<typeof pickChs> = null;
+  let mast: ReturnType<typeof pickChs> = null;
+  for (let pass = 0; pass < 6; pass++) {
+    const demand = [{ forceN: -mastN, effectiveLengthM: effective }];
+    catalogueMast = pickChs(input.catalogue.chs, demand, { yieldPa: input.yieldPa, curve: "a" });
+    mast = catalogueMast ?? pickChs(FABRICATED_TUBES, demand, { yieldPa: input.yieldPa, curve: "b" });
+    if (!mast) break;
+    const withWeight = cableMastN + brief.factors.gammaGSup * mast.section.massKgPerM * layout.mastLengthM * GRAVITY_M_PER_S2;
+    if (withWeight <= mastN) break;
+    mastN = withWeight;
+  }
+  if (!mast || mastN > mast.resistanceN) throw new SizingError(`no mast section up to a 4 m tube carries ${(mastN / 1e6).toFixed(1)} MN over ${effective.toFixed(0)} m: use braced masts, more masts or shorter masts`);
+  const fabricated = catalogueMast === null;
+  return {
+    kind: "mast", element: "masts", material: fabricated ? "steel-plate" : "steel-hot-finished-hollow", count: layout.masts, lengthM: layout.mastLengthM, section: mast.section.designation, designForceN: -mastN,
+    resistanceN: mast.resistanceN, utilisation: mastN / mast.resistanceN, governing: mast.governing, massKg: mast.section.massKgPerM * layout.mastLengthM * layout.masts, fabricated,
+  };
+}

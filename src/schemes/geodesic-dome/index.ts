@@ -1,0 +1,205 @@
+import type { Brief } from "../../study/brief";
+import type { Catalogue } from "../../catalogue/types";
+import type { TakeoffRow } from "../../takeoff/takeoff-row";
+import type { Check, DesignParts, MemberGroup, OptionValues } from "../kit";
+import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, CLADDING_CHOICES, STEEL_GRADE_CHOICES, SchemeError } from "../kit";
+import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
+import { capUsableRadiusM } from "../../mechanics/usable-floor";
+import { CapTooSmallError, geodesicCap, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
+import { hoopSignChangeAngleRad } from "../../mechanics/spherical-membrane";
+import { kPaFromKgPerM2 } from "../../mechanics/gravity";
+import { roofActions } from "../../loads/roof-actions";
+import { latticeSelfWeightKPa, sizeLattice, strutBands, type LatticeInputs, type LatticeResult } from "./sizing";
+import { latticePlan, latticeSection } from "./drawing";
+
+const declarations = {
+  // default: single-layer lattices are usually meshed at 3–6 m (common practice, no source)
+  targetStrutLengthM: { kind: "number", label: "Target strut length", unit: "m", min: 1.5, max: 15, step: 0.5, default: 5, source: "mesh size; frequency v = round(1.2 R / L) (class I subdivision)" },
+  layers: {
+    kind: "select",
+    label: "Layers",
+    choices: [
+      { value: "single", label: "Single-layer lattice" },
+      { value: "double", label: "Double-layer grid" },
+    ],
+    default: "single",
+    source: "double layer: two grids at a depth, webs between (equivalent sandwich stiffness)",
+  },
+  // default span/50 (common practice for double-layer domes, no source)
+  doubleLayerDepthPct: { kind: "number", label: "Double-layer depth", unit: "% of span", min: 0.5, max: 6, step: 0.1, default: 2, source: "common practice span/50, no source" },
+  // default: lattice shells reach 0.2–0.4 of p_cl with imperfections (from memory; cf. Kollár & Dulácska)
+  knockDown: { kind: "number", label: "Buckling knock-down on p_cl", unit: "", min: 0.05, max: 1, step: 0.05, default: 0.3, source: "imperfection sensitivity of lattice shells, from memory 0.2–0.4", uncertainty: "knock-down" },
+  bands: { kind: "number", label: "Bar size bands, crown to edge", unit: "", min: 1, max: 20, step: 1, integer: true, default: 6, source: "grouping of alike members" },
+  // default: nodes and connections 10–20 % of bar mass (common practice, no source)
+  nodeAllowancePct: { kind: "number", label: "Nodes and connections", unit: "% of bar mass", min: 0, max: 50, step: 1, default: 15, source: "common practice 10–20 %, no source", uncertainty: "allowance" },
+  cladding: { kind: "select", label: "Cladding", choices: CLADDING_CHOICES, default: "metal-deck", source: "data/claddings.csv" },
+  steelGrade: { kind: "select", label: "Steel grade", choices: STEEL_GRADE_CHOICES, default: "S355", source: "EN 1993-1-1 Table 3.1" },
+} as const;
+export type GeodesicDomeOptions = OptionValues<typeof declarations>;
+
+/** Usual upper span of a single-layer lattice dome, m (from memory: single-layer braced domes to ≈ 100 m, double-layer beyond). */
+const SINGLE_LAYER_USUAL_MAX_SPAN_M = 100;
+
+/** The last few generated caps: the same geometry is asked for again whenever only loads, factors or rates change (compare page, risk runs). Read-only. */
+const capCache = new Map<string, GeodesicCap>();
+function cachedCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
+  const key = `${frequency}|${radiusM}|${capAngleRad}`;
+  let mesh = capCache.get(key);
+  if (!mesh) {
+    mesh = geodesicCap(frequency, radiusM, capAngleRad);
+    if (capCache.size >= 16) capCache.delete(capCache.keys().next().value as string);
+    capCache.set(key, mesh);
+  }
+  return mesh;
+}
+
+/** The geodesic mesh at the frequency whose mean strut meets the target length; a SchemeError when none can be made. */
+function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, section: ReturnType<typeof latticeSection>): { frequency: number; mesh: GeodesicCap } {
+  const frequency = geodesicFrequencyFor(cap.radiusM, targetStrutLengthM);
+  if (frequency > 400) throw new SchemeError(`the mesh would need frequency ${frequency} (over 400): increase the target strut length`, { section });
+  try {
+    return { frequency, mesh: cachedCap(frequency, cap.radiusM, cap.edgeAngleRad) };
+  } catch (e) {
+    if (e instanceof CapTooSmallError) throw new SchemeError("the mesh is too coarse for so small a cap: reduce the target strut length", { cause: e, section });
+    throw e;
+  }
+}
+
+function latticeWarnings(brief: Brief, cap: SphericalCap, double: boolean): string[] {
+  const warnings: string[] = [];
+  if (!double && brief.spanM > SINGLE_LAYER_USUAL_MAX_SPAN_M) {
+    warnings.push(`single-layer lattice beyond its usual span range (≈ ${SINGLE_LAYER_USUAL_MAX_SPAN_M} m, from memory): consider the double-layer option`);
+  }
+  if (cap.edgeAngleRad > hoopSignChangeAngleRad()) warnings.push("edge angle beyond 51.8°: hoop forces turn to tension near the edge (bars sized for it)");
+  warnings.push("membrane forces from the plan-mean snow load; drifted snow and point loads bend a lattice and are not covered at this stage");
+  warnings.push("the supports under the edge ring (walls or columns to the eaves) are not included");
+  return warnings;
+}
+
+/** One member group and its two checks per band, the web members, and the ring check. */
+function latticeMembers(r: LatticeResult, inputs: LatticeInputs, double: boolean): { members: MemberGroup[]; checks: Check[] } {
+  const members: MemberGroup[] = [];
+  const checks: Check[] = [];
+  const layerWord = double ? " (each layer)" : "";
+  for (const b of r.bands) {
+    const name = b.band.edge ? "bars meeting the ring" : `bars, band ${b.band.index + 1} of ${inputs.bands.length - 1}`;
+    members.push({
+      element: `lattice ${name}${layerWord}`,
+      material: "steel-hot-finished-hollow",
+      count: b.band.count * (double ? 2 : 1),
+      lengthM: b.band.meanLengthM,
+      section: b.choice.section.designation,
+      designForceN: Math.abs(b.compressionN) >= b.tensionN ? b.compressionN : b.tensionN,
+      resistanceN: b.choice.resistanceN,
+      utilisation: b.choice.utilisation,
+      governing: b.choice.governing,
+    });
+    checks.push(check(`${name}: ${b.choice.governing.split(",")[0]}`, b.choice.governing.split(", ")[1] ?? "EN 1993-1-1", b.choice.utilisation * b.choice.resistanceN, b.choice.resistanceN, "N"));
+    checks.push(check(`${name}: general buckling of the lattice`, "equivalent continuum 4√(DB)/R² × knock-down", b.pressurePa, b.bucklingPa, "Pa"));
+  }
+  if (r.webChoice) {
+    const web = r.webChoice;
+    members.push({ element: "web members", material: "steel-hot-finished-hollow", count: inputs.webCount, lengthM: inputs.webLengthM, section: web.section.designation, designForceN: -web.utilisation * web.resistanceN, resistanceN: web.resistanceN, utilisation: web.utilisation, governing: web.governing });
+  }
+  if (r.ringTensionN > 0) checks.push(check("edge tension ring", "EN 1993-1-1 eq. 6.6", r.ringTensionN, r.ringAreaM2 * inputs.steel.yieldPa, "N"));
+  return { members, checks };
+}
+
+function latticeTakeoff(r: LatticeResult, cladding: ReturnType<typeof findCladding>, cap: SphericalCap): TakeoffRow[] {
+  return [
+    tonnesRow("lattice bars", "steel-hot-finished-hollow", "steel-lattice", r.barMassKg),
+    ...(r.webMassKg > 0 ? [tonnesRow("web members", "steel-hot-finished-hollow", "steel-lattice", r.webMassKg)] : []),
+    tonnesRow("nodes and connections", "steel-plate", "steel-lattice", r.nodeMassKg),
+    tonnesRow("edge tension ring", "steel-plate", "steel-ring", r.ringMassKg),
+    { element: "cladding", material: cladding.material, costItem: claddingCostItem(cladding), quantity: cap.surfaceM2, unit: "m2", massKg: r.claddingMassKg },
+  ];
+}
+
+function latticeSummary(r: LatticeResult, mesh: GeodesicCap, frequency: number, cap: SphericalCap, double: boolean) {
+  const innerStruts = strutLengths(mesh.edgeLengthsM, (e) => !mesh.edgeOnRing[e]);
+  return [
+    { key: "frequency", label: "Geodesic frequency v", value: frequency, unit: "" },
+    { key: "nodes", label: "Nodes", value: mesh.nodes.length * (double ? 2 : 1), unit: "nr" },
+    { key: "struts", label: "Struts (lattice, without ring)", value: innerStruts.count * (double ? 2 : 1), unit: "nr" },
+    { key: "faces", label: "Triangular faces", value: mesh.faces.length, unit: "nr" },
+    { key: "strutMinM", label: "Strut length, shortest", value: innerStruts.minM, unit: "m" },
+    { key: "strutMeanM", label: "Strut length, mean", value: innerStruts.meanM, unit: "m" },
+    { key: "strutMaxM", label: "Strut length, longest", value: innerStruts.maxM, unit: "m" },
+    { key: "strutTotalM", label: "Strut length, total (one layer)", value: innerStruts.totalM, unit: "m" },
+    { key: "sphereRadiusM", label: "Sphere radius", value: cap.radiusM, unit: "m" },
+    { key: "ringTensionKN", label: "Edge ring tension", value: r.ringTensionN / 1000, unit: "kN" },
+    { key: "steelKgPerM2", label: "Steel per m² of plan", value: (r.barMassKg + r.webMassKg + r.nodeMassKg + r.ringMassKg) / cap.planAreaM2, unit: "kg/m²" },
+  ];
+}
+
+/**
+ * Designs a geodesic steel lattice dome: a class I icosahedral cap generated at the frequency whose
+ * mean strut meets the target length; membrane forces (Timoshenko & Woinowsky-Krieger ch. 14) resolved
+ * into the three-way grid; CHS bars per band for EN 1993-1-1 §6.3.1 buckling node to node, upsized
+ * until the lattice passes general buckling k·4√(DB)/R²; a tension ring for the edge thrust; the
+ * self-weight iterated to convergence. Validity: axisymmetric membrane state; 40–250 m.
+ */
+function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): DesignParts {
+  const cap = sphericalCap(brief.spanM, brief.riseM);
+  const double = opts.layers === "double";
+  const depthM = double ? (opts.doubleLayerDepthPct / 100) * brief.spanM : 0;
+  const cladding = findCladding(catalogue, opts.cladding);
+  const section = latticeSection(brief, depthM);
+  const { frequency, mesh } = latticeMesh(cap, opts.targetStrutLengthM, section);
+  const bands = strutBands(mesh, Math.min(opts.bands, Math.max(1, Math.floor(frequency / 2))));
+  const lengths = strutLengths(mesh.edgeLengthsM);
+  const webLengthM = double ? Math.hypot(depthM, lengths.meanM / Math.sqrt(3)) : 0;
+  const inputs: LatticeInputs = {
+    brief,
+    actions: roofActions(brief),
+    radiusM: cap.radiusM,
+    capAngleRad: cap.edgeAngleRad,
+    baseRadiusM: cap.baseRadiusM,
+    surfaceM2: cap.surfaceM2,
+    bands,
+    sections: catalogue.chs,
+    steel: steelGrade(opts.steelGrade),
+    knockDown: opts.knockDown,
+    doubleLayerDepthM: depthM,
+    webCount: double ? 3 * mesh.nodes.length : 0,
+    webLengthM,
+    nodeAllowance: opts.nodeAllowancePct / 100,
+    claddingKgPerM2: cladding.massKgPerM2,
+  };
+  const converged = convergeSelfWeight<LatticeResult>(
+    (g) => {
+      const r = sizeLattice(inputs, g);
+      return { value: r, selfWeightKPa: r.failedBand >= 0 ? g : latticeSelfWeightKPa(r, cap.surfaceM2) };
+    },
+    kPaFromKgPerM2(40 + cladding.massKgPerM2),
+    { section },
+  );
+  const r = converged.value;
+  const warnings = latticeWarnings(brief, cap, double);
+  if (r.failedBand >= 0) {
+    const reason = double ? `${r.failedWhy}: use a deeper double layer or a shorter mesh` : `${r.failedWhy}: choose the double-layer option or a shorter mesh`;
+    throw new SchemeError(reason, { warnings, section });
+  }
+  const usableRadius = capUsableRadiusM(cap.radiusM, brief.riseM, cap.baseRadiusM, brief.eavesHeightM, depthM, brief.minClearHeightM);
+  return {
+    ...latticeMembers(r, inputs, double),
+    summary: latticeSummary(r, mesh, frequency, cap, double),
+    takeoff: latticeTakeoff(r, cladding, cap),
+    warnings,
+    iterations: converged.iterations,
+    usableFloorM2: Math.PI * usableRadius * usableRadius,
+    ...capEnvelope(cap, brief.eavesHeightM),
+    drawing: { section, plan: latticePlan(mesh) },
+  };
+}
+
+export const geodesicDome = defineScheme({
+  id: "geodesic-dome",
+  label: "Geodesic steel dome",
+  colour: "#E69F00",
+  description:
+    "A single- or double-layer lattice of steel tubes on a geodesic (icosahedral) net, cut to a spherical cap on a steel tension ring. The dome carries the roof as a shell in compression; the bars are sized for their membrane forces and the whole lattice for general buckling.",
+  validSpanM: { min: 40, max: 250 },
+  options: defineOptions(declarations),
+  design,
+});

@@ -1,0 +1,208 @@
+import type { Brief } from "../../study/brief";
+import type { Catalogue, Cladding } from "../../catalogue/types";
+import type { ChsChoice } from "../../catalogue/pick-chs";
+import type { TakeoffRow } from "../../takeoff/takeoff-row";
+import type { Check, DesignParts, MemberGroup, OptionValues } from "../kit";
+import { check, convergeSelfWeight, defineOptions, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, CLADDING_CHOICES, STEEL_GRADE_CHOICES, SchemeError } from "../kit";
+import { roofActions } from "../../loads/roof-actions";
+import { snowShapeMu1 } from "../../loads/snow";
+import { kPaFromKgPerM2 } from "../../mechanics/gravity";
+import { designTrussRoof, trussLayout, trussRoofSelfWeightKPa, type TrussRoofInputs, type TrussRoofResult } from "./layout";
+import { PURLIN_REDUCTION, PURLIN_YIELD_PA } from "./secondary";
+import { trussPlan, trussSection } from "./drawing";
+
+const DEPTH_RATIO_RANGE = { min: 8, max: 25 } as const;
+
+const declarations = {
+  // default: primary trusses at 6–10 m so cold-formed purlins can span between them (common practice, no source)
+  trussSpacingM: { kind: "number", label: "Truss spacing", unit: "m", min: 4, max: 20, step: 0.5, default: 8, source: "common practice 6–10 m, no source" },
+  // default: long-span trusses span/10–span/20 (common practice, no source)
+  spanDepthRatio: { kind: "number", label: "Span / depth", unit: "", min: DEPTH_RATIO_RANGE.min, max: DEPTH_RATIO_RANGE.max, step: 0.5, default: 15, source: "common practice 10–20, no source" },
+  /** Let the tool choose the span/depth ratio of least mass (8–25) that meets the deflection limit. */
+  optimiseDepth: { kind: "toggle", label: "Choose the depth of least mass", default: false, source: "searches span/depth 8–25 meeting the deflection limit" },
+  // default L/250 under variable load (common practice for roofs, cf. EN 1990 A1.4 leaves limits to the project)
+  deflectionLimit: { kind: "number", label: "Deflection limit span /", unit: "", min: 100, max: 1000, step: 10, default: 250, source: "common practice L/250 under variable load" },
+  // default: metal deck spans 2–3.5 m (common practice, no source)
+  purlinSpacingM: { kind: "number", label: "Purlin spacing (top chord restraint)", unit: "m", min: 1, max: 6, step: 0.25, default: 3, source: "deck span, common practice 2–3.5 m" },
+  zones: { kind: "number", label: "Chord size changes per half span", unit: "", min: 1, max: 8, step: 1, integer: true, default: 3, source: "grouping of alike members" },
+  // default: web member strain adds 10–20 % to chord-only deflection of parallel-chord trusses at span/depth 10–20 (common practice, no source)
+  webAllowancePct: { kind: "number", label: "Web deflection allowance", unit: "% of chord deflection", min: 0, max: 50, step: 1, default: 15, source: "common practice 10–20 %, no source", uncertainty: "allowance" },
+  // default: truss joints, end plates and gussets 8–12 % (common practice, no source)
+  connectionAllowancePct: { kind: "number", label: "Truss connections", unit: "% of truss mass", min: 0, max: 30, step: 1, default: 10, source: "common practice 8–12 %, no source", uncertainty: "allowance" },
+  cladding: { kind: "select", label: "Roof deck", choices: CLADDING_CHOICES, default: "metal-deck", source: "data/claddings.csv" },
+  steelGrade: { kind: "select", label: "Steel grade", choices: STEEL_GRADE_CHOICES, default: "S355", source: "EN 1993-1-1 Table 3.1" },
+} as const;
+export type TrussRoofOptions = OptionValues<typeof declarations>;
+
+type Layout = ReturnType<typeof trussLayout>;
+
+/** The inputs of the whole-roof design at a span/depth ratio: flat-roof actions (snow μ1 at 0°, EN 1991-1-3 Table 5.2; wind at eaves + truss depth). */
+function trussInputs(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue, layout: Layout, cladding: Cladding, ratio: number): TrussRoofInputs {
+  const a = brief.spanM / 2;
+  const longest = Math.max(...layout.spansM);
+  const base = roofActions({ ...brief, riseM: Math.min(a, longest / ratio) });
+  const snowKPa = snowShapeMu1(0) * brief.snowGroundKPa;
+  const actions = { ...base, mu1: snowShapeMu1(0), mu3: 0, muUniform: snowShapeMu1(0), snowKPa, leadingVariableKPa: Math.max(snowKPa, brief.imposedRoofKPa), leadingVariable: snowKPa >= brief.imposedRoofKPa ? ("snow" as const) : ("imposed" as const) };
+  return {
+    brief,
+    actions,
+    catalogue,
+    steel: steelGrade(opts.steelGrade),
+    spacingM: layout.spacingM,
+    spansM: layout.spansM,
+    spanDepthRatio: ratio,
+    purlinSpacingM: opts.purlinSpacingM,
+    zones: opts.zones,
+    webAllowance: opts.webAllowancePct / 100,
+    deflectionLimit: opts.deflectionLimit,
+    connectionAllowance: opts.connectionAllowancePct / 100,
+    deckKgPerM2: cladding.massKgPerM2,
+  };
+}
+
+/** The span/depth ratio of least truss mass at a fixed self-weight: whole ratios, then ±0.5 about the best; null when none works. */
+function leastMassRatio(inputsFor: (ratio: number) => TrussRoofInputs, selfWeightKPa: number, startRatio: number): number | null {
+  let best = { ratio: startRatio, massKg: Number.POSITIVE_INFINITY };
+  const tryRatio = (q: number) => {
+    if (q < DEPTH_RATIO_RANGE.min || q > DEPTH_RATIO_RANGE.max) return;
+    const r = designTrussRoof(inputsFor(q), selfWeightKPa);
+    const massKg = r.trussMassKg + r.connectionMassKg + r.bracingMassKg;
+    if (r.failure === "" && massKg < best.massKg) best = { ratio: q, massKg };
+  };
+  for (let q = DEPTH_RATIO_RANGE.min; q <= DEPTH_RATIO_RANGE.max; q += 1) tryRatio(q);
+  const whole = best.ratio;
+  tryRatio(whole - 0.5);
+  tryRatio(whole + 0.5);
+  return Number.isFinite(best.massKg) ? best.ratio : null;
+}
+
+type Zone = TrussRoofResult["trusses"][number]["zones"][number];
+
+/** The chord and diagonal groups (worst zone of any truss), secondary members, and their checks. */
+function trussMembers(r: TrussRoofResult, layout: Layout, brief: Brief, opts: TrussRoofOptions): { members: MemberGroup[]; checks: Check[] } {
+  const members: MemberGroup[] = [];
+  const checks: Check[] = [];
+  const worst = (pick: (z: Zone) => { choice: ChsChoice; force: number }) => {
+    let best: { choice: ChsChoice; force: number } | undefined;
+    for (const t of r.trusses) for (const z of t.zones) {
+      const c = pick(z);
+      if (best === undefined || c.choice.utilisation > best.choice.utilisation) best = c;
+    }
+    return best!;
+  };
+  const meanSpan = layout.spansM.reduce((s, L) => s + L, 0) / layout.spansM.length;
+  const n = layout.spansM.length;
+  for (const [element, pick] of [
+    ["top chords", (z: Zone) => ({ choice: z.top, force: z.topForceN })],
+    ["bottom chords", (z: Zone) => ({ choice: z.bottom, force: z.bottomForceN })],
+    ["diagonals", (z: Zone) => ({ choice: z.diagonal, force: -z.diagonalForceN })],
+  ] as const) {
+    const w = worst(pick);
+    const count = element === "diagonals" ? r.trusses.reduce((s, t) => s + t.diagonalCount, 0) : n;
+    const lengthM = element === "diagonals" ? (r.trusses[0]?.diagonalLengthM ?? 0) : meanSpan;
+    members.push({ element, material: "steel-hot-finished-hollow", count, lengthM, section: w.choice.section.designation, designForceN: w.force, resistanceN: w.choice.resistanceN, utilisation: w.choice.utilisation, governing: w.choice.governing });
+    checks.push(check(`${element}: ${w.choice.governing.split(",")[0]}`, w.choice.governing.split(", ")[1] ?? "EN 1993-1-1", w.choice.utilisation * w.choice.resistanceN, w.choice.resistanceN, "N"));
+  }
+  const worstDeflection = r.trusses.reduce((m, t) => (t.deflectionM / t.deflectionLimitM > m.deflectionM / m.deflectionLimitM ? t : m), r.trusses[0]!);
+  checks.push(check(`truss deflection (span/${opts.deflectionLimit})`, "SLS, common practice limit", worstDeflection.deflectionM, worstDeflection.deflectionLimitM, "m"));
+  const purlinW = r.purlin.modulusM3;
+  members.push({ element: "purlins", material: "steel-cold-formed", count: Math.round(r.purlinLengthM / layout.spacingM), lengthM: layout.spacingM, section: `cold-formed Z/C ${(r.purlin.depthM * 1000).toFixed(0)} deep, W ${(purlinW * 1e6).toFixed(0)} cm³`, designForceN: 0, resistanceN: 0, utilisation: r.purlin.momentNm / (PURLIN_REDUCTION * PURLIN_YIELD_PA * purlinW), governing: "bending M/(0.7 f_y W), or deflection span/200" });
+  if (r.bracing) members.push({ element: "roof bracing", material: "steel-hot-finished-hollow", count: Math.round(r.bracingLengthM / (layout.spacingM * Math.SQRT2)), lengthM: layout.spacingM * Math.SQRT2, section: r.bracing.section.designation, designForceN: -r.bracing.utilisation * r.bracing.resistanceN, resistanceN: r.bracing.resistanceN, utilisation: r.bracing.utilisation, governing: r.bracing.governing });
+  if (r.trussColumn) {
+    members.push({ element: "truss columns", material: "steel-hot-finished-hollow", count: 2 * n, lengthM: brief.eavesHeightM, section: r.trussColumn.section.designation, designForceN: -r.trussColumnForceN, resistanceN: r.trussColumn.resistanceN, utilisation: r.trussColumn.utilisation, governing: r.trussColumn.governing });
+    checks.push(check("truss columns: flexural buckling", "EN 1993-1-1 §6.3.1", r.trussColumnForceN, r.trussColumn.resistanceN, "N"));
+  }
+  if (r.post) members.push({ element: "perimeter posts", material: "steel-hot-finished-hollow", count: r.postCount, lengthM: brief.eavesHeightM, section: r.post.section.designation, designForceN: -r.postForceN, resistanceN: r.post.resistanceN, utilisation: r.post.utilisation, governing: r.post.governing });
+  return { members, checks };
+}
+
+function trussTakeoff(r: TrussRoofResult, cladding: Cladding, planAreaM2: number): TakeoffRow[] {
+  return [
+    tonnesRow("primary trusses", "steel-hot-finished-hollow", "steel-truss", r.trussMassKg),
+    tonnesRow("truss connections", "steel-plate", "steel-truss", r.connectionMassKg),
+    tonnesRow("purlins", "steel-cold-formed", "steel-secondary", r.purlinMassKg),
+    tonnesRow("roof bracing", "steel-hot-finished-hollow", "steel-secondary", r.bracingMassKg),
+    tonnesRow("edge beam", "steel-hot-finished-hollow", "steel-secondary", r.edgeBeamMassKg),
+    tonnesRow("perimeter columns", "steel-hot-finished-hollow", "steel-column", r.columnMassKg),
+    { element: "roof deck", material: cladding.material, costItem: claddingCostItem(cladding), quantity: planAreaM2, unit: "m2", massKg: r.deckMassKg },
+  ];
+}
+
+function trussSummary(r: TrussRoofResult, layout: Layout, brief: Brief, ratio: number, planAreaM2: number) {
+  const worstDeflection = r.trusses.reduce((m, t) => (t.deflectionM / t.deflectionLimitM > m.deflectionM / m.deflectionLimitM ? t : m), r.trusses[0]!);
+  return [
+    { key: "trusses", label: "Primary trusses", value: layout.spansM.length, unit: "nr" },
+    { key: "spacingM", label: "Truss spacing", value: layout.spacingM, unit: "m" },
+    { key: "longestSpanM", label: "Longest truss span", value: Math.max(...layout.spansM), unit: "m" },
+    { key: "spanDepthRatio", label: "Span / depth", value: ratio, unit: "" },
+    { key: "deepestM", label: "Depth of the longest truss", value: Math.max(...r.depthsM), unit: "m" },
+    { key: "deflectionMm", label: "Largest truss deflection (variable load)", value: worstDeflection.deflectionM * 1000, unit: "mm" },
+    { key: "clearHeightM", label: "Clear height under the bottom chords", value: brief.eavesHeightM, unit: "m" },
+    { key: "steelKgPerM2", label: "Steel per m² of plan", value: (r.trussMassKg + r.connectionMassKg + r.purlinMassKg + r.bracingMassKg + r.edgeBeamMassKg + r.columnMassKg) / planAreaM2, unit: "kg/m²" },
+  ];
+}
+
+/**
+ * Designs a flat steel truss roof over the circular plan: parallel-chord Warren trusses at a spacing,
+ * each on its own chord of the circle, sized from the CHS catalogue (EN 1993-1-1 §6.2.3, §6.3.1)
+ * for M = wL²/8 over the depth and V/sin θ in the diagonals, stiffened for deflection; cold-formed
+ * purlins, roof bracing, an edge beam and columns to the eaves; self-weight iterated.
+ * The trusses sit with their bottom chords at eaves height, so the clear height is the eaves height
+ * everywhere and the brief's rise is not used. Validity: 20–200 m.
+ */
+function design(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue): DesignParts {
+  const a = brief.spanM / 2;
+  const planAreaM2 = Math.PI * a * a;
+  const layout = trussLayout(brief.spanM, opts.trussSpacingM);
+  const cladding = findCladding(catalogue, opts.cladding);
+  const inputsFor = (ratio: number) => trussInputs(brief, opts, catalogue, layout, cladding, ratio);
+  const section = (r?: TrussRoofResult) => trussSection(brief, layout.spansM, r?.depthsM ?? layout.spansM.map((L) => L / opts.spanDepthRatio));
+  const converge = (ratio: number) => {
+    const inputs = inputsFor(ratio);
+    const size = (g: number) => {
+      const r = designTrussRoof(inputs, g);
+      return { value: r, selfWeightKPa: r.failure !== "" ? g : trussRoofSelfWeightKPa(r, planAreaM2) };
+    };
+    return convergeSelfWeight<TrussRoofResult>(size, kPaFromKgPerM2(60 + cladding.massKgPerM2), { section: section() });
+  };
+  let ratio = opts.spanDepthRatio;
+  let converged = converge(ratio);
+  if (opts.optimiseDepth) {
+    // Search span/depth at the converged self-weight, then converge again at the best ratio.
+    const best = leastMassRatio(inputsFor, converged.selfWeightKPa, ratio);
+    if (best !== null) {
+      ratio = best;
+      converged = converge(ratio);
+    }
+  }
+  const r = converged.value;
+  const warnings = [
+    `flat truss roof: the brief's rise of ${brief.riseM} m is not used; the bottom chords sit at the eaves (${brief.eavesHeightM} m), so the clear height is the eaves height`,
+    "top chord bending from purlins between panel points, vertical wall bracing and wind along the trusses are not included",
+  ];
+  if (r.failure !== "") throw new SchemeError(`${r.failure}: use deeper trusses, a closer spacing or a higher steel grade`, { warnings, section: section(r) });
+  if (layout.spacingM > 10) warnings.push(`purlins span ${layout.spacingM.toFixed(1)} m between trusses, beyond the usual cold-formed range (≈ 10 m, common practice)`);
+  const roofVolumeM3 = layout.spansM.reduce((s, L, k) => s + L * layout.spacingM * r.depthsM[k]!, 0);
+  return {
+    ...trussMembers(r, layout, brief, opts),
+    summary: trussSummary(r, layout, brief, ratio, planAreaM2),
+    takeoff: trussTakeoff(r, cladding, planAreaM2),
+    warnings,
+    iterations: converged.iterations,
+    usableFloorM2: brief.eavesHeightM >= brief.minClearHeightM ? planAreaM2 : 0,
+    roofSurfaceM2: planAreaM2,
+    enclosedVolumeM3: planAreaM2 * brief.eavesHeightM + roofVolumeM3,
+    drawing: { section: section(r), plan: trussPlan(brief.spanM, layout.offsetsM, layout.spansM) },
+  };
+}
+
+export const trussRoof = defineScheme({
+  id: "truss-roof",
+  label: "Steel truss roof",
+  colour: "#CC79A7",
+  description:
+    "A flat roof of parallel steel trusses at a regular spacing, each spanning its own chord of the circular plan onto perimeter columns, with cold-formed purlins, roof bracing and a metal deck. The trusses carry the roof in bending; their depth sets their weight and their stiffness.",
+  validSpanM: { min: 20, max: 200 },
+  options: defineOptions(declarations),
+  design,
+});
