@@ -6,6 +6,7 @@ import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, 
 import { roofActions } from "../../loads/roof-actions";
 import { usableFloorAreaM2 } from "../../mechanics/usable-floor";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
+import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeUndersideM, type CableDomeLayout } from "./geometry";
 import { sizeCableDome, type DomeSizing } from "./sizing";
 import { designCompressionRing, type RingDesign, type RingMaterial } from "./compression-ring";
@@ -32,7 +33,7 @@ export type CableDomeOptions = OptionValues<typeof declarations>;
  */
 function widestPanelM(brief: Brief, opts: CableDomeOptions, fabric: Fabric, actions: ReturnType<typeof roofActions>): number {
   const allowable = fabricAllowableNPerM(fabric, opts.fabricStrengthFactor);
-  const permanentEstimateKPa = brief.servicesKPa + 0.35 + (fabric.massKgPerM2 * 9.81) / 1000;
+  const permanentEstimateKPa = brief.servicesKPa + 0.35 + kPaFromKgPerM2(fabric.massKgPerM2);
   const panelKPa = Math.max(permanentEstimateKPa + actions.leadingVariableKPa, actions.upliftKPa - permanentEstimateKPa);
   return (0.95 * 8 * opts.fabricSagRatio * allowable) / (panelKPa * 1000);
 }
