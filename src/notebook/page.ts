@@ -125,6 +125,7 @@ function studyTools(store: StudyStore, readOnly: boolean): HTMLElement {
     if (!chosen) return;
     const result = studyFromJson(await chosen.text());
     const problems = result.ok ? store.replace(result.study) : describeProblems(result.problems);
+    if (problems === null) store.origin.value = `file ${chosen.name}`;
     store.notice.value = problems === null ? `Opened ${chosen.name}.` : `${chosen.name} was not opened; nothing changed:\n${problems}`;
     file.value = "";
   });

@@ -21,6 +21,7 @@ import {
 } from "../study";
 import type { Binding } from "./controls";
 import { downloadText } from "./download";
+import { stampEdits } from "./stamp-edits";
 
 /** A message on the page about the study's safety, with what the user can do about it. */
 export interface Banner {
@@ -46,12 +47,17 @@ export interface StudyStore {
   replace(study: Study): string | null;
   /** The link that reopens the current study. */
   link: ReadonlySignal<string>;
+  /** Where the shown study came from: "link", "storage" (the working study saved in this browser), "defaults" (storage unreadable), "demo", or "file NAME". */
+  origin: Signal<string>;
 }
 
 export interface StoreOptions {
   /** The study to open when neither the link nor browser storage has one (the demo study). */
   initial: unknown;
-  /** Save to browser storage and keep the URL in step (off for the read-only client view). */
+  /**
+   * Save to browser storage, keep the URL in step and stamp meta.changedAt on every edit (off for
+   * the read-only client view, which still opens the working study from storage and never writes it).
+   */
   persist: boolean;
 }
 
@@ -83,12 +89,14 @@ interface Opened {
   banners: Banner[];
   /** Write the opened study to storage at once (a link the user opened), else only after a change. */
   writeNow: boolean;
+  /** Where the study came from (see StudyStore.origin). */
+  origin: string;
 }
 
 /** Opens the study from (in order) the link's fragment, browser storage, or the demo study. */
 function openStudy(options: StoreOptions, defaults: Study, restore: (key: string) => void): Opened {
-  const out: Opened = { study: defaults, notices: [], banners: [], writeNow: false };
-  const stored = options.persist ? readStoredStudy(localStorage, () => defaults) : null;
+  const out: Opened = { study: defaults, notices: [], banners: [], writeNow: false, origin: "demo" };
+  const stored = readStoredStudy(localStorage, () => defaults);
   if (stored?.unreadable) {
     const { text } = stored.unreadable;
     out.banners.push({
@@ -103,11 +111,12 @@ function openStudy(options: StoreOptions, defaults: Study, restore: (key: string
     const result = decodeStudyLink(fragment, defaults);
     if (result.ok) {
       out.study = result.study;
+      out.origin = "link";
       // Saved at once so every page shows it, unless the stored entry is unreadable: then only
       // after a change, like any page opened over an unreadable entry (item 4).
       out.writeNow = options.persist && !stored?.unreadable;
       const local = stored && !stored.unreadable ? stored.study : null;
-      if (local && !sameValue(local, result.study)) {
+      if (options.persist && local && !sameValue(local, result.study)) {
         try {
           localStorage.setItem(BEFORE_LINK_KEY, studyToJson(local));
           out.banners.push({
@@ -130,6 +139,7 @@ function openStudy(options: StoreOptions, defaults: Study, restore: (key: string
   }
   if (stored) {
     out.study = stored.study;
+    out.origin = stored.unreadable || stored.message ? "defaults" : "storage";
     return out;
   }
   const demo = studyFromObject(options.initial);
@@ -186,6 +196,7 @@ export function createStudyStore(options: StoreOptions): StudyStore {
   const link = computed(() => `#s=${encodeStudyLink(study.value, defaults)}`);
 
   if (options.persist) {
+    stampEdits(study);
     const fromOtherTab = persist(study, link, notice, opened);
     followOtherTabs(study, fromOtherTab, show, replace);
   }
@@ -195,6 +206,7 @@ export function createStudyStore(options: StoreOptions): StudyStore {
     notice,
     banners,
     link,
+    origin: signal(opened.origin),
     replace,
     bind<T>(path: readonly (string | number)[]): Binding<T> {
       let passed: { base: Study; next: T } | null = null; // the last edit check() let through

@@ -81,11 +81,31 @@ const isoDate = v.pipe(
   v.isoDate((issue) => `${JSON.stringify(issue.input)} (expected a date YYYY-MM-DD)`),
 );
 
+const isoTimestamp = v.pipe(
+  v.string((issue) => `${String(issue.input)} (expected a date and time such as 2026-12-02T20:15:00Z)`),
+  v.isoTimestamp((issue) => `${JSON.stringify(issue.input)} (expected a date and time such as 2026-12-02T20:15:00Z)`),
+);
+
+/** The study's title, prepared-by, date, notes and last-changed time. */
+export const StudyMetaSchema = v.object({
+  title: v.pipe(textUpTo(200), v.minLength(1, "an empty title (expected 1 to 200 characters)")),
+  author: textUpTo(200),
+  date: isoDate,
+  notes: v.optional(textUpTo(5000), ""),
+  changedAt: v.optional(isoTimestamp),
+});
+
+/** The message for a value of one meta field that is not allowed (null when it is), from the study schema. */
+export function metaFieldProblem(key: "title" | "author" | "date" | "notes", raw: string): string | null {
+  const result = v.safeParse(StudyMetaSchema.entries[key], raw);
+  return result.success ? null : (result.issues[0]?.message ?? "not allowed");
+}
+
 /** The study schema. Built on demand because the scheme registry defines the option fields. */
 export function studySchema() {
   return v.pipe(v.object({
     schemaVersion: v.literal(STUDY_SCHEMA_VERSION, (issue) => `${String(issue.input)} (expected ${STUDY_SCHEMA_VERSION})`),
-    meta: v.object({ title: textUpTo(200), author: textUpTo(200), date: isoDate, notes: v.optional(textUpTo(5000), "") }),
+    meta: StudyMetaSchema,
     brief: BriefSchema,
     schemes: schemesSchema(),
     // A file without its own tables takes the defaults (the demo study does).

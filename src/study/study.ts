@@ -13,6 +13,11 @@ export interface StudyMeta {
   /** ISO date, YYYY-MM-DD. */
   date: string;
   notes: string;
+  /**
+   * When the study was last changed: ISO 8601 date and time in UTC, stamped by the pages on every
+   * edit. Absent in files saved before spanbook recorded it.
+   */
+  changedAt?: string;
 }
 
 export interface SchemeSetting {
