@@ -21,6 +21,7 @@ import {
   checkTable,
   takeoffTable,
   schemeOptionControls,
+  studyDetailsEditor,
 } from "../src/notebook";
 import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
@@ -50,6 +51,7 @@ const env = computed(() => envelope(brief.value));
 // (and re-renders the charts) only when those do, not on every edit of the study.
 const caption = computed(() => chartCaption(store.study.value));
 
+staticCell(main, { id: "study", title: "Study" }, studyDetailsEditor(store));
 staticCell(main, { id: "brief", title: "Brief" }, briefControls(store));
 
 reactiveCell(main, { id: "loads", title: "Design loads" }, () => {

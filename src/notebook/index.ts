@@ -17,3 +17,4 @@ export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-e
 export { tableEditor, type EditorColumn } from "./table-editor";
 export { schemeDesigns, designAreas, type SchemeDesign } from "./scheme-designs";
 export { riskInputsEditor, ensureRiskStyle } from "./risk-inputs-editor";
+export { studyDetailsEditor, studyDetailItems, describeChangedAt } from "./study-details";
