@@ -1,20 +1,39 @@
-// Client view: read-only headline table, option charts, cautions and assumptions; exports one HTML file.
+// Client view: read-only headline table, option charts, cautions and assumptions of the working
+// study (the one every other page opens); exports one HTML file.
 import "../src/notebook/style.css";
 import css from "../src/notebook/style.css?inline";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, studySignals, tableElement, keyValues, downloadText, clientExportHtml, CAUTION, fmt } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, studySignals, tableElement, keyValues, downloadText, clientExportHtml, studyDetailItems, CAUTION, fmt } from "../src/notebook";
 import { chartCaption, massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart } from "../src/charts";
 import { comparisonTable, comparisonRows } from "../src/comparison";
-import { assumptionsRecord, type Study } from "../src/study";
+import { assumptionsRecord, readStoredStudy, STORAGE_KEY, type Study } from "../src/study";
 import type { SchemeResult } from "../src/pipeline";
 
 const { store, main } = startPage({
   id: "client",
   demoStudy,
   readOnly: true,
-  intro: "The roof options for this study, read-only: the headline comparison, the option charts, the cautions and the assumptions behind them. Open a study file or a link from the project lead; nothing here changes the study.",
+  intro: "The roof options of the working study — the one the other pages show — read-only: the headline comparison, the option charts, the cautions and the assumptions behind them. Opening a study file or a link shows that study here instead, without changing the working study.",
 });
 const { results } = studySignals(store);
+
+/** Where the shown study came from, in words for the reader. */
+function originText(origin: string): string {
+  if (origin === "storage") return "the working study saved in this browser (the one every page opens)";
+  if (origin === "link") return "the study in this page's link (the working study saved in this browser is unchanged)";
+  if (origin.startsWith("file ")) return `the file ${origin.slice(5)} (the working study saved in this browser is unchanged)`;
+  return "the demo study: no study is saved in this browser yet";
+}
+
+// Follow the working study when another tab changes it (not when a file or link is shown).
+window.addEventListener("storage", (event) => {
+  if (event.key !== STORAGE_KEY || !(store.origin.value === "storage" || store.origin.value === "demo")) return;
+  const stored = readStoredStudy(localStorage, () => store.study.value);
+  if (stored && !stored.message) {
+    store.replace(stored.study);
+    store.origin.value = "storage";
+  }
+});
 
 function headlineTable(list: readonly SchemeResult[], study: Study) {
   const { header, rows } = comparisonRows(comparisonTable(list));
@@ -55,26 +74,43 @@ function assumptionSections(study: Study): { heading: string; items: [string, st
 
 reactiveCell(main, { id: "meta", title: "Study" }, () => {
   const s = store.study.value;
-  return keyValues([
-    ["Title", s.meta.title],
-    ["Prepared by", s.meta.author || "—"],
-    ["Date", s.meta.date],
-    ["Notes", s.meta.notes || "—"],
-  ]);
-});
-
-reactiveCell(main, { id: "headline", title: "Headline comparison" }, () => {
-  const t = headlineTable(results.value, store.study.value);
+  const title = document.createElement("p");
+  title.className = "study-heading";
+  title.textContent = s.meta.title;
+  const shown = document.createElement("p");
+  shown.id = "client-origin";
+  shown.className = "intro";
+  shown.textContent = `Shown here: ${originText(store.origin.value)}.`;
   const wrap = document.createElement("div");
-  wrap.style.overflowX = "auto";
-  wrap.append(tableElement(t.header, t.rows, { caption: t.caption, numeric: t.header.map((_, i) => i > 0 && i < t.header.length - 3) }));
+  wrap.append(title, keyValues(studyDetailItems(s)), shown);
   return wrap;
 });
 
+reactiveCell(main, { id: "headline", title: "Headline comparison" }, () => {
+  const list = results.value;
+  if (list.length === 0) return "No scheme is switched on in this study.";
+  const t = headlineTable(list, store.study.value);
+  const table = tableElement(t.header, t.rows, { caption: t.caption, numeric: t.header.map((_, i) => i > 0 && i < t.header.length - 3) });
+  headlineShape(table, t.header.length, t.rows.length);
+  const wrap = document.createElement("div");
+  wrap.className = "table-scroll";
+  wrap.append(table);
+  return wrap;
+});
+
+/** Marks the headline table for the print (and narrow-screen) layout, which turns it on its side. */
+function headlineShape(table: HTMLTableElement, fields: number, schemes: number): void {
+  table.classList.add("headline");
+  table.style.setProperty("--fields", String(fields));
+  table.style.setProperty("--schemes", String(schemes));
+}
+
 reactiveCell(main, { id: "charts", title: "Option charts" }, () => {
+  const list = results.value;
+  if (list.length === 0) return null;
   const grid = document.createElement("div");
   grid.className = "grid charts";
-  grid.append(...figures(results.value, store.study.value));
+  grid.append(...figures(list, store.study.value));
   return grid;
 });
 
@@ -88,26 +124,29 @@ reactiveCell(main, { id: "assumptions", title: "Assumptions" }, () => {
   return wrap;
 });
 
-const exportButton = document.createElement("button");
-exportButton.type = "button";
-exportButton.id = "export-client";
-exportButton.textContent = "Export for the client (one HTML file)";
-exportButton.addEventListener("click", () => {
+function exportForClient(): void {
   const study = store.study.value;
   const list = results.value;
   const html = clientExportHtml({
     title: study.meta.title,
     subtitle: `Roof options at ${study.brief.spanM} m clear span — ${study.meta.author || "spanbook study"}, ${study.meta.date}.`,
+    details: studyDetailItems(study),
     caution: CAUTION,
     css,
     table: headlineTable(list, study),
-    chartsHtml: figures(list, study).map((f) => f.querySelector("figure, svg")?.outerHTML ?? ""),
+    chartsHtml: list.length === 0 ? [] : figures(list, study).map((f) => f.querySelector("figure, svg")?.outerHTML ?? ""),
     assumptions: assumptionSections(study),
-    generated: `Exported from spanbook. Every figure is a feasibility-stage estimate.`,
+    generated: `Exported from spanbook on ${new Date().toISOString().slice(0, 10)} from ${originText(store.origin.value)}. Every figure is a feasibility-stage estimate.`,
   });
   const slug = study.meta.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || "study";
   downloadText(`${slug}-client.html`, html, "text/html");
-});
+}
+
+const exportButton = document.createElement("button");
+exportButton.type = "button";
+exportButton.id = "export-client";
+exportButton.textContent = "Export for the client (one HTML file)";
+exportButton.addEventListener("click", exportForClient);
 const printButton = document.createElement("button");
 printButton.type = "button";
 printButton.textContent = "Print (A4)";

@@ -6,6 +6,8 @@ export function escapeHtml(text: string): string {
 export interface ClientExportInput {
   title: string;
   subtitle: string;
+  /** The study's own lines (title, prepared by, date, last changed, notes), shown under the title. */
+  details?: readonly (readonly [string, string])[];
   caution: string;
   /** Stylesheet text, inlined. */
   css: string;
@@ -21,13 +23,7 @@ export interface ClientExportInput {
  * and no network access, clean A4 pages when printed.
  */
 export function clientExportHtml(input: ClientExportInput): string {
-  const t = input.table;
-  const table = `<table><caption>${escapeHtml(t.caption)}</caption><thead><tr>${t.header.map((h) => `<th scope="col">${escapeHtml(h)}</th>`).join("")}</tr></thead><tbody>${t.rows
-    .map((r) => `<tr>${r.map((c, i) => `<td${i > 0 && /^[−\-\d.,–]+$/.test(c) ? ' class="num"' : ""}>${escapeHtml(c)}</td>`).join("")}</tr>`)
-    .join("")}</tbody></table>`;
-  const assumptions = input.assumptions
-    .map((section) => `<h3>${escapeHtml(section.heading)}</h3><dl class="kv">${section.items.map(([k, v]) => `<dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd>`).join("")}</dl>`)
-    .join("");
+  const assumptions = input.assumptions.map((section) => `<h3>${escapeHtml(section.heading)}</h3>${keyValuesHtml(section.items)}`).join("");
   return `<!doctype html>
 <html lang="en">
 <head>
@@ -42,7 +38,8 @@ export function clientExportHtml(input: ClientExportInput): string {
 <h1>${escapeHtml(input.title)}</h1>
 <p class="intro">${escapeHtml(input.subtitle)}</p>
 <p class="caution" role="note">${escapeHtml(input.caution)}</p>
-<section class="cell"><h2>Headline comparison</h2><div style="overflow-x:auto">${table}</div></section>
+${input.details ? `<section class="cell"><h2>Study</h2>${keyValuesHtml(input.details)}</section>` : ""}
+<section class="cell"><h2>Headline comparison</h2><div class="table-scroll">${headlineTableHtml(input.table)}</div></section>
 <section class="cell"><h2>Option charts</h2><div class="grid charts">${input.chartsHtml.join("\n")}</div></section>
 <section class="cell"><h2>Assumptions</h2>${assumptions}</section>
 <p class="caution">${escapeHtml(input.caution)}</p>
@@ -51,4 +48,19 @@ export function clientExportHtml(input: ClientExportInput): string {
 </body>
 </html>
 `;
+}
+
+/** A definition list of label → value. */
+function keyValuesHtml(items: readonly (readonly [string, string])[]): string {
+  return `<dl class="kv">${items.map(([k, v]) => `<dt>${escapeHtml(k)}</dt><dd>${escapeHtml(v)}</dd>`).join("")}</dl>`;
+}
+
+/**
+ * The headline table, marked (class and the counts of fields and schemes) for the print layout
+ * that turns it on its side so that every heading and every scheme fits the width of A4.
+ */
+function headlineTableHtml(t: ClientExportInput["table"]): string {
+  const head = `<thead><tr>${t.header.map((h) => `<th scope="col">${escapeHtml(h)}</th>`).join("")}</tr></thead>`;
+  const body = t.rows.map((r) => `<tr>${r.map((c, i) => `<td${i > 0 && /^[−\-\d.,–]+$/.test(c) ? ' class="num"' : ""}>${escapeHtml(c)}</td>`).join("")}</tr>`).join("");
+  return `<table class="headline" style="--fields: ${t.header.length}; --schemes: ${t.rows.length}"><caption>${escapeHtml(t.caption)}</caption>${head}<tbody>${body}</tbody></table>`;
 }

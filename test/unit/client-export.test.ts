@@ -28,3 +28,23 @@ describe("clientExportHtml", () => {
     expect(escapeHtml(`"'`)).toBe("&quot;&#39;");
   });
 });
+
+describe("clientExportHtml: the study's details and the table's print shape", () => {
+  const html = clientExportHtml({
+    title: "Riverside Hall",
+    subtitle: "sub",
+    details: [["Prepared by", "A. Lead"], ["Last changed", "2 Dec 2026, 20:05 UTC"]],
+    caution: "c",
+    css: "",
+    table: { caption: "Table", header: ["Scheme", "kg/m²", "Warnings"], rows: [["A", "12.5", "1"], ["B", "3", "0"]] },
+    chartsHtml: [],
+    assumptions: [],
+    generated: "now",
+  });
+  it("shows the study's details under the title", () => {
+    expect(html).toContain("<dt>Prepared by</dt><dd>A. Lead</dd><dt>Last changed</dt><dd>2 Dec 2026, 20:05 UTC</dd>");
+  });
+  it("marks the headline table with its numbers of fields and schemes for the A4 layout", () => {
+    expect(html).toContain('<table class="headline" style="--fields: 3; --schemes: 2">');
+  });
+});
