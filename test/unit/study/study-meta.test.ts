@@ -34,7 +34,7 @@ describe("the study's details", () => {
   });
 
   it("the chart caption names the study", () => {
-    expect(chartCaption(setIn(defaultStudy(), ["meta", "title"], "Riverside Hall"))).toMatch(/^Riverside Hall · Span /);
+    expect(chartCaption(setIn(defaultStudy(), ["meta", "title"], "Riverside Hall"))).toMatch(/^Span .* · study: Riverside Hall\. Feasibility-stage estimate\.$/);
   });
 
   it("says when the study was last changed, or that it was not recorded", () => {
