@@ -22,6 +22,7 @@ function originText(origin: string): string {
   if (origin === "storage") return "the working study saved in this browser (the one every page opens)";
   if (origin === "link") return "the study in this page's link (the working study saved in this browser is unchanged)";
   if (origin.startsWith("file ")) return `the file ${origin.slice(5)} (the working study saved in this browser is unchanged)`;
+  if (origin === "defaults") return "spanbook's defaults: the study saved in this browser could not be read (see the message above)";
   return "the demo study: no study is saved in this browser yet";
 }
 
@@ -29,10 +30,7 @@ function originText(origin: string): string {
 window.addEventListener("storage", (event) => {
   if (event.key !== STORAGE_KEY || !(store.origin.value === "storage" || store.origin.value === "demo")) return;
   const stored = readStoredStudy(localStorage, () => store.study.value);
-  if (stored && !stored.message) {
-    store.replace(stored.study);
-    store.origin.value = "storage";
-  }
+  if (stored && !stored.message && store.replace(stored.study) === null) store.origin.value = "storage";
 });
 
 function headlineTable(list: readonly SchemeResult[], study: Study) {
