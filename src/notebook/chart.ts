@@ -1,5 +1,6 @@
 import * as Plot from "@observablehq/plot";
 import { downloadBlob, downloadText } from "./download";
+import { figureSvg } from "./figure-svg";
 
 /** The SVG of a rendered chart as standalone text (with the xmlns a file needs). */
 export function svgText(svg: SVGSVGElement): string {
@@ -44,18 +45,21 @@ export function chartFigure(options: Plot.PlotOptions, filename: string): HTMLEl
   const wrap = document.createElement("div");
   wrap.className = "figure";
   wrap.append(rendered);
-  const svg = rendered instanceof SVGSVGElement ? rendered : rendered.querySelector<SVGSVGElement>("svg");
-  if (svg) {
+  // Saved files hold the whole figure (title, legends, plot, caption, caution) as one SVG, made at
+  // the moment of saving; the first <svg> inside a figure is a legend swatch, not the chart.
+  if (rendered.querySelector("svg") || rendered instanceof SVGSVGElement) {
     const tools = document.createElement("div");
     tools.className = "chart-tools";
     const saveSvg = document.createElement("button");
     saveSvg.type = "button";
     saveSvg.textContent = "Save SVG";
-    saveSvg.addEventListener("click", () => downloadText(`${filename}.svg`, svgText(svg), "image/svg+xml"));
+    saveSvg.className = "save-svg";
+    saveSvg.addEventListener("click", () => downloadText(`${filename}.svg`, svgText(figureSvg(rendered)), "image/svg+xml"));
     const savePng = document.createElement("button");
     savePng.type = "button";
     savePng.textContent = "Save PNG";
-    savePng.addEventListener("click", async () => downloadBlob(`${filename}.png`, await svgToPng(svg)));
+    savePng.className = "save-png";
+    savePng.addEventListener("click", async () => downloadBlob(`${filename}.png`, await svgToPng(figureSvg(rendered))));
     tools.append(saveSvg, savePng);
     wrap.append(tools);
   }
