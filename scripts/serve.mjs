@@ -1,4 +1,5 @@
 // `npm start`: serves the built site (dist/) on 127.0.0.1 and prints the URL of the compare page.
+// vite preview reads vite.config.ts, whose preview.headers send the Content-Security-Policy header.
 import { preview } from "vite";
 
 const server = await preview({ preview: { host: "127.0.0.1", port: Number(process.env.PORT ?? 4173), strictPort: false, open: false } });

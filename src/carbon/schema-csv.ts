@@ -1,6 +1,6 @@
 import * as v from "valibot";
-import { csvFormat, csvParse } from "d3";
-import { CsvError, type CsvProblem } from "../catalogue/csv-table";
+import { csvFormat } from "d3";
+import { CsvError, csvObjects, type CsvProblem } from "../catalogue/csv-table";
 
 /**
  * Reading and writing a CSV table whose rows are checked by a valibot schema, so the ranges a
@@ -33,7 +33,7 @@ export function parseSchemaCsv<S extends v.GenericSchema>(
   fileLabel: string,
   rowKey?: string,
 ): v.InferOutput<S>[] {
-  const parsed = csvParse(text.replace(/^\uFEFF/, ""));
+  const parsed = csvObjects(text.replace(/^\uFEFF/, ""));
   const problems: CsvProblem[] = [];
   const expected = columns.map((c) => c.column);
   for (const name of expected) {
