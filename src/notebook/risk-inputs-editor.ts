@@ -1,10 +1,11 @@
-// The uncertain-inputs table of the risk page: low / mode / high / distribution / group per input,
-// each edit checked against the whole study (checkRiskInputs) before it is applied; an invalid
-// edit shows its message in the row and changes nothing.
+// The uncertain-inputs table of the risk page: scale / low / high / distribution / group per input,
+// with the range it gives now around the study's value; each edit checked against the whole study
+// (checkRiskInputs) before it is applied; an invalid edit shows its message in the row and changes
+// nothing.
 import { computed, effect } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { setIn, getIn } from "../study";
-import { checkRiskInputs, defaultRiskSettings, formatPath, DISTRIBUTION_KINDS, type UncertainInput } from "../risk";
+import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, type UncertainInput } from "../risk";
 
 const STYLE_ID = "risk-editor-style";
 const CSS = `
@@ -29,7 +30,7 @@ export function ensureRiskStyle(): void {
   document.head.append(style);
 }
 
-type Field = "low" | "mode" | "high" | "distribution" | "group";
+type Field = "scale" | "low" | "high" | "distribution" | "group";
 
 /** The editable inputs table; rebuilt only when the list of inputs changes (ids), values kept in step by effects. */
 export function riskInputsEditor(store: StudyStore): HTMLElement {
@@ -68,10 +69,11 @@ function buildTable(store: StudyStore): HTMLTableElement {
   const table = document.createElement("table");
   table.id = "risk-inputs-table";
   const caption = document.createElement("caption");
-  caption.textContent = "Uncertain inputs. Inputs with the same group are drawn together (one quantile per sample); an empty group is independent. Units are the field's own.";
+  caption.textContent =
+    "Uncertain inputs. Each range is stored around the study's own value, which is the mode: as factors on it (× 0.75 to × 1.5) or as amounts added to it (in the field's unit), so it moves with the study and always holds the study's value; the ends are kept inside the field's allowed range (a rate inside its row's low–high). Table rows are found by material or cost item id, not by position. Inputs with the same group are drawn together (one quantile per sample); an empty group is independent.";
   const thead = document.createElement("thead");
   const head = document.createElement("tr");
-  for (const h of ["input", "low", "mode", "high", "distribution", "group", ""]) {
+  for (const h of ["input", "scale", "low", "high", "range now (low – study value – high)", "distribution", "group", ""]) {
     const th = document.createElement("th");
     th.scope = "col";
     th.textContent = h;
@@ -84,6 +86,17 @@ function buildTable(store: StudyStore): HTMLTableElement {
   return table;
 }
 
+/** What every cell of one input's row needs: the store, the input, its message cell and how to apply an edit. */
+type RowContext = {
+  store: StudyStore;
+  input: UncertainInput;
+  index: number;
+  message: HTMLTableCellElement;
+  /** Applies a new version of the input if the whole study stays valid; else shows why in the row. */
+  applyInput: (next: UncertainInput, cell: HTMLTableCellElement) => void;
+  apply: (field: Field, value: unknown, cell: HTMLTableCellElement) => void;
+};
+
 function row(store: StudyStore, input: UncertainInput, index: number): HTMLTableRowElement {
   const tr = document.createElement("tr");
   tr.dataset.input = input.id;
@@ -94,15 +107,14 @@ function row(store: StudyStore, input: UncertainInput, index: number): HTMLTable
   path.className = "path";
   path.textContent = formatPath(input.path);
   name.append(path);
-  tr.append(name);
   const message = document.createElement("td");
   message.className = "row-message";
   message.id = `risk-msg-${index}`;
   message.setAttribute("aria-live", "polite");
   const cells: HTMLTableCellElement[] = [];
-
-  const apply = (field: Field, value: unknown, cell: HTMLTableCellElement) => {
-    const candidate = setIn(store.study.value, ["risk", "inputs", index, field], value);
+  const current = () => store.study.value.risk.inputs[index] as UncertainInput;
+  const applyInput = (next: UncertainInput, cell: HTMLTableCellElement) => {
+    const candidate = setIn(store.study.value, ["risk", "inputs", index], next);
     const problems = checkRiskInputs(candidate).problems.filter((p) => p.inputId === input.id || p.inputId === null);
     if (problems.length > 0) {
       message.textContent = problems.map((p) => p.message).join("; ");
@@ -113,33 +125,91 @@ function row(store: StudyStore, input: UncertainInput, index: number): HTMLTable
     message.textContent = "";
     store.replace(candidate);
   };
+  const ctx: RowContext = { store, input, index, message, applyInput, apply: (field, value, cell) => applyInput({ ...current(), [field]: value }, cell) };
+  const [scale, low, high, distribution, group] = [scaleCell(ctx), numberCell(ctx, "low"), numberCell(ctx, "high"), distributionCell(ctx), groupCell(ctx)];
+  cells.push(scale, low, high, distribution, group);
+  tr.append(name, scale, low, high, rangeCell(ctx), distribution, group, message);
+  return tr;
+}
 
-  for (const field of ["low", "mode", "high"] as const) {
-    const td = document.createElement("td");
-    const el = document.createElement("input");
-    el.type = "number";
-    el.step = "any";
-    el.id = `risk-${field}-${index}`;
-    el.setAttribute("aria-label", `${input.label}: ${field}`);
-    el.setAttribute("aria-describedby", message.id);
-    el.addEventListener("change", () => {
-      const x = Number(el.value);
-      if (el.value.trim() === "" || !Number.isFinite(x)) {
-        message.textContent = `input "${input.id}": ${field} "${el.value}" is not a number`;
-        td.classList.add("invalid");
-        return;
-      }
-      apply(field, x, td);
-    });
-    effect(() => {
-      const value = getIn(store.study.value, ["risk", "inputs", index, field]);
-      if (document.activeElement !== el && typeof value === "number") el.value = String(Number(value.toPrecision(6)));
-    });
-    td.append(el);
-    cells.push(td);
-    tr.append(td);
+/** The scale select: changing it keeps the absolute range of the moment, re-expressed on the new scale. */
+function scaleCell(ctx: RowContext): HTMLTableCellElement {
+  const { store, input, index, message } = ctx;
+  const td = document.createElement("td");
+  const scale = document.createElement("select");
+  scale.id = `risk-scale-${index}`;
+  scale.setAttribute("aria-label", `${input.label}: scale`);
+  for (const kind of RANGE_SCALES) {
+    const option = document.createElement("option");
+    option.value = kind;
+    option.textContent = kind === "factor" ? "× study value" : "+ study value";
+    scale.append(option);
   }
-  const distTd = document.createElement("td");
+  scale.addEventListener("change", () => {
+    const stored = store.study.value.risk.inputs[index] as UncertainInput;
+    const now = resolveInput(store.study.value, stored);
+    if ("error" in now) return ctx.apply("scale", scale.value, td);
+    const factor = scale.value === "factor";
+    if (factor && now.mode === 0) {
+      message.textContent = `input "${input.id}": the study's value is 0, so the range cannot be factors on it (use + study value)`;
+      td.classList.add("invalid");
+      return;
+    }
+    const ends = factor ? [now.low / now.mode, now.high / now.mode] : [now.low - now.mode, now.high - now.mode];
+    ctx.applyInput({ ...stored, scale: factor ? "factor" : "offset", low: Math.min(...ends), high: Math.max(...ends) }, td);
+  });
+  effect(() => {
+    const value = getIn(store.study.value, ["risk", "inputs", index, "scale"]);
+    if (typeof value === "string") scale.value = value;
+  });
+  td.append(scale);
+  return td;
+}
+
+function numberCell(ctx: RowContext, field: "low" | "high"): HTMLTableCellElement {
+  const { store, input, index, message } = ctx;
+  const td = document.createElement("td");
+  const el = document.createElement("input");
+  el.type = "number";
+  el.step = "any";
+  el.id = `risk-${field}-${index}`;
+  el.setAttribute("aria-label", `${input.label}: ${field}`);
+  el.setAttribute("aria-describedby", message.id);
+  el.addEventListener("change", () => {
+    const x = Number(el.value);
+    if (el.value.trim() === "" || !Number.isFinite(x)) {
+      message.textContent = `input "${input.id}": ${field} "${el.value}" is not a number`;
+      td.classList.add("invalid");
+      return;
+    }
+    ctx.apply(field, x, td);
+  });
+  effect(() => {
+    const value = getIn(store.study.value, ["risk", "inputs", index, field]);
+    if (document.activeElement !== el && typeof value === "number") el.value = String(Number(value.toPrecision(6)));
+  });
+  td.append(el);
+  return td;
+}
+
+/** The range the input gives now: low – the study's value (the mode) – high, in the field's unit. */
+function rangeCell(ctx: RowContext): HTMLTableCellElement {
+  const { store, index } = ctx;
+  const td = document.createElement("td");
+  td.className = "num";
+  td.id = `risk-range-${index}`;
+  effect(() => {
+    const stored = store.study.value.risk.inputs[index];
+    const now = stored ? resolveInput(store.study.value, stored) : null;
+    const show = (x: number) => String(Number(x.toPrecision(4)));
+    td.textContent = !now || "error" in now ? "–" : `${show(now.low)} – ${show(now.mode)} – ${show(now.high)}`;
+  });
+  return td;
+}
+
+function distributionCell(ctx: RowContext): HTMLTableCellElement {
+  const { store, input, index } = ctx;
+  const td = document.createElement("td");
   const select = document.createElement("select");
   select.id = `risk-distribution-${index}`;
   select.setAttribute("aria-label", `${input.label}: distribution`);
@@ -149,26 +219,28 @@ function row(store: StudyStore, input: UncertainInput, index: number): HTMLTable
     option.textContent = kind === "pert" ? "Beta-PERT" : kind;
     select.append(option);
   }
-  select.addEventListener("change", () => apply("distribution", select.value, distTd));
+  select.addEventListener("change", () => ctx.apply("distribution", select.value, td));
   effect(() => {
     const value = getIn(store.study.value, ["risk", "inputs", index, "distribution"]);
     if (typeof value === "string") select.value = value;
   });
-  distTd.append(select);
-  cells.push(distTd);
-  const groupTd = document.createElement("td");
+  td.append(select);
+  return td;
+}
+
+function groupCell(ctx: RowContext): HTMLTableCellElement {
+  const { store, input, index } = ctx;
+  const td = document.createElement("td");
   const group = document.createElement("input");
   group.type = "text";
   group.className = "group";
   group.id = `risk-group-${index}`;
   group.setAttribute("aria-label", `${input.label}: group`);
-  group.addEventListener("change", () => apply("group", group.value.trim() === "" ? null : group.value.trim(), groupTd));
+  group.addEventListener("change", () => ctx.apply("group", group.value.trim() === "" ? null : group.value.trim(), td));
   effect(() => {
     const value = getIn(store.study.value, ["risk", "inputs", index, "group"]);
     if (document.activeElement !== group) group.value = typeof value === "string" ? value : "";
   });
-  groupTd.append(group);
-  cells.push(groupTd);
-  tr.append(distTd, groupTd, message);
-  return tr;
+  td.append(group);
+  return td;
 }

@@ -1,4 +1,5 @@
-import type { PathStep } from "./risk-settings";
+/** A key of a resolved path: an object key or an array index (rows picked by id are resolved first). */
+type PathStep = string | number;
 
 /** Paths prepared for applyValues: each container on the paths once, parents before children. */
 export type CompiledPaths = {

@@ -1,74 +1,65 @@
 import type { Study } from "../study/study";
 import { validateStudy } from "../study/study-schema";
 import { validateWith } from "../study/schema-helpers";
-import { getIn } from "../study/patch";
-import { RiskSettingsSchema, type PathStep, type RiskSettings } from "./risk-settings";
+import { RiskSettingsSchema, type RiskSettings } from "./risk-settings";
 import { applyValues } from "./apply-values";
+import { formatPath, resolveRiskInputs, type ResolvedInput, type RiskInputProblem } from "./resolve-inputs";
 
-/** A problem with one uncertain input (or with the settings as a whole: inputId null). */
-export type RiskInputProblem = { inputId: string | null; message: string };
+export { formatPath, type RiskInputProblem } from "./resolve-inputs";
 
 export type RiskInputCheck = {
   /** Problems that stop a run. */
   problems: RiskInputProblem[];
-  /** Things to know that do not stop a run (a mode that is not the study's own value). */
+  /** Things to know that do not stop a run. */
   warnings: string[];
+  /** The inputs as a run samples them (index paths, absolute ranges); complete only when there are no problems. */
+  resolved: ResolvedInput[];
 };
 
-/** A path as the study's problem messages write it: brief.snowGroundKPa, cost.rates[3].rate. */
-export function formatPath(path: readonly PathStep[]): string {
-  let out = "";
-  for (const step of path) out += typeof step === "number" ? `[${step}]` : out === "" ? step : `.${step}`;
-  return out;
+function schemaProblems(settings: RiskSettings, problems: { path: string; message: string }[]): RiskInputProblem[] {
+  return problems.map((p) => {
+    const index = /^inputs\[(\d+)\]/.exec(p.path)?.[1];
+    const input = index === undefined ? undefined : settings.inputs?.[Number(index)];
+    return { inputId: input?.id ?? null, message: p.message.startsWith("input ") ? p.message : `${input ? `input "${input.id}": ` : ""}risk.${p.path}: ${p.message}` };
+  });
 }
 
 /**
- * Checks the risk settings against the study before any work: the settings' own schema (ranges
- * low ≤ mode ≤ high, unique ids and paths); every path leads to a finite number in the study; and
- * the study stays valid with every input at its low end and with every input at its high end
- * (every field's limits are intervals, so then every sample is valid too). Messages name the input.
- * A mode that differs from the study's value is a warning: the deterministic column uses the
- * study's value.
+ * Checks the risk settings against the study before any work: the settings' own schema (factor
+ * and offset ranges that hold the study's value, unique ids and paths); every path finds its row
+ * by id and leads to a finite number in the study; no two inputs vary the same value; and the
+ * study stays valid with every input at its low end and with every input at its high end (every
+ * field's limits are intervals, so then every sample is valid too). Messages name the input.
  */
 export function checkRiskInputs(study: Study, settings: RiskSettings = study.risk): RiskInputCheck {
   const schema = validateWith(RiskSettingsSchema, settings);
-  if (!schema.ok) {
-    return {
-      problems: schema.problems.map((p) => {
-        const index = /^inputs\[(\d+)\]/.exec(p.path)?.[1];
-        const input = index === undefined ? undefined : settings.inputs?.[Number(index)];
-        return { inputId: input?.id ?? null, message: p.message.startsWith("input ") ? p.message : `${input ? `input "${input.id}": ` : ""}risk.${p.path}: ${p.message}` };
-      }),
-      warnings: [],
-    };
+  if (!schema.ok) return { problems: schemaProblems(settings, schema.problems), warnings: [], resolved: [] };
+  const { inputs, problems } = resolveRiskInputs(study, settings);
+  if (problems.length > 0) return { problems, warnings: [], resolved: inputs };
+  const seen = new Map<string, string>();
+  for (const input of inputs) {
+    const key = JSON.stringify(input.path);
+    const other = seen.get(key);
+    if (other !== undefined) problems.push({ inputId: input.id, message: `input "${input.id}" varies the same study value (${formatPath(input.path)}) as input "${other}" (expected each value once)` });
+    seen.set(key, input.id);
   }
-  const problems: RiskInputProblem[] = [];
-  const warnings: string[] = [];
-  for (const input of settings.inputs) {
-    const value = getIn(study, input.path);
-    if (typeof value !== "number" || !Number.isFinite(value)) {
-      problems.push({ inputId: input.id, message: `input "${input.id}": path ${formatPath(input.path)} does not lead to a number in the study (found ${value === undefined ? "nothing" : JSON.stringify(value)})` });
-    } else if (value !== input.mode) {
-      warnings.push(`input "${input.id}": mode ${input.mode} differs from the study's value ${value}; the deterministic result uses the study's value`);
-    }
-  }
-  if (problems.length > 0) return { problems, warnings };
+  if (problems.length > 0) return { problems, warnings: [], resolved: inputs };
 
-  const paths = settings.inputs.map((i) => i.path);
+  const paths = inputs.map((i) => i.path);
   for (const end of ["low", "high"] as const) {
-    const moved = applyValues(study, paths, settings.inputs.map((i) => i[end]));
+    const moved = applyValues(study, paths, inputs.map((i) => i[end]));
     const result = validateStudy(moved);
     if (result.ok) continue;
     for (const problem of result.problems) {
       // The input whose value sits at the problem's path, or in the same row (a rate above its row's high).
       const owner =
-        settings.inputs.find((i) => formatPath(i.path) === problem.path) ??
-        settings.inputs.find((i) => problem.path.startsWith(`${formatPath(i.path.slice(0, -1))}.`) || problem.path.startsWith(`${formatPath(i.path.slice(0, -1))}[`));
+        inputs.find((i) => formatPath(i.path) === problem.path) ??
+        inputs.find((i) => problem.path.startsWith(`${formatPath(i.path.slice(0, -1))}.`) || problem.path.startsWith(`${formatPath(i.path.slice(0, -1))}[`));
       problems.push({
         inputId: owner?.id ?? null,
         message: `${owner ? `input "${owner.id}": ` : ""}${end} ${owner ? owner[end] : ""} not allowed: ${problem.path}: ${problem.message}`.replace(/ {2}/g, " "),
       });
     }
   }
-  return { problems, warnings };
+  return { problems, warnings: [], resolved: inputs };
 }

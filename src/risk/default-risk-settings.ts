@@ -5,6 +5,7 @@ import { materialInfo, type MaterialKind } from "../materials";
 import { FACTOR_LIMITS } from "../carbon";
 import { MAX_RATE } from "../cost";
 import { RISK_LIMITS, type RiskSettings, type UncertainInput, type PathStep } from "./risk-settings";
+import { tidy } from "./resolve-inputs";
 
 /** A default range as multiples of the study's value, with where it comes from. */
 type Spread = { low: number; high: number; source: string };
@@ -57,11 +58,6 @@ function clamp(x: number, min: number, max: number): number {
   return Math.min(max, Math.max(min, x));
 }
 
-/** Rounds away binary noise (0.16000000000000003 → 0.16): 12 significant figures. */
-function tidy(x: number): number {
-  return x === 0 ? 0 : Number(x.toPrecision(12));
-}
-
 function spreadInput(
   id: string,
   label: string,
@@ -72,14 +68,18 @@ function spreadInput(
   group: string | null,
 ): UncertainInput | null {
   if (!(Number.isFinite(value) && value > 0)) return null;
-  const low = Math.min(value, clamp(tidy(value * spread.low), limits.min, limits.max));
-  const high = Math.max(value, clamp(tidy(value * spread.high), limits.min, limits.max));
+  // Stored as factors on the study's value (so the range follows the study); the first ends are
+  // kept inside the field's limits, and a run clamps them to the limits again as the value moves.
+  const low = Math.min(1, tidy(clamp(value * spread.low, limits.min, limits.max) / value));
+  const high = Math.max(1, tidy(clamp(value * spread.high, limits.min, limits.max) / value));
   if (low === high) return null;
-  return { id, label, path, low, mode: value, high, distribution: "pert", group };
+  return { id, label, path, scale: "factor", low, high, distribution: "pert", group };
 }
 
 /**
- * Default uncertain inputs for a study, all Beta-PERT with the study's own value as the mode:
+ * Default uncertain inputs for a study, all Beta-PERT with the study's own value as the mode, each
+ * range stored as factors on (or, for inflation, offsets from) the study's value so that it
+ * follows the study when a value is edited; table rows are addressed by material or cost item id:
  * snow, wind and services loads; the buckling knock-downs, design allowances (nodes, connections,
  * fabric seams), reinforcement rates, creep and finishes loads the registered scheme modules offer
  * as options (each option declares its kind of uncertainty); A1–A3 factors, waste rates and road distances of steel, strand,
@@ -110,23 +110,27 @@ export function defaultRiskSettings(study: Omit<Study, "risk">): RiskSettings {
     }
   }
 
-  study.carbon.factors.forEach((row, index) => {
+  study.carbon.factors.forEach((row) => {
+    const at = (field: string): PathStep[] => ["carbon", "factors", { material: row.material }, field];
     const kind = materialInfo(row.material)?.kind;
     const rule = kind ? CARBON_KINDS[kind] : undefined;
     if (!rule) return;
     // The two coated fabrics move together; ETFE foil is a different product.
     const group = rule.group === "fabric" && !row.material.startsWith("fabric-") ? null : rule.group;
-    add(spreadInput(`carbon-${row.material}`, `A1–A3: ${row.label} (kgCO2e/kg)`, ["carbon", "factors", index, "a1a3KgCO2ePerKg"], row.a1a3KgCO2ePerKg, rule.spread, FACTOR_LIMITS.a1a3KgCO2ePerKg, group === null ? null : `${group}-carbon`));
-    add(spreadInput(`waste-${row.material}`, `Waste rate: ${row.label} (%)`, ["carbon", "factors", index, "wasteRatePct"], row.wasteRatePct, DEFAULT_SPREADS.waste, FACTOR_LIMITS.wasteRatePct, `${rule.group}-waste`));
-    add(spreadInput(`transport-${row.material}`, `Road transport: ${row.label} (km)`, ["carbon", "factors", index, "transportKmRoad"], row.transportKmRoad, DEFAULT_SPREADS.transport, FACTOR_LIMITS.transportKmRoad, `${rule.group}-transport`));
+    add(spreadInput(`carbon-${row.material}`, `A1–A3: ${row.label} (kgCO2e/kg)`, at("a1a3KgCO2ePerKg"), row.a1a3KgCO2ePerKg, rule.spread, FACTOR_LIMITS.a1a3KgCO2ePerKg, group === null ? null : `${group}-carbon`));
+    add(spreadInput(`waste-${row.material}`, `Waste rate: ${row.label} (%)`, at("wasteRatePct"), row.wasteRatePct, DEFAULT_SPREADS.waste, FACTOR_LIMITS.wasteRatePct, `${rule.group}-waste`));
+    add(spreadInput(`transport-${row.material}`, `Road transport: ${row.label} (km)`, at("transportKmRoad"), row.transportKmRoad, DEFAULT_SPREADS.transport, FACTOR_LIMITS.transportKmRoad, `${rule.group}-transport`));
   });
   add(spreadInput("quantity-allowance", "Carbon quantity allowance (%)", ["carbon", "settings", "quantityAllowancePct"], study.carbon.settings.quantityAllowancePct, DEFAULT_SPREADS.allowance, { min: 0, max: 50 }, null));
 
   const currency = study.cost.onCosts.currency;
-  study.cost.rates.forEach((row, index) => {
+  study.cost.rates.forEach((row) => {
     if (!(row.low < row.high)) return;
     const group = STEEL_RATE_ITEMS.has(row.item) ? "steel-rates" : FABRIC_RATE_ITEMS.has(row.item) ? "fabric-rates" : null;
-    inputs.push({ id: `rate-${row.item}`, label: `Rate: ${row.label} (${currency}/${row.unit})`, path: ["cost", "rates", index, "rate"], low: row.low, mode: row.rate, high: Math.min(row.high, MAX_RATE), distribution: "pert", group });
+    // The row's own low–high, as factors on the rate (offsets for a zero rate); a run keeps the ends inside the row's range.
+    const high = Math.min(row.high, MAX_RATE);
+    const range = row.rate > 0 ? { scale: "factor" as const, low: tidy(row.low / row.rate), high: tidy(high / row.rate) } : { scale: "offset" as const, low: row.low - row.rate, high: high - row.rate };
+    inputs.push({ id: `rate-${row.item}`, label: `Rate: ${row.label} (${currency}/${row.unit})`, path: ["cost", "rates", { item: row.item }, "rate"], ...range, distribution: "pert", group });
   });
   const oc = study.cost.onCosts;
   const onCost = (field: "preliminariesPct" | "overheadsProfitPct" | "designFeesPct" | "riskPct", label: string, max: number) =>
@@ -136,7 +140,7 @@ export function defaultRiskSettings(study: Omit<Study, "risk">): RiskSettings {
   onCost("designFeesPct", "Design fees", 50);
   onCost("riskPct", "Risk allowance", 100);
   // Inflation: programme slip moves it up more readily than down (common practice, no source).
-  inputs.push({ id: "oncost-inflationPct", label: "Inflation to mid-point (%)", path: ["cost", "onCosts", "inflationPct"], low: Math.max(-20, oc.inflationPct - 2), mode: oc.inflationPct, high: Math.min(100, oc.inflationPct + 8), distribution: "pert", group: null });
+  inputs.push({ id: "oncost-inflationPct", label: "Inflation to mid-point (%)", path: ["cost", "onCosts", "inflationPct"], scale: "offset", low: Math.max(-20, oc.inflationPct - 2) - oc.inflationPct, high: Math.min(100, oc.inflationPct + 8) - oc.inflationPct, distribution: "pert", group: null });
 
   return { inputs, samples: RISK_LIMITS.samples.default, designSamples: RISK_LIMITS.designSamples.default };
 }

@@ -17,7 +17,8 @@ export { standardErrorOfMean, standardErrorOfProportion, clusteredStandardErrorO
 export { ranks, pearsonCorrelation, spearmanCorrelation } from "./rank-correlation";
 
 // Uncertain inputs in the study
-export { type UncertainInput, type RiskSettings, type PathStep, UncertainInputSchema, RiskSettingsSchema, RISK_LIMITS } from "./risk-settings";
+export { type UncertainInput, type RiskSettings, type PathStep, type RowSelector, type RangeScale, RANGE_SCALES, SCALE_RULES, UncertainInputSchema, RiskSettingsSchema, RISK_LIMITS } from "./risk-settings";
+export { resolvePath, resolveInput, resolveRiskInputs, fieldLimits, type ResolvedInput, type IndexPath } from "./resolve-inputs";
 export { defaultRiskSettings, DEFAULT_SPREADS } from "./default-risk-settings";
 export { checkRiskInputs, formatPath, type RiskInputCheck, type RiskInputProblem } from "./check-risk-inputs";
 export { applyValues, compilePaths, type CompiledPaths } from "./apply-values";

@@ -2,25 +2,42 @@ import * as v from "valibot";
 import { integerIn, oneOf, textUpTo } from "../study/schema-helpers";
 import { DISTRIBUTION_KINDS, type DistributionKind } from "./distribution";
 
-/** A step of a path into the study: an object key or an array index. */
-export type PathStep = string | number;
+/**
+ * A table row picked by its id: `{ material: "steel-chs" }` in carbon.factors, `{ item: "steel-truss" }`
+ * in cost.rates. One key, one value. Rows are addressed by id, never by position, so a table
+ * imported in another order still points each input at its own row.
+ */
+export type RowSelector = Readonly<Record<string, string>>;
+
+/** A step of a path into the study: an object key, an array index, or a row picked by its id. */
+export type PathStep = string | number | RowSelector;
+
+/** How an input's low and high are read. */
+export const RANGE_SCALES = ["factor", "offset"] as const;
+/**
+ * "factor": low and high multiply the study's value (0.75 and 1.5: from 25 % below to 50 % above);
+ * "offset": they are added to it, in the field's unit (−2 and 8 percentage points). Either way the
+ * range moves with the study and always holds the study's own value, which is the mode.
+ */
+export type RangeScale = (typeof RANGE_SCALES)[number];
 
 /**
- * One uncertain input of the risk analysis: a number in the study (found by `path`) given a
- * three-point range and a distribution. Inputs with the same `group` share one draw per sample (as
- * a quantile u, so each maps through its own range): fully correlated, e.g. all steel rates.
+ * One uncertain input of the risk analysis: a number in the study (found by `path`) given a range
+ * around the study's own value (the mode) and a distribution. Inputs with the same `group` share
+ * one draw per sample (as a quantile u, so each maps through its own range): fully correlated,
+ * e.g. all steel rates.
  */
 export type UncertainInput = {
   /** Unique id, e.g. "snow" or "rate-steel-lattice". */
   id: string;
   label: string;
-  /** Where the number is in the study, e.g. ["brief", "snowGroundKPa"] or ["cost", "rates", 0, "rate"]. */
+  /** Where the number is in the study, e.g. ["brief", "snowGroundKPa"] or ["cost", "rates", { item: "steel-truss" }, "rate"]. */
   path: PathStep[];
-  /** Lowest plausible value, in the field's own unit. */
+  /** How low and high are read: multiples of the study's value, or amounts added to it. */
+  scale: RangeScale;
+  /** Lowest plausible value: factor ≤ 1, or offset ≤ 0. */
   low: number;
-  /** Most likely value (normally the study's own value). */
-  mode: number;
-  /** Highest plausible value. */
+  /** Highest plausible value: factor ≥ 1, or offset ≥ 0. */
   high: number;
   distribution: DistributionKind;
   /** Inputs of the same group are drawn together (rank-perfectly correlated); null: independent. */
@@ -54,13 +71,25 @@ function finiteNumber(what: string) {
   );
 }
 
+const rowSelector = v.pipe(
+  v.record(v.pipe(v.string(), v.minLength(1)), v.pipe(v.string(), v.minLength(1))),
+  v.check((o) => Object.keys(o).length === 1, (issue) => `${JSON.stringify(issue.input)} (expected one key and id, e.g. {"material": "steel-chs"})`),
+);
+
 const pathStep = v.union(
   [
     v.pipe(v.string(), v.minLength(1)),
     v.pipe(v.number(), v.integer(), v.minValue(0)),
+    rowSelector,
   ],
-  (issue) => `${JSON.stringify(issue.input)} (expected a key or an index ≥ 0)`,
+  (issue) => `${JSON.stringify(issue.input)} (expected a key, an index ≥ 0 or a row id such as {"material": "steel-chs"})`,
 );
+
+/** The allowed low and high of each scale, for messages and checks. */
+export const SCALE_RULES: Record<RangeScale, { lowMax: number; highMin: number; lowMin: number; text: string }> = {
+  factor: { lowMin: 0, lowMax: 1, highMin: 1, text: "0 ≤ low ≤ 1 ≤ high (multiples of the study's value)" },
+  offset: { lowMin: -FINITE, lowMax: 0, highMin: 0, text: "low ≤ 0 ≤ high (added to the study's value)" },
+};
 
 /** Checks one uncertain input; the range message names the input. */
 export const UncertainInputSchema = v.pipe(
@@ -76,8 +105,8 @@ export const UncertainInputSchema = v.pipe(
       v.maxLength(8, () => "path too long (expected at most 8 steps)"),
       v.check((p) => ["brief", "schemes", "carbon", "cost"].includes(String(p[0])), (issue) => `${JSON.stringify((issue.input as PathStep[])[0])} (expected a path starting with brief, schemes, carbon or cost)`),
     ),
+    scale: oneOf(RANGE_SCALES),
     low: finiteNumber("low"),
-    mode: finiteNumber("mode"),
     high: finiteNumber("high"),
     distribution: oneOf(DISTRIBUTION_KINDS),
     group: v.nullable(
@@ -90,22 +119,22 @@ export const UncertainInputSchema = v.pipe(
   }),
   v.forward(
     v.partialCheck(
-      [["id"], ["low"], ["mode"]],
-      (input) => input.low <= input.mode,
+      [["id"], ["scale"], ["low"]],
+      (input) => input.low >= SCALE_RULES[input.scale].lowMin && input.low <= SCALE_RULES[input.scale].lowMax,
       (issue) => {
         const input = issue.input as UncertainInput;
-        return `input "${input.id}": low ${input.low} is above the mode ${input.mode} (expected low ≤ mode ≤ high)`;
+        return `input "${input.id}": low ${input.low} is outside its ${input.scale} range (expected ${SCALE_RULES[input.scale].text})`;
       },
     ),
     ["low"],
   ),
   v.forward(
     v.partialCheck(
-      [["id"], ["mode"], ["high"]],
-      (input) => input.mode <= input.high,
+      [["id"], ["scale"], ["high"]],
+      (input) => input.high >= SCALE_RULES[input.scale].highMin,
       (issue) => {
         const input = issue.input as UncertainInput;
-        return `input "${input.id}": high ${input.high} is below the mode ${input.mode} (expected low ≤ mode ≤ high)`;
+        return `input "${input.id}": high ${input.high} is outside its ${input.scale} range (expected ${SCALE_RULES[input.scale].text})`;
       },
     ),
     ["high"],

@@ -13,7 +13,8 @@ import { checkRiskInputs } from "./check-risk-inputs";
 import { designQuantities, assessmentIntensities, linearAssessment, type DesignQuantities } from "./linear-assessment";
 import { summariseMetric, lowestProbabilities, pairwiseProbabilities, rankCorrelationsWith, type Clusters } from "./risk-summaries";
 import { ranks } from "./rank-correlation";
-import { RISK_LIMITS, type UncertainInput } from "./risk-settings";
+import { RISK_LIMITS, type PathStep } from "./risk-settings";
+import type { ResolvedInput } from "./resolve-inputs";
 import { RISK_COVERAGE, RISK_METRICS, type RankCorrelation, type RiskMetric, type RiskResult, type SchemeRisk } from "./risk-result";
 
 export type RiskProgress = { phase: "designs" | "samples"; done: number; total: number };
@@ -39,12 +40,12 @@ export class RiskCancelledError extends Error {
 }
 
 /** True for inputs that change a design (loads, scheme options); the rest change only carbon and cost. */
-export function affectsDesign(input: UncertainInput): boolean {
+export function affectsDesign(input: { path: readonly PathStep[] }): boolean {
   return input.path[0] === "brief" || input.path[0] === "schemes";
 }
 
 /** True when an input changes the design of this scheme. */
-function affectsScheme(input: UncertainInput, id: SchemeId): boolean {
+function affectsScheme(input: { path: readonly PathStep[] }, id: SchemeId): boolean {
   return input.path[0] === "brief" || (input.path[0] === "schemes" && input.path[1] === id);
 }
 
@@ -82,7 +83,8 @@ export function runRisk(study: Study, catalogue: Catalogue, options: RunRiskOpti
   const check = checkRiskInputs(study);
   if (check.problems.length > 0) throw new Error(`invalid risk inputs: ${check.problems.map((p) => p.message).join("; ")}`);
 
-  const inputs = study.risk.inputs;
+  // Rows found by id, ranges made absolute around the study's values (the mode).
+  const inputs = check.resolved;
   const distributions = inputs.map((i) => makeDistribution(i.distribution, i.low, i.mode, i.high));
   const isDesign = inputs.map(affectsDesign);
   const models: SchemeModel[] = SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
@@ -121,7 +123,7 @@ export function runRisk(study: Study, catalogue: Catalogue, options: RunRiskOpti
   let done = 0;
   models.forEach((model, s) => {
     const relevant = inputs.map((input, k) => (affectsScheme(input, model.id) ? k : -1)).filter((k) => k >= 0);
-    const paths = relevant.map((k) => (inputs[k] as UncertainInput).path);
+    const paths = relevant.map((k) => (inputs[k] as ResolvedInput).path);
     const seen = new Map<string, number>();
     for (let j = 0; j < designSamples; j++) {
       const values = relevant.map((k) => (distributions[k] as ReturnType<typeof makeDistribution>).quantile((poolU[groupOf[k] as number] as Float64Array)[j] as number));
@@ -153,8 +155,8 @@ export function runRisk(study: Study, catalogue: Catalogue, options: RunRiskOpti
 
   // Samples.
   const assessIndex = inputs.map((_, k) => k).filter((k) => !isDesign[k]);
-  const assessPaths = compilePaths(assessIndex.map((k) => (inputs[k] as UncertainInput).path));
-  const baseValues = assessIndex.map((k) => getIn(study, (inputs[k] as UncertainInput).path) as number);
+  const assessPaths = compilePaths(assessIndex.map((k) => (inputs[k] as ResolvedInput).path));
+  const baseValues = assessIndex.map((k) => getIn(study, (inputs[k] as ResolvedInput).path) as number);
   const inputValues = inputs.map(() => new Float64Array(samples));
   const outputs = models.map(() => RISK_METRICS.map(() => new Float64Array(samples)));
   const clusters: Clusters = { of: new Int32Array(samples), count: designSamples };
@@ -226,7 +228,7 @@ export function runRisk(study: Study, catalogue: Catalogue, options: RunRiskOpti
       // Only inputs that can move this output: self-weight only the design inputs of this scheme,
       // carbon and cost also every assessment input (another scheme's options would show noise).
       const usable = inputRanks.map((r, k) => {
-        const input = inputs[k] as UncertainInput;
+        const input = inputs[k] as ResolvedInput;
         if (isDesign[k] && !affectsScheme(input, model.id)) return null;
         return metric === "selfWeightKgPerM2" && !isDesign[k] ? null : r;
       });

@@ -5,7 +5,7 @@ import { SCHEMES } from "../schemes";
 import { designScheme, assessDesign } from "../pipeline";
 import { setIn } from "../study/patch";
 import { checkRiskInputs } from "./check-risk-inputs";
-import type { UncertainInput } from "./risk-settings";
+import type { ResolvedInput } from "./resolve-inputs";
 
 /** One bar of a tornado: the output with one input at its low and at its high end, the others at the study's values. */
 export type TornadoBar = {
@@ -38,12 +38,12 @@ function metricsOf(design: Design, study: Pick<Study, "carbon" | "cost">): { car
 export function riskTornado(study: Study, catalogue: Catalogue): Tornado[] {
   const check = checkRiskInputs(study);
   if (check.problems.length > 0) throw new Error(`invalid risk inputs: ${check.problems.map((p) => p.message).join("; ")}`);
-  const inputs = study.risk.inputs.filter((i) => i.low < i.high);
+  const inputs = check.resolved.filter((i) => i.low < i.high);
   const out: Tornado[] = [];
   for (const model of SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false)) {
     const baseDesign = designScheme(model, study.brief, study.schemes[model.id]?.options, catalogue);
     const base = metricsOf(baseDesign, study);
-    const ends = (input: UncertainInput, value: number) => {
+    const ends = (input: ResolvedInput, value: number) => {
       const moved = setIn(study, input.path, value);
       const changesDesign = input.path[0] === "brief" || (input.path[0] === "schemes" && input.path[1] === model.id);
       const design = changesDesign ? designScheme(model, moved.brief, moved.schemes[model.id]?.options, catalogue) : baseDesign;

@@ -142,9 +142,12 @@ export function assumptionsRecord(study: Study, defaults: Study = defaultStudy()
   out.push(row("risk", ["risk", "samples"], { label: "Monte Carlo samples", unit: "", source: "study" }, study, riskDefaults));
   risk.inputs.forEach((input, index) => {
     const d = riskDefaults.risk.inputs.findIndex((i) => i.id === input.id);
-    for (const key of ["low", "mode", "high", "distribution", "group"] as const) {
+    // Ranges are stored around the study's value (the mode): factors on it, or offsets added to it.
+    const around = input.scale === "factor" ? "× the study's value, which is the mode" : "added to the study's value, which is the mode";
+    for (const key of ["scale", "low", "high", "distribution", "group"] as const) {
+      const label = key === "low" || key === "high" ? `${input.label}: ${key} (${around})` : `${input.label}: ${key}`;
       out.push(
-        row("risk", ["risk", "inputs", index, key], { label: `${input.label}: ${key}`, unit: "", source: "risk range (common practice, no source)" }, study, riskDefaults, ["risk", "inputs", d < 0 ? -1 : d, key], `risk.inputs[${input.id}].${key}`),
+        row("risk", ["risk", "inputs", index, key], { label, unit: "", source: "risk range (common practice, no source)" }, study, riskDefaults, ["risk", "inputs", d < 0 ? -1 : d, key], `risk.inputs[${input.id}].${key}`),
       );
     }
   });

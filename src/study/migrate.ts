@@ -1,13 +1,18 @@
 import { STUDY_SCHEMA_VERSION } from "./study";
+import { migrateRiskInputsV1 } from "../risk/migrate-risk-inputs";
 
 /** A step that turns a study of version n into version n + 1. */
 export type Migration = (study: Record<string, unknown>) => Record<string, unknown>;
 
 /**
- * Migration steps by the version they start from. Version 1 is the first published format, so
- * the table is empty; a format change adds `n: (old) => new` here and bumps STUDY_SCHEMA_VERSION.
+ * Migration steps by the version they start from. A format change adds `n: (old) => new` here and
+ * bumps STUDY_SCHEMA_VERSION.
+ * 1 → 2: risk inputs address table rows by material or item id instead of position, and store
+ * their ranges as factors on (or offsets from) the study's value instead of absolute low/mode/high.
  */
-export const MIGRATIONS: Readonly<Record<number, Migration>> = {};
+export const MIGRATIONS: Readonly<Record<number, Migration>> = {
+  1: migrateRiskInputsV1,
+};
 
 /**
  * Brings a parsed study file up to the current schema version, step by step. A file without a

@@ -5,7 +5,7 @@ import type { RateRow, OnCosts } from "../cost";
 import type { RiskSettings } from "../risk/risk-settings";
 
 /** The version of the study file this code writes. Older files are migrated on load. */
-export const STUDY_SCHEMA_VERSION = 1;
+export const STUDY_SCHEMA_VERSION = 2;
 
 export interface StudyMeta {
   title: string;

@@ -35,12 +35,28 @@ describe("risk page", () => {
     const before = await page.inputValue("#risk-low-0");
     await page.fill("#risk-low-0", "999");
     await page.press("#risk-low-0", "Enter");
-    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toMatch(/input "snow": low 999 is above the mode/);
+    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toMatch(/input "snow": low 999 is outside its factor range/);
     await page.reload();
     await page.waitForSelector("#risk-inputs-table tbody tr");
     expect(await page.inputValue("#risk-low-0")).toBe(before);
     expect(errors).toEqual([]);
     await page.close();
+  });
+
+  it("the ranges follow the study: after snow is set to 1.5 kPa on the compare page, the risk page samples around 1.5 kPa", async () => {
+    // Issue 10, item 10: the page used to keep 0.525 / 0.7 / 1.05 kPa whatever the study's snow load.
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(`${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#snowGroundKPa");
+    await page.fill("#snowGroundKPa", "1.5");
+    await page.press("#snowGroundKPa", "Enter");
+    await page.waitForTimeout(300);
+    await page.goto(`${inject("baseUrl")}/risk.html`);
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    expect(await page.locator('#risk-inputs-table tr[data-input="snow"] td[id^="risk-range-"]').textContent()).toBe("1.125 – 1.5 – 2.25");
+    expect(await page.locator("#risk-inputs-table caption").textContent()).toMatch(/stored around the study's own value, which is the mode/);
+    await context.close();
   });
 
   it("cancel stops a long run and leaves the page responsive", async () => {

@@ -16,7 +16,8 @@ function demo(): Study {
 const base = demo();
 const small = { designSamples: 3 };
 const withInputs = (study: Study, inputs: UncertainInput[]): Study => setIn(study, ["risk", "inputs"], inputs);
-const pointInputs = (study: Study) => study.risk.inputs.map((i) => ({ ...i, low: i.mode, high: i.mode }));
+// Ranges are stored around the study's value: a point range is factor 1 (or offset 0) at both ends.
+const pointInputs = (study: Study) => study.risk.inputs.map((i) => ({ ...i, low: i.scale === "factor" ? 1 : 0, high: i.scale === "factor" ? 1 : 0 }));
 
 describe(`runRisk invariants (schemes registered: ${SCHEMES.map((s) => s.id).join(", ")})`, () => {
   it("P10 ≤ P50 ≤ P90 for every scheme and metric", () => {
@@ -68,13 +69,14 @@ describe(`runRisk invariants (schemes registered: ${SCHEMES.map((s) => s.id).joi
 
   it("widening a range about its mode never narrows P10–P90 (same seed)", () => {
     // One carbon factor uncertain, the rest fixed: carbon is then linear in it, so the theorem holds.
-    const carbonInputs = base.risk.inputs.filter((i) => i.path[0] === "carbon" && i.path[3] === "a1a3KgCO2ePerKg");
+    const carbonInputs = base.risk.inputs.filter((i) => i.path[0] === "carbon" && i.path[3] === "a1a3KgCO2ePerKg" && i.scale === "factor");
     fc.assert(
       fc.property(fc.integer({ min: 0, max: carbonInputs.length - 1 }), fc.double({ min: 1, max: 3, noNaN: true }), fc.integer({ min: 0, max: 1e6 }), (index, k, seed) => {
         const chosen = carbonInputs[index] as UncertainInput;
         const others = pointInputs(base).filter((i) => i.id !== chosen.id);
-        const factor = Math.min(k, chosen.mode / (chosen.mode - chosen.low)); // stay ≥ 0
-        const wider = { ...chosen, low: chosen.mode - factor * (chosen.mode - chosen.low), high: chosen.mode + factor * (chosen.high - chosen.mode) };
+        // Factors on the study's value: the mode is 1.
+        const factor = Math.min(k, 1 / (1 - chosen.low)); // stay ≥ 0
+        const wider = { ...chosen, low: 1 - factor * (1 - chosen.low), high: 1 + factor * (chosen.high - 1) };
         const narrow = runRisk(withInputs(base, [...others, chosen]), catalogue, { samples: 40, seed, ...small });
         const wide = runRisk(withInputs(base, [...others, wider]), catalogue, { samples: 40, seed, ...small });
         narrow.schemes.forEach((s, i) => {

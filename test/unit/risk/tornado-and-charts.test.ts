@@ -3,7 +3,7 @@ import { readFileSync } from "node:fs";
 import { studyFromJson, setIn, type Study } from "../../../src/study";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { evaluateStudy, headline } from "../../../src/pipeline";
-import { riskTornado, runRisk, RiskCancelledError, RISK_METRICS } from "../../../src/risk";
+import { riskTornado, runRisk, checkRiskInputs, RiskCancelledError, RISK_METRICS } from "../../../src/risk";
 import { riskRangeChart, riskLowestChart, riskTornadoChart, riskRankChart, riskRangeData } from "../../../src/charts";
 
 const catalogue = defaultCatalogue();
@@ -31,14 +31,14 @@ describe("riskTornado", () => {
     expect(t).toBeDefined(); // the steel truss roof prices its trusses with this rate
     if (!t) return;
     const bar = t.bars.find((b) => b.inputId === "rate-steel-truss");
-    const input = study.risk.inputs.find((i) => i.id === "rate-steel-truss");
+    const input = checkRiskInputs(study).resolved.find((i) => i.id === "rate-steel-truss");
     if (!bar || !input) throw new Error("missing bar");
     const moved = setIn(study, input.path, input.high);
     const h = evaluateStudy(moved, catalogue).results.map(headline).find((x) => x.id === t.scheme);
     expect(bar.atHigh).toBe(h?.cost_per_m2_floor);
   });
   it("inputs of zero width have no bar", () => {
-    const fixed = setIn(study, ["risk", "inputs", 0], { ...study.risk.inputs[0], low: 0.7, high: 0.7 });
+    const fixed = setIn(study, ["risk", "inputs", 0], { ...study.risk.inputs[0], low: 1, high: 1 });
     expect(riskTornado(fixed, catalogue)[0]?.bars.some((b) => b.inputId === "snow")).toBe(false);
   });
 });
