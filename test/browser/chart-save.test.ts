@@ -134,6 +134,10 @@ async function open(url: string): Promise<{ page: Page; errors: string[]; close:
   return { page, errors, close: () => context.close() };
 }
 
+// Up to 15 charts a page, each saved twice through a real download: minutes on a loaded machine
+// (no wall time is asserted; the limit only stops a hung page).
+const PAGE_TIMEOUT_MS = 300_000;
+
 describe("every chart saves as the whole figure", () => {
   const total: Record<string, number> = {};
   afterAll(() => {
@@ -150,7 +154,7 @@ describe("every chart saves as the whole figure", () => {
       total[file] = await checkEveryFigure(page, 1);
       expect(errors).toEqual([]);
       await close();
-    });
+    }, PAGE_TIMEOUT_MS);
   }
 
   it("span-study.html", async () => {
@@ -159,7 +163,7 @@ describe("every chart saves as the whole figure", () => {
     total["span-study.html"] = await checkEveryFigure(page, 2);
     expect(errors).toEqual([]);
     await close();
-  });
+  }, PAGE_TIMEOUT_MS);
 
   it("risk.html", async () => {
     const { page, errors, close } = await open(`${inject("baseUrl")}/risk.html`);
@@ -170,5 +174,5 @@ describe("every chart saves as the whole figure", () => {
     total["risk.html"] = await checkEveryFigure(page, 9);
     expect(errors).toEqual([]);
     await close();
-  });
+  }, PAGE_TIMEOUT_MS);
 });
