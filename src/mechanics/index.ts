@@ -21,6 +21,7 @@ export { timberRelativeSlenderness, timberBucklingFactor, GLULAM_BETA_C } from "
 export { glulamKMod, GLULAM_K_MOD, LOAD_DURATION_CLASSES, type LoadDurationClass, type ServiceClass } from "./timber-kmod";
 export { timberDesignStrengthPa, TIMBER_GAMMA_M } from "./timber-gamma-m";
 export { timberCompressionBendingUtilisation, type TimberCompressionBending } from "./timber-combined-compression";
+export { timberTensionBendingUtilisation } from "./timber-combined-tension";
 export { creepReducedModulusPa, GLULAM_K_DEF } from "./timber-creep";
 export { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "./timber-charring";
 

@@ -6,6 +6,7 @@ import { cableNet } from "./cable-net";
 import { geodesicDome } from "./geodesic-dome";
 import { trussRoof } from "./truss-roof";
 import { concreteShell } from "./concrete-shell";
+import { timberDome } from "./timber-dome";
 
 export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind } from "./types";
 export { assembleDesign, infeasibleDesign, check, isSubstructure, isDesignAnswer, SchemeError, type DesignParts } from "./kit";
@@ -20,4 +21,5 @@ export const SCHEMES: readonly SchemeModel<SchemeOptions>[] = [
   geodesicDome,
   trussRoof,
   concreteShell,
+  timberDome,
 ];

@@ -39,6 +39,10 @@ export const COST_ITEMS = [
   { id: "rebar", label: "Reinforcement, fixed", unit: "t" },
   { id: "formwork", label: "Formwork and falsework to curved soffit", unit: "m2" },
   { id: "prestressing", label: "Prestressing tendons, stressed and grouted", unit: "t" },
+  { id: "glulam-structure", label: "Glulam members, supplied, machined and erected", unit: "m3" },
+  { id: "timber-deck", label: "Timber board deck, supplied and fixed", unit: "m2" },
+  { id: "steel-connectors", label: "Steel connectors for timber (hubs, plates, dowels)", unit: "t" },
+  { id: "roofing-membrane", label: "Single-ply roofing membrane on a deck", unit: "m2" },
   { id: "anchor", label: "Ground anchors and dead-weight foundations (concrete)", unit: "m3" },
 ] as const satisfies readonly { id: string; label: string; unit: QuantityUnit }[];
 

@@ -6,6 +6,7 @@ import {
   TIMBER_GAMMA_M,
   timberDesignStrengthPa,
   timberCompressionBendingUtilisation,
+  timberTensionBendingUtilisation,
   creepReducedModulusPa,
   GLULAM_K_DEF,
   GLULAM_BETA_C,
@@ -71,4 +72,10 @@ describe("k_def and the creep-reduced stiffness (EN 1995-1-1 Table 3.2, §2.3.2.
     expectRelClose(creepReducedModulusPa(11.5e9, GLULAM_K_DEF[2]), 11.5e9 / 1.8, 1e-12));
   it("ψ2 = 0.3 (from memory: eq. 2.7 weights k_def by ψ2): 11.5/(1 + 0.24) = 9.274 GPa", () =>
     expectRelClose(creepReducedModulusPa(11.5e9, 0.8, 0.3), 11.5e9 / 1.24, 1e-12));
+});
+
+describe("combined tension and bending (EN 1995-1-1 §6.2.3 eqs 6.17/6.18)", () => {
+  // By hand: σt = 6, ft = 12, σm,y = 4, fm = 16 MPa: 6/12 + 4/16 = 0.75; with σm,z = 2: max(0.75 + 0.7·0.125, 0.5 + 0.7·0.25 + 0.125) = 0.8375.
+  it("σt/ft + σm/fm = 0.5 + 0.25 = 0.75", () => expectAbsClose(timberTensionBendingUtilisation(6e6, 12e6, 4e6, 16e6), 0.75, 1e-12));
+  it("with bending about both axes: 0.8375 (eq. 6.17 governs)", () => expectAbsClose(timberTensionBendingUtilisation(6e6, 12e6, 4e6, 16e6, 2e6), 0.8375, 1e-12));
 });

@@ -1,0 +1,281 @@
+import type { Brief } from "../../study/brief";
+import type { Catalogue, GlulamClass } from "../../catalogue/types";
+import type { TakeoffRow } from "../../takeoff/takeoff-row";
+import type { Check, MemberGroup, OptionSpec, SchemeModel } from "../types";
+import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
+import { capUsableRadiusM } from "../../mechanics/usable-floor";
+import { CapTooSmallError, geodesicCap, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
+import { glulamKMod, type LoadDurationClass, type ServiceClass } from "../../mechanics/timber-kmod";
+import { TIMBER_GAMMA_M } from "../../mechanics/timber-gamma-m";
+import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-creep";
+import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "../../mechanics/timber-charring";
+import { kPaFromKgPerM2 } from "../../mechanics/gravity";
+import { roofActions } from "../../loads/roof-actions";
+import { assembleDesign, check, infeasibleDesign } from "../assemble-design";
+import { iterateSelfWeight, ConvergenceError } from "../converge";
+import { checkSchemeOptions } from "../check-options";
+import { ulsFactors } from "../compression-common";
+import { memberBands } from "./geometry";
+import { GLULAM_SECTIONS } from "./sections";
+import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
+import { timberPlan, timberSection } from "./drawing";
+
+export type TimberDomeOptions = {
+  /** Target mean member length, m. */
+  memberLengthM: number;
+  strengthClass: string;
+  serviceClass: string;
+  snowDuration: string;
+  /** Knock-down on the classical buckling pressure, –. */
+  knockDown: number;
+  bands: number;
+  purlinSpacingM: number;
+  /** Steel connectors, kg per m³ of glulam. */
+  connectorKgPerM3: number;
+  /** Standard fire resistance asked of the timber, min (0 = none). */
+  fireMinutes: number;
+};
+
+const defaults: TimberDomeOptions = {
+  memberLengthM: 10, // Superior Dome (163 m): 781 members over ≈ 21,000 m² of plan → ≈ 10 m members (derived from the published count)
+  strengthClass: "GL28h",
+  serviceClass: "2", // covered heated buildings are SC1; SC2 is the safe side (common practice, no source)
+  snowDuration: "short-term", // EN 1995-1-1 Table 2.2 note: snow short- or medium-term by site (from memory)
+  knockDown: 0.3, // lattice shells reach 0.2–0.4 of p_cl with imperfections (from memory; cf. Kollár & Dulácska)
+  bands: 4,
+  purlinSpacingM: 2.4, // common practice, no source
+  connectorKgPerM3: 50, // steel hubs, plates and dowels ≈ 5–15 % of the timber mass (common practice, no source)
+  fireMinutes: 0,
+};
+
+/** Single-ply roofing membrane on the deck, kg/m²: 1.5 mm PVC reinforced with polyester at about 1.4 t/m³ (from memory). */
+const MEMBRANE_KG_PER_M2 = 2.1;
+/** Tension ring steel S355, f_y for t ≤ 40 mm (EN 1993-1-1 Table 3.1). */
+const RING_YIELD_PA = 355e6;
+/** Deck boards: C24 softwood (EN 338, from memory f_m,k 24 MPa) taken at the GL24h row, γ_M of solid timber. */
+const DECK_CLASS = "GL24h";
+
+const GLULAM_CHOICES = ["GL24h", "GL28h", "GL30h", "GL32h"].map((value) => ({ value, label: `${value} (EN 14080)` }));
+
+const options = [
+  { key: "memberLengthM", label: "Target member length", kind: "number", unit: "m", min: 4, max: 20, step: 0.5, source: "mesh size; ≈ 10 m in the 163 m Superior Dome (781 members), frequency v = round(1.2 R / L)" },
+  { key: "strengthClass", label: "Glulam strength class", kind: "select", unit: "", choices: GLULAM_CHOICES, source: "EN 14080:2013 Table 5 (data/glulam.csv)" },
+  {
+    key: "serviceClass",
+    label: "Service class",
+    kind: "select",
+    unit: "",
+    choices: [
+      { value: "1", label: "1: heated, enclosed" },
+      { value: "2", label: "2: covered, unheated" },
+      { value: "3", label: "3: exposed" },
+    ],
+    source: "EN 1995-1-1 §2.3.1.3; sets k_mod (Table 3.1) and k_def (Table 3.2)",
+  },
+  {
+    key: "snowDuration",
+    label: "Load-duration class of snow",
+    kind: "select",
+    unit: "",
+    choices: [
+      { value: "short-term", label: "Short-term" },
+      { value: "medium-term", label: "Medium-term" },
+    ],
+    source: "EN 1995-1-1 Table 2.2 and its national annexes (from memory)",
+  },
+  { key: "knockDown", label: "Buckling knock-down on p_cl", kind: "number", unit: "", min: 0.05, max: 1, step: 0.05, source: "imperfection sensitivity of lattice shells, from memory 0.2–0.4; timber joints are semi-rigid (the low end is prudent)" },
+  { key: "bands", label: "Member size bands, crown to edge", kind: "number", unit: "", min: 1, max: 12, step: 1, integer: true, source: "grouping of alike members" },
+  { key: "purlinSpacingM", label: "Purlin spacing", kind: "number", unit: "m", min: 0.6, max: 5, step: 0.1, source: "common practice 1.2–3 m, no source" },
+  { key: "connectorKgPerM3", label: "Steel connectors", kind: "number", unit: "kg per m³ of glulam", min: 0, max: 200, step: 5, source: "allowance for hubs, plates and dowels, common practice, no source" },
+  { key: "fireMinutes", label: "Fire resistance (charring added)", kind: "number", unit: "min", min: 0, max: 120, step: 15, integer: true, source: "EN 1995-1-2 §3.4 (β_n 0.7 mm/min) and §4.2.2 (d_ef = β_n t + 7 mm)" },
+] as const satisfies readonly OptionSpec[];
+
+function findGlulam(catalogue: Catalogue, strengthClass: string): GlulamClass {
+  const found = catalogue.glulam.find((g) => g.strengthClass === strengthClass);
+  if (!found) throw new RangeError(`invalid strengthClass: "${strengthClass}" (expected one of ${catalogue.glulam.map((g) => g.strengthClass).join(", ")})`);
+  return found;
+}
+
+/** Caches the few geodesic caps asked for again when only loads, factors or rates change. Read-only. */
+const capCache = new Map<string, GeodesicCap>();
+function cachedCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
+  const key = `${frequency}|${radiusM}|${capAngleRad}`;
+  let mesh = capCache.get(key);
+  if (!mesh) {
+    mesh = geodesicCap(frequency, radiusM, capAngleRad);
+    if (capCache.size >= 16) capCache.delete(capCache.keys().next().value as string);
+    capCache.set(key, mesh);
+  }
+  return mesh;
+}
+
+function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, mesh: GeodesicCap): TimberLatticeInputs {
+  const glulam = findGlulam(catalogue, opts.strengthClass);
+  const deck = findGlulam(catalogue, catalogue.glulam.some((g) => g.strengthClass === DECK_CLASS) ? DECK_CLASS : opts.strengthClass);
+  const serviceClass = Number(opts.serviceClass) as ServiceClass;
+  const fire = opts.fireMinutes > 0;
+  return {
+    brief,
+    actions: roofActions(brief),
+    radiusM: cap.radiusM,
+    capAngleRad: cap.edgeAngleRad,
+    baseRadiusM: cap.baseRadiusM,
+    surfaceM2: cap.surfaceM2,
+    bands: memberBands(mesh, opts.bands),
+    sections: GLULAM_SECTIONS,
+    glulam,
+    deckBendingPa: deck.bendingPa,
+    deckDensityKgPerM3: deck.densityMeanKgPerM3,
+    gammaM: TIMBER_GAMMA_M.glulam,
+    gammaMBoards: TIMBER_GAMMA_M.solidTimber,
+    kModPermanent: glulamKMod("permanent", serviceClass),
+    kModSnow: glulamKMod(opts.snowDuration as LoadDurationClass, serviceClass),
+    kModWind: glulamKMod("short-term", serviceClass),
+    creepModulusPa: creepReducedModulusPa(glulam.modulusMeanPa, GLULAM_K_DEF[serviceClass]),
+    knockDown: opts.knockDown,
+    purlinSpacingM: opts.purlinSpacingM,
+    charDepthM: fire ? effectiveCharDepthM(opts.fireMinutes) : 0,
+    deckCharDepthM: fire ? charringDepthM(opts.fireMinutes, CHARRING_RATE_M_PER_MIN.glulamSoftwood.oneDimensional) + ZERO_STRENGTH_LAYER_M : 0,
+    connectorKgPerM3: opts.connectorKgPerM3,
+    membraneKgPerM2: MEMBRANE_KG_PER_M2,
+    ringYieldPa: RING_YIELD_PA,
+    ulsFactors: (permanentKPa, variableKPa) => ulsFactors(brief, permanentKPa, variableKPa),
+  };
+}
+
+function timberWarnings(opts: TimberDomeOptions): string[] {
+  const warnings = [
+    "membrane forces from the plan-mean snow load; drifted snow and point loads bend a lattice and are not covered at this stage",
+    "the roofing is a membrane on the deck with no insulation layer (the metal deck of the steel schemes includes 150 mm of mineral wool)",
+    "the deck is priced and counted with the glulam factor as a proxy for softwood boards",
+    "the supports under the edge ring (walls or columns to the eaves) are not included",
+    "shear, lateral-torsional stability (the deck restrains the top edge) and the glulam depth factor k_h are not checked",
+  ];
+  if (opts.fireMinutes > 0) warnings.push(`fire: ${opts.fireMinutes} min of charring added to the ambient sections; the fire situation itself (EN 1995-1-2 §4.2.2, k_fi, γ_M,fi = 1) is not checked separately`);
+  return warnings;
+}
+
+function timberMembers(r: TimberLatticeResult, charDepthM: number): { members: MemberGroup[]; checks: Check[] } {
+  const members: MemberGroup[] = [];
+  const checks: Check[] = [];
+  const group = (element: string, count: number, lengthM: number, section: ReturnType<typeof withCharLayer>, utilisation: number, forceN: number, governing: string): MemberGroup => ({
+    element,
+    material: "glulam",
+    count,
+    lengthM,
+    section: withCharLayer(section, charDepthM).designation + (charDepthM > 0 ? ` (${section.designation} after charring)` : ""),
+    designForceN: forceN,
+    resistanceN: utilisation > 0 ? Math.abs(forceN) / utilisation : 0,
+    utilisation,
+    governing,
+  });
+  for (const b of r.bands) {
+    const name = `members, band ${b.band.index + 1} of ${r.bands.length}`;
+    members.push(group(`lattice ${name}`, b.band.count, b.band.meanLengthM, b.section, b.check.utilisation, b.check.demand.forceN, b.check.governing));
+    checks.push(check(`${name}: ${b.check.governing.split(", EN")[0]}`, "EN 1995-1-1 §6.2.3, §6.3.2", b.check.utilisation, 1, ""));
+    checks.push(check(`${name}: general buckling of the lattice`, "equivalent continuum 4√(DB)/R² × knock-down, E/(1 + k_def) (EN 1995-1-1 Table 3.2)", b.pressurePa, b.bucklingPa, "Pa"));
+  }
+  if (r.purlins) {
+    const p = r.purlins;
+    members.push(group("purlins", Math.round(p.totalLengthM / Math.max(...r.bands.map((b) => b.band.maxLengthM))), Math.max(...r.bands.map((b) => b.band.maxLengthM)), p.section, p.check.utilisation, 0, p.check.governing));
+    checks.push(check("purlins: bending", "EN 1995-1-1 eq. 6.11", p.check.utilisation, 1, ""));
+    checks.push(check("purlins: final deflection", "EN 1995-1-1 §7.2, Table 7.2 (l/250, from memory)", p.deflectionM, p.limitM, "m"));
+  }
+  if (r.ringTensionN > 0) checks.push(check("edge tension ring", "EN 1993-1-1 eq. 6.6", r.ringTensionN, r.ringAreaM2 * RING_YIELD_PA, "N"));
+  return { members, checks };
+}
+
+function timberTakeoff(r: TimberLatticeResult, surfaceM2: number, glulamDensity: number): TakeoffRow[] {
+  const timber = (element: string, volumeM3: number): TakeoffRow => ({ element, material: "glulam", costItem: "glulam-structure", quantity: volumeM3, unit: "m3", massKg: volumeM3 * glulamDensity });
+  const steel = (element: string, massKg: number, costItem: TakeoffRow["costItem"]): TakeoffRow => ({ element, material: "steel-plate", costItem, quantity: massKg / 1000, unit: "t", massKg });
+  return [
+    timber("glulam lattice members", r.latticeVolumeM3),
+    timber("glulam purlins", r.purlinVolumeM3),
+    { element: "timber deck", material: "glulam", costItem: "timber-deck", quantity: surfaceM2, unit: "m2", massKg: r.deckMassKg },
+    steel("steel connectors", r.connectorMassKg, "steel-connectors"),
+    steel("steel tension ring", r.ringMassKg, "steel-ring"),
+    { element: "roofing membrane", material: "roofing-membrane", costItem: "roofing-membrane", quantity: surfaceM2, unit: "m2", massKg: r.membraneMassKg },
+  ];
+}
+
+function timberSummary(r: TimberLatticeResult, mesh: GeodesicCap, frequency: number, cap: SphericalCap) {
+  const inner = strutLengths(mesh.edgeLengthsM, (e) => !mesh.edgeOnRing[e]);
+  const timberM3 = r.latticeVolumeM3 + r.purlinVolumeM3 + r.deckVolumeM3;
+  return [
+    { key: "frequency", label: "Geodesic frequency v", value: frequency, unit: "" },
+    { key: "members", label: "Lattice members", value: inner.count, unit: "nr" },
+    { key: "memberMeanM", label: "Member length, mean", value: inner.meanM, unit: "m" },
+    { key: "sphereRadiusM", label: "Sphere radius", value: cap.radiusM, unit: "m" },
+    { key: "deckThicknessMm", label: "Deck thickness", value: r.deckThicknessM * 1000, unit: "mm" },
+    { key: "glulamM3", label: "Glulam, lattice and purlins", value: r.latticeVolumeM3 + r.purlinVolumeM3, unit: "m³" },
+    { key: "timberM3PerM2", label: "Timber per m² of plan (with deck)", value: timberM3 / cap.planAreaM2, unit: "m³/m²" },
+    { key: "ringTensionKN", label: "Edge ring tension", value: r.ringTensionN / 1000, unit: "kN" },
+  ];
+}
+
+/** The geodesic mesh at the frequency whose mean member meets the target length, or the reason there is none. */
+function latticeMesh(cap: SphericalCap, memberLengthM: number): { frequency: number; mesh: GeodesicCap } | string {
+  const frequency = geodesicFrequencyFor(cap.radiusM, memberLengthM);
+  if (frequency > 200) return `the mesh would need frequency ${frequency} (over 200): lengthen the members`;
+  try {
+    return { frequency, mesh: cachedCap(frequency, cap.radiusM, cap.edgeAngleRad) };
+  } catch (e) {
+    if (e instanceof CapTooSmallError) return "the mesh is too coarse for so small a cap: shorten the members";
+    throw e;
+  }
+}
+
+/**
+ * Designs a glulam lattice dome: a class I geodesic (three-way) cap at the member length asked for,
+ * membrane forces resolved into the grid, members to EN 1995-1-1 with the bending of the panel load,
+ * general buckling with the creep-reduced stiffness, purlins and deck, optional charring, steel
+ * connectors as an allowance and a steel tension ring; self-weight iterated to convergence.
+ */
+function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue) {
+  checkSchemeOptions(options, opts);
+  const cap = sphericalCap(brief.spanM, brief.riseM);
+  const warnings = timberWarnings(opts);
+  const latticed = latticeMesh(cap, opts.memberLengthM);
+  if (typeof latticed === "string") return infeasibleDesign("timber-dome", brief, latticed, warnings, timberSection(brief, 0));
+  const { frequency, mesh } = latticed;
+  const inputs = latticeInputs(brief, opts, catalogue, cap, mesh);
+  let converged;
+  try {
+    converged = iterateSelfWeight<TimberLatticeResult>((g) => {
+      const r = sizeTimberLattice(inputs, g);
+      return { value: r, selfWeightKPa: r.failure ? g : timberSelfWeightKPa(r, cap.surfaceM2) };
+    }, kPaFromKgPerM2(60));
+  } catch (e) {
+    if (e instanceof ConvergenceError) return infeasibleDesign("timber-dome", brief, e.message, warnings, timberSection(brief, 0));
+    throw e;
+  }
+  const r = converged.value;
+  const depthM = Math.max(0, ...r.bands.map((b) => b.section.depthM));
+  if (r.failure) return infeasibleDesign("timber-dome", brief, r.failure, warnings, timberSection(brief, depthM));
+  const { members, checks } = timberMembers(r, inputs.charDepthM);
+  const usableRadius = capUsableRadiusM(cap.radiusM, brief.riseM, cap.baseRadiusM, brief.eavesHeightM, depthM, brief.minClearHeightM);
+  return assembleDesign(timberDome, brief, {
+    summary: timberSummary(r, mesh, frequency, cap),
+    members,
+    takeoff: timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3),
+    checks,
+    warnings,
+    iterations: converged.iterations,
+    usableFloorM2: Math.PI * usableRadius * usableRadius,
+    roofSurfaceM2: cap.surfaceM2,
+    enclosedVolumeM3: cap.planAreaM2 * brief.eavesHeightM + cap.volumeM3,
+    drawing: { section: timberSection(brief, depthM), plan: timberPlan(mesh) },
+  });
+}
+
+export const timberDome: SchemeModel<TimberDomeOptions> = {
+  id: "timber-dome",
+  label: "Glulam timber dome",
+  description:
+    "A single-layer lattice of glued-laminated timber members on a three-way geodesic grid, with purlins, a board deck and a roofing membrane, cut to a spherical cap on a steel tension ring. The triangulated grid is chosen over ribs and rings because it carries unbalanced load by in-plane action with straight members of nearly one length, as in the two largest built timber domes (Tacoma, 161.5 m; Superior Dome, 163.4 m). Members are designed to EN 1995-1-1 for axial force with the bending of the panel load, the lattice for general buckling with creep-reduced stiffness; fire resistance adds charring to each member.",
+  // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (Tacoma Dome, 1983) and 163.4 m (Superior Dome, 1991), published figures.
+  validSpanM: { min: 40, max: 165 },
+  options,
+  defaults,
+  design,
+};

@@ -1,0 +1,213 @@
+import type { Brief } from "../../study/brief";
+import type { GlulamClass } from "../../catalogue/types";
+import type { RoofActions } from "../../loads/roof-actions";
+import { sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";
+import { threeWayGridBarForces, threeWayGridStiffness } from "../../mechanics/three-way-grid";
+import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
+import { simplySupportedUdl } from "../../mechanics/beam";
+import { kPaFromKgPerM2 } from "../../mechanics/gravity";
+import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
+import type { MemberBand } from "./geometry";
+import { pickGlulam, type MemberCheck, type MemberDemand } from "./member-design";
+import { rectangularSection, type GlulamSection } from "./sections";
+import { deckThicknessM, sizePurlins, type PurlinResult } from "./secondary";
+
+/** Share of a triangular panel's load that one lattice member carries per metre: two panels × (√3/4 L²)/3 over L = (√3/6)L (tributary area). */
+const TRIBUTARY_WIDTH_PER_LENGTH = Math.sqrt(3) / 6;
+
+/** A ULS case: load per m² of roof surface and of plan, Pa, and the k_mod of its shortest action. */
+export interface LoadCase {
+  label: string;
+  surfacePa: number;
+  planPa: number;
+  kMod: number;
+}
+
+export interface TimberLatticeInputs {
+  brief: Brief;
+  actions: RoofActions;
+  radiusM: number;
+  capAngleRad: number;
+  baseRadiusM: number;
+  surfaceM2: number;
+  bands: MemberBand[];
+  sections: readonly GlulamSection[];
+  glulam: GlulamClass;
+  /** Deck boards' bending strength f_m,k, Pa. */
+  deckBendingPa: number;
+  gammaM: number;
+  gammaMBoards: number;
+  kModPermanent: number;
+  kModSnow: number;
+  kModWind: number;
+  /** E_0,mean/(1 + k_def), Pa. */
+  creepModulusPa: number;
+  knockDown: number;
+  purlinSpacingM: number;
+  /** Effective charring depth added to each exposed face of lattice members and purlins, m (0 = no fire resistance asked). */
+  charDepthM: number;
+  /** Charring depth added to the deck, exposed on its underside only, m. */
+  deckCharDepthM: number;
+  /** Density of the deck boards, kg/m³. */
+  deckDensityKgPerM3: number;
+  /** Steel connectors, kg per m³ of lattice and purlin glulam. */
+  connectorKgPerM3: number;
+  membraneKgPerM2: number;
+  ringYieldPa: number;
+  /** ULS factors on permanent and variable load for an assumed self-weight (EN 1990, the governing expression). */
+  ulsFactors: (permanentKPa: number, variableKPa: number) => { permanent: number; variable: number; expression: string };
+}
+
+export interface BandResult {
+  band: MemberBand;
+  section: GlulamSection;
+  check: MemberCheck;
+  compressionN: number;
+  tensionN: number;
+  /** ULS pressure on the lattice and its knocked-down general-buckling pressure, Pa. */
+  pressurePa: number;
+  bucklingPa: number;
+}
+
+export interface TimberLatticeResult {
+  bands: BandResult[];
+  /** Why the lattice cannot be built ("" when it can). */
+  failure: string;
+  purlins: (PurlinResult & { totalLengthM: number }) | null;
+  deckThicknessM: number;
+  latticeVolumeM3: number;
+  purlinVolumeM3: number;
+  deckVolumeM3: number;
+  glulamMassKg: number;
+  deckMassKg: number;
+  connectorMassKg: number;
+  membraneMassKg: number;
+  ringTensionN: number;
+  ringAreaM2: number;
+  ringMassKg: number;
+  ulsExpression: string;
+}
+
+/** ULS cases for an assumed self-weight g (kPa of surface): permanent alone, permanent + leading variable, and wind uplift. */
+export function loadCases(input: TimberLatticeInputs, selfWeightKPa: number): { gravity: LoadCase[]; uplift: LoadCase; expression: string } {
+  const { brief, actions } = input;
+  const f = input.ulsFactors(selfWeightKPa + actions.servicesKPa, actions.leadingVariableKPa);
+  const gammaG = brief.factors.gammaGSup;
+  return {
+    gravity: [
+      { label: "permanent", surfacePa: gammaG * selfWeightKPa * 1000, planPa: gammaG * actions.servicesKPa * 1000, kMod: input.kModPermanent },
+      { label: `permanent + ${actions.leadingVariableKPa > actions.imposedKPa ? "snow" : "imposed"}`, surfacePa: f.permanent * selfWeightKPa * 1000, planPa: (f.permanent * actions.servicesKPa + f.variable * actions.leadingVariableKPa) * 1000, kMod: input.kModSnow },
+    ],
+    // Net uplift with permanent load favourable (EN 1990 Table A1.2(B)), taken as a surface load.
+    uplift: { label: "wind uplift", surfacePa: (brief.factors.gammaGInf * (selfWeightKPa + actions.servicesKPa) - brief.factors.gammaQ * actions.upliftKPa) * 1000, planPa: 0, kMod: input.kModWind },
+    expression: f.expression,
+  };
+}
+
+/** Axial demands (membrane forces resolved into the three-way grid) and member bending from the panel load, for one band and one case. */
+function bandDemands(input: TimberLatticeInputs, band: MemberBand, c: LoadCase): MemberDemand[] {
+  let compressionN = 0;
+  let tensionN = 0;
+  for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, input.capAngleRad)]) {
+    const n = c.planPa === 0 ? sphericalMembraneSurfaceLoad(c.surfacePa, input.radiusM, phi) : sphericalMembraneForces(c.surfacePa, c.planPa, input.radiusM, phi);
+    const bars = threeWayGridBarForces(n.meridionalNPerM, n.hoopNPerM, band.maxLengthM);
+    compressionN = Math.min(compressionN, bars.compressionN);
+    tensionN = Math.max(tensionN, bars.tensionN);
+  }
+  const lineLoad = Math.abs(c.surfacePa + c.planPa) * TRIBUTARY_WIDTH_PER_LENGTH * band.maxLengthM;
+  const momentNm = simplySupportedUdl(lineLoad, band.maxLengthM, 1).momentNm;
+  return [
+    { forceN: compressionN, momentNm, kMod: c.kMod, label: c.label },
+    { forceN: tensionN, momentNm, kMod: c.kMod, label: c.label },
+  ];
+}
+
+/** The section with its charred layer: three faces exposed (the deck covers the top), EN 1995-1-2 §4.2.2. */
+export function withCharLayer(section: GlulamSection, charDepthM: number): GlulamSection {
+  return charDepthM > 0 ? rectangularSection(section.widthM + 2 * charDepthM, section.depthM + charDepthM) : section;
+}
+
+/** Sizes the lattice members band by band for every case and for general buckling. */
+function sizeBands(input: TimberLatticeInputs, cases: LoadCase[], pressurePa: number): { bands: BandResult[]; failure: string } {
+  const bands: BandResult[] = [];
+  for (const band of input.bands) {
+    const demands = cases.flatMap((c) => bandDemands(input, band, c));
+    const bucklingOf = (s: GlulamSection) => {
+      const grid = threeWayGridStiffness(input.creepModulusPa * s.areaM2, input.creepModulusPa * s.secondMomentYM4, band.meanLengthM);
+      return input.knockDown * continuumShellPressurePa(grid.bendingNm, grid.membraneNPerM, input.radiusM);
+    };
+    const lengths = { strongM: band.maxLengthM, weakM: Math.min(band.maxLengthM, input.purlinSpacingM) };
+    const pick = pickGlulam(input.sections, input.glulam, lengths, demands, input.gammaM, (s) => bucklingOf(s) >= pressurePa);
+    if (pick === null) {
+      const memberOnly = pickGlulam(input.sections, input.glulam, lengths, demands, input.gammaM);
+      const where = `band ${band.index + 1} (members up to ${band.maxLengthM.toFixed(1)} m)`;
+      return {
+        bands,
+        failure: memberOnly === null ? `no glulam section up to 300 × 2,400 mm carries the members of ${where}: shorten the members or choose a stronger class` : `no glulam section up to 300 × 2,400 mm gives the lattice enough general-buckling resistance at ${where} (${(pressurePa / 1000).toFixed(2)} kPa needed): raise the rise or shorten the members`,
+      };
+    }
+    const axial = demands.map((d) => d.forceN);
+    bands.push({ band, section: pick.section, check: pick.check, compressionN: Math.min(0, ...axial), tensionN: Math.max(0, ...axial), pressurePa, bucklingPa: bucklingOf(pick.section) });
+  }
+  return { bands, failure: "" };
+}
+
+/** The steel tension ring for the edge thrust: T = |N_φ| cos φ0 · a (Timoshenko & Woinowsky-Krieger ch. 14 §129), A = T/f_y (EN 1993-1-1 eq. 6.6, γ_M0 = 1.0) rounded up to a 25 cm² step of plate. */
+function tensionRing(input: TimberLatticeInputs, c: LoadCase): { tensionN: number; areaM2: number; massKg: number } {
+  const edge = sphericalMembraneForces(c.surfacePa, c.planPa, input.radiusM, Math.min(input.capAngleRad, Math.PI / 2 - 1e-9));
+  const tensionN = Math.abs(edge.meridionalNPerM) * Math.cos(input.capAngleRad) * input.baseRadiusM;
+  const areaM2 = Math.max(25e-4, Math.ceil(tensionN / input.ringYieldPa / 25e-4) * 25e-4);
+  return { tensionN, areaM2, massKg: areaM2 * 2 * Math.PI * input.baseRadiusM * STEEL_DENSITY_KG_PER_M3 };
+}
+
+/**
+ * Sizes the timber lattice dome for an assumed self-weight g (kPa of roof surface): the deck and the
+ * purlins for the panel load, the lattice members band by band for membrane forces (Timoshenko ch. 14,
+ * resolved into the three-way grid) with the bending of the panel load they carry (EN 1995-1-1
+ * eqs 6.17, 6.23/6.24) and for general buckling k·4√(DB)/R² with the creep-reduced stiffness, the
+ * char layer of the fire option, connectors as an allowance, and the steel tension ring.
+ */
+export function sizeTimberLattice(input: TimberLatticeInputs, selfWeightKPa: number): TimberLatticeResult {
+  const { gravity, uplift, expression } = loadCases(input, selfWeightKPa);
+  const governing = gravity[gravity.length - 1]!;
+  const pressurePa = Math.max(...gravity.map((c) => c.surfacePa + c.planPa));
+  const panelCases = gravity.map((c) => ({ pressurePa: c.surfacePa + c.planPa, kMod: c.kMod, label: c.label }));
+  const serviceLoadPa = (selfWeightKPa + input.actions.servicesKPa + input.actions.leadingVariableKPa) * 1000;
+  const purlinSpanM = Math.max(...input.bands.map((b) => b.maxLengthM));
+  const deckT = deckThicknessM({ bendingPa: input.deckBendingPa }, panelCases, serviceLoadPa, input.purlinSpacingM, input.creepModulusPa, input.gammaMBoards);
+  const purlins = sizePurlins(input.sections, input.glulam, panelCases, serviceLoadPa, purlinSpanM, input.purlinSpacingM, input.creepModulusPa, input.gammaM);
+  const lattice = sizeBands(input, [...gravity, uplift], pressurePa);
+  const failure =
+    deckT === null ? `the deck boards would need over 300 mm to span ${input.purlinSpacingM} m between purlins: reduce the purlin spacing`
+    : purlins === null ? `no glulam section carries the purlins over ${purlinSpanM.toFixed(1)} m: shorten the members or reduce the purlin spacing`
+    : lattice.failure;
+  const purlinLengthM = input.surfaceM2 / input.purlinSpacingM;
+  const latticeVolumeM3 = lattice.bands.reduce((sum, b) => sum + b.band.totalLengthM * withCharLayer(b.section, input.charDepthM).areaM2, 0);
+  const purlinVolumeM3 = purlins ? purlinLengthM * withCharLayer(purlins.section, input.charDepthM).areaM2 : 0;
+  const deckVolumeM3 = input.surfaceM2 * ((deckT ?? 0) + input.deckCharDepthM);
+  const glulamMassKg = (latticeVolumeM3 + purlinVolumeM3) * input.glulam.densityMeanKgPerM3;
+  const deckMassKg = deckVolumeM3 * input.deckDensityKgPerM3;
+  const ring = tensionRing(input, governing);
+  return {
+    bands: lattice.bands,
+    failure,
+    purlins: purlins && { ...purlins, totalLengthM: purlinLengthM },
+    deckThicknessM: deckT ?? 0,
+    latticeVolumeM3,
+    purlinVolumeM3,
+    deckVolumeM3,
+    glulamMassKg,
+    deckMassKg,
+    connectorMassKg: input.connectorKgPerM3 * (latticeVolumeM3 + purlinVolumeM3),
+    membraneMassKg: input.membraneKgPerM2 * input.surfaceM2,
+    ringTensionN: ring.tensionN,
+    ringAreaM2: ring.areaM2,
+    ringMassKg: ring.massKg,
+    ulsExpression: expression,
+  };
+}
+
+/** Self-weight of everything the lattice carries, per m² of roof surface, kPa (the ring sits on the supports). */
+export function timberSelfWeightKPa(r: TimberLatticeResult, surfaceM2: number): number {
+  return kPaFromKgPerM2((r.glulamMassKg + r.deckMassKg + r.connectorMassKg + r.membraneMassKg) / surfaceM2);
+}
