@@ -28,7 +28,6 @@ export const MATERIALS = [
   { id: "glazing", label: "Glazing (laminated glass)", kind: "cladding" },
   { id: "insulated-metal-deck", label: "Insulated metal roof deck", kind: "cladding" },
   { id: "glulam", label: "Glued laminated timber", kind: "timber" },
-  { id: "roofing-membrane", label: "Single-ply roofing membrane (PVC, polyester-reinforced)", kind: "cladding" },
 ] as const satisfies readonly MaterialInfo[];
 
 export type MaterialId = (typeof MATERIALS)[number]["id"];

@@ -65,6 +65,7 @@ export {
 export { zoellyCoefficient, zoellyPressurePa, zoellyThicknessM, continuumShellPressurePa } from "./shell-buckling";
 export { threeWayGridStiffness, doubleLayerGridStiffness, threeWayGridBarForces, type GridStiffness, type GridBarForces } from "./three-way-grid";
 export { geodesicCap, strutLengths, geodesicFrequencyFor, MEAN_CHORD_FACTOR, type GeodesicCap, type StrutLengths, type Vec3 } from "./geodesic";
+export { cachedGeodesicCap } from "./geodesic-cache";
 export { simplySupportedUdl, type BeamResponse } from "./beam";
 
 // units

@@ -4,7 +4,8 @@ import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, MemberGroup, OptionSpec, SchemeModel } from "../types";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { capUsableRadiusM } from "../../mechanics/usable-floor";
-import { CapTooSmallError, geodesicCap, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
+import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
+import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
 import { glulamKMod, type LoadDurationClass, type ServiceClass } from "../../mechanics/timber-kmod";
 import { TIMBER_GAMMA_M } from "../../mechanics/timber-gamma-m";
 import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-creep";
@@ -48,7 +49,7 @@ const defaults: TimberDomeOptions = {
   fireMinutes: 0,
 };
 
-/** Single-ply roofing membrane on the deck, kg/m²: 1.5 mm PVC reinforced with polyester at about 1.4 t/m³ (from memory). */
+/** Single-ply roofing membrane on the deck, kg/m²: 1.5 mm PVC reinforced with polyester at about 1.4 t/m³ (from memory); its carbon is that of the PVC-coated polyester fabric row (the same two materials). */
 const MEMBRANE_KG_PER_M2 = 2.1;
 /** Tension ring steel S355, f_y for t ≤ 40 mm (EN 1993-1-1 Table 3.1). */
 const RING_YIELD_PA = 355e6;
@@ -94,19 +95,6 @@ function findGlulam(catalogue: Catalogue, strengthClass: string): GlulamClass {
   const found = catalogue.glulam.find((g) => g.strengthClass === strengthClass);
   if (!found) throw new RangeError(`invalid strengthClass: "${strengthClass}" (expected one of ${catalogue.glulam.map((g) => g.strengthClass).join(", ")})`);
   return found;
-}
-
-/** Caches the few geodesic caps asked for again when only loads, factors or rates change. Read-only. */
-const capCache = new Map<string, GeodesicCap>();
-function cachedCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
-  const key = `${frequency}|${radiusM}|${capAngleRad}`;
-  let mesh = capCache.get(key);
-  if (!mesh) {
-    mesh = geodesicCap(frequency, radiusM, capAngleRad);
-    if (capCache.size >= 16) capCache.delete(capCache.keys().next().value as string);
-    capCache.set(key, mesh);
-  }
-  return mesh;
 }
 
 function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, mesh: GeodesicCap): TimberLatticeInputs {
@@ -194,7 +182,7 @@ function timberTakeoff(r: TimberLatticeResult, surfaceM2: number, glulamDensity:
     { element: "timber deck", material: "glulam", costItem: "timber-deck", quantity: surfaceM2, unit: "m2", massKg: r.deckMassKg },
     steel("steel connectors", r.connectorMassKg, "steel-connectors"),
     steel("steel tension ring", r.ringMassKg, "steel-ring"),
-    { element: "roofing membrane", material: "roofing-membrane", costItem: "roofing-membrane", quantity: surfaceM2, unit: "m2", massKg: r.membraneMassKg },
+    { element: "roofing membrane", material: "fabric-pvc-polyester", costItem: "roofing-membrane", quantity: surfaceM2, unit: "m2", massKg: r.membraneMassKg },
   ];
 }
 
@@ -218,7 +206,7 @@ function latticeMesh(cap: SphericalCap, memberLengthM: number): { frequency: num
   const frequency = geodesicFrequencyFor(cap.radiusM, memberLengthM);
   if (frequency > 200) return `the mesh would need frequency ${frequency} (over 200): lengthen the members`;
   try {
-    return { frequency, mesh: cachedCap(frequency, cap.radiusM, cap.edgeAngleRad) };
+    return { frequency, mesh: cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad) };
   } catch (e) {
     if (e instanceof CapTooSmallError) return "the mesh is too coarse for so small a cap: shorten the members";
     throw e;

@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import { timberDome } from "../../../src/schemes/timber-dome";
 import { GLULAM_SECTIONS } from "../../../src/schemes/timber-dome/sections";
 import { memberBands } from "../../../src/schemes/timber-dome/geometry";
-import { geodesicCap, sphericalCap, effectiveCharDepthM } from "../../../src/mechanics";
+import { geodesicCap, cachedGeodesicCap, sphericalCap, effectiveCharDepthM } from "../../../src/mechanics";
 import { DEFAULT_BRIEF } from "../../../src/study/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
@@ -63,6 +63,11 @@ describe("timberDome.design", () => {
 });
 
 describe("timber dome parts", () => {
+  it("cachedGeodesicCap gives the same cap object for the same arguments, and the cap geodesicCap makes", () => {
+    const a = cachedGeodesicCap(6, 50, 0.6);
+    expect(cachedGeodesicCap(6, 50, 0.6)).toBe(a);
+    expect(a.edges.length).toBe(geodesicCap(6, 50, 0.6).edges.length);
+  });
   it("glulam sections are sorted by area, depth 2–8 times the width", () => {
     for (let i = 1; i < GLULAM_SECTIONS.length; i++) expect(GLULAM_SECTIONS[i]!.areaM2).toBeGreaterThanOrEqual(GLULAM_SECTIONS[i - 1]!.areaM2);
     for (const s of GLULAM_SECTIONS) expect(s.depthM / s.widthM).toBeGreaterThanOrEqual(2 - 1e-9);
