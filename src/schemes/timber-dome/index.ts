@@ -12,10 +12,8 @@ import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-cree
 import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "../../mechanics/timber-charring";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { roofActions } from "../../loads/roof-actions";
-import { assembleDesign, check, infeasibleDesign } from "../assemble-design";
-import { iterateSelfWeight, ConvergenceError } from "../converge";
-import { checkSchemeOptions } from "../check-options";
-import { ulsFactors } from "../compression-common";
+import { assembleDesign, check, infeasibleDesign, iterateSelfWeight, ConvergenceError, checkSchemeOptions } from "../kit";
+import { ulsFactors } from "../../loads/uls-factors";
 import { memberBands } from "./geometry";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
@@ -259,6 +257,7 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue) {
 export const timberDome: SchemeModel<TimberDomeOptions> = {
   id: "timber-dome",
   label: "Glulam timber dome",
+  colour: "#D55E00",
   description:
     "A single-layer lattice of glued-laminated timber members on a three-way geodesic grid, with purlins, a board deck and a roofing membrane, cut to a spherical cap on a steel tension ring. The triangulated grid is chosen over ribs and rings because it carries unbalanced load by in-plane action with straight members of nearly one length, as in the two largest built timber domes (Tacoma, 161.5 m; Superior Dome, 163.4 m). Members are designed to EN 1995-1-1 for axial force with the bending of the panel load, the lattice for general buckling with creep-reduced stiffness; fire resistance adds charring to each member.",
   // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (Tacoma Dome, 1983) and 163.4 m (Superior Dome, 1991), published figures.
