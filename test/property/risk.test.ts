@@ -76,7 +76,7 @@ describe(`runRisk invariants (schemes registered: ${SCHEMES.map((s) => s.id).joi
         const others = pointInputs(base).filter((i) => i.id !== chosen.id);
         // Factors on the study's value: the mode is 1.
         const factor = Math.min(k, 1 / (1 - chosen.low)); // stay ≥ 0
-        const wider = { ...chosen, low: 1 - factor * (1 - chosen.low), high: 1 + factor * (chosen.high - 1) };
+        const wider = { ...chosen, low: Math.max(0, 1 - factor * (1 - chosen.low)), high: 1 + factor * (chosen.high - 1) };
         const narrow = runRisk(withInputs(base, [...others, chosen]), catalogue, { samples: 40, seed, ...small });
         const wide = runRisk(withInputs(base, [...others, wider]), catalogue, { samples: 40, seed, ...small });
         narrow.schemes.forEach((s, i) => {
