@@ -23,7 +23,7 @@ import {
   type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
-import { assessCost, rebaseRateRows, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
+import { assessCost, rebaseRateRows, RebaseRangeError, MAX_RATE, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
 import { costChartOptions, chartCaption, type SchemeCost } from "../src/charts";
 
 const { store, main } = startPage({
@@ -156,7 +156,17 @@ staticCell(
         result.textContent = `new price base: ${checked.issues[0]?.message ?? "invalid"}`;
         return;
       }
-      const rebased = rebaseRateRows(rates.peek(), from.peek(), to.peek());
+      let rebased: RateRow[];
+      try {
+        rebased = rebaseRateRows(rates.peek(), from.peek(), to.peek());
+      } catch (error) {
+        result.className = "control-message";
+        result.setAttribute("role", "alert");
+        const why = error instanceof RebaseRangeError ? `× ${fmt.two(error.ratio)} would put ${error.item}'s high rate at ${fmt.int(error.rebased)} per unit, above the largest rate allowed (${fmt.int(MAX_RATE)}); the ratio may be at most ${fmt.two(error.maxRatio)}` : error instanceof Error ? error.message : String(error);
+        result.textContent = `Not rebased; nothing changed: ${why}. Check "Index at the rates' price base" and "Index at the new date".`;
+        return;
+      }
+      result.removeAttribute("role");
       let next = setIn(store.study.value, ["cost", "rates"], rebased);
       next = setIn(next, [...path, "priceBase"], checked.output);
       store.study.value = next;

@@ -1,11 +1,11 @@
 // `npm run evaluate -- FILE [options]`: the whole pipeline on a study file, from the command line.
 import { readFileSync } from "node:fs";
 import { pathToFileURL } from "node:url";
-import { csvFormat } from "d3";
 import { studyFromJson, describeProblems, BRIEF_LIMITS, type Study } from "./study";
 import { SCHEMES } from "./schemes";
 import type { SchemeId } from "./schemes/types";
 import { defaultCatalogue } from "./catalogue/default-catalogue";
+import { formatCsv, parseDecimal, shown } from "./catalogue/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
 import { evaluateStudy, headline, type Headline } from "./pipeline";
@@ -45,14 +45,17 @@ interface Parsed {
 }
 
 function wholeNumber(text: string, what: string, min: number, max: number, unit: string): number {
-  const value = Number(text);
-  if (text.trim() === "" || !Number.isInteger(value) || value < min || value > max) throw new UsageError(`invalid ${what}: ${text} (expected a whole number${unit ? ` of ${unit}` : ""} from ${min} to ${max})`);
+  const value = parseDecimal(text);
+  if (value === null || !Number.isInteger(value) || value < min || value > max) throw new UsageError(`invalid ${what}: ${shown(text)} (expected a whole number${unit ? ` of ${unit}` : ""} from ${min} to ${max})`);
   return value;
 }
 
-function spanIn(value: number, what: string): number {
+/** A span typed on the command line; the message echoes what was typed. */
+function spanIn(text: string, what: string): number {
   const { min, max } = BRIEF_LIMITS.spanM;
-  if (!(value >= min && value <= max)) throw new UsageError(`invalid ${what}: ${value} m (expected a span from ${min} to ${max} m)`);
+  const value = parseDecimal(text);
+  if (value === null) throw new UsageError(`invalid ${what}: ${shown(text)} (expected a span from ${min} to ${max} m, as a decimal number)`);
+  if (!(value >= min && value <= max)) throw new UsageError(`invalid ${what}: ${shown(text)} m (expected a span from ${min} to ${max} m)`);
   return value;
 }
 
@@ -67,14 +70,15 @@ function parseArgs(args: readonly string[]): Parsed | "help" {
     };
     if (arg === "--help" || arg === "-h") return "help";
     else if (arg === "--json") parsed.json = true;
-    else if (arg === "--span") parsed.spanM = spanIn(Number(next()), "--span");
+    else if (arg === "--span") parsed.spanM = spanIn(next(), "--span");
     else if (arg === "--sweep") {
       const text = next();
-      const parts = text.split(":").map(Number);
-      if (parts.length !== 3 || parts.some((p) => !Number.isFinite(p))) throw new UsageError(`invalid --sweep: ${text} (expected FROM:TO:STEP in m, e.g. 40:400:10)`);
+      const texts = text.split(":");
+      const parts = texts.map(parseDecimal);
+      if (parts.length !== 3 || parts.some((p) => p === null)) throw new UsageError(`invalid --sweep: ${shown(text)} (expected FROM:TO:STEP in m as decimal numbers, e.g. 40:400:10)`);
       const [from, to, step] = parts as [number, number, number];
-      spanIn(from, "--sweep start");
-      spanIn(to, "--sweep end");
+      spanIn(texts[0] ?? "", "--sweep start");
+      spanIn(texts[1] ?? "", "--sweep end");
       if (!(step > 0) || to < from) throw new UsageError(`invalid --sweep: ${text} (expected FROM ≤ TO and STEP > 0)`);
       if ((to - from) / step > 1000) throw new UsageError(`invalid --sweep: ${text} (expected at most 1000 spans)`);
       parsed.sweep = { from, to, step };
@@ -98,9 +102,10 @@ function parseArgs(args: readonly string[]): Parsed | "help" {
   return parsed as Parsed;
 }
 
+/** A file's text; a leading byte-order mark is dropped (the browser opens such files too). */
 function read(path: string, what: string, readText: (p: string) => string): string {
   try {
-    return readText(path);
+    return readText(path).replace(/^\uFEFF/, "");
   } catch (error) {
     const code = (error as { code?: string }).code;
     throw new UsageError(`cannot read ${what} ${path}${code === "ENOENT" ? ": no such file" : code ? `: ${code}` : ""}`);
@@ -223,7 +228,7 @@ export function runCli(args: readonly string[], readText: (path: string) => stri
           rows.push({ ...h, span_m: evaluation.brief.spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air) });
         }
       }
-      return { code: 0, stdout: `${csvFormat(rows, [...SWEEP_COLUMNS])}\n`, stderr: "" };
+      return { code: 0, stdout: `${formatCsv(rows, SWEEP_COLUMNS)}\n`, stderr: "" };
     }
     const evaluation = evaluateStudy(study, catalogue, { ...(parsed.spanM !== undefined ? { spanM: parsed.spanM } : {}), ...(schemeIds ? { schemeIds } : {}) });
     const headlines = evaluation.results.map(headline);

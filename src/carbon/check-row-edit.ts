@@ -1,4 +1,5 @@
 import * as v from "valibot";
+import { parseDecimal, notDecimal } from "../catalogue/csv-table";
 
 /** The result of checking one edited cell: the updated row, or a message saying what is allowed. */
 export type RowEditResult<R> = { ok: true; row: R } | { ok: false; message: string };
@@ -22,8 +23,8 @@ export function checkRowEdit<R extends Record<string, unknown>>(
   if (kind === "number") {
     const trimmed = raw.trim();
     if (trimmed === "") return { ok: false, message: "empty (a value is required)" };
-    const n = Number(trimmed);
-    if (!Number.isFinite(n)) return { ok: false, message: `"${trimmed}" is not a number` };
+    const n = parseDecimal(trimmed);
+    if (n === null) return { ok: false, message: notDecimal(trimmed) };
     value = n;
   }
   const candidate = { ...row, [field]: value };

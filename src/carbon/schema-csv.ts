@@ -1,6 +1,5 @@
 import * as v from "valibot";
-import { csvFormat } from "d3";
-import { CsvError, csvObjects, type CsvProblem } from "../catalogue/csv-table";
+import { CsvError, csvObjects, formatCsv, parseDecimal, readCsvText, shown, type CsvProblem } from "../catalogue/csv-table";
 
 /**
  * Reading and writing a CSV table whose rows are checked by a valibot schema, so the ranges a
@@ -13,11 +12,10 @@ export type CsvColumn = { column: string; field: string; kind: "number" | "text"
 
 function cellValue(raw: string, kind: CsvColumn["kind"]): unknown {
   const trimmed = raw.trim();
-  if (kind === "text") return trimmed;
+  if (kind === "text") return readCsvText(trimmed);
   if (trimmed === "") return undefined;
-  const value = Number(trimmed);
-  // Keep the raw text when it is not a number so the message can show what was there.
-  return Number.isFinite(value) ? value : trimmed;
+  // Keep the raw text (shortened) when it is not a decimal number so the message can show what was there.
+  return parseDecimal(trimmed) ?? shown(trimmed);
 }
 
 /**
@@ -89,12 +87,11 @@ export function parseSchemaCsv<S extends v.GenericSchema>(
   return out;
 }
 
-/** Writes rows as CSV with the listed columns, in order; numbers as their shortest exact decimal. */
+/**
+ * Writes rows as CSV with the listed columns, in order; numbers as their shortest exact decimal,
+ * text that a spreadsheet would run as a formula neutralised (csvCell), read back unchanged.
+ */
 export function rowsToCsv(rows: readonly Record<string, unknown>[], columns: readonly CsvColumn[]): string {
-  const records = rows.map((row) => {
-    const record: Record<string, string> = {};
-    for (const c of columns) record[c.column] = String(row[c.field] ?? "");
-    return record;
-  });
-  return `${csvFormat(records, columns.map((c) => c.column))}\n`;
+  const records = rows.map((row) => Object.fromEntries(columns.map((c) => [c.column, row[c.field]])));
+  return `${formatCsv(records, columns.map((c) => c.column))}\n`;
 }

@@ -1,4 +1,4 @@
-import { csvParseRows } from "d3";
+import { csvFormat, csvParseRows } from "d3";
 
 /**
  * CSV text as one record per data row keyed by the header's names (a missing cell is ""), with the
@@ -18,15 +18,79 @@ export interface CsvProblem {
   message: string;
 }
 
-/** Raised when a CSV file has problems; carries every problem, not just the first. */
+/** How many problems a message lists before "… and N more" (a large bad file stays readable). */
+export const MAX_LISTED_PROBLEMS = 20;
+
+/** The problems as lines `line L, column C: message`, at most `max` of them and then "… and N more". */
+export function listProblems(problems: readonly CsvProblem[], max = MAX_LISTED_PROBLEMS): string[] {
+  const lines = problems.slice(0, max).map((p) => `line ${p.line}, column ${p.column}: ${p.message}`);
+  if (problems.length > max) lines.push(`… and ${problems.length - max} more`);
+  return lines;
+}
+
+/** Raised when a CSV file has problems; carries every problem, and lists the first few in its message. */
 export class CsvError extends Error {
   constructor(
     readonly fileLabel: string,
     readonly problems: CsvProblem[],
   ) {
-    super(`${fileLabel}: ${problems.map((p) => `line ${p.line}, column ${p.column}: ${p.message}`).join("; ")}`);
+    super(`${fileLabel}: ${listProblems(problems).join("; ")}`);
     this.name = "CsvError";
   }
+}
+
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+/**
+ * A decimal number written as text (digits, an optional point and exponent), or null. Refuses what
+ * JavaScript's Number() would also take but a person did not mean as a decimal: hexadecimal
+ * (0x10), binary, octal, "Infinity" and the empty text.
+ * @example parseDecimal("-0.34") // -0.34; parseDecimal("0x10") // null
+ */
+export function parseDecimal(text: string): number | null {
+  const trimmed = text.trim();
+  if (!DECIMAL.test(trimmed)) return null;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : null;
+}
+
+/** The message for text that parseDecimal refused: `"five" is not a number`, or for 0x10, 1e999 and the like what is expected. */
+export function notDecimal(raw: string): string {
+  return Number.isNaN(Number(raw.trim())) ? `"${shown(raw)}" is not a number` : `"${shown(raw)}" is not a decimal number (expected digits with an optional point and exponent, e.g. 16 or 1.5e3)`;
+}
+
+/** Text shown back in a message, shortened so a huge cell cannot make a huge message. */
+export function shown(raw: string, max = 40): string {
+  return raw.length > max ? `${raw.slice(0, max)}…` : raw;
+}
+
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/**
+ * One cell for a CSV file a spreadsheet may open: a text cell that begins with =, +, -, @, a tab
+ * or a carriage return is prefixed with a single quote so a spreadsheet shows it as text instead
+ * of running it as a formula (the OWASP advice on CSV injection). Numbers, and text that is a
+ * plain decimal number such as "-0.34", are left as they are so they stay numbers. Text already
+ * beginning with a quote before such a character gets one more quote, so readCsvText gives back
+ * exactly what was written.
+ */
+export function csvCell(value: unknown): string {
+  if (value === null || value === undefined) return "";
+  if (typeof value === "number" || typeof value === "boolean") return String(value);
+  const text = String(value);
+  if (parseDecimal(text) !== null) return text;
+  if (FORMULA_START.test(text) || (text.startsWith("'") && FORMULA_START.test(text.slice(1).replace(/^'+/, "")))) return `'${text}`;
+  return text;
+}
+
+/** A text cell as read back: the quote csvCell added is removed. */
+export function readCsvText(raw: string): string {
+  return raw.startsWith("'") && FORMULA_START.test(raw.slice(1).replace(/^'+/, "")) ? raw.slice(1) : raw;
+}
+
+/** d3's csvFormat with every cell passed through csvCell: the CSV writer of the site and the command line. */
+export function formatCsv(rows: readonly Record<string, unknown>[], columns: readonly string[]): string {
+  return csvFormat(rows.map((row) => Object.fromEntries(columns.map((c) => [c, csvCell(row[c])]))), [...columns]);
 }
 
 export type ColumnSpec =
@@ -61,15 +125,16 @@ export function parseCsvTable(text: string, columns: readonly ColumnSpec[], file
         continue;
       }
       if (column.kind === "text") {
-        if (column.choices && !column.choices.includes(raw)) {
-          problems.push({ line, column: column.name, message: `"${raw}" is not allowed (expected one of ${column.choices.join(", ")})` });
+        const value = readCsvText(raw);
+        if (column.choices && !column.choices.includes(value)) {
+          problems.push({ line, column: column.name, message: `"${shown(value)}" is not allowed (expected one of ${column.choices.join(", ")})` });
         }
-        record[column.name] = raw;
+        record[column.name] = value;
         continue;
       }
-      const value = Number(raw);
+      const value = parseDecimal(raw) ?? Number.NaN;
       if (!Number.isFinite(value)) {
-        problems.push({ line, column: column.name, message: `"${raw}" is not a number` });
+        problems.push({ line, column: column.name, message: notDecimal(raw) });
       } else if ((column.min !== undefined && value < column.min) || (column.max !== undefined && value > column.max)) {
         problems.push({ line, column: column.name, message: `${value} is out of range (expected ${column.min ?? "−∞"} to ${column.max ?? "∞"})` });
       }

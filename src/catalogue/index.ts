@@ -5,6 +5,6 @@ export { parseStrandCatalogue, parseFabricCatalogue, parseCladdingCatalogue } fr
 export { parseGlulamCatalogue } from "./glulam";
 export { buildCatalogue, type CatalogueTexts } from "./build-catalogue";
 export { pickLightestChs, chsResistance, type ChsDemand, type ChsChoice } from "./pick-chs";
-export { parseCsvTable, CsvError, type CsvProblem, type ColumnSpec } from "./csv-table";
+export { parseCsvTable, CsvError, listProblems, parseDecimal, csvCell, readCsvText, formatCsv, shown, notDecimal, type CsvProblem, type ColumnSpec } from "./csv-table";
 export { pickLightestStrand, strandResistanceN, type StrandChoice, type StrandDesignOptions } from "./pick-strand";
 export { defaultCatalogue, CATALOGUE_TEXTS } from "./default-catalogue";

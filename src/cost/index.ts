@@ -17,6 +17,6 @@ export { type OnCosts, OnCostsSchema, DEFAULT_ON_COSTS } from "./on-costs";
 // Method
 export { applyOnCosts, ON_COST_ORDER, type OnCostLine } from "./apply-on-costs";
 export { rebaseRate } from "./rebase-rate";
-export { rebaseRateRows } from "./rebase-rate-rows";
+export { rebaseRateRows, RebaseRangeError } from "./rebase-rate-rows";
 export { CONCEPT_SCREENING, type EstimateClass } from "./estimate-class";
 export { assessCost, type CostAssessment, type CostLine, type CostGroup, type CostTotals } from "./assess-cost";

@@ -72,8 +72,12 @@ function schemeSettingSchema(model: SchemeModel) {
   return v.pipe(setting, ...(rules as [])) as unknown as typeof setting;
 }
 
+/** Every registered scheme optional; an unknown scheme id is refused, so a misspelt id is not silently dropped. */
 function schemesSchema() {
-  return v.object(Object.fromEntries(SCHEMES.map((m) => [m.id, v.optional(schemeSettingSchema(m), { enabled: true, options: {} })])));
+  return v.strictObject(
+    Object.fromEntries(SCHEMES.map((m) => [m.id, v.optional(schemeSettingSchema(m), { enabled: true, options: {} })])),
+    (issue) => `unknown scheme ${JSON.stringify(issue.input)} (expected one of ${SCHEMES.map((m) => m.id).join(", ")})`,
+  );
 }
 
 const isoDate = v.pipe(
