@@ -8,12 +8,12 @@ import { defaultCatalogue } from "./catalogue/default-catalogue";
 import { formatCsv, parseDecimal, shown } from "./catalogue/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
-import { evaluateStudy, headline, type Headline } from "./pipeline";
+import { evaluateStudy, headline, tableGaps, describeGaps, type Headline, type SchemeResult, type TableGap } from "./pipeline";
 import { CAUTION } from "./notebook/pages";
 import { runRisk, RISK_LIMITS, type RiskResult } from "./risk";
 
 export const USAGE = `usage: npm run evaluate -- FILE [--json] [--span M] [--sweep FROM:TO:STEP] [--schemes a,b]
-                              [--factors FILE.csv] [--rates FILE.csv] [--risk N [--seed S]]
+                              [--factors FILE.csv] [--rates FILE.csv] [--risk N [--seed S]] [--partial]
   FILE              a study file (.json)
   --json            machine-readable results
   --span M          evaluate at span M (m), keeping the rise-to-span ratio
@@ -22,7 +22,9 @@ export const USAGE = `usage: npm run evaluate -- FILE [--json] [--span M] [--swe
   --factors FILE    replace the study's carbon factor table with this CSV for the run
   --rates FILE      replace the study's rate table with this CSV for the run
   --risk N          also run N Monte Carlo samples of the study's uncertain inputs (P10/P50/P90)
-  --seed S          seed for --risk (default: the study's seed)`;
+  --seed S          seed for --risk (default: the study's seed)
+  --partial         print the results even when a table lacks a row a scheme needs (its carbon or
+                    cost is left blank and the gap named on stderr; without it: exit 2)`;
 
 export interface CliResult {
   code: number;
@@ -35,6 +37,8 @@ class UsageError extends Error {}
 interface Parsed {
   file: string;
   json: boolean;
+  /** Print what can be computed when a table lacks rows (the gaps named on stderr), exit 0. */
+  partial: boolean;
   spanM?: number;
   sweep?: { from: number; to: number; step: number };
   schemes?: SchemeId[];
@@ -60,7 +64,7 @@ function spanIn(text: string, what: string): number {
 }
 
 function parseArgs(args: readonly string[]): Parsed | "help" {
-  const parsed: Partial<Parsed> & { json: boolean } = { json: false };
+  const parsed: Partial<Parsed> & { json: boolean; partial: boolean } = { json: false, partial: false };
   for (let i = 0; i < args.length; i++) {
     const arg = args[i] ?? "";
     const next = (): string => {
@@ -70,6 +74,7 @@ function parseArgs(args: readonly string[]): Parsed | "help" {
     };
     if (arg === "--help" || arg === "-h") return "help";
     else if (arg === "--json") parsed.json = true;
+    else if (arg === "--partial") parsed.partial = true;
     else if (arg === "--span") parsed.spanM = spanIn(next(), "--span");
     else if (arg === "--sweep") {
       const text = next();
@@ -210,7 +215,38 @@ function riskTable(risk: RiskResult): string {
   return [`Risk: ${risk.samples} samples, seed ${risk.seed}, ${risk.designSamples} design draws (${risk.currency}, ${risk.estimateClass.label})`, line(header), ...body.map(line), risk.coverage].join("\n");
 }
 
-/** Runs the command line; never throws. Exit status 2 for bad input with one line on stderr. */
+/**
+ * The rows the evaluated take-offs need and the study's tables lack (carbon and cost are assessed
+ * apart, so a gap blanks only its own figure). Without --partial they stop the run (exit 2).
+ */
+function gapsOf(results: readonly SchemeResult[], study: Study): TableGap[] {
+  return tableGaps(results.map((r) => ({ label: r.id, design: r.design })), { factors: study.carbon.factors, rates: study.cost.rates });
+}
+
+function refuseGaps(gaps: readonly TableGap[], parsed: Parsed): string {
+  if (gaps.length === 0) return "";
+  const text = describeGaps(gaps);
+  if (!parsed.partial) throw new UsageError(`missing table rows: ${text}; add them to the study's tables (or --factors/--rates), or pass --partial to print the other results`);
+  return `spanbook: partial results, left blank: ${text}\n`;
+}
+
+function sweepCsv(study: Study, parsed: Parsed, catalogue: ReturnType<typeof defaultCatalogue>): CliResult {
+  const rows: Record<string, unknown>[] = [];
+  const all: SchemeResult[] = [];
+  const { from, to, step } = parsed.sweep as NonNullable<Parsed["sweep"]>;
+  for (let span = from; span <= to + 1e-9; span += step) {
+    const evaluation = evaluateStudy(study, catalogue, { spanM: Number(span.toFixed(6)), ...(parsed.schemes ? { schemeIds: parsed.schemes } : {}) });
+    all.push(...evaluation.results);
+    for (const result of evaluation.results) {
+      const h = headline(result);
+      rows.push({ ...h, span_m: evaluation.brief.spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air) });
+    }
+  }
+  const stderr = refuseGaps(gapsOf(all, study), parsed);
+  return { code: 0, stdout: `${formatCsv(rows, SWEEP_COLUMNS)}\n`, stderr };
+}
+
+/** Runs the command line; never throws. Exit status 2 for bad input (or rows missing from a table, without --partial) with one line on stderr. */
 export function runCli(args: readonly string[], readText: (path: string) => string = (p) => readFileSync(p, "utf8")): CliResult {
   try {
     const parsed = parseArgs(args);
@@ -218,28 +254,20 @@ export function runCli(args: readonly string[], readText: (path: string) => stri
     const study = loadStudy(parsed, readText);
     const catalogue = defaultCatalogue();
     const schemeIds = parsed.schemes;
-    if (parsed.sweep) {
-      const rows: Record<string, unknown>[] = [];
-      const { from, to, step } = parsed.sweep;
-      for (let span = from; span <= to + 1e-9; span += step) {
-        const evaluation = evaluateStudy(study, catalogue, { spanM: Number(span.toFixed(6)), ...(schemeIds ? { schemeIds } : {}) });
-        for (const result of evaluation.results) {
-          const h = headline(result);
-          rows.push({ ...h, span_m: evaluation.brief.spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air) });
-        }
-      }
-      return { code: 0, stdout: `${formatCsv(rows, SWEEP_COLUMNS)}\n`, stderr: "" };
-    }
+    if (parsed.sweep) return sweepCsv(study, parsed, catalogue);
     const evaluation = evaluateStudy(study, catalogue, { ...(parsed.spanM !== undefined ? { spanM: parsed.spanM } : {}), ...(schemeIds ? { schemeIds } : {}) });
+    const gaps = gapsOf(evaluation.results, study);
+    const stderr = refuseGaps(gaps, parsed);
     const headlines = evaluation.results.map(headline);
     const risk = parsed.risk === undefined ? null : riskRun(study, evaluation.brief, schemeIds, parsed.risk, parsed.seed, catalogue);
     if (parsed.json) {
       const schemes = risk ? headlines.map((h) => ({ ...h, risk: riskJson(risk, h.id) })) : headlines;
-      const out = { span_m: evaluation.brief.spanM, caution: CAUTION, schemes, ...(risk ? { risk: riskMeta(risk) } : {}) };
-      return { code: 0, stdout: `${JSON.stringify(out, null, 2)}\n`, stderr: "" };
+      const out = { span_m: evaluation.brief.spanM, caution: CAUTION, schemes, ...(gaps.length > 0 ? { gaps } : {}), ...(risk ? { risk: riskMeta(risk) } : {}) };
+      return { code: 0, stdout: `${JSON.stringify(out, null, 2)}\n`, stderr };
     }
     const riskText = risk ? `\n\n${riskTable(risk)}` : "";
-    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(headlines)}${riskText}\n\n${CAUTION}\n`, stderr: "" };
+    const gapText = gaps.length > 0 ? `\nLeft blank (–): ${describeGaps(gaps, 12, "\n  ")}` : "";
+    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(headlines)}${gapText}${riskText}\n\n${CAUTION}\n`, stderr };
   } catch (error) {
     if (error instanceof UsageError) return { code: 2, stdout: "", stderr: `spanbook: ${error.message}\n` };
     return { code: 1, stdout: "", stderr: `spanbook: internal error: ${error instanceof Error ? error.message : String(error)}\n` };

@@ -4,6 +4,7 @@ import { FactorTableSchema, type FactorRow } from "./factor-table";
 import { CarbonSettingsSchema, type AreaBasis, type CarbonSettings } from "./carbon-settings";
 import { areaForBasis, checkAreas, type AssessmentAreas } from "./assessment-areas";
 import { materialCarbon, type ModuleCarbon } from "./material-carbon";
+import { MissingRowsError, missingMaterials } from "./missing-rows";
 
 /** One take-off row's carbon, kgCO2e, with the mass it was computed from (allowance included). */
 export type CarbonRowResult = ModuleCarbon & {
@@ -92,8 +93,8 @@ function fail(what: string, problems: { path: string; message: string }[]): neve
  * apart and never netted. The design-stage quantity allowance multiplies every mass, never a
  * factor. The A5 wastage term carries the wasted mass's A4 and C only when those modules are
  * counted. Rows with no material carry no carbon. Knows materials and masses, not schemes.
- * @throws Error naming the field for invalid factors, settings, areas or row masses, and naming
- * the material for a row whose material has no factor row
+ * @throws Error naming the field for invalid factors, settings, areas or row masses;
+ * MissingRowsError naming every material that has no factor row (with its first take-off row)
  */
 export function assessCarbon(
   rows: readonly TakeoffRow[],
@@ -109,12 +110,11 @@ export function assessCarbon(
 
   const byId = new Map(factors.map((f) => [f.material, f]));
   const warnings: string[] = [];
+  const missing = missingMaterials(rows, factors);
+  if (missing.length > 0) throw new MissingRowsError("factors", missing.map((m) => m.key), `no carbon factor for ${missing.map((m) => `material "${m.key}" (${m.where})`).join(", ")}; add ${missing.length === 1 ? "a row for it" : "rows for them"} to the factor table`);
   rows.forEach((row, index) => {
     const where = `row ${index + 1}, element "${row.element}"`;
     if (!(Number.isFinite(row.massKg) && row.massKg >= 0)) throw new Error(`invalid massKg (${where}): ${row.massKg} kg (expected a finite mass ≥ 0)`);
-    if (row.material !== null && !byId.has(row.material)) {
-      throw new Error(`no carbon factor for material "${row.material}" (${where}); add a row for it to the factor table`);
-    }
     if (row.unit === "t" && Math.abs(row.quantity * 1000 - row.massKg) > 1e-6 * Math.max(1, row.massKg)) {
       warnings.push(`${where}: quantity ${row.quantity} t does not match massKg ${row.massKg} kg; carbon uses massKg`);
     }

@@ -70,7 +70,7 @@ export function parseSchemaCsv<S extends v.GenericSchema>(
         const text = `${column}:${issue.message}`;
         if (reported.has(text)) continue;
         reported.add(text);
-        problems.push({ line, column, message: issue.message });
+        problems.push({ line, column, message: issue.message.length > 200 ? `${issue.message.slice(0, 200)}…` : issue.message });
       }
     }
     if (rowKey !== undefined) {

@@ -1,6 +1,7 @@
 import type { TakeoffRow } from "../takeoff/takeoff-row";
 import { validateOnce } from "../study/schema-helpers";
 import { checkAreas, type AssessmentAreas } from "../carbon/assessment-areas";
+import { MissingRowsError, missingItems } from "../carbon/missing-rows";
 import { RateTableSchema, type RateRow } from "./rate-table";
 import type { OnCosts } from "./on-costs";
 import { applyOnCosts, type OnCostLine } from "./apply-on-costs";
@@ -56,7 +57,7 @@ export type CostAssessment = {
  * → overheads and profit → design fees → risk → inflation (RICS NRM 1 order, from memory). Results
  * carry their estimate class (concept screening: roughly −50 % to +100 %). Knows items and
  * quantities, not schemes.
- * @throws Error naming the item for a row with no rate, the row and units for a unit mismatch, and
+ * @throws MissingRowsError naming every item with no rate; Error naming the row and units for a unit mismatch, and
  * the field for invalid rates, on-costs, areas or quantities
  */
 export function assessCost(rows: readonly TakeoffRow[], rates: readonly RateRow[], onCosts: OnCosts, areas: AssessmentAreas): CostAssessment {
@@ -64,11 +65,12 @@ export function assessCost(rows: readonly TakeoffRow[], rates: readonly RateRow[
   if (!checked.ok) throw new Error(`invalid rates: ${checked.problems.map((p) => `rates${p.path === "(study)" ? "" : p.path}: ${p.message}`).join("; ")}`);
   checkAreas(areas);
   const byItem = new Map(rates.map((r) => [r.item, r]));
+  const missing = missingItems(rows, rates);
+  if (missing.length > 0) throw new MissingRowsError("rates", missing.map((m) => m.key), `no rate for ${missing.map((m) => `item "${m.key}" (${m.where})`).join(", ")}; add ${missing.length === 1 ? "a row for it" : "rows for them"} to the rate table`);
   rows.forEach((row, index) => {
     const where = `row ${index + 1}, element "${row.element}"`;
     if (!(Number.isFinite(row.quantity) && row.quantity >= 0)) throw new Error(`invalid quantity (${where}): ${row.quantity} ${row.unit} (expected a finite quantity ≥ 0)`);
-    const rate = byItem.get(row.costItem);
-    if (!rate) throw new Error(`no rate for item "${row.costItem}" (${where}); add a row for it to the rate table`);
+    const rate = byItem.get(row.costItem) as RateRow;
     if (rate.unit !== row.unit) throw new Error(`unit mismatch (${where}, item ${row.costItem}): ${row.unit} (expected ${rate.unit}, the unit of the rate)`);
   });
 

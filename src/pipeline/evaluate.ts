@@ -14,7 +14,7 @@ export interface SchemeResult {
   /** Null when the design has no take-off or the assessment failed (see `error`). */
   carbon: CarbonAssessment | null;
   cost: CostAssessment | null;
-  /** Why carbon or cost could not be assessed, or "". */
+  /** Why carbon or cost (or both) could not be assessed, or "". */
   error: string;
 }
 
@@ -49,19 +49,25 @@ export function designScheme(model: SchemeModel, brief: Brief, options: SchemeOp
   }
 }
 
-/** Carbon and cost of a design, with the study's tables. */
+function attempt<T>(run: () => T): { value: T | null; error: string } {
+  try {
+    return { value: run(), error: "" };
+  } catch (error) {
+    return { value: null, error: error instanceof Error ? error.message : String(error) };
+  }
+}
+
+/**
+ * Carbon and cost of a design, with the study's tables, each assessed on its own: a gap in the
+ * factor table blanks the carbon but not the cost, and the other way round. `error` says why
+ * either is missing (both reasons, carbon first).
+ */
 export function assessDesign(design: Design, study: Pick<Study, "carbon" | "cost">): Pick<SchemeResult, "carbon" | "cost" | "error"> {
   if (design.takeoff.length === 0) return { carbon: null, cost: null, error: design.feasible ? "no take-off" : "" };
   const areas = { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
-  try {
-    return {
-      carbon: assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areas),
-      cost: assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areas),
-      error: "",
-    };
-  } catch (error) {
-    return { carbon: null, cost: null, error: error instanceof Error ? error.message : String(error) };
-  }
+  const carbon = attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areas));
+  const cost = attempt(() => assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areas));
+  return { carbon: carbon.value, cost: cost.value, error: [carbon.error, cost.error].filter((e) => e !== "").join("; ") };
 }
 
 /**
