@@ -16,12 +16,16 @@ import {
   toggleControl,
   controlGroup,
   tableEditor,
+  textControl,
+  gapNotice,
+  missingFactorRows,
   schemeDesigns,
   designAreas,
   type Binding,
   type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
+import { tableGaps } from "../src/pipeline";
 import {
   assessCarbon,
   defaultFactorRows,
@@ -31,6 +35,8 @@ import {
   MaterialIdSchema,
   FACTOR_LIMITS,
   DEFAULT_CARBON_SETTINGS,
+  DEFAULT_FACTOR_SET_NAME,
+  CarbonSettingsSchema,
   type CarbonAssessment,
   type FactorRow,
   type TransportMode,
@@ -146,43 +152,70 @@ const columns: EditorColumn<FactorRow>[] = [
   { field: "notes", label: "Notes", kind: "text", wide: true },
 ];
 
+/** The factor set's name, shown in every caption and record; an import or merge renames it, and it can be edited. */
+const setNameControl = textControl(store.bind<string>([...path, "factorSetName"]), {
+  id: "factorSetName",
+  label: "Factor set name (shown in captions and records)",
+  size: 48,
+  hint: "An import names the set after its file and the date; edit it to say what the factors are.",
+  check: (raw) => {
+    if (raw === "") return "empty (expected a name for the factor set)";
+    const result = v.safeParse(CarbonSettingsSchema.entries.factorSetName, raw);
+    return result.success ? null : (result.issues[0]?.message ?? "invalid");
+  },
+});
+
+const factorEditor = tableEditor<FactorRow>({
+  id: "factors",
+  rowNoun: "material",
+  rows: factors,
+  setRows(next) {
+    store.study.value = setIn(store.study.value, ["carbon", "factors"], next);
+  },
+  defaults: defaultFactorRows,
+  keyField: "material",
+  columns,
+  schema: FactorRowSchema,
+  parseCsv: parseFactorCsv,
+  toCsv: factorRowsToCsv,
+  csvFilename: "carbon-factors.csv",
+  missingFor: missingFactorRows(() => designs.peek()),
+  setName: {
+    current: () => settings.peek().factorSetName,
+    defaultName: DEFAULT_FACTOR_SET_NAME,
+    apply(rows, name) {
+      store.study.value = setIn(setIn(store.study.value, ["carbon", "factors"], rows), [...path, "factorSetName"], name);
+    },
+  },
+  newRow(id, rows) {
+    const checked = v.safeParse(MaterialIdSchema, id);
+    if (!checked.success) return `material id: ${checked.issues[0]?.message ?? "invalid"}`;
+    if (rows.some((r) => r.material === id)) return `material id: ${JSON.stringify(id)} is already in the table (expected a new id)`;
+    return {
+      material: id,
+      label: id,
+      a1a3KgCO2ePerKg: 0,
+      densityKgPerM3: 1000,
+      transportKmRoad: 0,
+      transportKmSea: 0,
+      wasteRatePct: 0,
+      endOfLifeKgCO2ePerKg: 0,
+      moduleDKgCO2ePerKg: 0,
+      biogenicKgCO2ePerKg: 0,
+      source: "added on the carbon page: name the inventory or EPD and its year",
+      notes: "take-off rows use it once a scheme names this material id",
+    };
+  },
+});
+
 staticCell(
   main,
   { id: "factors", title: "Factor table" },
-  tableEditor<FactorRow>({
-    id: "factors",
-    rowNoun: "material",
-    rows: factors,
-    setRows(next) {
-      store.study.value = setIn(store.study.value, ["carbon", "factors"], next);
-    },
-    defaults: defaultFactorRows,
-    keyField: "material",
-    columns,
-    schema: FactorRowSchema,
-    parseCsv: parseFactorCsv,
-    toCsv: factorRowsToCsv,
-    csvFilename: "carbon-factors.csv",
-    newRow(id, rows) {
-      const checked = v.safeParse(MaterialIdSchema, id);
-      if (!checked.success) return `material id: ${checked.issues[0]?.message ?? "invalid"}`;
-      if (rows.some((r) => r.material === id)) return `material id: ${JSON.stringify(id)} is already in the table (expected a new id)`;
-      return {
-        material: id,
-        label: id,
-        a1a3KgCO2ePerKg: 0,
-        densityKgPerM3: 1000,
-        transportKmRoad: 0,
-        transportKmSea: 0,
-        wasteRatePct: 0,
-        endOfLifeKgCO2ePerKg: 0,
-        moduleDKgCO2ePerKg: 0,
-        biogenicKgCO2ePerKg: 0,
-        source: "added on the carbon page: name the inventory or EPD and its year",
-        notes: "take-off rows use it once a scheme names this material id",
-      };
-    },
-  }),
+  (() => {
+    const wrap = document.createElement("div");
+    wrap.append(setNameControl, factorEditor);
+    return wrap;
+  })(),
 );
 
 // ── Results ─────────────────────────────────────────────────────────────────────────────────
@@ -218,6 +251,7 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
       numeric: [false, true, true, true, true, true, true, true, true, true, true],
     },
   );
+  const gaps = gapNotice(tableGaps(designs.value, { factors: factors.value }), "carbon-gaps");
   const notes = document.createElement("div");
   notes.className = "warnings";
   const lines: string[] = [];
@@ -228,6 +262,7 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
   notes.textContent = lines.join("\n");
   notes.style.whiteSpace = "pre-wrap";
   const wrap = document.createElement("div");
+  if (gaps) wrap.append(gaps);
   wrap.append(table, notes);
   return wrap;
 });

@@ -22,7 +22,9 @@ import {
   takeoffTable,
   schemeOptionControls,
   studyDetailsEditor,
+  gapNotice,
 } from "../src/notebook";
+import { tableGaps } from "../src/pipeline";
 import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
 import {
@@ -98,6 +100,9 @@ reactiveCell(main, { id: "section", title: "Roof section" }, () =>
 
 // ——— the schemes ———
 const { schemes, results } = studySignals(store);
+// The tables, for naming rows they lack; untouched tables keep their identity, so the table re-renders only when they change.
+const factorRows = computed(() => store.study.value.carbon.factors);
+const rateRows = computed(() => store.study.value.cost.rates);
 
 staticCell(
   main,
@@ -116,6 +121,8 @@ reactiveCell(main, { id: "comparison", title: "Side by side" }, () => {
   const wrap = document.createElement("div");
   wrap.style.overflowX = "auto";
   wrap.append(table);
+  const gaps = gapNotice(tableGaps(list, { factors: factorRows.value, rates: rateRows.value }), "comparison-gaps");
+  if (gaps) wrap.append(gaps);
   return wrap;
 });
 

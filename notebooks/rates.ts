@@ -17,13 +17,16 @@ import {
   textControl,
   controlGroup,
   tableEditor,
+  gapNotice,
+  missingRateRows,
   schemeDesigns,
   designAreas,
   type Binding,
   type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
-import { assessCost, rebaseRateRows, RebaseRangeError, MAX_RATE, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
+import { tableGaps } from "../src/pipeline";
+import { assessCost, rebaseRateRows, RebaseRangeError, MAX_RATE, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, DEFAULT_RATE_SET_NAME, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
 import { costChartOptions, chartCaption, type SchemeCost } from "../src/charts";
 
 const { store, main } = startPage({
@@ -54,12 +57,14 @@ const pct = (field: keyof OnCosts, label: string, max: number, hint: string, min
   numberControl(store.bind<number>([...path, field]), { label, unit: "%", min, max, step: 0.5, id: field, hint });
 
 /** A text field checked by one field of the on-costs schema; an invalid value is not applied. */
-function textField(field: "priceBase" | "currency", label: string, hint: string): HTMLElement {
+function textField(field: "priceBase" | "currency" | "rateSetName", label: string, hint: string, size?: number): HTMLElement {
   return textControl(store.bind<string>([...path, field]), {
     id: field,
     label,
     hint,
+    ...(size ? { size } : {}),
     check: (raw) => {
+      if (field === "rateSetName" && raw === "") return "empty (expected a name for the rate set)";
       const result = v.safeParse(OnCostsSchema.entries[field], raw);
       return result.success ? null : (result.issues[0]?.message ?? "invalid");
     },
@@ -85,6 +90,7 @@ staticCell(
         textField("priceBase", "Price base (YYYY-MM)", "The date the rates are priced at."),
         textField("currency", "Currency (ISO 4217 code)", "Labels every cost; rates are not converted."),
       ]),
+      controlGroup("Provenance", [textField("rateSetName", "Rate set name (shown in captions and records)", "An import names the set after its file and the date; edit it to say where the rates come from.", 40)]),
     );
     return grid;
   })(),
@@ -127,6 +133,14 @@ staticCell(
         parseCsv: parseRateCsv,
         toCsv: rateRowsToCsv,
         csvFilename: "cost-rates.csv",
+        missingFor: missingRateRows(() => designs.peek()),
+        setName: {
+          current: () => onCosts.peek().rateSetName ?? DEFAULT_RATE_SET_NAME,
+          defaultName: DEFAULT_RATE_SET_NAME,
+          apply(rows, name) {
+            store.study.value = setIn(setIn(store.study.value, ["cost", "rates"], rows), [...path, "rateSetName"], name);
+          },
+        },
       }),
     );
     return wrap;
@@ -221,11 +235,15 @@ reactiveCell(main, { id: "cost-table", title: "Cost per scheme" }, () => {
       ];
     }),
     {
-      caption: `${CONCEPT_SCREENING.label} (${CONCEPT_SCREENING.source}). Price base ${o.priceBase}, location factor ${o.locationFactor}. Low–high uses the low and high rates with the same on-costs; it is not the estimate class's range.`,
+      caption: `${CONCEPT_SCREENING.label} (${CONCEPT_SCREENING.source}). Rates: ${o.rateSetName ?? DEFAULT_RATE_SET_NAME}. Price base ${o.priceBase}, location factor ${o.locationFactor}. Low–high uses the low and high rates with the same on-costs; it is not the estimate class's range.`,
       numeric: [false, true, true, true, true, true, true, true, true, true, true],
     },
   );
-  return table;
+  const gaps = gapNotice(tableGaps(designs.value, { rates: rates.value }), "cost-gaps");
+  if (!gaps) return table;
+  const wrap = document.createElement("div");
+  wrap.append(gaps, table);
+  return wrap;
 });
 
 reactiveCell(main, { id: "cost-elements", title: "Cost per element" }, () => {

@@ -48,3 +48,4 @@ export { MissingRowsError, missingMaterials, missingItems, type MissingKey } fro
 
 // Table editing (pages' cell editors)
 export { checkRowEdit, type RowEditResult } from "./check-row-edit";
+export { mergeRows, importedSetName, type RowMerge, type FieldChange } from "./merge-rows";

@@ -11,6 +11,7 @@ export {
   parseRateCsv,
   rateRowsToCsv,
   defaultRateRows,
+  DEFAULT_RATE_SET_NAME,
 } from "./rate-table";
 export { type OnCosts, OnCostsSchema, DEFAULT_ON_COSTS } from "./on-costs";
 

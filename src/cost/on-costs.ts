@@ -1,5 +1,6 @@
 import * as v from "valibot";
 import { numberIn, textUpTo } from "../study/schema-helpers";
+import { DEFAULT_RATE_SET_NAME } from "./rate-table";
 
 /**
  * Elemental order-of-cost on-costs, each a percentage applied in this order, compounding:
@@ -24,6 +25,8 @@ export type OnCosts = {
   priceBase: string;
   /** ISO 4217 currency code, e.g. EUR. */
   currency: string;
+  /** Name of the rate set, for captions and records (an import names it after its file and date); a file without it takes DEFAULT_RATE_SET_NAME. */
+  rateSetName?: string;
 };
 
 export const OnCostsSchema = v.object({
@@ -41,6 +44,7 @@ export const OnCostsSchema = v.object({
     textUpTo(3),
     v.regex(/^[A-Z]{3}$/, (issue) => `${JSON.stringify(issue.input)} (expected a three-letter currency code, e.g. EUR)`),
   ),
+  rateSetName: v.optional(textUpTo(120), DEFAULT_RATE_SET_NAME),
 });
 
 /**
@@ -57,4 +61,5 @@ export const DEFAULT_ON_COSTS: OnCosts = {
   locationFactor: 1,
   priceBase: "2026-01",
   currency: "EUR",
+  rateSetName: DEFAULT_RATE_SET_NAME,
 };

@@ -120,3 +120,6 @@ export function defaultRateRows(): RateRow[] {
   cached ??= parseRateCsv(ratesCsv, "data/cost-rates.csv");
   return cached.map((row) => ({ ...row }));
 }
+
+/** The name of the bundled rate set, for captions and records. */
+export const DEFAULT_RATE_SET_NAME = "spanbook demonstration rates (data/cost-rates.csv)";

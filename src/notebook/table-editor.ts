@@ -6,7 +6,7 @@ import type * as v from "valibot";
 import { effect, computed, type ReadonlySignal } from "@preact/signals-core";
 import { downloadText } from "./download";
 import { checkRowEdit } from "../carbon";
-import { CsvError } from "../catalogue";
+import { tableImport, type RowGap } from "./table-import";
 
 export type EditorColumn<R> = {
   field: keyof R & string;
@@ -35,6 +35,13 @@ export type TableEditorOptions<R extends Record<string, unknown>> = {
   csvFilename: string;
   /** A new row for a key the user typed; a string is a message (the key is refused). */
   newRow?: (key: string, rows: readonly R[]) => R | string;
+  /** Rows the schemes need that candidate rows lack: an import lacking them is refused with their names (a merge is offered). */
+  missingFor?: (rows: readonly R[]) => RowGap[];
+  /**
+   * The table set's name (provenance in captions and records): an import, a merge or "reset all"
+   * sets rows and name together through `apply`, in one study update.
+   */
+  setName?: { current: () => string; defaultName: string; apply(rows: R[], name: string): void };
 };
 
 const STYLE_ID = "table-editor-style";
@@ -234,11 +241,30 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
     }, `${options.id}-add`);
     tools.append(newKey, add);
   }
+  const applyNamed = (rows: R[], name: string | null) => {
+    if (options.setName && name !== null) options.setName.apply(rows, name);
+    else options.setRows(rows);
+  };
   const resetAll = button("Reset all to defaults", () => {
-    options.setRows(options.defaults());
+    applyNamed(options.defaults(), options.setName?.defaultName ?? null);
     status.className = "import-ok";
     status.textContent = "Every row reset to the bundled defaults.";
   }, `${options.id}-reset-all`);
+  const { importText, preview } = tableImport(
+    {
+      id: options.id,
+      rowNoun: options.rowNoun,
+      keyField: options.keyField,
+      columns: options.columns,
+      current: () => options.rows.peek(),
+      parseCsv: options.parseCsv,
+      apply: applyNamed,
+      ...(options.missingFor ? { missingFor: options.missingFor } : {}),
+      ...(options.setName ? { currentName: options.setName.current } : {}),
+    },
+    status,
+  );
+  let mode: "replace" | "merge" = "replace";
   const file = document.createElement("input");
   file.type = "file";
   file.accept = ".csv,text/csv";
@@ -248,36 +274,27 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
   file.addEventListener("change", async () => {
     const chosen = file.files?.[0];
     if (!chosen) return;
-    importText(await chosen.text(), chosen.name);
+    importText(await chosen.text(), chosen.name, mode);
     file.value = "";
+    mode = "replace";
   });
-  const importButton = button("Import CSV…", () => file.click(), `${options.id}-import`);
+  const importButton = button("Import CSV…", () => {
+    mode = "replace";
+    file.click();
+  }, `${options.id}-import`);
+  const mergeButton = button("Merge CSV (partial update)…", () => {
+    mode = "merge";
+    file.click();
+  }, `${options.id}-merge`);
   const exportButton = button("Export CSV", () => downloadText(options.csvFilename, options.toCsv(options.rows.peek()), "text/csv"), `${options.id}-export`);
-  tools.append(resetAll, importButton, exportButton, file);
+  tools.append(resetAll, importButton, mergeButton, exportButton, file);
 
-  function importText(text: string, name: string): void {
-    try {
-      const rows = options.parseCsv(text, name);
-      options.setRows(rows);
-      status.removeAttribute("role");
-      status.className = "import-ok";
-      status.textContent = `Imported ${rows.length} rows from ${name}.`;
-    } catch (error) {
-      status.className = "import-problems";
-      status.setAttribute("role", "alert");
-      if (error instanceof CsvError) {
-        status.textContent = `${name} was not imported; nothing changed. ${error.problems.length} problem${error.problems.length === 1 ? "" : "s"}:\n${error.problems.map((p) => `line ${p.line}, column ${p.column}: ${p.message}`).join("\n")}`;
-      } else {
-        status.textContent = `${name} was not imported; nothing changed: ${error instanceof Error ? error.message : String(error)}`;
-      }
-    }
-  }
   // Tests (and drag-and-drop, later) can import text directly.
   wrap.addEventListener("import-csv", (event) => {
-    const detail = (event as CustomEvent<{ text: string; name: string }>).detail;
-    importText(detail.text, detail.name);
+    const detail = (event as CustomEvent<{ text: string; name: string; merge?: boolean }>).detail;
+    importText(detail.text, detail.name, detail.merge ? "merge" : "replace");
   });
 
-  wrap.append(tools, status, tableHolder);
+  wrap.append(tools, status, preview, tableHolder);
   return wrap;
 }

@@ -66,6 +66,7 @@ const ON_COST_FIELDS: Record<string, FieldInfo> = {
   locationFactor: { label: "Location factor", unit: "–", source: "" },
   priceBase: { label: "Price base", unit: "", source: "" },
   currency: { label: "Currency", unit: "", source: "" },
+  rateSetName: { label: "Rate set (name)", unit: "", source: "" },
 };
 
 function show(value: unknown): string {
