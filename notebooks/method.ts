@@ -6,9 +6,8 @@ import { startPage, reactiveCell, staticCell, tableElement, downloadText, signal
 import { SCHEMES } from "../src/schemes";
 import { assumptionsRecord, studyFromJson, describeProblems, type Study } from "../src/study";
 import { compareStudies, HEADLINE_METRICS, type SchemeDelta } from "../src/comparison";
-import { defaultCatalogue } from "../src/catalogue";
+import { defaultCatalogue, formatCsv } from "../src/catalogue";
 import { designBasis, summariseCase, summariseCombination, type DesignBasis } from "../src/loads";
-import { csvFormat } from "d3";
 
 const { store, main } = startPage({
   id: "method",
@@ -86,7 +85,7 @@ reactiveCell(main, { id: "record", title: "Assumptions record" }, () => {
   button.textContent = "Download the record (CSV)";
   button.addEventListener("click", () => {
     const rows = record.map(({ raw: _raw, ...r }) => ({ ...r, changed: r.changed ? "yes" : "no" }));
-    downloadText("assumptions.csv", `${csvFormat(rows, ["group", "path", "label", "value", "unit", "default", "source", "changed"])}\n`, "text/csv");
+    downloadText("assumptions.csv", `${formatCsv(rows, ["group", "path", "label", "value", "unit", "default", "source", "changed"])}\n`, "text/csv");
   });
   const table = tableElement(
     ["", "Group", "Input", "Value", "Unit", "Default", "Source"],

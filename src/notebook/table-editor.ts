@@ -60,6 +60,8 @@ const CSS = `
 .editor-tools input[type="text"] { font: inherit; width: 12rem; }
 .import-problems { color: #a11d1d; font-size: 0.85rem; white-space: pre-wrap; }
 .import-ok { color: #3a7d32; font-size: 0.85rem; }
+.merge-preview { border-left: 4px solid #c98a00; background: #fffbea; padding: 0.25rem 0.75rem 0.6rem; margin: 0.5rem 0 0.75rem; font-size: 0.88rem; }
+.merge-preview ul { margin: 0.25rem 0 0.5rem; }
 `;
 
 function ensureStyle(): void {

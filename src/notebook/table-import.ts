@@ -57,6 +57,7 @@ export function mergeLines<R extends Record<string, unknown>>(merge: RowMerge<R>
 export function tableImport<R extends Record<string, unknown>>(options: ImportOptions<R>, status: HTMLElement): { importText(text: string, name: string, mode: "replace" | "merge"): void; preview: HTMLElement } {
   const preview = document.createElement("div");
   preview.id = `${options.id}-merge-preview`;
+  preview.className = "merge-preview";
   preview.hidden = true;
   const labelOf = (field: string) => options.columns.find((c) => c.field === field)?.label ?? field;
 
