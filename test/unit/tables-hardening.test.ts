@@ -3,8 +3,10 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { csvCell, readCsvText, formatCsv, parseDecimal, parseCsvTable, CsvError } from "../../src/catalogue";
-import { defaultFactorRows, factorRowsToCsv, parseFactorCsv, checkRowEdit, FactorRowSchema } from "../../src/carbon";
-import { defaultRateRows, parseRateCsv, rateRowsToCsv, rebaseRateRows, RebaseRangeError, RateTableSchema, MAX_RATE } from "../../src/cost";
+import { defaultFactorRows, factorRowsToCsv, parseFactorCsv, checkRowEdit, FactorRowSchema, mergeRows, importedSetName } from "../../src/carbon";
+import { defaultRateRows, parseRateCsv, rateRowsToCsv, rebaseRateRows, RebaseRangeError, RateTableSchema, MAX_RATE, DEFAULT_RATE_SET_NAME } from "../../src/cost";
+import { chartCaption } from "../../src/charts";
+import { assumptionsRecord } from "../../src/study/assumptions";
 import { evaluateStudy, tableGaps, describeGap } from "../../src/pipeline";
 import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { defaultStudy, validateStudy } from "../../src/study";
@@ -140,5 +142,39 @@ describe("study schema: unknown scheme id", () => {
     const result = validateStudy(study);
     expect(result.ok).toBe(false);
     expect(!result.ok && result.problems).toContainEqual({ path: "schemes.cable-domes", message: expect.stringMatching(/^unknown scheme "cable-domes" \(expected one of cable-dome, /) });
+  });
+});
+
+describe("partial imports and the name of a table set", () => {
+  it("mergeRows keeps rows the file lacks, replaces and adds by key, and lists every change", () => {
+    const current = defaultFactorRows();
+    const plate = { ...current.find((r) => r.material === "steel-plate")!, a1a3KgCO2ePerKg: 3 };
+    const extra = { ...plate, material: "steel-s460", label: "S460 plate" };
+    const merge = mergeRows(current, [plate, extra], "material");
+    expect(merge.rows).toHaveLength(current.length + 1);
+    expect(merge.added).toEqual(["steel-s460"]);
+    expect(merge.changed).toEqual([{ key: "steel-plate", fields: [{ field: "a1a3KgCO2ePerKg", from: 2.46, to: 3 }] }]);
+    expect(merge.rows.find((r) => r.material === "rebar")).toEqual(current.find((r) => r.material === "rebar"));
+  });
+  it("importedSetName names the file and date and stays within the schema's 120 characters", () => {
+    expect(importedSetName("epds.csv", "2026-12-02")).toBe("epds.csv, imported 2026-12-02");
+    expect(importedSetName("plate.csv", "2026-12-02", "spanbook defaults")).toBe("plate.csv, merged 2026-12-02 into spanbook defaults");
+    expect(importedSetName("x".repeat(500), "2026-12-02", "y".repeat(500)).length).toBeLessThanOrEqual(120);
+  });
+  it("a named factor and rate set shows in the chart caption and the assumptions record", () => {
+    const study = defaultStudy();
+    expect(chartCaption(study)).not.toMatch(/rates:/);
+    study.carbon.settings.factorSetName = "epds.csv, imported 2026-12-02";
+    study.cost.onCosts.rateSetName = "supplier.csv, imported 2026-12-02";
+    expect(chartCaption(study)).toMatch(/carbon factors: epds\.csv, imported 2026-12-02 · rates: supplier\.csv, imported 2026-12-02/);
+    const record = assumptionsRecord(study);
+    expect(record.find((r) => r.path === "carbon.settings.factorSetName")).toMatchObject({ value: "epds.csv, imported 2026-12-02", changed: true });
+    expect(record.find((r) => r.path === "cost.onCosts.rateSetName")).toMatchObject({ value: "supplier.csv, imported 2026-12-02", changed: true });
+  });
+  it("a study file without a rate set name opens with the bundled name", () => {
+    const study = defaultStudy() as unknown as { cost: { onCosts: Record<string, unknown> } };
+    delete study.cost.onCosts.rateSetName;
+    const result = validateStudy(study);
+    expect(result.ok && result.study.cost.onCosts.rateSetName).toBe(DEFAULT_RATE_SET_NAME);
   });
 });
