@@ -5,7 +5,7 @@ import { uniformSnowCase, driftedSnowCase } from "./snow-cases";
 import { domeCpe, windCase, type DomeCpe } from "./dome-wind";
 import { temperatureCase, TEMPERATURE_DEFAULTS, type TemperatureOptions } from "./temperature-case";
 import { designCombinations, type Combination } from "./design-combinations";
-import { peakVelocityPressure, Z_MAX_M } from "./wind";
+import { domeWindReference } from "./wind";
 
 /** The load cases and combinations every scheme of a study designs for. */
 export interface DesignBasis {
@@ -54,8 +54,7 @@ export function designBasis(brief: Brief, temperature: TemperatureOptions = TEMP
   const fOverD = brief.riseM / brief.spanM;
   const hOverD = brief.eavesHeightM / brief.spanM;
   const cpe = domeCpe(fOverD, hOverD);
-  const windReferenceHeightM = Math.min(Z_MAX_M, brief.eavesHeightM + brief.riseM);
-  const peakVelocityPressureKPa = peakVelocityPressure(brief.windBasicMPerS, brief.terrain, windReferenceHeightM, brief.airDensityKgPerM3).peakPa / 1000;
+  const { heightM: windReferenceHeightM, peakKPa: peakVelocityPressureKPa } = domeWindReference(brief);
   return {
     cap,
     fOverD,

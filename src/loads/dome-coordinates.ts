@@ -1,4 +1,5 @@
 import type { SphericalCap } from "../mechanics/spherical-cap";
+import type { PressureCase } from "./load-case";
 
 /**
  * Plan point (x, y), m, of the cap's surface point at an angle from the crown θ (measured at the
@@ -27,4 +28,10 @@ export function radiusAtSlope(cap: SphericalCap, slopeRad: number): number {
 /** Whether plan point (x, y) lies within `radiusM` of the centre (the plan by default), with a relative 1e-12 for rounding on the rim. */
 export function withinRadius(cap: SphericalCap, xM: number, yM: number, radiusM = cap.baseRadiusM): boolean {
   return Math.hypot(xM, yM) <= radiusM * (1 + 1e-12);
+}
+
+/** A case's value at the surface point at angle θ from the crown and azimuth ψ from the windward meridian, kPa. */
+export function caseAtSurfaceKPa(load: Pick<PressureCase, "atPlanKPa">, cap: SphericalCap, angleFromCrownRad: number, azimuthFromWindRad: number): number {
+  const { xM, yM } = planPointOf(cap, angleFromCrownRad, azimuthFromWindRad);
+  return load.atPlanKPa(xM, yM);
 }

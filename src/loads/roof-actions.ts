@@ -1,7 +1,7 @@
 import type { Brief } from "../study/brief";
 import { sphericalCap } from "../mechanics/spherical-cap";
 import { snowShapeMu1, snowShapeMu3 } from "./snow";
-import { peakVelocityPressure } from "./wind";
+import { domeWindReference } from "./wind";
 import { ulsGravity, ulsUplift, type UlsResult } from "./combinations";
 
 /** The characteristic roof actions of a brief, every scheme's starting point. Pressures in kPa. */
@@ -44,8 +44,7 @@ export function roofActions(brief: Brief): RoofActions {
   const muUniform = Math.max(mu1, 0.75 * mu3);
   const snowKPa = muUniform * brief.snowGroundKPa;
   const leadingVariable = snowKPa >= brief.imposedRoofKPa ? "snow" : "imposed";
-  const windHeightM = Math.min(200, brief.eavesHeightM + brief.riseM);
-  const peakWindKPa = peakVelocityPressure(brief.windBasicMPerS, brief.terrain, windHeightM, brief.airDensityKgPerM3).peakPa / 1000;
+  const { heightM: windHeightM, peakKPa: peakWindKPa } = domeWindReference(brief);
   return {
     mu1,
     mu3,

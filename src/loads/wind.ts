@@ -1,4 +1,4 @@
-import type { TerrainCategory } from "../study/brief";
+import type { Brief, TerrainCategory } from "../study/brief";
 
 /** EN 1991-1-4 Table 4.1: roughness length z0 and minimum height z_min per terrain category, m. */
 export const TERRAIN = {
@@ -44,4 +44,13 @@ export function peakVelocityPressure(basicVelocityMPerS: number, terrain: Terrai
   const peakPa = (1 + 7 * turbulence) * 0.5 * airDensityKgPerM3 * meanVelocity * meanVelocity;
   const basicPa = 0.5 * airDensityKgPerM3 * basicVelocityMPerS * basicVelocityMPerS;
   return { peakPa, basicPa, exposureFactor: peakPa / basicPa, meanVelocityMPerS: meanVelocity, turbulenceIntensity: turbulence };
+}
+
+/**
+ * Wind reference of a dome on walls: z_e = h + f, the crown's height above ground (EN 1991-1-4
+ * Fig. 7.12), capped at z_max, and the peak velocity pressure there.
+ */
+export function domeWindReference(brief: Pick<Brief, "eavesHeightM" | "riseM" | "windBasicMPerS" | "terrain" | "airDensityKgPerM3">): { heightM: number; peakKPa: number } {
+  const heightM = Math.min(Z_MAX_M, brief.eavesHeightM + brief.riseM);
+  return { heightM, peakKPa: peakVelocityPressure(brief.windBasicMPerS, brief.terrain, heightM, brief.airDensityKgPerM3).peakPa / 1000 };
 }

@@ -10,6 +10,7 @@ import {
   planPointOf,
   angleFromCrownAt,
   combinationAtPlanKPa,
+  caseAtSurfaceKPa,
   summariseCombination,
   TEMPERATURE_DEFAULTS,
 } from "../../../src/loads";
@@ -99,6 +100,12 @@ describe("coordinates", () => {
   it("angleFromCrownAt inverts planPointOf", () => {
     const p = planPointOf(cap, 0.3, 2.1);
     expectRelClose(angleFromCrownAt(cap, p.xM, p.yM), 0.3, 1e-12);
+  });
+  it("caseAtSurfaceKPa reads the drifted snow's heavy half on the windward side and the light half on the leeward", () => {
+    const basis = designBasis(DEFAULT_BRIEF);
+    const drift = basis.cases["snow-drifted"];
+    expect(caseAtSurfaceKPa(drift, basis.cap, 0.2, 0)).toBe(drift.peakKPa);
+    expect(caseAtSurfaceKPa(drift, basis.cap, 0.2, Math.PI)).toBe(drift.peakKPa / 2);
   });
   it("integrate1d splits at breaks, so a step integrates exactly", () => expectRelClose(integrate1d((t) => (t < 0.3 ? 1 : 0), 0, 1, 1, [0.3]), 0.3, 1e-14));
   it("integrate1d of reversed limits is negative", () => expectRelClose(integrate1d((t) => t, 1, 0), -0.5, 1e-14));
