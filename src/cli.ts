@@ -9,7 +9,7 @@ import { formatCsv, parseDecimal, shown } from "./catalogue/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
 import { evaluateStudy, headline, tableGaps, describeGaps, type Headline, type SchemeResult, type TableGap } from "./pipeline";
-import { CAUTION } from "./notebook/pages";
+import { CAUTION } from "./kernel/caution";
 import { runRisk, RISK_LIMITS, type RiskResult } from "./risk";
 
 export const USAGE = `usage: npm run evaluate -- FILE [--json] [--span M] [--sweep FROM:TO:STEP] [--schemes a,b]

@@ -1,8 +1,8 @@
 import type { TakeoffRow } from "../takeoff/takeoff-row";
-import { validateOnce } from "../study/schema-helpers";
+import { validateOnce } from "../kernel/validate";
 import { FactorTableSchema, type FactorRow } from "./factor-table";
 import { CarbonSettingsSchema, type AreaBasis, type CarbonSettings } from "./carbon-settings";
-import { areaForBasis, checkAreas, type AssessmentAreas } from "./assessment-areas";
+import { areaForBasis, checkAreas, type AssessmentAreas } from "../takeoff/assessment-areas";
 import { materialCarbon, type ModuleCarbon } from "./material-carbon";
 import { MissingRowsError, missingMaterials } from "./missing-rows";
 

@@ -1,6 +1,7 @@
 import * as v from "valibot";
-import { flag, numberIn, oneOf, textUpTo } from "../study/schema-helpers";
+import { flag, numberIn, oneOf, textUpTo } from "../kernel/validate";
 import { DEFAULT_FACTOR_SET_NAME } from "./factor-table";
+import { AREA_BASES, type AreaBasis } from "../takeoff/assessment-areas";
 
 /** A transport mode's carbon per tonne-kilometre (A4). */
 export type TransportMode = {
@@ -12,9 +13,8 @@ export type TransportMode = {
   source: string;
 };
 
-/** The floor or roof area carbon and cost are divided by. */
-export type AreaBasis = "usable-floor" | "covered-plan" | "roof-surface";
-export const AREA_BASES = ["usable-floor", "covered-plan", "roof-surface"] as const;
+/** The floor or roof area carbon and cost are divided by (defined with the areas, in src/takeoff/). */
+export { AREA_BASES, type AreaBasis };
 
 /**
  * Which life-cycle modules are counted and how the result is normalised. A1–A3 are always counted;

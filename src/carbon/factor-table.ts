@@ -1,6 +1,6 @@
 import * as v from "valibot";
 import factorsCsv from "../../data/carbon-factors.csv?raw";
-import { numberIn, textUpTo } from "../study/schema-helpers";
+import { numberIn, textUpTo } from "../kernel/validate";
 import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "./schema-csv";
 
 /**

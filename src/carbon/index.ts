@@ -33,7 +33,7 @@ export { biogenicCo2StoredKg, biogenicCo2PerKg, CO2_PER_C, WOOD_CARBON_FRACTION 
 export { materialCarbon, type ModuleCarbon, type WastageScope } from "./material-carbon";
 
 // Assessment of a take-off
-export { type AssessmentAreas, checkAreas, areaForBasis } from "./assessment-areas";
+export { type AssessmentAreas, checkAreas, areaForBasis } from "../takeoff/assessment-areas";
 export {
   assessCarbon,
   type CarbonAssessment,

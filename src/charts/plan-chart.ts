@@ -1,5 +1,5 @@
 import * as Plot from "@observablehq/plot";
-import type { Brief } from "../study/brief";
+import type { Brief } from "../brief";
 import type { DrawingLine } from "../schemes/types";
 import { joinByRole } from "./join-lines";
 

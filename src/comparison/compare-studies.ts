@@ -1,7 +1,7 @@
 import type { Study } from "../study/study";
 import type { Catalogue } from "../catalogue/types";
 import { assumptionsRecord, type Assumption } from "../study/assumptions";
-import { setIn } from "../study/patch";
+import { setIn } from "../kernel/patch";
 import { evaluateStudy, headline, type Headline } from "../pipeline";
 
 /** The headline numbers a change is judged by. */

@@ -2,6 +2,7 @@
 import { runSpanStudy, type SpanPoint } from "./span-study";
 import { defaultCatalogue } from "../catalogue/default-catalogue";
 import type { Study } from "../study/study";
+import { messageOf } from "../kernel/errors";
 
 export interface SpanRequest {
   id: number;
@@ -19,6 +20,6 @@ self.onmessage = (event: MessageEvent<SpanRequest>) => {
     const points = runSpanStudy(study, defaultCatalogue(), spans);
     self.postMessage({ id, ok: true, points, ms: performance.now() - start } satisfies SpanReply);
   } catch (error) {
-    self.postMessage({ id, ok: false, error: error instanceof Error ? error.message : String(error) } satisfies SpanReply);
+    self.postMessage({ id, ok: false, error: messageOf(error) } satisfies SpanReply);
   }
 };

@@ -1,4 +1,4 @@
-import { validateWith } from "../study/schema-helpers";
+import { validateWith } from "../kernel/validate";
 import { OnCostsSchema, type OnCosts } from "./on-costs";
 
 /** One on-cost line: a percentage of the running subtotal before it. */

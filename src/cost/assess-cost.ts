@@ -1,6 +1,6 @@
 import type { TakeoffRow } from "../takeoff/takeoff-row";
-import { validateOnce } from "../study/schema-helpers";
-import { checkAreas, type AssessmentAreas } from "../carbon/assessment-areas";
+import { validateOnce } from "../kernel/validate";
+import { checkAreas, type AssessmentAreas } from "../takeoff/assessment-areas";
 import { MissingRowsError, missingItems } from "../carbon/missing-rows";
 import { RateTableSchema, type RateRow } from "./rate-table";
 import type { OnCosts } from "./on-costs";

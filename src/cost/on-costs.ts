@@ -1,5 +1,5 @@
 import * as v from "valibot";
-import { numberIn, textUpTo } from "../study/schema-helpers";
+import { numberIn, textUpTo } from "../kernel/validate";
 import { DEFAULT_RATE_SET_NAME } from "./rate-table";
 
 /**

@@ -1,7 +1,7 @@
 import * as v from "valibot";
 import ratesCsv from "../../data/cost-rates.csv?raw";
 import { COST_ITEMS } from "../takeoff/takeoff-row";
-import { numberIn, oneOf, textUpTo } from "../study/schema-helpers";
+import { numberIn, oneOf, textUpTo } from "../kernel/validate";
 import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "../carbon/schema-csv";
 
 /** One unit rate of the rate table: cost per `unit` of a COST_ITEMS item at the price base, before on-costs. */

@@ -1,4 +1,4 @@
-import type { Brief } from "../study/brief";
+import type { Brief } from "../brief";
 import { sphericalCap, type SphericalCap } from "../mechanics/spherical-cap";
 import type { LoadCaseId, PressureCase, TemperatureCase } from "./load-case";
 import { uniformSnowCase, driftedSnowCase } from "./snow-cases";

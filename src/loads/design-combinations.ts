@@ -1,4 +1,4 @@
-import type { PartialFactors, UlsExpression } from "../study/brief";
+import type { PartialFactors, UlsExpression } from "../brief";
 import type { LoadCaseId } from "./load-case";
 
 /**

@@ -1,4 +1,4 @@
-import type { Brief } from "../study/brief";
+import type { Brief } from "../brief";
 import { sphericalCap } from "../mechanics/spherical-cap";
 import { snowShapeMu1, snowShapeMu3 } from "./snow";
 import { domeWindReference } from "./wind";

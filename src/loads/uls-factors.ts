@@ -1,4 +1,4 @@
-import type { Brief } from "../study/brief";
+import type { Brief } from "../brief";
 import { ulsGravity } from "./combinations";
 
 /** The partial factors that the governing EN 1990 expression applies to permanent and variable load. */

@@ -1,4 +1,4 @@
-import type { Brief, TerrainCategory } from "../study/brief";
+import type { Brief, TerrainCategory } from "../brief";
 
 /** EN 1991-1-4 Table 4.1: roughness length z0 and minimum height z_min per terrain category, m. */
 export const TERRAIN = {

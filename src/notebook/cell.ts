@@ -1,4 +1,5 @@
 import { effect } from "@preact/signals-core";
+import { messageOf } from "../kernel/errors";
 
 /** What a cell's render function may return. */
 export type CellContent = Node | string | null | undefined;
@@ -66,7 +67,7 @@ export function errorBox(error: unknown): HTMLElement {
   const box = document.createElement("div");
   box.className = "cell-error";
   box.setAttribute("role", "alert");
-  box.textContent = `This cell could not be computed: ${error instanceof Error ? error.message : String(error)}`;
+  box.textContent = `This cell could not be computed: ${messageOf(error)}`;
   return box;
 }
 

@@ -2,6 +2,7 @@ import { signal, effect, type ReadonlySignal } from "@preact/signals-core";
 import type { Study } from "../study/study";
 import { spansOf, type SpanPoint, type SpanRange } from "../comparison/span-study";
 import type { SpanReply, SpanRequest } from "../comparison/span-worker";
+import { messageOf } from "../kernel/errors";
 
 export type SpanStudyState = { status: "running"; points: SpanPoint[] | null } | { status: "done"; points: SpanPoint[]; ms: number; workers: number } | { status: "failed"; error: string };
 
@@ -48,7 +49,7 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
     try {
       spans = spansOf(range.value);
     } catch (error) {
-      state.value = { status: "failed", error: error instanceof Error ? error.message : String(error) };
+      state.value = { status: "failed", error: messageOf(error) };
       return;
     }
     const chunks = workers.map((_, w) => spans.filter((_, i) => i % workers.length === w)).filter((c) => c.length > 0);

@@ -1,5 +1,5 @@
-import type { Study } from "../study/study";
-import type { Brief } from "../study/brief";
+import type { StudyInputs } from "./study-inputs";
+import type { Brief } from "../brief";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
 import { SCHEMES, infeasibleDesign, isDesignAnswer } from "../schemes";
@@ -62,7 +62,7 @@ function attempt<T>(run: () => T): { value: T | null; error: string } {
  * factor table blanks the carbon but not the cost, and the other way round. `error` says why
  * either is missing (both reasons, carbon first).
  */
-export function assessDesign(design: Design, study: Pick<Study, "carbon" | "cost">): Pick<SchemeResult, "carbon" | "cost" | "error"> {
+export function assessDesign(design: Design, study: Pick<StudyInputs, "carbon" | "cost">): Pick<SchemeResult, "carbon" | "cost" | "error"> {
   if (design.takeoff.length === 0) return { carbon: null, cost: null, error: design.feasible ? "no take-off" : "" };
   const areas = { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
   const carbon = attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areas));
@@ -74,7 +74,7 @@ export function assessDesign(design: Design, study: Pick<Study, "carbon" | "cost
  * The whole pipeline for a study: each scheme designed, taken off, and assessed for carbon and
  * cost. Deterministic: the same study gives the same numbers.
  */
-export function evaluateStudy(study: Study, catalogue: Catalogue, options: EvaluateOptions = {}): Evaluation {
+export function evaluateStudy(study: StudyInputs, catalogue: Catalogue, options: EvaluateOptions = {}): Evaluation {
   const brief = options.spanM === undefined ? study.brief : briefAtSpan(study.brief, options.spanM);
   const chosen = options.schemeIds ? SCHEMES.filter((m) => options.schemeIds?.includes(m.id)) : SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
   const results = chosen.map((model) => {

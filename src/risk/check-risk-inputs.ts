@@ -1,6 +1,6 @@
-import type { Study } from "../study/study";
-import { validateStudy } from "../study/study-schema";
-import { validateWith } from "../study/schema-helpers";
+import type { RiskStudy } from "./risk-study";
+import { validateStudyInputs } from "../pipeline/inputs-schema";
+import { validateWith } from "../kernel/validate";
 import { RiskSettingsSchema, type RiskSettings } from "./risk-settings";
 import { applyValues } from "./apply-values";
 import { formatPath, resolveRiskInputs, type ResolvedInput, type RiskInputProblem } from "./resolve-inputs";
@@ -28,10 +28,11 @@ function schemaProblems(settings: RiskSettings, problems: { path: string; messag
  * Checks the risk settings against the study before any work: the settings' own schema (factor
  * and offset ranges that hold the study's value, unique ids and paths); every path finds its row
  * by id and leads to a finite number in the study; no two inputs vary the same value; and the
- * study stays valid with every input at its low end and with every input at its high end (every
- * field's limits are intervals, so then every sample is valid too). Messages name the input.
+ * study's brief, schemes and tables (where every path leads) stay valid with every input at its
+ * low end and with every input at its high end (every field's limits are intervals, so then every
+ * sample is valid too). Messages name the input.
  */
-export function checkRiskInputs(study: Study, settings: RiskSettings = study.risk): RiskInputCheck {
+export function checkRiskInputs(study: RiskStudy, settings: RiskSettings = study.risk): RiskInputCheck {
   const schema = validateWith(RiskSettingsSchema, settings);
   if (!schema.ok) return { problems: schemaProblems(settings, schema.problems), warnings: [], resolved: [] };
   const { inputs, problems } = resolveRiskInputs(study, settings);
@@ -48,7 +49,7 @@ export function checkRiskInputs(study: Study, settings: RiskSettings = study.ris
   const paths = inputs.map((i) => i.path);
   for (const end of ["low", "high"] as const) {
     const moved = applyValues(study, paths, inputs.map((i) => i[end]));
-    const result = validateStudy(moved);
+    const result = validateStudyInputs(moved);
     if (result.ok) continue;
     for (const problem of result.problems) {
       // The input whose value sits at the problem's path, or in the same row (a rate above its row's high).

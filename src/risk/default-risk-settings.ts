@@ -1,5 +1,5 @@
-import type { Study } from "../study/study";
-import { BRIEF_LIMITS } from "../study/brief";
+import type { StudyInputs } from "../pipeline/study-inputs";
+import { BRIEF_LIMITS } from "../brief";
 import { SCHEMES, type UncertaintyKind } from "../schemes";
 import { materialInfo, type MaterialKind } from "../materials";
 import { FACTOR_LIMITS } from "../carbon";
@@ -88,7 +88,7 @@ function spreadInput(
  * the two fabric rates grouped); and the on-cost percentages. Span, rise and the other brief
  * geometry stay fixed. The spreads are DEFAULT_SPREADS (common practice, no source).
  */
-export function defaultRiskSettings(study: Omit<Study, "risk">): RiskSettings {
+export function defaultRiskSettings(study: StudyInputs): RiskSettings {
   const inputs: UncertainInput[] = [];
   const add = (input: UncertainInput | null) => {
     if (input) inputs.push(input);

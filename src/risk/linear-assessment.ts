@@ -1,5 +1,5 @@
 import type { Design } from "../schemes/types";
-import type { Study } from "../study/study";
+import type { RiskStudy } from "./risk-study";
 import { materialCarbon } from "../carbon";
 import { applyOnCosts } from "../cost";
 
@@ -33,7 +33,7 @@ export type Intensities = { carbonPerKg: Map<string, number>; costPerUnit: Map<s
  * Σ quantity × intensity. test/unit/risk/linear-assessment.test.ts checks this against assessDesign.
  * The tables are not validated here: checkRiskInputs validates the study at the ends of every range.
  */
-export function assessmentIntensities(study: Study, materials: Iterable<string>, items: Iterable<string>): Intensities {
+export function assessmentIntensities(study: RiskStudy, materials: Iterable<string>, items: Iterable<string>): Intensities {
   const settings = study.carbon.settings;
   const allowance = 1 + settings.quantityAllowancePct / 100;
   const wastage = { includeA4: settings.countA4, includeC: settings.countC };

@@ -1,7 +1,7 @@
 // From the stored inputs (rows by id, ranges around the study's value) to what a run samples:
 // index paths into this study, and absolute low / mode / high with the mode the study's value.
-import type { Study } from "../study/study";
-import { BRIEF_LIMITS } from "../study/brief";
+import type { RiskStudy } from "./risk-study";
+import { BRIEF_LIMITS } from "../brief";
 import { SCHEMES } from "../schemes";
 import { FACTOR_LIMITS } from "../carbon";
 import { MAX_RATE } from "../cost";
@@ -67,7 +67,7 @@ export function resolvePath(study: unknown, path: readonly PathStep[]): { path: 
  * options, carbon factor fields, and a cost rate's own row low–high. Null elsewhere (the check
  * against the study's schema still applies).
  */
-export function fieldLimits(study: Study, path: IndexPath): { min: number; max: number } | null {
+export function fieldLimits(study: RiskStudy, path: IndexPath): { min: number; max: number } | null {
   const [head, a, b, c] = path;
   if (head === "brief" && typeof a === "string") return (BRIEF_LIMITS as Record<string, { min: number; max: number }>)[a] ?? null;
   if (head === "schemes" && b === "options") {
@@ -92,7 +92,7 @@ export function tidy(x: number): number {
  * factor, or plus an offset) and clamped to the field's allowed range where it is known, so the
  * ends stay valid as the study moves; the mode is the study's value.
  */
-export function resolveInput(study: Study, input: UncertainInput): ResolvedInput | { error: string } {
+export function resolveInput(study: RiskStudy, input: UncertainInput): ResolvedInput | { error: string } {
   const found = resolvePath(study, input.path);
   if ("error" in found) return { error: `input "${input.id}": path ${formatPath(input.path)}: ${found.error}` };
   let node: unknown = study;
@@ -110,7 +110,7 @@ export function resolveInput(study: Study, input: UncertainInput): ResolvedInput
 }
 
 /** Every input resolved against the study, with a problem for each that cannot be. */
-export function resolveRiskInputs(study: Study, settings: RiskSettings = study.risk): { inputs: ResolvedInput[]; problems: RiskInputProblem[] } {
+export function resolveRiskInputs(study: RiskStudy, settings: RiskSettings = study.risk): { inputs: ResolvedInput[]; problems: RiskInputProblem[] } {
   const inputs: ResolvedInput[] = [];
   const problems: RiskInputProblem[] = [];
   for (const input of settings.inputs) {

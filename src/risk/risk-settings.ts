@@ -1,5 +1,5 @@
 import * as v from "valibot";
-import { integerIn, oneOf, textUpTo } from "../study/schema-helpers";
+import { integerIn, oneOf, textUpTo } from "../kernel/validate";
 import { DISTRIBUTION_KINDS, type DistributionKind } from "./distribution";
 
 /**

@@ -1,10 +1,10 @@
-import type { Study } from "../study/study";
+import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel } from "../schemes/types";
 import { SCHEMES } from "../schemes";
 import { evaluateStudy, designScheme, assessDesign, headline } from "../pipeline";
 import { CONCEPT_SCREENING } from "../cost";
-import { getIn } from "../study/patch";
+import { getIn } from "../kernel/patch";
 import { createPrng } from "./prng";
 import { makeDistribution } from "./make-distribution";
 import type { Distribution } from "./distribution";
@@ -76,7 +76,7 @@ function checkCount(value: number, what: string, min: number, max: number): numb
  * @throws Error naming the input for invalid risk settings, or naming samples, designSamples or seed
  * @throws RiskCancelledError when shouldStop returns true
  */
-export function runRisk(study: Study, catalogue: Catalogue, options: RunRiskOptions = {}): RiskResult {
+export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRiskOptions = {}): RiskResult {
   const samples = checkCount(options.samples ?? study.risk.samples, "samples", RISK_LIMITS.samples.min, RISK_LIMITS.samples.max);
   const seed = checkCount(options.seed ?? study.seed, "seed", 0, 2 ** 31 - 1);
   const designSamples = Math.min(samples, checkCount(options.designSamples ?? study.risk.designSamples, "designSamples", RISK_LIMITS.designSamples.min, RISK_LIMITS.designSamples.max));

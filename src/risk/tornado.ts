@@ -1,9 +1,9 @@
-import type { Study } from "../study/study";
+import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
 import { designScheme, assessDesign } from "../pipeline";
-import { setIn } from "../study/patch";
+import { setIn } from "../kernel/patch";
 import { checkRiskInputs } from "./check-risk-inputs";
 import type { ResolvedInput } from "./resolve-inputs";
 
@@ -21,7 +21,7 @@ export type TornadoBar = {
 /** The tornado of one scheme and metric: bars sorted by swing, largest first (NaN swings last). */
 export type Tornado = { scheme: SchemeId; metric: "carbonKgCO2ePerM2Floor" | "costPerM2Floor"; base: number; bars: TornadoBar[] };
 
-function metricsOf(design: Design, study: Pick<Study, "carbon" | "cost">): { carbon: number; cost: number } {
+function metricsOf(design: Design, study: Pick<RiskStudy, "carbon" | "cost">): { carbon: number; cost: number } {
   if (!design.feasible) return { carbon: Number.NaN, cost: Number.NaN };
   const a = assessDesign(design, study);
   return { carbon: a.carbon?.perM2UsableFloor.perM2?.counted ?? Number.NaN, cost: a.cost?.perM2UsableFloor?.total ?? Number.NaN };
@@ -35,7 +35,7 @@ function metricsOf(design: Design, study: Pick<Study, "carbon" | "cost">): { car
  * not show interactions or joint extremes (the Monte Carlo does).
  * @throws Error naming the input for invalid risk settings
  */
-export function riskTornado(study: Study, catalogue: Catalogue): Tornado[] {
+export function riskTornado(study: RiskStudy, catalogue: Catalogue): Tornado[] {
   const check = checkRiskInputs(study);
   if (check.problems.length > 0) throw new Error(`invalid risk inputs: ${check.problems.map((p) => p.message).join("; ")}`);
   const inputs = check.resolved.filter((i) => i.low < i.high);

@@ -1,7 +1,8 @@
 import type { Study } from "./study";
 import { defaultStudy } from "./defaults";
 import { SCHEMES } from "../schemes";
-import { getIn } from "./patch";
+import { BRIEF_FIELDS } from "../brief";
+import { getIn } from "../kernel/patch";
 import { studyToJson } from "./load-study";
 import { defaultRiskSettings } from "../risk/default-risk-settings";
 
@@ -24,28 +25,6 @@ export interface Assumption {
 }
 
 type FieldInfo = { label: string; unit: string; source: string };
-
-/** Labels, units and sources of the brief's fields (the defaults' sources are in src/study/brief.ts). */
-const BRIEF_FIELDS: Record<string, FieldInfo> = {
-  spanM: { label: "Clear span (plan diameter)", unit: "m", source: "brief" },
-  riseM: { label: "Rise above the eaves", unit: "m", source: "brief" },
-  eavesHeightM: { label: "Eaves height", unit: "m", source: "brief" },
-  minClearHeightM: { label: "Minimum clear height for usable floor", unit: "m", source: "brief" },
-  snowGroundKPa: { label: "Ground snow load s_k", unit: "kPa", source: "site (EN 1991-1-3 §4 and national annex)" },
-  windBasicMPerS: { label: "Basic wind velocity v_b", unit: "m/s", source: "site (EN 1991-1-4 §4.2 and national annex)" },
-  terrain: { label: "Terrain category", unit: "", source: "EN 1991-1-4 Table 4.1" },
-  airDensityKgPerM3: { label: "Air density for wind", unit: "kg/m³", source: "EN 1991-1-4 §4.5 note 2" },
-  upliftCoefficient: { label: "Net uplift pressure coefficient", unit: "–", source: "editable assumption (from memory: EN 1991-1-4 Fig. 7.12 crown about −0.8)" },
-  imposedRoofKPa: { label: "Roof imposed load, category H", unit: "kPa", source: "EN 1991-1-1 Table 6.10" },
-  servicesKPa: { label: "Services and hung load", unit: "kPa", source: "common practice, no source" },
-  "factors.gammaGSup": { label: "γ_G,sup", unit: "–", source: "EN 1990 Table A1.2(B)" },
-  "factors.gammaGInf": { label: "γ_G,inf", unit: "–", source: "EN 1990 Table A1.2(B)" },
-  "factors.gammaQ": { label: "γ_Q", unit: "–", source: "EN 1990 Table A1.2(B)" },
-  "factors.xi": { label: "ξ", unit: "–", source: "EN 1990 Table A1.2(B)" },
-  "factors.psi0Snow": { label: "ψ0 snow", unit: "–", source: "EN 1990 Table A1.1" },
-  "factors.psi0Wind": { label: "ψ0 wind", unit: "–", source: "EN 1990 Table A1.1" },
-  ulsExpression: { label: "ULS expression", unit: "", source: "EN 1990 §6.4.3.2" },
-};
 
 const FACTOR_FIELDS: Record<string, FieldInfo> = {
   a1a3KgCO2ePerKg: { label: "A1–A3", unit: "kgCO2e/kg", source: "" },
@@ -104,7 +83,7 @@ function row(group: string, path: (string | number)[], info: FieldInfo, study: S
  */
 export function assumptionsRecord(study: Study, defaults: Study = defaultStudy()): Assumption[] {
   const out: Assumption[] = [];
-  for (const [key, info] of Object.entries(BRIEF_FIELDS)) out.push(row("brief", ["brief", ...key.split(".")], info, study, defaults));
+  for (const { key, label, unit, source } of BRIEF_FIELDS) out.push(row("brief", ["brief", ...key.split(".")], { label, unit, source }, study, defaults));
   for (const model of SCHEMES) {
     out.push(row("scheme", ["schemes", model.id, "enabled"], { label: `${model.label}: compared`, unit: "", source: "study" }, study, defaults));
     for (const spec of model.options) {

@@ -1,4 +1,4 @@
-import { DEFAULT_BRIEF } from "./brief";
+import { DEFAULT_BRIEF } from "../brief";
 import { SCHEMES } from "../schemes";
 import { defaultFactorRows, DEFAULT_CARBON_SETTINGS } from "../carbon";
 import { defaultRateRows, DEFAULT_ON_COSTS } from "../cost";

@@ -1,4 +1,4 @@
-import { diff, mergeDiff } from "./patch";
+import { diff, mergeDiff } from "../kernel/patch";
 import { studyFromObject, type LoadResult } from "./load-study";
 import { defaultRiskSettings } from "../risk/default-risk-settings";
 import type { Study } from "./study";

@@ -1,7 +1,8 @@
 import { migrateStudy } from "./migrate";
 import { validateStudy } from "./study-schema";
-import type { FieldProblem } from "./schema-helpers";
+import type { FieldProblem } from "../kernel/validate";
 import type { Study } from "./study";
+import { messageOf } from "../kernel/errors";
 
 export type LoadResult = { ok: true; study: Study } | { ok: false; problems: FieldProblem[] };
 
@@ -11,7 +12,7 @@ export function studyFromJson(text: string): LoadResult {
   try {
     parsed = JSON.parse(text);
   } catch (error) {
-    return { ok: false, problems: [{ path: "(file)", message: `not valid JSON: ${error instanceof Error ? error.message : String(error)}` }] };
+    return { ok: false, problems: [{ path: "(file)", message: `not valid JSON: ${messageOf(error)}` }] };
   }
   return studyFromObject(parsed);
 }
@@ -22,7 +23,7 @@ export function studyFromObject(parsed: unknown): LoadResult {
   try {
     migrated = migrateStudy(parsed);
   } catch (error) {
-    return { ok: false, problems: [{ path: "schemaVersion", message: error instanceof Error ? error.message : String(error) }] };
+    return { ok: false, problems: [{ path: "schemaVersion", message: messageOf(error) }] };
   }
   return validateStudy(migrated);
 }

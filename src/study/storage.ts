@@ -1,5 +1,6 @@
 import { studyFromJson, studyToJson } from "./load-study";
 import type { Study } from "./study";
+import { messageOf } from "../kernel/errors";
 
 /** The browser-storage key of the current study. */
 export const STORAGE_KEY = "spanbook.study";
@@ -79,6 +80,6 @@ export function writeStoredStudy(store: KeyValueStore, study: Study): string | n
     store.setItem(STORAGE_KEY, studyToJson(study));
     return null;
   } catch (error) {
-    return `could not save to browser storage: ${error instanceof Error ? error.message : String(error)}`;
+    return `could not save to browser storage: ${messageOf(error)}`;
   }
 }

@@ -1,4 +1,4 @@
-import type { Brief } from "../study/brief";
+import type { Brief } from "../brief";
 import { sphericalCap, capHeightAt, type SphericalCap } from "../mechanics/spherical-cap";
 import { capUsableRadiusM } from "../mechanics/usable-floor";
 import { enclosedAirMassKg } from "../mechanics/air";

@@ -5,7 +5,7 @@ import { geodesicDome } from "../../src/schemes/geodesic-dome";
 import type { OptionSpec, OptionValue, SchemeModel, SchemeOptions } from "../../src/schemes/types";
 import { concreteShell } from "../../src/schemes/concrete-shell";
 import { geodesicCap } from "../../src/mechanics";
-import { DEFAULT_BRIEF } from "../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../src/brief";
 import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 
 const catalogue = defaultCatalogue();

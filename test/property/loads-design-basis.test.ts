@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { designBasis, summariseCase, summariseCombination, combinationAtPlanKPa, integrateOverPlan, caseResultants, snowShapeMu3 } from "../../src/loads";
-import { DEFAULT_BRIEF, type Brief } from "../../src/study/brief";
+import { DEFAULT_BRIEF, type Brief } from "../../src/brief";
 import { expectRelClose, expectAbsClose } from "../helpers/close";
 
 /** Briefs across the allowed ranges (rise from 2 % of the span to a hemisphere). */

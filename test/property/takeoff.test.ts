@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { SCHEMES } from "../../src/schemes";
-import { DEFAULT_BRIEF, BRIEF_LIMITS as L, TERRAIN_CATEGORIES } from "../../src/study/brief";
+import { DEFAULT_BRIEF, BRIEF_LIMITS as L, TERRAIN_CATEGORIES } from "../../src/brief";
 import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { designScheme } from "../../src/pipeline";
 

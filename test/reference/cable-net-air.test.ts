@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { cableNet } from "../../src/schemes/cable-net";
-import { DEFAULT_BRIEF } from "../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../src/brief";
 import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 
 // Fact of the trade, no published source: a mast-supported cable-net roof of about 365 m span on

@@ -18,7 +18,7 @@ import {
   type DomeCpe,
 } from "../../src/loads";
 import { sphericalCap } from "../../src/mechanics/spherical-cap";
-import { DEFAULT_BRIEF, DEFAULT_FACTORS } from "../../src/study/brief";
+import { DEFAULT_BRIEF, DEFAULT_FACTORS } from "../../src/brief";
 import { expectAbsClose, expectRelClose } from "../helpers/close";
 
 describe("drifted snow on a dome, EN 1991-1-3 §5.3.5 and Fig. 5.6 (cylindrical-roof rule applied to domes — common practice)", () => {

@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { eq610, eq610a, eq610b, peakVelocityPressure, snowShapeMu3, snowShapeMu1 } from "../../src/loads";
-import { DEFAULT_FACTORS } from "../../src/study/brief";
+import { DEFAULT_FACTORS } from "../../src/brief";
 import { expectAbsClose, expectRelClose } from "../helpers/close";
 
 describe("EN 1990 combinations (Table A1.2(B), recommended factors)", () => {

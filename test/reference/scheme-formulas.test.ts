@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
 import { zoellyPressurePa, zoellyThicknessM, edgeRingTensionN, sphericalMembraneSurfaceLoad, minimumReinforcementRatio, inclinedParabolicCable, PLAIN_CONCRETE_DENSITY_KG_PER_M3, REINFORCED_CONCRETE_DENSITY_KG_PER_M3 } from "../../src/mechanics";
 import { ulsFactors } from "../../src/loads/uls-factors";
-import { DEFAULT_FACTORS } from "../../src/study/brief";
+import { DEFAULT_FACTORS } from "../../src/brief";
 import { expectAbsClose, expectRelClose } from "../helpers/close";
 
 // The published formulas the schemes call (rather than re-deriving them inline).

@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { timberDome } from "../../src/schemes/timber-dome";
-import { DEFAULT_BRIEF } from "../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../src/brief";
 import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 
 // Tacoma Dome (1983), 530 ft = 161.5 m span, glulam lattice dome: its roof "was built with 1.6 million

@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { DrawingLine } from "../kit";
 import { sphericalCap, capHeightAt, type SphericalCap } from "../../mechanics/spherical-cap";
 

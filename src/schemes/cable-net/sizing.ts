@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { Catalogue, ChsSection, Fabric } from "../../catalogue/types";
 import type { RoofActions } from "../../loads/roof-actions";
 import { designPressures } from "../../loads/roof-actions";

@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { MaterialId } from "../../materials";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, MemberGroup, OptionValues } from "../kit";

@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { RoofActions } from "../../loads/roof-actions";
 import { ulsFactors } from "../../loads/uls-factors";
 import { sphericalMembraneForces } from "../../mechanics/spherical-membrane";

@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, MemberGroup, OptionValues } from "../kit";

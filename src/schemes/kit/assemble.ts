@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { Check, Design, DrawingLine, MemberGroup, SchemeId, SchemeModel, SummaryItem } from "../types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";

@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { GlulamClass } from "../../catalogue/types";
 import type { RoofActions } from "../../loads/roof-actions";
 import { sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";

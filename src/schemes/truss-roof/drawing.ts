@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { DrawingLine } from "../kit";
 
 /** Elevation of the longest truss (chords and diagonals) on its columns. */

@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { Catalogue, Cladding } from "../../catalogue/types";
 import type { ChsChoice } from "../../catalogue/pick-chs";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";

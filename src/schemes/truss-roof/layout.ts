@@ -1,4 +1,4 @@
-import type { Brief } from "../../study/brief";
+import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { BucklingCurve } from "../../mechanics/flexural-buckling";
 import type { RoofActions } from "../../loads/roof-actions";

@@ -15,7 +15,7 @@ import {
   TEMPERATURE_DEFAULTS,
 } from "../../../src/loads";
 import { sphericalCap } from "../../../src/mechanics/spherical-cap";
-import { DEFAULT_BRIEF, DEFAULT_FACTORS } from "../../../src/study/brief";
+import { DEFAULT_BRIEF, DEFAULT_FACTORS } from "../../../src/brief";
 import { expectRelClose } from "../../helpers/close";
 
 describe("designCombinations", () => {

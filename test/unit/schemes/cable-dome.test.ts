@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { cableDome } from "../../../src/schemes/cable-dome";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { cableNet } from "../../../src/schemes/cable-net";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
 import { cableNetLayout, circumferentialSpanM } from "../../../src/schemes/cable-net/geometry";

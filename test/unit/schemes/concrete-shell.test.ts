@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import { concreteShell } from "../../../src/schemes/concrete-shell";
 import { minimumReinforcementRatio } from "../../../src/mechanics/concrete";
 import { concreteProperties, zoellyPressurePa } from "../../../src/mechanics";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectAbsClose, expectRelClose } from "../../helpers/close";
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { SCHEMES, checkSchemeOptions } from "../../../src/schemes";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { materialInfo } from "../../../src/materials";
 import { expectRelClose } from "../../helpers/close";

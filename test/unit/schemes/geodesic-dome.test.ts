@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { geodesicDome } from "../../../src/schemes/geodesic-dome";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { defineOptions, defineScheme, failWith, SchemeError, SizingError, isDesignAnswer, infeasibleDesign, convergeSelfWeight, ConvergenceError } from "../../../src/schemes/kit";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 
 const catalogue = defaultCatalogue();

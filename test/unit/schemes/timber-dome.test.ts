@@ -3,7 +3,7 @@ import { timberDome } from "../../../src/schemes/timber-dome";
 import { GLULAM_SECTIONS } from "../../../src/schemes/timber-dome/sections";
 import { memberBands } from "../../../src/schemes/timber-dome/geometry";
 import { geodesicCap, cachedGeodesicCap, sphericalCap, effectiveCharDepthM } from "../../../src/mechanics";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
 

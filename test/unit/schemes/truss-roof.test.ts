@@ -3,7 +3,7 @@ import { trussRoof } from "../../../src/schemes/truss-roof";
 import { trussLayout } from "../../../src/schemes/truss-roof/layout";
 import { gradedBeamDeflectionM } from "../../../src/schemes/truss-roof/truss";
 import { simplySupportedUdl } from "../../../src/mechanics";
-import { DEFAULT_BRIEF } from "../../../src/study/brief";
+import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
 

@@ -1,4 +1,6 @@
-import type { AreaBasis } from "./carbon-settings";
+/** The area a per-m² figure is divided by. */
+export type AreaBasis = "usable-floor" | "covered-plan" | "roof-surface";
+export const AREA_BASES = ["usable-floor", "covered-plan", "roof-surface"] as const;
 
 /** The areas carbon and cost are normalised by, m² (from a Design: usableFloorM2, planAreaM2, roofSurfaceM2). */
 export type AssessmentAreas = {

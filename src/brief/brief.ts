@@ -55,20 +55,6 @@ export interface Brief {
   ulsExpression: UlsExpression;
 }
 
-/** Limits on the brief, used by the schema and the controls. */
-export const BRIEF_LIMITS = {
-  spanM: { min: 30, max: 500 },
-  riseM: { min: 0.5, max: 250 },
-  eavesHeightM: { min: 0, max: 60 },
-  minClearHeightM: { min: 0, max: 60 },
-  snowGroundKPa: { min: 0, max: 10 },
-  windBasicMPerS: { min: 10, max: 60 },
-  airDensityKgPerM3: { min: 1.0, max: 1.4 },
-  upliftCoefficient: { min: 0, max: 2 },
-  imposedRoofKPa: { min: 0, max: 1.0 },
-  servicesKPa: { min: 0, max: 2 },
-} as const;
-
 export const DEFAULT_FACTORS: PartialFactors = {
   gammaGSup: 1.35,
   gammaGInf: 1.0,

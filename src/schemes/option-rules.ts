@@ -1,4 +1,4 @@
-import type { SchemeId, SchemeOptions } from "../schemes/types";
+import type { SchemeId, SchemeOptions } from "./types";
 
 /**
  * Rules across a scheme's options (or on an option beyond its plain range) without which the
@@ -29,7 +29,7 @@ export const OPTION_RULES: readonly OptionRule[] = [
   },
   {
     // The central tension ring of the net is pulled at masts × radial cables per mast / 2 points,
-    // which must be a whole number (src/schemes/cable-net-sizing.ts, ringForceFromPullsN).
+    // which must be a whole number (the cable net's sizing, ringForceFromPullsN).
     scheme: "cable-net",
     option: "radialCablesPerMast",
     reads: ["masts", "radialCablesPerMast"],
