@@ -1,5 +1,5 @@
 import * as v from "valibot";
-import factorsCsv from "../../data/carbon-factors.csv?raw";
+import { dataFileText } from "#data-files";
 import { numberIn, textUpTo } from "../kernel/validate";
 import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "./schema-csv";
 
@@ -119,7 +119,7 @@ let cached: FactorRow[] | undefined;
 
 /** The default factor table from data/carbon-factors.csv (a fresh copy each call). */
 export function defaultFactorRows(): FactorRow[] {
-  cached ??= parseFactorCsv(factorsCsv, "data/carbon-factors.csv");
+  cached ??= parseFactorCsv(dataFileText("carbon-factors.csv"), "data/carbon-factors.csv");
   return cached.map((row) => ({ ...row }));
 }
 

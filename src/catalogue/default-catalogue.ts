@@ -1,18 +1,18 @@
-// The catalogue bundled from data/ (Vite and Vitest resolve `?raw`; the CLI reads the files itself).
-import chs from "../../data/chs-sections.csv?raw";
-import strands from "../../data/strands.csv?raw";
-import fabrics from "../../data/fabrics.csv?raw";
-import claddings from "../../data/claddings.csv?raw";
-import glulam from "../../data/glulam.csv?raw";
+// The catalogue bundled from data/ (its texts come through the one data-file boundary, #data-files).
+import { dataFileText } from "#data-files";
 import { buildCatalogue } from "./build-catalogue";
 import type { Catalogue } from "./types";
-
-export const CATALOGUE_TEXTS = { chs, strands, fabrics, claddings, glulam };
 
 let cached: Catalogue | undefined;
 
 /** The default catalogue, parsed once. */
 export function defaultCatalogue(): Catalogue {
-  cached ??= buildCatalogue(CATALOGUE_TEXTS);
+  cached ??= buildCatalogue({
+    chs: dataFileText("chs-sections.csv"),
+    strands: dataFileText("strands.csv"),
+    fabrics: dataFileText("fabrics.csv"),
+    claddings: dataFileText("claddings.csv"),
+    glulam: dataFileText("glulam.csv"),
+  });
   return cached;
 }

@@ -7,4 +7,4 @@ export { buildCatalogue, type CatalogueTexts } from "./build-catalogue";
 export { pickLightestChs, chsResistance, type ChsDemand, type ChsChoice } from "./pick-chs";
 export { parseCsvTable, CsvError, listProblems, parseDecimal, csvCell, readCsvText, formatCsv, shown, notDecimal, type CsvProblem, type ColumnSpec } from "./csv-table";
 export { pickLightestStrand, strandResistanceN, type StrandChoice, type StrandDesignOptions } from "./pick-strand";
-export { defaultCatalogue, CATALOGUE_TEXTS } from "./default-catalogue";
+export { defaultCatalogue } from "./default-catalogue";

@@ -1,5 +1,5 @@
 import * as v from "valibot";
-import ratesCsv from "../../data/cost-rates.csv?raw";
+import { dataFileText } from "#data-files";
 import { COST_ITEMS } from "../takeoff/takeoff-row";
 import { numberIn, oneOf, textUpTo } from "../kernel/validate";
 import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "../carbon/schema-csv";
@@ -117,7 +117,7 @@ let cached: RateRow[] | undefined;
 
 /** The default (demonstration) rate table from data/cost-rates.csv, a fresh copy each call. */
 export function defaultRateRows(): RateRow[] {
-  cached ??= parseRateCsv(ratesCsv, "data/cost-rates.csv");
+  cached ??= parseRateCsv(dataFileText("cost-rates.csv"), "data/cost-rates.csv");
   return cached.map((row) => ({ ...row }));
 }
 

@@ -1,6 +1,6 @@
 // Risk benchmark (prints figures, asserts nothing):
-//   node --import tsx --import ./scripts/raw-hook.mjs test/bench/risk.ts [N]          node only
-//   BROWSER=1 node --import tsx --import ./scripts/raw-hook.mjs test/bench/risk.ts     also the built page (needs dist/)
+//   node --import tsx test/bench/risk.ts [N]          node only
+//   BROWSER=1 node --import tsx test/bench/risk.ts     also the built page (needs dist/)
 // Node: runRisk on the demo study, N samples (default 10,000) × the registered schemes, split into
 // designs and sampling. Browser: the risk page runs N samples in its worker; wall time from the Run
 // click to the results, the longest main-thread task (PerformanceObserver "longtask") and the
