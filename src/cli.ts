@@ -5,7 +5,7 @@ import { studyFromJson, describeProblems, BRIEF_LIMITS, type Study } from "./stu
 import { SCHEMES } from "./schemes";
 import type { SchemeId } from "./schemes/types";
 import { defaultCatalogue } from "./catalogue/default-catalogue";
-import { formatCsv, parseDecimal, shown } from "./catalogue/csv-table";
+import { formatCsv, parseDecimal, shown } from "./kernel/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
 import { evaluateStudy, headline, tableGaps, describeGaps, type Headline, type SchemeResult, type TableGap } from "./pipeline";

@@ -1,5 +1,5 @@
 import * as v from "valibot";
-import { parseDecimal, notDecimal } from "../catalogue/csv-table";
+import { parseDecimal, notDecimal } from "../kernel/csv-table";
 
 /** The result of checking one edited cell: the updated row, or a message saying what is allowed. */
 export type RowEditResult<R> = { ok: true; row: R } | { ok: false; message: string };

@@ -1,7 +1,7 @@
 import * as v from "valibot";
 import { dataFileText } from "#data-files";
-import { numberIn, textUpTo } from "../kernel/validate";
-import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "./schema-csv";
+import { numberIn, textUpTo, requiredText } from "../kernel/validate";
+import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "../kernel/schema-csv";
 
 /**
  * One material's embodied-carbon factors, per kg of material as delivered. The modules follow
@@ -33,12 +33,6 @@ export type FactorRow = {
   source: string;
   notes: string;
 };
-
-const requiredText = (maxLength: number) =>
-  v.pipe(
-    textUpTo(maxLength),
-    v.minLength(1, () => `empty (a value is required)`),
-  );
 
 /** Limits on each factor; the page's cell editors and the CSV import use the same ones. */
 export const FACTOR_LIMITS = {

@@ -24,7 +24,7 @@ export {
 } from "./carbon-settings";
 
 // CSV with schema-checked rows (shared with cost)
-export { parseSchemaCsv, rowsToCsv, type CsvColumn } from "./schema-csv";
+export { parseSchemaCsv, rowsToCsv, type CsvColumn } from "../kernel/schema-csv";
 
 // Life-cycle modules (EN 15978 as in IStructE, How to calculate embodied carbon, 2nd ed. 2022)
 export { wasteFactor } from "./waste-factor";

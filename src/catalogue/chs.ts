@@ -1,5 +1,6 @@
 import type { ChsSection } from "./types";
-import { parseCsvTable, num, text } from "./csv-table";
+import { numberIn, requiredText } from "../kernel/validate";
+import { csvRowSpec, parseSchemaCsv } from "../kernel/schema-csv";
 
 /** Density of steel for mass per metre, kg/m³ (EN 1991-1-1 Table A.4: 77–78.5 kN/m³; EN 10210-2 uses 7850). */
 export const STEEL_DENSITY_KG_PER_M3 = 7850;
@@ -31,19 +32,16 @@ export function chsFromDimensions(diameterM: number, thicknessM: number, designa
   };
 }
 
+const CHS_FILE = csvRowSpec({
+  designation: { kind: "text", schema: requiredText(60) },
+  d_mm: { kind: "number", schema: numberIn(10, 3000, "mm") },
+  t_mm: { kind: "number", schema: numberIn(1, 120, "mm") },
+  source: { kind: "text", schema: requiredText(300) },
+});
+
 /** Parses `data/chs-sections.csv` (columns designation, d_mm, t_mm, source); sorted by mass. */
 export function parseChsCatalogue(csvText: string): ChsSection[] {
-  const rows = parseCsvTable(
-    csvText,
-    [
-      { name: "designation", kind: "text" },
-      { name: "d_mm", kind: "number", min: 10, max: 3000 },
-      { name: "t_mm", kind: "number", min: 1, max: 120 },
-      { name: "source", kind: "text" },
-    ],
-    "chs-sections.csv",
-  );
-  return rows
-    .map((r) => chsFromDimensions(num(r, "d_mm") / 1000, num(r, "t_mm") / 1000, text(r, "designation")))
+  return parseSchemaCsv(csvText, CHS_FILE.columns, CHS_FILE.schema, "chs-sections.csv")
+    .map((r) => chsFromDimensions(r.d_mm / 1000, r.t_mm / 1000, r.designation))
     .sort((a, b) => a.massKgPerM - b.massKgPerM);
 }

@@ -5,6 +5,7 @@ export { parseStrandCatalogue, parseFabricCatalogue, parseCladdingCatalogue } fr
 export { parseGlulamCatalogue } from "./glulam";
 export { buildCatalogue, type CatalogueTexts } from "./build-catalogue";
 export { pickLightestChs, chsResistance, type ChsDemand, type ChsChoice } from "./pick-chs";
-export { parseCsvTable, CsvError, listProblems, parseDecimal, csvCell, readCsvText, formatCsv, shown, notDecimal, type CsvProblem, type ColumnSpec } from "./csv-table";
+export { CsvError, listProblems, parseDecimal, csvCell, readCsvText, formatCsv, shown, notDecimal, type CsvProblem } from "../kernel/csv-table";
+export { parseCsvTable, type ColumnSpec } from "../kernel/schema-csv";
 export { pickLightestStrand, strandResistanceN, type StrandChoice, type StrandDesignOptions } from "./pick-strand";
 export { defaultCatalogue } from "./default-catalogue";

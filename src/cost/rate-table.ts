@@ -1,8 +1,8 @@
 import * as v from "valibot";
 import { dataFileText } from "#data-files";
 import { COST_ITEMS } from "../takeoff/takeoff-row";
-import { numberIn, oneOf, textUpTo } from "../kernel/validate";
-import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "../carbon/schema-csv";
+import { numberIn, oneOf, textUpTo, requiredText } from "../kernel/validate";
+import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "../kernel/schema-csv";
 
 /** One unit rate of the rate table: cost per `unit` of a COST_ITEMS item at the price base, before on-costs. */
 export type RateRow = {
@@ -30,12 +30,6 @@ const UNIT_OF = new Map<string, string>(COST_ITEMS.map((c) => [c.id, c.unit]));
 export function costItemUnit(item: string): string | undefined {
   return UNIT_OF.get(item);
 }
-
-const requiredText = (maxLength: number) =>
-  v.pipe(
-    textUpTo(maxLength),
-    v.minLength(1, () => `empty (a value is required)`),
-  );
 
 /** Largest rate accepted, currency per unit (guards against a misplaced decimal point). */
 export const MAX_RATE = 1e7;

@@ -14,7 +14,8 @@ function show(value: unknown): string {
 
 /** A finite number in [min, max] with its unit in the message. */
 export function numberIn(min: number, max: number, unit = "") {
-  const allowed = `expected a number from ${min} to ${max}${unit ? ` ${unit}` : ""}`;
+  const range = max === Infinity ? `of at least ${min}` : `from ${min} to ${max}`;
+  const allowed = `expected a number ${range}${unit ? ` ${unit}` : ""}`;
   return v.pipe(
     v.number((issue) => `${show(issue.input)} (${allowed})`),
     v.check((x) => Number.isFinite(x), (issue) => `${show(issue.input)} (${allowed})`),
@@ -45,6 +46,19 @@ export function textUpTo(maxLength: number) {
     v.string((issue) => `${show(issue.input)} (expected text)`),
     v.maxLength(maxLength, (issue) => `text of ${String(issue.input).length} characters (expected at most ${maxLength})`),
   );
+}
+
+/** Text of 1 to maxLength characters (ids, labels, sources). */
+export function requiredText(maxLength: number) {
+  return v.pipe(
+    textUpTo(maxLength),
+    v.minLength(1, () => `empty (a value is required)`),
+  );
+}
+
+/** A finite number of at least `min` (no upper limit) with its unit in the message. */
+export function numberAtLeast(min: number, unit = "") {
+  return numberIn(min, Infinity, unit);
 }
 
 /** A boolean. */

@@ -3,7 +3,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { csvParse, csvFormatRows } from "d3";
-import { csvObjects } from "../../src/catalogue/csv-table";
+import { csvObjects } from "../../src/kernel/csv-table";
 
 describe("csvObjects", () => {
   it("gives what d3's csvParse gives: quoted cells, short rows, blank lines, no rows", () => {

@@ -1,5 +1,6 @@
 import * as v from "valibot";
-import { CsvError, csvObjects, formatCsv, parseDecimal, readCsvText, shown, type CsvProblem } from "../catalogue/csv-table";
+import { numberIn, oneOf, requiredText } from "./validate";
+import { CsvError, csvObjects, formatCsv, parseDecimal, readCsvText, shown, type CsvProblem } from "./csv-table";
 
 /**
  * Reading and writing a CSV table whose rows are checked by a valibot schema, so the ranges a
@@ -94,4 +95,35 @@ export function parseSchemaCsv<S extends v.GenericSchema>(
 export function rowsToCsv(rows: readonly Record<string, unknown>[], columns: readonly CsvColumn[]): string {
   const records = rows.map((row) => Object.fromEntries(columns.map((c) => [c.column, row[c.field]])));
   return `${formatCsv(records, columns.map((c) => c.column))}\n`;
+}
+
+/** One column of a file whose headers are the row's own keys: the kind of cell and its schema. */
+export type CsvCell = { kind: CsvColumn["kind"]; schema: v.GenericSchema };
+
+/**
+ * The columns and row schema of a CSV file whose header names are the row's keys (the catalogue
+ * files), from one declaration per column, in file order.
+ */
+export function csvRowSpec<E extends Record<string, CsvCell>>(cells: E) {
+  const columns: CsvColumn[] = Object.entries(cells).map(([column, cell]) => ({ column, field: column, kind: cell.kind }));
+  const entries = Object.fromEntries(Object.entries(cells).map(([key, cell]) => [key, cell.schema])) as { [K in keyof E]: E[K]["schema"] };
+  return { columns, schema: v.object(entries) };
+}
+
+/** A column by name and kind, with a range for numbers or a list of choices for text. */
+export type ColumnSpec = { name: string; kind: "number"; min?: number; max?: number } | { name: string; kind: "text"; choices?: readonly string[] };
+
+function specSchema(spec: ColumnSpec): v.GenericSchema {
+  if (spec.kind === "text") return spec.choices ? oneOf(spec.choices as unknown as readonly [string, ...string[]]) : requiredText(10_000);
+  return numberIn(spec.min ?? -Infinity, spec.max ?? Infinity);
+}
+
+/**
+ * Parses CSV text against a plain column list, by the same reader as every other table
+ * (parseSchemaCsv): each bad cell with its line and column, a capped list in the message.
+ * @throws CsvError listing each bad cell
+ */
+export function parseCsvTable(text: string, columns: readonly ColumnSpec[], fileLabel: string): Record<string, string | number>[] {
+  const spec = csvRowSpec(Object.fromEntries(columns.map((c) => [c.name, { kind: c.kind, schema: specSchema(c) }])));
+  return parseSchemaCsv(text, spec.columns, spec.schema, fileLabel) as Record<string, string | number>[];
 }
