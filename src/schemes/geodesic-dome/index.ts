@@ -5,7 +5,8 @@ import type { Check, DesignParts, MemberGroup, OptionValues } from "../kit";
 import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, CLADDING_CHOICES, STEEL_GRADE_CHOICES, SchemeError } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { capUsableRadiusM } from "../../mechanics/usable-floor";
-import { CapTooSmallError, geodesicCap, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
+import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
+import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
 import { hoopSignChangeAngleRad } from "../../mechanics/spherical-membrane";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { roofActions } from "../../loads/roof-actions";
@@ -40,25 +41,12 @@ export type GeodesicDomeOptions = OptionValues<typeof declarations>;
 /** Usual upper span of a single-layer lattice dome, m (from memory: single-layer braced domes to ≈ 100 m, double-layer beyond). */
 const SINGLE_LAYER_USUAL_MAX_SPAN_M = 100;
 
-/** The last few generated caps: the same geometry is asked for again whenever only loads, factors or rates change (compare page, risk runs). Read-only. */
-const capCache = new Map<string, GeodesicCap>();
-function cachedCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
-  const key = `${frequency}|${radiusM}|${capAngleRad}`;
-  let mesh = capCache.get(key);
-  if (!mesh) {
-    mesh = geodesicCap(frequency, radiusM, capAngleRad);
-    if (capCache.size >= 16) capCache.delete(capCache.keys().next().value as string);
-    capCache.set(key, mesh);
-  }
-  return mesh;
-}
-
 /** The geodesic mesh at the frequency whose mean strut meets the target length; a SchemeError when none can be made. */
 function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, section: ReturnType<typeof latticeSection>): { frequency: number; mesh: GeodesicCap } {
   const frequency = geodesicFrequencyFor(cap.radiusM, targetStrutLengthM);
   if (frequency > 400) throw new SchemeError(`the mesh would need frequency ${frequency} (over 400): increase the target strut length`, { section });
   try {
-    return { frequency, mesh: cachedCap(frequency, cap.radiusM, cap.edgeAngleRad) };
+    return { frequency, mesh: cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad) };
   } catch (e) {
     if (e instanceof CapTooSmallError) throw new SchemeError("the mesh is too coarse for so small a cap: reduce the target strut length", { cause: e, section });
     throw e;
