@@ -1,7 +1,7 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, GlulamClass } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
-import type { Check, MemberGroup, OptionSpec, SchemeModel } from "../types";
+import type { Check, DesignParts, DrawingLine, MemberGroup, OptionValues } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { capUsableRadiusM } from "../../mechanics/usable-floor";
 import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
@@ -12,40 +12,51 @@ import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-cree
 import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "../../mechanics/timber-charring";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { roofActions } from "../../loads/roof-actions";
-import { assembleDesign, check, infeasibleDesign, iterateSelfWeight, ConvergenceError, checkSchemeOptions } from "../kit";
+import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, SchemeError } from "../kit";
 import { ulsFactors } from "../../loads/uls-factors";
 import { memberBands } from "./geometry";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
 import { timberPlan, timberSection } from "./drawing";
 
-export type TimberDomeOptions = {
-  /** Target mean member length, m. */
-  memberLengthM: number;
-  strengthClass: string;
-  serviceClass: string;
-  snowDuration: string;
-  /** Knock-down on the classical buckling pressure, –. */
-  knockDown: number;
-  bands: number;
-  purlinSpacingM: number;
-  /** Steel connectors, kg per m³ of glulam. */
-  connectorKgPerM3: number;
-  /** Standard fire resistance asked of the timber, min (0 = none). */
-  fireMinutes: number;
-};
+const GLULAM_CHOICES = ["GL24h", "GL28h", "GL30h", "GL32h"].map((value) => ({ value, label: `${value} (EN 14080)` }));
 
-const defaults: TimberDomeOptions = {
-  memberLengthM: 10, // Superior Dome (163 m): 781 members over ≈ 21,000 m² of plan → ≈ 10 m members (derived from the published count)
-  strengthClass: "GL28h",
-  serviceClass: "2", // covered heated buildings are SC1; SC2 is the safe side (common practice, no source)
-  snowDuration: "short-term", // EN 1995-1-1 Table 2.2 note: snow short- or medium-term by site (from memory)
-  knockDown: 0.3, // lattice shells reach 0.2–0.4 of p_cl with imperfections (from memory; cf. Kollár & Dulácska)
-  bands: 4,
-  purlinSpacingM: 2.4, // common practice, no source
-  connectorKgPerM3: 50, // steel hubs, plates and dowels ≈ 5–15 % of the timber mass (common practice, no source)
-  fireMinutes: 0,
-};
+const declarations = {
+  // Superior Dome (163 m): 781 members over ≈ 21,000 m² of plan → ≈ 10 m members (derived from the published count)
+  memberLengthM: { kind: "number", label: "Target member length", unit: "m", min: 4, max: 20, step: 0.5, default: 10, source: "mesh size; ≈ 10 m in the 163 m Superior Dome (781 members), frequency v = round(1.2 R / L)" },
+  strengthClass: { kind: "select", label: "Glulam strength class", choices: GLULAM_CHOICES, default: "GL28h", source: "EN 14080:2013 Table 5 (data/glulam.csv)" },
+  // covered heated buildings are SC1; SC2 is the safe side (common practice, no source)
+  serviceClass: {
+    kind: "select",
+    label: "Service class",
+    choices: [
+      { value: "1", label: "1: heated, enclosed" },
+      { value: "2", label: "2: covered, unheated" },
+      { value: "3", label: "3: exposed" },
+    ],
+    default: "2",
+    source: "EN 1995-1-1 §2.3.1.3; sets k_mod (Table 3.1) and k_def (Table 3.2)",
+  },
+  // EN 1995-1-1 Table 2.2 note: snow short- or medium-term by site (from memory)
+  snowDuration: {
+    kind: "select",
+    label: "Load-duration class of snow",
+    choices: [
+      { value: "short-term", label: "Short-term" },
+      { value: "medium-term", label: "Medium-term" },
+    ],
+    default: "short-term",
+    source: "EN 1995-1-1 Table 2.2 and its national annexes (from memory)",
+  },
+  // lattice shells reach 0.2–0.4 of p_cl with imperfections (from memory; cf. Kollár & Dulácska)
+  knockDown: { kind: "number", label: "Buckling knock-down on p_cl", unit: "", min: 0.05, max: 1, step: 0.05, default: 0.3, source: "imperfection sensitivity of lattice shells, from memory 0.2–0.4; timber joints are semi-rigid (the low end is prudent)", uncertainty: "knock-down" },
+  bands: { kind: "number", label: "Member size bands, crown to edge", unit: "", min: 1, max: 12, step: 1, integer: true, default: 4, source: "grouping of alike members" },
+  purlinSpacingM: { kind: "number", label: "Purlin spacing", unit: "m", min: 0.6, max: 5, step: 0.1, default: 2.4, source: "common practice 1.2–3 m, no source" },
+  // steel hubs, plates and dowels ≈ 5–15 % of the timber mass (common practice, no source)
+  connectorKgPerM3: { kind: "number", label: "Steel connectors", unit: "kg per m³ of glulam", min: 0, max: 200, step: 5, default: 50, source: "allowance for hubs, plates and dowels, common practice, no source", uncertainty: "allowance" },
+  fireMinutes: { kind: "number", label: "Fire resistance (charring added)", unit: "min", min: 0, max: 120, step: 15, integer: true, default: 0, source: "EN 1995-1-2 §3.4 (β_n 0.7 mm/min) and §4.2.2 (d_ef = β_n t + 7 mm)" },
+} as const;
+export type TimberDomeOptions = OptionValues<typeof declarations>;
 
 /** Single-ply roofing membrane on the deck, kg/m²: 1.5 mm PVC reinforced with polyester at about 1.4 t/m³ (from memory); its carbon is that of the PVC-coated polyester fabric row (the same two materials). */
 const MEMBRANE_KG_PER_M2 = 2.1;
@@ -53,41 +64,6 @@ const MEMBRANE_KG_PER_M2 = 2.1;
 const RING_YIELD_PA = 355e6;
 /** Deck boards: C24 softwood (EN 338, from memory f_m,k 24 MPa) taken at the GL24h row, γ_M of solid timber. */
 const DECK_CLASS = "GL24h";
-
-const GLULAM_CHOICES = ["GL24h", "GL28h", "GL30h", "GL32h"].map((value) => ({ value, label: `${value} (EN 14080)` }));
-
-const options = [
-  { key: "memberLengthM", label: "Target member length", kind: "number", unit: "m", min: 4, max: 20, step: 0.5, source: "mesh size; ≈ 10 m in the 163 m Superior Dome (781 members), frequency v = round(1.2 R / L)" },
-  { key: "strengthClass", label: "Glulam strength class", kind: "select", unit: "", choices: GLULAM_CHOICES, source: "EN 14080:2013 Table 5 (data/glulam.csv)" },
-  {
-    key: "serviceClass",
-    label: "Service class",
-    kind: "select",
-    unit: "",
-    choices: [
-      { value: "1", label: "1: heated, enclosed" },
-      { value: "2", label: "2: covered, unheated" },
-      { value: "3", label: "3: exposed" },
-    ],
-    source: "EN 1995-1-1 §2.3.1.3; sets k_mod (Table 3.1) and k_def (Table 3.2)",
-  },
-  {
-    key: "snowDuration",
-    label: "Load-duration class of snow",
-    kind: "select",
-    unit: "",
-    choices: [
-      { value: "short-term", label: "Short-term" },
-      { value: "medium-term", label: "Medium-term" },
-    ],
-    source: "EN 1995-1-1 Table 2.2 and its national annexes (from memory)",
-  },
-  { key: "knockDown", label: "Buckling knock-down on p_cl", kind: "number", unit: "", min: 0.05, max: 1, step: 0.05, source: "imperfection sensitivity of lattice shells, from memory 0.2–0.4; timber joints are semi-rigid (the low end is prudent)" },
-  { key: "bands", label: "Member size bands, crown to edge", kind: "number", unit: "", min: 1, max: 12, step: 1, integer: true, source: "grouping of alike members" },
-  { key: "purlinSpacingM", label: "Purlin spacing", kind: "number", unit: "m", min: 0.6, max: 5, step: 0.1, source: "common practice 1.2–3 m, no source" },
-  { key: "connectorKgPerM3", label: "Steel connectors", kind: "number", unit: "kg per m³ of glulam", min: 0, max: 200, step: 5, source: "allowance for hubs, plates and dowels, common practice, no source" },
-  { key: "fireMinutes", label: "Fire resistance (charring added)", kind: "number", unit: "min", min: 0, max: 120, step: 15, integer: true, source: "EN 1995-1-2 §3.4 (β_n 0.7 mm/min) and §4.2.2 (d_ef = β_n t + 7 mm)" },
-] as const satisfies readonly OptionSpec[];
 
 function findGlulam(catalogue: Catalogue, strengthClass: string): GlulamClass {
   const found = catalogue.glulam.find((g) => g.strengthClass === strengthClass);
@@ -199,14 +175,14 @@ function timberSummary(r: TimberLatticeResult, mesh: GeodesicCap, frequency: num
   ];
 }
 
-/** The geodesic mesh at the frequency whose mean member meets the target length, or the reason there is none. */
-function latticeMesh(cap: SphericalCap, memberLengthM: number): { frequency: number; mesh: GeodesicCap } | string {
+/** The geodesic mesh at the frequency whose mean member meets the target length; a SchemeError when none can be made. */
+function latticeMesh(cap: SphericalCap, memberLengthM: number, failure: { warnings: string[]; section: DrawingLine[] }): { frequency: number; mesh: GeodesicCap } {
   const frequency = geodesicFrequencyFor(cap.radiusM, memberLengthM);
-  if (frequency > 200) return `the mesh would need frequency ${frequency} (over 200): lengthen the members`;
+  if (frequency > 200) throw new SchemeError(`the mesh would need frequency ${frequency} (over 200): lengthen the members`, failure);
   try {
     return { frequency, mesh: cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad) };
   } catch (e) {
-    if (e instanceof CapTooSmallError) return "the mesh is too coarse for so small a cap: shorten the members";
+    if (e instanceof CapTooSmallError) throw new SchemeError("the mesh is too coarse for so small a cap: shorten the members", { ...failure, cause: e });
     throw e;
   }
 }
@@ -217,30 +193,25 @@ function latticeMesh(cap: SphericalCap, memberLengthM: number): { frequency: num
  * general buckling with the creep-reduced stiffness, purlins and deck, optional charring, steel
  * connectors as an allowance and a steel tension ring; self-weight iterated to convergence.
  */
-function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue) {
-  checkSchemeOptions(options, opts);
+function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): DesignParts {
   const cap = sphericalCap(brief.spanM, brief.riseM);
   const warnings = timberWarnings(opts);
-  const latticed = latticeMesh(cap, opts.memberLengthM);
-  if (typeof latticed === "string") return infeasibleDesign("timber-dome", brief, latticed, warnings, timberSection(brief, 0));
-  const { frequency, mesh } = latticed;
+  const { frequency, mesh } = latticeMesh(cap, opts.memberLengthM, { warnings, section: timberSection(brief, 0) });
   const inputs = latticeInputs(brief, opts, catalogue, cap, mesh);
-  let converged;
-  try {
-    converged = iterateSelfWeight<TimberLatticeResult>((g) => {
+  const converged = convergeSelfWeight<TimberLatticeResult>(
+    (g) => {
       const r = sizeTimberLattice(inputs, g);
       return { value: r, selfWeightKPa: r.failure ? g : timberSelfWeightKPa(r, cap.surfaceM2) };
-    }, kPaFromKgPerM2(60));
-  } catch (e) {
-    if (e instanceof ConvergenceError) return infeasibleDesign("timber-dome", brief, e.message, warnings, timberSection(brief, 0));
-    throw e;
-  }
+    },
+    kPaFromKgPerM2(60),
+    { section: timberSection(brief, 0) },
+  );
   const r = converged.value;
   const depthM = Math.max(0, ...r.bands.map((b) => b.section.depthM));
-  if (r.failure) return infeasibleDesign("timber-dome", brief, r.failure, warnings, timberSection(brief, depthM));
+  if (r.failure) throw new SchemeError(r.failure, { warnings, section: timberSection(brief, depthM) });
   const { members, checks } = timberMembers(r, inputs.charDepthM);
   const usableRadius = capUsableRadiusM(cap.radiusM, brief.riseM, cap.baseRadiusM, brief.eavesHeightM, depthM, brief.minClearHeightM);
-  return assembleDesign(timberDome, brief, {
+  return {
     summary: timberSummary(r, mesh, frequency, cap),
     members,
     takeoff: timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3),
@@ -248,13 +219,12 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue) {
     warnings,
     iterations: converged.iterations,
     usableFloorM2: Math.PI * usableRadius * usableRadius,
-    roofSurfaceM2: cap.surfaceM2,
-    enclosedVolumeM3: cap.planAreaM2 * brief.eavesHeightM + cap.volumeM3,
+    ...capEnvelope(cap, brief.eavesHeightM),
     drawing: { section: timberSection(brief, depthM), plan: timberPlan(mesh) },
-  });
+  };
 }
 
-export const timberDome: SchemeModel<TimberDomeOptions> = {
+export const timberDome = defineScheme({
   id: "timber-dome",
   label: "Glulam timber dome",
   colour: "#D55E00",
@@ -262,7 +232,6 @@ export const timberDome: SchemeModel<TimberDomeOptions> = {
     "A single-layer lattice of glued-laminated timber members on a three-way geodesic grid, with purlins, a board deck and a roofing membrane, cut to a spherical cap on a steel tension ring. The triangulated grid is chosen over ribs and rings because it carries unbalanced load by in-plane action with straight members of nearly one length, as in the two largest built timber domes (Tacoma, 161.5 m; Superior Dome, 163.4 m). Members are designed to EN 1995-1-1 for axial force with the bending of the panel load, the lattice for general buckling with creep-reduced stiffness; fire resistance adds charring to each member.",
   // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (Tacoma Dome, 1983) and 163.4 m (Superior Dome, 1991), published figures.
   validSpanM: { min: 40, max: 165 },
-  options,
-  defaults,
+  options: defineOptions(declarations),
   design,
-};
+});

@@ -1,7 +1,7 @@
 import type { Brief } from "../../brief";
 import type { GlulamClass } from "../../catalogue/types";
 import type { RoofActions } from "../../loads/roof-actions";
-import { sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";
+import { edgeRingTensionN, sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";
 import { threeWayGridBarForces, threeWayGridStiffness } from "../../mechanics/three-way-grid";
 import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
 import { simplySupportedUdl } from "../../mechanics/beam";
@@ -155,7 +155,7 @@ function sizeBands(input: TimberLatticeInputs, cases: LoadCase[], pressurePa: nu
 /** The steel tension ring for the edge thrust: T = |N_φ| cos φ0 · a (Timoshenko & Woinowsky-Krieger ch. 14 §129), A = T/f_y (EN 1993-1-1 eq. 6.6, γ_M0 = 1.0) rounded up to a 25 cm² step of plate. */
 function tensionRing(input: TimberLatticeInputs, c: LoadCase): { tensionN: number; areaM2: number; massKg: number } {
   const edge = sphericalMembraneForces(c.surfacePa, c.planPa, input.radiusM, Math.min(input.capAngleRad, Math.PI / 2 - 1e-9));
-  const tensionN = Math.abs(edge.meridionalNPerM) * Math.cos(input.capAngleRad) * input.baseRadiusM;
+  const tensionN = edgeRingTensionN(edge.meridionalNPerM, input.capAngleRad, input.baseRadiusM);
   const areaM2 = Math.max(25e-4, Math.ceil(tensionN / input.ringYieldPa / 25e-4) * 25e-4);
   return { tensionN, areaM2, massKg: areaM2 * 2 * Math.PI * input.baseRadiusM * STEEL_DENSITY_KG_PER_M3 };
 }
