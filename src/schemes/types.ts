@@ -1,7 +1,7 @@
 import type { Brief } from "../brief";
 import type { Catalogue } from "../catalogue/types";
 import type { MaterialId } from "../materials";
-import type { TakeoffRow } from "../takeoff/takeoff-row";
+import type { TakeoffGroup, TakeoffRow } from "../takeoff/takeoff-row";
 
 export type SchemeId = "cable-dome" | "cable-net" | "geodesic-dome" | "truss-roof" | "concrete-shell" | "timber-dome";
 
@@ -31,6 +31,8 @@ export type OptionSpec =
       source: string;
       /** Set when the value is uncertain at concept stage (the risk page offers it a range). */
       uncertainty?: UncertaintyKind;
+      /** A free proportion: the pipeline may search it within [min, max] (step / integer respected) unless the user pins it. */
+      free?: boolean;
     }
   | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string }
   | { key: string; label: string; kind: "toggle"; unit: ""; source: string };
@@ -81,10 +83,48 @@ export interface DrawingLine {
   points: readonly (readonly [number, number])[];
 }
 
+/** feasible: checks pass and the span is in range; out-of-range: outside the method's valid span; infeasible: a reason. */
+export type DesignStatus = "feasible" | "out-of-range" | "infeasible";
+
+/** Mass by the four groups of the one accounting, kg. */
+export type MassByGroupKg = Record<TakeoffGroup, number>;
+
+/**
+ * What stands over and on the floor, for the usable floor by one rule: `soffit` = (radius from the
+ * centre, m; height of the structure's lowest members above the floor, m) along a radius;
+ * `supports` = things standing on the floor inside the plan (masts) with their clear zones.
+ */
+export interface FloorEnvelope {
+  soffit: readonly (readonly [number, number])[];
+  supports: readonly { radiusM: number; clearRadiusM: number; count: number }[];
+}
+
+/** A 3D model drawn in projection: nodes (x, y, z m, z up from the floor), members with their forces under `caseName`. */
+export interface AnalysisView {
+  caseName: string;
+  nodes: readonly (readonly [number, number, number])[];
+  members: readonly { a: number; b: number; kind: "cable" | "strut" | "beam"; forceN: number; utilisation?: number; slack?: boolean }[];
+  displacementsM?: readonly (readonly [number, number, number])[];
+  modeShape?: readonly (readonly [number, number, number])[];
+}
+
+/** What a scheme's 3D analysis found, per design combination. */
+export interface DesignAnalysis {
+  loadCases: { name: string; iterations: number; converged: boolean; maxDisplacementM: number; slackMembers: number }[];
+  prestressKN?: number;
+  bucklingFactor?: number;
+  continuumBucklingFactor?: number;
+  view?: AnalysisView;
+}
+
 /** The preliminary design of one scheme for one brief: plain data, comparable and serialisable. */
 export interface Design {
   schemeId: SchemeId;
   feasible: boolean;
+  /** Only "feasible" is ranked, called best, used in crossovers and on the Pareto front. */
+  status: DesignStatus;
+  /** Name of the design combination that governed (src/loads designCombinations), "" when none. */
+  governingLoadCase: string;
   /** Why it is infeasible, in words a person can act on; "" when feasible. */
   reason: string;
   /** Span outside the method's valid range (still computed where possible). */
@@ -96,6 +136,8 @@ export interface Design {
   warnings: string[];
   /** Self-weight iterations to converge. */
   iterations: number;
+  /** Mass by group (structure, perimeter, substructure, envelope), kg; sums to totalMassKg. */
+  massByGroupKg: MassByGroupKg;
   /** Total structure and envelope mass, kg (sum of take-off masses, substructure included). */
   totalMassKg: number;
   /** Mass of the roof itself, kg: the total less substructure (ground anchors, dead-weight blocks). */
@@ -114,6 +156,8 @@ export interface Design {
   governing: string;
   maxUtilisation: number;
   drawing: { section: DrawingLine[]; plan?: DrawingLine[] };
+  /** The 3D analysis, where the scheme ran one. */
+  analysis?: DesignAnalysis;
 }
 
 /** A scheme: its description, its valid range, its options and its designer. */
@@ -126,6 +170,8 @@ export interface SchemeModel<O extends SchemeOptions = SchemeOptions, Id extends
   description: string;
   /** Span range in which the method is valid, m. */
   validSpanM: { min: number; max: number };
+  /** The rise ÷ span the scheme may take when each scheme chooses its own rise. */
+  riseSpanRatio?: { min: number; max: number; preferred: number };
   options: readonly OptionSpec[];
   defaults: O;
   /** Preliminary design. Never throws for a valid brief: infeasible is an answer. */

@@ -4,6 +4,13 @@ import type { MaterialId } from "../materials";
 export type QuantityUnit = "t" | "m" | "m2" | "m3" | "nr";
 
 /**
+ * Which part of the building a take-off row belongs to, one accounting for every scheme: the roof
+ * structure, the perimeter support (rings, edge beams), the substructure (anchors, columns,
+ * foundations — an allowance, not designed) and the envelope (fabric, cladding, deck).
+ */
+export type TakeoffGroup = "structure" | "perimeter" | "substructure" | "envelope";
+
+/**
  * One line of a scheme's quantity take-off. Carbon reads `material` and `massKg`; cost reads
  * `costItem`, `quantity` and `unit`. A row with no material (formwork, say) carries no carbon.
  */
@@ -19,6 +26,8 @@ export interface TakeoffRow {
   unit: QuantityUnit;
   /** Mass of material, kg (0 for rows with no material). */
   massKg: number;
+  /** Its group; assembleDesign fills it by `takeoffGroupOf` where a scheme leaves it out. */
+  group?: TakeoffGroup;
 }
 
 /** The items of the rate table a take-off row can be priced with, each with the unit its rate is per. */

@@ -1,6 +1,7 @@
 import type { Brief } from "../../brief";
-import type { Check, Design, DrawingLine, MemberGroup, SchemeId, SchemeModel, SummaryItem } from "../types";
-import type { TakeoffRow } from "../../takeoff/takeoff-row";
+import type { Check, Design, DesignAnalysis, DesignStatus, DrawingLine, FloorEnvelope, MassByGroupKg, MemberGroup, SchemeId, SchemeModel, SummaryItem } from "../types";
+import type { TakeoffGroup, TakeoffRow } from "../../takeoff/takeoff-row";
+import { usableFloorM2 } from "./usable-floor";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { enclosedAirMassKg } from "../../mechanics/air";
 
@@ -11,7 +12,14 @@ export interface DesignParts {
   checks: Check[];
   warnings: string[];
   iterations: number;
-  usableFloorM2: number;
+  /** Usable floor, m² — or give `floor` and the kit finds it by the one rule (usableFloorM2). */
+  usableFloorM2?: number;
+  /** Soffit and supports on the floor: the usable floor by the one rule, drawn on the section. */
+  floor?: FloorEnvelope;
+  /** Name of the design combination that governed ("" by default). */
+  governingLoadCase?: string;
+  /** The 3D analysis, where the scheme ran one. */
+  analysis?: DesignAnalysis;
   roofSurfaceM2: number;
   /** Enclosed volume, m³ (walls to eaves plus the roof's own volume). */
   enclosedVolumeM3: number;
@@ -25,9 +33,35 @@ export function capEnvelope(cap: SphericalCap, eavesHeightM: number): Pick<Desig
   return { roofSurfaceM2: cap.surfaceM2, enclosedVolumeM3: cap.planAreaM2 * eavesHeightM + cap.volumeM3 };
 }
 
-/** Take-off rows that are substructure, not roof: ground anchors and dead-weight foundations. */
+/** Cost items whose rows are envelope when a scheme gives no group. */
+const ENVELOPE_ITEMS: readonly string[] = ["fabric-ptfe-glass", "fabric-pvc-polyester", "etfe-cushion", "glazing", "metal-deck", "timber-deck", "roofing-membrane"];
+
+/**
+ * A row's group: its own, else by its cost item — anchors and perimeter columns substructure,
+ * steel rings perimeter, fabric, cladding and decks envelope, the rest structure.
+ */
+export function takeoffGroupOf(row: TakeoffRow): TakeoffGroup {
+  if (row.group) return row.group;
+  if (row.costItem === "anchor" || row.costItem === "steel-column") return "substructure";
+  if (row.costItem === "steel-ring") return "perimeter";
+  return ENVELOPE_ITEMS.includes(row.costItem) ? "envelope" : "structure";
+}
+
+/** Take-off rows that are substructure, not roof: ground anchors, columns and dead-weight foundations. */
 export function isSubstructure(row: TakeoffRow): boolean {
-  return row.costItem === "anchor";
+  return takeoffGroupOf(row) === "substructure";
+}
+
+/** Mass by the four groups, kg. */
+export function massByGroupKg(takeoff: readonly TakeoffRow[]): MassByGroupKg {
+  const mass: MassByGroupKg = { structure: 0, perimeter: 0, substructure: 0, envelope: 0 };
+  for (const row of takeoff) mass[takeoffGroupOf(row)] += row.massKg;
+  return mass;
+}
+
+/** The status from the verdicts: infeasible when there is a reason, else out-of-range outside the valid span, else feasible. */
+export function designStatus(reason: string, outsideValidRange: boolean): DesignStatus {
+  return reason !== "" ? "infeasible" : outsideValidRange ? "out-of-range" : "feasible";
 }
 
 /**
@@ -36,8 +70,10 @@ export function isSubstructure(row: TakeoffRow): boolean {
  */
 export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "label">, brief: Brief, parts: DesignParts): Design {
   const planAreaM2 = Math.PI * (brief.spanM / 2) ** 2;
-  const totalMassKg = parts.takeoff.reduce((sum, row) => sum + row.massKg, 0);
-  const roofMassKg = totalMassKg - parts.takeoff.filter(isSubstructure).reduce((sum, row) => sum + row.massKg, 0);
+  const takeoff = parts.takeoff.map((row) => ({ ...row, group: takeoffGroupOf(row) }));
+  const byGroup = massByGroupKg(takeoff);
+  const totalMassKg = takeoff.reduce((sum, row) => sum + row.massKg, 0);
+  const roofMassKg = totalMassKg - byGroup.substructure;
   const governingCheck = parts.checks.reduce<Check | undefined>((worst, c) => (worst === undefined || c.utilisation > worst.utilisation ? c : worst), undefined);
   const failed = parts.checks.filter((c) => !c.passed);
   const outsideValidRange = brief.spanM < model.validSpanM.min || brief.spanM > model.validSpanM.max;
@@ -54,24 +90,28 @@ export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "l
   return {
     schemeId: model.id,
     feasible: reason === "",
+    status: designStatus(reason, outsideValidRange),
+    governingLoadCase: parts.governingLoadCase ?? "",
     reason,
     outsideValidRange,
     summary: parts.summary,
     members: parts.members,
-    takeoff: parts.takeoff,
+    takeoff,
+    massByGroupKg: byGroup,
     checks: parts.checks,
     warnings,
     iterations: parts.iterations,
     totalMassKg,
     roofMassKg,
     selfWeightKgPerM2: roofMassKg / planAreaM2,
-    usableFloorM2: parts.usableFloorM2,
+    usableFloorM2: parts.floor ? usableFloorM2(brief, parts.floor) : (parts.usableFloorM2 ?? 0),
     planAreaM2,
     roofSurfaceM2: parts.roofSurfaceM2,
     enclosedAirKg: enclosedAirMassKg(parts.enclosedVolumeM3),
     governing: governingCheck ? governingCheck.name : "",
     maxUtilisation: governingCheck ? governingCheck.utilisation : 0,
     drawing: parts.drawing,
+    ...(parts.analysis ? { analysis: parts.analysis } : {}),
   };
 }
 
@@ -81,11 +121,14 @@ export function infeasibleDesign(id: SchemeId, brief: Brief, reason: string, war
   return {
     schemeId: id,
     feasible: false,
+    status: "infeasible",
+    governingLoadCase: "",
     reason,
     outsideValidRange: false,
     summary: [],
     members: [],
     takeoff: [],
+    massByGroupKg: { structure: 0, perimeter: 0, substructure: 0, envelope: 0 },
     checks: [],
     warnings,
     iterations: 0,

@@ -14,6 +14,8 @@ export interface NumberOption {
   default: number;
   source: string;
   uncertainty?: UncertaintyKind;
+  /** A free proportion the pipeline may search within [min, max] unless the user pins it. */
+  free?: boolean;
 }
 
 /** A choice among named values. */

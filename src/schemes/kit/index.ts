@@ -1,12 +1,13 @@
 // The scheme kit: what every scheme shares. A scheme folder imports from here, mechanics/, loads/
 // and catalogue/ — never from another scheme.
-export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind } from "../types";
+export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind, DesignStatus, MassByGroupKg, FloorEnvelope, AnalysisView, DesignAnalysis } from "../types";
 export { defineScheme, infeasibleOnFailure, convergeSelfWeight, type SchemeDefinition } from "./scheme";
 export { defineOptions, type DeclaredOptions, type OptionDeclaration, type OptionValues } from "./define-options";
 export { checkSchemeOptions } from "./check-options";
 export { SchemeError, SizingError, ConvergenceError, failWith, isDesignAnswer, type FailureContext } from "./errors";
 export { iterateSelfWeight, type Converged } from "./converge";
-export { assembleDesign, infeasibleDesign, check, capEnvelope, isSubstructure, type DesignParts } from "./assemble";
+export { assembleDesign, infeasibleDesign, check, capEnvelope, isSubstructure, takeoffGroupOf, massByGroupKg, designStatus, type DesignParts } from "./assemble";
+export { usableFloorM2, usableFloorLines, soffitHeightAtM } from "./usable-floor";
 export { memberOf, massOfKinds, tonnesRow, pickStrandGroup, steelTensionRing, type SizedGroup } from "./members";
 export { pickChs, type AxialDemand } from "./pick-chs";
 export { STEEL_GRADES, STEEL_GRADE_CHOICES, steelGrade, type SteelGrade } from "./steel";

@@ -18,6 +18,8 @@ export interface SchemeDefinition<O extends SchemeOptions, Id extends string> {
   description: string;
   /** Span range in which the method is valid, m. */
   validSpanM: { min: number; max: number };
+  /** The rise ÷ span the scheme may take when each scheme chooses its own rise. */
+  riseSpanRatio?: { min: number; max: number; preferred: number };
   options: DeclaredOptions<O>;
   /**
    * The scheme's own steps: geometry → loads → self-weight iterated around sizing

@@ -1,0 +1,74 @@
+import type { Brief } from "../../brief";
+import type { DrawingLine, FloorEnvelope } from "../types";
+import { usableFloorAreaM2 } from "../../mechanics/usable-floor";
+
+/** Rings the plan radius is divided into for the usable floor (error ≤ one ring's area per crossing). */
+const FLOOR_RINGS = 2000;
+
+/** Height of the soffit above the floor at plan radius r: linear between the given points, flat beyond the ends. */
+export function soffitHeightAtM(soffit: FloorEnvelope["soffit"], rM: number): number {
+  if (soffit.length === 0) throw new RangeError("invalid floor.soffit: empty (expected at least one (radius, height) point)");
+  const first = soffit[0] as readonly [number, number];
+  if (rM <= first[0]) return first[1];
+  for (let i = 1; i < soffit.length; i++) {
+    const [r0, z0] = soffit[i - 1] as readonly [number, number];
+    const [r1, z1] = soffit[i] as readonly [number, number];
+    if (rM <= r1) return r1 > r0 ? z0 + ((z1 - z0) * (rM - r0)) / (r1 - r0) : Math.min(z0, z1);
+  }
+  return (soffit[soffit.length - 1] as readonly [number, number])[1];
+}
+
+/** Whether the soffit at radius r leaves the brief's clear height. */
+function clearAt(brief: Brief, floor: FloorEnvelope, rM: number): boolean {
+  return soffitHeightAtM(floor.soffit, rM) >= brief.minClearHeightM;
+}
+
+/**
+ * Usable floor by one rule: the plan area where the soffit of the structure's lowest members is at
+ * least the brief's minimum clear height above the floor, less the clear zones of the supports that
+ * stand on the floor inside the plan (each zone counted where the floor around it is otherwise usable).
+ */
+export function usableFloorM2(brief: Brief, floor: FloorEnvelope): number {
+  const a = brief.spanM / 2;
+  const underSoffit = usableFloorAreaM2(a, (r) => soffitHeightAtM(floor.soffit, r), brief.minClearHeightM, FLOOR_RINGS);
+  let supportsM2 = 0;
+  for (const s of floor.supports) {
+    if (!(s.radiusM >= 0 && s.clearRadiusM >= 0 && Number.isInteger(s.count) && s.count >= 0)) {
+      throw new RangeError(`invalid floor.supports entry: radius ${s.radiusM} m, clear radius ${s.clearRadiusM} m, count ${s.count} (expected radii ≥ 0 and a whole count ≥ 0)`);
+    }
+    if (s.radiusM - s.clearRadiusM >= a) continue;
+    const samples = 16;
+    let usable = 0;
+    for (let k = 0; k < samples; k++) {
+      const r = s.radiusM - s.clearRadiusM + ((k + 0.5) / samples) * 2 * s.clearRadiusM;
+      if (r >= 0 && r <= a && clearAt(brief, floor, r)) usable++;
+    }
+    supportsM2 += s.count * Math.PI * s.clearRadiusM ** 2 * (usable / samples);
+  }
+  return Math.max(0, underSoffit - supportsM2);
+}
+
+/**
+ * The usable floor drawn on the section (role "usable floor"): the stretches of the floor line where
+ * the soffit leaves the clear height, mirrored about the centre (supports' zones are in the number,
+ * not in the line: a section cuts at most two of them).
+ */
+export function usableFloorLines(brief: Brief, floor: FloorEnvelope, steps = 200): DrawingLine[] {
+  const a = brief.spanM / 2;
+  const lines: DrawingLine[] = [];
+  let start: number | null = null;
+  for (let i = 0; i <= steps; i++) {
+    const r = (i / steps) * a;
+    const ok = clearAt(brief, floor, r);
+    if (ok && start === null) start = r;
+    if ((!ok || i === steps) && start !== null) {
+      const end = ok ? r : ((i - 1) / steps) * a;
+      if (end > start) {
+        lines.push({ role: "usable floor", points: [[start, 0], [end, 0]] });
+        lines.push({ role: "usable floor", points: [[-start, 0], [-end, 0]] });
+      }
+      start = null;
+    }
+  }
+  return lines;
+}
