@@ -8,7 +8,8 @@ import { defaultCatalogue } from "./catalogue/default-catalogue";
 import { formatCsv, parseDecimal, shown } from "./kernel/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
-import { evaluateStudy, headline, tableGaps, describeGaps, type Headline, type SchemeResult, type TableGap } from "./pipeline";
+import { evaluateStudy, tableGaps, describeGaps, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
+import { runSpanStudy } from "./comparison/span-study";
 import { CAUTION } from "./kernel/caution";
 import { runRisk, RISK_LIMITS, type RiskResult } from "./risk";
 
@@ -63,6 +64,9 @@ function spanIn(text: string, what: string): number {
   return value;
 }
 
+/** The most steps a --sweep may take. */
+const MAX_SWEEP_SPANS = 1000;
+
 function parseArgs(args: readonly string[]): Parsed | "help" {
   const parsed: Partial<Parsed> & { json: boolean; partial: boolean } = { json: false, partial: false };
   for (let i = 0; i < args.length; i++) {
@@ -85,7 +89,7 @@ function parseArgs(args: readonly string[]): Parsed | "help" {
       spanIn(texts[0] ?? "", "--sweep start");
       spanIn(texts[1] ?? "", "--sweep end");
       if (!(step > 0) || to < from) throw new UsageError(`invalid --sweep: ${text} (expected FROM ≤ TO and STEP > 0)`);
-      if ((to - from) / step > 1000) throw new UsageError(`invalid --sweep: ${text} (expected at most 1000 spans)`);
+      if ((to - from) / step > MAX_SWEEP_SPANS) throw new UsageError(`invalid --sweep: ${text} (expected at most ${MAX_SWEEP_SPANS} spans)`);
       parsed.sweep = { from, to, step };
     } else if (arg === "--schemes") {
       const ids = next().split(",").map((s) => s.trim());
@@ -142,19 +146,60 @@ function round(x: number | null, digits = 3): number | null {
   return x === null || !Number.isFinite(x) ? null : Number(x.toPrecision(digits + 3));
 }
 
-function table(rows: readonly Headline[]): string {
+/**
+ * One scheme's figures with the keys the command line prints (snake_case, units in the names,
+ * tonnes): the only place the figures are named this way.
+ */
+export function jsonFigures(f: SchemeFigures) {
+  const t = (kg: number) => kg / 1000;
+  return {
+    id: f.id,
+    label: f.label,
+    feasible: f.feasible,
+    reason: f.reason,
+    self_weight_kg_per_m2: f.selfWeightKgPerM2,
+    steel_t: t(f.massByKindKg.steel),
+    cable_t: t(f.massByKindKg.cable),
+    fabric_m2: f.fabricM2,
+    fabric_t: t(f.massByKindKg.fabric),
+    concrete_m3: f.concreteM3,
+    rebar_t: t(f.massByKindKg.rebar),
+    cladding_t: t(f.massByKindKg.cladding),
+    total_mass_t: t(f.totalMassKg),
+    enclosed_air_t: t(f.enclosedAirKg),
+    roof_mass_t: t(f.roofMassKg),
+    mass_to_air: f.massToAir,
+    usable_floor_m2: f.usableFloorM2,
+    plan_area_m2: f.planAreaM2,
+    governing: f.governing,
+    max_utilisation: f.maxUtilisation,
+    iterations: f.iterations,
+    carbon_a1a3_kgco2e: f.carbonA1A3KgCO2e,
+    carbon_a1a5_kgco2e: f.carbonA1A5KgCO2e,
+    carbon_total_kgco2e: f.carbonTotalKgCO2e,
+    carbon_kgco2e_per_m2_floor: f.carbonKgCO2ePerM2Floor,
+    carbon_kgco2e_per_m2_plan: f.carbonKgCO2ePerM2Plan,
+    module_d_kgco2e: f.moduleDKgCO2e,
+    cost_total: f.costTotal,
+    cost_per_m2_floor: f.costPerM2Floor,
+    currency: f.currency,
+    warnings: f.warnings,
+  };
+}
+
+function table(rows: readonly SchemeFigures[]): string {
   const header = ["scheme", "feasible", "kg/m² plan", "steel t", "cable t", "fabric m²", "concrete m³", "kgCO2e/m² floor", "cost/m² floor", "governing"];
-  const body = rows.map((h) => [
-    h.id,
-    h.feasible ? "yes" : "no",
-    h.self_weight_kg_per_m2.toFixed(1),
-    h.steel_t.toFixed(0),
-    h.cable_t.toFixed(0),
-    h.fabric_m2.toFixed(0),
-    h.concrete_m3.toFixed(0),
-    h.carbon_kgco2e_per_m2_floor === null ? "–" : h.carbon_kgco2e_per_m2_floor.toFixed(0),
-    h.cost_per_m2_floor === null ? "–" : `${h.cost_per_m2_floor.toFixed(0)} ${h.currency ?? ""}`.trim(),
-    h.feasible ? h.governing : h.reason,
+  const body = rows.map((f) => [
+    f.id,
+    f.feasible ? "yes" : "no",
+    f.selfWeightKgPerM2.toFixed(1),
+    (f.massByKindKg.steel / 1000).toFixed(0),
+    (f.massByKindKg.cable / 1000).toFixed(0),
+    f.fabricM2.toFixed(0),
+    f.concreteM3.toFixed(0),
+    f.carbonKgCO2ePerM2Floor === null ? "–" : f.carbonKgCO2ePerM2Floor.toFixed(0),
+    f.costPerM2Floor === null ? "–" : `${f.costPerM2Floor.toFixed(0)} ${f.currency ?? ""}`.trim(),
+    f.feasible ? f.governing : f.reason,
   ]);
   const widths = header.map((_, i) => Math.max(header[i]?.length ?? 0, ...body.map((r) => r[i]?.length ?? 0)));
   const line = (cells: readonly string[]) => cells.map((c, i) => (i === 0 || i === cells.length - 1 ? c.padEnd(widths[i] ?? 0) : c.padStart(widths[i] ?? 0))).join("  ").trimEnd();
@@ -230,18 +275,17 @@ function refuseGaps(gaps: readonly TableGap[], parsed: Parsed): string {
   return `spanbook: partial results, left blank: ${text}\n`;
 }
 
+/** The sweep: the span study the page runs, over the given range, printed as CSV. */
 function sweepCsv(study: Study, parsed: Parsed, catalogue: ReturnType<typeof defaultCatalogue>): CliResult {
   const rows: Record<string, unknown>[] = [];
   const all: SchemeResult[] = [];
   const { from, to, step } = parsed.sweep as NonNullable<Parsed["sweep"]>;
-  for (let span = from; span <= to + 1e-9; span += step) {
-    const evaluation = evaluateStudy(study, catalogue, { spanM: Number(span.toFixed(6)), ...(parsed.schemes ? { schemeIds: parsed.schemes } : {}) });
-    all.push(...evaluation.results);
-    for (const result of evaluation.results) {
-      const h = headline(result);
-      rows.push({ ...h, span_m: evaluation.brief.spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air) });
-    }
-  }
+  const onResult = (spanM: number, result: SchemeResult) => {
+    all.push(result);
+    const h = jsonFigures(result.figures);
+    rows.push({ ...h, span_m: spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air) });
+  };
+  runSpanStudy(study, catalogue, { fromM: from, toM: to, stepM: step }, { onResult, maxSpans: MAX_SWEEP_SPANS + 1, ...(parsed.schemes ? { schemeIds: parsed.schemes } : {}) });
   const stderr = refuseGaps(gapsOf(all, study), parsed);
   return { code: 0, stdout: `${formatCsv(rows, SWEEP_COLUMNS)}\n`, stderr };
 }
@@ -258,16 +302,16 @@ export function runCli(args: readonly string[], readText: (path: string) => stri
     const evaluation = evaluateStudy(study, catalogue, { ...(parsed.spanM !== undefined ? { spanM: parsed.spanM } : {}), ...(schemeIds ? { schemeIds } : {}) });
     const gaps = gapsOf(evaluation.results, study);
     const stderr = refuseGaps(gaps, parsed);
-    const headlines = evaluation.results.map(headline);
+    const figures = evaluation.results.map((r) => r.figures);
     const risk = parsed.risk === undefined ? null : riskRun(study, evaluation.brief, schemeIds, parsed.risk, parsed.seed, catalogue);
     if (parsed.json) {
-      const schemes = risk ? headlines.map((h) => ({ ...h, risk: riskJson(risk, h.id) })) : headlines;
+      const schemes = figures.map((f) => (risk ? { ...jsonFigures(f), risk: riskJson(risk, f.id) } : jsonFigures(f)));
       const out = { span_m: evaluation.brief.spanM, caution: CAUTION, schemes, ...(gaps.length > 0 ? { gaps } : {}), ...(risk ? { risk: riskMeta(risk) } : {}) };
       return { code: 0, stdout: `${JSON.stringify(out, null, 2)}\n`, stderr };
     }
     const riskText = risk ? `\n\n${riskTable(risk)}` : "";
     const gapText = gaps.length > 0 ? `\nLeft blank (–): ${describeGaps(gaps, 12, "\n  ")}` : "";
-    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(headlines)}${gapText}${riskText}\n\n${CAUTION}\n`, stderr };
+    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(figures)}${gapText}${riskText}\n\n${CAUTION}\n`, stderr };
   } catch (error) {
     if (error instanceof UsageError) return { code: 2, stdout: "", stderr: `spanbook: ${error.message}\n` };
     return { code: 1, stdout: "", stderr: `spanbook: internal error: ${error instanceof Error ? error.message : String(error)}\n` };

@@ -3,7 +3,21 @@
  * their take-off rows. The `kind` groups them for the comparison table (steel, cable, fabric…).
  */
 
-export type MaterialKind = "steel" | "cable" | "fabric" | "concrete" | "rebar" | "cladding" | "timber";
+/**
+ * The kinds of material, in the order tables list their tonnages; `digits` is how many decimals a
+ * table shows their tonnes with (fabric and foil are light).
+ */
+export const MATERIAL_KINDS = [
+  { kind: "steel", label: "Steel", digits: 0 },
+  { kind: "cable", label: "Cable", digits: 0 },
+  { kind: "fabric", label: "Fabric", digits: 1 },
+  { kind: "concrete", label: "Concrete", digits: 0 },
+  { kind: "rebar", label: "Rebar", digits: 0 },
+  { kind: "cladding", label: "Cladding", digits: 0 },
+  { kind: "timber", label: "Timber", digits: 0 },
+] as const;
+
+export type MaterialKind = (typeof MATERIAL_KINDS)[number]["kind"];
 
 export interface MaterialInfo {
   id: string;

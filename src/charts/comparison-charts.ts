@@ -1,6 +1,5 @@
 import * as Plot from "@observablehq/plot";
 import type { SchemeResult } from "../pipeline";
-import { headline } from "../pipeline";
 import { materialInfo, type MaterialKind } from "../materials";
 import { paretoFront } from "../comparison/pareto";
 import { SCHEME_COLOURS } from "./palette";
@@ -104,9 +103,9 @@ export function costPerM2Chart(results: readonly SchemeResult[], common: Common)
 /** Scatter: carbon against cost per m² of floor; schemes no other beats on both are ringed and named. */
 export function carbonVsCostChart(results: readonly SchemeResult[], common: Common): Plot.PlotOptions {
   const data = results.flatMap((r) => {
-    const h = headline(r);
-    if (!h.feasible || h.carbon_kgco2e_per_m2_floor === null || h.cost_per_m2_floor === null) return [];
-    return [{ id: r.id, scheme: r.label, carbon: h.carbon_kgco2e_per_m2_floor, cost: h.cost_per_m2_floor }];
+    const f = r.figures;
+    if (!f.feasible || f.carbonKgCO2ePerM2Floor === null || f.costPerM2Floor === null) return [];
+    return [{ id: r.id, scheme: r.label, carbon: f.carbonKgCO2ePerM2Floor, cost: f.costPerM2Floor }];
   });
   const front = new Set(paretoFront(data.map((d) => ({ id: d.id, x: d.cost, y: d.carbon }))));
   const best = data.filter((d) => front.has(d.id));

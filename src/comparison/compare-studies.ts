@@ -2,14 +2,14 @@ import type { Study } from "../study/study";
 import type { Catalogue } from "../catalogue/types";
 import { assumptionsRecord, type Assumption } from "../study/assumptions";
 import { setIn } from "../kernel/patch";
-import { evaluateStudy, headline, type Headline } from "../pipeline";
+import { evaluateStudy, type SchemeFigures } from "../pipeline";
 
-/** The headline numbers a change is judged by. */
+/** The figures a change is judged by. */
 export const HEADLINE_METRICS = [
-  { key: "self_weight_kg_per_m2", label: "self-weight", unit: "kg/m² plan" },
-  { key: "carbon_kgco2e_per_m2_floor", label: "carbon", unit: "kgCO2e/m² floor" },
-  { key: "cost_per_m2_floor", label: "cost", unit: "per m² floor" },
-] as const;
+  { key: "selfWeightKgPerM2", label: "self-weight", unit: "kg/m² plan" },
+  { key: "carbonKgCO2ePerM2Floor", label: "carbon", unit: "kgCO2e/m² floor" },
+  { key: "costPerM2Floor", label: "cost", unit: "per m² floor" },
+] as const satisfies readonly { key: keyof SchemeFigures; label: string; unit: string }[];
 
 export type MetricKey = (typeof HEADLINE_METRICS)[number]["key"];
 
@@ -46,15 +46,15 @@ export interface StudyComparison {
   effectsTruncated: boolean;
 }
 
-function metrics(h: Headline | undefined): Record<MetricKey, number | null> {
-  return {
-    self_weight_kg_per_m2: h && h.feasible ? h.self_weight_kg_per_m2 : null,
-    carbon_kgco2e_per_m2_floor: h && h.feasible ? h.carbon_kgco2e_per_m2_floor : null,
-    cost_per_m2_floor: h && h.feasible ? h.cost_per_m2_floor : null,
-  };
+function metrics(f: SchemeFigures | undefined): Record<MetricKey, number | null> {
+  return Object.fromEntries(HEADLINE_METRICS.map((m) => [m.key, f && f.feasible ? f[m.key] : null])) as Record<MetricKey, number | null>;
 }
 
-function deltas(a: Headline[], b: Headline[]): SchemeDelta[] {
+function figuresOf(study: Study, catalogue: Catalogue): SchemeFigures[] {
+  return evaluateStudy(study, catalogue).results.map((r) => r.figures);
+}
+
+function deltas(a: SchemeFigures[], b: SchemeFigures[]): SchemeDelta[] {
   const ids = [...new Set([...a.map((h) => h.id), ...b.map((h) => h.id)])];
   return ids.map((id) => {
     const ha = a.find((h) => h.id === id);
@@ -75,8 +75,8 @@ function parsePath(path: string): (string | number)[] {
 export function compareStudies(a: Study, b: Study, catalogue: Catalogue, maxEffects = 40): StudyComparison {
   const recordA = new Map(assumptionsRecord(a).map((r) => [r.key, r]));
   const recordB = new Map(assumptionsRecord(b).map((r) => [r.key, r]));
-  const headA = evaluateStudy(a, catalogue).results.map(headline);
-  const headB = evaluateStudy(b, catalogue).results.map(headline);
+  const headA = figuresOf(a, catalogue);
+  const headB = figuresOf(b, catalogue);
   const differing: [Assumption, Assumption][] = [];
   for (const [key, ra] of recordA) {
     const rb = recordB.get(key);
@@ -87,7 +87,7 @@ export function compareStudies(a: Study, b: Study, catalogue: Catalogue, maxEffe
     if (index < maxEffects) {
       try {
         const single = setIn(a, parsePath(ra.path), rb.raw);
-        effect = deltas(headA, evaluateStudy(single, catalogue).results.map(headline));
+        effect = deltas(headA, figuresOf(single, catalogue));
       } catch {
         effect = null;
       }

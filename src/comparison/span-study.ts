@@ -1,8 +1,7 @@
-import type { Study } from "../study/study";
 import type { Catalogue } from "../catalogue/types";
 import type { SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { evaluateStudy, headline } from "../pipeline";
+import { evaluateStudy, type SchemeResult, type StudyInputs } from "../pipeline";
 
 /** One scheme at one span: the figures the span-study charts draw. */
 export interface SpanPoint {
@@ -25,38 +24,59 @@ export interface SpanRange {
   stepM: number;
 }
 
-/** The spans of a range, inclusive of both ends where the step lands on them. */
-export function spansOf(range: SpanRange): number[] {
+/** The most spans a span study evaluates unless told otherwise. */
+export const MAX_SPANS = 500;
+
+/** The spans of a range, inclusive of both ends where the step lands on them (at most `maxSpans`). */
+export function spansOf(range: SpanRange, maxSpans = MAX_SPANS): number[] {
   const { fromM, toM, stepM } = range;
   if (!(stepM > 0) || !(toM >= fromM)) throw new RangeError(`invalid span range: ${fromM}–${toM} m in steps of ${stepM} m (expected from ≤ to and step > 0)`);
   const count = Math.floor((toM - fromM) / stepM + 1e-9) + 1;
-  if (count > 500) throw new RangeError(`invalid span range: ${count} spans (expected at most 500)`);
+  if (count > maxSpans) throw new RangeError(`invalid span range: ${count} spans (expected at most ${maxSpans})`);
   return Array.from({ length: count }, (_, i) => Number((fromM + i * stepM).toFixed(6)));
 }
 
+export interface SpanStudyOptions {
+  /** Only these schemes (default: the study's enabled schemes). */
+  schemeIds?: readonly SchemeId[];
+  /** The most spans a range may give (default MAX_SPANS). */
+  maxSpans?: number;
+  /** Sees every scheme's whole result at each span (the command line prints and checks them). */
+  onResult?: (spanM: number, result: SchemeResult) => void;
+}
+
+/** One scheme's result at one span as the charts draw it: infeasible points keep NaN metrics. */
+function spanPoint(spanM: number, result: SchemeResult): SpanPoint {
+  const f = result.figures;
+  const model = SCHEMES.find((m) => m.id === result.id);
+  const ok = f.feasible;
+  return {
+    spanM,
+    id: result.id,
+    label: result.label,
+    feasible: ok,
+    inValidRange: model ? spanM >= model.validSpanM.min && spanM <= model.validSpanM.max : false,
+    reason: f.reason,
+    selfWeightKgPerM2: ok ? f.selfWeightKgPerM2 : Number.NaN,
+    carbonKgCO2ePerM2Floor: ok && f.carbonKgCO2ePerM2Floor !== null ? f.carbonKgCO2ePerM2Floor : Number.NaN,
+    costPerM2Floor: ok && f.costPerM2Floor !== null ? f.costPerM2Floor : Number.NaN,
+    massToAir: ok ? f.massToAir : Number.NaN,
+  };
+}
+
 /**
- * Evaluates the study's enabled schemes at each span of a range or list (rise kept in proportion). Infeasible
- * points keep NaN metrics so charts break their lines there.
+ * Evaluates the study's enabled schemes (or `options.schemeIds`) at each span of a range or list
+ * (rise kept in proportion). Infeasible points keep NaN metrics so charts break their lines there.
+ * The page (in its workers) and the command line's sweep both run this.
  */
-export function runSpanStudy(study: Study, catalogue: Catalogue, range: SpanRange | readonly number[]): SpanPoint[] {
+export function runSpanStudy(study: StudyInputs, catalogue: Catalogue, range: SpanRange | readonly number[], options: SpanStudyOptions = {}): SpanPoint[] {
   const points: SpanPoint[] = [];
-  for (const spanM of Array.isArray(range) ? range : spansOf(range as SpanRange)) {
-    for (const result of evaluateStudy(study, catalogue, { spanM }).results) {
-      const h = headline(result);
-      const model = SCHEMES.find((m) => m.id === result.id);
-      const ok = h.feasible;
-      points.push({
-        spanM,
-        id: result.id,
-        label: result.label,
-        feasible: ok,
-        inValidRange: model ? spanM >= model.validSpanM.min && spanM <= model.validSpanM.max : false,
-        reason: h.reason,
-        selfWeightKgPerM2: ok ? h.self_weight_kg_per_m2 : Number.NaN,
-        carbonKgCO2ePerM2Floor: ok && h.carbon_kgco2e_per_m2_floor !== null ? h.carbon_kgco2e_per_m2_floor : Number.NaN,
-        costPerM2Floor: ok && h.cost_per_m2_floor !== null ? h.cost_per_m2_floor : Number.NaN,
-        massToAir: ok ? h.mass_to_air : Number.NaN,
-      });
+  const spans = Array.isArray(range) ? range : spansOf(range as SpanRange, options.maxSpans);
+  for (const spanM of spans) {
+    const evaluation = evaluateStudy(study, catalogue, { spanM, ...(options.schemeIds ? { schemeIds: options.schemeIds } : {}) });
+    for (const result of evaluation.results) {
+      options.onResult?.(spanM, result);
+      points.push(spanPoint(spanM, result));
     }
   }
   return points;

@@ -1,7 +1,7 @@
 import { computed, type ReadonlySignal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { SCHEMES, type Design, type SchemeModel } from "../schemes";
-import { designScheme, assessDesign, type SchemeResult } from "../pipeline";
+import { designScheme, schemeResult, type SchemeResult } from "../pipeline";
 import { defaultCatalogue } from "../catalogue/default-catalogue";
 
 export interface SchemeSignals {
@@ -33,10 +33,7 @@ export function studySignals(store: StudyStore): StudySignals {
     const enabled = computed(() => setting.value?.enabled !== false);
     const options = computed(() => setting.value?.options);
     const design = computed(() => designScheme(model, brief.value, options.value, catalogue));
-    const result = computed((): SchemeResult => {
-      const d = design.value;
-      return { id: model.id, label: model.label, design: d, ...assessDesign(d, { carbon: carbon.value, cost: cost.value }) };
-    });
+    const result = computed((): SchemeResult => schemeResult(model.id, model.label, design.value, { carbon: carbon.value, cost: cost.value }));
     return { model, enabled, design, result };
   });
   const results = computed(() => schemes.filter((s) => s.enabled.value).map((s) => s.result.value));

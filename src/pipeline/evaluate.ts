@@ -5,8 +5,10 @@ import type { Design, SchemeId, SchemeModel, SchemeOptions } from "../schemes/ty
 import { SCHEMES, infeasibleDesign, isDesignAnswer } from "../schemes";
 import { assessCarbon, type CarbonAssessment } from "../carbon";
 import { assessCost, type CostAssessment } from "../cost";
+import { messageOf } from "../kernel/errors";
+import { schemeFigures, type SchemeFigures } from "./figures";
 
-/** One scheme's design with its carbon and cost. */
+/** One scheme's design with its carbon and cost, and the figures read from them. */
 export interface SchemeResult {
   id: SchemeId;
   label: string;
@@ -16,6 +18,8 @@ export interface SchemeResult {
   cost: CostAssessment | null;
   /** Why carbon or cost (or both) could not be assessed, or "". */
   error: string;
+  /** The figures every table, chart and the command line read. */
+  figures: SchemeFigures;
 }
 
 export interface Evaluation {
@@ -45,7 +49,7 @@ export function designScheme(model: SchemeModel, brief: Brief, options: SchemeOp
     return model.design(brief, { ...model.defaults, ...(options ?? {}) }, catalogue);
   } catch (error) {
     if (!isDesignAnswer(error)) throw error;
-    return infeasibleDesign(model.id, brief, `could not be computed: ${error.message}`);
+    return infeasibleDesign(model.id, brief, `could not be computed: ${messageOf(error)}`);
   }
 }
 
@@ -53,7 +57,7 @@ function attempt<T>(run: () => T): { value: T | null; error: string } {
   try {
     return { value: run(), error: "" };
   } catch (error) {
-    return { value: null, error: error instanceof Error ? error.message : String(error) };
+    return { value: null, error: messageOf(error) };
   }
 }
 
@@ -70,6 +74,12 @@ export function assessDesign(design: Design, study: Pick<StudyInputs, "carbon" |
   return { carbon: carbon.value, cost: cost.value, error: [carbon.error, cost.error].filter((e) => e !== "").join("; ") };
 }
 
+/** A scheme's design assessed with the study's tables, with its figures. */
+export function schemeResult(id: SchemeId, label: string, design: Design, study: Pick<StudyInputs, "carbon" | "cost">): SchemeResult {
+  const assessed = { id, label, design, ...assessDesign(design, study) };
+  return { ...assessed, figures: schemeFigures(assessed) };
+}
+
 /**
  * The whole pipeline for a study: each scheme designed, taken off, and assessed for carbon and
  * cost. Deterministic: the same study gives the same numbers.
@@ -77,9 +87,6 @@ export function assessDesign(design: Design, study: Pick<StudyInputs, "carbon" |
 export function evaluateStudy(study: StudyInputs, catalogue: Catalogue, options: EvaluateOptions = {}): Evaluation {
   const brief = options.spanM === undefined ? study.brief : briefAtSpan(study.brief, options.spanM);
   const chosen = options.schemeIds ? SCHEMES.filter((m) => options.schemeIds?.includes(m.id)) : SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
-  const results = chosen.map((model) => {
-    const design = designScheme(model, brief, study.schemes[model.id]?.options, catalogue);
-    return { id: model.id, label: model.label, design, ...assessDesign(design, study) };
-  });
+  const results = chosen.map((model) => schemeResult(model.id, model.label, designScheme(model, brief, study.schemes[model.id]?.options, catalogue), study));
   return { brief, results };
 }

@@ -2,7 +2,7 @@ import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { evaluateStudy, designScheme, assessDesign, headline } from "../pipeline";
+import { evaluateStudy, designScheme, assessDesign } from "../pipeline";
 import { CONCEPT_SCREENING } from "../cost";
 import { getIn } from "../kernel/patch";
 import { createPrng } from "./prng";
@@ -113,7 +113,7 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
     return Float64Array.from(strata, (s) => (s + rng.uniform()) / designSamples);
   });
 
-  const deterministic = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, headline(r)]));
+  const deterministic = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, r.figures]));
 
   // Designs: once per scheme per distinct draw of the inputs that affect it.
   const designTotal = models.length * designSamples;
@@ -251,9 +251,9 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
     const commonReason = [...reasons].sort((a, b) => b[1] - a[1])[0]?.[0] ?? "";
     if (feasibleSamples < samples) warnings.push(`${model.label}: infeasible in ${samples - feasibleSamples} of ${samples} samples${commonReason ? ` (${commonReason})` : ""}`);
     const det: Record<RiskMetric, number | null> = {
-      selfWeightKgPerM2: h?.feasible ? h.self_weight_kg_per_m2 : null,
-      carbonKgCO2ePerM2Floor: h?.feasible ? h.carbon_kgco2e_per_m2_floor : null,
-      costPerM2Floor: h?.feasible ? h.cost_per_m2_floor : null,
+      selfWeightKgPerM2: h?.feasible ? h.selfWeightKgPerM2 : null,
+      carbonKgCO2ePerM2Floor: h?.feasible ? h.carbonKgCO2ePerM2Floor : null,
+      costPerM2Floor: h?.feasible ? h.costPerM2Floor : null,
     };
     const metrics = Object.fromEntries(RISK_METRICS.map((metric, m) => [metric, summariseMetric((outputs[s] as Float64Array[])[m] as Float64Array, clusters, det[metric])])) as Record<RiskMetric, SchemeRisk["metrics"][RiskMetric]>;
     return {

@@ -2,7 +2,7 @@ import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { designScheme, assessDesign } from "../pipeline";
+import { designScheme, schemeResult } from "../pipeline";
 import { setIn } from "../kernel/patch";
 import { checkRiskInputs } from "./check-risk-inputs";
 import type { ResolvedInput } from "./resolve-inputs";
@@ -23,8 +23,8 @@ export type Tornado = { scheme: SchemeId; metric: "carbonKgCO2ePerM2Floor" | "co
 
 function metricsOf(design: Design, study: Pick<RiskStudy, "carbon" | "cost">): { carbon: number; cost: number } {
   if (!design.feasible) return { carbon: Number.NaN, cost: Number.NaN };
-  const a = assessDesign(design, study);
-  return { carbon: a.carbon?.perM2UsableFloor.perM2?.counted ?? Number.NaN, cost: a.cost?.perM2UsableFloor?.total ?? Number.NaN };
+  const f = schemeResult(design.schemeId, design.schemeId, design, study).figures;
+  return { carbon: f.carbonKgCO2ePerM2Floor ?? Number.NaN, cost: f.costPerM2Floor ?? Number.NaN };
 }
 
 /**

@@ -3,7 +3,7 @@
 // scheme's design method changes.
 import type { Design } from "../../src/schemes/types";
 import type { SchemeResult } from "../../src/pipeline";
-import { assessDesign } from "../../src/pipeline";
+import { schemeResult } from "../../src/pipeline";
 import { defaultStudy } from "../../src/study";
 import type { SpanPoint } from "../../src/comparison";
 
@@ -56,7 +56,7 @@ export function fixtureResults(): SchemeResult[] {
       "Geodesic steel dome",
     ],
   ];
-  return designs.map(([d, label]) => ({ id: d.schemeId, label, design: d, ...assessDesign(d, study) }));
+  return designs.map(([d, label]) => schemeResult(d.schemeId, label, d, study));
 }
 
 export function fixtureSpanPoints(): SpanPoint[] {

@@ -74,7 +74,7 @@ describe("compareStudies", () => {
     expect(effect.length).toBeGreaterThan(0);
     // More snow never makes a feasible scheme lighter.
     for (const d of effect) {
-      if (d.a.self_weight_kg_per_m2 !== null && d.b.self_weight_kg_per_m2 !== null) expect(d.b.self_weight_kg_per_m2).toBeGreaterThanOrEqual(d.a.self_weight_kg_per_m2 - 1e-9);
+      if (d.a.selfWeightKgPerM2 !== null && d.b.selfWeightKgPerM2 !== null) expect(d.b.selfWeightKgPerM2).toBeGreaterThanOrEqual(d.a.selfWeightKgPerM2 - 1e-9);
     }
   });
 });

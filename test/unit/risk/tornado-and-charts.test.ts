@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import { readFileSync } from "node:fs";
 import { studyFromJson, setIn, type Study } from "../../../src/study";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
-import { evaluateStudy, headline } from "../../../src/pipeline";
+import { evaluateStudy } from "../../../src/pipeline";
 import { riskTornado, runRisk, checkRiskInputs, RiskCancelledError, RISK_METRICS } from "../../../src/risk";
 import { riskRangeChart, riskLowestChart, riskTornadoChart, riskRankChart, riskRangeData } from "../../../src/charts";
 
@@ -17,11 +17,11 @@ describe("riskTornado", () => {
   const study = demo();
   const tornadoes = riskTornado(study, catalogue);
   it("one tornado per enabled scheme and metric, bars sorted by swing, base = the pipeline's value", () => {
-    const headlines = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, headline(r)]));
+    const headlines = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, r.figures]));
     expect(tornadoes.length).toBe(headlines.size * 2);
     for (const t of tornadoes) {
       const h = headlines.get(t.scheme);
-      if (h?.feasible) expect(t.base).toBe(t.metric === "carbonKgCO2ePerM2Floor" ? h.carbon_kgco2e_per_m2_floor : h.cost_per_m2_floor);
+      if (h?.feasible) expect(t.base).toBe(t.metric === "carbonKgCO2ePerM2Floor" ? h.carbonKgCO2ePerM2Floor : h.costPerM2Floor);
       const swings = t.bars.map((b) => b.swing).filter((s) => !Number.isNaN(s));
       expect(swings).toEqual([...swings].sort((a, b) => b - a));
     }
@@ -34,8 +34,8 @@ describe("riskTornado", () => {
     const input = checkRiskInputs(study).resolved.find((i) => i.id === "rate-steel-truss");
     if (!bar || !input) throw new Error("missing bar");
     const moved = setIn(study, input.path, input.high);
-    const h = evaluateStudy(moved, catalogue).results.map(headline).find((x) => x.id === t.scheme);
-    expect(bar.atHigh).toBe(h?.cost_per_m2_floor);
+    const h = evaluateStudy(moved, catalogue).results.map((r) => r.figures).find((x) => x.id === t.scheme);
+    expect(bar.atHigh).toBe(h?.costPerM2Floor);
   });
   it("inputs of zero width have no bar", () => {
     const fixed = setIn(study, ["risk", "inputs", 0], { ...study.risk.inputs[0], low: 1, high: 1 });
