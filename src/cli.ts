@@ -1,5 +1,6 @@
 // `npm run evaluate -- FILE [options]`: the whole pipeline on a study file, from the command line.
 import { readFileSync } from "node:fs";
+import { parseArgs as nodeParseArgs, type ParseArgsConfig } from "node:util";
 import { pathToFileURL } from "node:url";
 import { studyFromJson, describeProblems, BRIEF_LIMITS, type Study } from "./study";
 import { SCHEMES } from "./schemes";
@@ -11,6 +12,7 @@ import { parseRateCsv } from "./cost";
 import { evaluateStudy, tableGaps, describeGaps, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
 import { runSpanStudy } from "./comparison/span-study";
 import { CAUTION } from "./kernel/caution";
+import { failure, messageOf } from "./kernel/errors";
 import { runRisk, RISK_LIMITS, type RiskResult } from "./risk";
 
 export const USAGE = `usage: npm run evaluate -- FILE [--json] [--span M] [--sweep FROM:TO:STEP] [--schemes a,b]
@@ -67,48 +69,103 @@ function spanIn(text: string, what: string): number {
 /** The most steps a --sweep may take. */
 const MAX_SWEEP_SPANS = 1000;
 
-function parseArgs(args: readonly string[]): Parsed | "help" {
-  const parsed: Partial<Parsed> & { json: boolean; partial: boolean } = { json: false, partial: false };
-  for (let i = 0; i < args.length; i++) {
-    const arg = args[i] ?? "";
-    const next = (): string => {
-      const value = args[++i];
-      if (value === undefined) throw new UsageError(`missing value for ${arg}`);
-      return value;
-    };
-    if (arg === "--help" || arg === "-h") return "help";
-    else if (arg === "--json") parsed.json = true;
-    else if (arg === "--partial") parsed.partial = true;
-    else if (arg === "--span") parsed.spanM = spanIn(next(), "--span");
-    else if (arg === "--sweep") {
-      const text = next();
-      const texts = text.split(":");
-      const parts = texts.map(parseDecimal);
-      if (parts.length !== 3 || parts.some((p) => p === null)) throw new UsageError(`invalid --sweep: ${shown(text)} (expected FROM:TO:STEP in m as decimal numbers, e.g. 40:400:10)`);
-      const [from, to, step] = parts as [number, number, number];
-      spanIn(texts[0] ?? "", "--sweep start");
-      spanIn(texts[1] ?? "", "--sweep end");
-      if (!(step > 0) || to < from) throw new UsageError(`invalid --sweep: ${text} (expected FROM ≤ TO and STEP > 0)`);
-      if ((to - from) / step > MAX_SWEEP_SPANS) throw new UsageError(`invalid --sweep: ${text} (expected at most ${MAX_SWEEP_SPANS} spans)`);
-      parsed.sweep = { from, to, step };
-    } else if (arg === "--schemes") {
-      const ids = next().split(",").map((s) => s.trim());
-      for (const id of ids) {
-        if (!SCHEMES.some((s) => s.id === id)) throw new UsageError(`unknown scheme: ${id} (expected one of ${SCHEMES.map((s) => s.id).join(", ")})`);
-      }
-      parsed.schemes = ids as SchemeId[];
-    } else if (arg === "--factors") parsed.factors = next();
-    else if (arg === "--rates") parsed.rates = next();
-    else if (arg === "--risk") parsed.risk = wholeNumber(next(), "--risk", RISK_LIMITS.samples.min, RISK_LIMITS.samples.max, "samples");
-    else if (arg === "--seed") parsed.seed = wholeNumber(next(), "--seed", 0, 2 ** 31 - 1, "");
-    else if (arg.startsWith("-")) throw new UsageError(`unknown option: ${arg} (see --help)`);
-    else if (parsed.file === undefined) parsed.file = arg;
-    else throw new UsageError(`unexpected argument: ${arg} (only one study file)`);
+/** The options the command line knows: Node's own parser reads them (`node:util` parseArgs). */
+const OPTIONS = {
+  help: { type: "boolean", short: "h" },
+  json: { type: "boolean" },
+  partial: { type: "boolean" },
+  span: { type: "string" },
+  sweep: { type: "string" },
+  schemes: { type: "string" },
+  factors: { type: "string" },
+  rates: { type: "string" },
+  risk: { type: "string" },
+  seed: { type: "string" },
+} as const satisfies ParseArgsConfig["options"];
+
+type OptionName = keyof typeof OPTIONS;
+type Flags = Omit<Parsed, "file" | "json" | "partial">;
+
+const ALLOWED = `allowed: ${Object.keys(OPTIONS).map((name) => `--${name}`).join(", ")}`;
+
+function sweepIn(text: string): NonNullable<Parsed["sweep"]> {
+  const texts = text.split(":");
+  const parts = texts.map(parseDecimal);
+  if (parts.length !== 3 || parts.some((p) => p === null)) throw new UsageError(`invalid --sweep: ${shown(text)} (expected FROM:TO:STEP in m as decimal numbers, e.g. 40:400:10)`);
+  const [from, to, step] = parts as [number, number, number];
+  spanIn(texts[0] ?? "", "--sweep start");
+  spanIn(texts[1] ?? "", "--sweep end");
+  if (!(step > 0) || to < from) throw new UsageError(`invalid --sweep: ${text} (expected FROM ≤ TO and STEP > 0)`);
+  if ((to - from) / step > MAX_SWEEP_SPANS) throw new UsageError(`invalid --sweep: ${text} (expected at most ${MAX_SWEEP_SPANS} spans)`);
+  return { from, to, step };
+}
+
+function schemesIn(text: string): SchemeId[] {
+  const ids = text.split(",").map((s) => s.trim());
+  for (const id of ids) {
+    if (!SCHEMES.some((s) => s.id === id)) throw new UsageError(`unknown scheme: ${id} (expected one of ${SCHEMES.map((s) => s.id).join(", ")})`);
   }
-  if (parsed.file === undefined) throw new UsageError("missing study file (usage: npm run evaluate -- FILE [options])");
-  if (parsed.seed !== undefined && parsed.risk === undefined) throw new UsageError("--seed applies only with --risk N");
-  if (parsed.risk !== undefined && parsed.sweep) throw new UsageError("--risk cannot be combined with --sweep (run one span at a time)");
-  return parsed as Parsed;
+  return ids as SchemeId[];
+}
+
+/** How each option that takes a value reads it into `Flags`; the message names the option and what it allows. */
+const READERS: Record<Exclude<OptionName, "help" | "json" | "partial">, (text: string, flags: Flags) => void> = {
+  span: (text, flags) => (flags.spanM = spanIn(text, "--span")),
+  sweep: (text, flags) => (flags.sweep = sweepIn(text)),
+  schemes: (text, flags) => (flags.schemes = schemesIn(text)),
+  factors: (text, flags) => (flags.factors = text),
+  rates: (text, flags) => (flags.rates = text),
+  risk: (text, flags) => (flags.risk = wholeNumber(text, "--risk", RISK_LIMITS.samples.min, RISK_LIMITS.samples.max, "samples")),
+  seed: (text, flags) => (flags.seed = wholeNumber(text, "--seed", 0, 2 ** 31 - 1, "")),
+};
+
+/** What each option that takes a value expects, for the message when the value is missing. */
+const EXPECTED: Record<keyof typeof READERS, () => string> = {
+  span: () => `a span in m from ${BRIEF_LIMITS.spanM.min} to ${BRIEF_LIMITS.spanM.max}`,
+  sweep: () => "FROM:TO:STEP in m, e.g. 40:400:10",
+  schemes: () => `scheme ids separated by commas, from ${SCHEMES.map((m) => m.id).join(", ")}`,
+  factors: () => "a carbon factor table (.csv)",
+  rates: () => "a rate table (.csv)",
+  risk: () => `a whole number of samples from ${RISK_LIMITS.samples.min} to ${RISK_LIMITS.samples.max}`,
+  seed: () => `a whole number from 0 to ${2 ** 31 - 1}`,
+};
+
+function isOption(name: string): name is OptionName {
+  return Object.hasOwn(OPTIONS, name);
+}
+
+/**
+ * The arguments, read by Node's parser without its strict mode (so that `--seed -1` reaches our
+ * range check) and then checked here option by option, in the order given, each refusal naming
+ * the option and what it allows.
+ */
+function parseArgs(args: readonly string[]): Parsed | "help" {
+  const { tokens } = nodeParseArgs({ args: [...args], options: OPTIONS, allowPositionals: true, strict: false, tokens: true });
+  const flags: Flags = {};
+  const switches = { json: false, partial: false };
+  let file: string | undefined;
+  for (const token of tokens) {
+    if (token.kind === "option-terminator") continue;
+    if (token.kind === "positional") {
+      if (file !== undefined) throw new UsageError(`unexpected argument: ${token.value} (only one study file)`);
+      file = token.value;
+      continue;
+    }
+    const { name, rawName, value } = token;
+    if (!isOption(name)) throw new UsageError(`unknown option: ${rawName} (${ALLOWED}; see --help)`);
+    if (name === "help") return "help";
+    if (name === "json" || name === "partial") {
+      if (value !== undefined) throw new UsageError(`${rawName} takes no value (got ${shown(value)})`);
+      switches[name] = true;
+      continue;
+    }
+    if (value === undefined) throw new UsageError(`missing value for ${rawName} (expected ${EXPECTED[name]()})`);
+    READERS[name](value, flags);
+  }
+  if (file === undefined) throw new UsageError("missing study file (usage: npm run evaluate -- FILE [options])");
+  if (flags.seed !== undefined && flags.risk === undefined) throw new UsageError("--seed applies only with --risk N");
+  if (flags.risk !== undefined && flags.sweep) throw new UsageError("--risk cannot be combined with --sweep (run one span at a time)");
+  return { ...flags, ...switches, file };
 }
 
 /** A file's text; a leading byte-order mark is dropped (the browser opens such files too). */
@@ -135,7 +192,7 @@ function loadStudy(parsed: Parsed, readText: (p: string) => string): Study {
     if (parsed.rates) study = { ...study, cost: { ...study.cost, rates: parseRateCsv(read(parsed.rates, "rate file", readText)) } };
   } catch (error) {
     if (error instanceof UsageError) throw error;
-    throw new UsageError(`invalid table: ${oneLine(error instanceof Error ? error.message : String(error))}`);
+    throw failure(`invalid table: ${oneLine(messageOf(error))}`, error, UsageError);
   }
   return study;
 }
@@ -214,7 +271,7 @@ function riskRun(study: Study, brief: Study["brief"], schemeIds: readonly Scheme
   try {
     return runRisk({ ...study, brief, schemes }, catalogue, { samples, ...(seed !== undefined ? { seed } : {}) });
   } catch (error) {
-    throw new UsageError(oneLine(error instanceof Error ? error.message : String(error)));
+    throw failure(oneLine(messageOf(error)), error, UsageError);
   }
 }
 
@@ -314,7 +371,7 @@ export function runCli(args: readonly string[], readText: (path: string) => stri
     return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(figures)}${gapText}${riskText}\n\n${CAUTION}\n`, stderr };
   } catch (error) {
     if (error instanceof UsageError) return { code: 2, stdout: "", stderr: `spanbook: ${error.message}\n` };
-    return { code: 1, stdout: "", stderr: `spanbook: internal error: ${error instanceof Error ? error.message : String(error)}\n` };
+    return { code: 1, stdout: "", stderr: `spanbook: internal error: ${messageOf(error)}\n` };
   }
 }
 

@@ -1,0 +1,43 @@
+// The command line's arguments, read by Node's parser (node:util parseArgs): every refusal names
+// the option and what it allows, on one line, exit 2.
+import { describe, it, expect } from "vitest";
+import { readFileSync } from "node:fs";
+import { runCli } from "../../../src/cli";
+
+const demo = readFileSync("data/demo-study.json", "utf8");
+const run = (...args: string[]) => runCli(args, (path) => {
+  if (path === "demo.json") return demo;
+  throw Object.assign(new Error("missing"), { code: "ENOENT" });
+});
+
+describe("command-line arguments", () => {
+  const refused: [string[], RegExp][] = [
+    [["demo.json", "--frobnicate"], /unknown option: --frobnicate \(allowed: --help, --json, --partial, --span, --sweep, --schemes, --factors, --rates, --risk, --seed; see --help\)/],
+    [["demo.json", "-x"], /unknown option: -x \(allowed: /],
+    [["demo.json", "--span"], /missing value for --span \(expected a span in m from 30 to 500\)/],
+    [["demo.json", "--schemes"], /missing value for --schemes \(expected scheme ids separated by commas, from cable-dome, /],
+    [["demo.json", "--json=yes"], /--json takes no value \(got yes\)/],
+    [["demo.json", "--span=abc"], /invalid --span: abc \(expected a span from 30 to 500 m/],
+    [["demo.json", "other.json"], /unexpected argument: other\.json \(only one study file\)/],
+  ];
+  for (const [args, message] of refused) {
+    it(`refuses ${args.join(" ")}`, () => {
+      const result = run(...args);
+      expect(result.code).toBe(2);
+      expect(result.stdout).toBe("");
+      expect(result.stderr).toMatch(message);
+      expect(result.stderr.trim().split("\n")).toHaveLength(1);
+    });
+  }
+  it("reads --name=value as --name value, and a negative number as the value it is", () => {
+    expect(run("demo.json", "--span=90", "--schemes=truss-roof", "--json").stdout).toBe(run("demo.json", "--span", "90", "--schemes", "truss-roof", "--json").stdout);
+    expect(run("demo.json", "--risk", "20", "--seed", "-1").stderr).toMatch(/invalid --seed: -1 \(expected a whole number from 0 to 2147483647\)/);
+  });
+  it("-h and --help print the usage, exit 0", () => {
+    for (const flag of ["-h", "--help"]) {
+      const result = run(flag);
+      expect(result.code).toBe(0);
+      expect(result.stdout).toMatch(/^usage: npm run evaluate -- FILE/);
+    }
+  });
+});
