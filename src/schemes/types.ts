@@ -3,7 +3,9 @@ import type { Catalogue } from "../catalogue/types";
 import type { MaterialId } from "../materials";
 import type { TakeoffGroup, TakeoffRow } from "../takeoff/takeoff-row";
 
-export type SchemeId = "cable-dome" | "cable-net" | "geodesic-dome" | "truss-roof" | "concrete-shell" | "timber-dome";
+import type { SchemeId } from "./ids";
+
+export type { SchemeId };
 
 /** A scheme option's value as the study file stores it. */
 export type OptionValue = number | string | boolean;
