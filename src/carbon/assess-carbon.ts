@@ -4,7 +4,7 @@ import { FactorTableSchema, type FactorRow } from "./factor-table";
 import { CarbonSettingsSchema, type AreaBasis, type CarbonSettings } from "./carbon-settings";
 import { areaForBasis, checkAreas, type AssessmentAreas } from "../takeoff/assessment-areas";
 import { materialCarbon, type ModuleCarbon } from "./material-carbon";
-import { MissingRowsError, missingMaterials } from "./missing-rows";
+import { MissingRowsError, missingMaterials } from "../takeoff/missing-rows";
 
 /** One take-off row's carbon, kgCO2e, with the mass it was computed from (allowance included). */
 export type CarbonRowResult = ModuleCarbon & {

@@ -44,7 +44,6 @@ export {
 } from "./assess-carbon";
 
 // Rows a take-off needs that a table lacks (shared with cost)
-export { MissingRowsError, missingMaterials, missingItems, type MissingKey } from "./missing-rows";
 
 // Table editing (pages' cell editors)
 export { checkRowEdit, type RowEditResult } from "./check-row-edit";

@@ -1,7 +1,7 @@
 import type { TakeoffRow } from "../takeoff/takeoff-row";
 import { validateOnce } from "../kernel/validate";
 import { checkAreas, type AssessmentAreas } from "../takeoff/assessment-areas";
-import { MissingRowsError, missingItems } from "../carbon/missing-rows";
+import { MissingRowsError, missingItems } from "../takeoff/missing-rows";
 import { RateTableSchema, type RateRow } from "./rate-table";
 import type { OnCosts } from "./on-costs";
 import { applyOnCosts, type OnCostLine } from "./apply-on-costs";

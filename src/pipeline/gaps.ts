@@ -1,5 +1,6 @@
 import type { Design } from "../schemes/types";
-import { missingMaterials, missingItems, type FactorRow } from "../carbon";
+import type { FactorRow } from "../carbon";
+import { missingMaterials, missingItems } from "../takeoff/missing-rows";
 import type { RateRow } from "../cost";
 
 /** A row that the schemes' take-offs need and a table lacks, with the schemes that need it. */

@@ -1,4 +1,4 @@
-import type { TakeoffRow } from "../takeoff/takeoff-row";
+import type { TakeoffRow } from "./takeoff-row";
 
 /** A key a take-off needs that its table lacks, with where it is first needed. */
 export type MissingKey = { key: string; where: string };
