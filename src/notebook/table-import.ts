@@ -4,6 +4,7 @@
 // until the user applies it; the table set's name (provenance for captions) changes in the same update.
 import { CsvError, listProblems } from "../catalogue";
 import { mergeRows, importedSetName, type RowMerge } from "../carbon";
+import { messageOf } from "../kernel/errors";
 
 /** A row the schemes need that a table lacks, with the schemes that need it. */
 export type RowGap = { key: string; neededBy: readonly string[] };
@@ -105,7 +106,7 @@ export function tableImport<R extends Record<string, unknown>>(options: ImportOp
       rows = options.parseCsv(text, name);
     } catch (error) {
       if (error instanceof CsvError) say(false, `${name} was not imported; nothing changed. ${error.problems.length} problem${error.problems.length === 1 ? "" : "s"}:\n${listProblems(error.problems, MAX_LISTED).join("\n")}`);
-      else say(false, `${name} was not imported; nothing changed: ${error instanceof Error ? error.message : String(error)}`);
+      else say(false, `${name} was not imported; nothing changed: ${messageOf(error)}`);
       return;
     }
     if (mode === "merge") return showMerge(rows, name);
