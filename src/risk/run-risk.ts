@@ -2,7 +2,7 @@ import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { evaluateStudy, designScheme, assessDesign } from "../pipeline";
+import { evaluateStudy, designScheme, assessDesign, type SchemeFigures } from "../pipeline";
 import { CONCEPT_SCREENING } from "../cost";
 import { getIn } from "../kernel/patch";
 import { createPrng } from "./prng";
@@ -83,12 +83,68 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
   const check = checkRiskInputs(study);
   if (check.problems.length > 0) throw new Error(`invalid risk inputs: ${check.problems.map((p) => p.message).join("; ")}`);
 
-  // Rows found by id, ranges made absolute around the study's values (the mode).
-  const inputs = check.resolved;
-  const distributions = inputs.map((i) => makeDistribution(i.distribution, i.low, i.mode, i.high));
-  const isDesign = inputs.map(affectsDesign);
-  const models: SchemeModel[] = SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
+  const plan = planInputs(study, check.resolved, samples, designSamples, options);
+  const rng = createPrng(seed);
+  const poolU = latinHypercube(plan, rng);
+  const deterministic = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, r.figures]));
+  const designs = drawDesigns(study, catalogue, plan, poolU);
+  const drawn = drawSamples(study, plan, poolU, designs, rng);
 
+  const carbonOutputs = drawn.outputs.map((o) => o[1] as Float64Array);
+  const costOutputs = drawn.outputs.map((o) => o[2] as Float64Array);
+  const lowestCarbon = lowestProbabilities(carbonOutputs, drawn.clusters);
+  const lowestCost = lowestProbabilities(costOutputs, drawn.clusters);
+  const ids = plan.models.map((m) => m.id);
+  const warnings = [...check.warnings];
+  const schemes: SchemeRisk[] = plan.models.map((model, s) => ({
+    ...schemeSummary(plan, model, s, designs, drawn, deterministic.get(model.id), warnings),
+    pLowestCarbon: lowestCarbon.p[s] as number,
+    pLowestCost: lowestCost.p[s] as number,
+    seLowestCarbon: lowestCarbon.se[s] as number,
+    seLowestCost: lowestCost.se[s] as number,
+  }));
+  const { inputs, isDesign, models } = plan;
+  return {
+    samples,
+    seed,
+    designSamples,
+    designsPerScheme: Object.fromEntries(models.map((m, s) => [m.id, (designs.entries[s] as DesignEntry[]).length])),
+    samplesWithFeasible: lowestCarbon.samplesWithAny,
+    schemes,
+    pairwise: [...pairwiseProbabilities(ids, carbonOutputs, "carbonKgCO2ePerM2Floor"), ...pairwiseProbabilities(ids, costOutputs, "costPerM2Floor")],
+    rankCorrelations: rankCorrelationsOf(plan, drawn),
+    designInputs: inputs.filter((_, k) => isDesign[k]).map((i) => i.id),
+    assessmentInputs: inputs.filter((_, k) => !isDesign[k]).map((i) => i.id),
+    estimateClass: CONCEPT_SCREENING,
+    coverage: RISK_COVERAGE,
+    currency: study.cost.onCosts.currency,
+    warnings,
+  };
+}
+
+/** What a run draws: the inputs, their distributions and groups, the schemes, and the counts. */
+type Plan = {
+  inputs: readonly ResolvedInput[];
+  distributions: Distribution[];
+  isDesign: boolean[];
+  models: SchemeModel[];
+  /** Groups in order of first appearance, each input's group, and whether a group is drawn with the designs. */
+  groupKeys: string[];
+  groupOf: number[];
+  designGroup: boolean[];
+  samples: number;
+  designSamples: number;
+  options: RunRiskOptions;
+};
+
+type Designs = { entries: DesignEntry[][]; entryOf: Int32Array[] };
+type Drawn = { inputValues: Float64Array[]; outputs: Float64Array[][]; clusters: Clusters };
+
+const every = (total: number) => Math.max(1, Math.floor(total / 100));
+
+function planInputs(study: RiskStudy, inputs: readonly ResolvedInput[], samples: number, designSamples: number, options: RunRiskOptions): Plan {
+  // Rows found by id, ranges made absolute around the study's values (the mode).
+  const isDesign = inputs.map(affectsDesign);
   // Groups in order of first appearance; a group with any design-affecting input is drawn with the designs.
   const groupKeys: string[] = [];
   const groupOf = inputs.map((input) => {
@@ -97,12 +153,25 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
     if (g < 0) g = groupKeys.push(key) - 1;
     return g;
   });
-  const designGroup = groupKeys.map((_, g) => inputs.some((input, k) => groupOf[k] === g && isDesign[k]));
+  return {
+    inputs,
+    distributions: inputs.map((i) => makeDistribution(i.distribution, i.low, i.mode, i.high)),
+    isDesign,
+    models: SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false),
+    groupKeys,
+    groupOf,
+    designGroup: groupKeys.map((_, g) => inputs.some((_input, k) => groupOf[k] === g && isDesign[k])),
+    samples,
+    designSamples,
+    options,
+  };
+}
 
-  const rng = createPrng(seed);
-  // Latin hypercube for the design groups: one stratum of width 1/designSamples per draw, shuffled per group.
-  const poolU = groupKeys.map((_, g) => {
-    if (!designGroup[g]) return null;
+/** Latin hypercube for the design groups: one stratum of width 1/designSamples per draw, shuffled per group. */
+function latinHypercube(plan: Plan, rng: ReturnType<typeof createPrng>): (Float64Array | null)[] {
+  const { designSamples } = plan;
+  return plan.groupKeys.map((_, g) => {
+    if (!plan.designGroup[g]) return null;
     const strata = Int32Array.from({ length: designSamples }, (_, j) => j);
     for (let j = designSamples - 1; j > 0; j--) {
       const r = Math.floor(rng.uniform() * (j + 1));
@@ -112,12 +181,12 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
     }
     return Float64Array.from(strata, (s) => (s + rng.uniform()) / designSamples);
   });
+}
 
-  const deterministic = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, r.figures]));
-
-  // Designs: once per scheme per distinct draw of the inputs that affect it.
+/** Designs: once per scheme per distinct draw of the inputs that affect it. */
+function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: readonly (Float64Array | null)[]): Designs {
+  const { inputs, models, designSamples, options } = plan;
   const designTotal = models.length * designSamples;
-  const every = (total: number) => Math.max(1, Math.floor(total / 100));
   const entries = models.map(() => [] as DesignEntry[]);
   const entryOf = models.map(() => new Int32Array(designSamples));
   let done = 0;
@@ -126,7 +195,7 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
     const paths = relevant.map((k) => (inputs[k] as ResolvedInput).path);
     const seen = new Map<string, number>();
     for (let j = 0; j < designSamples; j++) {
-      const values = relevant.map((k) => (distributions[k] as ReturnType<typeof makeDistribution>).quantile((poolU[groupOf[k] as number] as Float64Array)[j] as number));
+      const values = relevant.map((k) => (plan.distributions[k] as Distribution).quantile((poolU[plan.groupOf[k] as number] as Float64Array)[j] as number));
       const key = values.join(",");
       let index = seen.get(key);
       if (index === undefined) {
@@ -143,43 +212,62 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
       }
     }
   });
+  return { entries, entryOf };
+}
 
+/** Every input's value in sample i: design groups from their hypercube draw, the others from a fresh one. */
+function drawInputs(plan: Plan, poolU: readonly (Float64Array | null)[], rng: ReturnType<typeof createPrng>, i: number, inputValues: Float64Array[]): void {
+  const j = i % plan.designSamples;
+  const sampleU = plan.groupKeys.map((_, g) => (plan.designGroup[g] ? ((poolU[g] as Float64Array)[j] as number) : rng.uniform()));
+  // Inputs of one group with the same standardized shape share one quantile evaluation.
+  const shared = new Map<string, number>();
+  plan.distributions.forEach((d, k) => {
+    const key = `${plan.groupOf[k] as number}|${d.shapeKey}`;
+    let z = shared.get(key);
+    if (z === undefined) {
+      z = d.standardQuantile(sampleU[plan.groupOf[k] as number] as number);
+      shared.set(key, z);
+    }
+    (inputValues[k] as Float64Array)[i] = d.high === d.low ? d.low : d.low + (d.high - d.low) * z;
+  });
+}
+
+/** One sample's self-weight, carbon and cost per m² for one scheme's design (NaN when infeasible). */
+function assessEntry(study: RiskStudy, entry: DesignEntry, intensities: ReturnType<typeof assessmentIntensities> | null): [number, number, number] {
+  if (!entry.design.feasible) return [Number.NaN, Number.NaN, Number.NaN];
+  if (intensities !== null) {
+    const linear = linearAssessment(entry.quantities, intensities);
+    return [entry.design.selfWeightKgPerM2, linear.carbonPerM2Floor, linear.costPerM2Floor];
+  }
+  if (!entry.direct) {
+    const direct = assessDesign(entry.design, study);
+    entry.direct = { carbon: direct.carbon?.perM2UsableFloor.perM2?.counted ?? Number.NaN, cost: direct.cost?.perM2UsableFloor?.total ?? Number.NaN };
+  }
+  return [entry.design.selfWeightKgPerM2, entry.direct.carbon, entry.direct.cost];
+}
+
+/** The samples: each with its design draw and its own draw of the assessment-only inputs. */
+function drawSamples(study: RiskStudy, plan: Plan, poolU: readonly (Float64Array | null)[], designs: Designs, rng: ReturnType<typeof createPrng>): Drawn {
+  const { inputs, models, samples, designSamples, options } = plan;
   const materials = new Set<string>();
   const items = new Set<string>();
-  for (const list of entries) {
+  for (const list of designs.entries) {
     for (const e of list) {
       for (const [m] of e.quantities.massKgByMaterial) materials.add(m);
       for (const [c] of e.quantities.quantityByItem) items.add(c);
     }
   }
-
-  // Samples.
-  const assessIndex = inputs.map((_, k) => k).filter((k) => !isDesign[k]);
+  const assessIndex = inputs.map((_, k) => k).filter((k) => !plan.isDesign[k]);
   const assessPaths = compilePaths(assessIndex.map((k) => (inputs[k] as ResolvedInput).path));
   const baseValues = assessIndex.map((k) => getIn(study, (inputs[k] as ResolvedInput).path) as number);
   const inputValues = inputs.map(() => new Float64Array(samples));
   const outputs = models.map(() => RISK_METRICS.map(() => new Float64Array(samples)));
   const clusters: Clusters = { of: new Int32Array(samples), count: designSamples };
-  const sampleU = new Float64Array(groupKeys.length);
   const values = new Float64Array(assessIndex.length);
-  const shared = new Map<string, number>();
-  const shareKey = distributions.map((d, k) => `${groupOf[k] as number}|${d.shapeKey}`);
   for (let i = 0; i < samples; i++) {
     const j = i % designSamples;
     clusters.of[i] = j;
-    for (let g = 0; g < groupKeys.length; g++) sampleU[g] = designGroup[g] ? ((poolU[g] as Float64Array)[j] as number) : rng.uniform();
-    // Inputs of one group with the same standardized shape share one quantile evaluation.
-    shared.clear();
-    for (let k = 0; k < inputs.length; k++) {
-      const d = distributions[k] as Distribution;
-      const key = shareKey[k] as string;
-      let z = shared.get(key);
-      if (z === undefined) {
-        z = d.standardQuantile(sampleU[groupOf[k] as number] as number);
-        shared.set(key, z);
-      }
-      (inputValues[k] as Float64Array)[i] = d.high === d.low ? d.low : d.low + (d.high - d.low) * z;
-    }
+    drawInputs(plan, poolU, rng, i, inputValues);
     let atBase = true;
     assessIndex.forEach((k, a) => {
       values[a] = (inputValues[k] as Float64Array)[i] as number;
@@ -187,43 +275,24 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
     });
     const intensities = atBase ? null : assessmentIntensities(applyValues(study, assessPaths, values), materials, items);
     models.forEach((_, s) => {
-      const entry = (entries[s] as DesignEntry[])[(entryOf[s] as Int32Array)[j] as number] as DesignEntry;
-      const [weight, carbon, cost] = outputs[s] as [Float64Array, Float64Array, Float64Array];
-      if (!entry.design.feasible) {
-        weight[i] = carbon[i] = cost[i] = Number.NaN;
-        return;
-      }
-      weight[i] = entry.design.selfWeightKgPerM2;
-      let metrics: { carbon: number; cost: number };
-      if (intensities === null) {
-        if (!entry.direct) {
-          const direct = assessDesign(entry.design, study);
-          entry.direct = { carbon: direct.carbon?.perM2UsableFloor.perM2?.counted ?? Number.NaN, cost: direct.cost?.perM2UsableFloor?.total ?? Number.NaN };
-        }
-        metrics = entry.direct;
-      } else {
-        const linear = linearAssessment(entry.quantities, intensities);
-        metrics = { carbon: linear.carbonPerM2Floor, cost: linear.costPerM2Floor };
-      }
-      carbon[i] = metrics.carbon;
-      cost[i] = metrics.cost;
+      const entry = (designs.entries[s] as DesignEntry[])[(designs.entryOf[s] as Int32Array)[j] as number] as DesignEntry;
+      const metrics = assessEntry(study, entry, intensities);
+      (outputs[s] as Float64Array[]).forEach((out, m) => (out[i] = metrics[m] as number));
     });
     if ((i + 1) % every(samples) === 0) {
       if (options.shouldStop?.()) throw new RiskCancelledError();
       options.onProgress?.({ phase: "samples", done: i + 1, total: samples });
     }
   }
+  return { inputValues, outputs, clusters };
+}
 
-  // Summaries.
-  const carbonOutputs = outputs.map((o) => o[1] as Float64Array);
-  const costOutputs = outputs.map((o) => o[2] as Float64Array);
-  const lowestCarbon = lowestProbabilities(carbonOutputs, clusters);
-  const lowestCost = lowestProbabilities(costOutputs, clusters);
-  const ids = models.map((m) => m.id);
-  const varying = inputs.map((i) => i.low < i.high);
-  const inputRanks = inputValues.map((x, k) => (varying[k] ? ranks(x) : null));
-  const rankCorrelations: RankCorrelation[] = [];
-  models.forEach((model, s) => {
+/** Spearman rank correlation of each input with each scheme's outputs, where the input can move it. */
+function rankCorrelationsOf(plan: Plan, drawn: Drawn): RankCorrelation[] {
+  const { inputs, isDesign } = plan;
+  const inputRanks = drawn.inputValues.map((x, k) => ((inputs[k] as ResolvedInput).low < (inputs[k] as ResolvedInput).high ? ranks(x) : null));
+  const out: RankCorrelation[] = [];
+  plan.models.forEach((model, s) => {
     RISK_METRICS.forEach((metric, m) => {
       // Only inputs that can move this output: self-weight only the design inputs of this scheme,
       // carbon and cost also every assessment input (another scheme's options would show noise).
@@ -232,57 +301,32 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
         if (isDesign[k] && !affectsScheme(input, model.id)) return null;
         return metric === "selfWeightKgPerM2" && !isDesign[k] ? null : r;
       });
-      const rho = rankCorrelationsWith((outputs[s] as Float64Array[])[m] as Float64Array, inputValues, usable);
+      const rho = rankCorrelationsWith((drawn.outputs[s] as Float64Array[])[m] as Float64Array, drawn.inputValues, usable);
       inputs.forEach((input, k) => {
-        if (usable[k]) rankCorrelations.push({ scheme: model.id, metric, inputId: input.id, rho: rho[k] ?? null });
+        if (usable[k]) out.push({ scheme: model.id, metric, inputId: input.id, rho: rho[k] ?? null });
       });
     });
   });
+  return out;
+}
 
-  const warnings = [...check.warnings];
-  const schemes: SchemeRisk[] = models.map((model, s) => {
-    const h = deterministic.get(model.id);
-    const feasibleSamples = (outputs[s] as Float64Array[])[0]?.reduce((n, x) => (Number.isFinite(x) ? n + 1 : n), 0) ?? 0;
-    const reasons = new Map<string, number>();
-    for (let j = 0; j < designSamples; j++) {
-      const e = (entries[s] as DesignEntry[])[(entryOf[s] as Int32Array)[j] as number] as DesignEntry;
-      if (!e.design.feasible) reasons.set(e.design.reason, (reasons.get(e.design.reason) ?? 0) + 1);
-    }
-    const commonReason = [...reasons].sort((a, b) => b[1] - a[1])[0]?.[0] ?? "";
-    if (feasibleSamples < samples) warnings.push(`${model.label}: infeasible in ${samples - feasibleSamples} of ${samples} samples${commonReason ? ` (${commonReason})` : ""}`);
-    const det: Record<RiskMetric, number | null> = {
-      selfWeightKgPerM2: h?.feasible ? h.selfWeightKgPerM2 : null,
-      carbonKgCO2ePerM2Floor: h?.feasible ? h.carbonKgCO2ePerM2Floor : null,
-      costPerM2Floor: h?.feasible ? h.costPerM2Floor : null,
-    };
-    const metrics = Object.fromEntries(RISK_METRICS.map((metric, m) => [metric, summariseMetric((outputs[s] as Float64Array[])[m] as Float64Array, clusters, det[metric])])) as Record<RiskMetric, SchemeRisk["metrics"][RiskMetric]>;
-    return {
-      id: model.id,
-      label: model.label,
-      pFeasible: feasibleSamples / samples,
-      commonReason,
-      metrics,
-      pLowestCarbon: lowestCarbon.p[s] as number,
-      pLowestCost: lowestCost.p[s] as number,
-      seLowestCarbon: lowestCarbon.se[s] as number,
-      seLowestCost: lowestCost.se[s] as number,
-    };
-  });
-
-  return {
-    samples,
-    seed,
-    designSamples,
-    designsPerScheme: Object.fromEntries(models.map((m, s) => [m.id, (entries[s] as DesignEntry[]).length])),
-    samplesWithFeasible: lowestCarbon.samplesWithAny,
-    schemes,
-    pairwise: [...pairwiseProbabilities(ids, carbonOutputs, "carbonKgCO2ePerM2Floor"), ...pairwiseProbabilities(ids, costOutputs, "costPerM2Floor")],
-    rankCorrelations,
-    designInputs: inputs.filter((_, k) => isDesign[k]).map((i) => i.id),
-    assessmentInputs: inputs.filter((_, k) => !isDesign[k]).map((i) => i.id),
-    estimateClass: CONCEPT_SCREENING,
-    coverage: RISK_COVERAGE,
-    currency: study.cost.onCosts.currency,
-    warnings,
+/** One scheme's share of feasible samples, its commonest reason, and each metric's summary; a warning when not always feasible. */
+function schemeSummary(plan: Plan, model: SchemeModel, s: number, designs: Designs, drawn: Drawn, h: SchemeFigures | undefined, warnings: string[]) {
+  const { samples, designSamples } = plan;
+  const outputs = drawn.outputs[s] as Float64Array[];
+  const feasibleSamples = outputs[0]?.reduce((n, x) => (Number.isFinite(x) ? n + 1 : n), 0) ?? 0;
+  const reasons = new Map<string, number>();
+  for (let j = 0; j < designSamples; j++) {
+    const e = (designs.entries[s] as DesignEntry[])[(designs.entryOf[s] as Int32Array)[j] as number] as DesignEntry;
+    if (!e.design.feasible) reasons.set(e.design.reason, (reasons.get(e.design.reason) ?? 0) + 1);
+  }
+  const commonReason = [...reasons].sort((a, b) => b[1] - a[1])[0]?.[0] ?? "";
+  if (feasibleSamples < samples) warnings.push(`${model.label}: infeasible in ${samples - feasibleSamples} of ${samples} samples${commonReason ? ` (${commonReason})` : ""}`);
+  const det: Record<RiskMetric, number | null> = {
+    selfWeightKgPerM2: h?.feasible ? h.selfWeightKgPerM2 : null,
+    carbonKgCO2ePerM2Floor: h?.feasible ? h.carbonKgCO2ePerM2Floor : null,
+    costPerM2Floor: h?.feasible ? h.costPerM2Floor : null,
   };
+  const metrics = Object.fromEntries(RISK_METRICS.map((metric, m) => [metric, summariseMetric(outputs[m] as Float64Array, drawn.clusters, det[metric])])) as Record<RiskMetric, SchemeRisk["metrics"][RiskMetric]>;
+  return { id: model.id, label: model.label, pFeasible: feasibleSamples / samples, commonReason, metrics };
 }
