@@ -81,125 +81,142 @@ export class CapTooSmallError extends RangeError {
   }
 }
 
-/**
- * Class I geodesic sphere (capAngle = π) or cap of half-angle φ0: keeps the sub-triangles whose three
- * corners lie on or above the cut plane z = R cos φ0, with their edges and nodes; the nodes on the
- * boundary of the kept faces form the ring and are moved along their meridian onto the cut circle
- * (so the ring is plane and the cap has the intended rise; struts next to the ring lengthen).
- * Only icosahedron faces that can reach the cap are subdivided, so a shallow cap costs little.
- * @param frequency v ≥ 1 (integer)
- * @param radiusM sphere radius R, m
- * @param capAngleRad φ0, 0 < φ0 ≤ π
- * @throws when v is not a whole number 1–400, R ≤ 0 or φ0 outside (0, π], or when not one
- *   sub-triangle fits inside the cap (CapTooSmallError)
- */
-export function geodesicCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
-  if (!(Number.isInteger(frequency) && frequency >= 1 && frequency <= 400)) throw new RangeError(`invalid geodesic frequency: ${frequency} (expected a whole number 1–400)`);
-  if (!(radiusM > 0)) throw new RangeError(`invalid sphere radius: ${radiusM} m (expected > 0)`);
-  if (!(capAngleRad > 0 && capAngleRad <= Math.PI)) throw new RangeError(`invalid cap angle: ${capAngleRad} rad (expected 0 < φ0 ≤ π)`);
-  const v = frequency;
-  const zCut = Math.cos(capAngleRad);
-  const tolerance = 1e-9;
-  const unit: number[] = []; // x, y, z of each node on the unit sphere
-  const keyToNode = new Map<number, number>(); // nodes shared between icosahedron faces
-  const faces: [number, number, number][] = [];
+/** The working grid of one icosahedron face's subdivision, reused face after face, and what it builds. */
+interface Grid {
+  v: number;
+  zCut: number;
+  /** Local index of grid point (i, j) is rowStart[i] + j. */
+  rowStart: number[];
+  lx: Float64Array;
+  ly: Float64Array;
+  lz: Float64Array;
+  localNode: Int32Array;
+  keep: Uint8Array;
+  used: Uint8Array;
+  /** x, y, z of each node on the unit sphere. */
+  unit: number[];
+  /** Nodes shared between icosahedron faces, by key. */
+  keyToNode: Map<number, number>;
+  faces: [number, number, number][];
+}
+
+const TOLERANCE = 1e-9;
+
+function newGrid(v: number, zCut: number): Grid {
   const localCount = ((v + 1) * (v + 2)) / 2;
   const rowStart: number[] = [];
   for (let i = 0, s = 0; i <= v; i++) {
     rowStart.push(s);
     s += v + 1 - i;
   }
-  const lx = new Float64Array(localCount);
-  const ly = new Float64Array(localCount);
-  const lz = new Float64Array(localCount);
-  const localNode = new Int32Array(localCount);
+  const floats = () => new Float64Array(localCount);
+  const bytes = () => new Uint8Array(localCount);
+  return { v, zCut, rowStart, lx: floats(), ly: floats(), lz: floats(), localNode: new Int32Array(localCount), keep: bytes(), used: bytes(), unit: [], keyToNode: new Map(), faces: [] };
+}
 
-  const keep = new Uint8Array(localCount);
-  const used = new Uint8Array(localCount);
+/** Grid point (i, j) = A + (B − A) i/v + (C − A) j/v, pushed out to the sphere; kept when on or above the cut. */
+function projectFace(g: Grid, A: Vec3, B: Vec3, C: Vec3): void {
+  const { v, zCut, rowStart, keep } = g;
+  for (let i = 0; i <= v; i++) {
+    const s = i / v;
+    for (let j = 0; i + j <= v; j++) {
+      const t = j / v;
+      const x = A[0] + (B[0] - A[0]) * s + (C[0] - A[0]) * t;
+      const y = A[1] + (B[1] - A[1]) * s + (C[1] - A[1]) * t;
+      const z = A[2] + (B[2] - A[2]) * s + (C[2] - A[2]) * t;
+      const k = rowStart[i]! + j;
+      g.used[k] = 0;
+      // A flat-face point lies at least the inscribed radius from the centre, so z/|p| ≤ z/r_in:
+      // points that cannot reach the cut are dropped before the square root.
+      if (zCut > 0 && z < INSCRIBED_RADIUS * (zCut - TOLERANCE)) {
+        keep[k] = 0;
+        continue;
+      }
+      const n = Math.sqrt(x * x + y * y + z * z);
+      g.lx[k] = x / n;
+      g.ly[k] = y / n;
+      g.lz[k] = z / n;
+      keep[k] = z / n >= zCut - TOLERANCE ? 1 : 0;
+    }
+  }
+}
+
+/**
+ * Visits the sub-triangles with all three corners kept: "up" (i,j)(i+1,j)(i,j+1) and "down"
+ * (i+1,j)(i+1,j+1)(i,j+1), as local indices; true when there was one.
+ */
+function keptTriangles(g: Grid, visit: (a: number, b: number, c: number) => void): boolean {
+  const { v, rowStart, keep } = g;
+  let any = false;
+  for (let i = 0; i < v; i++) {
+    const r0 = rowStart[i]!;
+    const r1 = rowStart[i + 1]!;
+    for (let j = 0; i + j < v; j++) {
+      if (keep[r0 + j] && keep[r1 + j] && keep[r0 + j + 1]) {
+        visit(r0 + j, r1 + j, r0 + j + 1);
+        any = true;
+      }
+      if (i + j < v - 1 && keep[r1 + j] && keep[r1 + j + 1] && keep[r0 + j + 1]) {
+        visit(r1 + j, r1 + j + 1, r0 + j + 1);
+        any = true;
+      }
+    }
+  }
+  return any;
+}
+
+/**
+ * Numbers the used points of a face; points on the face's edges and corners are shared with the
+ * neighbouring face, so they are keyed by icosahedron edge and step.
+ */
+function numberNodes(g: Grid, ia: number, ib: number, ic: number): void {
+  const { v, rowStart, unit, keyToNode } = g;
+  for (let i = 0; i <= v; i++) {
+    for (let j = 0; i + j <= v; j++) {
+      const k = rowStart[i]! + j;
+      if (!g.used[k]) continue;
+      let key = -1;
+      if (i === 0 && j === 0) key = ia;
+      else if (i === v) key = ib;
+      else if (j === v) key = ic;
+      else if (j === 0) key = sharedEdgeKey(ia, ib, i, v);
+      else if (i === 0) key = sharedEdgeKey(ia, ic, j, v);
+      else if (i + j === v) key = sharedEdgeKey(ib, ic, j, v);
+      let index = key >= 0 ? keyToNode.get(key) : undefined;
+      if (index === undefined) {
+        index = unit.length / 3;
+        unit.push(g.lx[k]!, g.ly[k]!, g.lz[k]!);
+        if (key >= 0) keyToNode.set(key, index);
+      }
+      g.localNode[k] = index;
+    }
+  }
+}
+
+/** Subdivides the icosahedron faces that can reach the cap and keeps the triangles inside it. */
+function subdivideCap(v: number, zCut: number, capAngleRad: number): Grid {
+  const g = newGrid(v, zCut);
   for (const [ia, ib, ic] of ICOSA_FACES) {
     const A = ICOSA_VERTICES[ia]!;
     const B = ICOSA_VERTICES[ib]!;
     const C = ICOSA_VERTICES[ic]!;
     const centre = normalise([A[0] + B[0] + C[0], A[1] + B[1] + C[1], A[2] + B[2] + C[2]]);
     if (Math.acos(Math.max(-1, Math.min(1, centre[2]))) > capAngleRad + FACE_ANGULAR_RADIUS + 1e-9) continue;
-    // Grid point (i, j) = A + (B − A) i/v + (C − A) j/v, pushed out to the sphere; local index rowStart[i] + j.
-    for (let i = 0; i <= v; i++) {
-      const s = i / v;
-      for (let j = 0; i + j <= v; j++) {
-        const t = j / v;
-        const x = A[0] + (B[0] - A[0]) * s + (C[0] - A[0]) * t;
-        const y = A[1] + (B[1] - A[1]) * s + (C[1] - A[1]) * t;
-        const z = A[2] + (B[2] - A[2]) * s + (C[2] - A[2]) * t;
-        const k = rowStart[i]! + j;
-        used[k] = 0;
-        // A flat-face point lies at least the inscribed radius from the centre, so z/|p| ≤ z/r_in:
-        // points that cannot reach the cut are dropped before the square root.
-        if (zCut > 0 && z < INSCRIBED_RADIUS * (zCut - tolerance)) {
-          keep[k] = 0;
-          continue;
-        }
-        const n = Math.sqrt(x * x + y * y + z * z);
-        lx[k] = x / n;
-        ly[k] = y / n;
-        lz[k] = z / n;
-        keep[k] = z / n >= zCut - tolerance ? 1 : 0;
-      }
-    }
-    // Sub-triangles with all three corners kept: "up" (i,j)(i+1,j)(i,j+1) and "down" (i+1,j)(i+1,j+1)(i,j+1).
-    let anyKept = false;
-    for (let i = 0; i < v; i++) {
-      const r0 = rowStart[i]!;
-      const r1 = rowStart[i + 1]!;
-      for (let j = 0; i + j < v; j++) {
-        if (keep[r0 + j] && keep[r1 + j] && keep[r0 + j + 1]) {
-          used[r0 + j] = used[r1 + j] = used[r0 + j + 1] = 1;
-          anyKept = true;
-        }
-        if (i + j < v - 1 && keep[r1 + j] && keep[r1 + j + 1] && keep[r0 + j + 1]) {
-          used[r1 + j] = used[r1 + j + 1] = used[r0 + j + 1] = 1;
-          anyKept = true;
-        }
-      }
-    }
+    projectFace(g, A, B, C);
+    const anyKept = keptTriangles(g, (a, b, c) => (g.used[a] = g.used[b] = g.used[c] = 1));
     if (!anyKept) continue;
-    // Number the used points; points on the face's edges and corners are shared with the
-    // neighbouring face, so they are keyed by icosahedron edge and step.
-    for (let i = 0; i <= v; i++) {
-      for (let j = 0; i + j <= v; j++) {
-        const k = rowStart[i]! + j;
-        if (!used[k]) continue;
-        let key = -1;
-        if (i === 0 && j === 0) key = ia;
-        else if (i === v) key = ib;
-        else if (j === v) key = ic;
-        else if (j === 0) key = sharedEdgeKey(ia, ib, i, v);
-        else if (i === 0) key = sharedEdgeKey(ia, ic, j, v);
-        else if (i + j === v) key = sharedEdgeKey(ib, ic, j, v);
-        let index = key >= 0 ? keyToNode.get(key) : undefined;
-        if (index === undefined) {
-          index = unit.length / 3;
-          unit.push(lx[k]!, ly[k]!, lz[k]!);
-          if (key >= 0) keyToNode.set(key, index);
-        }
-        localNode[k] = index;
-      }
-    }
-    for (let i = 0; i < v; i++) {
-      const r0 = rowStart[i]!;
-      const r1 = rowStart[i + 1]!;
-      for (let j = 0; i + j < v; j++) {
-        if (keep[r0 + j] && keep[r1 + j] && keep[r0 + j + 1]) faces.push([localNode[r0 + j]!, localNode[r1 + j]!, localNode[r0 + j + 1]!]);
-        if (i + j < v - 1 && keep[r1 + j] && keep[r1 + j + 1] && keep[r0 + j + 1]) faces.push([localNode[r1 + j]!, localNode[r1 + j + 1]!, localNode[r0 + j + 1]!]);
-      }
-    }
+    numberNodes(g, ia, ib, ic);
+    const n = g.localNode;
+    keptTriangles(g, (a, b, c) => g.faces.push([n[a]!, n[b]!, n[c]!]));
   }
+  return g;
+}
 
-  if (faces.length === 0) {
-    throw new CapTooSmallError(`invalid cap: no whole triangle of frequency ${v} fits within φ0 = ${capAngleRad.toFixed(4)} rad (expected a larger cap or a higher frequency)`);
-  }
-  // Edges of the kept faces, each once, with the number of faces using it. A node has at most six
-  // neighbours, so each edge is found by scanning its lower node's six slots.
-  const nodeCount = unit.length / 3;
+/**
+ * Edges of the faces, each once, with the number of faces using it. A node has at most six
+ * neighbours, so each edge is found by scanning its lower node's six slots.
+ */
+function edgesOf(faces: readonly [number, number, number][], nodeCount: number): { edges: [number, number][]; faceUse: number[] } {
   const slots = new Int32Array(nodeCount * 6).fill(-1);
   const slotEdge = new Int32Array(nodeCount * 6);
   const edges: [number, number][] = [];
@@ -229,7 +246,12 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
     addEdge(b, c);
     addEdge(c, a);
   }
-  const edgeOnRing = faceUse.map((n) => n === 1);
+  return { edges, faceUse };
+}
+
+/** Moves the nodes of the ring edges along their meridian onto the cut circle; the ring nodes in azimuth order. */
+function ringOntoCut(unit: number[], edges: readonly [number, number][], edgeOnRing: readonly boolean[], zCut: number): number[] {
+  const nodeCount = unit.length / 3;
   const onRing = new Uint8Array(nodeCount);
   for (let e = 0; e < edges.length; e++) {
     if (edgeOnRing[e]) {
@@ -237,7 +259,6 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
       onRing[edges[e]![1]] = 1;
     }
   }
-  // Move ring nodes along their meridian onto the cut circle.
   const ringRadius = Math.sqrt(Math.max(0, 1 - zCut * zCut));
   const ring: { node: number; azimuth: number }[] = [];
   for (let n = 0; n < nodeCount; n++) {
@@ -250,7 +271,35 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
     }
     ring.push({ node: n, azimuth: Math.atan2(unit[3 * n + 1]!, unit[3 * n]!) });
   }
-  const ringNodes = ring.sort((p, q) => p.azimuth - q.azimuth).map((r) => r.node);
+  return ring.sort((p, q) => p.azimuth - q.azimuth).map((r) => r.node);
+}
+
+/**
+ * Class I geodesic sphere (capAngle = π) or cap of half-angle φ0: keeps the sub-triangles whose three
+ * corners lie on or above the cut plane z = R cos φ0, with their edges and nodes; the nodes on the
+ * boundary of the kept faces form the ring and are moved along their meridian onto the cut circle
+ * (so the ring is plane and the cap has the intended rise; struts next to the ring lengthen).
+ * Only icosahedron faces that can reach the cap are subdivided, so a shallow cap costs little.
+ * @param frequency v ≥ 1 (integer)
+ * @param radiusM sphere radius R, m
+ * @param capAngleRad φ0, 0 < φ0 ≤ π
+ * @throws when v is not a whole number 1–400, R ≤ 0 or φ0 outside (0, π], or when not one
+ *   sub-triangle fits inside the cap (CapTooSmallError)
+ */
+export function geodesicCap(frequency: number, radiusM: number, capAngleRad: number): GeodesicCap {
+  if (!(Number.isInteger(frequency) && frequency >= 1 && frequency <= 400)) throw new RangeError(`invalid geodesic frequency: ${frequency} (expected a whole number 1–400)`);
+  if (!(radiusM > 0)) throw new RangeError(`invalid sphere radius: ${radiusM} m (expected > 0)`);
+  if (!(capAngleRad > 0 && capAngleRad <= Math.PI)) throw new RangeError(`invalid cap angle: ${capAngleRad} rad (expected 0 < φ0 ≤ π)`);
+  const v = frequency;
+  const zCut = Math.cos(capAngleRad);
+  const { unit, faces } = subdivideCap(v, zCut, capAngleRad);
+  if (faces.length === 0) {
+    throw new CapTooSmallError(`invalid cap: no whole triangle of frequency ${v} fits within φ0 = ${capAngleRad.toFixed(4)} rad (expected a larger cap or a higher frequency)`);
+  }
+  const nodeCount = unit.length / 3;
+  const { edges, faceUse } = edgesOf(faces, nodeCount);
+  const edgeOnRing = faceUse.map((n) => n === 1);
+  const ringNodes = ringOntoCut(unit, edges, edgeOnRing, zCut);
   const nodes: Vec3[] = new Array<Vec3>(nodeCount);
   for (let n = 0; n < nodeCount; n++) nodes[n] = [unit[3 * n]! * radiusM, unit[3 * n + 1]! * radiusM, unit[3 * n + 2]! * radiusM];
   const edgeLengthsM = new Array<number>(edges.length);
