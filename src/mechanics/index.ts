@@ -70,3 +70,4 @@ export { simplySupportedUdl, type BeamResponse } from "./beam";
 
 // units
 export { GRAVITY_M_PER_S2, kPaOfMass, kPaFromKgPerM2 } from "./gravity";
+export { ribbedShellStiffness, ribbedPanelBucklingNPerM, type RibbedShell } from "./ribbed-shell";

@@ -1,7 +1,5 @@
-import type { Brief } from "../../brief";
-import type { RoofActions } from "../../loads/roof-actions";
-import { ulsFactors } from "../../loads/uls-factors";
 import { sphericalMembraneForces } from "../../mechanics/spherical-membrane";
+import { heaviestCase, membraneLoadCases, type UniformCombination } from "../kit";
 import { zoellyPressurePa, zoellyThicknessM } from "../../mechanics/shell-buckling";
 import { REINFORCED_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
@@ -10,8 +8,12 @@ import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 export const CONCRETE_POISSON = 0.2;
 
 export interface ShellInputs {
-  brief: Brief;
-  actions: RoofActions;
+  /** The design combinations with their uniform equivalents (the membrane method takes uniform loads). */
+  combinations: readonly UniformCombination[];
+  /** Services and hung load, permanent, kPa of plan. */
+  servicesKPa: number;
+  /** Characteristic variable load for serviceability, kPa of plan. */
+  slsVariableKPa: number;
   radiusM: number;
   capAngleRad: number;
   /** Smallest thickness that can be built, m. */
@@ -44,7 +46,33 @@ export interface ShellThickness {
   /** ULS and SLS meridional force at the edge, N/m (negative). */
   edgeMeridionalUlsNPerM: number;
   edgeMeridionalSlsNPerM: number;
-  expression: string;
+  /** The gravity combination of largest pressure, which sets the thickness. */
+  governingCase: string;
+}
+
+/** The membrane state of the heaviest combination at a self-weight: its pressures, the largest compression and hoop tension, and the edge forces. */
+export function shellMembraneState(input: ShellInputs, selfWeightKPa: number) {
+  const R = input.radiusM;
+  const phi0 = input.capAngleRad;
+  const heaviest = heaviestCase(membraneLoadCases(input.combinations, selfWeightKPa, input.servicesKPa));
+  const { surfacePa, planPa } = heaviest;
+  let maxCompressionNPerM = 0;
+  let maxHoopTensionNPerM = 0;
+  const steps = 24;
+  for (let i = 0; i <= steps; i++) {
+    const n = sphericalMembraneForces(surfacePa, planPa, R, (phi0 * i) / steps);
+    maxCompressionNPerM = Math.max(maxCompressionNPerM, -n.meridionalNPerM, -n.hoopNPerM);
+    maxHoopTensionNPerM = Math.max(maxHoopTensionNPerM, n.hoopNPerM);
+  }
+  const sls = sphericalMembraneForces(selfWeightKPa * 1000, (input.servicesKPa + input.slsVariableKPa) * 1000, R, phi0);
+  return {
+    designPressurePa: surfacePa + planPa,
+    maxCompressionNPerM,
+    maxHoopTensionNPerM,
+    edgeMeridionalUlsNPerM: sphericalMembraneForces(surfacePa, planPa, R, phi0).meridionalNPerM,
+    edgeMeridionalSlsNPerM: sls.meridionalNPerM,
+    governingCase: heaviest.name,
+  };
 }
 
 /**
@@ -54,38 +82,20 @@ export interface ShellThickness {
  * membrane compression N/t ≤ f_cd (Timoshenko & Woinowsky-Krieger ch. 14), rounded up to the step.
  */
 export function shellThickness(input: ShellInputs, selfWeightKPa: number): ShellThickness {
-  const { brief, actions, radiusM: R, capAngleRad: phi0 } = input;
-  const variableKPa = actions.leadingVariableKPa;
-  const f = ulsFactors(brief, selfWeightKPa + actions.servicesKPa, variableKPa);
-  const surfacePa = f.permanent * selfWeightKPa * 1000;
-  const planPa = (f.permanent * actions.servicesKPa + f.variable * variableKPa) * 1000;
-  const designPressurePa = surfacePa + planPa;
-  const bucklingThicknessM = zoellyThicknessM(designPressurePa, input.effectiveModulusPa, R, CONCRETE_POISSON, input.knockDown);
-  let maxCompression = 0;
-  let maxHoopTension = 0;
-  const steps = 24;
-  for (let i = 0; i <= steps; i++) {
-    const n = sphericalMembraneForces(surfacePa, planPa, R, (phi0 * i) / steps);
-    maxCompression = Math.max(maxCompression, -n.meridionalNPerM, -n.hoopNPerM);
-    maxHoopTension = Math.max(maxHoopTension, n.hoopNPerM);
-  }
-  const compressionThicknessM = maxCompression / input.designStrengthPa;
+  const R = input.radiusM;
+  const m = shellMembraneState(input, selfWeightKPa);
+  const bucklingThicknessM = zoellyThicknessM(m.designPressurePa, input.effectiveModulusPa, R, CONCRETE_POISSON, input.knockDown);
+  const compressionThicknessM = m.maxCompressionNPerM / input.designStrengthPa;
   const raw = Math.max(input.minThicknessM, bucklingThicknessM, compressionThicknessM);
   const thicknessM = Math.ceil(raw / input.stepM - 1e-9) * input.stepM;
   const governing = raw === input.minThicknessM ? "constructable minimum" : raw === bucklingThicknessM ? "buckling" : "membrane compression";
-  const sls = sphericalMembraneForces(selfWeightKPa * 1000, (actions.servicesKPa + variableKPa) * 1000, R, phi0);
   return {
+    ...m,
     thicknessM,
     governing,
     bucklingThicknessM,
     compressionThicknessM,
-    designPressurePa,
     bucklingCapacityPa: input.knockDown * zoellyPressurePa(input.effectiveModulusPa, thicknessM, R, CONCRETE_POISSON),
-    maxCompressionNPerM: maxCompression,
-    maxHoopTensionNPerM: maxHoopTension,
-    edgeMeridionalUlsNPerM: sphericalMembraneForces(surfacePa, planPa, R, phi0).meridionalNPerM,
-    edgeMeridionalSlsNPerM: sls.meridionalNPerM,
-    expression: f.expression,
   };
 }
 

@@ -2,14 +2,12 @@ import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, MemberGroup, OptionValues } from "../kit";
-import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, CLADDING_CHOICES, STEEL_GRADE_CHOICES, SchemeError } from "../kit";
+import { briefCombinations, capEnvelope, capFloor, check, convergeSelfWeight, UNIFORM_EQUIVALENT_WARNING, defineOptions, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, CLADDING_CHOICES, STEEL_GRADE_CHOICES, SchemeError } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
-import { capUsableRadiusM } from "../../mechanics/usable-floor";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
 import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
 import { hoopSignChangeAngleRad } from "../../mechanics/spherical-membrane";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
-import { roofActions } from "../../loads/roof-actions";
 import { latticeSelfWeightKPa, sizeLattice, strutBands, type LatticeInputs, type LatticeResult } from "./sizing";
 import { latticePlan, latticeSection } from "./drawing";
 
@@ -59,7 +57,7 @@ function latticeWarnings(brief: Brief, cap: SphericalCap, double: boolean): stri
     warnings.push(`single-layer lattice beyond its usual span range (≈ ${SINGLE_LAYER_USUAL_MAX_SPAN_M} m, from memory): consider the double-layer option`);
   }
   if (cap.edgeAngleRad > hoopSignChangeAngleRad()) warnings.push("edge angle beyond 51.8°: hoop forces turn to tension near the edge (bars sized for it)");
-  warnings.push("membrane forces from the plan-mean snow load; drifted snow and point loads bend a lattice and are not covered at this stage");
+  warnings.push(UNIFORM_EQUIVALENT_WARNING);
   warnings.push("the supports under the edge ring (walls or columns to the eaves) are not included");
   return warnings;
 }
@@ -138,8 +136,8 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
   const lengths = strutLengths(mesh.edgeLengthsM);
   const webLengthM = double ? Math.hypot(depthM, lengths.meanM / Math.sqrt(3)) : 0;
   const inputs: LatticeInputs = {
-    brief,
-    actions: roofActions(brief),
+    combinations: briefCombinations(brief),
+    servicesKPa: brief.servicesKPa,
     radiusM: cap.radiusM,
     capAngleRad: cap.edgeAngleRad,
     baseRadiusM: cap.baseRadiusM,
@@ -168,14 +166,15 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
     const reason = double ? `${r.failedWhy}: use a deeper double layer or a shorter mesh` : `${r.failedWhy}: choose the double-layer option or a shorter mesh`;
     throw new SchemeError(reason, { warnings, section });
   }
-  const usableRadius = capUsableRadiusM(cap.radiusM, brief.riseM, cap.baseRadiusM, brief.eavesHeightM, depthM, brief.minClearHeightM);
+  const governingBand = r.bands.reduce((worst, b) => (b.choice.utilisation > worst.choice.utilisation ? b : worst));
   return {
     ...latticeMembers(r, inputs, double),
+    governingLoadCase: governingBand.bucklingPa > 0 && governingBand.pressurePa / governingBand.bucklingPa >= governingBand.choice.utilisation ? r.heaviestCase : governingBand.governingCase,
     summary: latticeSummary(r, mesh, frequency, cap, double),
     takeoff: latticeTakeoff(r, cladding, cap),
     warnings,
     iterations: converged.iterations,
-    usableFloorM2: Math.PI * usableRadius * usableRadius,
+    floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
     drawing: { section, plan: latticePlan(mesh) },
   };

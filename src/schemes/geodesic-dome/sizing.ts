@@ -1,7 +1,5 @@
-import type { Brief } from "../../brief";
 import type { ChsSection } from "../../catalogue/types";
 import type { ChsChoice } from "../../catalogue/pick-chs";
-import type { RoofActions } from "../../loads/roof-actions";
 import type { GeodesicCap } from "../../mechanics/geodesic";
 import type { BucklingCurve } from "../../mechanics/flexural-buckling";
 import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
@@ -10,9 +8,7 @@ import { edgeRingTensionN, sphericalMembraneForces, sphericalMembraneSurfaceLoad
 import { threeWayGridBarForces, threeWayGridStiffness, doubleLayerGridStiffness } from "../../mechanics/three-way-grid";
 import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
-import { ulsFactors } from "../../loads/uls-factors";
-import { ulsUplift } from "../../loads/combinations";
-import { pickChs } from "../kit";
+import { heaviestCase, membraneLoadCases, pickChs, type MembraneLoadCase, type UniformCombination } from "../kit";
 
 /** Struts of one band of the lattice, crown to edge (ring struts excluded). */
 export interface StrutBand {
@@ -66,8 +62,10 @@ export function strutBands(cap: GeodesicCap, bandCount: number): StrutBand[] {
 }
 
 export interface LatticeInputs {
-  brief: Brief;
-  actions: RoofActions;
+  /** The design combinations with their uniform equivalents (the membrane method takes uniform loads). */
+  combinations: readonly UniformCombination[];
+  /** Services and hung load, permanent, kPa of plan. */
+  servicesKPa: number;
   radiusM: number;
   capAngleRad: number;
   baseRadiusM: number;
@@ -94,6 +92,8 @@ export interface BandResult {
   pressurePa: number;
   bucklingPa: number;
   barMassKg: number;
+  /** The combination that gave the band's worst bar force. */
+  governingCase: string;
 }
 
 export interface LatticeResult {
@@ -112,34 +112,38 @@ export interface LatticeResult {
   ringTensionN: number;
   ringAreaM2: number;
   ringMassKg: number;
-  ulsExpression: string;
+  /** The gravity combination of largest pressure: general buckling and the ring. */
+  heaviestCase: string;
 }
 
-/** ULS pressures on the lattice, Pa: self-weight per m² of surface, plan loads, their sum, and the net uplift (a surface load). */
-interface LatticeLoads {
-  surfacePa: number;
-  planPa: number;
-  pressurePa: number;
-  upliftSurfacePa: number;
+/** The bar forces of one band under one case, resolved into the three-way grid at the band's ends and middle. */
+function bandForces(input: LatticeInputs, band: StrutBand, c: MembraneLoadCase, layers: number): { compressionN: number; tensionN: number } {
+  let compressionN = 0;
+  let tensionN = 0;
+  for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, input.capAngleRad)]) {
+    const n = c.planPa === 0 ? sphericalMembraneSurfaceLoad(c.surfacePa, input.radiusM, phi) : sphericalMembraneForces(c.surfacePa, c.planPa, input.radiusM, phi);
+    const bars = threeWayGridBarForces(n.meridionalNPerM / layers, n.hoopNPerM / layers, band.maxLengthM);
+    compressionN = Math.min(compressionN, bars.compressionN);
+    tensionN = Math.max(tensionN, bars.tensionN);
+  }
+  return { compressionN, tensionN };
 }
 
 /**
- * One band: its worst bar forces over the band (gravity and uplift, resolved into the three-way
+ * One band: its worst bar forces over the band (every combination, resolved into the three-way
  * grid) and the lightest CHS that carries them and gives the lattice its general-buckling
  * resistance; or why none does.
  */
-function sizeBand(input: LatticeInputs, band: StrutBand, loads: LatticeLoads, layers: number): { result: BandResult | null; failedWhy: string; largestBarForceN: number } {
-  const { radiusM: R, capAngleRad: phi0 } = input;
-  const { surfacePa, planPa, pressurePa, upliftSurfacePa } = loads;
+function sizeBand(input: LatticeInputs, band: StrutBand, cases: readonly MembraneLoadCase[], pressurePa: number, layers: number): { result: BandResult | null; failedWhy: string; largestBarForceN: number } {
+  const R = input.radiusM;
   let compressionN = 0;
   let tensionN = 0;
-  for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, phi0)]) {
-    const n = sphericalMembraneForces(surfacePa, planPa, R, phi);
-    const bars = threeWayGridBarForces(n.meridionalNPerM / layers, n.hoopNPerM / layers, band.maxLengthM);
-    const up = sphericalMembraneSurfaceLoad(upliftSurfacePa, R, phi);
-    const barsUp = threeWayGridBarForces(up.meridionalNPerM / layers, up.hoopNPerM / layers, band.maxLengthM);
-    compressionN = Math.min(compressionN, bars.compressionN, barsUp.compressionN);
-    tensionN = Math.max(tensionN, bars.tensionN, barsUp.tensionN);
+  let governingCase = "";
+  for (const c of cases) {
+    const f = bandForces(input, band, c, layers);
+    if (Math.max(-f.compressionN, f.tensionN) > Math.max(-compressionN, tensionN)) governingCase = c.name;
+    compressionN = Math.min(compressionN, f.compressionN);
+    tensionN = Math.max(tensionN, f.tensionN);
   }
   const largestBarForceN = Math.max(-compressionN, tensionN);
   const bucklingOf = (s: ChsSection): number => {
@@ -160,7 +164,7 @@ function sizeBand(input: LatticeInputs, band: StrutBand, loads: LatticeLoads, la
         : `no catalogue hollow section gives the lattice enough general-buckling resistance (${(pressurePa / 1000).toFixed(2)} kPa needed)`;
     return { result: null, failedWhy, largestBarForceN };
   }
-  const result = { band, choice, compressionN, tensionN, pressurePa, bucklingPa: bucklingOf(choice.section), barMassKg: band.totalLengthM * choice.section.massKgPerM * layers };
+  const result = { band, choice, compressionN, tensionN, pressurePa, bucklingPa: bucklingOf(choice.section), barMassKg: band.totalLengthM * choice.section.massKgPerM * layers, governingCase };
   return { result, failedWhy: "", largestBarForceN };
 }
 
@@ -172,21 +176,17 @@ function sizeBand(input: LatticeInputs, band: StrutBand, loads: LatticeLoads, la
  * ring for the edge thrust.
  */
 export function sizeLattice(input: LatticeInputs, selfWeightKPa: number): LatticeResult {
-  const { brief, actions, radiusM: R, capAngleRad: phi0 } = input;
+  const { radiusM: R, capAngleRad: phi0 } = input;
   const layers = input.doubleLayerDepthM > 0 ? 2 : 1;
-  const servicesKPa = actions.servicesKPa;
-  const variableKPa = actions.leadingVariableKPa;
-  const f = ulsFactors(brief, selfWeightKPa + servicesKPa, variableKPa);
-  const surfacePa = f.permanent * selfWeightKPa * 1000;
-  const planPa = (f.permanent * servicesKPa + f.variable * variableKPa) * 1000;
-  // Net uplift with permanent load favourable (EN 1990 Table A1.2(B)), taken as a surface load.
-  const loads = { surfacePa, planPa, pressurePa: surfacePa + planPa, upliftSurfacePa: ulsUplift(selfWeightKPa + servicesKPa, actions.upliftKPa, brief.factors) * 1000 };
+  const cases = membraneLoadCases(input.combinations, selfWeightKPa, input.servicesKPa);
+  const heaviest = heaviestCase(cases);
+  const { surfacePa, planPa } = heaviest;
   const results: BandResult[] = [];
   let failedBand = -1;
   let failedWhy = "";
   let largestBarForceN = 0;
   for (const band of input.bands) {
-    const sized = sizeBand(input, band, loads, layers);
+    const sized = sizeBand(input, band, cases, surfacePa + planPa, layers);
     largestBarForceN = Math.max(largestBarForceN, sized.largestBarForceN);
     if (sized.result === null) {
       failedBand = band.index;
@@ -225,7 +225,7 @@ export function sizeLattice(input: LatticeInputs, selfWeightKPa: number): Lattic
     ringTensionN,
     ringAreaM2,
     ringMassKg,
-    ulsExpression: f.expression,
+    heaviestCase: heaviest.name,
   };
 }
 

@@ -13,3 +13,5 @@ export { pickChs, type AxialDemand } from "./pick-chs";
 export { STEEL_GRADES, STEEL_GRADE_CHOICES, steelGrade, type SteelGrade } from "./steel";
 export { CLADDING_CHOICES, findCladding, claddingCostItem } from "./cladding";
 export { FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
+export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction } from "./load-combinations";
+export { capFloor } from "./cap-floor";

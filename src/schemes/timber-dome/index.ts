@@ -3,7 +3,6 @@ import type { Catalogue, GlulamClass } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, DrawingLine, MemberGroup, OptionValues } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
-import { capUsableRadiusM } from "../../mechanics/usable-floor";
 import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
 import { glulamKMod, type LoadDurationClass, type ServiceClass } from "../../mechanics/timber-kmod";
@@ -11,9 +10,8 @@ import { TIMBER_GAMMA_M } from "../../mechanics/timber-gamma-m";
 import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-creep";
 import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "../../mechanics/timber-charring";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
-import { roofActions } from "../../loads/roof-actions";
-import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, SchemeError } from "../kit";
-import { ulsFactors } from "../../loads/uls-factors";
+import { designBasis } from "../../loads/design-basis";
+import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineOptions, defineScheme, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
 import { memberBands } from "./geometry";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
@@ -72,13 +70,16 @@ function findGlulam(catalogue: Catalogue, strengthClass: string): GlulamClass {
 }
 
 function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, mesh: GeodesicCap): TimberLatticeInputs {
+  const basis = designBasis(brief);
   const glulam = findGlulam(catalogue, opts.strengthClass);
   const deck = findGlulam(catalogue, catalogue.glulam.some((g) => g.strengthClass === DECK_CLASS) ? DECK_CLASS : opts.strengthClass);
   const serviceClass = Number(opts.serviceClass) as ServiceClass;
   const fire = opts.fireMinutes > 0;
   return {
-    brief,
-    actions: roofActions(brief),
+    combinations: uniformCombinations(basis),
+    gammaGSup: brief.factors.gammaGSup,
+    servicesKPa: brief.servicesKPa,
+    slsVariableKPa: characteristicVariableKPa(basis),
     radiusM: cap.radiusM,
     capAngleRad: cap.edgeAngleRad,
     baseRadiusM: cap.baseRadiusM,
@@ -101,13 +102,12 @@ function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalog
     connectorKgPerM3: opts.connectorKgPerM3,
     membraneKgPerM2: MEMBRANE_KG_PER_M2,
     ringYieldPa: RING_YIELD_PA,
-    ulsFactors: (permanentKPa, variableKPa) => ulsFactors(brief, permanentKPa, variableKPa),
   };
 }
 
 function timberWarnings(opts: TimberDomeOptions): string[] {
   const warnings = [
-    "membrane forces from the plan-mean snow load; drifted snow and point loads bend a lattice and are not covered at this stage",
+    UNIFORM_EQUIVALENT_WARNING,
     "the roofing is a membrane on the deck with no insulation layer (the metal deck of the steel schemes includes 150 mm of mineral wool)",
     "the deck is priced and counted with the glulam factor as a proxy for softwood boards",
     "the supports under the edge ring (walls or columns to the eaves) are not included",
@@ -210,15 +210,15 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
   const depthM = Math.max(0, ...r.bands.map((b) => b.section.depthM));
   if (r.failure) throw new SchemeError(r.failure, { warnings, section: timberSection(brief, depthM) });
   const { members, checks } = timberMembers(r, inputs.charDepthM);
-  const usableRadius = capUsableRadiusM(cap.radiusM, brief.riseM, cap.baseRadiusM, brief.eavesHeightM, depthM, brief.minClearHeightM);
   return {
+    governingLoadCase: r.governingCase,
     summary: timberSummary(r, mesh, frequency, cap),
     members,
     takeoff: timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3),
     checks,
     warnings,
     iterations: converged.iterations,
-    usableFloorM2: Math.PI * usableRadius * usableRadius,
+    floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
     drawing: { section: timberSection(brief, depthM), plan: timberPlan(mesh) },
   };

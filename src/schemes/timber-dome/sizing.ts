@@ -1,6 +1,5 @@
-import type { Brief } from "../../brief";
 import type { GlulamClass } from "../../catalogue/types";
-import type { RoofActions } from "../../loads/roof-actions";
+import { membraneLoadCases, type UniformCombination } from "../kit";
 import { edgeRingTensionN, sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";
 import { threeWayGridBarForces, threeWayGridStiffness } from "../../mechanics/three-way-grid";
 import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
@@ -18,14 +17,21 @@ const TRIBUTARY_WIDTH_PER_LENGTH = Math.sqrt(3) / 6;
 /** A ULS case: load per m² of roof surface and of plan, Pa, and the k_mod of its shortest action. */
 export interface LoadCase {
   label: string;
+  purpose: "gravity" | "uplift";
   surfacePa: number;
   planPa: number;
   kMod: number;
 }
 
 export interface TimberLatticeInputs {
-  brief: Brief;
-  actions: RoofActions;
+  /** The design combinations with their uniform equivalents (the membrane method takes uniform loads). */
+  combinations: readonly UniformCombination[];
+  /** γ_G,sup, for the permanent-only case (EN 1990 eq. 6.10 with no variable action). */
+  gammaGSup: number;
+  /** Services and hung load, permanent, kPa of plan. */
+  servicesKPa: number;
+  /** Characteristic variable load for serviceability (the largest uniform equivalent of imposed and snow), kPa of plan. */
+  slsVariableKPa: number;
   radiusM: number;
   capAngleRad: number;
   baseRadiusM: number;
@@ -39,6 +45,7 @@ export interface TimberLatticeInputs {
   gammaMBoards: number;
   kModPermanent: number;
   kModSnow: number;
+  /** k_mod of wind and of the roof's maintenance load (short-term, EN 1995-1-1 Table 2.2, from memory). */
   kModWind: number;
   /** E_0,mean/(1 + k_def), Pa. */
   creepModulusPa: number;
@@ -55,7 +62,6 @@ export interface TimberLatticeInputs {
   membraneKgPerM2: number;
   ringYieldPa: number;
   /** ULS factors on permanent and variable load for an assumed self-weight (EN 1990, the governing expression). */
-  ulsFactors: (permanentKPa: number, variableKPa: number) => { permanent: number; variable: number; expression: string };
 }
 
 export interface BandResult {
@@ -85,23 +91,27 @@ export interface TimberLatticeResult {
   ringTensionN: number;
   ringAreaM2: number;
   ringMassKg: number;
-  ulsExpression: string;
+  /** The case that gave the highest member utilisation, and the heaviest gravity case (ring, general buckling). */
+  governingCase: string;
+  heaviestCase: string;
 }
 
-/** ULS cases for an assumed self-weight g (kPa of surface): permanent alone, permanent + leading variable, and wind uplift. */
-export function loadCases(input: TimberLatticeInputs, selfWeightKPa: number): { gravity: LoadCase[]; uplift: LoadCase; expression: string } {
-  const { brief, actions } = input;
-  const f = input.ulsFactors(selfWeightKPa + actions.servicesKPa, actions.leadingVariableKPa);
-  const gammaG = brief.factors.gammaGSup;
-  return {
-    gravity: [
-      { label: "permanent", surfacePa: gammaG * selfWeightKPa * 1000, planPa: gammaG * actions.servicesKPa * 1000, kMod: input.kModPermanent },
-      { label: `permanent + ${actions.leadingVariableKPa > actions.imposedKPa ? "snow" : "imposed"}`, surfacePa: f.permanent * selfWeightKPa * 1000, planPa: (f.permanent * actions.servicesKPa + f.variable * actions.leadingVariableKPa) * 1000, kMod: input.kModSnow },
-    ],
-    // Net uplift with permanent load favourable (EN 1990 Table A1.2(B)), taken as a surface load.
-    uplift: { label: "wind uplift", surfacePa: (brief.factors.gammaGInf * (selfWeightKPa + actions.servicesKPa) - brief.factors.gammaQ * actions.upliftKPa) * 1000, planPa: 0, kMod: input.kModWind },
-    expression: f.expression,
-  };
+/**
+ * ULS cases for an assumed self-weight g (kPa of surface): permanent alone (γ_G,sup, k_mod
+ * permanent), and every combination of the design basis with its uniform equivalents, at the k_mod
+ * of its shortest action (wind or the maintenance load short-term, else snow).
+ */
+export function loadCases(input: TimberLatticeInputs, selfWeightKPa: number): LoadCase[] {
+  const gammaG = input.gammaGSup;
+  const permanent: LoadCase = { label: "permanent only (6.10)", purpose: "gravity", surfacePa: gammaG * selfWeightKPa * 1000, planPa: gammaG * input.servicesKPa * 1000, kMod: input.kModPermanent };
+  const combined = membraneLoadCases(input.combinations, selfWeightKPa, input.servicesKPa).map((c) => ({
+    label: c.name,
+    purpose: c.purpose,
+    surfacePa: c.surfacePa,
+    planPa: c.planPa,
+    kMod: c.actions.includes("wind") || c.actions.includes("imposed") ? input.kModWind : input.kModSnow,
+  }));
+  return [permanent, ...combined];
 }
 
 /** Axial demands (membrane forces resolved into the three-way grid) and member bending from the panel load, for one band and one case. */
@@ -168,15 +178,16 @@ function tensionRing(input: TimberLatticeInputs, c: LoadCase): { tensionN: numbe
  * char layer of the fire option, connectors as an allowance, and the steel tension ring.
  */
 export function sizeTimberLattice(input: TimberLatticeInputs, selfWeightKPa: number): TimberLatticeResult {
-  const { gravity, uplift, expression } = loadCases(input, selfWeightKPa);
-  const governing = gravity[gravity.length - 1]!;
-  const pressurePa = Math.max(...gravity.map((c) => c.surfacePa + c.planPa));
+  const cases = loadCases(input, selfWeightKPa);
+  const gravity = cases.filter((c) => c.purpose === "gravity");
+  const heaviest = gravity.reduce((worst, c) => (c.surfacePa + c.planPa > worst.surfacePa + worst.planPa ? c : worst));
+  const pressurePa = heaviest.surfacePa + heaviest.planPa;
   const panelCases = gravity.map((c) => ({ pressurePa: c.surfacePa + c.planPa, kMod: c.kMod, label: c.label }));
-  const serviceLoadPa = (selfWeightKPa + input.actions.servicesKPa + input.actions.leadingVariableKPa) * 1000;
+  const serviceLoadPa = (selfWeightKPa + input.servicesKPa + input.slsVariableKPa) * 1000;
   const purlinSpanM = Math.max(...input.bands.map((b) => b.maxLengthM));
   const deckT = deckThicknessM({ bendingPa: input.deckBendingPa }, panelCases, serviceLoadPa, input.purlinSpacingM, input.creepModulusPa, input.gammaMBoards);
   const purlins = sizePurlins(input.sections, input.glulam, panelCases, serviceLoadPa, purlinSpanM, input.purlinSpacingM, input.creepModulusPa, input.gammaM);
-  const lattice = sizeBands(input, [...gravity, uplift], pressurePa);
+  const lattice = sizeBands(input, cases, pressurePa);
   const failure =
     deckT === null ? `the deck boards would need over 300 mm to span ${input.purlinSpacingM} m between purlins: reduce the purlin spacing`
     : purlins === null ? `no glulam section carries the purlins over ${purlinSpanM.toFixed(1)} m: shorten the members or reduce the purlin spacing`
@@ -187,7 +198,8 @@ export function sizeTimberLattice(input: TimberLatticeInputs, selfWeightKPa: num
   const deckVolumeM3 = input.surfaceM2 * ((deckT ?? 0) + input.deckCharDepthM);
   const glulamMassKg = (latticeVolumeM3 + purlinVolumeM3) * input.glulam.densityMeanKgPerM3;
   const deckMassKg = deckVolumeM3 * input.deckDensityKgPerM3;
-  const ring = tensionRing(input, governing);
+  const ring = tensionRing(input, heaviest);
+  const worstBand = lattice.bands.reduce<BandResult | null>((worst, b) => (worst === null || b.check.utilisation > worst.check.utilisation ? b : worst), null);
   return {
     bands: lattice.bands,
     failure,
@@ -203,7 +215,8 @@ export function sizeTimberLattice(input: TimberLatticeInputs, selfWeightKPa: num
     ringTensionN: ring.tensionN,
     ringAreaM2: ring.areaM2,
     ringMassKg: ring.massKg,
-    ulsExpression: expression,
+    governingCase: worstBand && worstBand.pressurePa / worstBand.bucklingPa < worstBand.check.utilisation ? worstBand.check.demand.label : heaviest.label,
+    heaviestCase: heaviest.label,
   };
 }
 

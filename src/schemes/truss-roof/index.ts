@@ -3,8 +3,9 @@ import type { Catalogue, Cladding } from "../../catalogue/types";
 import type { ChsChoice } from "../../catalogue/pick-chs";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, MemberGroup, OptionValues } from "../kit";
-import { check, convergeSelfWeight, defineOptions, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, CLADDING_CHOICES, STEEL_GRADE_CHOICES, SchemeError } from "../kit";
+import { check, convergeSelfWeight, uniformCombinations, defineOptions, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, CLADDING_CHOICES, STEEL_GRADE_CHOICES, SchemeError } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
+import { designBasis } from "../../loads/design-basis";
 import { snowShapeMu1 } from "../../loads/snow";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { designTrussRoof, trussLayout, trussRoofSelfWeightKPa, type TrussRoofInputs, type TrussRoofResult } from "./layout";
@@ -15,20 +16,23 @@ const DEPTH_RATIO_RANGE = { min: 8, max: 25 } as const;
 
 const declarations = {
   // default: primary trusses at 6–10 m so cold-formed purlins can span between them (common practice, no source)
-  trussSpacingM: { kind: "number", label: "Truss spacing", unit: "m", min: 4, max: 20, step: 0.5, default: 8, source: "common practice 6–10 m, no source" },
+  trussSpacingM: { kind: "number", label: "Truss spacing", unit: "m", min: 4, max: 20, step: 0.5, default: 8, source: "common practice 6–10 m, no source", free: true },
   // default: long-span trusses span/10–span/20 (common practice, no source)
-  spanDepthRatio: { kind: "number", label: "Span / depth", unit: "", min: DEPTH_RATIO_RANGE.min, max: DEPTH_RATIO_RANGE.max, step: 0.5, default: 15, source: "common practice 10–20, no source" },
+  spanDepthRatio: { kind: "number", label: "Span / depth", unit: "", min: DEPTH_RATIO_RANGE.min, max: DEPTH_RATIO_RANGE.max, step: 0.5, default: 15, source: "common practice 10–20, no source", free: true },
   /** Let the tool choose the span/depth ratio of least mass (8–25) that meets the deflection limit. */
   optimiseDepth: { kind: "toggle", label: "Choose the depth of least mass", default: false, source: "searches span/depth 8–25 meeting the deflection limit" },
   // default L/250 under variable load (common practice for roofs, cf. EN 1990 A1.4 leaves limits to the project)
   deflectionLimit: { kind: "number", label: "Deflection limit span /", unit: "", min: 100, max: 1000, step: 10, default: 250, source: "common practice L/250 under variable load" },
+  // default L/200 under the total characteristic load (common practice, no source; EN 1990 A1.4.3 leaves the limits to the project)
+  deflectionLimitTotal: { kind: "number", label: "Deflection limit under total load span /", unit: "", min: 100, max: 1000, step: 10, default: 200, source: "common practice L/200 under permanent + variable, no source" },
   // default: metal deck spans 2–3.5 m (common practice, no source)
   purlinSpacingM: { kind: "number", label: "Purlin spacing (top chord restraint)", unit: "m", min: 1, max: 6, step: 0.25, default: 3, source: "deck span, common practice 2–3.5 m" },
   zones: { kind: "number", label: "Chord size changes per half span", unit: "", min: 1, max: 8, step: 1, integer: true, default: 3, source: "grouping of alike members" },
   // default: web member strain adds 10–20 % to chord-only deflection of parallel-chord trusses at span/depth 10–20 (common practice, no source)
   webAllowancePct: { kind: "number", label: "Web deflection allowance", unit: "% of chord deflection", min: 0, max: 50, step: 1, default: 15, source: "common practice 10–20 %, no source", uncertainty: "allowance" },
   // default: truss joints, end plates and gussets 8–12 % (common practice, no source)
-  connectionAllowancePct: { kind: "number", label: "Truss connections", unit: "% of truss mass", min: 0, max: 30, step: 1, default: 10, source: "common practice 8–12 %, no source", uncertainty: "allowance" },
+  // default 10 %: welded CHS trusses with bolted site splices, range 5–15 % (common practice, no source: no published figure was found here; the risk page varies it over that range)
+  connectionAllowancePct: { kind: "number", label: "Truss connections", unit: "% of truss mass", min: 0, max: 30, step: 1, default: 10, source: "common practice, range 5–15 % of the truss mass, no source found", uncertainty: "allowance" },
   cladding: { kind: "select", label: "Roof deck", choices: CLADDING_CHOICES, default: "metal-deck", source: "data/claddings.csv" },
   steelGrade: { kind: "select", label: "Steel grade", choices: STEEL_GRADE_CHOICES, default: "S355", source: "EN 1993-1-1 Table 3.1" },
 } as const;
@@ -36,16 +40,27 @@ export type TrussRoofOptions = OptionValues<typeof declarations>;
 
 type Layout = ReturnType<typeof trussLayout>;
 
-/** The inputs of the whole-roof design at a span/depth ratio: flat-roof actions (snow μ1 at 0°, EN 1991-1-3 Table 5.2; wind at eaves + truss depth). */
+/**
+ * Snow on the flat roof, kPa: μ1 = 0.8 at a pitch of 0° (EN 1991-1-3 Table 5.2), the same flat-roof
+ * value the shared basis gives a curved roof's undrifted case (μ1 = 0.8, Fig. 5.6). Its drifted
+ * case (Fig. 5.3 case (ii) at α = 0: 0.8 and 0.4 on the two halves) is bounded by it.
+ */
+function flatRoofSnowKPa(brief: Brief): number {
+  return snowShapeMu1(0) * brief.snowGroundKPa;
+}
+
+/** The inputs of the whole-roof design at a span/depth ratio: the shared combinations with the flat roof's snow (μ1 at 0°) and the dome wind map at f/d = depth/span, the nearest shape the basis has (wind at eaves + truss depth). */
 function trussInputs(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue, layout: Layout, cladding: Cladding, ratio: number): TrussRoofInputs {
   const a = brief.spanM / 2;
   const longest = Math.max(...layout.spansM);
-  const base = roofActions({ ...brief, riseM: Math.min(a, longest / ratio) });
-  const snowKPa = snowShapeMu1(0) * brief.snowGroundKPa;
-  const actions = { ...base, mu1: snowShapeMu1(0), mu3: 0, muUniform: snowShapeMu1(0), snowKPa, leadingVariableKPa: Math.max(snowKPa, brief.imposedRoofKPa), leadingVariable: snowKPa >= brief.imposedRoofKPa ? ("snow" as const) : ("imposed" as const) };
+  const depthBrief = { ...brief, riseM: Math.min(a, longest / ratio) };
+  const snowKPa = flatRoofSnowKPa(brief);
+  const actions = { ...roofActions(depthBrief), mu1: snowShapeMu1(0), mu3: 0, muUniform: snowShapeMu1(0), snowKPa, leadingVariableKPa: Math.max(snowKPa, brief.imposedRoofKPa), leadingVariable: snowKPa >= brief.imposedRoofKPa ? ("snow" as const) : ("imposed" as const) };
   return {
     brief,
     actions,
+    combinations: uniformCombinations(designBasis(depthBrief), { "snow-uniform": snowKPa, "snow-drifted": snowKPa }),
+    slsVariableKPa: Math.max(snowKPa, brief.imposedRoofKPa),
     catalogue,
     steel: steelGrade(opts.steelGrade),
     spacingM: layout.spacingM,
@@ -55,6 +70,7 @@ function trussInputs(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue,
     zones: opts.zones,
     webAllowance: opts.webAllowancePct / 100,
     deflectionLimit: opts.deflectionLimit,
+    deflectionLimitTotal: opts.deflectionLimitTotal,
     connectionAllowance: opts.connectionAllowancePct / 100,
     deckKgPerM2: cladding.massKgPerM2,
   };
@@ -105,6 +121,9 @@ function trussMembers(r: TrussRoofResult, layout: Layout, brief: Brief, opts: Tr
   }
   const worstDeflection = r.trusses.reduce((m, t) => (t.deflectionM / t.deflectionLimitM > m.deflectionM / m.deflectionLimitM ? t : m), r.trusses[0]!);
   checks.push(check(`truss deflection (span/${opts.deflectionLimit})`, "SLS, common practice limit", worstDeflection.deflectionM, worstDeflection.deflectionLimitM, "m"));
+  const worstTotal = r.trusses.reduce((m, t) => (t.totalDeflectionM / t.totalDeflectionLimitM > m.totalDeflectionM / m.totalDeflectionLimitM ? t : m), r.trusses[0]!);
+  checks.push(check(`truss deflection under total load (span/${opts.deflectionLimitTotal})`, "SLS, common practice limit; EN 1990 A1.4.3", worstTotal.totalDeflectionM, worstTotal.totalDeflectionLimitM, "m"));
+  checks.push(pondingCheck(r, layout.spansM));
   const purlinW = r.purlin.modulusM3;
   members.push({ element: "purlins", material: "steel-cold-formed", count: Math.round(r.purlinLengthM / layout.spacingM), lengthM: layout.spacingM, section: `cold-formed Z/C ${(r.purlin.depthM * 1000).toFixed(0)} deep, W ${(purlinW * 1e6).toFixed(0)} cm³`, designForceN: 0, resistanceN: 0, utilisation: r.purlin.momentNm / (PURLIN_REDUCTION * PURLIN_YIELD_PA * purlinW), governing: "bending M/(0.7 f_y W), or deflection span/200" });
   if (r.bracing) members.push({ element: "roof bracing", material: "steel-hot-finished-hollow", count: Math.round(r.bracingLengthM / (layout.spacingM * Math.SQRT2)), lengthM: layout.spacingM * Math.SQRT2, section: r.bracing.section.designation, designForceN: -r.bracing.utilisation * r.bracing.resistanceN, resistanceN: r.bracing.resistanceN, utilisation: r.bracing.utilisation, governing: r.bracing.governing });
@@ -116,14 +135,26 @@ function trussMembers(r: TrussRoofResult, layout: Layout, brief: Brief, opts: Tr
   return { members, checks };
 }
 
+/**
+ * Fall against ponding: the roof is cambered to fall at 1:48 from the centre line to the eaves, the
+ * slope beyond which a roof need not be checked for ponding (AISC 360-16 Appendix 2, ¼ in. per ft,
+ * from memory). The fall must outlast the deflected slope at the support under the total
+ * characteristic load, 16δ/(5L) for a uniform load (the slope wL³/24EI of a simply supported beam).
+ */
+const PONDING_FALL = 1 / 48;
+function pondingCheck(r: TrussRoofResult, spansM: readonly number[]): Check {
+  const worst = r.trusses.reduce((m, t, k) => Math.max(m, (16 * t.totalDeflectionM) / (5 * spansM[k]!)), 0);
+  return check("ponding: fall 1:48 left after deflection", "AISC 360-16 App. 2 (slope ≥ ¼ in./ft, from memory); slope wL³/24EI", worst, PONDING_FALL, "");
+}
+
 function trussTakeoff(r: TrussRoofResult, cladding: Cladding, planAreaM2: number): TakeoffRow[] {
   return [
     tonnesRow("primary trusses", "steel-hot-finished-hollow", "steel-truss", r.trussMassKg),
     tonnesRow("truss connections", "steel-plate", "steel-truss", r.connectionMassKg),
     tonnesRow("purlins", "steel-cold-formed", "steel-secondary", r.purlinMassKg),
     tonnesRow("roof bracing", "steel-hot-finished-hollow", "steel-secondary", r.bracingMassKg),
-    tonnesRow("edge beam", "steel-hot-finished-hollow", "steel-secondary", r.edgeBeamMassKg),
-    tonnesRow("perimeter columns", "steel-hot-finished-hollow", "steel-column", r.columnMassKg),
+    { ...tonnesRow("edge beam", "steel-hot-finished-hollow", "steel-secondary", r.edgeBeamMassKg), group: "perimeter" },
+    { ...tonnesRow("perimeter columns to the eaves", "steel-hot-finished-hollow", "steel-column", r.columnMassKg), group: "substructure" },
     { element: "roof deck", material: cladding.material, costItem: claddingCostItem(cladding), quantity: planAreaM2, unit: "m2", massKg: r.deckMassKg },
   ];
 }
@@ -137,6 +168,8 @@ function trussSummary(r: TrussRoofResult, layout: Layout, brief: Brief, ratio: n
     { key: "spanDepthRatio", label: "Span / depth", value: ratio, unit: "" },
     { key: "deepestM", label: "Depth of the longest truss", value: Math.max(...r.depthsM), unit: "m" },
     { key: "deflectionMm", label: "Largest truss deflection (variable load)", value: worstDeflection.deflectionM * 1000, unit: "mm" },
+    { key: "totalDeflectionMm", label: "Largest truss deflection (total characteristic load)", value: Math.max(...r.trusses.map((t) => t.totalDeflectionM)) * 1000, unit: "mm" },
+    { key: "fallM", label: "Fall to the eaves at 1:48 (camber)", value: (brief.spanM / 2) * PONDING_FALL, unit: "m" },
     { key: "clearHeightM", label: "Clear height under the bottom chords", value: brief.eavesHeightM, unit: "m" },
     { key: "steelKgPerM2", label: "Steel per m² of plan", value: (r.trussMassKg + r.connectionMassKg + r.purlinMassKg + r.bracingMassKg + r.edgeBeamMassKg + r.columnMassKg) / planAreaM2, unit: "kg/m²" },
   ];
@@ -178,7 +211,8 @@ function design(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue): Des
   const r = converged.value;
   const warnings = [
     `flat truss roof: the brief's rise of ${brief.riseM} m is not used; the bottom chords sit at the eaves (${brief.eavesHeightM} m), so the clear height is the eaves height`,
-    "top chord bending from purlins between panel points, vertical wall bracing and wind along the trusses are not included",
+    "vertical wall bracing and wind along the trusses are not included",
+    `every design combination is checked with uniform loads: the flat roof's snow μ1 s_k (EN 1991-1-3 Table 5.2 at 0°; its drifted case is bounded by it) and the dome wind map's peak values at f/d = depth/span, the nearest shape the shared basis has; uplift checked with ${r.upliftCase || "no uplift combination"}`,
   ];
   if (r.failure !== "") throw new SchemeError(`${r.failure}: use deeper trusses, a closer spacing or a higher steel grade`, { warnings, section: section(r) });
   if (layout.spacingM > 10) warnings.push(`purlins span ${layout.spacingM.toFixed(1)} m between trusses, beyond the usual cold-formed range (≈ 10 m, common practice)`);
@@ -189,7 +223,8 @@ function design(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue): Des
     takeoff: trussTakeoff(r, cladding, planAreaM2),
     warnings,
     iterations: converged.iterations,
-    usableFloorM2: brief.eavesHeightM >= brief.minClearHeightM ? planAreaM2 : 0,
+    governingLoadCase: r.governingCase,
+    floor: { soffit: [[0, brief.eavesHeightM], [a, brief.eavesHeightM]], supports: [] },
     roofSurfaceM2: planAreaM2,
     enclosedVolumeM3: planAreaM2 * brief.eavesHeightM + roofVolumeM3,
     drawing: { section: section(r), plan: trussPlan(brief.spanM, layout.offsetsM, layout.spansM) },

@@ -2,11 +2,10 @@ import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { BucklingCurve } from "../../mechanics/flexural-buckling";
 import type { RoofActions } from "../../loads/roof-actions";
+import type { UniformCombination } from "../kit";
 import { sizeTruss, type TrussResult } from "./truss";
 import { bracingRestraintLoadNPerM, pickChsForMoment, pickColumn, sizePurlin, type PurlinResult } from "./secondary";
 import { pickChs } from "../kit";
-import { ulsFactors } from "../../loads/uls-factors";
-import { ulsUplift } from "../../loads/combinations";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import type { ChsChoice } from "../../catalogue/pick-chs";
 import type { ChsSection } from "../../catalogue/types";
@@ -25,7 +24,12 @@ export function trussLayout(spanM: number, spacingM: number): { spacingM: number
 
 export interface TrussRoofInputs {
   brief: Brief;
+  /** Wind reference (q_p at the roof) for the bracing. */
   actions: RoofActions;
+  /** The design combinations with their uniform equivalents on the flat roof. */
+  combinations: readonly UniformCombination[];
+  /** Characteristic variable load for serviceability (the flat roof's snow or the imposed load), kPa. */
+  slsVariableKPa: number;
   catalogue: Catalogue;
   steel: { yieldPa: number; curve: BucklingCurve };
   spacingM: number;
@@ -35,6 +39,7 @@ export interface TrussRoofInputs {
   zones: number;
   webAllowance: number;
   deflectionLimit: number;
+  deflectionLimitTotal: number;
   connectionAllowance: number;
   deckKgPerM2: number;
 }
@@ -62,7 +67,19 @@ export interface TrussRoofResult {
   columnMassKg: number;
   deckMassKg: number;
   ulsKPa: number;
-  expression: string;
+  /** The gravity combination of largest load (it sizes the trusses) and the uplift combination of largest suction. */
+  governingCase: string;
+  upliftCase: string;
+}
+
+/** The heaviest gravity combination and the most upward uplift combination at a roof self-weight (kPa of plan). */
+function trussLoads(input: TrussRoofInputs, permanentKPa: number) {
+  const total = (c: UniformCombination) => c.permanentFactor * permanentKPa + c.variableKPa;
+  const gravity = input.combinations.filter((c) => c.purpose === "gravity");
+  const uplift = input.combinations.filter((c) => c.purpose === "uplift");
+  const heaviest = gravity.reduce((w, c) => (total(c) > total(w) ? c : w));
+  const lightest = uplift.length > 0 ? uplift.reduce((w, c) => (total(c) < total(w) ? c : w)) : null;
+  return { ulsKPa: total(heaviest), upliftKPa: lightest ? total(lightest) : permanentKPa, governingCase: heaviest.name, upliftCase: lightest?.name ?? "" };
 }
 
 /** Roof bracing: two braced bays across the span, horizontal trusses of depth s, panels s × s, for wind on the walls plus the restraint load. */
@@ -122,10 +139,8 @@ export function designTrussRoof(input: TrussRoofInputs, selfWeightKPa: number): 
   const a = brief.spanM / 2;
   const planAreaM2 = Math.PI * a * a;
   const permanentKPa = selfWeightKPa + actions.servicesKPa;
-  const variableKPa = actions.leadingVariableKPa;
-  const f = ulsFactors(brief, permanentKPa, variableKPa);
-  const ulsKPa = f.permanent * permanentKPa + f.variable * variableKPa;
-  const upliftKPa = ulsUplift(permanentKPa, actions.upliftKPa, brief.factors);
+  const variableKPa = input.slsVariableKPa;
+  const { ulsKPa, upliftKPa, governingCase, upliftCase } = trussLoads(input, permanentKPa);
   const depthsM = input.spansM.map((L) => L / input.spanDepthRatio);
   let failure = "";
   const trusses = input.spansM.map((L, k) => {
@@ -139,12 +154,14 @@ export function designTrussRoof(input: TrussRoofInputs, selfWeightKPa: number): 
         ulsNPerM: ulsKPa * s * 1000,
         upliftNPerM: upliftKPa * s * 1000,
         slsNPerM: variableKPa * s * 1000,
+        slsTotalNPerM: (permanentKPa + variableKPa) * s * 1000,
         panelM,
         purlinSpacingM: input.purlinSpacingM,
         bottomRestraintM: 2 * input.purlinSpacingM, // fly brace at every other purlin (common practice, no source)
         zones: input.zones,
         webAllowance: input.webAllowance,
         deflectionLimit: input.deflectionLimit,
+        deflectionLimitTotal: input.deflectionLimitTotal,
       },
       sections,
       steel,
@@ -185,7 +202,8 @@ export function designTrussRoof(input: TrussRoofInputs, selfWeightKPa: number): 
     columnMassKg: edge.columnMassKg,
     deckMassKg: input.deckKgPerM2 * planAreaM2,
     ulsKPa,
-    expression: f.expression,
+    governingCase,
+    upliftCase,
   };
 }
 

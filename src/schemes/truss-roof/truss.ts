@@ -16,6 +16,8 @@ export interface TrussDemand {
   upliftNPerM: number;
   /** SLS variable line load for deflection, N/m. */
   slsNPerM: number;
+  /** SLS total characteristic line load (permanent + variable) for deflection, N/m. */
+  slsTotalNPerM: number;
   /** Panel length between top chord nodes (a whole number of purlin spacings), m. */
   panelM: number;
   /** Purlin spacing: out-of-plane restraint of the top chord, m. */
@@ -26,8 +28,9 @@ export interface TrussDemand {
   zones: number;
   /** Added deflection from the web members, fraction of the chord deflection. */
   webAllowance: number;
-  /** Deflection limit as span / limit. */
+  /** Deflection limits as span / limit: under the variable load, and under the total characteristic load. */
   deflectionLimit: number;
+  deflectionLimitTotal: number;
 }
 
 export interface TrussZone {
@@ -53,6 +56,9 @@ export interface TrussResult {
   diagonalLengthM: number;
   deflectionM: number;
   deflectionLimitM: number;
+  /** Midspan deflection under the total characteristic load, m, and its limit. */
+  totalDeflectionM: number;
+  totalDeflectionLimitM: number;
   /** Support reaction under ULS gravity, N. */
   reactionN: number;
   /** Largest top chord compression, N (negative). */
@@ -160,7 +166,9 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
   const areaScale = { value: 1 };
   let failure = "";
   let deflectionM = 0;
+  let totalDeflectionM = 0;
   const limitM = L / d.deflectionLimit;
+  const totalLimitM = L / d.deflectionLimitTotal;
   const zoneBase = strengthZones(d, sections, steel, { edges, topLengthM, bottomLengthM, diagonalLengthM, sinTheta, localMomentNm });
   for (let attempt = 0; attempt < 12; attempt++) {
     zones.length = 0;
@@ -186,8 +194,10 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
       return (STEEL_E_PA * at * ab * d.depthM * d.depthM) / (at + ab);
     });
     deflectionM = gradedBeamDeflectionM(d.slsNPerM, L, edges.slice(1), ei) * (1 + d.webAllowance);
-    if (deflectionM <= limitM) break;
-    areaScale.value *= (deflectionM / limitM) * 1.02;
+    totalDeflectionM = gradedBeamDeflectionM(d.slsTotalNPerM, L, edges.slice(1), ei) * (1 + d.webAllowance);
+    const excess = Math.max(deflectionM / limitM, totalDeflectionM / totalLimitM);
+    if (excess <= 1) break;
+    areaScale.value *= excess * 1.02;
   }
   let chordMassKg = 0;
   let diagonalMassKg = 0;
@@ -205,8 +215,14 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
     diagonalLengthM,
     deflectionM,
     deflectionLimitM: limitM,
+    totalDeflectionM,
+    totalDeflectionLimitM: totalLimitM,
     reactionN: beam.shearN,
     topCompressionN: zones.length > 0 ? zones[zones.length - 1]!.topForceN : 0,
-    failure: failure !== "" ? failure : deflectionM > limitM ? `deflection ${(deflectionM * 1000).toFixed(0)} mm exceeds span/${d.deflectionLimit} even with the largest chords` : "",
+    failure:
+      failure !== "" ? failure
+      : deflectionM > limitM ? `deflection ${(deflectionM * 1000).toFixed(0)} mm exceeds span/${d.deflectionLimit} even with the largest chords`
+      : totalDeflectionM > totalLimitM ? `deflection under the total load ${(totalDeflectionM * 1000).toFixed(0)} mm exceeds span/${d.deflectionLimitTotal} even with the largest chords`
+      : "",
   };
 }
