@@ -10,6 +10,7 @@ import { hoopSignChangeAngleRad } from "../../mechanics/spherical-membrane";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { latticeSelfWeightKPa, sizeLattice, strutBands, type LatticeInputs, type LatticeResult } from "./sizing";
 import { latticePlan, latticeSection } from "./drawing";
+import { analyseNet } from "./analysis";
 
 const declarations = {
   // default: single-layer lattices are usually meshed at 3–6 m (common practice, no source)
@@ -33,6 +34,8 @@ const declarations = {
   nodeAllowancePct: { kind: "number", label: "Nodes and connections", unit: "% of bar mass", min: 0, max: 50, step: 1, default: 15, source: "common practice 10–20 %, no source", uncertainty: "allowance" },
   cladding: { kind: "select", label: "Cladding", choices: CLADDING_CHOICES, default: "metal-deck", source: "data/claddings.csv" },
   steelGrade: { kind: "select", label: "Steel grade", choices: STEEL_GRADE_CHOICES, default: "S355", source: "EN 1993-1-1 Table 3.1" },
+  // on demand: seconds at 160 m (the command line's --buckling and the details panel set it)
+  bucklingAnalysis: { kind: "toggle", label: "3D analysis of the net (member forces and buckling)", default: false, source: "rigid-jointed frame of the net under uniform and drifted snow, linear buckling × knock-down (issue 13)" },
 } as const;
 export type GeodesicDomeOptions = OptionValues<typeof declarations>;
 
@@ -167,9 +170,18 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
     throw new SchemeError(reason, { warnings, section });
   }
   const governingBand = r.bands.reduce((worst, b) => (b.choice.utilisation > worst.choice.utilisation ? b : worst));
+  const membraneCase = governingBand.bucklingPa > 0 && governingBand.pressurePa / governingBand.bucklingPa >= governingBand.choice.utilisation ? r.heaviestCase : governingBand.governingCase;
+  const members = latticeMembers(r, inputs, double);
+  const net = double || !opts.bucklingAnalysis ? null : analyseNet({ brief, cap, mesh, bands: r.bands, selfWeightPlanKPa: latticeSelfWeightKPa(r, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2), steel: inputs.steel, knockDown: opts.knockDown, buckling: opts.bucklingAnalysis });
+  if (double && opts.bucklingAnalysis) warnings.push("double layer: no 3D analysis of the net (the frame model is single-layer); bar forces from membrane theory only");
+  if (!net) warnings.push("bar forces from membrane theory; the 3D analysis of the net (member forces under drifted snow, buckling factor) runs on demand");
+  const maxMembrane = Math.max(...members.checks.map((c) => c.utilisation));
+  const maxNet = net ? Math.max(...net.checks.map((c) => c.utilisation)) : 0;
   return {
-    ...latticeMembers(r, inputs, double),
-    governingLoadCase: governingBand.bucklingPa > 0 && governingBand.pressurePa / governingBand.bucklingPa >= governingBand.choice.utilisation ? r.heaviestCase : governingBand.governingCase,
+    members: members.members,
+    checks: [...members.checks, ...(net?.checks ?? [])],
+    ...(net ? { analysis: net.analysis } : {}),
+    governingLoadCase: net && maxNet > maxMembrane ? net.governingCase : membraneCase,
     summary: latticeSummary(r, mesh, frequency, cap, double),
     takeoff: latticeTakeoff(r, cladding, cap),
     warnings,
