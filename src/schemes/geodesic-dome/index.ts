@@ -14,7 +14,7 @@ import { analyseNet } from "./analysis";
 
 const declarations = {
   // default: single-layer lattices are usually meshed at 3–6 m (common practice, no source)
-  targetStrutLengthM: { kind: "number", label: "Target strut length", unit: "m", min: 1.5, max: 15, step: 0.5, default: 5, source: "mesh size; frequency v = round(1.2 R / L) (class I subdivision)" },
+  targetStrutLengthM: { kind: "number", label: "Target strut length", unit: "m", min: 1.5, max: 15, step: 0.5, default: 5, source: "mesh size; frequency v = round(1.2 R / L) (class I subdivision)", free: true },
   layers: {
     kind: "select",
     label: "Layers",
@@ -26,7 +26,7 @@ const declarations = {
     source: "double layer: two grids at a depth, webs between (equivalent sandwich stiffness)",
   },
   // default span/50 (common practice for double-layer domes, no source)
-  doubleLayerDepthPct: { kind: "number", label: "Double-layer depth", unit: "% of span", min: 0.5, max: 6, step: 0.1, default: 2, source: "common practice span/50, no source" },
+  doubleLayerDepthPct: { kind: "number", label: "Double-layer depth", unit: "% of span", min: 0.5, max: 6, step: 0.1, default: 2, source: "common practice span/50, no source", free: true },
   // default: lattice shells reach 0.2–0.4 of p_cl with imperfections (from memory; cf. Kollár & Dulácska)
   knockDown: { kind: "number", label: "Buckling knock-down on p_cl", unit: "", min: 0.05, max: 1, step: 0.05, default: 0.3, source: "imperfection sensitivity of lattice shells, from memory 0.2–0.4", uncertainty: "knock-down" },
   bands: { kind: "number", label: "Bar size bands, crown to edge", unit: "", min: 1, max: 20, step: 1, integer: true, default: 6, source: "grouping of alike members" },
@@ -199,6 +199,8 @@ export const geodesicDome = defineScheme({
   description:
     "A single- or double-layer lattice of steel tubes on a geodesic (icosahedral) net, cut to a spherical cap on a steel tension ring. The dome carries the roof as a shell in compression; the bars are sized for their membrane forces and the whole lattice for general buckling.",
   validSpanM: { min: 40, max: 250 },
+  // rise ÷ span 0.1–0.3, preferring 0.15 (common practice for braced domes, no source)
+  riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15 },
   options: defineOptions(declarations),
   design,
 });
