@@ -19,15 +19,13 @@ import {
   textControl,
   gapNotice,
   missingFactorRows,
-  schemeDesigns,
-  designAreas,
+  studySignals,
   type Binding,
   type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
 import { tableGaps } from "../src/pipeline";
 import {
-  assessCarbon,
   defaultFactorRows,
   factorRowsToCsv,
   parseFactorCsv,
@@ -53,19 +51,14 @@ const { store, main } = startPage({
 
 const factors = computed(() => store.study.value.carbon.factors);
 const settings = computed(() => store.study.value.carbon.settings);
-const designs = schemeDesigns(store);
+const { results } = studySignals(store);
+/** The enabled schemes' designs (for the gap notices and the import check), from the shared per-scheme signals. */
+const designs = computed(() => results.value.map(({ id, label, design }) => ({ id, label, design })));
 
 type SchemeCarbonResult = { id: string; label: string; feasible: boolean; reason: string; carbon: CarbonAssessment | null; error: string };
+/** Each scheme's carbon as the shared per-scheme signals assessed it: a factor edit re-assesses, never re-designs, and the page runs no assessment of its own. */
 const carbonBySchemes = computed<SchemeCarbonResult[]>(() =>
-  designs.value.map(({ id, label, design }) => {
-    const base = { id, label, feasible: design.feasible, reason: design.reason };
-    if (design.takeoff.length === 0) return { ...base, carbon: null, error: design.feasible ? "no take-off" : design.reason };
-    try {
-      return { ...base, carbon: assessCarbon(design.takeoff, factors.value, settings.value, designAreas(design)), error: "" };
-    } catch (error) {
-      return { ...base, carbon: null, error: error instanceof Error ? error.message : String(error) };
-    }
-  }),
+  results.value.map(({ id, label, design, carbon, error }) => ({ id, label, feasible: design.feasible, reason: design.reason, carbon, error: carbon ? "" : error || (design.feasible ? "no take-off" : design.reason) })),
 );
 
 // ── Settings ────────────────────────────────────────────────────────────────────────────────

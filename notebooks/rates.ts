@@ -19,14 +19,13 @@ import {
   tableEditor,
   gapNotice,
   missingRateRows,
-  schemeDesigns,
-  designAreas,
+  studySignals,
   type Binding,
   type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
 import { tableGaps } from "../src/pipeline";
-import { assessCost, rebaseRateRows, RebaseRangeError, MAX_RATE, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, DEFAULT_RATE_SET_NAME, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
+import { rebaseRateRows, RebaseRangeError, MAX_RATE, defaultRateRows, parseRateCsv, rateRowsToCsv, RateRowSchema, OnCostsSchema, CONCEPT_SCREENING, DEFAULT_RATE_SET_NAME, type CostAssessment, type OnCosts, type RateRow } from "../src/cost";
 import { costChartOptions, chartCaption, type SchemeCost } from "../src/charts";
 
 const { store, main } = startPage({
@@ -37,18 +36,14 @@ const { store, main } = startPage({
 
 const rates = computed(() => store.study.value.cost.rates);
 const onCosts = computed(() => store.study.value.cost.onCosts);
-const designs = schemeDesigns(store);
+const { results } = studySignals(store);
+/** The enabled schemes' designs (for the gap notices and the import check), from the shared per-scheme signals. */
+const designs = computed(() => results.value.map(({ id, label, design }) => ({ id, label, design })));
 
 type SchemeCostResult = { id: string; label: string; cost: CostAssessment | null; error: string };
+/** Each scheme's cost as the shared per-scheme signals assessed it: a rate edit re-prices, never re-designs, and the page runs no assessment of its own. */
 const costBySchemes = computed<SchemeCostResult[]>(() =>
-  designs.value.map(({ id, label, design }) => {
-    if (design.takeoff.length === 0) return { id, label, cost: null, error: design.feasible ? "no take-off" : design.reason };
-    try {
-      return { id, label, cost: assessCost(design.takeoff, rates.value, onCosts.value, designAreas(design)), error: "" };
-    } catch (error) {
-      return { id, label, cost: null, error: error instanceof Error ? error.message : String(error) };
-    }
-  }),
+  results.value.map(({ id, label, design, cost, error }) => ({ id, label, cost, error: cost ? "" : error || (design.feasible ? "no take-off" : design.reason) })),
 );
 
 // ── On-costs ────────────────────────────────────────────────────────────────────────────────

@@ -1,16 +1,24 @@
 import * as Plot from "@observablehq/plot";
 import type { AreaBasis } from "../carbon/carbon-settings";
 import { PART_COLOURS } from "./part-colours";
-import { CARBON_METRICS, carbonByMaterialData, carbonByModuleData, COUNTED_MODULES, type CarbonMetric, type SchemeCarbon } from "./carbon-chart-data";
+import { materialColour, moduleColour } from "./palette";
+import { APART_MODULES, CARBON_METRICS, carbonApartData, carbonByElementData, carbonByMaterialData, carbonByModuleData, carbonScale, COUNTED_MODULES, type CarbonBarDatum, type CarbonMetric, type SchemeCarbon } from "./carbon-chart-data";
+
+/** A benchmark band the consultant enters, kgCO2e/m² on a stated area basis. */
+export type BenchmarkBand = { label: string; fromKgCO2ePerM2: number; toKgCO2ePerM2: number; basis: AreaBasis };
 
 export type CarbonChartInput = {
   schemes: readonly SchemeCarbon[];
-  /** Stack by life-cycle module or by material. */
-  by: "module" | "material";
+  /** Stack by life-cycle module, by material or by structural element. */
+  by: "module" | "material" | "element";
   metric: CarbonMetric;
   /** Target on the settings' area basis, kgCO2e/m² (drawn when the metric is per m² of that basis). */
   target: number | null;
   targetBasis: AreaBasis;
+  /** Benchmark bands (each drawn when the metric is per m² of its basis). */
+  bands?: readonly BenchmarkBand[];
+  /** Draw module D (reported apart) as a dashed tick beside each bar. */
+  moduleD?: boolean;
   title: string;
   caption: string;
   width?: number;
@@ -21,18 +29,48 @@ export function targetApplies(metric: CarbonMetric, basis: AreaBasis): boolean {
   return (metric === "per-m2-floor" && basis === "usable-floor") || (metric === "per-m2-plan" && basis === "covered-plan");
 }
 
+function stackData(input: CarbonChartInput): CarbonBarDatum[] {
+  if (input.by === "module") return carbonByModuleData(input.schemes, input.metric);
+  if (input.by === "material") return carbonByMaterialData(input.schemes, input.metric);
+  return carbonByElementData(input.schemes, input.metric);
+}
+
+/** The colour scale of a stack: modules and materials keep their fixed colours on every page; elements take the part colours. */
+function stackColour(by: CarbonChartInput["by"], data: readonly CarbonBarDatum[]): Plot.ScaleOptions {
+  if (by === "module") return { legend: true, domain: COUNTED_MODULES.map((m) => m.label), range: COUNTED_MODULES.map((m) => moduleColour(m.id)) };
+  const parts = [...new Map(data.map((d) => [d.part, d.key ?? d.part])).entries()];
+  if (by === "material") return { legend: true, domain: parts.map(([part]) => part), range: parts.map(([, key]) => materialColour(key)) };
+  return { legend: true, domain: parts.map(([part]) => part), range: parts.map((_, i) => PART_COLOURS[i % PART_COLOURS.length] as string) };
+}
+
+function bandMarks(input: CarbonChartInput): Plot.Markish[] {
+  const bands = (input.bands ?? []).filter((b) => targetApplies(input.metric, b.basis));
+  if (bands.length === 0) return [];
+  return [
+    Plot.rectY(bands, { y1: "fromKgCO2ePerM2", y2: "toKgCO2ePerM2", fill: "#5f5f5f", fillOpacity: 0.08, stroke: "#5f5f5f", strokeOpacity: 0.5, strokeDasharray: "2 3" }),
+    Plot.text(bands, { y: "toKgCO2ePerM2", text: "label", frameAnchor: "left", textAnchor: "start", dy: 8, dx: 4, fill: "#3f3f3f", fontSize: 10 }),
+  ];
+}
+
+function moduleDMarks(input: CarbonChartInput): Plot.Markish[] {
+  if (!input.moduleD) return [];
+  const ticks = input.schemes.flatMap((s) => {
+    const k = carbonScale(s.carbon, input.metric);
+    return k === null ? [] : [{ scheme: s.label, value: s.carbon.totals.moduleD * k }];
+  });
+  return [Plot.tickY(ticks, { x: "scheme", y: "value", stroke: moduleColour("D"), strokeWidth: 2, strokeDasharray: "3 2" })];
+}
+
 /**
- * Plot options for stacked bars of counted embodied carbon per scheme, by module or by material,
- * in tCO2e or kgCO2e per m² of usable floor or of plan, with an optional target line. Pure: no DOM.
+ * Plot options for stacked bars of counted embodied carbon per scheme, by module, material or
+ * structural element, in tCO2e or kgCO2e per m² of usable floor or of plan, with an optional
+ * target line, benchmark bands and module D ticks. The one builder of "carbon by module" on every
+ * page. Pure: no DOM.
  */
 export function carbonChartOptions(input: CarbonChartInput): Plot.PlotOptions {
-  const data = input.by === "module" ? carbonByModuleData(input.schemes, input.metric) : carbonByMaterialData(input.schemes, input.metric);
+  const data = stackData(input);
   const axis = CARBON_METRICS.find((m) => m.value === input.metric)?.axis ?? "";
   const showTarget = input.target !== null && targetApplies(input.metric, input.targetBasis);
-  const colour =
-    input.by === "module"
-      ? { legend: true, domain: COUNTED_MODULES.map((m) => m.label), range: ["#1d4e89", "#5b8fc9", "#a9c6e8", "#8a4b00"] }
-      : { legend: true, range: [...PART_COLOURS] };
   return {
     title: input.title,
     caption: input.caption,
@@ -42,16 +80,42 @@ export function carbonChartOptions(input: CarbonChartInput): Plot.PlotOptions {
     marginBottom: 50,
     x: { label: "Scheme", domain: input.schemes.map((s) => s.label), tickRotate: input.schemes.length > 3 ? -15 : 0 },
     y: { label: axis, grid: true },
-    color: colour,
+    color: stackColour(input.by, data),
     marks: [
+      ...bandMarks(input),
       Plot.barY(data, { x: "scheme", y: "value", fill: "part", title: (d: { part: string; value: number }) => `${d.part}: ${d.value.toFixed(1)}`, order: null }),
       Plot.ruleY([0]),
+      ...moduleDMarks(input),
       ...(showTarget && input.target !== null
         ? [
             Plot.ruleY([input.target], { stroke: "#a11d1d", strokeDasharray: "6 4", strokeWidth: 1.5 }),
             Plot.text([input.target], { y: (d: number) => d, frameAnchor: "right", textAnchor: "end", text: () => `target ${input.target} kgCO2e/m²`, dy: -7, fill: "#a11d1d", stroke: "white", strokeWidth: 3, paintOrder: "stroke" }),
           ]
         : []),
+    ],
+  };
+}
+
+/**
+ * Plot options for module D and biogenic CO2 stored, per scheme, drawn apart from the counted
+ * total (never netted): one row of bars per quantity, in the metric's unit. Pure: no DOM.
+ */
+export function carbonApartChartOptions(input: Pick<CarbonChartInput, "schemes" | "metric" | "title" | "caption" | "width">): Plot.PlotOptions {
+  const data = carbonApartData(input.schemes, input.metric);
+  const axis = (CARBON_METRICS.find((m) => m.value === input.metric)?.axis ?? "").replace("Embodied carbon", "Reported apart");
+  return {
+    title: input.title,
+    caption: input.caption,
+    width: input.width ?? 760,
+    height: 110 + 46 * input.schemes.length,
+    marginLeft: 170,
+    x: { label: axis, grid: true },
+    y: { label: null, domain: input.schemes.map((s) => s.label) },
+    fy: { label: null, domain: APART_MODULES.map((m) => m.label) },
+    color: { legend: true, domain: APART_MODULES.map((m) => m.label), range: APART_MODULES.map((m) => moduleColour(m.id)) },
+    marks: [
+      Plot.barX(data, { x: "value", y: "scheme", fy: "part", fill: "part", title: (d: CarbonBarDatum) => `${d.scheme}, ${d.part}: ${d.value.toFixed(1)}` }),
+      Plot.ruleX([0]),
     ],
   };
 }

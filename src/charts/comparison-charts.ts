@@ -2,11 +2,12 @@ import * as Plot from "@observablehq/plot";
 import type { SchemeResult } from "../pipeline";
 import { materialInfo, type MaterialKind } from "../materials";
 import { paretoFront } from "../comparison/pareto";
-import { SCHEME_COLOURS } from "./palette";
+import { SCHEME_COLOURS, MATERIAL_KIND_COLOURS } from "./palette";
+import { carbonChartOptions } from "./carbon-chart";
 import { isSubstructure } from "../schemes/kit";
 
 const KIND_ORDER: readonly MaterialKind[] = ["steel", "cable", "fabric", "cladding", "concrete", "rebar", "timber"];
-const KIND_COLOURS = ["#4c6a8c", "#0072B2", "#9ad0c2", "#c9b27c", "#a7a7a7", "#7a4e2d", "#b8860b"];
+const KIND_COLOURS = KIND_ORDER.map((kind) => MATERIAL_KIND_COLOURS[kind]);
 
 interface Common {
   title: string;
@@ -41,39 +42,13 @@ export function massByMaterialChart(results: readonly SchemeResult[], common: Co
   };
 }
 
-/** Stacked bars: counted carbon per m² of usable floor by life-cycle module; module D drawn apart as a tick. */
+/**
+ * Stacked bars: counted carbon per m² of usable floor by life-cycle module, module D drawn apart as
+ * a dashed tick; the carbon page's one builder (`carbonChartOptions`), with its labels and colours.
+ */
 export function carbonByModuleChart(results: readonly SchemeResult[], common: Common): Plot.PlotOptions {
-  // `code` is the module's name as the carbon assessment lists it in modulesCounted.
-  const modules = [
-    { key: "a1a3", code: "A1–A3", label: "A1–A3 product" },
-    { key: "a4", code: "A4", label: "A4 transport" },
-    { key: "a5", code: "A5", label: "A5 wastage" },
-    { key: "c", code: "C1–C4", label: "C1–C4 end of life" },
-  ] as const;
-  const data = results.flatMap((r) => {
-    const per = r.carbon?.perM2UsableFloor.perM2;
-    if (!per || !r.design.feasible) return [];
-    const counted = new Set(r.carbon?.modulesCounted ?? []);
-    return modules.filter((m) => counted.has(m.code)).map((m) => ({ scheme: r.label, module: m.label, value: per[m.key] }));
-  });
-  const moduleD = results.flatMap((r) => {
-    const per = r.carbon?.perM2UsableFloor.perM2;
-    return per && r.design.feasible ? [{ scheme: r.label, value: per.moduleD }] : [];
-  });
-  return {
-    ...common,
-    width: common.width ?? 580,
-    marginLeft: 150,
-    height: 70 + 34 * results.length,
-    x: { label: "Embodied carbon (kgCO2e/m² of usable floor)", grid: true },
-    y: { label: null, domain: results.filter((r) => r.design.feasible).map((r) => r.label) },
-    color: { legend: true, domain: modules.map((m) => m.label), range: ["#3b6e8f", "#86a8c4", "#d9a441", "#8f8f8f"] },
-    marks: [
-      Plot.barX(data, { x: "value", y: "scheme", fill: "module", tip: true }),
-      Plot.tickX(moduleD, { x: "value", y: "scheme", stroke: "#2a7a2a", strokeWidth: 2, strokeDasharray: "3 2" }),
-      Plot.ruleX([0]),
-    ],
-  };
+  const schemes = results.flatMap((r) => (r.carbon && r.design.feasible ? [{ id: r.id, label: r.label, carbon: r.carbon }] : []));
+  return carbonChartOptions({ schemes, by: "module", metric: "per-m2-floor", target: null, targetBasis: "usable-floor", moduleD: true, ...common, width: common.width ?? 580 });
 }
 
 /** Bars: cost per m² of usable floor, with the low–high range of the rates as a rule. */

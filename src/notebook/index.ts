@@ -16,6 +16,5 @@ export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";
 export { tableEditor, type EditorColumn } from "./table-editor";
 export { gapNotice, missingFactorRows, missingRateRows } from "./gap-notice";
-export { schemeDesigns, designAreas, type SchemeDesign } from "./scheme-designs";
 export { riskInputsEditor, ensureRiskStyle } from "./risk-inputs-editor";
 export { studyDetailsEditor, studyDetailItems, describeChangedAt } from "./study-details";
