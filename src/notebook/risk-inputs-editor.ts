@@ -1,25 +1,32 @@
-// The uncertain-inputs table of the risk page: scale / low / high / distribution / group per input,
-// with the range it gives now around the study's value; each edit checked against the whole study
-// (checkRiskInputs) before it is applied; an invalid edit shows its message in the row and changes
-// nothing.
-import { computed, effect } from "@preact/signals-core";
+// The uncertain-inputs table of the risk page, on the shared editable table: how far each input
+// may go (least / most, as factors on the study's value or amounts added to it), the range that
+// gives now around the study's value, how likely values in between are, and which inputs move
+// together. Each edit is checked against the whole study (checkRiskInputs) before it is applied;
+// an invalid edit shows its message in the row and changes nothing. Inputs are grouped by kind and
+// can be filtered.
+import { h } from "preact";
+import { computed, signal, effect, type ReadonlySignal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
-import { setIn, getIn } from "../study";
+import { setIn } from "../study";
 import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, type UncertainInput } from "../risk";
+import { mountEditableTable, type EditOutcome, type TableColumn } from "./editable-table";
 
 const STYLE_ID = "risk-editor-style";
 const CSS = `
 .risk-inputs { overflow-x: auto; max-height: 32rem; overflow-y: auto; }
 .risk-inputs table { font-size: 0.82rem; }
-.risk-inputs input, .risk-inputs select { font: inherit; font-size: 0.82rem; padding: 0.1rem 0.25rem; }
-.risk-inputs input[type="number"] { width: 6.5rem; }
-.risk-inputs input.group { width: 8rem; }
+.risk-inputs input, .risk-inputs select { font: inherit; font-size: 0.82rem; padding: 0.1rem 0.25rem; width: 6.5rem; }
+.risk-inputs select { width: auto; }
 .risk-inputs td.invalid input, .risk-inputs td.invalid select { border: 2px solid #a11d1d; }
 .risk-inputs .row-message { color: #a11d1d; font-size: 0.78rem; max-width: 18rem; }
 .risk-inputs .path { font-family: ui-monospace, monospace; font-size: 0.74rem; color: #5a6270; }
+.risk-inputs .kind { font-size: 0.74rem; color: #3f4650; }
+.risk-filter { display: flex; gap: 0.75rem; align-items: end; flex-wrap: wrap; margin: 0.5rem 0; }
+.risk-filter label { display: flex; flex-direction: column; font-size: 0.85rem; }
 .risk-progress { display: flex; gap: 0.75rem; align-items: center; flex-wrap: wrap; margin: 0.5rem 0; }
 .risk-progress progress { width: 18rem; height: 1rem; }
-.risk-stale { color: #8a5a00; }
+.risk-stale { color: #8a5a00; font-weight: 600; }
+.risk-verdict { font-size: 1.05rem; font-weight: 600; margin: 0.25rem 0 0.75rem; }
 `;
 
 export function ensureRiskStyle(): void {
@@ -30,9 +37,116 @@ export function ensureRiskStyle(): void {
   document.head.append(style);
 }
 
-type Field = "scale" | "low" | "high" | "distribution" | "group";
+/** The kinds inputs are grouped by, from where they sit in the study. */
+export const INPUT_KINDS = ["Loads and brief", "Scheme proportions and allowances", "Carbon factors and settings", "Rates and on-costs", "Other"] as const;
+export type InputKind = (typeof INPUT_KINDS)[number];
 
-/** The editable inputs table; rebuilt only when the list of inputs changes (ids), values kept in step by effects. */
+/** The kind of an uncertain input, from the first step of its path. */
+export function inputKind(input: UncertainInput): InputKind {
+  const head = input.path[0];
+  if (head === "brief") return "Loads and brief";
+  if (head === "schemes") return "Scheme proportions and allowances";
+  if (head === "carbon") return "Carbon factors and settings";
+  if (head === "cost") return "Rates and on-costs";
+  return "Other";
+}
+
+/** How likely values between the ends are, in words (the sampling shapes keep their ids in the study). */
+export const SHAPE_WORDS: Readonly<Record<(typeof DISTRIBUTION_KINDS)[number], string>> = {
+  pert: "most often near the study value, tapering smoothly",
+  triangular: "most often near the study value, tapering evenly",
+  uniform: "any value between the ends equally likely",
+};
+
+const show = (x: number) => String(Number(x.toPrecision(4)));
+
+/** Applies a new version of input `index` if the whole study stays valid; else the message naming it. */
+function applyInput(store: StudyStore, index: number, next: UncertainInput, applied: unknown): EditOutcome {
+  const candidate = setIn(store.study.value, ["risk", "inputs", index], next);
+  const problems = checkRiskInputs(candidate).problems.filter((p) => p.inputId === next.id || p.inputId === null);
+  if (problems.length > 0) return { ok: false, message: problems.map((p) => p.message).join("; ") };
+  store.replace(candidate);
+  return { ok: true, value: applied };
+}
+
+/** Changing the scale keeps the absolute range of the moment, re-expressed on the new scale. */
+function changeScale(store: StudyStore, index: number, stored: UncertainInput, scale: string): EditOutcome {
+  const now = resolveInput(store.study.value, stored);
+  if ("error" in now) return applyInput(store, index, { ...stored, scale: scale as UncertainInput["scale"] }, scale);
+  const factor = scale === "factor";
+  if (factor && now.mode === 0) return { ok: false, message: `input "${stored.id}": the study's value is 0, so the range cannot be factors on it (use + study value)` };
+  const ends = factor ? [now.low / now.mode, now.high / now.mode] : [now.low - now.mode, now.high - now.mode];
+  return applyInput(store, index, { ...stored, scale: factor ? "factor" : "offset", low: Math.min(...ends), high: Math.max(...ends) }, scale);
+}
+
+function editInput(store: StudyStore, id: string, field: string, text: string): EditOutcome {
+  const inputs = store.study.value.risk.inputs;
+  const index = inputs.findIndex((i) => i.id === id);
+  const stored = inputs[index];
+  if (!stored) return { ok: false, message: `input "${id}" is no longer in the study` };
+  if (field === "scale") return changeScale(store, index, stored, text);
+  if (field === "low" || field === "high") {
+    const x = Number(text);
+    if (text.trim() === "" || !Number.isFinite(x)) return { ok: false, message: `input "${id}": ${field} "${text}" is not a number` };
+    return applyInput(store, index, { ...stored, [field]: x }, x);
+  }
+  if (field === "group") {
+    const group = text.trim() === "" ? null : text.trim();
+    return applyInput(store, index, { ...stored, group }, group);
+  }
+  return applyInput(store, index, { ...stored, [field]: text }, text);
+}
+
+function columns(store: StudyStore): TableColumn<UncertainInput>[] {
+  const number = (x: unknown) => (typeof x === "number" ? String(Number(x.toPrecision(6))) : "");
+  return [
+    { field: "label", label: "input", kind: "computed", content: (i) => [i.label, h("div", { class: "kind" }, inputKind(i)), h("div", { class: "path" }, formatPath(i.path))] },
+    { field: "scale", label: "ends given as", kind: "select", choices: RANGE_SCALES.map((k) => ({ value: k, label: k === "factor" ? "× study value" : "+ study value" })) },
+    { field: "low", label: "least", kind: "number", commit: "change", show: (i) => number(i.low), hint: "The lowest plausible value, on the scale at the left" },
+    { field: "high", label: "most", kind: "number", commit: "change", show: (i) => number(i.high), hint: "The highest plausible value, on the scale at the left" },
+    {
+      field: "range",
+      label: "range now (least – study value – most)",
+      kind: "computed",
+      show: (i) => {
+        const now = resolveInput(store.study.value, i);
+        return "error" in now ? "–" : `${show(now.low)} – ${show(now.mode)} – ${show(now.high)}`;
+      },
+    },
+    { field: "distribution", label: "how likely in between", kind: "select", choices: DISTRIBUTION_KINDS.map((k) => ({ value: k, label: SHAPE_WORDS[k] })) },
+    { field: "group", label: "moves with (group)", kind: "text", commit: "change", show: (i) => i.group ?? "" },
+  ];
+}
+
+/** The filter above the table: a kind and words to find in an input's name or path. */
+function filterBar(kind: ReturnType<typeof signal<string>>, words: ReturnType<typeof signal<string>>, count: ReadonlySignal<string>): HTMLElement {
+  const bar = document.createElement("div");
+  bar.className = "risk-filter";
+  const kindLabel = document.createElement("label");
+  kindLabel.textContent = "Kind of input";
+  const select = document.createElement("select");
+  select.id = "risk-filter-kind";
+  for (const k of ["all", ...INPUT_KINDS]) select.append(new Option(k === "all" ? "All kinds" : k, k));
+  select.addEventListener("change", () => (kind.value = select.value));
+  kindLabel.append(select);
+  const wordsLabel = document.createElement("label");
+  wordsLabel.textContent = "Find";
+  const search = document.createElement("input");
+  search.type = "search";
+  search.id = "risk-filter-words";
+  search.placeholder = "snow, steel, rate…";
+  search.addEventListener("input", () => (words.value = search.value.trim().toLowerCase()));
+  wordsLabel.append(search);
+  const shown = document.createElement("span");
+  shown.id = "risk-filter-count";
+  effect(() => {
+    shown.textContent = count.value;
+  });
+  bar.append(kindLabel, wordsLabel, shown);
+  return bar;
+}
+
+/** The editable inputs table with its filter, reset button and summary line. */
 export function riskInputsEditor(store: StudyStore): HTMLElement {
   ensureRiskStyle();
   const wrap = document.createElement("div");
@@ -53,194 +167,32 @@ export function riskInputsEditor(store: StudyStore): HTMLElement {
     summary.textContent = `${inputs.length} inputs, ${inputs.filter((i) => i.low < i.high).length} with a range; ${check.problems.length === 0 ? "all valid" : `${check.problems.length} problem(s)`}${check.warnings.length ? `; ${check.warnings.length} warning(s): ${check.warnings.slice(0, 2).join("; ")}` : ""}`;
   });
   tools.append(reset, summary);
+  const kind = signal("all");
+  const words = signal("");
+  const rows = computed(() => store.study.value.risk.inputs);
+  const visible = computed(() => {
+    const k = kind.value;
+    const w = words.value;
+    return (i: UncertainInput) => (k === "all" || inputKind(i) === k) && (w === "" || `${i.label} ${formatPath(i.path)}`.toLowerCase().includes(w));
+  });
+  const count = computed(() => `${rows.value.filter(visible.value).length} of ${rows.value.length} inputs shown`);
   const holder = document.createElement("div");
   holder.className = "risk-inputs";
-  wrap.append(tools, holder);
-
-  const ids = computed(() => store.study.value.risk.inputs.map((i) => i.id).join("\n"));
-  effect(() => {
-    if (ids.value === undefined) return; // read to rebuild when inputs are added, removed or replaced
-    holder.replaceChildren(buildTable(store));
+  mountEditableTable<UncertainInput>(holder, {
+    tableId: "risk-inputs-table",
+    caption:
+      "Uncertain inputs. Each range is stored around the study's own value, which is the mode (the most likely value): as factors on it (× 0.75 to × 1.5) or as amounts added to it (in the field's unit), so it moves with the study and always holds the study's value; the ends are kept inside the field's allowed range (a rate inside its row's low–high). Table rows are found by material or cost item id, not by position. Inputs with the same group move together (drawn as one); an empty group moves on its own.",
+    rows,
+    keyOf: (i) => i.id,
+    columns: columns(store),
+    cellId: (_key, index, field) => `risk-${field}-${index}`,
+    cellLabel: (i, c) => `${i.label}: ${c.label}`,
+    edit: (key, field, text) => editInput(store, key, field, text),
+    messages: { rowMessageId: (_key, index) => `risk-msg-${index}` },
+    rowAttributes: (key) => ({ "data-input": key }),
+    keyField: "label",
+    visible,
   });
+  wrap.append(tools, filterBar(kind, words, count), holder);
   return wrap;
-}
-
-function buildTable(store: StudyStore): HTMLTableElement {
-  const table = document.createElement("table");
-  table.id = "risk-inputs-table";
-  const caption = document.createElement("caption");
-  caption.textContent =
-    "Uncertain inputs. Each range is stored around the study's own value, which is the mode: as factors on it (× 0.75 to × 1.5) or as amounts added to it (in the field's unit), so it moves with the study and always holds the study's value; the ends are kept inside the field's allowed range (a rate inside its row's low–high). Table rows are found by material or cost item id, not by position. Inputs with the same group are drawn together (one quantile per sample); an empty group is independent.";
-  const thead = document.createElement("thead");
-  const head = document.createElement("tr");
-  for (const h of ["input", "scale", "low", "high", "range now (low – study value – high)", "distribution", "group", ""]) {
-    const th = document.createElement("th");
-    th.scope = "col";
-    th.textContent = h;
-    head.append(th);
-  }
-  thead.append(head);
-  const tbody = document.createElement("tbody");
-  store.study.peek().risk.inputs.forEach((input, index) => tbody.append(row(store, input, index)));
-  table.append(caption, thead, tbody);
-  return table;
-}
-
-/** What every cell of one input's row needs: the store, the input, its message cell and how to apply an edit. */
-type RowContext = {
-  store: StudyStore;
-  input: UncertainInput;
-  index: number;
-  message: HTMLTableCellElement;
-  /** Applies a new version of the input if the whole study stays valid; else shows why in the row. */
-  applyInput: (next: UncertainInput, cell: HTMLTableCellElement) => void;
-  apply: (field: Field, value: unknown, cell: HTMLTableCellElement) => void;
-};
-
-function row(store: StudyStore, input: UncertainInput, index: number): HTMLTableRowElement {
-  const tr = document.createElement("tr");
-  tr.dataset.input = input.id;
-  const name = document.createElement("th");
-  name.scope = "row";
-  name.textContent = input.label;
-  const path = document.createElement("div");
-  path.className = "path";
-  path.textContent = formatPath(input.path);
-  name.append(path);
-  const message = document.createElement("td");
-  message.className = "row-message";
-  message.id = `risk-msg-${index}`;
-  message.setAttribute("aria-live", "polite");
-  const cells: HTMLTableCellElement[] = [];
-  const current = () => store.study.value.risk.inputs[index] as UncertainInput;
-  const applyInput = (next: UncertainInput, cell: HTMLTableCellElement) => {
-    const candidate = setIn(store.study.value, ["risk", "inputs", index], next);
-    const problems = checkRiskInputs(candidate).problems.filter((p) => p.inputId === input.id || p.inputId === null);
-    if (problems.length > 0) {
-      message.textContent = problems.map((p) => p.message).join("; ");
-      cell.classList.add("invalid");
-      return;
-    }
-    for (const c of cells) c.classList.remove("invalid");
-    message.textContent = "";
-    store.replace(candidate);
-  };
-  const ctx: RowContext = { store, input, index, message, applyInput, apply: (field, value, cell) => applyInput({ ...current(), [field]: value }, cell) };
-  const [scale, low, high, distribution, group] = [scaleCell(ctx), numberCell(ctx, "low"), numberCell(ctx, "high"), distributionCell(ctx), groupCell(ctx)];
-  cells.push(scale, low, high, distribution, group);
-  tr.append(name, scale, low, high, rangeCell(ctx), distribution, group, message);
-  return tr;
-}
-
-/** The scale select: changing it keeps the absolute range of the moment, re-expressed on the new scale. */
-function scaleCell(ctx: RowContext): HTMLTableCellElement {
-  const { store, input, index, message } = ctx;
-  const td = document.createElement("td");
-  const scale = document.createElement("select");
-  scale.id = `risk-scale-${index}`;
-  scale.setAttribute("aria-label", `${input.label}: scale`);
-  for (const kind of RANGE_SCALES) {
-    const option = document.createElement("option");
-    option.value = kind;
-    option.textContent = kind === "factor" ? "× study value" : "+ study value";
-    scale.append(option);
-  }
-  scale.addEventListener("change", () => {
-    const stored = store.study.value.risk.inputs[index] as UncertainInput;
-    const now = resolveInput(store.study.value, stored);
-    if ("error" in now) return ctx.apply("scale", scale.value, td);
-    const factor = scale.value === "factor";
-    if (factor && now.mode === 0) {
-      message.textContent = `input "${input.id}": the study's value is 0, so the range cannot be factors on it (use + study value)`;
-      td.classList.add("invalid");
-      return;
-    }
-    const ends = factor ? [now.low / now.mode, now.high / now.mode] : [now.low - now.mode, now.high - now.mode];
-    ctx.applyInput({ ...stored, scale: factor ? "factor" : "offset", low: Math.min(...ends), high: Math.max(...ends) }, td);
-  });
-  effect(() => {
-    const value = getIn(store.study.value, ["risk", "inputs", index, "scale"]);
-    if (typeof value === "string") scale.value = value;
-  });
-  td.append(scale);
-  return td;
-}
-
-function numberCell(ctx: RowContext, field: "low" | "high"): HTMLTableCellElement {
-  const { store, input, index, message } = ctx;
-  const td = document.createElement("td");
-  const el = document.createElement("input");
-  el.type = "number";
-  el.step = "any";
-  el.id = `risk-${field}-${index}`;
-  el.setAttribute("aria-label", `${input.label}: ${field}`);
-  el.setAttribute("aria-describedby", message.id);
-  el.addEventListener("change", () => {
-    const x = Number(el.value);
-    if (el.value.trim() === "" || !Number.isFinite(x)) {
-      message.textContent = `input "${input.id}": ${field} "${el.value}" is not a number`;
-      td.classList.add("invalid");
-      return;
-    }
-    ctx.apply(field, x, td);
-  });
-  effect(() => {
-    const value = getIn(store.study.value, ["risk", "inputs", index, field]);
-    if (document.activeElement !== el && typeof value === "number") el.value = String(Number(value.toPrecision(6)));
-  });
-  td.append(el);
-  return td;
-}
-
-/** The range the input gives now: low – the study's value (the mode) – high, in the field's unit. */
-function rangeCell(ctx: RowContext): HTMLTableCellElement {
-  const { store, index } = ctx;
-  const td = document.createElement("td");
-  td.className = "num";
-  td.id = `risk-range-${index}`;
-  effect(() => {
-    const stored = store.study.value.risk.inputs[index];
-    const now = stored ? resolveInput(store.study.value, stored) : null;
-    const show = (x: number) => String(Number(x.toPrecision(4)));
-    td.textContent = !now || "error" in now ? "–" : `${show(now.low)} – ${show(now.mode)} – ${show(now.high)}`;
-  });
-  return td;
-}
-
-function distributionCell(ctx: RowContext): HTMLTableCellElement {
-  const { store, input, index } = ctx;
-  const td = document.createElement("td");
-  const select = document.createElement("select");
-  select.id = `risk-distribution-${index}`;
-  select.setAttribute("aria-label", `${input.label}: distribution`);
-  for (const kind of DISTRIBUTION_KINDS) {
-    const option = document.createElement("option");
-    option.value = kind;
-    option.textContent = kind === "pert" ? "Beta-PERT" : kind;
-    select.append(option);
-  }
-  select.addEventListener("change", () => ctx.apply("distribution", select.value, td));
-  effect(() => {
-    const value = getIn(store.study.value, ["risk", "inputs", index, "distribution"]);
-    if (typeof value === "string") select.value = value;
-  });
-  td.append(select);
-  return td;
-}
-
-function groupCell(ctx: RowContext): HTMLTableCellElement {
-  const { store, input, index } = ctx;
-  const td = document.createElement("td");
-  const group = document.createElement("input");
-  group.type = "text";
-  group.className = "group";
-  group.id = `risk-group-${index}`;
-  group.setAttribute("aria-label", `${input.label}: group`);
-  group.addEventListener("change", () => ctx.apply("group", group.value.trim() === "" ? null : group.value.trim(), td));
-  effect(() => {
-    const value = getIn(store.study.value, ["risk", "inputs", index, "group"]);
-    if (document.activeElement !== group) group.value = typeof value === "string" ? value : "";
-  });
-  td.append(group);
-  return td;
 }

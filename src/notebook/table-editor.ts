@@ -3,21 +3,15 @@
 // add or remove rows the defaults do not have, import CSV (every bad line and column listed,
 // nothing applied unless the whole file is valid) and export CSV. Shared by the carbon and rates pages.
 import type * as v from "valibot";
-import { effect, computed, type ReadonlySignal } from "@preact/signals-core";
+import { h } from "preact";
+import { computed, type ReadonlySignal, type Signal } from "@preact/signals-core";
 import { downloadText } from "./download";
 import { checkRowEdit } from "../carbon";
 import { tableImport, type RowGap } from "./table-import";
+import { mountEditableTable, type TableColumn, type EditOutcome } from "./editable-table";
 
-export type EditorColumn<R> = {
-  field: keyof R & string;
-  label: string;
-  kind: "number" | "text";
-  unit?: string;
-  /** Shown but not editable (the row's key, a fixed unit). */
-  readOnly?: boolean;
-  /** Wide text cells (sources, notes). */
-  wide?: boolean;
-};
+/** A column of the editor: a row field (number or text), or a computed column (`show`). */
+export type EditorColumn<R> = TableColumn<R>;
 
 export type TableEditorOptions<R extends Record<string, unknown>> = {
   /** Prefix for element ids, e.g. "factors". */
@@ -42,11 +36,21 @@ export type TableEditorOptions<R extends Record<string, unknown>> = {
    * sets rows and name together through `apply`, in one study update.
    */
   setName?: { current: () => string; defaultName: string; apply(rows: R[], name: string): void };
+  /** The key of the row focus is in (a page shows that row's card beside the table). */
+  selected?: Signal<string | null>;
+  /** Tools shown above the table after the import tools (a group edit). */
+  extraTools?: HTMLElement;
+  /** A caption for the table. */
+  caption?: string;
 };
 
 const STYLE_ID = "table-editor-style";
 const CSS = `
-.table-editor { overflow-x: auto; }
+.table-editor .table-scroll { overflow-x: auto; }
+.table-editor tr.column-groups th { text-align: center; font-size: 0.78rem; color: #3f4650; border-bottom: 2px solid #c6ccd4; }
+.table-editor tr.column-groups th.group { background: #f1f4f8; }
+.table-editor tr.selected > * { background: #eef4fb; }
+.table-editor td.computed { color: #3f4650; white-space: nowrap; }
 .table-editor table { font-size: 0.84rem; }
 .table-editor input { font: inherit; font-size: 0.84rem; width: 5.5rem; padding: 0.1rem 0.25rem; }
 .table-editor input.wide { width: 16rem; }
@@ -85,7 +89,7 @@ function sameValue(a: unknown, b: unknown): boolean {
   return Object.is(a, b);
 }
 
-/** Builds the editor; the table is rebuilt only when rows are added or removed, so typing keeps focus. */
+/** Builds the editor: the table is a component tree (one component per row and cell), so a removed row takes its subscriptions with it. */
 export function tableEditor<R extends Record<string, unknown>>(options: TableEditorOptions<R>): HTMLElement {
   ensureStyle();
   const wrap = document.createElement("div");
@@ -95,129 +99,63 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
   status.setAttribute("aria-live", "polite");
 
   const defaultsByKey = computed(() => new Map(options.defaults().map((r) => [String(r[options.keyField]), r])));
-  const keys = computed(() => options.rows.value.map((r) => String(r[options.keyField])).join("\n"));
   const tableHolder = document.createElement("div");
-  let disposers: (() => void)[] = [];
-
-  const indexOf = (key: string) => options.rows.peek().findIndex((r) => String(r[options.keyField]) === key);
+  tableHolder.className = "table-scroll";
+  const keyOf = (r: R) => String(r[options.keyField]);
   const replaceRow = (key: string, row: R) => {
-    const i = indexOf(key);
+    const i = options.rows.peek().findIndex((r) => keyOf(r) === key);
     if (i < 0) return;
     const next = options.rows.peek().slice();
     next[i] = row;
     options.setRows(next);
   };
-
-  effect(() => {
-    const keyList = keys.value === "" ? [] : keys.value.split("\n");
-    for (const dispose of disposers) dispose();
-    disposers = [];
-    const table = document.createElement("table");
-    table.id = `${options.id}-table`;
-    const thead = document.createElement("thead");
-    const head = document.createElement("tr");
-    for (const c of options.columns) {
-      const th = document.createElement("th");
-      th.scope = "col";
-      th.textContent = c.unit ? `${c.label} (${c.unit})` : c.label;
-      head.append(th);
-    }
-    const actions = document.createElement("th");
-    actions.scope = "col";
-    actions.textContent = "State";
-    head.append(actions);
-    thead.append(head);
-    const tbody = document.createElement("tbody");
-    for (const key of keyList) tbody.append(rowElement(key));
-    table.append(thead, tbody);
-    tableHolder.replaceChildren(table);
-  });
-
-  function rowElement(key: string): HTMLTableRowElement {
-    const tr = document.createElement("tr");
-    tr.dataset.key = key;
-    const row = computed(() => options.rows.value.find((r) => String(r[options.keyField]) === key));
-    const base = computed(() => defaultsByKey.value.get(key));
-    for (const c of options.columns) {
-      const cell = document.createElement(c.field === options.keyField ? "th" : "td");
-      if (c.field === options.keyField) (cell as HTMLTableCellElement).scope = "row";
-      if (c.readOnly) {
-        disposers.push(effect(() => {
-          cell.textContent = String(row.value?.[c.field] ?? "");
-        }));
-        tr.append(cell);
-        continue;
-      }
-      const input = document.createElement("input");
-      input.type = "text";
-      input.id = `${options.id}-${key}-${c.field}`;
-      input.setAttribute("aria-label", `${c.label} of ${key}`);
-      if (c.kind === "number") input.inputMode = "decimal";
-      if (c.wide) input.className = "wide";
-      const message = document.createElement("div");
-      message.className = "cell-message";
-      message.id = `${input.id}-message`;
-      input.setAttribute("aria-describedby", message.id);
-      input.addEventListener("input", () => {
-        const current = row.peek();
-        if (!current) return;
-        const result = checkRowEdit(options.schema, current, c.field, input.value, c.kind);
-        cell.classList.toggle("invalid", !result.ok);
-        input.setAttribute("aria-invalid", result.ok ? "false" : "true");
-        message.textContent = result.ok ? "" : `${c.label}: ${result.message}`;
-        if (result.ok) replaceRow(key, result.row);
-      });
-      // Only this cell's own value re-runs its effect, so an invalid entry elsewhere in the row stays on screen.
-      const cellValue = computed(() => row.value?.[c.field]);
-      disposers.push(effect(() => {
-        const value = cellValue.value;
-        const original = base.value?.[c.field];
-        cell.classList.toggle("changed", base.value !== undefined && !sameValue(value, original));
-        // Keep what the user is typing while it is invalid; otherwise show the study's value.
-        if (cell.classList.contains("invalid") && document.activeElement === input) return;
-        const shown = value === undefined ? "" : String(value);
-        if (input.value !== shown && !(c.kind === "number" && Number(input.value) === value && input.value.trim() !== "")) input.value = shown;
-        cell.classList.remove("invalid");
-        message.textContent = "";
-      }));
-      // A row reset shows the study's value again even where an invalid entry was left.
-      input.addEventListener("refresh", () => {
-        const value = cellValue.peek();
-        input.value = value === undefined ? "" : String(value);
-        cell.classList.remove("invalid");
-        input.setAttribute("aria-invalid", "false");
-        message.textContent = "";
-      });
-      cell.append(input, message);
-      tr.append(cell);
-    }
-    const state = document.createElement("td");
-    const label = document.createElement("span");
-    label.className = "row-state";
-    const reset = button("Reset", () => {
-      const original = base.peek();
+  const edit = (key: string, field: string, text: string): EditOutcome => {
+    const current = options.rows.peek().find((r) => keyOf(r) === key);
+    const column = options.columns.find((c) => c.field === field);
+    if (!current || !column || (column.kind !== "number" && column.kind !== "text")) return { ok: false, message: "not editable" };
+    const result = checkRowEdit(options.schema, current, field as keyof R & string, text, column.kind);
+    if (!result.ok) return result;
+    replaceRow(key, result.row);
+    return { ok: true, value: result.row[field] };
+  };
+  const rowState = ({ key, row, refresh }: { key: string; row: R; refresh(): void }) => {
+    const base = defaultsByKey.value.get(key);
+    const changed = base !== undefined && options.columns.some((c) => c.kind !== "computed" && !sameValue(row[c.field], base[c.field]));
+    const reset = () => {
+      const original = defaultsByKey.peek().get(key);
       if (original) replaceRow(key, { ...original });
-      for (const input of tr.querySelectorAll("input")) input.dispatchEvent(new Event("refresh"));
-    });
-    reset.setAttribute("aria-label", `Reset ${key} to its default`);
-    const remove = button("Remove", () => {
-      options.setRows(options.rows.peek().filter((r) => String(r[options.keyField]) !== key));
-    });
-    remove.setAttribute("aria-label", `Remove ${key}`);
-    disposers.push(effect(() => {
-      const r = row.value;
-      const b = base.value;
-      const changed = b !== undefined && r !== undefined && options.columns.some((c) => !sameValue(r[c.field], b[c.field]));
-      tr.classList.toggle("row-changed", changed);
-      tr.classList.toggle("row-added", b === undefined);
-      label.textContent = b === undefined ? "added " : changed ? "changed " : "default";
-      reset.hidden = !changed;
-      remove.hidden = b !== undefined;
-    }));
-    state.append(label, reset, remove);
-    tr.append(state);
-    return tr;
-  }
+      refresh();
+    };
+    const remove = () => options.setRows(options.rows.peek().filter((r) => keyOf(r) !== key));
+    return h(
+      "td",
+      null,
+      h("span", { class: "row-state" }, base === undefined ? "added " : changed ? "changed " : "default"),
+      h("button", { type: "button", hidden: !changed, "aria-label": `Reset ${key} to its default`, onClick: reset }, "Reset"),
+      h("button", { type: "button", hidden: base !== undefined, "aria-label": `Remove ${key}`, onClick: remove }, "Remove"),
+    );
+  };
+  mountEditableTable<R>(tableHolder, {
+    tableId: `${options.id}-table`,
+    ...(options.caption ? { caption: options.caption } : {}),
+    rows: options.rows,
+    keyOf,
+    columns: options.columns,
+    keyField: options.keyField,
+    cellId: (key, _index, field) => `${options.id}-${key}-${field}`,
+    cellLabel: (row, column) => `${column.label} of ${keyOf(row)}`,
+    edit,
+    defaults: defaultsByKey,
+    messages: "cell",
+    rowAttributes: (key, row) => {
+      const base = defaultsByKey.value.get(key);
+      const changed = base !== undefined && options.columns.some((c) => c.kind !== "computed" && !sameValue(row[c.field], base[c.field]));
+      return { "data-key": key, class: base === undefined ? "row-added" : changed ? "row-changed" : "" };
+    },
+    rowTools: rowState,
+    toolsHeading: "State",
+    ...(options.selected ? { selected: options.selected, onRowFocus: (key: string) => ((options.selected as Signal<string | null>).value = key) } : {}),
+  });
 
   // Tools: add a row, reset all, import, export.
   const tools = document.createElement("div");
@@ -297,6 +235,6 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
     importText(detail.text, detail.name, detail.merge ? "merge" : "replace");
   });
 
-  wrap.append(tools, status, preview, tableHolder);
+  wrap.append(tools, ...(options.extraTools ? [options.extraTools] : []), status, preview, tableHolder);
   return wrap;
 }
