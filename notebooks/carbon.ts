@@ -17,11 +17,15 @@ import {
   controlGroup,
   tableEditor,
   textControl,
+  factorColumns,
+  provenanceCard,
+  groupEditTools,
+  benchmarkEditor,
+  trackCarbonEdits,
   gapNotice,
   missingFactorRows,
   studySignals,
   type Binding,
-  type EditorColumn,
 } from "../src/notebook";
 import { setIn } from "../src/study";
 import { tableGaps } from "../src/pipeline";
@@ -29,17 +33,18 @@ import {
   defaultFactorRows,
   factorRowsToCsv,
   parseFactorCsv,
+  readFactorFile,
   FactorRowSchema,
   MaterialIdSchema,
-  FACTOR_LIMITS,
   DEFAULT_CARBON_SETTINGS,
   DEFAULT_FACTOR_SET_NAME,
   CarbonSettingsSchema,
   type CarbonAssessment,
+  type CarbonSettings,
   type FactorRow,
   type TransportMode,
 } from "../src/carbon";
-import { carbonChartOptions, chartCaption, CARBON_METRICS, targetApplies, type CarbonMetric, type SchemeCarbon } from "../src/charts";
+import { carbonChartOptions, carbonApartChartOptions, carbonByElementChartOptions, chartCaption, CARBON_METRICS, targetApplies, type CarbonMetric, type SchemeCarbon } from "../src/charts";
 import * as v from "valibot";
 
 const { store, main } = startPage({
@@ -128,22 +133,22 @@ staticCell(
   })(),
 );
 
+// ── Benchmarks ──────────────────────────────────────────────────────────────────────────────
+const bands = computed(() => settings.value.benchmarks ?? []);
+staticCell(
+  main,
+  { id: "benchmarks", title: "Benchmark bands" },
+  benchmarkEditor(bands, (next) => {
+    store.study.value = setIn(store.study.value, [...path, "benchmarks"], next);
+  }),
+);
+
 // ── Factor table ────────────────────────────────────────────────────────────────────────────
-const L = FACTOR_LIMITS;
-const columns: EditorColumn<FactorRow>[] = [
-  { field: "material", label: "Material", kind: "text", readOnly: true },
-  { field: "label", label: "Label", kind: "text", wide: true },
-  { field: "a1a3KgCO2ePerKg", label: "A1–A3", kind: "number", unit: L.a1a3KgCO2ePerKg.unit },
-  { field: "densityKgPerM3", label: "Density", kind: "number", unit: L.densityKgPerM3.unit },
-  { field: "transportKmRoad", label: "Road", kind: "number", unit: "km" },
-  { field: "transportKmSea", label: "Sea", kind: "number", unit: "km" },
-  { field: "wasteRatePct", label: "Waste rate", kind: "number", unit: "%" },
-  { field: "endOfLifeKgCO2ePerKg", label: "C1–C4", kind: "number", unit: L.endOfLifeKgCO2ePerKg.unit },
-  { field: "moduleDKgCO2ePerKg", label: "Module D", kind: "number", unit: L.moduleDKgCO2ePerKg.unit },
-  { field: "biogenicKgCO2ePerKg", label: "Biogenic stored", kind: "number", unit: L.biogenicKgCO2ePerKg.unit },
-  { field: "source", label: "Source", kind: "text", wide: true },
-  { field: "notes", label: "Notes", kind: "text", wide: true },
-];
+const columns = factorColumns(settings);
+const selectedFactor = signal<string | null>(null);
+const setFactors = (next: FactorRow[]) => {
+  store.study.value = setIn(store.study.value, ["carbon", "factors"], next);
+};
 
 /** The factor set's name, shown in every caption and record; an import or merge renames it, and it can be edited. */
 const setNameControl = textControl(store.bind<string>([...path, "factorSetName"]), {
@@ -162,15 +167,17 @@ const factorEditor = tableEditor<FactorRow>({
   id: "factors",
   rowNoun: "material",
   rows: factors,
-  setRows(next) {
-    store.study.value = setIn(store.study.value, ["carbon", "factors"], next);
-  },
+  setRows: setFactors,
   defaults: defaultFactorRows,
   keyField: "material",
   columns,
   schema: FactorRowSchema,
   parseCsv: parseFactorCsv,
+  read: (text, name, current) => readFactorFile(text, current, name),
   toCsv: factorRowsToCsv,
+  selected: selectedFactor,
+  extraTools: groupEditTools(factors, setFactors),
+  caption: "Factors per kg of material as delivered, by life-cycle stage",
   csvFilename: "carbon-factors.csv",
   missingFor: missingFactorRows(() => designs.peek()),
   setName: {
@@ -203,10 +210,16 @@ const factorEditor = tableEditor<FactorRow>({
 
 staticCell(
   main,
-  { id: "factors", title: "Factor table" },
+  { id: "factors", title: "Factor table", className: "wide-cell" },
   (() => {
     const wrap = document.createElement("div");
-    wrap.append(setNameControl, factorEditor);
+    const side = document.createElement("div");
+    side.className = "factor-layout";
+    side.append(factorEditor, provenanceCard(selectedFactor, factors));
+    const hint = document.createElement("p");
+    hint.className = "control-hint";
+    hint.textContent = "Focus a row to see where its factor comes from. Import reads comma-, semicolon- or tab-separated files, decimal commas and common header names; a file with only some columns updates the rows it names, after a preview of every change.";
+    wrap.append(setNameControl, hint, side);
     return wrap;
   })(),
 );
@@ -214,6 +227,18 @@ staticCell(
 // ── Results ─────────────────────────────────────────────────────────────────────────────────
 const t = (kg: number) => fmt.one(kg / 1000);
 const perM2 = (x: number | undefined) => (x === undefined ? "–" : fmt.int(x));
+
+/** Where each scheme's counted carbon per m² stands against the bands of the settings' basis. */
+function bandLines(results: readonly SchemeCarbonResult[], s: CarbonSettings): string[] {
+  const list = (s.benchmarks ?? []).filter((b) => b.basis === s.areaBasis);
+  if (list.length === 0) return [];
+  return results.flatMap((r) => {
+    const value = r.carbon?.perM2.perM2?.counted;
+    if (value === undefined) return [];
+    const inside = list.filter((b) => value >= b.fromKgCO2ePerM2 && value < b.toKgCO2ePerM2).map((b) => `"${b.label}"`);
+    return [`${r.label}: ${fmt.int(value)} kgCO2e/m² of ${s.areaBasis.replace("-", " ")} — ${inside.length > 0 ? `in ${inside.join(" and ")}` : "outside every band"}.`];
+  });
+}
 
 reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, () => {
   const results = carbonBySchemes.value;
@@ -225,19 +250,7 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
       if (!r.carbon) return [r.label, r.error || r.reason, "", "", "", "", "", "", "", "", ""];
       const c = r.carbon;
       const mass = c.rows.reduce((sum, row) => sum + row.massKg, 0);
-      return [
-        r.label,
-        t(mass),
-        t(c.totals.a1a3),
-        s.countA4 ? t(c.totals.a4) : "not counted",
-        s.countA5 ? t(c.totals.a5) : "not counted",
-        s.countC ? t(c.totals.c) : "not counted",
-        t(c.totals.counted),
-        perM2(c.perM2UsableFloor.perM2?.counted),
-        perM2(c.perM2Plan.perM2?.counted),
-        t(c.totals.moduleD),
-        t(c.totals.biogenic),
-      ];
+      return [r.label, t(mass), t(c.totals.a1a3), s.countA4 ? t(c.totals.a4) : "not counted", s.countA5 ? t(c.totals.a5) : "not counted", s.countC ? t(c.totals.c) : "not counted", t(c.totals.counted), perM2(c.perM2UsableFloor.perM2?.counted), perM2(c.perM2Plan.perM2?.counted), t(c.totals.moduleD), t(c.totals.biogenic)];
     }),
     {
       caption: `Counted = ${results.find((r) => r.carbon)?.carbon?.modulesCounted.join(" + ") ?? "A1–A3"}; masses include the ${s.quantityAllowancePct} % quantity allowance. Module D and biogenic storage are shown apart, never netted.`,
@@ -247,7 +260,7 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
   const gaps = gapNotice(tableGaps(designs.value, { factors: factors.value }), "carbon-gaps");
   const notes = document.createElement("div");
   notes.className = "warnings";
-  const lines: string[] = [];
+  const lines: string[] = bandLines(results, s);
   for (const r of results) {
     if (r.carbon?.target) lines.push(`${r.label}: ${r.carbon.target.met ? "meets" : "exceeds"} the target of ${r.carbon.target.kgCO2ePerM2} kgCO2e/m² of ${s.areaBasis.replace("-", " ")} (${fmt.int(r.carbon.perM2.perM2?.counted ?? NaN)}).`);
     for (const w of r.carbon?.warnings ?? []) lines.push(`${r.label}: ${w}`);
@@ -260,22 +273,64 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
   return wrap;
 });
 
+// ── The last edit, before → after ────────────────────────────────────────────────────────────
+const lastEdit = trackCarbonEdits(computed(() => store.study.value.carbon), computed(() => carbonBySchemes.value.map((r) => ({ id: r.id, label: r.label, carbon: r.carbon }))));
+reactiveCell(main, { id: "last-edit", title: "What the last edit did" }, () => {
+  const edit = lastEdit.value;
+  if (!edit) return "Edit a factor or a setting: each scheme's carbon before and after the edit is shown here.";
+  const wrap = document.createElement("div");
+  const what = document.createElement("p");
+  what.id = "last-edit-what";
+  what.textContent = `Last edit: ${edit.what}.`;
+  const table = tableElement(
+    ["Scheme", "Before (kgCO2e/m² usable floor)", "After", "Change", "Before (tCO2e)", "After (tCO2e)"],
+    edit.schemes.map((e) => [e.label, perM2(e.beforePerM2 ?? undefined), perM2(e.afterPerM2 ?? undefined), e.beforePerM2 && e.afterPerM2 !== null ? `${e.afterPerM2 >= e.beforePerM2 ? "+" : "−"}${fmt.one(Math.abs((100 * (e.afterPerM2 - e.beforePerM2)) / e.beforePerM2))} %` : "–", e.beforeT === null ? "–" : fmt.one(e.beforeT), e.afterT === null ? "–" : fmt.one(e.afterT)]),
+    { caption: "Counted embodied carbon of every scheme just before and just after the last edit on this page", numeric: [false, true, true, true, true, true] },
+  );
+  table.id = "last-edit-table";
+  wrap.append(what, table);
+  return wrap;
+});
+
 const metric = signal<CarbonMetric>("per-m2-floor");
 const metricBinding: Binding<string> = { value: metric, set: (next) => (metric.value = next as CarbonMetric) };
+
+// ── Per structural element ───────────────────────────────────────────────────────────────────
+reactiveCell(main, { id: "carbon-elements", title: "Carbon per structural element" }, () => {
+  const results = carbonBySchemes.value.filter((r) => r.carbon);
+  if (results.length === 0) return null;
+  const wrap = document.createElement("div");
+  wrap.className = "element-tables";
+  for (const r of results) {
+    const c = r.carbon as CarbonAssessment;
+    const floor = c.perM2UsableFloor.areaM2;
+    wrap.append(
+      tableElement(
+        ["Element", "Mass (t)", "Counted (tCO2e)", "kgCO2e/m² usable floor", "Share"],
+        [...c.byElement].sort((a, b) => b.totals.counted - a.totals.counted).map((g) => [g.key, t(g.massKg), t(g.totals.counted), floor > 0 ? fmt.int(g.totals.counted / floor) : "–", c.totals.counted > 0 ? fmt.pct(g.totals.counted / c.totals.counted) : "–"]),
+        { caption: `${r.label}: counted carbon by element, largest first`, numeric: [false, true, true, true, true] },
+      ),
+    );
+  }
+  return wrap;
+});
+
 staticCell(main, { id: "chart-controls", title: "Charts" }, selectControl(metricBinding, { label: "Show", id: "carbonMetric", choices: CARBON_METRICS.map((m) => ({ value: m.value, label: m.label })) }));
 
 function chartInput(by: "module" | "material") {
   const schemes: SchemeCarbon[] = carbonBySchemes.value.flatMap((r) => (r.carbon ? [{ id: r.id, label: r.label, carbon: r.carbon }] : []));
   const s = settings.value;
   const targetNote = s.targetKgCO2ePerM2 !== null && !targetApplies(metric.value, s.areaBasis) ? ` · target (${s.areaBasis.replace("-", " ")} basis) not drawn on this measure` : "";
+  const bandNote = (s.benchmarks ?? []).length > 0 ? " · shaded: benchmark bands of this basis" : "";
   return {
     schemes,
     by,
     metric: metric.value,
     target: s.targetKgCO2ePerM2,
     targetBasis: s.areaBasis,
+    bands: s.benchmarks ?? [],
     title: by === "module" ? "Embodied carbon of each scheme by life-cycle module" : "Embodied carbon of each scheme by material",
-    caption: chartCaption(store.study.value, `counted ${schemes[0]?.carbon.modulesCounted.join(" + ") ?? "A1–A3"}, ${s.quantityAllowancePct} % quantity allowance${targetNote}`),
+    caption: chartCaption(store.study.value, `counted ${schemes[0]?.carbon.modulesCounted.join(" + ") ?? "A1–A3"}, ${s.quantityAllowancePct} % quantity allowance${targetNote}${bandNote}`),
   };
 }
 
@@ -288,6 +343,19 @@ reactiveCell(main, { id: "chart-material" }, () => {
   const input = chartInput("material");
   if (input.schemes.length === 0) return null;
   return chartFigure(carbonChartOptions(input), "carbon-by-material");
+});
+reactiveCell(main, { id: "chart-element" }, () => {
+  const input = chartInput("material");
+  if (input.schemes.length === 0) return null;
+  return chartFigure(carbonByElementChartOptions({ ...input, title: "Embodied carbon of each scheme by structural element", caption: input.caption }), "carbon-by-element");
+});
+reactiveCell(main, { id: "chart-apart" }, () => {
+  const input = chartInput("module");
+  if (input.schemes.length === 0) return null;
+  return chartFigure(
+    carbonApartChartOptions({ ...input, title: "Reported apart, never netted: module D and biogenic CO2 stored", caption: chartCaption(store.study.value, "module D (kgCO2e) below 0 is a benefit beyond the life cycle (recycling, reuse); biogenic CO2 (kg CO2, EN 16449) is held in the timber while it lasts") }),
+    "carbon-apart",
+  );
 });
 
 staticCell(

@@ -13,6 +13,17 @@ export type TransportMode = {
   source: string;
 };
 
+/** A benchmark band the consultant enters: a named range of kgCO2e per m² on a stated area basis (e.g. a client's or a published rating's band). */
+export type BenchmarkBand = {
+  label: string;
+  fromKgCO2ePerM2: number;
+  toKgCO2ePerM2: number;
+  basis: AreaBasis;
+};
+
+/** At most this many bands (a chart stays readable). */
+export const MAX_BENCHMARK_BANDS = 8;
+
 /** The floor or roof area carbon and cost are divided by (defined with the areas, in src/takeoff/). */
 export { AREA_BASES, type AreaBasis };
 
@@ -38,6 +49,11 @@ export type CarbonSettings = {
   targetKgCO2ePerM2: number | null;
   /** Name of the factor set, for captions. */
   factorSetName: string;
+  /**
+   * Benchmark bands (kgCO2e/m² on their own area basis). Optional, default none: a study saved
+   * before bands existed reads unchanged (no schema version step needed, nothing to migrate).
+   */
+  benchmarks?: BenchmarkBand[];
 };
 
 export const TransportModeSchema = v.object({
@@ -46,6 +62,22 @@ export const TransportModeSchema = v.object({
   wellToTankIncluded: flag(),
   source: textUpTo(300),
 });
+
+export const BenchmarkBandSchema = v.pipe(
+  v.object({
+    label: v.pipe(v.string(), v.trim(), v.minLength(1, () => "empty (expected a name for the band, e.g. \"good practice\")"), v.maxLength(60, (i) => `${JSON.stringify(i.input)} is too long (expected at most 60 characters)`)),
+    fromKgCO2ePerM2: numberIn(0, 100000, "kgCO2e/m²"),
+    toKgCO2ePerM2: numberIn(0, 100000, "kgCO2e/m²"),
+    basis: oneOf(AREA_BASES),
+  }),
+  v.forward(
+    v.check((b) => b.fromKgCO2ePerM2 < b.toKgCO2ePerM2, (i) => {
+      const b = i.input as BenchmarkBand;
+      return `from ${b.fromKgCO2ePerM2} is not below to ${b.toKgCO2ePerM2} (expected from < to)`;
+    }),
+    ["toKgCO2ePerM2"],
+  ),
+);
 
 export const CarbonSettingsSchema = v.object({
   countA4: flag(),
@@ -60,6 +92,7 @@ export const CarbonSettingsSchema = v.object({
   ),
   targetKgCO2ePerM2: v.nullable(numberIn(0, 100000, "kgCO2e/m²")),
   factorSetName: textUpTo(120),
+  benchmarks: v.optional(v.pipe(v.array(BenchmarkBandSchema, () => "expected a list of benchmark bands"), v.maxLength(MAX_BENCHMARK_BANDS, () => `more than ${MAX_BENCHMARK_BANDS} bands (expected at most ${MAX_BENCHMARK_BANDS})`)), () => []),
 });
 
 /**
@@ -91,4 +124,5 @@ export const DEFAULT_CARBON_SETTINGS: CarbonSettings = {
   ],
   targetKgCO2ePerM2: null,
   factorSetName: DEFAULT_FACTOR_SET_NAME,
+  benchmarks: [],
 };

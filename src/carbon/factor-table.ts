@@ -2,6 +2,7 @@ import * as v from "valibot";
 import { dataFileText } from "#data-files";
 import { numberIn, textUpTo, requiredText } from "../kernel/validate";
 import { parseSchemaCsv, rowsToCsv, type CsvColumn } from "../kernel/schema-csv";
+import { readTableForgiving, type ForgivingColumns, type ForgivingRead } from "./forgiving-csv";
 
 /**
  * One material's embodied-carbon factors, per kg of material as delivered. The modules follow
@@ -95,6 +96,34 @@ export const FACTOR_COLUMNS: readonly CsvColumn[] = [
   { column: "source", field: "source", kind: "text" },
   { column: "notes", field: "notes", kind: "text" },
 ];
+
+/** Header variants an import accepts for each factor column (compared after normaliseHeader: case, units in brackets, dashes and underscores ignored). */
+const FACTOR_HEADER_ALIASES: Readonly<Record<string, readonly string[]>> = {
+  material: ["material id", "id", "key", "material key", "material code"],
+  label: ["name", "material name", "description"],
+  a1a3KgCO2ePerKg: ["a1a3", "a1 a3", "a1 to a3", "a1 3", "product stage", "gwp a1 a3", "embodied carbon", "carbon factor", "ecf"],
+  densityKgPerM3: ["density", "rho", "density kg m3"],
+  transportKmRoad: ["road", "road km", "road distance", "distance by road", "transport road", "a4 road km"],
+  transportKmSea: ["sea", "sea km", "sea distance", "distance by sea", "transport sea", "ship km", "a4 sea km"],
+  wasteRatePct: ["waste", "waste rate", "waste rate pct", "wastage", "wastage rate", "site waste", "wr"],
+  endOfLifeKgCO2ePerKg: ["c1 c4", "c1c4", "end of life", "eol", "module c"],
+  moduleDKgCO2ePerKg: ["d", "module d", "beyond the system boundary", "benefits beyond the system boundary"],
+  biogenicKgCO2ePerKg: ["biogenic", "biogenic carbon", "biogenic co2", "biogenic stored", "carbon storage", "sequestered carbon"],
+  source: ["reference", "data source", "epd", "dataset"],
+  notes: ["note", "comment", "comments", "remarks"],
+};
+
+/** The factor columns with the header variants an import maps to them. */
+export const FACTOR_IMPORT_COLUMNS: ForgivingColumns = FACTOR_COLUMNS.map((c) => ({ ...c, aliases: FACTOR_HEADER_ALIASES[c.field] ?? [] }));
+
+/**
+ * Reads a factor file forgivingly (delimiter, decimal comma, header variants, partial columns) as
+ * an update of `current`.
+ * @throws CsvError naming every problem by line and column
+ */
+export function readFactorFile(text: string, current: readonly FactorRow[], fileLabel: string): ForgivingRead<FactorRow> {
+  return readTableForgiving(text, FACTOR_IMPORT_COLUMNS, FactorRowSchema as v.GenericSchema<unknown, FactorRow>, "material", current, fileLabel);
+}
 
 /**
  * Parses a factor table from CSV (the columns of FACTOR_COLUMNS, exactly).

@@ -8,6 +8,8 @@ export {
   MaterialIdSchema,
   FACTOR_LIMITS,
   FACTOR_COLUMNS,
+  FACTOR_IMPORT_COLUMNS,
+  readFactorFile,
   parseFactorCsv,
   factorRowsToCsv,
   defaultFactorRows,
@@ -17,6 +19,9 @@ export {
   type TransportMode,
   type AreaBasis,
   type CarbonSettings,
+  type BenchmarkBand,
+  BenchmarkBandSchema,
+  MAX_BENCHMARK_BANDS,
   AREA_BASES,
   TransportModeSchema,
   CarbonSettingsSchema,
@@ -48,3 +53,8 @@ export {
 // Table editing (pages' cell editors)
 export { checkRowEdit, type RowEditResult } from "./check-row-edit";
 export { mergeRows, importedSetName, type RowMerge, type FieldChange } from "./merge-rows";
+export { readTableForgiving, detectDelimiter, normaliseHeader, type ForgivingColumns, type ForgivingRead } from "./forgiving-csv";
+export { groupEditRows, type GroupEdit, type GroupEditResult } from "./group-edit";
+
+// Provenance of the bundled factors (cited values)
+export { FACTOR_PROVENANCE, provenanceOf, type FactorProvenance, type ProvenanceVerdict } from "./provenance";

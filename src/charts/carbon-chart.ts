@@ -1,16 +1,13 @@
 import * as Plot from "@observablehq/plot";
-import type { AreaBasis } from "../carbon/carbon-settings";
-import { PART_COLOURS } from "./part-colours";
-import { materialColour, moduleColour } from "./palette";
+import type { AreaBasis, BenchmarkBand } from "../carbon/carbon-settings";
+import { materialColour, moduleColour, SCHEME_COLOURS } from "./palette";
+import type { SchemeId } from "../schemes/types";
 import { APART_MODULES, CARBON_METRICS, carbonApartData, carbonByElementData, carbonByMaterialData, carbonByModuleData, carbonScale, COUNTED_MODULES, type CarbonBarDatum, type CarbonMetric, type SchemeCarbon } from "./carbon-chart-data";
-
-/** A benchmark band the consultant enters, kgCO2e/m² on a stated area basis. */
-export type BenchmarkBand = { label: string; fromKgCO2ePerM2: number; toKgCO2ePerM2: number; basis: AreaBasis };
 
 export type CarbonChartInput = {
   schemes: readonly SchemeCarbon[];
-  /** Stack by life-cycle module, by material or by structural element. */
-  by: "module" | "material" | "element";
+  /** Stack by life-cycle module or by material. */
+  by: "module" | "material";
   metric: CarbonMetric;
   /** Target on the settings' area basis, kgCO2e/m² (drawn when the metric is per m² of that basis). */
   target: number | null;
@@ -30,17 +27,14 @@ export function targetApplies(metric: CarbonMetric, basis: AreaBasis): boolean {
 }
 
 function stackData(input: CarbonChartInput): CarbonBarDatum[] {
-  if (input.by === "module") return carbonByModuleData(input.schemes, input.metric);
-  if (input.by === "material") return carbonByMaterialData(input.schemes, input.metric);
-  return carbonByElementData(input.schemes, input.metric);
+  return input.by === "module" ? carbonByModuleData(input.schemes, input.metric) : carbonByMaterialData(input.schemes, input.metric);
 }
 
-/** The colour scale of a stack: modules and materials keep their fixed colours on every page; elements take the part colours. */
+/** The colour scale of a stack: modules and materials keep their fixed colours on every page. */
 function stackColour(by: CarbonChartInput["by"], data: readonly CarbonBarDatum[]): Plot.ScaleOptions {
   if (by === "module") return { legend: true, domain: COUNTED_MODULES.map((m) => m.label), range: COUNTED_MODULES.map((m) => moduleColour(m.id)) };
   const parts = [...new Map(data.map((d) => [d.part, d.key ?? d.part])).entries()];
-  if (by === "material") return { legend: true, domain: parts.map(([part]) => part), range: parts.map(([, key]) => materialColour(key)) };
-  return { legend: true, domain: parts.map(([part]) => part), range: parts.map((_, i) => PART_COLOURS[i % PART_COLOURS.length] as string) };
+  return { legend: true, domain: parts.map(([part]) => part), range: parts.map(([, key]) => materialColour(key)) };
 }
 
 function bandMarks(input: CarbonChartInput): Plot.Markish[] {
@@ -111,10 +105,36 @@ export function carbonApartChartOptions(input: Pick<CarbonChartInput, "schemes" 
     marginLeft: 170,
     x: { label: axis, grid: true },
     y: { label: null, domain: input.schemes.map((s) => s.label) },
-    fy: { label: null, domain: APART_MODULES.map((m) => m.label) },
+    // The colour legend names the two panels; facet labels at the right would be cut off.
+    fy: { label: null, axis: null, domain: APART_MODULES.map((m) => m.label) },
     color: { legend: true, domain: APART_MODULES.map((m) => m.label), range: APART_MODULES.map((m) => moduleColour(m.id)) },
     marks: [
       Plot.barX(data, { x: "value", y: "scheme", fy: "part", fill: "part", title: (d: CarbonBarDatum) => `${d.scheme}, ${d.part}: ${d.value.toFixed(1)}` }),
+      Plot.ruleX([0]),
+    ],
+  };
+}
+
+/**
+ * Plot options for counted carbon per structural element: one panel per scheme, one bar per
+ * element (the take-off's elements), in the scheme's colour, in the metric's unit. Pure: no DOM.
+ */
+export function carbonByElementChartOptions(input: Pick<CarbonChartInput, "schemes" | "metric" | "title" | "caption" | "width">): Plot.PlotOptions {
+  // One bar per (scheme, element), grouped by scheme: element names differ between schemes, so a shared element axis would leave gaps.
+  const data = carbonByElementData(input.schemes, input.metric).map((d) => ({ ...d, bar: `${d.scheme} · ${d.part}` }));
+  const axis = CARBON_METRICS.find((m) => m.value === input.metric)?.axis ?? "";
+  const colourOf = new Map(input.schemes.map((s) => [s.label, SCHEME_COLOURS[s.id as SchemeId] ?? "#4d4d4d"]));
+  return {
+    title: input.title,
+    caption: input.caption,
+    width: input.width ?? 760,
+    height: 70 + 17 * data.length,
+    marginLeft: 300,
+    x: { label: axis, grid: true },
+    y: { label: null, domain: data.map((d) => d.bar) },
+    color: { legend: true, domain: [...colourOf.keys()], range: [...colourOf.values()] },
+    marks: [
+      Plot.barX(data, { x: "value", y: "bar", fill: "scheme", title: (d: CarbonBarDatum) => `${d.scheme}, ${d.part}: ${d.value.toFixed(1)}` }),
       Plot.ruleX([0]),
     ],
   };

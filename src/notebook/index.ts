@@ -18,3 +18,5 @@ export { tableEditor, type EditorColumn } from "./table-editor";
 export { gapNotice, missingFactorRows, missingRateRows } from "./gap-notice";
 export { riskInputsEditor, ensureRiskStyle } from "./risk-inputs-editor";
 export { studyDetailsEditor, studyDetailItems, describeChangedAt } from "./study-details";
+export { factorColumns, provenanceCard, groupEditTools, benchmarkEditor, trackCarbonEdits, describeCarbonEdit, type LastEdit } from "./carbon-editors";
+export { mountEditableTable, unmountEditableTable, type TableColumn, type EditableTableProps, type EditOutcome } from "./editable-table";

@@ -6,7 +6,7 @@ import type * as v from "valibot";
 import { h } from "preact";
 import { computed, type ReadonlySignal, type Signal } from "@preact/signals-core";
 import { downloadText } from "./download";
-import { checkRowEdit } from "../carbon";
+import { checkRowEdit, type ForgivingRead } from "../carbon";
 import { tableImport, type RowGap } from "./table-import";
 import { mountEditableTable, type TableColumn, type EditOutcome } from "./editable-table";
 
@@ -25,6 +25,8 @@ export type TableEditorOptions<R extends Record<string, unknown>> = {
   columns: readonly EditorColumn<R>[];
   schema: v.GenericSchema<unknown, R>;
   parseCsv(text: string, fileLabel: string): R[];
+  /** A forgiving reader for imports (delimiter, decimal comma, header variants, partial columns). */
+  read?: (text: string, fileLabel: string, current: readonly R[]) => ForgivingRead<R>;
   toCsv(rows: readonly R[]): string;
   csvFilename: string;
   /** A new row for a key the user typed; a string is a message (the key is refused). */
@@ -51,9 +53,32 @@ const CSS = `
 .table-editor tr.column-groups th.group { background: #f1f4f8; }
 .table-editor tr.selected > * { background: #eef4fb; }
 .table-editor td.computed { color: #3f4650; white-space: nowrap; }
+.factor-layout { display: grid; grid-template-columns: minmax(0, 1fr) 19rem; gap: 1rem; align-items: start; }
+@media (max-width: 60rem) { .factor-layout { grid-template-columns: minmax(0, 1fr); } }
+.provenance-aside { position: sticky; top: 0.5rem; }
+.provenance-card { border: 1px solid #c6ccd4; border-left: 5px solid #2f7d32; padding: 0.25rem 0.75rem 0.5rem; background: #fbfcfd; font-size: 0.84rem; }
+.provenance-card.differs { border-left-color: #9a5b00; }
+.provenance-card.unsupported { border-left-color: #a11d1d; }
+.provenance-card h3 { font-size: 0.95rem; margin: 0.4rem 0; }
+.provenance-card .verdict { font-weight: 600; }
+.provenance-card dl { display: grid; grid-template-columns: 7rem minmax(0, 1fr); gap: 0.2rem 0.5rem; margin: 0.4rem 0; }
+.provenance-card dt { font-weight: 600; color: #3f4650; }
+.provenance-card dd { margin: 0; overflow-wrap: anywhere; }
+.provenance-card .row-source { color: #3f4650; font-size: 0.8rem; }
+.provenance-badge { font-size: 0.74rem; padding: 0.05rem 0.35rem; border-radius: 3px; white-space: nowrap; }
+.provenance-badge.cited { background: #e3f1e4; color: #1f5e22; }
+.provenance-badge.differs { background: #fbefd9; color: #6e4100; }
+.provenance-badge.unsupported { background: #f8e1e1; color: #8a1c1c; }
+.group-edit { display: flex; flex-wrap: wrap; gap: 0.5rem 0.75rem; align-items: end; border: 1px solid #d8dde3; margin: 0.5rem 0; padding: 0.25rem 0.75rem 0.5rem; }
+.group-edit label { display: flex; flex-direction: column; font-size: 0.85rem; }
+.group-edit #group-status { flex-basis: 100%; }
+.element-tables { display: grid; grid-template-columns: repeat(auto-fit, minmax(min(100%, 32rem), 1fr)); gap: 0.5rem 2rem; }
+.element-tables table { font-size: 0.84rem; }
 .table-editor table { font-size: 0.84rem; }
 .table-editor input { font: inherit; font-size: 0.84rem; width: 5.5rem; padding: 0.1rem 0.25rem; }
 .table-editor input.wide { width: 16rem; }
+.table-editor td:nth-child(2) input:not(.wide) { width: 10rem; }
+.table-editor tbody th { min-width: 7rem; }
 .table-editor td.changed input { background: #fff7d6; }
 .table-editor tr.row-changed th { border-left: 4px solid #c98a00; }
 .table-editor tr.row-added th { border-left: 4px solid #1d4e89; }
@@ -66,6 +91,7 @@ const CSS = `
 .import-ok { color: #3a7d32; font-size: 0.85rem; }
 .merge-preview { border-left: 4px solid #c98a00; background: #fffbea; padding: 0.25rem 0.75rem 0.6rem; margin: 0.5rem 0 0.75rem; font-size: 0.88rem; }
 .merge-preview ul { margin: 0.25rem 0 0.5rem; }
+.merge-preview ul.import-notes { color: #3f4650; }
 `;
 
 function ensureStyle(): void {
@@ -198,6 +224,7 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
       columns: options.columns,
       current: () => options.rows.peek(),
       parseCsv: options.parseCsv,
+      ...(options.read ? { read: options.read } : {}),
       apply: applyNamed,
       ...(options.missingFor ? { missingFor: options.missingFor } : {}),
       ...(options.setName ? { currentName: options.setName.current } : {}),

@@ -3,7 +3,7 @@
 // current table as a partial update after a preview listing every change. Nothing is applied
 // until the user applies it; the table set's name (provenance for captions) changes in the same update.
 import { CsvError, listProblems } from "../catalogue";
-import { mergeRows, importedSetName, type RowMerge } from "../carbon";
+import { mergeRows, importedSetName, type RowMerge, type ForgivingRead } from "../carbon";
 import { messageOf } from "../kernel/errors";
 
 /** A row the schemes need that a table lacks, with the schemes that need it. */
@@ -16,6 +16,8 @@ export type ImportOptions<R extends Record<string, unknown>> = {
   columns: readonly { field: keyof R & string; label: string }[];
   current: () => R[];
   parseCsv(text: string, fileLabel: string): R[];
+  /** A forgiving reader (delimiter, decimal comma, header variants, partial columns); parseCsv is used without it. */
+  read?: (text: string, fileLabel: string, current: readonly R[]) => ForgivingRead<R>;
   /** Rows the schemes need that these rows lack. */
   missingFor?: (rows: readonly R[]) => RowGap[];
   /** Applies rows with the name of the set they form (one study update). */
@@ -69,10 +71,26 @@ export function tableImport<R extends Record<string, unknown>>(options: ImportOp
     status.textContent = text;
   };
 
-  function showMerge(rows: R[], name: string): void {
+  /** "How the file was read" list (delimiter, decimal comma, mapped and ignored headers), or nothing. */
+  function notesList(notes: readonly string[]): HTMLElement[] {
+    if (notes.length === 0) return [];
+    const list = document.createElement("ul");
+    list.id = `${options.id}-import-notes`;
+    list.className = "import-notes";
+    for (const note of notes) {
+      const li = document.createElement("li");
+      li.textContent = note;
+      list.append(li);
+    }
+    const head = document.createElement("p");
+    head.textContent = "How the file was read:";
+    return [head, list];
+  }
+
+  function showMerge(rows: R[], name: string, notes: readonly string[] = []): void {
     const merge = mergeRows(options.current(), rows, options.keyField);
     const heading = document.createElement("p");
-    heading.textContent = `Merge ${name} into the current table as a partial update (rows not in the file are kept):`;
+    heading.textContent = `Merge ${name} into the current table as a partial update (rows not in the file are kept). Changes:`;
     const list = document.createElement("ul");
     list.id = `${options.id}-merge-changes`;
     for (const line of mergeLines(merge, labelOf)) {
@@ -93,7 +111,7 @@ export function tableImport<R extends Record<string, unknown>>(options: ImportOp
       preview.replaceChildren();
       say(true, `${name} was not merged; nothing changed.`);
     });
-    preview.replaceChildren(heading, list, apply, cancel);
+    preview.replaceChildren(...notesList(notes), heading, list, apply, cancel);
     preview.hidden = false;
     say(true, nothing ? `${name} changes nothing in the current table.` : `Preview of ${name}: nothing is applied until you apply it.`);
   }
@@ -102,24 +120,28 @@ export function tableImport<R extends Record<string, unknown>>(options: ImportOp
     preview.hidden = true;
     preview.replaceChildren();
     let rows: R[];
+    let notes: string[] = [];
+    let partial = false;
     try {
-      rows = options.parseCsv(text, name);
+      if (options.read) ({ rows, notes, partial } = options.read(text, name, options.current()));
+      else rows = options.parseCsv(text, name);
     } catch (error) {
       if (error instanceof CsvError) say(false, `${name} was not imported; nothing changed. ${error.problems.length} problem${error.problems.length === 1 ? "" : "s"}:\n${listProblems(error.problems, MAX_LISTED).join("\n")}`);
       else say(false, `${name} was not imported; nothing changed: ${messageOf(error)}`);
       return;
     }
-    if (mode === "merge") return showMerge(rows, name);
+    // A file with only some columns can only update rows the table has: always previewed as a merge.
+    if (mode === "merge" || partial) return showMerge(rows, name, notes);
     const gaps = options.missingFor?.(rows) ?? [];
     if (gaps.length > 0) {
       const names = gaps.slice(0, MAX_LISTED).map((g) => `${g.key} (needed by ${g.neededBy.join(", ")})`);
       if (gaps.length > MAX_LISTED) names.push(`… and ${gaps.length - MAX_LISTED} more`);
       say(false, `${name} was not imported; nothing changed. It lacks ${gaps.length} ${options.rowNoun}${gaps.length === 1 ? "" : "s"} the schemes need:\n${names.join("\n")}\nIf it is meant as a partial update, merge it into the current table instead:`);
-      status.append(" ", button("Preview the merge…", `${options.id}-merge-offer`, () => showMerge(rows, name)));
+      status.append(" ", button("Preview the merge…", `${options.id}-merge-offer`, () => showMerge(rows, name, notes)));
       return;
     }
     options.apply(rows, importedSetName(name, today()));
-    say(true, `Imported ${rows.length} rows from ${name}.`);
+    say(true, `Imported ${rows.length} rows from ${name}.${notes.length > 0 ? ` ${notes.join("; ")}.` : ""}`);
   }
 
   return { importText, preview };
