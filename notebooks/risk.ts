@@ -1,9 +1,11 @@
-// Risk page: the study's uncertain inputs, a seeded Monte Carlo run in a Web Worker (progress,
-// cancel), and the results: P10–P90 ranges, probability of being lowest, pairwise table, tornado
-// and rank-correlation charts.
+// Risk page: the study's uncertain inputs (grouped, filterable), a seeded Monte Carlo run in a Web
+// Worker (progress, cancel; refused while an input is invalid), and the results in words first:
+// one sentence, the likely ranges (1 in 10 to 9 in 10), how often each scheme is lowest, head to
+// head, and which inputs move each scheme's result most (only the inputs it depends on). Results
+// are marked out of date as soon as an input changes.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, numberControl, controlGroup, signal, fmt, tableElement, type Binding } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, numberControl, controlGroup, signal, computed, effect, fmt, tableElement, studySignals, inputUsedBy, type Binding } from "../src/notebook";
 import { riskRangeChart, riskLowestChart, riskTornadoChart, riskRankChart, chartCaption } from "../src/charts";
 import { checkRiskInputs, RISK_LIMITS, RISK_METRICS, RISK_METRIC_LABELS, type RiskResult, type Tornado, type RiskMetric } from "../src/risk";
 import type { RiskWorkerReply, RiskWorkerRequest } from "../src/risk/risk-worker-messages";
@@ -15,7 +17,7 @@ const { store, main } = startPage({
   id: "risk",
   demoStudy,
   intro:
-    "How sure is the ranking? Give the uncertain inputs a range; the whole pipeline runs many times with seeded random draws and shows each scheme's P10–P90 range, how often it is lowest in carbon and in cost, and which inputs matter most.",
+    "How sure is the ranking? Say how far each uncertain input may go; the whole pipeline runs many times with seeded random draws and shows each scheme's likely range, how often it is lowest in carbon and in cost, and which inputs move its result most.",
 });
 ensureRiskStyle();
 
@@ -23,7 +25,11 @@ type Run = { study: Study; result: RiskResult; tornado: Tornado[]; samplingMs: n
 const run = signal<Run | null>(null);
 const status = signal<{ state: "idle" | "running" | "done" | "cancelled" | "failed"; text: string; fraction: number }>({ state: "idle", text: "Not run yet.", fraction: 0 });
 
-staticCell(main, { id: "risk-inputs", title: "Uncertain inputs" }, riskInputsEditor(store));
+const pending = signal<ReadonlyMap<string, string>>(new Map());
+staticCell(main, { id: "risk-inputs", title: "Uncertain inputs" }, riskInputsEditor(store, pending));
+
+/** Why Run is refused now: every refused entry in the table and every problem of the study's inputs, by input. */
+const blockers = computed(() => [...new Set([...pending.value.values(), ...checkRiskInputs(store.study.value).problems.map((p) => p.message)])]);
 
 // Run controls: N and seed are part of the study (risk.samples and seed).
 let worker: Worker | null = null;
@@ -49,12 +55,23 @@ statusText.setAttribute("role", "status");
 const line = document.createElement("div");
 line.className = "risk-progress";
 line.append(runButton, cancelButton, bar, statusText);
+const blocked = document.createElement("p");
+blocked.id = "risk-blocked";
+blocked.className = "control-message";
+blocked.setAttribute("role", "alert");
+effect(() => {
+  const why = blockers.value;
+  blocked.hidden = why.length === 0;
+  blocked.textContent = why.length === 0 ? "" : `Run is refused until ${why.length === 1 ? "this input is" : "these inputs are"} valid: ${why.slice(0, 4).join("; ")}${why.length > 4 ? `; and ${why.length - 4} more` : ""}.`;
+  if (!worker) runButton.disabled = why.length > 0;
+});
 runControls.append(
   controlGroup("Monte Carlo", [
-    numberControl(samples as Binding<number>, { id: "risk-samples", label: "Samples N", unit: "", min: RISK_LIMITS.samples.min, max: RISK_LIMITS.samples.max, step: 100, integer: true, hint: "Every sample runs the whole pipeline (designs are drawn once per design sample)." }),
+    numberControl(samples as Binding<number>, { id: "risk-samples", label: "Number of draws", unit: "", min: RISK_LIMITS.samples.min, max: RISK_LIMITS.samples.max, step: 100, integer: true, hint: "Every sample runs the whole pipeline (designs are drawn once per design sample)." }),
     numberControl(seed as Binding<number>, { id: "risk-seed", label: "Seed", unit: "", min: 0, max: 2 ** 31 - 1, step: 1, integer: true, hint: "The same study and seed give the same numbers." }),
   ]),
   line,
+  blocked,
 );
 staticCell(main, { id: "risk-run", title: "Run" }, runControls);
 
@@ -76,15 +93,15 @@ function finish(): void {
   worker?.terminate();
   worker = null;
   observer?.disconnect();
-  runButton.disabled = false;
+  runButton.disabled = blockers.peek().length > 0;
   cancelButton.disabled = true;
 }
 
 runButton.addEventListener("click", () => {
   const study = store.study.value;
-  const problems = checkRiskInputs(study).problems;
+  const problems = blockers.peek();
   if (problems.length > 0) {
-    status.value = { state: "failed", text: `Not run: ${problems.slice(0, 3).map((p) => p.message).join("; ")}`, fraction: 0 };
+    status.value = { state: "failed", text: `Not run: ${problems.slice(0, 3).join("; ")}`, fraction: 0 };
     return;
   }
   finish();
@@ -129,17 +146,49 @@ reactiveCell(main, { id: "risk-status-cell" }, () => {
 
 // Results.
 const schemeLabel = (r: RiskResult, id: SchemeId) => r.schemes.find((s) => s.id === id)?.label ?? id;
-const stale = (r: Run) => (r.study !== store.study.value ? "The study has changed since this run: run again to update. " : "");
+/** True as soon as any input of the study changes after the run. */
+const outOfDate = computed(() => run.value !== null && run.value.study !== store.study.value);
 const money = (x: number) => fmt.int(x);
+const pct = (p: number) => `${Math.round(100 * p)} %`;
 
-reactiveCell(main, { id: "risk-results", title: "Results" }, () => {
+/** The result in one sentence: which scheme is cheapest and which lowest in carbon, in how many draws, and the runner-up. */
+function riskVerdict(res: RiskResult): string {
+  const part = (key: "pLowestCost" | "pLowestCarbon", what: string) => {
+    const ranked = [...res.schemes].sort((a, b) => b[key] - a[key]);
+    const [first, second] = ranked;
+    if (!first || first[key] === 0) return null;
+    const next = second && second[key] > 0 ? ` (next: ${second.label}, ${pct(second[key])})` : "";
+    return `the ${first.label.toLowerCase()} is ${what} in ${pct(first[key])} of draws${next}`;
+  };
+  const parts = [part("pLowestCost", "cheapest"), part("pLowestCarbon", "lowest in carbon")].filter((p): p is string => p !== null);
+  if (parts.length === 0) return `No scheme was feasible in any of the ${fmt.int(res.samples)} draws.`;
+  const sentence = `Over ${fmt.int(res.samples)} draws, ${parts.join(", and ")}.`;
+  return sentence.charAt(0).toUpperCase() + sentence.slice(1);
+}
+
+const resultsCells: HTMLElement[] = [];
+effect(() => {
+  const stale = outOfDate.value; // read first, so the effect follows it even before the cells exist
+  for (const cell of resultsCells) cell.classList.toggle("out-of-date", stale);
+});
+
+resultsCells.push(reactiveCell(main, { id: "risk-results", title: "Results" }, () => {
   const r = run.value;
   if (!r) return "Run the analysis to see the ranges.";
   const res = r.result;
   const wrap = document.createElement("div");
+  const staleNote = document.createElement("p");
+  staleNote.id = "risk-stale";
+  staleNote.className = "risk-stale";
+  staleNote.setAttribute("role", "status");
+  staleNote.hidden = !outOfDate.value;
+  staleNote.textContent = "Out of date: an input has changed since this run. Run again to update every result below.";
+  const verdict = document.createElement("p");
+  verdict.id = "risk-verdict";
+  verdict.className = "risk-verdict";
+  verdict.textContent = riskVerdict(res);
   const note = document.createElement("p");
-  if (stale(r)) note.className = "risk-stale";
-  note.textContent = `${stale(r)}${res.samples} samples, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost in ${res.currency}, estimate class ${res.estimateClass.label}. ${res.coverage}`;
+  note.textContent = `${res.samples} draws, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost in ${res.currency}, estimate class ${res.estimateClass.label}. ${res.coverage}`;
   const rows = res.schemes.flatMap((s) =>
     RISK_METRICS.map((metric) => {
       const m = s.metrics[metric];
@@ -147,12 +196,12 @@ reactiveCell(main, { id: "risk-results", title: "Results" }, () => {
       return [s.label, RISK_METRIC_LABELS[metric], m?.deterministic == null ? "–" : f(m.deterministic), m ? f(m.p10) : "–", m ? f(m.p50) : "–", m ? f(m.p90) : "–", m ? `${f(m.mean)} ± ${fmt.sig3(m.seMean)}` : "–", fmt.pct(s.pFeasible)];
     }),
   );
-  const table = tableElement(["scheme", "metric", "study value", "P10", "P50", "P90", "mean ± s.e.", "feasible"], rows, { caption: "Per scheme: the deterministic value beside the Monte Carlo percentiles (over the samples in which the scheme is feasible)", numeric: [false, false, true, true, true, true, true, true] });
+  const table = tableElement(["scheme", "result", "with the study's values", "1 in 10 below (P10)", "middle (P50)", "9 in 10 below (P90)", "average ± its sampling error", "feasible in"], rows, { caption: "Per scheme: the result with the study's own values beside the likely range over the draws in which the scheme is feasible", numeric: [false, false, true, true, true, true, true, true] });
   table.id = "risk-results-table";
   const lowest = tableElement(
-    ["scheme", "P(lowest carbon)", "P(cheapest)"],
-    res.schemes.map((s) => [s.label, `${fmt.two(s.pLowestCarbon)} ± ${fmt.two(s.seLowestCarbon)}`, `${fmt.two(s.pLowestCost)} ± ${fmt.two(s.seLowestCost)}`]),
-    { caption: `Probability of being lowest among the schemes feasible in a sample (${res.samplesWithFeasible} samples had at least one)`, numeric: [false, true, true] },
+    ["scheme", "lowest carbon in", "cheapest in"],
+    res.schemes.map((s) => [s.label, `${pct(s.pLowestCarbon)} ± ${pct(s.seLowestCarbon)}`, `${pct(s.pLowestCost)} ± ${pct(s.seLowestCost)}`]),
+    { caption: `Share of draws in which each scheme is lowest among the schemes feasible in that draw (${res.samplesWithFeasible} draws had at least one)`, numeric: [false, true, true] },
   );
   const warnings = document.createElement("ul");
   for (const w of res.warnings.slice(0, 12)) {
@@ -160,70 +209,77 @@ reactiveCell(main, { id: "risk-results", title: "Results" }, () => {
     li.textContent = w;
     warnings.append(li);
   }
-  wrap.append(note, table, lowest, warnings);
+  wrap.append(staleNote, verdict, note, table, lowest, warnings);
   return wrap;
-});
+}).element);
 
-reactiveCell(main, { id: "risk-ranges", title: "Ranges (P10–P90)" }, () => {
+resultsCells.push(reactiveCell(main, { id: "risk-ranges", title: "Likely range, 1 in 10 to 9 in 10 (P10–P90)" }, () => {
   const r = run.value;
   if (!r) return null;
   const wrap = document.createElement("div");
   for (const metric of RISK_METRICS) {
-    wrap.append(chartFigure(riskRangeChart(r.result, metric, { title: `${RISK_METRIC_LABELS[metric]}: P10–P90 of ${r.result.samples} samples, P50 and the study value`, caption: chartCaption(r.study, `risk: ${r.result.samples} samples, seed ${r.result.seed}`) }), `risk-range-${metric}`));
+    wrap.append(chartFigure(riskRangeChart(r.result, metric, { title: `${RISK_METRIC_LABELS[metric]}: likely range of ${r.result.samples} draws, the middle and the study's value`, caption: chartCaption(r.study, `risk: ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-range-${metric}`));
   }
   return wrap;
-});
+}).element);
 
-reactiveCell(main, { id: "risk-lowest", title: "Probability of being lowest" }, () => {
+resultsCells.push(reactiveCell(main, { id: "risk-lowest", title: "How often each scheme is lowest" }, () => {
   const r = run.value;
   if (!r) return null;
-  return chartFigure(riskLowestChart(r.result, { title: "Probability of the lowest carbon and the lowest cost, among the feasible schemes", caption: chartCaption(r.study, `risk: ${r.result.samples} samples, seed ${r.result.seed}; whiskers ±1 standard error`) }), "risk-lowest");
-});
+  return chartFigure(riskLowestChart(r.result, { title: "How often each scheme has the lowest carbon and the lowest cost, among the feasible schemes", caption: chartCaption(r.study, `risk: ${r.result.samples} draws, seed ${r.result.seed}; whiskers: ± one sampling error`) }), "risk-lowest");
+}).element);
 
-reactiveCell(main, { id: "risk-pairwise", title: "Pairwise: P(row beats column)" }, () => {
+resultsCells.push(reactiveCell(main, { id: "risk-pairwise", title: "Head to head: how often the row's scheme is lower than the column's" }, () => {
   const r = run.value;
   if (!r) return null;
   const res = r.result;
   const wrap = document.createElement("div");
   for (const metric of ["carbonKgCO2ePerM2Floor", "costPerM2Floor"] as const) {
     const ids = res.schemes.map((s) => s.id);
-    const rows = ids.map((a) => [schemeLabel(res, a), ...ids.map((b) => (a === b ? "–" : fmt.two(res.pairwise.find((p) => p.metric === metric && p.a === a && p.b === b)?.pABeatsB ?? Number.NaN)))]);
-    wrap.append(tableElement(["", ...ids.map((id) => schemeLabel(res, id))], rows, { caption: `${RISK_METRIC_LABELS[metric]}: probability that the row's scheme is lower than the column's (samples where both are feasible)` }));
+    const rows = ids.map((a) => [schemeLabel(res, a), ...ids.map((b) => (a === b ? "–" : pct(res.pairwise.find((p) => p.metric === metric && p.a === a && p.b === b)?.pABeatsB ?? Number.NaN)))]);
+    wrap.append(tableElement(["", ...ids.map((id) => schemeLabel(res, id))], rows, { caption: `${RISK_METRIC_LABELS[metric]}: share of draws in which the row's scheme is lower than the column's (draws where both are feasible)` }));
   }
   return wrap;
-});
+}).element);
 
+const { schemes: schemeSignals } = studySignals(store);
 const sensitivityScheme = signal<SchemeId | "">("");
-reactiveCell(main, { id: "risk-sensitivity", title: "Sensitivity: tornado and rank correlation" }, () => {
+/** The inputs a scheme's result depends on (its options, the factor and rate rows of its take-off, and the shared inputs). */
+function inputsUsed(study: Study, scheme: SchemeId): Set<string> {
+  const takeoff = schemeSignals.find((s) => s.model.id === scheme)?.design.value.takeoff ?? [];
+  return new Set(study.risk.inputs.filter((i) => inputUsedBy(i, scheme, takeoff)).map((i) => i.id));
+}
+
+function schemePicker(r: Run, ids: readonly SchemeId[], chosen: SchemeId): HTMLElement {
+  const label = document.createElement("label");
+  label.htmlFor = "risk-scheme";
+  label.textContent = "Scheme ";
+  const select = document.createElement("select");
+  select.id = "risk-scheme";
+  for (const id of ids) select.append(new Option(schemeLabel(r.result, id), id));
+  select.value = chosen;
+  select.addEventListener("change", () => (sensitivityScheme.value = select.value as SchemeId));
+  label.append(select);
+  return label;
+}
+
+resultsCells.push(reactiveCell(main, { id: "risk-sensitivity", title: "Which inputs move the result most" }, () => {
   const r = run.value;
   if (!r) return null;
   const ids = r.result.schemes.map((s) => s.id);
   const chosen = ids.includes(sensitivityScheme.value as SchemeId) ? (sensitivityScheme.value as SchemeId) : ids[0];
   if (!chosen) return "No scheme was evaluated.";
   const wrap = document.createElement("div");
-  const label = document.createElement("label");
-  label.htmlFor = "risk-scheme";
-  label.textContent = "Scheme ";
-  const select = document.createElement("select");
-  select.id = "risk-scheme";
-  for (const id of ids) {
-    const option = document.createElement("option");
-    option.value = id;
-    option.textContent = schemeLabel(r.result, id);
-    select.append(option);
-  }
-  select.value = chosen;
-  select.addEventListener("change", () => (sensitivityScheme.value = select.value as SchemeId));
-  label.append(select);
-  wrap.append(label);
+  wrap.append(schemePicker(r, ids, chosen));
   const name = schemeLabel(r.result, chosen);
-  const caption = (extra: string) => chartCaption(r.study, extra);
+  const only = inputsUsed(r.study, chosen);
+  const caption = (extra: string) => chartCaption(r.study, `${extra}; only the ${only.size} inputs ${name.toLowerCase()}'s result depends on are listed`);
   for (const metric of ["carbonKgCO2ePerM2Floor", "costPerM2Floor"] as const) {
     const tornado = r.tornado.find((t) => t.scheme === chosen && t.metric === metric);
-    if (tornado) wrap.append(chartFigure(riskTornadoChart(tornado, r.result.currency, { title: `${name}: ${RISK_METRIC_LABELS[metric]} with each input at its low and high end`, caption: caption("one input at a time, the others at the study's values") }), `risk-tornado-${chosen}-${metric}`));
+    if (tornado) wrap.append(chartFigure(riskTornadoChart(tornado, r.result.currency, { only, title: `${name}: ${RISK_METRIC_LABELS[metric]} with one input at a time at its least and its most`, caption: caption("the other inputs at the study's values; dashed: the result with the study's values") }), `risk-one-at-a-time-${chosen}-${metric}`));
   }
   for (const metric of RISK_METRICS as readonly RiskMetric[]) {
-    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { title: `${name}: rank correlation of each input with ${RISK_METRIC_LABELS[metric]}`, caption: caption(`Spearman ρ over ${r.result.samples} samples, seed ${r.result.seed}; inputs of one group are drawn together, so they show the same ρ whether or not this scheme uses them`) }), `risk-rank-${chosen}-${metric}`));
+    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { only, title: `${name}: how closely ${RISK_METRIC_LABELS[metric].toLowerCase()} follows each input when all vary together`, caption: caption(`rank correlation over ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-follows-${chosen}-${metric}`));
   }
   return wrap;
-});
+}).element);

@@ -25,14 +25,14 @@ export function riskLowestChart(result: RiskResult, common: RiskChartCommon): Pl
     height: 110 + 34 * Math.max(1, labels.length) * 2,
     marginLeft: 150,
     marginRight: 110,
-    x: { label: "Probability of being lowest (fraction of samples)", domain: [0, 1], grid: true, percent: false },
+    x: { label: "Probability of being lowest (% of draws)", domain: [0, 100], grid: true },
     y: { label: null, domain: labels },
     fy: { label: null, domain: ["Lowest carbon", "Cheapest"] },
     color: { domain: labels, range: result.schemes.map((s) => SCHEME_COLOURS[s.id]) },
     marks: [
-      Plot.barX(data, { x: "p", y: "scheme", fy: "what", fill: "scheme", tip: true }),
-      Plot.ruleY(data, { x1: (d: (typeof data)[number]) => Math.max(0, d.p - d.se), x2: (d: (typeof data)[number]) => Math.min(1, d.p + d.se), y: "scheme", fy: "what", stroke: "#1b1f24" }),
-      Plot.text(data, { x: "p", y: "scheme", fy: "what", text: (d: (typeof data)[number]) => d.p.toFixed(2), dx: 6, textAnchor: "start", fontSize: 10 }),
+      Plot.barX(data, { x: (d: (typeof data)[number]) => 100 * d.p, y: "scheme", fy: "what", fill: "scheme", tip: true }),
+      Plot.ruleY(data, { x1: (d: (typeof data)[number]) => 100 * Math.max(0, d.p - d.se), x2: (d: (typeof data)[number]) => 100 * Math.min(1, d.p + d.se), y: "scheme", fy: "what", stroke: "#1b1f24" }),
+      Plot.text(data, { x: (d: (typeof data)[number]) => 100 * d.p, y: "scheme", fy: "what", text: (d: (typeof data)[number]) => `${Math.round(100 * d.p)} %`, dx: 6, textAnchor: "start", fontSize: 10 }),
       Plot.ruleX([0]),
     ],
   };

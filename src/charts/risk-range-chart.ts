@@ -33,7 +33,7 @@ export function riskRangeChart(result: RiskResult, metric: RiskMetric, common: R
   const det = data.filter((d) => d.deterministic !== null);
   return {
     title: common.title,
-    caption: `Bars P10–P90, tick P50, ring the study's own value. ${common.caption}`,
+    caption: `Bar: the likely range, 1 in 10 to 9 in 10 (P10–P90); tick: the middle (P50); ring: the study's own value. ${common.caption}`,
     width: common.width ?? 640,
     height: 70 + 40 * Math.max(1, data.length),
     marginLeft: 150,
@@ -41,7 +41,7 @@ export function riskRangeChart(result: RiskResult, metric: RiskMetric, common: R
     y: { label: null, domain: data.map((d) => d.scheme) },
     color: { domain: data.map((d) => d.scheme), range: data.map((d) => SCHEME_COLOURS[d.id]) },
     marks: [
-      Plot.barX(data, { x1: "p10", x2: "p90", y: "scheme", fill: "scheme", fillOpacity: 0.55, insetTop: 8, insetBottom: 8, tip: true, title: (d: (typeof data)[number]) => `${d.scheme}\nP10 ${d.p10.toPrecision(3)} · P50 ${d.p50.toPrecision(3)} · P90 ${d.p90.toPrecision(3)}` }),
+      Plot.barX(data, { x1: "p10", x2: "p90", y: "scheme", fill: "scheme", fillOpacity: 0.55, insetTop: 8, insetBottom: 8, tip: true, title: (d: (typeof data)[number]) => `${d.scheme}\n1 in 10 below ${d.p10.toPrecision(3)} · middle ${d.p50.toPrecision(3)} · 9 in 10 below ${d.p90.toPrecision(3)}` }),
       Plot.tickX(data, { x: "p50", y: "scheme", stroke: "#1b1f24", strokeWidth: 2, insetTop: 4, insetBottom: 4 }),
       Plot.dot(det, { x: "deterministic", y: "scheme", r: 5, stroke: "#1b1f24", fill: "white", strokeWidth: 1.5 }),
     ],

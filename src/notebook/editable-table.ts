@@ -60,6 +60,8 @@ export type EditableTableProps<R> = {
   visible?: ReadonlySignal<(row: R) => boolean>;
   /** Called when focus enters a row (the provenance card follows it). */
   onRowFocus?: (key: string) => void;
+  /** Told after every entry: the message of a refused entry, or null once the cell's entry is applied. */
+  onEntry?: (key: string, field: string, message: string | null) => void;
   /** The key of the row to mark as selected. */
   selected?: ReadonlySignal<string | null>;
 };
@@ -97,6 +99,7 @@ function Cell<R>(props: { table: EditableTableProps<R>; column: TableColumn<R>; 
     // mid-typing) or, when refused, while the field keeps the value it was typed against.
     draft.value = outcome.ok ? { text, against: outcome.value, epoch: props.epoch.peek(), message: "" } : { text, against: value, epoch: props.epoch.peek(), message: outcome.message };
     if (table.messages !== "cell") props.messageSink.value = outcome.ok ? "" : outcome.message;
+    table.onEntry?.(rowKey, column.field, outcome.ok ? null : outcome.message);
   };
   const common = {
     id,

@@ -16,7 +16,7 @@ export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";
 export { tableEditor, type EditorColumn } from "./table-editor";
 export { gapNotice, missingFactorRows, missingRateRows } from "./gap-notice";
-export { riskInputsEditor, ensureRiskStyle } from "./risk-inputs-editor";
+export { riskInputsEditor, ensureRiskStyle, inputUsedBy, inputKind, SHAPE_WORDS, INPUT_KINDS, type PendingEntries } from "./risk-inputs-editor";
 export { studyDetailsEditor, studyDetailItems, describeChangedAt } from "./study-details";
 export { factorColumns, provenanceCard, groupEditTools, benchmarkEditor, trackCarbonEdits, describeCarbonEdit, type LastEdit } from "./carbon-editors";
 export { mountEditableTable, unmountEditableTable, type TableColumn, type EditableTableProps, type EditOutcome } from "./editable-table";

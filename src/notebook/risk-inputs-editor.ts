@@ -5,7 +5,7 @@
 // an invalid edit shows its message in the row and changes nothing. Inputs are grouped by kind and
 // can be filtered.
 import { h } from "preact";
-import { computed, signal, effect, type ReadonlySignal } from "@preact/signals-core";
+import { computed, signal, effect, type ReadonlySignal, type Signal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { setIn } from "../study";
 import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, type UncertainInput } from "../risk";
@@ -27,6 +27,8 @@ const CSS = `
 .risk-progress progress { width: 18rem; height: 1rem; }
 .risk-stale { color: #8a5a00; font-weight: 600; }
 .risk-verdict { font-size: 1.05rem; font-weight: 600; margin: 0.25rem 0 0.75rem; }
+.cell.out-of-date .figure, .cell.out-of-date table, .cell.out-of-date .risk-verdict { opacity: 0.45; }
+.cell.out-of-date > h2::after { content: " — out of date"; color: #8a5a00; font-weight: 600; }
 `;
 
 export function ensureRiskStyle(): void {
@@ -146,8 +148,24 @@ function filterBar(kind: ReturnType<typeof signal<string>>, words: ReturnType<ty
   return bar;
 }
 
-/** The editable inputs table with its filter, reset button and summary line. */
-export function riskInputsEditor(store: StudyStore): HTMLElement {
+/** Entries typed in the table and refused (not applied), by input id and field: Run is refused while there is one. */
+export type PendingEntries = Signal<ReadonlyMap<string, string>>;
+
+/**
+ * Which inputs a scheme's result can depend on: its own options, the factor and rate rows its
+ * take-off names, and every input of the brief and of the carbon and cost settings.
+ */
+export function inputUsedBy(input: UncertainInput, schemeId: string, takeoff: readonly { material: string | null; costItem: string }[]): boolean {
+  const [head, second, third] = input.path;
+  if (head === "schemes") return second === schemeId;
+  const selector = typeof third === "object" && third !== null ? (third as Record<string, string>) : null;
+  if (head === "carbon" && second === "factors" && selector?.material) return takeoff.some((r) => r.material === selector.material);
+  if (head === "cost" && second === "rates" && selector?.item) return takeoff.some((r) => r.costItem === selector.item);
+  return true;
+}
+
+/** The editable inputs table with its filter, reset button and summary line; refused entries are kept in `pending`. */
+export function riskInputsEditor(store: StudyStore, pending: PendingEntries = signal(new Map())): HTMLElement {
   ensureRiskStyle();
   const wrap = document.createElement("div");
   const tools = document.createElement("div");
@@ -159,6 +177,7 @@ export function riskInputsEditor(store: StudyStore): HTMLElement {
   reset.addEventListener("click", () => {
     const study = store.study.value;
     store.replace(setIn(study, ["risk", "inputs"], defaultRiskSettings(study).inputs));
+    pending.value = new Map();
   });
   const summary = document.createElement("span");
   effect(() => {
@@ -192,6 +211,12 @@ export function riskInputsEditor(store: StudyStore): HTMLElement {
     rowAttributes: (key) => ({ "data-input": key }),
     keyField: "label",
     visible,
+    onEntry: (key, field, message) => {
+      const next = new Map(pending.peek());
+      if (message === null) next.delete(`${key}\u0000${field}`);
+      else next.set(`${key}\u0000${field}`, message);
+      pending.value = next;
+    },
   });
   wrap.append(tools, filterBar(kind, words, count), holder);
   return wrap;

@@ -72,3 +72,68 @@ describe("risk page", () => {
     await page.close();
   });
 });
+
+describe("risk page in our own words (issue 14)", () => {
+  it("an invalid input refuses Run and says which; fixing it lets Run go", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/risk.html`);
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    expect(await page.locator("#risk-run").isEnabled()).toBe(true);
+    const before = await page.inputValue("#risk-low-0");
+    await page.fill("#risk-low-0", "999");
+    await page.press("#risk-low-0", "Enter");
+    await expect.poll(() => page.locator("#risk-blocked").textContent()).toMatch(/^Run is refused until this input is valid: input "snow": low 999 is outside its factor range/);
+    expect(await page.locator("#risk-run").isDisabled()).toBe(true);
+    await page.fill("#risk-low-0", before);
+    await page.press("#risk-low-0", "Enter");
+    await expect.poll(() => page.locator("#risk-run").isEnabled()).toBe(true);
+    expect(await page.locator("#risk-blocked").isHidden()).toBe(true);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("one sentence states the result; a change to any input marks the results out of date; the sensitivity lists only inputs the scheme uses", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/risk.html`);
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    await page.fill("#risk-samples", "60");
+    await page.click("#risk-run");
+    await page.waitForSelector("#risk-verdict", { timeout: 60_000 });
+    const verdict = (await page.locator("#risk-verdict").textContent()) ?? "";
+    expect(verdict).toMatch(/^Over 60 draws, the .+ is cheapest in \d+ % of draws/);
+    // The sentence's scheme and share are the table's largest "cheapest in".
+    const rows = await page.locator("#cell-risk-results table").nth(1).locator("tbody tr").evaluateAll((trs) => trs.map((tr) => [...tr.children].map((c) => c.textContent ?? "")));
+    const best = rows.map((r) => ({ label: r[0] ?? "", p: Number((r[2] ?? "").split(" %")[0]) })).sort((a, b) => b.p - a.p)[0];
+    expect(verdict.toLowerCase()).toContain(`the ${best?.label.toLowerCase()} is cheapest in ${best?.p} % of draws`);
+    expect(await page.locator("#risk-stale").isHidden()).toBe(true);
+    // The chosen scheme's charts list none of another scheme's options.
+    const scheme = await page.inputValue("#risk-scheme");
+    const others = await page.locator("#risk-inputs-table tbody tr").evaluateAll((trs, id) => trs.filter((tr) => { const path = tr.querySelector(".path")?.textContent ?? ""; return path.startsWith("schemes.") && !path.startsWith(`schemes.${id}.`); }).map((tr) => tr.querySelector("th")?.firstChild?.textContent ?? ""), scheme);
+    expect(others.length).toBeGreaterThan(0);
+    const labels = await page.locator("#cell-risk-sensitivity figure").first().locator("[aria-label='y-axis tick label'] text").allTextContents();
+    expect(labels.length).toBeGreaterThan(0);
+    for (const label of labels) expect(others).not.toContain(label);
+    await page.fill("#risk-samples", "80");
+    await page.press("#risk-samples", "Enter");
+    await expect.poll(() => page.locator("#risk-stale").isVisible()).toBe(true);
+    expect(await page.locator("#cell-risk-ranges").getAttribute("class")).toMatch(/out-of-date/);
+    expect(await page.locator("#cell-risk-inputs").innerText()).toMatch(/least/);
+    expect(await page.locator("#cell-risk-inputs").innerText()).not.toMatch(/Beta-PERT|tornado/i);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("inputs can be filtered by kind and by words", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/risk.html`);
+    await page.waitForSelector("#risk-inputs-table tbody tr");
+    const all = await page.locator("#risk-inputs-table tbody tr").count();
+    await page.selectOption("#risk-filter-kind", "Carbon factors and settings");
+    await expect.poll(() => page.locator("#risk-inputs-table tbody tr").count()).toBeLessThan(all);
+    for (const text of await page.locator("#risk-inputs-table tbody tr .kind").allTextContents()) expect(text).toBe("Carbon factors and settings");
+    await page.selectOption("#risk-filter-kind", "all");
+    await page.fill("#risk-filter-words", "snow");
+    await expect.poll(() => page.locator("#risk-inputs-table tbody tr").count()).toBeGreaterThan(0);
+    for (const text of await page.locator("#risk-inputs-table tbody tr th").allTextContents()) expect(text.toLowerCase()).toContain("snow");
+    expect(await page.locator("#risk-filter-count").textContent()).toMatch(new RegExp(`of ${all} inputs shown`));
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
