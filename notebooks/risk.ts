@@ -120,7 +120,7 @@ runButton.addEventListener("click", () => {
       const mainThreadLongestMs = longest;
       finish();
       run.value = { study, result: reply.result, tornado: reply.tornado, samplingMs: reply.samplingMs, totalMs: reply.totalMs, progressMessages: reply.progressMessages, mainThreadLongestMs };
-      status.value = { state: "done", text: `Done: ${reply.result.samples} samples in ${fmt.one(reply.samplingMs / 1000)} s (tornado included: ${fmt.one(reply.totalMs / 1000)} s), ${reply.progressMessages} progress updates; longest main-thread task ${fmt.int(mainThreadLongestMs)} ms.`, fraction: 1 };
+      status.value = { state: "done", text: `Done: ${reply.result.samples} samples in ${fmt.one(reply.samplingMs / 1000)} s (with the one-at-a-time swings: ${fmt.one(reply.totalMs / 1000)} s), ${reply.progressMessages} progress updates; longest main-thread task ${fmt.int(mainThreadLongestMs)} ms.`, fraction: 1 };
     } else {
       finish();
       status.value = { state: "failed", text: `The run failed: ${reply.message}`, fraction: 0 };
@@ -273,13 +273,13 @@ resultsCells.push(reactiveCell(main, { id: "risk-sensitivity", title: "Which inp
   wrap.append(schemePicker(r, ids, chosen));
   const name = schemeLabel(r.result, chosen);
   const only = inputsUsed(r.study, chosen);
-  const caption = (extra: string) => chartCaption(r.study, `${extra}; only the ${only.size} inputs ${name.toLowerCase()}'s result depends on are listed`);
+  const caption = (extra: string) => chartCaption(r.study, `${extra}; only the ${only.size} inputs the result of the ${name} depends on are listed`);
   for (const metric of ["carbonKgCO2ePerM2Floor", "costPerM2Floor"] as const) {
     const tornado = r.tornado.find((t) => t.scheme === chosen && t.metric === metric);
     if (tornado) wrap.append(chartFigure(riskTornadoChart(tornado, r.result.currency, { only, title: `${name}: ${RISK_METRIC_LABELS[metric]} with one input at a time at its least and its most`, caption: caption("the other inputs at the study's values; dashed: the result with the study's values") }), `risk-one-at-a-time-${chosen}-${metric}`));
   }
   for (const metric of RISK_METRICS as readonly RiskMetric[]) {
-    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { only, title: `${name}: how closely ${RISK_METRIC_LABELS[metric].toLowerCase()} follows each input when all vary together`, caption: caption(`rank correlation over ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-follows-${chosen}-${metric}`));
+    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { only, title: `${name}: how closely the result follows each input — ${RISK_METRIC_LABELS[metric]} when all vary together`, caption: caption(`rank correlation over ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-follows-${chosen}-${metric}`));
   }
   return wrap;
 }).element);

@@ -17,6 +17,8 @@ const CSS = `
 .risk-inputs table { font-size: 0.82rem; }
 .risk-inputs input, .risk-inputs select { font: inherit; font-size: 0.82rem; padding: 0.1rem 0.25rem; width: 6.5rem; }
 .risk-inputs select { width: auto; }
+.risk-inputs thead th { text-align: left; vertical-align: bottom; }
+.risk-inputs td[id^="risk-range-"] { white-space: nowrap; }
 .risk-inputs td.invalid input, .risk-inputs td.invalid select { border: 2px solid #a11d1d; }
 .risk-inputs .row-message { color: #a11d1d; font-size: 0.78rem; max-width: 18rem; }
 .risk-inputs .path { font-family: ui-monospace, monospace; font-size: 0.74rem; color: #5a6270; }
@@ -55,9 +57,9 @@ export function inputKind(input: UncertainInput): InputKind {
 
 /** How likely values between the ends are, in words (the sampling shapes keep their ids in the study). */
 export const SHAPE_WORDS: Readonly<Record<(typeof DISTRIBUTION_KINDS)[number], string>> = {
-  pert: "most often near the study value, tapering smoothly",
-  triangular: "most often near the study value, tapering evenly",
-  uniform: "any value between the ends equally likely",
+  pert: "peak at study value, smooth",
+  triangular: "peak at study value, straight",
+  uniform: "flat: all equally likely",
 };
 
 const show = (x: number) => String(Number(x.toPrecision(4)));

@@ -78,7 +78,10 @@ const CSS = `
 .table-editor input { font: inherit; font-size: 0.84rem; width: 5.5rem; padding: 0.1rem 0.25rem; }
 .table-editor input.wide { width: 16rem; }
 .table-editor td:nth-child(2) input:not(.wide) { width: 10rem; }
-.table-editor tbody th { min-width: 7rem; }
+.table-editor tbody th { min-width: 7rem; position: sticky; left: 0; background: #fff; z-index: 1; }
+.table-editor tr.selected > th { background: #eef4fb; }
+@media (max-width: 48rem) { .table-editor td:nth-child(2) input:not(.wide) { width: 7rem; } .table-editor tbody th { min-width: 5.5rem; font-size: 0.78rem; } }
+#cell-factors input#factorSetName { max-width: 100%; box-sizing: border-box; }
 .table-editor td.changed input { background: #fff7d6; }
 .table-editor tr.row-changed th { border-left: 4px solid #c98a00; }
 .table-editor tr.row-added th { border-left: 4px solid #1d4e89; }
