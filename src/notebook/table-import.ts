@@ -56,6 +56,22 @@ export function mergeLines<R extends Record<string, unknown>>(merge: RowMerge<R>
   return listed;
 }
 
+/** "How the file was read" list (delimiter, decimal comma, mapped and ignored headers), or nothing. */
+function notesList(id: string, notes: readonly string[]): HTMLElement[] {
+  if (notes.length === 0) return [];
+  const list = document.createElement("ul");
+  list.id = `${id}-import-notes`;
+  list.className = "import-notes";
+  for (const note of notes) {
+    const li = document.createElement("li");
+    li.textContent = note;
+    list.append(li);
+  }
+  const head = document.createElement("p");
+  head.textContent = "How the file was read:";
+  return [head, list];
+}
+
 /** The import status line and merge preview of a table editor; returns the function that imports a file's text. */
 export function tableImport<R extends Record<string, unknown>>(options: ImportOptions<R>, status: HTMLElement): { importText(text: string, name: string, mode: "replace" | "merge"): void; preview: HTMLElement } {
   const preview = document.createElement("div");
@@ -70,22 +86,6 @@ export function tableImport<R extends Record<string, unknown>>(options: ImportOp
     else status.setAttribute("role", "alert");
     status.textContent = text;
   };
-
-  /** "How the file was read" list (delimiter, decimal comma, mapped and ignored headers), or nothing. */
-  function notesList(notes: readonly string[]): HTMLElement[] {
-    if (notes.length === 0) return [];
-    const list = document.createElement("ul");
-    list.id = `${options.id}-import-notes`;
-    list.className = "import-notes";
-    for (const note of notes) {
-      const li = document.createElement("li");
-      li.textContent = note;
-      list.append(li);
-    }
-    const head = document.createElement("p");
-    head.textContent = "How the file was read:";
-    return [head, list];
-  }
 
   function showMerge(rows: R[], name: string, notes: readonly string[] = []): void {
     const merge = mergeRows(options.current(), rows, options.keyField);
@@ -111,7 +111,7 @@ export function tableImport<R extends Record<string, unknown>>(options: ImportOp
       preview.replaceChildren();
       say(true, `${name} was not merged; nothing changed.`);
     });
-    preview.replaceChildren(...notesList(notes), heading, list, apply, cancel);
+    preview.replaceChildren(...notesList(options.id, notes), heading, list, apply, cancel);
     preview.hidden = false;
     say(true, nothing ? `${name} changes nothing in the current table.` : `Preview of ${name}: nothing is applied until you apply it.`);
   }
