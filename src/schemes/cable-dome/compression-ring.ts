@@ -17,6 +17,8 @@ export interface RingDemand {
   /** Steel yield strength for a steel box ring, Pa. */
   yieldPa: number;
   concreteClass?: ConcreteClass;
+  /** Factor on the bare ring's critical force: 1 for cable pull normal to the ring (3EI/r³), 1.5 for a pull that stays directed to the centre (4.5EI/r³); default 1. */
+  bareRingFactor?: number;
 }
 
 export interface RingDesign {
@@ -53,12 +55,12 @@ export const RING_CREEP_RATIO = 1.0;
 export function designCompressionRing(d: RingDemand): RingDesign | null {
   const N = Math.abs(d.compressionN);
   const perimeterM = 2 * Math.PI * d.radiusM;
-  for (let b = 0.3; b <= 8.0001; b += 0.05) {
+  for (let b = 0.3; b <= 8.0001; b += 0.01) {
     if (d.material === "steel") {
       const t = b / 30;
       const area = b * b - (b - 2 * t) ** 2;
       const second = (b ** 4 - (b - 2 * t) ** 4) / 12;
-      const critical = ringBucklingForceN(STEEL_E_PA * second, d.radiusM, d.foundationNPerM2, d.spokes).forceN;
+      const critical = (d.foundationNPerM2 > 0 ? 1 : (d.bareRingFactor ?? 1)) * ringBucklingForceN(STEEL_E_PA * second, d.radiusM, d.foundationNPerM2, d.spokes).forceN;
       const chi = bucklingReduction(Math.sqrt((area * d.yieldPa) / critical), "b");
       const resistance = chi * area * d.yieldPa;
       if (resistance >= N) {
@@ -81,7 +83,7 @@ export function designCompressionRing(d: RingDemand): RingDesign | null {
     const second = (depth * b ** 3) / 12;
     const modulus = (depth * b * b) / 6;
     const stiffness = (0.3 / (1 + 0.5 * RING_CREEP_RATIO)) * (props.ecmPa / 1.2) * second;
-    const critical = ringBucklingForceN(stiffness, d.radiusM, d.foundationNPerM2, d.spokes).forceN;
+    const critical = (d.foundationNPerM2 > 0 ? 1 : (d.bareRingFactor ?? 1)) * ringBucklingForceN(stiffness, d.radiusM, d.foundationNPerM2, d.spokes).forceN;
     if (N >= critical) continue;
     const squash = area * (1 - RING_REBAR_RATIO) * concreteDesignStrengthPa(props.fckPa) + area * RING_REBAR_RATIO * rebarDesignStrengthPa();
     const l0 = Math.PI * Math.sqrt(stiffness / critical);

@@ -13,7 +13,16 @@ export interface CableDomeLayout {
   hoops: number;
   /** Radial bay length (a − r_0)/(n + 1), m. */
   bayM: number;
+  /** Height of the compression ring above the brief's eaves, m (the cap springs from the ring). */
+  ringRaiseM: number;
+  /** Height of the eaves line the truss heights are measured from, above the floor, m. */
+  baseM: number;
+  /** Diagonal rise per bay asked for (the feet may be shortened to keep the floor). */
+  postHeightRatio: number;
 }
+
+/** The least rise of a diagonal over its bay, as a share of the bay (the truss needs every diagonal to rise outwards; common practice, no source). */
+export const MIN_DIAGONAL_RISE_RATIO = 0.05;
 
 /** Perimeter spacing of the ridges the automatic truss count aims at, m (common practice for fabric panels, no source). */
 export const AUTO_RIDGE_SPACING_M = 12;
@@ -24,18 +33,29 @@ export function autoTrussCount(spanM: number, maxSpacingM = AUTO_RIDGE_SPACING_M
   return Math.max(12, 2 * Math.ceil((Math.PI * spanM) / 2 / spacing));
 }
 
-/** Automatic number of hoops: one per 27.5 m of radius (the middle of the 20–35 m common practice, no source), 1 to 8. */
+/**
+ * Radius per hoop the automatic count centres on, m: with the feet kept above the clear height the
+ * lightest dome here has about one hoop per 55 m of radius (measured 40–250 m at the default brief;
+ * the 20–35 m of common practice, no source, is for domes whose outer hoops hang low).
+ */
+export const AUTO_RADIUS_PER_HOOP_M = 55;
+
+/** Automatic number of hoops: one per AUTO_RADIUS_PER_HOOP_M of radius, 1 to 8. */
 export function autoHoopCount(spanM: number): number {
-  return Math.min(8, Math.max(1, Math.round(spanM / 2 / 27.5)));
+  return Math.min(8, Math.max(1, Math.round(spanM / 2 / AUTO_RADIUS_PER_HOOP_M)));
 }
 
 /**
- * Geometry of a cable dome: the post heads lie on the roof's spherical cap (brief rise over the
- * eaves); posts stand at equal radial bays between the central ring (radius ratio × a) and the
- * compression ring at the eaves; each post is long enough that the diagonal from its foot rises by
- * postHeightRatio × bay to the head of the next post (or to the ring).
+ * Geometry of a cable dome: the compression ring stands `ringRaiseM` above the brief's eaves and the
+ * post heads lie on the roof's spherical cap (brief rise) springing from it; posts stand at equal
+ * radial bays between the central ring (radius ratio × a) and the compression ring. Each post is
+ * long enough that the diagonal from its foot rises by postHeightRatio × bay to the head of the
+ * next post (or to the ring) — but no foot hangs below the brief's clear height (the floor stays
+ * usable: the post is shortened), unless the diagonal to the next head could then not rise by
+ * MIN_DIAGONAL_RISE_RATIO × bay (then the foot drops just enough, and the floor under it is lost).
+ * Heights are above the eaves line.
  */
-export function cableDomeLayout(brief: Brief, trussesOption: number, hoopsOption: number, centralRingRatio: number, postHeightRatio: number, maxRidgeSpacingM = AUTO_RIDGE_SPACING_M): CableDomeLayout {
+export function cableDomeLayout(brief: Brief, trussesOption: number, hoopsOption: number, centralRingRatio: number, postHeightRatio: number, ringRaiseM = 0, maxRidgeSpacingM = AUTO_RIDGE_SPACING_M): CableDomeLayout {
   const cap = sphericalCap(brief.spanM, brief.riseM);
   const a = cap.baseRadiusM;
   const trusses = trussesOption > 0 ? trussesOption : autoTrussCount(brief.spanM, maxRidgeSpacingM);
@@ -43,10 +63,32 @@ export function cableDomeLayout(brief: Brief, trussesOption: number, hoopsOption
   const r0 = centralRingRatio * a;
   const bayM = (a - r0) / (hoops + 1);
   const radiiM = Array.from({ length: hoops + 1 }, (_, i) => r0 + i * bayM);
-  const topM = radiiM.map((r) => capHeightAt(cap, r));
-  const headAt = (i: number) => (i < radiiM.length ? (topM[i] as number) : 0);
-  const bottomM = radiiM.map((_, i) => Math.min(headAt(i + 1), headAt(i)) - postHeightRatio * bayM);
-  return { cap, trusses, hoops, bayM, truss: { trusses, radiiM, topM, bottomM, ringRadiusM: a, ringHeightM: 0 } };
+  const topM = radiiM.map((r) => ringRaiseM + capHeightAt(cap, r));
+  const headAt = (i: number) => (i < radiiM.length ? (topM[i] as number) : ringRaiseM);
+  const floorLevelM = brief.minClearHeightM - brief.eavesHeightM;
+  const bottomM = radiiM.map((_, i) => {
+    const next = Math.min(headAt(i + 1), headAt(i));
+    return Math.min(Math.max(next - postHeightRatio * bayM, floorLevelM), next - MIN_DIAGONAL_RISE_RATIO * bayM);
+  });
+  return { cap, trusses, hoops, bayM, ringRaiseM, baseM: brief.eavesHeightM, postHeightRatio, truss: { trusses, radiiM, topM, bottomM, ringRadiusM: a, ringHeightM: ringRaiseM } };
+}
+
+/**
+ * The soffit for the usable floor, heights above the floor: under the central drum its lower ring;
+ * then each diagonal rising from a foot to the next head, and at each hoop the post's foot; the
+ * last diagonal rises to the compression ring.
+ */
+export function cableDomeSoffit(layout: CableDomeLayout): [number, number][] {
+  const { radiiM, topM, bottomM, ringRadiusM, ringHeightM } = layout.truss;
+  const e = layout.baseM;
+  const points: [number, number][] = [[0, e + (bottomM[0] as number)], [radiiM[0] as number, e + (bottomM[0] as number)]];
+  for (let i = 1; i <= radiiM.length; i++) {
+    const r = i < radiiM.length ? (radiiM[i] as number) : ringRadiusM;
+    const head = i < radiiM.length ? (topM[i] as number) : ringHeightM;
+    points.push([r * (1 - 1e-9), e + head]);
+    if (i < radiiM.length) points.push([r, e + (bottomM[i] as number)]);
+  }
+  return points;
 }
 
 /**
@@ -62,20 +104,6 @@ export function cableDomeNodalLoads(layout: CableDomeLayout, pressurePa: number)
   const topN = radiiM.map((_, i) => (pressurePa * Math.PI * ((edges[i + 1] as number) ** 2 - (edges[i] as number) ** 2)) / N);
   const outer = edges[edges.length - 1] as number;
   return { loads: { topN, bottomN: radiiM.map(() => 0) }, toRingN: (pressurePa * Math.PI * (ringRadiusM ** 2 - outer ** 2)) / N };
-}
-
-/** Height of the lowest structure above the eaves at plan radius r: the line joining the post feet, then the last diagonal to the ring (safe-sided). */
-export function cableDomeUndersideM(layout: CableDomeLayout, rM: number): number {
-  const { radiiM, bottomM, ringRadiusM, ringHeightM } = layout.truss;
-  const xs = [...radiiM, ringRadiusM];
-  const zs = [...bottomM, ringHeightM];
-  if (rM <= (xs[0] as number)) return zs[0] as number;
-  for (let i = 1; i < xs.length; i++) {
-    const x0 = xs[i - 1] as number;
-    const x1 = xs[i] as number;
-    if (rM <= x1) return (zs[i - 1] as number) + (((zs[i] as number) - (zs[i - 1] as number)) * (rM - x0)) / (x1 - x0);
-  }
-  return ringHeightM;
 }
 
 /** The half-section x ∈ [0, a], mirrored to [−a, a], heights above the floor. */
@@ -100,14 +128,14 @@ export function cableDomeSection(layout: CableDomeLayout, eavesM: number): Drawi
     both("hoop", [[x - tick, y], [x + tick, y]]);
   }
   const ringDepth = Math.max(1, ringRadiusM * 0.02);
-  both("ring", [[ringRadiusM, eavesM], [ringRadiusM, eavesM - ringDepth]]);
+  both("ring", [[ringRadiusM, eavesM + ringHeightM], [ringRadiusM, eavesM + ringHeightM - ringDepth]]);
   lines.push({ role: "ring", points: [head(0), [-(radiiM[0] as number), (topM[0] as number) + eavesM]] });
   lines.push({ role: "ring", points: [foot(0), [-(radiiM[0] as number), (bottomM[0] as number) + eavesM]] });
   const steps = 40;
   const fabric: [number, number][] = [];
   for (let s = -steps; s <= steps; s++) {
     const x = (s / steps) * ringRadiusM;
-    fabric.push([x, capHeightAt(layout.cap, Math.max(Math.abs(x), radiiM[0] as number)) + eavesM]);
+    fabric.push([x, capHeightAt(layout.cap, Math.max(Math.abs(x), radiiM[0] as number)) + eavesM + layout.ringRaiseM]);
   }
   lines.push({ role: "fabric", points: fabric });
   return lines;

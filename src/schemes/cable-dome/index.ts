@@ -1,27 +1,31 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
-import type { DesignParts, OptionValues } from "../kit";
-import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
+import type { Design, DesignParts, OptionValues, PlanCombination } from "../kit";
+import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, planCombinations, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
-import { usableFloorAreaM2 } from "../../mechanics/usable-floor";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
-import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeUndersideM, type CableDomeLayout } from "./geometry";
+import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeSoffit, type CableDomeLayout } from "./geometry";
 import { sizeCableDome, type DomeSizing } from "./sizing";
 import { designCompressionRing, type RingDesign, type RingMaterial } from "./compression-ring";
 
 const declarations = {
   /** Radial trusses N; 0 = automatic (even count with ridges ≤ 12 m apart at the perimeter, closer where the fabric needs it, at least 12). */
   radialTrusses: { kind: "number", label: "Radial trusses (0 = automatic)", unit: "", min: 0, max: 120, step: 2, integer: true, default: 0, source: "automatic: perimeter ridge spacing ≤ 12 m (common practice, no source), closer where the fabric panel needs it; at least 12" },
-  /** Hoops n; 0 = automatic (one per 27.5 m of radius, 1 to 8; fewer where the outer members cannot be made). */
-  hoops: { kind: "number", label: "Hoops (0 = automatic)", unit: "", min: 0, max: 8, step: 1, integer: true, default: 0, source: "automatic: one per 27.5 m of radius, common practice 20–35 m (no source); fewer where the outer members cannot be made" },
+  /** Hoops n; 0 = automatic (the lightest of three counts around one per 55 m of radius). */
+  hoops: { kind: "number", label: "Hoops (0 = automatic)", unit: "", min: 0, max: 8, step: 1, integer: true, default: 0, free: true, source: "automatic: the lightest of one fewer, the usual and one more than one per 55 m of radius (the lightest here; common practice 20–35 m, no source, is for low outer hoops)" },
   centralRingRatio: { kind: "number", label: "Central ring radius / plan radius", unit: "", min: 0.03, max: 0.3, step: 0.01, default: 0.1, source: "common practice, no source" },
   // default 0.6 gives the lightest roof with its ring at 160 m here; 0.4 more usable floor (common practice, no source)
-  postHeightRatio: { kind: "number", label: "Diagonal rise per bay", unit: "", min: 0.05, max: 1.0, step: 0.01, default: 0.6, source: "common practice, no source" },
-  ringMaterial: { kind: "select", label: "Compression ring", choices: [{ value: "concrete", label: "Reinforced concrete" }, { value: "steel", label: "Steel box" }], default: "concrete", source: "design choice" },
+  postHeightRatio: { kind: "number", label: "Diagonal rise per bay (post depth; feet kept above the clear height)", unit: "", min: 0.05, max: 1.0, step: 0.01, default: 0.6, free: true, source: "common practice, no source" },
+  // the ring on a perimeter wall above the eaves lifts the whole truss; 0 keeps the brief's eaves
+  // 0.06: the ring high enough that the outer post foot keeps the clear height with a working outer diagonal (lightest at 160 m here; common practice, no source)
+  ringHeightRatio: { kind: "number", label: "Compression ring above the eaves / span", unit: "", min: 0, max: 0.15, step: 0.005, default: 0.06, free: true, source: "common practice, no source (the wall or stand under the ring is substructure, counted as an allowance)" },
+  // steel: the lighter ring for the same buckling resistance at every span here
+  ringMaterial: { kind: "select", label: "Compression ring", choices: [{ value: "concrete", label: "Reinforced concrete" }, { value: "steel", label: "Steel box" }], default: "steel", source: "design choice" },
   // the cables do restrain the ring; false gives the bare-ring 3EI/R³ (Timoshenko & Gere ch. 7)
-  ringCableRestraint: { kind: "toggle", label: "Ridge cables restrain ring buckling", default: true, source: "ring on elastic foundation (from memory); off: bare ring 3EI/R³, Timoshenko & Gere ch. 7" },
+  ringCableRestraint: { kind: "toggle", label: "Ridge cables restrain ring buckling", default: true, source: "ring on elastic foundation (from memory); off: bare ring, Timoshenko & Gere ch. 7" },
+  bareRingLoad: { kind: "select", label: "Bare ring: direction of the cable pull", choices: [{ value: "normal", label: "Normal to the ring (3EI/r³)" }, { value: "centre", label: "Directed to the centre (4.5EI/r³)" }], default: "normal", source: "Timoshenko & Gere, Theory of Elastic Stability, 1961, ch. 7 (from memory): q_cr = 3EI/r³ for pressure normal to the ring, 4.5EI/r³ for a load that stays directed to the centre" },
   ...FABRIC_OPTION,
   ...TENSION_COMMON_OPTIONS,
 } as const;
@@ -49,7 +53,8 @@ function compressionRing(layout: CableDomeLayout, sized: DomeSizing, opts: Cable
   }, 0);
   const foundation = layout.trusses / chainFlexibility / (2 * Math.PI * a);
   const material = opts.ringMaterial as RingMaterial;
-  return designCompressionRing({ compressionN: sized.ringCompressionN, radiusM: a, foundationNPerM2: opts.ringCableRestraint ? foundation : 0, spokes: layout.trusses, material, yieldPa: opts.steelYieldMPa * 1e6 });
+  const bareFactor = opts.ringCableRestraint || opts.bareRingLoad !== "centre" ? 1 : 1.5;
+  return designCompressionRing({ compressionN: sized.ringCompressionN, radiusM: a, foundationNPerM2: opts.ringCableRestraint ? foundation : 0, spokes: layout.trusses, material, yieldPa: opts.steelYieldMPa * 1e6, bareRingFactor: bareFactor });
 }
 
 function domeTakeoff(sized: DomeSizing, ring: RingDesign | null, fabric: Fabric, ringMaterial: string): TakeoffRow[] {
@@ -59,14 +64,14 @@ function domeTakeoff(sized: DomeSizing, ring: RingDesign | null, fabric: Fabric,
     tonnesRow("diagonal cables", "steel-strand", "cable", massOf("diagonal")),
     tonnesRow("hoops", "steel-strand", "cable", massOf("hoop")),
     tonnesRow("posts", "steel-hot-finished-hollow", "steel-mast", massOf("post")),
-    tonnesRow("central tension ring", "steel-plate", "steel-ring", massOf("central ring")),
-    { element: "fabric", material: fabric.material, costItem: fabricCostItem(fabric), quantity: sized.fabricAreaM2, unit: "m2", massKg: sized.fabricMassKg },
+    { ...tonnesRow("central tension ring", "steel-plate", "steel-ring", massOf("central ring")), group: "structure" },
+    { element: "fabric", material: fabric.material, costItem: fabricCostItem(fabric), quantity: sized.fabricAreaM2, unit: "m2", massKg: sized.fabricMassKg, group: "envelope" },
   ];
   if (ring && ringMaterial === "steel") {
-    takeoff.push(tonnesRow("compression ring", "steel-plate", "steel-ring", ring.steelKg));
+    takeoff.push({ ...tonnesRow("compression ring", "steel-plate", "steel-ring", ring.steelKg), group: "perimeter" });
   } else if (ring) {
-    takeoff.push({ element: "compression ring", material: "concrete-c40-50", costItem: "concrete", quantity: ring.concreteM3, unit: "m3", massKg: ring.concreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3 });
-    takeoff.push(tonnesRow("compression ring reinforcement", "rebar", "rebar", ring.steelKg));
+    takeoff.push({ element: "compression ring", material: "concrete-c40-50", costItem: "concrete", quantity: ring.concreteM3, unit: "m3", massKg: ring.concreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3, group: "perimeter" });
+    takeoff.push({ ...tonnesRow("compression ring reinforcement", "rebar", "rebar", ring.steelKg), group: "perimeter" });
   }
   return takeoff;
 }
@@ -76,10 +81,12 @@ function domeSummary(layout: CableDomeLayout, sized: DomeSizing, ring: RingDesig
   return [
     { key: "trusses", label: "Radial trusses", value: layout.trusses, unit: "" },
     { key: "hoops", label: "Hoops", value: layout.hoops, unit: "" },
+    { key: "postHeightRatio", label: "Diagonal rise per bay", value: layout.postHeightRatio, unit: "" },
+    { key: "ringHeight", label: "Compression ring above the eaves", value: layout.ringRaiseM, unit: "m" },
     { key: "prestress", label: "Prestress (central upper ring force)", value: sized.prestressN / 1000, unit: "kN" },
     { key: "ringForce", label: "Compression ring force (ULS)", value: sized.ringCompressionN / 1000, unit: "kN" },
-    { key: "gravityUls", label: `ULS gravity (EN 1990 eq. ${sized.gravityExpression})`, value: sized.gravityPa / 1000, unit: "kPa" },
-    { key: "upliftUls", label: "ULS net pressure, uplift case (negative up)", value: sized.upliftPa / 1000, unit: "kPa" },
+    { key: "gravityUls", label: "ULS gravity, uniform equivalent of the worst combination", value: Math.max(...sized.states.map((st) => st.pressurePa)) / 1000, unit: "kPa" },
+    { key: "upliftUls", label: "ULS net pressure, uniform equivalent of the worst uplift (negative up)", value: Math.min(...sized.states.map((st) => st.pressurePa)) / 1000, unit: "kPa" },
     { key: "cableKgPerM2", label: "Cables", value: perM2(massOfKinds(sized.groups, ["ridge", "diagonal", "hoop"])), unit: "kg/m²" },
     { key: "postKgPerM2", label: "Posts", value: perM2(massOfKinds(sized.groups, ["post"])), unit: "kg/m²" },
     { key: "fabricKgPerM2", label: "Fabric", value: perM2(sized.fabricMassKg), unit: "kg/m²" },
@@ -88,13 +95,13 @@ function domeSummary(layout: CableDomeLayout, sized: DomeSizing, ring: RingDesig
 }
 
 /** The dome with a given number of hoops: layout, self-weight iterated around the sizing, ring, checks and take-off. */
-function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, hoops: number): DesignParts {
+function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, hoops: number, combinations: readonly PlanCombination[]): DesignParts {
   const fabric = findFabric(catalogue, opts.fabric);
   const actions = roofActions(brief);
-  const layout = cableDomeLayout(brief, opts.radialTrusses, hoops, opts.centralRingRatio, opts.postHeightRatio, widestPanelM(brief, opts, fabric, actions));
+  const layout = cableDomeLayout(brief, opts.radialTrusses, hoops, opts.centralRingRatio, opts.postHeightRatio, opts.ringHeightRatio * brief.spanM, widestPanelM(brief, opts, fabric, actions));
   const section = cableDomeSection(layout, brief.eavesHeightM);
   const input = {
-    brief, actions, layout, catalogue, fabric, yieldPa: opts.steelYieldMPa * 1e6,
+    brief, actions, combinations, layout, catalogue, fabric, yieldPa: opts.steelYieldMPa * 1e6,
     residualPrestress: opts.residualPrestress, gammaR: opts.gammaR, fabricAllowancePct: opts.fabricAllowancePct, fabricSagRatio: opts.fabricSagRatio,
   };
   const converged = convergeSelfWeight<DomeSizing>((g) => {
@@ -107,11 +114,13 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
   checks.push(...fabricPanelChecks(sized.fabricGravityNPerM, sized.fabricUpliftNPerM, fabricAllowableNPerM(fabric, opts.fabricStrengthFactor)));
   if (ring) checks.push(check("compression ring", ring.governing, sized.ringCompressionN, ring.resistanceN, "N"));
   const warnings = [
-    "axisymmetric first-order analysis: asymmetric snow and wind, and large-displacement effects, are not analysed (cable domes are sensitive to both: check at the next stage)",
+    "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); the antisymmetric part of drifted snow and one-sided wind is not analysed by it",
+    "temperature: a uniform change does not change the forces of cables, posts and a steel ring that expand alike; with a concrete ring the small difference of expansion is left out",
     "the columns or stand structure under the compression ring are not designed",
     "self-weight is smeared over the plan and applied at the post heads",
   ];
-  const a = layout.cap.baseRadiusM;
+  const worstGroup = sized.groups.reduce((w, m) => (m.utilisation > w.utilisation ? m : w));
+  const ringGoverns = ring !== null && ring.utilisation > worstGroup.utilisation;
   return {
     summary: domeSummary(layout, sized, ring),
     members: sized.groups.map(memberOf),
@@ -119,8 +128,9 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
     checks,
     warnings,
     iterations: converged.iterations,
-    usableFloorM2: usableFloorAreaM2(a, (r) => brief.eavesHeightM + cableDomeUndersideM(layout, r), brief.minClearHeightM),
-    ...capEnvelope(layout.cap, brief.eavesHeightM),
+    floor: { soffit: cableDomeSoffit(layout), supports: [] },
+    governingLoadCase: ringGoverns ? sized.ringCase : worstGroup.caseName,
+    ...capEnvelope(layout.cap, brief.eavesHeightM + layout.ringRaiseM),
     drawing: { section, plan: cableDomePlan(layout) },
     reason: ring ? "" : `no ${opts.ringMaterial} compression ring up to 8 m wide carries ${(sized.ringCompressionN / 1e6).toFixed(0)} MN with in-plane buckling: use more radial trusses (stiffer restraint) or the other ring material`,
   };
@@ -128,6 +138,7 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
 
 const identity = {
   id: "cable-dome",
+  riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 },
   label: "Cable dome",
   colour: "#0072B2",
   description:
@@ -135,17 +146,20 @@ const identity = {
   validSpanM: { min: 40, max: 250 },
 } as const;
 
-/** Automatic hoops: one per 27.5 m of radius, fewer where the outer members cannot be made (the force grows by a factor at each hoop outwards). */
+/**
+ * Automatic hoops: the lightest feasible design of one fewer, the usual (one per 55 m of radius) and
+ * one more hoop — the least over the candidates, so the result does not jump where the usual count
+ * steps; with none feasible, the usual count's answer.
+ */
 function design(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue) {
-  const withHoops = (hoops: number) => infeasibleOnFailure(identity.id, brief, () => assembleDesign(identity, brief, designWith(brief, opts, catalogue, hoops)));
+  const combinations = planCombinations(brief);
+  const withHoops = (hoops: number) => infeasibleOnFailure(identity.id, brief, () => assembleDesign(identity, brief, designWith(brief, opts, catalogue, hoops, combinations)));
   if (opts.hoops > 0) return withHoops(opts.hoops);
   const usual = autoHoopCount(brief.spanM);
-  const first = withHoops(usual);
-  for (let hoops = usual - 1; !first.feasible && hoops >= 1; hoops--) {
-    const fewer = withHoops(hoops);
-    if (fewer.feasible) return { ...fewer, warnings: [...fewer.warnings, `${hoops} hoops instead of the usual ${usual}: with more, ${first.reason}`] };
-  }
-  return first;
+  const candidates = [usual - 1, usual, usual + 1].filter((n) => n >= 1 && n <= 8).map(withHoops);
+  const feasible = candidates.filter((d) => d.feasible);
+  if (feasible.length === 0) return candidates[usual > 1 ? 1 : 0] as Design;
+  return feasible.reduce((best, d) => (d.roofMassKg < best.roofMassKg ? d : best));
 }
 
 /** Cable dome: radial cable trusses between a perimeter compression ring and a central tension ring, fabric between the ridges. */

@@ -1,10 +1,9 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
-import type { DesignParts, OptionValues } from "../kit";
-import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, SchemeError, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
+import type { DesignParts, FloorEnvelope, OptionValues } from "../kit";
+import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, planCombinations, SchemeError, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
-import { usableFloorAreaM2 } from "../../mechanics/usable-floor";
 import { capHeightAt } from "../../mechanics/spherical-cap";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
@@ -12,10 +11,10 @@ import { sizeCableNet, type NetSizing } from "./sizing";
 
 const declarations = {
   // default: common practice for large nets, no source
-  masts: { kind: "number", label: "Masts", unit: "", min: 3, max: 48, step: 1, integer: true, default: 12, source: "common practice, no source" },
-  mastRingRatio: { kind: "number", label: "Mast ring radius / plan radius", unit: "", min: 0.3, max: 0.9, step: 0.05, default: 0.6, source: "common practice, no source" },
+  masts: { kind: "number", label: "Masts", unit: "", min: 3, max: 48, step: 1, integer: true, default: 12, free: true, source: "common practice, no source" },
+  mastRingRatio: { kind: "number", label: "Mast ring radius / plan radius", unit: "", min: 0.3, max: 0.9, step: 0.05, default: 0.6, free: true, source: "common practice, no source" },
   // default: mast head above the roof ≈ span/7 (common practice, no source)
-  mastHeightRatio: { kind: "number", label: "Mast height above roof / span", unit: "", min: 0.03, max: 0.4, step: 0.01, default: 0.15, source: "common practice, no source" },
+  mastHeightRatio: { kind: "number", label: "Mast height above roof / span", unit: "", min: 0.03, max: 0.4, step: 0.01, default: 0.15, free: true, source: "common practice, no source" },
   /** Radial cables from each mast head (half out to the edge, half in to the central ring). */
   radialCablesPerMast: { kind: "number", label: "Radial cables per mast", unit: "", min: 2, max: 40, step: 2, integer: true, default: 8, source: "common practice, no source" },
   // default: fabric panels 5–8 m (common practice, no source)
@@ -51,9 +50,9 @@ function netTakeoff(sized: NetSizing, fabric: Fabric): TakeoffRow[] {
     cables("edge cables", "edge"),
     cables("backstays", "backstay"),
     tonnesRow("masts", mast?.fabricated ? "steel-plate" : "steel-hot-finished-hollow", "steel-mast", massOfKinds(sized.groups, ["mast"])),
-    tonnesRow("central tension ring", "steel-plate", "steel-ring", massOfKinds(sized.groups, ["central ring"])),
-    { element: "fabric", material: fabric.material, costItem: fabricCostItem(fabric), quantity: sized.fabricAreaM2, unit: "m2", massKg: sized.fabricMassKg },
-    { element: "anchors", material: "concrete-c30-37", costItem: "anchor", quantity: sized.anchorConcreteM3, unit: "m3", massKg: sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3 },
+    { ...tonnesRow("central tension ring", "steel-plate", "steel-ring", massOfKinds(sized.groups, ["central ring"])), group: "structure" },
+    { element: "fabric", material: fabric.material, costItem: fabricCostItem(fabric), quantity: sized.fabricAreaM2, unit: "m2", massKg: sized.fabricMassKg, group: "envelope" },
+    { element: "anchors", material: "concrete-c30-37", costItem: "anchor", quantity: sized.anchorConcreteM3, unit: "m3", massKg: sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3, group: "substructure" },
   ];
 }
 
@@ -66,12 +65,12 @@ function netSummary(layout: CableNetLayout, sized: NetSizing) {
     { key: "backstayForce", label: "Backstay force (ULS)", value: sized.backstayForceN / 1000, unit: "kN" },
     { key: "prestressOuter", label: "Valley pull on the net, outer bay", value: sized.prestressOuterNPerM / 1000, unit: "kN/m" },
     { key: "prestressInner", label: "Valley pull on the net, inner bay", value: sized.prestressInnerNPerM / 1000, unit: "kN/m" },
-    { key: "gravityUls", label: `ULS gravity (EN 1990 eq. ${sized.gravityExpression})`, value: sized.gravityPa / 1000, unit: "kPa" },
-    { key: "upliftUls", label: "ULS net pressure, uplift case (negative up)", value: sized.upliftPa / 1000, unit: "kPa" },
+    { key: "gravityUls", label: "ULS gravity, uniform equivalent of the worst combination", value: Math.max(...sized.casesPa) / 1000, unit: "kPa" },
+    { key: "upliftUls", label: "ULS net pressure, uniform equivalent of the worst uplift (negative up)", value: Math.min(...sized.casesPa) / 1000, unit: "kPa" },
     { key: "cableKgPerM2", label: "Cables", value: perM2(massOfKinds(sized.groups, ["suspension", "valley", "circumferential", "edge", "backstay"])), unit: "kg/m²" },
     { key: "mastKgPerM2", label: "Masts", value: perM2(massOfKinds(sized.groups, ["mast"])), unit: "kg/m²" },
     { key: "fabricKgPerM2", label: "Fabric", value: perM2(sized.fabricMassKg), unit: "kg/m²" },
-    { key: "anchorKgPerM2", label: "Anchors (concrete)", value: perM2(sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3), unit: "kg/m²" },
+    { key: "anchorKgPerM2", label: "Anchors (concrete; substructure allowance, not designed)", value: perM2(sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3), unit: "kg/m²" },
   ];
 }
 
@@ -81,7 +80,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
   const section = cableNetSection(layout, brief.eavesHeightM);
   checkSags(layout, section);
   const input = {
-    brief, actions: roofActions(brief), layout, catalogue, fabric,
+    brief, actions: roofActions(brief), combinations: planCombinations(brief), layout, catalogue, fabric,
     residualPrestress: opts.residualPrestress, gammaR: opts.gammaR, yieldPa: opts.steelYieldMPa * 1e6, hangerSpacingM: opts.hangerSpacingM,
     braced: opts.mastType === "braced", anchorUpliftMargin: opts.anchorUpliftMargin, fabricAllowancePct: opts.fabricAllowancePct, fabricSagRatio: opts.fabricSagRatio,
   };
@@ -94,9 +93,11 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
   checks.push(...fabricPanelChecks(sized.fabricGravityNPerM, sized.fabricUpliftNPerM, fabricAllowableNPerM(fabric, opts.fabricStrengthFactor)));
   const mast = sized.groups.find((g) => g.kind === "mast");
   const warnings = [
-    "axisymmetric first-order analysis: asymmetric snow and wind, fan angles of the cables in plan and large displacements are not analysed",
+    "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); fan angles of the cables in plan and large displacements are not analysed by it",
+    "temperature: not in the closed form (the sagging cables between masts and ground anchors are flexible; a uniform change moves the net more than it changes its forces)",
+    `the masts stand on the floor: each takes a clear zone of ${MAST_CLEAR_RADIUS_M} m radius out of the usable floor (common practice, no source)`,
     "uplift is resisted by an idealised valley-cable family sharing load equally with the radial cables (equal sag and stiffness assumed)",
-    "anchors are checked for uplift only (sliding and the mast foundations are not designed)",
+    "anchors are a substructure allowance, not designed: dead weight for the uplift × margin only (sliding and the mast foundations are not designed)",
   ];
   if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);
   if (layout.mastRadiusM + layout.backstayRunM < layout.cap.baseRadiusM) warnings.push("backstay anchors fall inside the plan: raise the mast ring ratio or check the floor layout");
@@ -107,10 +108,34 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     checks,
     warnings,
     iterations: converged.iterations,
-    usableFloorM2: usableFloorAreaM2(layout.cap.baseRadiusM, (r) => brief.eavesHeightM + capHeightAt(layout.cap, r), brief.minClearHeightM),
+    floor: netFloor(layout, brief.eavesHeightM),
+    // the central ring's pull is the same in every combination (ridge and valley share the load): the most utilised of the others names the case
+    governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
     ...capEnvelope(layout.cap, brief.eavesHeightM),
     drawing: { section, plan: cableNetPlan(layout) },
   };
+}
+
+/** Clear zone around a mast's foot, radius, m (the mast, its base and its protection; common practice, no source). */
+export const MAST_CLEAR_RADIUS_M = 3;
+
+/**
+ * The net over the floor: the fabric on the cap (hung from the radial cables, the lowest member
+ * along a radius), and under it any backstay that lands inside the plan; the masts stand on the floor
+ * with their clear zones.
+ */
+function netFloor(layout: CableNetLayout, eavesM: number): FloorEnvelope {
+  const a = layout.cap.baseRadiusM;
+  const steps = 200;
+  const soffit: [number, number][] = [];
+  for (let i = 0; i <= steps; i++) {
+    const r = (i / steps) * a;
+    const roof = eavesM + capHeightAt(layout.cap, r);
+    const t = (r - layout.mastRadiusM) / layout.backstayRunM;
+    const backstay = t > 0 && t < 1 ? layout.mastLengthM * (1 - t) : Infinity;
+    soffit.push([r, Math.min(roof, backstay)]);
+  }
+  return { soffit, supports: [{ radiusM: layout.mastRadiusM, clearRadiusM: MAST_CLEAR_RADIUS_M, count: layout.masts }] };
 }
 
 /** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against valley cables, masts stayed by backstays. */
@@ -121,6 +146,7 @@ export const cableNet = defineScheme({
   description:
     "Masts on a ring inside the plan carry radial cables that hang the fabric: half run out to anchors at the edge, half in to a central tension ring. Circumferential cables between the radial cables carry the fabric panels. A second family of valley cables, prestressed against the radial ones, holds the roof down in wind uplift. Backstays take the difference of pull at each mast head down to ground anchors.",
   validSpanM: { min: 60, max: 400 },
+  riseSpanRatio: { min: 0.05, max: 0.2, preferred: 0.1 },
   options: defineOptions(declarations),
   design,
 });

@@ -1,25 +1,24 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, ChsSection, Fabric } from "../../catalogue/types";
 import type { RoofActions } from "../../loads/roof-actions";
-import { designPressures } from "../../loads/roof-actions";
 import { membraneStripForceNPerM } from "../../mechanics/membrane-strip";
 import { inclinedParabolicCable, parabolaLengthM, parabolicCable } from "../../mechanics/parabolic-cable";
 import { ringForceFromPullsN } from "../../mechanics/ring-buckling";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { GRAVITY_M_PER_S2, kPaOfMass } from "../../mechanics/gravity";
 import { chsFromDimensions } from "../../catalogue/chs";
-import { fabricCover, pickChs, pickStrandGroup, SizingError, steelTensionRing, type SizedGroup } from "../kit";
+import { fabricCover, pickChs, pickStrandGroup, SizingError, steelTensionRing, uniformPressurePa, type SizedGroup, type PlanCombination } from "../kit";
 import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./geometry";
 
 export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring";
 
 /** A member group of the net; a mast may be fabricated from plate (not a catalogue section). */
-export type NetMemberGroup = SizedGroup<NetMemberKind, { fabricated?: boolean }>;
+export type NetMemberGroup = SizedGroup<NetMemberKind, { fabricated?: boolean; caseName: string }>;
 
 export interface NetSizing {
-  gravityPa: number;
-  upliftPa: number;
-  gravityExpression: string;
+  /** The design combinations' uniform equivalents, Pa on plan (down positive), in the order of `caseNames`. */
+  casesPa: number[];
+  caseNames: string[];
   groups: NetMemberGroup[];
   /** Prestress as the downward pull of the valley cables on the net, outer and inner bays, N per m of plan span. */
   prestressOuterNPerM: number;
@@ -38,6 +37,7 @@ export interface NetSizing {
 export type NetSizingInput = {
   brief: Brief;
   actions: RoofActions;
+  combinations: readonly PlanCombination[];
   layout: CableNetLayout;
   catalogue: Catalogue;
   fabric: Fabric;
@@ -72,7 +72,9 @@ function cableEnd(wNPerM: number, bay: NetBay): { H: number; Vup: number; T: num
 }
 
 /**
- * Sizes a mast-supported cable net for an assumed self-weight (kPa on plan). Each radial
+ * Sizes a mast-supported cable net for an assumed self-weight (kPa on plan), for every design
+ * combination of the study's basis at its conservative uniform equivalent (the peak of a gravity
+ * map, the most upward value of an uplift map; the closed form takes only a uniform load). Each radial
  * suspension cable is a parabola on its inclined chord carrying its tributary plan load
  * (H = wL²/(8f), Irvine 1981 ch. 1). Uplift is resisted by prestress against a second, opposite
  * family of valley cables of the same sag: with equal sags and stiffnesses a load is shared equally
@@ -86,41 +88,42 @@ function cableEnd(wNPerM: number, bay: NetBay): { H: number; Vup: number; T: num
 export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetSizing {
   const { brief, actions, layout, fabric } = input;
   const permanentKPa = selfWeightKPa + brief.servicesKPa;
-  const pressures = designPressures(brief, actions, permanentKPa);
-  const cases = [pressures.gravity.valueKPa * 1000, pressures.upliftNetKPa * 1000];
+  const cases = input.combinations.map((c) => uniformPressurePa(c, selfWeightKPa));
+  const names = input.combinations.map((c) => c.name);
   const lines = layout.masts * layout.cablesPerSide;
   const groups: NetMemberGroup[] = [];
-  const strands = (kind: NetMemberKind, element: string, count: number, lengthM: number, forceN: number) => {
+  const strands = (kind: NetMemberKind, element: string, count: number, lengthM: number, [forceN, k]: Worst) => {
     const choice = pickStrandGroup(input.catalogue.strands, forceN, input.gammaR, `no strand group in the catalogue carries the ${element} (${(forceN / 1e6).toFixed(1)} MN): add masts or radial cables per mast`);
-    groups.push({ kind, element, material: "steel-strand", count, lengthM, section: choice.designation, designForceN: forceN, resistanceN: choice.resistanceN, utilisation: choice.utilisation, governing: choice.governing, massKg: choice.massKgPerM * lengthM * count });
+    groups.push({ kind, element, material: "steel-strand", count, lengthM, section: choice.designation, designForceN: forceN, resistanceN: choice.resistanceN, utilisation: choice.utilisation, governing: choice.governing, massKg: choice.massKgPerM * lengthM * count, caseName: names[k] ?? "" });
   };
   const radial = radialFamilies(input, cases, strands);
   const a = layout.cap.baseRadiusM;
-  const worstP = Math.max(...cases.map(Math.abs));
+  const worstP = worstOf(cases.map(Math.abs));
   for (const [i, r] of layout.hoopRadiiM.entries()) {
     const span = circumferentialSpanM(layout, r);
-    strands("circumferential", `circumferential cable ${i + 1}`, 1, 2 * Math.PI * r, parabolicCable(worstP * input.hangerSpacingM, span, NET_SECONDARY_SAG_RATIO * span).maxTensionN);
+    strands("circumferential", `circumferential cable ${i + 1}`, 1, 2 * Math.PI * r, [parabolicCable(worstP[0] * input.hangerSpacingM, span, NET_SECONDARY_SAG_RATIO * span).maxTensionN, worstP[1]]);
   }
   const fabricSag = input.fabricSagRatio * input.hangerSpacingM;
-  const fabricUlsNPerM = membraneStripForceNPerM(worstP, input.hangerSpacingM, fabricSag);
+  const fabricUlsNPerM = membraneStripForceNPerM(worstP[0], input.hangerSpacingM, fabricSag);
   const edgeSpan = (2 * Math.PI * a) / lines;
   const edgeCable = parabolicCable(fabricUlsNPerM, edgeSpan, NET_SECONDARY_SAG_RATIO * edgeSpan);
-  strands("edge", "edge cables", lines, edgeCable.lengthM, edgeCable.maxTensionN);
-  const backstayN = Math.max(0, ...radial.horizontal) / Math.cos(BACKSTAY_SLOPE_RAD);
-  strands("backstay", "backstays", layout.masts, layout.backstayLengthM, Math.max(backstayN, 1));
-  const mast = sizeMast(input, Math.max(...radial.upperV) + backstayN * Math.sin(BACKSTAY_SLOPE_RAD));
+  strands("edge", "edge cables", lines, edgeCable.lengthM, [edgeCable.maxTensionN, worstP[1]]);
+  const horizontal = worstOf(radial.horizontal);
+  const backstayN = Math.max(0, horizontal[0]) / Math.cos(BACKSTAY_SLOPE_RAD);
+  strands("backstay", "backstays", layout.masts, layout.backstayLengthM, [Math.max(backstayN, 1), horizontal[1]]);
+  const mastLoad = worstOf(radial.upperV.map((v, k) => v + (Math.max(0, radial.horizontal[k] as number) / Math.cos(BACKSTAY_SLOPE_RAD)) * Math.sin(BACKSTAY_SLOPE_RAD)));
+  const mast = { ...sizeMast(input, mastLoad[0]), caseName: names[mastLoad[1]] ?? "" };
   groups.push(mast);
-  const ringN = ringForceFromPullsN(radial.ringPull, lines);
+  const ringN = ringForceFromPullsN(radial.ringPull[0], lines);
   const ringLength = 2 * Math.PI * layout.centralRingRadiusM;
-  groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: ringN, ...steelTensionRing(ringN, input.yieldPa, ringLength) });
+  groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: ringN, ...steelTensionRing(ringN, input.yieldPa, ringLength), caseName: names[radial.ringPull[1]] ?? "" });
   const anchorUpliftN = lines * radial.edgeUplift + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
   const anchorConcreteM3 = (anchorUpliftN * input.anchorUpliftMargin) / (PLAIN_CONCRETE_DENSITY_KG_PER_M3 * GRAVITY_M_PER_S2);
   const fabricCut = fabricCover(layout.cap.surfaceM2, input.fabricAllowancePct, fabric);
   const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay").reduce((s, g) => s + g.massKg, 0) + fabricCut.massKg;
   return {
-    gravityPa: cases[0] as number,
-    upliftPa: cases[1] as number,
-    gravityExpression: pressures.gravity.expression,
+    casesPa: cases,
+    caseNames: names,
     groups,
     prestressOuterNPerM: radial.wpOuter,
     prestressInnerNPerM: radial.wpInner,
@@ -136,12 +139,16 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   };
 }
 
+/** A largest value and the index of the combination giving it. */
+type Worst = [number, number];
+const worstOf = (values: readonly number[]): Worst => values.reduce<Worst>((w, v, k) => (v > w[0] ? [v, k] : w), [-Infinity, 0]);
+
 /**
  * The radial suspension and valley cables of both bays (sized through `strands`), with the valley
  * pull that prestresses the net, and what they bring to the mast heads (vertical, and the horizontal
  * difference the backstay takes), to the edge anchors (uplift) and to the central ring (pull).
  */
-function radialFamilies(input: NetSizingInput, cases: readonly number[], strands: (kind: NetMemberKind, element: string, count: number, lengthM: number, forceN: number) => void) {
+function radialFamilies(input: NetSizingInput, cases: readonly number[], strands: (kind: NetMemberKind, element: string, count: number, lengthM: number, worst: Worst) => void) {
   const { layout } = input;
   const lines = layout.masts * layout.cablesPerSide;
   const m = input.residualPrestress;
@@ -156,10 +163,10 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
     const need = ((outerH[k] as number) * 8 * layout.inner.sagM) / layout.inner.spanM ** 2 - (innerW[k] as number) / 2;
     wpInner = Math.max(wpInner, need);
   });
-  const upperV = [0, 0];
-  const horizontal = [0, 0];
+  const upperV = cases.map(() => 0);
+  const horizontal = cases.map(() => 0);
   let edgeUplift = 0;
-  let ringPull = 0;
+  let ringPull: Worst = [0, 0];
   for (const { bay, w, wp, label } of [
     { bay: layout.outer, w: outerW, wp: wpOuter, label: "outer" },
     { bay: layout.inner, w: innerW, wp: wpInner, label: "inner" },
@@ -167,8 +174,8 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
     const ridge = w.map((wk) => cableEnd(wp + wk / 2, bay));
     const valley = w.map((wk) => cableEnd(wp - wk / 2, bay));
     const length = parabolaLengthM(bay.spanM, bay.sagM) * Math.hypot(1, bay.riseM / bay.spanM);
-    strands("suspension", `${label} radial cables`, lines, length, Math.max(...ridge.map((e) => e.T)));
-    strands("valley", `${label} valley cables`, lines, length, Math.max(...valley.map((e) => e.T)));
+    strands("suspension", `${label} radial cables`, lines, length, worstOf(ridge.map((e) => e.T)));
+    strands("valley", `${label} valley cables`, lines, length, worstOf(valley.map((e) => e.T)));
     ridge.forEach((e, k) => {
       upperV[k] = (upperV[k] as number) + layout.cablesPerSide * e.Vup;
       horizontal[k] = (horizontal[k] as number) + (label === "inner" ? 1 : -1) * layout.cablesPerSide * e.H;
@@ -180,7 +187,7 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
         edgeUplift = Math.max(edgeUplift, up);
       });
     } else {
-      ringPull = Math.max(...ridge.map((e, k) => e.H + (valley[k] as { H: number }).H));
+      ringPull = worstOf(ridge.map((e, k) => e.H + (valley[k] as { H: number }).H));
     }
   }
   return { wpOuter, wpInner, upperV, horizontal, edgeUplift, ringPull };
@@ -191,7 +198,7 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
  * own weight (γ_G,sup, EN 1990 Table A1.2(B)): size, add the weight, resize.
  * @throws SizingError when not even the largest fabricated tube carries it
  */
-function sizeMast(input: NetSizingInput, cableMastN: number): NetMemberGroup {
+function sizeMast(input: NetSizingInput, cableMastN: number): Omit<NetMemberGroup, "caseName"> {
   const { layout, brief } = input;
   const effective = input.braced ? layout.mastLengthM / 2 : layout.mastLengthM;
   let mastN = cableMastN;

@@ -15,3 +15,4 @@ export { CLADDING_CHOICES, findCladding, claddingCostItem } from "./cladding";
 export { FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
 export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction } from "./load-combinations";
 export { capFloor } from "./cap-floor";
+export { planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";

@@ -64,8 +64,9 @@ describe("cableDome.design", () => {
 
   it("a steel ring is lighter than a concrete one", () => {
     const steel = design(DEFAULT_BRIEF, { ...cableDome.defaults, ringMaterial: "steel" });
+    const concrete = design(DEFAULT_BRIEF, { ...cableDome.defaults, ringMaterial: "concrete" });
     const ringKg = (x: typeof d) => x.takeoff.filter((r) => r.element.startsWith("compression ring")).reduce((s, r) => s + r.massKg, 0);
-    expect(ringKg(steel)).toBeLessThan(ringKg(d));
+    expect(ringKg(steel)).toBeLessThan(ringKg(concrete));
   });
 
   it("throws on a bad option, naming it", () => {
@@ -79,14 +80,48 @@ describe("cableDome.design", () => {
   });
 
   it("counts floor as usable only where the clear height suffices", () => {
-    expect(d.usableFloorM2).toBeGreaterThan(0);
-    expect(d.usableFloorM2).toBeLessThan(d.planAreaM2);
+    // a clear height above the compression ring: the outer feet cannot keep it
+    const low = design({ ...DEFAULT_BRIEF, minClearHeightM: DEFAULT_BRIEF.eavesHeightM + 2 }, { ...cableDome.defaults, ringHeightRatio: 0 });
+    expect(low.usableFloorM2).toBeGreaterThan(0);
+    expect(low.usableFloorM2).toBeLessThan(low.planAreaM2);
     const tall = design({ ...DEFAULT_BRIEF, eavesHeightM: 40 });
     expectRelClose(tall.usableFloorM2, tall.planAreaM2, 1e-9);
   });
 });
 
+describe("cableDome on the shared design basis (issue 12)", () => {
+  const d = design();
+  it("keeps the whole floor at the default brief: no post foot below the clear height", () => {
+    expectRelClose(d.usableFloorM2, d.planAreaM2, 1e-9);
+  });
+  it("names the design combination that governs, from the basis", () => {
+    expect(d.governingLoadCase).toMatch(/\((6\.10|6\.10a|6\.10b)\)$/);
+  });
+  it("puts every take-off row in a group: the compression ring is perimeter, the fabric envelope", () => {
+    expect(d.takeoff.every((r) => r.group !== undefined)).toBe(true);
+    expect(d.takeoff.find((r) => r.element === "compression ring")?.group).toBe("perimeter");
+    expect(d.takeoff.find((r) => r.element === "fabric")?.group).toBe("envelope");
+    expectRelClose(Object.values(d.massByGroupKg).reduce((a, b) => a + b, 0), d.totalMassKg, 1e-12);
+  });
+  it("declares hoops, post depth and ring height free, and a rise ÷ span", () => {
+    const free = cableDome.options.filter((o) => o.kind === "number" && o.free).map((o) => o.key);
+    expect(free).toEqual(["hoops", "postHeightRatio", "ringHeightRatio"]);
+    expect(cableDome.riseSpanRatio?.preferred).toBeGreaterThan(0);
+  });
+  it("more drifted snow needs more prestress or more cable (the drifted case is designed for)", () => {
+    const heavier = design({ ...DEFAULT_BRIEF, snowGroundKPa: 1.5 });
+    expect(cableKg(heavier)).toBeGreaterThan(cableKg(d));
+  });
+});
+
 describe("cableDome ring restraint", () => {
+  it("a bare ring under a centre-directed pull (4.5EI/r³) needs no more than under normal pressure (3EI/r³)", () => {
+    const opts = { ...cableDome.defaults, ringMaterial: "steel", ringCableRestraint: false };
+    const ringKg = (x: ReturnType<typeof design>) => x.takeoff.filter((r) => r.element === "compression ring").reduce((s, r) => s + r.massKg, 0);
+    const normal = cableDome.design(DEFAULT_BRIEF, { ...opts, bareRingLoad: "normal" }, catalogue);
+    const centre = cableDome.design(DEFAULT_BRIEF, { ...opts, bareRingLoad: "centre" }, catalogue);
+    expect(ringKg(centre)).toBeLessThanOrEqual(ringKg(normal));
+  });
   it("without the cables' restraint (bare ring, 3EI/R³) the compression ring is heavier", () => {
     const restrained = cableDome.design(DEFAULT_BRIEF, { ...cableDome.defaults, ringMaterial: "steel" }, catalogue);
     const bare = cableDome.design(DEFAULT_BRIEF, { ...cableDome.defaults, ringMaterial: "steel", ringCableRestraint: false }, catalogue);

@@ -98,3 +98,24 @@ describe("circumferentialSpanM", () => {
     }
   });
 });
+
+describe("cableNet on the shared design basis (issue 12)", () => {
+  const d = design();
+  it("the masts inside the plan take their clear zones out of the usable floor", () => {
+    expect(d.usableFloorM2).toBeLessThan(d.planAreaM2);
+    const fewer = design(DEFAULT_BRIEF, { ...cableNet.defaults, masts: 6 });
+    expect(fewer.usableFloorM2).toBeGreaterThan(d.usableFloorM2);
+  });
+  it("counts the anchors as substructure, outside the roof's self-weight", () => {
+    const anchors = d.takeoff.find((r) => r.element === "anchors");
+    expect(anchors?.group).toBe("substructure");
+    expectRelClose(d.massByGroupKg.substructure, anchors?.massKg ?? NaN, 1e-12);
+    expectRelClose(d.roofMassKg, d.totalMassKg - d.massByGroupKg.substructure, 1e-12);
+  });
+  it("names the design combination that governs, and declares mast ring, mast height and mast count free", () => {
+    expect(d.governingLoadCase).toMatch(/\((6\.10|6\.10a|6\.10b)\)$/);
+    const free = cableNet.options.filter((o) => o.kind === "number" && o.free).map((o) => o.key);
+    expect(free).toEqual(["masts", "mastRingRatio", "mastHeightRatio"]);
+    expect(cableNet.riseSpanRatio?.preferred).toBeGreaterThan(0);
+  });
+});
