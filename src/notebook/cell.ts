@@ -67,7 +67,7 @@ export function errorBox(error: unknown): HTMLElement {
   const box = document.createElement("div");
   box.className = "cell-error";
   box.setAttribute("role", "alert");
-  box.textContent = `This cell could not be computed: ${messageOf(error)}`;
+  box.textContent = `This part of the page stopped: ${messageOf(error)}`;
   return box;
 }
 

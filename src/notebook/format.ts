@@ -1,17 +1,91 @@
 import { format } from "d3";
 
-/** Number formats used on every page (fixed locale: d3's default en-US, so output is deterministic). */
+// One formatting module for every page (issue 14, "words a project lead uses"): three significant
+// figures, a currency on every cost, forces in kN or MN, m² and m³ rather than m2 and m3, and
+// results text without the internal wording ("could not be computed", "from memory") that belongs
+// in the method record. Fixed locale (d3's default en-US), so output is deterministic.
+
+const grouped = format(",.0f");
+const g3 = format(",.3~r");
+
+/** Three significant figures with thousands separated: 42,500 · 123 · 12.3 · 0.0123; "–" for a non-finite value. */
+function sig3(x: number): string {
+  if (!Number.isFinite(x)) return "–";
+  if (x === 0) return "0";
+  // Above 1,000 the digits past the third are rounded away but the number keeps its size.
+  return Math.abs(x) >= 1000 ? grouped(Number(x.toPrecision(3))) : g3(x).replace(/^-/, "−");
+}
+
+/** A cost with its currency: "1,230 GBP", "12.3 million GBP". */
+function money(x: number, currency: string): string {
+  if (!Number.isFinite(x)) return "–";
+  return Math.abs(x) >= 1e6 ? `${sig3(x / 1e6)} million ${currency}` : `${sig3(x)} ${currency}`;
+}
+
+/** A force in kN below 1 MN and in MN above, 3 significant figures: 42,519,682 N → "42.5 MN". */
+function force(newtons: number): string {
+  return Math.abs(newtons) >= 1e6 ? `${sig3(newtons / 1e6)} MN` : `${sig3(newtons / 1e3)} kN`;
+}
+
+/** A mass in kg below a tonne and in t above: "850 kg", "1,230 t". */
+function mass(kg: number): string {
+  return Math.abs(kg) >= 1000 ? `${sig3(kg / 1000)} t` : `${sig3(kg)} kg`;
+}
+
+/** Units as a reader writes them: m2 → m², m3 → m³, kgCO2e → kgCO₂e is left as is (a common spelling). */
+function unit(text: string): string {
+  return text.replace(/\bm2\b/g, "m²").replace(/\bm3\b/g, "m³");
+}
+
+/** A value with its unit, ready for a table: forces (N) in kN or MN, areas in m². */
+function quantity(value: number, unitText: string): string {
+  if (unitText === "N") return force(value);
+  const u = unit(unitText);
+  return u ? `${sig3(value)} ${u}` : sig3(value);
+}
+
+/**
+ * Results text in a project lead's words: the internal prefix "could not be computed:" and
+ * "(from memory)" notes dropped (the sources stay in the method record), m2/m3 written m²/m³.
+ */
+function plain(text: string): string {
+  return unit(
+    text
+      .replace(/\bcould not be computed:\s*/gi, "")
+      .replace(/\s*\((?:values? )?from memory[^)]*\)/gi, "")
+      .replace(/,\s*from memory\b[^,;)]*/gi, "")
+      .replace(/\s{2,}/g, " ")
+      .trim(),
+  );
+}
+
+/** The difference of a value to the best, in per cent of the best: "best", "+12 %", "+1.2×". */
+function versusBest(value: number, best: number): string {
+  if (!Number.isFinite(value) || !Number.isFinite(best) || best <= 0) return "";
+  if (value === best) return "best";
+  const ratio = value / best;
+  return ratio >= 2 ? `${sig3(ratio)}× the best` : `+${format(".0f")((ratio - 1) * 100)} %`;
+}
+
+/** Number formats used on every page. */
 export const fmt = {
   /** Thousands separated, no decimals: 12,345 */
-  int: format(",.0f"),
+  int: grouped,
   /** One decimal: 12.3 */
   one: format(",.1f"),
   /** Two decimals: 1.23 */
   two: format(",.2f"),
-  /** Three significant figures: 0.0123, 1.23k avoided */
-  sig3: (x: number) => (Math.abs(x) >= 1000 ? format(",.0f")(x) : format(".3~g")(x)),
+  /** Three significant figures: 42,500 · 123 · 12.3 · 0.0123 */
+  sig3,
   /** Per cent from a fraction: 0.123 → 12 % */
   pct: (x: number) => `${format(".0f")(x * 100)} %`,
+  money,
+  force,
+  mass,
+  unit,
+  quantity,
+  plain,
+  versusBest,
 };
 
 /** A small table element from rows of cells; the first row is the header. */

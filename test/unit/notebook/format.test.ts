@@ -1,0 +1,34 @@
+// The one formatting module (issue 14, "words a project lead uses").
+import { describe, it, expect } from "vitest";
+import { fmt } from "../../../src/notebook/format";
+
+describe("fmt", () => {
+  it("sig3 gives three significant figures and keeps the size of large numbers", () => {
+    expect(fmt.sig3(42_519_682)).toBe("42,500,000");
+    expect(fmt.sig3(123.456)).toBe("123");
+    expect(fmt.sig3(12.345)).toBe("12.3");
+    expect(fmt.sig3(0.012345)).toBe("0.0123");
+    expect(fmt.sig3(0)).toBe("0");
+    expect(fmt.sig3(Number.NaN)).toBe("–");
+  });
+  it("force writes N as kN below 1 MN and MN above", () => {
+    expect(fmt.force(42_519_682)).toBe("42.5 MN");
+    expect(fmt.force(812_345)).toBe("812 kN");
+    expect(fmt.quantity(-1_500, "N")).toBe("−1.5 kN");
+    expect(fmt.quantity(11_000, "m2")).toBe("11,000 m²");
+  });
+  it("money puts the currency on every cost", () => {
+    expect(fmt.money(1234.5, "GBP")).toBe("1,230 GBP");
+    expect(fmt.money(20_912_345, "EUR")).toBe("20.9 million EUR");
+  });
+  it("plain drops internal wording and writes m² and m³", () => {
+    expect(fmt.plain("could not be computed: self-weight did not converge")).toBe("self-weight did not converge");
+    expect(fmt.plain("thin concrete shells above about 100 m span are rare (from memory): falsework dominates")).toBe("thin concrete shells above about 100 m span are rare: falsework dominates");
+    expect(fmt.plain("deck area 300 m2, volume 20 m3")).toBe("deck area 300 m², volume 20 m³");
+  });
+  it("versusBest names the best and the difference of the others", () => {
+    expect(fmt.versusBest(10, 10)).toBe("best");
+    expect(fmt.versusBest(11.2, 10)).toBe("+12 %");
+    expect(fmt.versusBest(25, 10)).toBe("2.5× the best");
+  });
+});
