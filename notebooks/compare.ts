@@ -15,8 +15,10 @@ import {
   studySignals,
   controlGroup,
   toggleControl,
-  tableElement,
   schemeSummary,
+  schemeStatusLine,
+  answerParts,
+  resultsTable,
   memberTable,
   checkTable,
   takeoffTable,
@@ -37,7 +39,6 @@ import {
   carbonVsCostChart,
   SCHEME_COLOURS,
 } from "../src/charts";
-import { comparisonTable, comparisonRows } from "../src/comparison";
 
 const { store, main } = startPage({
   id: "compare",
@@ -46,6 +47,19 @@ const { store, main } = startPage({
     "Set the brief; every scheme is designed for it from published methods and compared on weight, embodied carbon and cost per m² of usable floor. Everything below updates as you type.",
 });
 
+// The answer first, full width; below it the brief (sticky beside the results on a wide screen)
+// and the results.
+const answerSlot = document.createElement("div");
+const layout = document.createElement("div");
+layout.className = "compare-layout";
+const inputs = document.createElement("aside");
+inputs.className = "brief-column";
+inputs.setAttribute("aria-label", "Brief");
+const outputs = document.createElement("div");
+outputs.className = "results-column";
+layout.append(inputs, outputs);
+main.append(answerSlot, layout);
+
 const brief = computed(() => store.study.value.brief);
 const actions = computed(() => roofActions(brief.value));
 const env = computed(() => envelope(brief.value));
@@ -53,10 +67,9 @@ const env = computed(() => envelope(brief.value));
 // (and re-renders the charts) only when those do, not on every edit of the study.
 const caption = computed(() => chartCaption(store.study.value));
 
-staticCell(main, { id: "study", title: "Study" }, studyDetailsEditor(store));
-staticCell(main, { id: "brief", title: "Brief" }, briefControls(store));
+staticCell(inputs, { id: "brief", title: "Brief" }, briefControls(store));
 
-reactiveCell(main, { id: "loads", title: "Design loads" }, () => {
+reactiveCell(inputs, { id: "loads", title: "Design loads" }, () => {
   const a = actions.value;
   const b = brief.value;
   // Unit permanent load of 1 kPa shows the ULS factors at work; schemes add their own self-weight.
@@ -73,7 +86,7 @@ reactiveCell(main, { id: "loads", title: "Design loads" }, () => {
   ]);
 });
 
-reactiveCell(main, { id: "geometry", title: "Roof geometry and floor" }, () => {
+reactiveCell(inputs, { id: "geometry", title: "Roof geometry and floor" }, () => {
   const e = env.value;
   return keyValues([
     ["Span / rise", `${fmt.one(brief.value.spanM / brief.value.riseM)} (rise/span ${fmt.two(brief.value.riseM / brief.value.spanM)})`],
@@ -87,7 +100,7 @@ reactiveCell(main, { id: "geometry", title: "Roof geometry and floor" }, () => {
   ]);
 });
 
-reactiveCell(main, { id: "section", title: "Roof section" }, () =>
+reactiveCell(inputs, { id: "section", title: "Roof section" }, () =>
   chartFigure(
     sectionChartOptions({
       brief: brief.value,
@@ -105,7 +118,7 @@ const factorRows = computed(() => store.study.value.carbon.factors);
 const rateRows = computed(() => store.study.value.cost.rates);
 
 staticCell(
-  main,
+  inputs,
   { id: "scheme-switches", title: "Schemes to compare" },
   controlGroup(
     "Switch schemes on and off",
@@ -113,20 +126,36 @@ staticCell(
   ),
 );
 
-reactiveCell(main, { id: "comparison", title: "Side by side" }, () => {
+const currency = computed(() => store.study.value.cost.onCosts.currency);
+
+reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answer" }, () => {
   const list = results.value;
   if (list.length === 0) return "Switch on at least one scheme to compare.";
-  const { header, rows } = comparisonRows(comparisonTable(list));
-  const table = tableElement(header, rows, { caption: `The schemes at ${brief.value.spanM} m span (per m² figures on usable floor unless stated)`, numeric: header.map((_, i) => i > 0 && i < header.length - 3) });
   const wrap = document.createElement("div");
-  wrap.style.overflowX = "auto";
-  wrap.append(table);
+  for (const part of answerParts(list, currency.value)) {
+    const p = document.createElement("p");
+    p.textContent = part.text;
+    if (part.winner) {
+      p.dataset.winner = part.winner.id;
+      p.dataset.metrics = part.winner.metrics.join(" ");
+    } else p.className = "excluded";
+    wrap.append(p);
+  }
+  return wrap;
+});
+
+reactiveCell(outputs, { id: "comparison", title: "Side by side" }, () => {
+  const list = results.value;
+  if (list.length === 0) return "Switch on at least one scheme to compare.";
+  const wrap = document.createElement("div");
+  wrap.className = "table-scroll";
+  wrap.append(resultsTable(list, currency.value, brief.value.spanM));
   const gaps = gapNotice(tableGaps(list, { factors: factorRows.value, rates: rateRows.value }), "comparison-gaps");
   if (gaps) wrap.append(gaps);
   return wrap;
 });
 
-reactiveCell(main, { id: "comparison-charts", title: "Option charts" }, () => {
+reactiveCell(outputs, { id: "comparison-charts", title: "Option charts" }, () => {
   const list = results.value;
   if (list.length === 0) return null;
   const grid = document.createElement("div");
@@ -161,17 +190,19 @@ for (const s of schemes) {
   const panel = document.createElement("div");
   panel.className = "scheme-panel";
   panel.id = `scheme-${id}`;
-  main.append(panel);
+  outputs.append(panel);
   const heading = document.createElement("h2");
   heading.textContent = s.model.label;
   heading.style.borderLeft = `6px solid ${SCHEME_COLOURS[id]}`;
   heading.style.paddingLeft = "0.5rem";
+  panel.append(heading);
+  reactiveCell(panel, { id: `${id}-summary` }, () => (s.enabled.value ? schemeStatusLine(s.result.value) : "Switched off."));
+  const detail = lazyDetails(panel, `${id}-details`, "Engineering detail: figures, cautions, drawings, members, checks and take-off");
   const about = document.createElement("p");
   about.className = "intro";
   about.textContent = `${s.model.description} Method valid for spans of ${s.model.validSpanM.min}–${s.model.validSpanM.max} m.`;
-  panel.append(heading, about);
-  reactiveCell(panel, { id: `${id}-summary` }, () => (s.enabled.value ? schemeSummary(s.result.value) : "Switched off."));
-  const detail = lazyDetails(panel, `${id}-details`, "Drawings, members, checks and take-off");
+  detail.body.append(about);
+  reactiveCell(detail.body, { id: `${id}-figures` }, () => (s.enabled.value && detail.open.value ? schemeSummary(s.result.value) : null));
   reactiveCell(detail.body, { id: `${id}-drawing` }, () => {
     if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;
@@ -187,14 +218,22 @@ for (const s of schemes) {
     if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, roles, title: `${s.model.label}: plan`, caption: caption.value }), `${id}-plan`));
     return wrap;
   });
+  // Slot for the scheme's 3D analysis model (issue 13, item 7): a cell with id `${id}-model` goes here.
+  const modelSlot = document.createElement("div");
+  modelSlot.className = "model-slot";
+  modelSlot.id = `${id}-model-slot`;
+  detail.body.append(modelSlot);
   reactiveCell(detail.body, { id: `${id}-tables` }, () => {
     if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;
     const wrap = document.createElement("div");
-    wrap.style.overflowX = "auto";
+    wrap.className = "table-scroll";
     wrap.append(memberTable(design), checkTable(design), takeoffTable(design));
     return wrap;
   });
   const options = lazyDetails(panel, `${id}-options-panel`, "Options");
   staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model));
 }
+
+// The study's own lines (title, prepared by, date, notes), at the foot of the brief.
+staticCell(inputs, { id: "study", title: "Study" }, studyDetailsEditor(store));

@@ -10,7 +10,10 @@ export { signal, computed, effect, batch, type Signal, type ReadonlySignal } fro
 export { chartFigure, svgText, svgToPng } from "./chart";
 export { briefControls } from "./brief-controls";
 export { keyValues } from "./key-values";
-export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary } from "./scheme-panel";
+export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary, schemeStatusLine } from "./scheme-panel";
+export { answerParts, inSentence, metricText, type AnswerPart } from "./answer";
+export { sortableTable, type SortColumn, type SortableOptions } from "./sortable-table";
+export { resultsTable, resultColumns } from "./results-table";
 export { studySignals, type SchemeSignals, type StudySignals } from "./scheme-signals";
 export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";

@@ -2,6 +2,7 @@ import type { Design, SchemeModel } from "../schemes/types";
 import type { SchemeResult } from "../pipeline";
 import { materialInfo } from "../materials";
 import { tableElement, fmt } from "./format";
+import { statusOf, metricValue } from "../comparison/verdict";
 import { keyValues } from "./key-values";
 import { numberControl, selectControl, toggleControl, controlGroup } from "./controls";
 import type { StudyStore } from "./study-store";
@@ -24,57 +25,72 @@ export function schemeOptionControls(store: StudyStore, model: SchemeModel): HTM
   return controlGroup(`${model.label}: options`, controls);
 }
 
-const N_TO_KN = 1e-3;
-
-/** The member table of a design: forces, sections, utilisations, governing checks. */
+/** The member table of a design: forces (kN or MN), sections, utilisations, governing checks. */
 export function memberTable(design: Design): HTMLElement {
   return tableElement(
-    ["Element", "Count", "Length (m)", "Section", "Design force (kN)", "Resistance (kN)", "Utilisation", "Governing check"],
-    design.members.map((m) => [m.element, m.count, m.lengthM, m.section, m.designForceN * N_TO_KN, m.resistanceN * N_TO_KN, fmt.two(m.utilisation), m.governing]),
+    ["Element", "Count", "Length (m)", "Section", "Design force", "Resistance", "Utilisation", "Governing check"],
+    design.members.map((m) => [m.element, m.count, m.lengthM, m.section, fmt.force(m.designForceN), fmt.force(m.resistanceN), fmt.two(m.utilisation), fmt.plain(m.governing)]),
     { caption: "Members (force + tension, − compression)", numeric: [false, true, true, false, true, true, true, false] },
   );
 }
 
-/** The checks of a design with their clauses. */
+/** The checks of a design with their clauses; forces in kN or MN. */
 export function checkTable(design: Design): HTMLElement {
   return tableElement(
-    ["Check", "Clause / source", "Demand", "Capacity", "Unit", "Utilisation", "Passes"],
-    design.checks.map((c) => [c.name, c.clause, c.demand, c.capacity, c.unit, fmt.two(c.utilisation), c.passed ? "yes" : "NO"]),
-    { caption: "Checks", numeric: [false, false, true, true, false, true, false] },
+    ["Check", "Clause / source", "Demand", "Capacity", "Utilisation", "Passes"],
+    design.checks.map((c) => [fmt.plain(c.name), fmt.plain(c.clause), fmt.quantity(c.demand, c.unit), fmt.quantity(c.capacity, c.unit), fmt.two(c.utilisation), c.passed ? "yes" : "NO"]),
+    { caption: "Checks", numeric: [false, false, true, true, true, false] },
   );
 }
 
 /** The take-off: quantities and masses by element, with kg/m² of plan. */
 export function takeoffTable(design: Design): HTMLElement {
   return tableElement(
-    ["Element", "Material", "Quantity", "Unit", "Mass (t)", "kg/m² plan"],
-    design.takeoff.map((r) => [r.element, r.material === null ? "—" : (materialInfo(r.material)?.label ?? r.material), r.quantity, r.unit, r.massKg / 1000, r.massKg / design.planAreaM2]),
-    { caption: `Take-off (total ${fmt.int(design.totalMassKg / 1000)} t${design.roofMassKg < design.totalMassKg ? `; roof without anchors ${fmt.int(design.roofMassKg / 1000)} t` : ""}, ${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan)`, numeric: [false, false, true, false, true, true] },
+    ["Element", "Material", "Quantity", "Unit", "Mass (t)", "kg/m² of plan"],
+    design.takeoff.map((r) => [r.element, r.material === null ? "—" : (materialInfo(r.material)?.label ?? r.material), r.quantity, fmt.unit(r.unit), r.massKg / 1000, r.massKg / design.planAreaM2]),
+    { caption: `Take-off (total ${fmt.mass(design.totalMassKg)}${design.roofMassKg < design.totalMassKg ? `; roof without anchors ${fmt.mass(design.roofMassKg)}` : ""}, ${fmt.sig3(design.selfWeightKgPerM2)} kg/m² of plan)`, numeric: [false, false, true, false, true, true] },
   );
 }
 
-/** Summary, verdict and warnings of one scheme result. */
+/** One line on a scheme: its status and, where it has them, its carbon, cost and mass per m² of usable floor. */
+export function schemeStatusLine(result: SchemeResult): HTMLElement {
+  const { design } = result;
+  const status = statusOf(design);
+  const p = document.createElement("p");
+  p.className = status === "feasible" ? "feasible" : status === "infeasible" ? "infeasible" : "out-of-range";
+  const figures: string[] = [];
+  const carbon = metricValue(result, "carbon");
+  const cost = metricValue(result, "cost");
+  const weight = metricValue(result, "weight");
+  if (carbon !== null) figures.push(`${fmt.sig3(carbon)} kgCO2e/m²`);
+  if (cost !== null && result.cost) figures.push(`${fmt.money(cost, result.cost.currency)}/m²`);
+  if (weight !== null) figures.push(`${fmt.sig3(weight)} kg/m² of usable floor`);
+  const lead =
+    status === "infeasible"
+      ? `Not feasible: ${fmt.plain(design.reason)}`
+      : `${status === "feasible" ? "Feasible" : "Passes its checks, but the span is outside its method's valid range"}; governed by ${fmt.plain(design.governing)} (utilisation ${fmt.two(design.maxUtilisation)})`;
+  p.textContent = figures.length > 0 ? `${lead}. ${figures.join(" · ")}.` : `${lead}.`;
+  return p;
+}
+
+/** The engineering figures of one scheme result, and its cautions in plain words. */
 export function schemeSummary(result: SchemeResult): HTMLElement {
   const { design } = result;
   const wrap = document.createElement("div");
-  const verdict = document.createElement("p");
-  verdict.className = design.feasible ? "feasible" : "infeasible";
-  verdict.textContent = design.feasible
-    ? `Feasible. Governing: ${design.governing} at utilisation ${fmt.two(design.maxUtilisation)}; self-weight converged in ${design.iterations} iterations.`
-    : `Not feasible: ${design.reason}`;
-  wrap.append(verdict);
-  const items: [string, string][] = design.summary.map((s) => [s.label, `${fmt.sig3(s.value)}${s.unit ? ` ${s.unit}` : ""}`]);
-  items.push(["Self-weight", `${fmt.one(design.selfWeightKgPerM2)} kg/m² of plan`], ["Usable floor", `${fmt.int(design.usableFloorM2)} m²`], ["Roof mass ÷ enclosed air", fmt.two(design.roofMassKg / design.enclosedAirKg)]);
-  if (result.carbon?.perM2UsableFloor.perM2) items.push(["Embodied carbon (counted modules)", `${fmt.int(result.carbon.totals.counted / 1000)} tCO2e, ${fmt.int(result.carbon.perM2UsableFloor.perM2.counted)} kgCO2e/m² floor`]);
-  if (result.cost?.perM2UsableFloor) items.push(["Cost", `${fmt.one(result.cost.totals.total / 1e6)} million ${result.cost.currency}, ${fmt.int(result.cost.perM2UsableFloor.total)} ${result.cost.currency}/m² floor`]);
-  if (result.error) items.push(["Assessment", result.error]);
+  const items: [string, string][] = design.summary.map((s) => [s.label, `${fmt.sig3(s.value)}${s.unit ? ` ${fmt.unit(s.unit)}` : ""}`]);
+  items.push(["Self-weight", `${fmt.sig3(design.selfWeightKgPerM2)} kg/m² of plan`], ["Usable floor", `${fmt.sig3(design.usableFloorM2)} m²`], ["Roof mass ÷ enclosed air", fmt.two(design.roofMassKg / design.enclosedAirKg)]);
+  if (design.iterations > 0) items.push(["Self-weight iterations", String(design.iterations)]);
+  if (result.carbon?.perM2UsableFloor.perM2) items.push(["Embodied carbon (counted modules)", `${fmt.sig3(result.carbon.totals.counted / 1000)} tCO2e, ${fmt.sig3(result.carbon.perM2UsableFloor.perM2.counted)} kgCO2e/m² of usable floor`]);
+  if (result.cost?.perM2UsableFloor) items.push(["Cost", `${fmt.money(result.cost.totals.total, result.cost.currency)}, ${fmt.money(result.cost.perM2UsableFloor.total, result.cost.currency)}/m² of usable floor`]);
+  if (result.error) items.push(["Not assessed", fmt.plain(result.error)]);
   wrap.append(keyValues(items));
   if (design.warnings.length > 0) {
     const ul = document.createElement("ul");
     ul.className = "warnings";
+    ul.setAttribute("aria-label", "Cautions");
     for (const w of design.warnings) {
       const li = document.createElement("li");
-      li.textContent = w;
+      li.textContent = fmt.plain(w);
       ul.append(li);
     }
     wrap.append(ul);

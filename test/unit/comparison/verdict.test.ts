@@ -1,0 +1,41 @@
+// The answer first (issue 14): the ranking takes only feasible, in-range schemes, and names the rest.
+import { describe, it, expect } from "vitest";
+import { verdict, statusOf, rankMetric } from "../../../src/comparison/verdict";
+import { answerParts } from "../../../src/notebook/answer";
+import { fixtureResults } from "../../helpers/fixtures";
+
+describe("verdict", () => {
+  it("names the lowest of each measure and the next, with the margin between them", () => {
+    const results = fixtureResults();
+    const v = verdict(results);
+    const carbon = v.winners.find((w) => w.metric === "carbon");
+    const ranked = rankMetric(results, "carbon").ranked;
+    expect(carbon?.id).toBe(ranked[0]?.id);
+    expect(carbon?.next?.value).toBe(ranked[1]?.value);
+    expect(ranked[0]!.value).toBeLessThanOrEqual(ranked[1]!.value);
+    expect(v.excluded).toEqual([]);
+  });
+
+  it("leaves out an out-of-range scheme and an infeasible one, each with its reason, and never calls them best", () => {
+    const [a, b] = fixtureResults();
+    const outside = { ...a!, design: { ...a!.design, outsideValidRange: true, status: "out-of-range" as const } };
+    const failed = { ...b!, design: { ...b!.design, feasible: false, status: "infeasible" as const, reason: "fails ring buckling (utilisation 1.30)" } };
+    expect(statusOf(outside.design)).toBe("out-of-range");
+    expect(statusOf(failed.design)).toBe("infeasible");
+    const v = verdict([outside, failed]);
+    expect(v.winners).toEqual([]);
+    expect(v.excluded.map((e) => e.reason)).toEqual(["the span is outside its method's valid range", "not feasible: fails ring buckling (utilisation 1.30)"]);
+    const parts = answerParts([outside, failed], "EUR");
+    expect(parts[0]?.text).toMatch(/none is ranked/);
+    expect(parts[1]?.text).toMatch(/^Left out of the ranking: the cable dome \(the span is outside its method's valid range\); the geodesic steel dome \(not feasible: fails ring buckling/);
+  });
+
+  it("a scheme that wins two measures gets one sentence with both, and the currency on the cost", () => {
+    const results = fixtureResults();
+    const parts = answerParts(results, "EUR");
+    const all = parts.flatMap((p) => p.winner?.metrics ?? []);
+    expect(all.sort()).toEqual(["carbon", "cost", "weight"]);
+    expect(parts.filter((p) => p.winner).length).toBeLessThanOrEqual(3);
+    expect(parts.map((p) => p.text).join(" ")).toMatch(/EUR\/m²/);
+  });
+});
