@@ -1,8 +1,10 @@
+import "./link-prelude";
 import { signal, effect, computed, type Signal, type ReadonlySignal } from "@preact/signals-core";
 import {
   defaultStudy,
   decodeStudyLink,
   encodeStudyLink,
+  compressStudyLink,
   readStoredStudy,
   writeStoredStudy,
   backupUnreadable,
@@ -193,7 +195,7 @@ export function createStudyStore(options: StoreOptions): StudyStore {
   const study = signal(opened.study);
   const notice = signal(opened.notices.join("\n"));
   banners.value = opened.banners;
-  const link = computed(() => `#s=${encodeStudyLink(study.value, defaults)}`);
+  const link = shortLink(study, defaults);
 
   if (options.persist) {
     stampEdits(study);
@@ -235,6 +237,27 @@ export function createStudyStore(options: StoreOptions): StudyStore {
 }
 
 /**
+ * The link that reopens the study: the plain fragment at once, then the compressed one when it is
+ * ready (if the study has not changed meanwhile), so the address and "Copy link" stay short.
+ */
+function shortLink(study: ReadonlySignal<Study>, defaults: Study): ReadonlySignal<string> {
+  const link = signal(`#s=${encodeStudyLink(study.peek(), defaults)}`);
+  effect(() => {
+    const current = study.value;
+    const plain = encodeStudyLink(current, defaults);
+    link.value = `#s=${plain}`;
+    if (typeof CompressionStream === "undefined") return;
+    compressStudyLink(plain).then(
+      (packed) => {
+        if (study.peek() === current) link.value = `#s=${packed}`;
+      },
+      () => undefined, // the plain link stays
+    );
+  });
+  return link;
+}
+
+/**
  * Saves the study to storage and the link to the URL on every change, not on opening (unless a
  * link was opened) and not for a study taken over from another tab. A study that fails the
  * schema (written around `replace`) is not saved, and the notice says why.
@@ -242,11 +265,11 @@ export function createStudyStore(options: StoreOptions): StudyStore {
 function persist(study: Signal<Study>, link: ReadonlySignal<string>, notice: Signal<string>, opened: Opened): { current: Study | null } {
   const fromOtherTab: { current: Study | null } = { current: null };
   let first = true;
+  effect(() => history.replaceState(null, "", link.value));
   effect(() => {
     const current = study.value;
     const skip = (first && !opened.writeNow) || current === fromOtherTab.current;
     first = false;
-    history.replaceState(null, "", link.value);
     if (skip) return;
     const checked = validateStudy(current);
     if (!checked.ok) {

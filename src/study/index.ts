@@ -8,7 +8,7 @@ export { studySchema, validateStudy, StudyMetaSchema, metaFieldProblem } from ".
 export { defaultStudy } from "./defaults";
 export { migrateStudy, MIGRATIONS, type Migration } from "./migrate";
 export { studyFromJson, studyFromObject, studyToJson, describeProblems, type LoadResult } from "./load-study";
-export { encodeStudyLink, decodeStudyLink } from "./link";
+export { encodeStudyLink, decodeStudyLink, compressStudyLink, inflateStudyLink } from "./link";
 export { readStoredStudy, writeStoredStudy, backupUnreadable, STORAGE_KEY, UNREADABLE_KEY, BEFORE_LINK_KEY, type KeyValueStore, type StoredStudy } from "./storage";
 export { setIn, getIn, diff, mergeDiff, sameValue } from "../kernel/patch";
 export type { FieldProblem } from "../kernel/validate";
