@@ -2,9 +2,9 @@
 // and the comparison of two study files.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, tableElement, downloadText, signal, fmt } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, tableElement, downloadText, signal, computed, fmt, studyFilePicker } from "../src/notebook";
 import { SCHEMES } from "../src/schemes";
-import { assumptionsRecord, studyFromJson, describeProblems, type Study } from "../src/study";
+import { assumptionsRecord, type Assumption, type Study } from "../src/study";
 import { compareStudies, HEADLINE_METRICS, type SchemeDelta } from "../src/comparison";
 import { defaultCatalogue, formatCsv } from "../src/catalogue";
 import { designBasis, summariseCase, summariseCombination, type DesignBasis } from "../src/loads";
@@ -73,24 +73,54 @@ function designBasisTables(basis: DesignBasis): HTMLElement {
 
 reactiveCell(main, { id: "design-basis", title: "Design basis: load cases and combinations" }, () => designBasisTables(designBasis(store.study.value.brief)));
 
-reactiveCell(main, { id: "record", title: "Assumptions record" }, () => {
-  const record = assumptionsRecord(store.study.value);
+// The record, searchable: every word typed must appear in the row (input, group, value, unit, default or source).
+const query = signal("");
+const search = document.createElement("div");
+search.className = "control";
+const searchLabel = document.createElement("label");
+searchLabel.htmlFor = "record-search";
+searchLabel.textContent = "Search the record (input, group, value or source)";
+const searchInput = document.createElement("input");
+searchInput.type = "search";
+searchInput.id = "record-search";
+searchInput.placeholder = "e.g. snow, steel, EN 1993, changed";
+searchInput.size = 40;
+searchInput.addEventListener("input", () => {
+  query.value = searchInput.value;
+});
+search.append(searchLabel, searchInput);
+
+/** Whether every word of the query is in the row's text ("changed" also matches a changed input). */
+function matches(row: Assumption, words: readonly string[]): boolean {
+  const text = `${row.group} ${row.label} ${row.value} ${row.unit} ${row.default} ${row.source} ${row.changed ? "changed" : ""}`.toLowerCase();
+  return words.every((w) => text.includes(w));
+}
+
+const record = computed(() => assumptionsRecord(store.study.value));
+const recordCell = staticCell(main, { id: "record", title: "Assumptions record" }, search);
+reactiveCell(recordCell, { id: "record-table" }, () => {
+  const all = record.value;
+  const words = query.value.toLowerCase().split(/\s+/).filter((w) => w !== "");
+  const shown = words.length === 0 ? all : all.filter((r) => matches(r, words));
   const wrap = document.createElement("div");
-  const changed = record.filter((r) => r.changed).length;
+  const changed = all.filter((r) => r.changed).length;
   const p = document.createElement("p");
-  p.textContent = `${record.length} inputs, ${changed} changed from spanbook's defaults (marked ●).`;
+  p.id = "record-count";
+  p.setAttribute("aria-live", "polite");
+  p.textContent = `${all.length} inputs, ${changed} changed from spanbook's defaults (marked ●)${words.length > 0 ? `; ${shown.length} match “${query.value.trim()}”` : ""}.`;
   const button = document.createElement("button");
   button.type = "button";
   button.id = "download-record";
-  button.textContent = "Download the record (CSV)";
+  button.textContent = "Download the whole record (CSV)";
   button.addEventListener("click", () => {
-    const rows = record.map(({ raw: _raw, ...r }) => ({ ...r, changed: r.changed ? "yes" : "no" }));
+    const rows = all.map(({ raw: _raw, ...r }) => ({ ...r, changed: r.changed ? "yes" : "no" }));
     downloadText("assumptions.csv", `${formatCsv(rows, ["group", "path", "label", "value", "unit", "default", "source", "changed"])}\n`, "text/csv");
   });
   const table = tableElement(
     ["", "Group", "Input", "Value", "Unit", "Default", "Source"],
-    record.map((r) => [r.changed ? "●" : "", r.group, r.label, r.value, r.unit, r.default, r.source]),
+    shown.map((r) => [r.changed ? "●" : "", r.group, r.label, r.value, fmt.unit(r.unit), r.default, r.source]),
   );
+  table.id = "record-rows";
   const scroll = document.createElement("div");
   scroll.style.maxHeight = "32rem";
   scroll.style.overflow = "auto";
@@ -103,33 +133,38 @@ reactiveCell(main, { id: "record", title: "Assumptions record" }, () => {
 const other = signal<{ name: string; study: Study } | null>(null);
 const otherNotice = signal("");
 const picker = document.createElement("div");
-const label = document.createElement("label");
-label.htmlFor = "other-study";
-label.textContent = "Study file to compare with the current study (A = current, B = the file): ";
-const input = document.createElement("input");
-input.type = "file";
-input.id = "other-study";
-input.accept = ".json,application/json";
-input.addEventListener("change", async () => {
-  const file = input.files?.[0];
-  if (!file) return;
-  const result = studyFromJson(await file.text());
-  if (result.ok) {
-    other.value = { name: file.name, study: result.study };
-    otherNotice.value = "";
-  } else {
-    otherNotice.value = `${file.name} was not opened:\n${describeProblems(result.problems)}`;
-  }
-});
-picker.append(label, input);
+picker.className = "study-tools";
+const pickerText = document.createElement("span");
+pickerText.textContent = "A is the current study; B is a study file you choose.";
+picker.append(
+  pickerText,
+  ...studyFilePicker({
+    label: "Choose study file B…",
+    inputLabel: "Study file to compare with the current study",
+    id: "other-study",
+    onStudy: (study, name) => {
+      other.value = { name, study };
+      otherNotice.value = "";
+    },
+    onRefused: (message) => {
+      otherNotice.value = message;
+    },
+  }),
+);
 staticCell(main, { id: "compare-studies-picker", title: "Compare two studies" }, picker);
 
-function cell(d: SchemeDelta, key: (typeof HEADLINE_METRICS)[number]["key"]): string {
-  const a = d.a[key];
-  const b = d.b[key];
-  if (a === null || b === null) return `${a === null ? "infeasible" : fmt.sig3(a)} → ${b === null ? "infeasible" : fmt.sig3(b)}`;
-  const change = b - a;
-  return `${fmt.sig3(a)} → ${fmt.sig3(b)} (${change >= 0 ? "+" : "−"}${fmt.sig3(Math.abs(change))})`;
+/** How a scheme reads in one study: switched off, not feasible, or its value. */
+function side(study: Study, id: string, value: number | null): string {
+  if (study.schemes[id as keyof Study["schemes"]]?.enabled === false) return "switched off";
+  return value === null ? "not feasible" : fmt.sig3(value);
+}
+
+function cell(d: SchemeDelta, key: (typeof HEADLINE_METRICS)[number]["key"], a: Study, b: Study): string {
+  const va = d.a[key];
+  const vb = d.b[key];
+  if (va === null || vb === null) return `${side(a, d.id, va)} → ${side(b, d.id, vb)}`;
+  const change = vb - va;
+  return `${fmt.sig3(va)} → ${fmt.sig3(vb)} (${change >= 0 ? "+" : "−"}${fmt.sig3(Math.abs(change))})`;
 }
 
 reactiveCell(main, { id: "compare-studies" }, () => {
@@ -140,13 +175,17 @@ reactiveCell(main, { id: "compare-studies" }, () => {
   const wrap = document.createElement("div");
   const header = ["Scheme", ...HEADLINE_METRICS.map((m) => `${m.label} (${m.unit})`)];
   wrap.append(
-    tableElement(header, comparison.overall.map((d) => [d.label, ...HEADLINE_METRICS.map((m) => cell(d, m.key))]), { caption: `All changes together: current study → ${o.name}` }),
+    tableElement(header, comparison.overall.map((d) => [d.label, ...HEADLINE_METRICS.map((m) => cell(d, m.key, store.study.value, o.study))]), { caption: `All changes together: current study (A) → ${o.name} (B)` }),
   );
   for (const change of comparison.changes) {
     const h = document.createElement("h3");
     h.textContent = `${change.label}: ${change.valueA} → ${change.valueB}${change.unit ? ` ${change.unit}` : ""}`;
     wrap.append(h);
-    if (change.effect) wrap.append(tableElement(header, change.effect.map((d) => [d.label, ...HEADLINE_METRICS.map((m) => cell(d, m.key))]), { caption: "This change alone" }));
+    // "This change alone" is A with only this input taken from B: schemes are switched as in A, except the switch that changed.
+    const switched = /^schemes\.([\w-]+)\.enabled$/.exec(change.key)?.[1];
+    const a = store.study.value;
+    const alone = switched ? { ...a, schemes: { ...a.schemes, [switched]: { ...a.schemes[switched as keyof Study["schemes"]], enabled: change.valueB === "true" || change.valueB === "yes" } } } : a;
+    if (change.effect) wrap.append(tableElement(header, change.effect.map((d) => [d.label, ...HEADLINE_METRICS.map((m) => cell(d, m.key, store.study.value, alone))]), { caption: "This change alone" }));
     else wrap.append("(effect of this change alone not computed)");
   }
   if (comparison.changes.length === 0) wrap.append("The two studies have the same inputs.");

@@ -23,3 +23,4 @@ export { riskInputsEditor, ensureRiskStyle, inputUsedBy, inputKind, SHAPE_WORDS,
 export { studyDetailsEditor, studyDetailItems, describeChangedAt } from "./study-details";
 export { factorColumns, provenanceCard, groupEditTools, benchmarkEditor, trackCarbonEdits, describeCarbonEdit, type LastEdit } from "./carbon-editors";
 export { mountEditableTable, unmountEditableTable, type TableColumn, type EditableTableProps, type EditOutcome } from "./editable-table";
+export { studyFilePicker } from "./file-picker";

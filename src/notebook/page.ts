@@ -1,7 +1,8 @@
 import { effect } from "@preact/signals-core";
 import { PAGES, CAUTION, type PageId } from "./pages";
 import { createStudyStore, type StudyStore } from "./study-store";
-import { studyFromJson, studyFileText, describeProblems } from "../study";
+import { studyFileText } from "../study";
+import { studyFilePicker } from "./file-picker";
 import { downloadText } from "./download";
 
 export interface Page {
@@ -115,21 +116,18 @@ function studyTools(store: StudyStore, readOnly: boolean): HTMLElement {
   effect(() => {
     name.textContent = `Study: ${store.study.value.meta.title}`;
   });
-  const file = document.createElement("input");
-  file.type = "file";
-  file.accept = ".json,application/json";
-  file.hidden = true;
-  file.setAttribute("aria-label", "Study file to open");
-  file.addEventListener("change", async () => {
-    const chosen = file.files?.[0];
-    if (!chosen) return;
-    const result = studyFromJson(await chosen.text());
-    const problems = result.ok ? store.replace(result.study) : describeProblems(result.problems);
-    if (problems === null) store.origin.value = `file ${chosen.name}`;
-    store.notice.value = problems === null ? `Opened ${chosen.name}.` : `${chosen.name} was not opened; nothing changed:\n${problems}`;
-    file.value = "";
+  const [open, file] = studyFilePicker({
+    label: "Open study file…",
+    inputLabel: "Study file to open",
+    onStudy: (study, fileName) => {
+      const problems = store.replace(study);
+      if (problems === null) store.origin.value = `file ${fileName}`;
+      store.notice.value = problems === null ? `Opened ${fileName}.` : `${fileName} was not opened; nothing changed:\n${problems}`;
+    },
+    onRefused: (message) => {
+      store.notice.value = message;
+    },
   });
-  const open = button("Open study file…", () => file.click());
   const save = button("Save study file", () => {
     const slug = store.study.value.meta.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || "study";
     downloadText(`${slug}.spanbook.json`, studyFileText(store.study.value), "application/json");
@@ -143,6 +141,6 @@ function studyTools(store: StudyStore, readOnly: boolean): HTMLElement {
       store.notice.value = `Copy this link to share the study:\n${url}`;
     }
   });
-  bar.append(name, open, ...(readOnly ? [] : [save, copy]), file);
+  bar.append(name, ...(open && file ? [open, file] : []), ...(readOnly ? [] : [save, copy]));
   return bar;
 }
