@@ -30,7 +30,16 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
     { x: a, y: 0, side: "right" },
     { x: a, y: brief.eavesHeightM, side: "right" },
   ];
-  const members = joinByRole(input.lines ?? []);
+  // A design that gives its floor carries the usable floor it counted as lines (role "usable floor",
+  // "support zone"): those are shaded, exactly; otherwise the brief's envelope under the roof surface.
+  const isFloorLine = (l: DrawingLine) => l.role === "usable floor" || l.role === "support zone";
+  const floorLines = (input.lines ?? []).filter(isFloorLine);
+  const members = joinByRole((input.lines ?? []).filter((l) => !isFloorLine(l)));
+  const usableSpans = floorLines.some((l) => l.role === "usable floor")
+    ? floorLines.filter((l) => l.role === "usable floor").map((l) => ({ x1: Math.min(...l.points.map((p) => p[0])), x2: Math.max(...l.points.map((p) => p[0])), y1: 0, y2: brief.minClearHeightM }))
+    : [{ x1: -env.usableRadiusM, x2: env.usableRadiusM, y1: 0, y2: brief.minClearHeightM }];
+  const supportZones = floorLines.filter((l) => l.role === "support zone").map((l) => ({ x1: Math.min(...l.points.map((p) => p[0])), x2: Math.max(...l.points.map((p) => p[0])), y1: 0, y2: brief.minClearHeightM }));
+  const usableLabel = floorLines.length > 0 ? `usable floor (as counted) at ≥ ${brief.minClearHeightM} m clear` : `usable floor ⌀ ${(2 * env.usableRadiusM).toFixed(0)} m at ≥ ${brief.minClearHeightM} m clear`;
   const top = brief.eavesHeightM + brief.riseM;
   return {
     title: input.title,
@@ -43,9 +52,10 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
     color: { legend: members.length > 0, ...(input.roles ? { domain: [...input.roles] } : {}) },
     marks: [
       Plot.ruleY([0]),
-      Plot.rect([{ x1: -env.usableRadiusM, x2: env.usableRadiusM, y1: 0, y2: brief.minClearHeightM }], { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#c9e3c5", fillOpacity: 0.6 }),
+      Plot.rect(usableSpans, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#c9e3c5", fillOpacity: 0.6 }),
+      ...(supportZones.length > 0 ? [Plot.rect(supportZones, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#b8b8b8", fillOpacity: 0.8 })] : []),
       Plot.ruleY([brief.minClearHeightM], { stroke: "#3a7d32", strokeDasharray: "4 3" }),
-      Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => `usable floor ⌀ ${(2 * env.usableRadiusM).toFixed(0)} m at ≥ ${brief.minClearHeightM} m clear`, dy: -6, fill: "#3a7d32" }),
+      Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => usableLabel, dy: -6, fill: "#3a7d32" }),
       Plot.line(walls, { x: "x", y: "y", z: "side", stroke: "#555", strokeWidth: 2 }),
       Plot.line(roof, { x: "x", y: "y", stroke: "#1b1f24", strokeWidth: 2 }),
       ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 1.2 })] : []),

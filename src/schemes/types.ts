@@ -36,8 +36,8 @@ export type OptionSpec =
       /** A free proportion: the pipeline may search it within [min, max] (step / integer respected) unless the user pins it. */
       free?: boolean;
     }
-  | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string }
-  | { key: string; label: string; kind: "toggle"; unit: ""; source: string };
+  | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string; free?: boolean }
+  | { key: string; label: string; kind: "toggle"; unit: ""; source: string; free?: boolean };
 
 /** A number the page shows in the scheme's summary. */
 export interface SummaryItem {

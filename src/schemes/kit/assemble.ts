@@ -1,7 +1,7 @@
 import type { Brief } from "../../brief";
 import type { Check, Design, DesignAnalysis, DesignStatus, DrawingLine, FloorEnvelope, MassByGroupKg, MemberGroup, SchemeId, SchemeModel, SummaryItem } from "../types";
 import type { TakeoffGroup, TakeoffRow } from "../../takeoff/takeoff-row";
-import { usableFloorM2 } from "./usable-floor";
+import { usableFloorLines, usableFloorM2 } from "./usable-floor";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { enclosedAirMassKg } from "../../mechanics/air";
 
@@ -37,14 +37,18 @@ export function capEnvelope(cap: SphericalCap, eavesHeightM: number): Pick<Desig
 const ENVELOPE_ITEMS: readonly string[] = ["fabric-ptfe-glass", "fabric-pvc-polyester", "etfe-cushion", "glazing", "metal-deck", "timber-deck", "roofing-membrane"];
 
 /**
- * A row's group: its own, else by its cost item — anchors and perimeter columns substructure,
- * steel rings perimeter, fabric, cladding and decks envelope, the rest structure.
+ * A row's group: its own, else by its cost item and element — anchors, columns and foundations
+ * substructure; perimeter rings (steel or concrete, with their reinforcement and tendons; not a
+ * central hub ring) and edge beams perimeter; fabric, cladding and decks envelope; the rest structure.
  */
 export function takeoffGroupOf(row: TakeoffRow): TakeoffGroup {
   if (row.group) return row.group;
-  if (row.costItem === "anchor" || row.costItem === "steel-column") return "substructure";
-  if (row.costItem === "steel-ring") return "perimeter";
-  return ENVELOPE_ITEMS.includes(row.costItem) ? "envelope" : "structure";
+  const element = row.element.toLowerCase();
+  if (row.costItem === "anchor" || row.costItem === "steel-column" || /\b(anchors?|columns?|foundations?)\b/.test(element)) return "substructure";
+  if (ENVELOPE_ITEMS.includes(row.costItem)) return "envelope";
+  if (/\bcentral\b/.test(element)) return "structure";
+  if (row.costItem === "steel-ring" || /\bring\b/.test(element) || /\bedge beams?\b/.test(element)) return "perimeter";
+  return "structure";
 }
 
 /** Take-off rows that are substructure, not roof: ground anchors, columns and dead-weight foundations. */
@@ -110,7 +114,8 @@ export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "l
     enclosedAirKg: enclosedAirMassKg(parts.enclosedVolumeM3),
     governing: governingCheck ? governingCheck.name : "",
     maxUtilisation: governingCheck ? governingCheck.utilisation : 0,
-    drawing: parts.drawing,
+    // The section carries the usable floor exactly as counted (role "usable floor").
+    drawing: parts.floor ? { ...parts.drawing, section: [...parts.drawing.section, ...usableFloorLines(brief, parts.floor)] } : parts.drawing,
     ...(parts.analysis ? { analysis: parts.analysis } : {}),
   };
 }

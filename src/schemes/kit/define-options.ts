@@ -25,6 +25,8 @@ export interface SelectOption {
   choices: readonly { value: string; label: string }[];
   default: string;
   source: string;
+  /** A free proportion: the pipeline may search its choices unless the user pins it. */
+  free?: boolean;
 }
 
 /** A yes/no option. */
@@ -33,6 +35,8 @@ export interface ToggleOption {
   label: string;
   default: boolean;
   source: string;
+  /** A free proportion: the pipeline may try both unless the user pins it. */
+  free?: boolean;
 }
 
 export type OptionDeclaration = NumberOption | SelectOption | ToggleOption;
@@ -55,9 +59,9 @@ function specOf(key: string, d: OptionDeclaration): OptionSpec {
       return { key, ...rest };
     }
     case "select":
-      return { key, label: d.label, kind: "select", unit: "", choices: d.choices, source: d.source };
+      return { key, label: d.label, kind: "select", unit: "", choices: d.choices, source: d.source, ...(d.free ? { free: true } : {}) };
     case "toggle":
-      return { key, label: d.label, kind: "toggle", unit: "", source: d.source };
+      return { key, label: d.label, kind: "toggle", unit: "", source: d.source, ...(d.free ? { free: true } : {}) };
   }
 }
 

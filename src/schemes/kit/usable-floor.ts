@@ -23,10 +23,37 @@ function clearAt(brief: Brief, floor: FloorEnvelope, rM: number): boolean {
   return soffitHeightAtM(floor.soffit, rM) >= brief.minClearHeightM;
 }
 
+/** Length of the circle of radius r (about the plan centre) inside a disc of radius c centred R from the centre, m. */
+function arcInsideDiscM(rM: number, centreM: number, clearM: number): number {
+  if (rM + centreM <= clearM) return 2 * Math.PI * rM; // the whole circle lies in the disc
+  if (Math.abs(rM - centreM) >= clearM || centreM <= 0) return 0;
+  const cos = (rM * rM + centreM * centreM - clearM * clearM) / (2 * rM * centreM);
+  return 2 * rM * Math.acos(Math.max(-1, Math.min(1, cos)));
+}
+
+/** Sub-annuli a support's zone is integrated on where only part of it is usable floor. */
+const ZONE_RINGS = 64;
+
+/**
+ * Usable floor lost to one support's clear zone (a disc), m²: the whole disc where the floor
+ * under all of it is otherwise usable; else the disc's area on the usable annuli, integrated by the
+ * arc of each annulus inside the disc (a zone over the centre counts its whole circle there).
+ */
+function supportLossM2(brief: Brief, floor: FloorEnvelope, s: FloorEnvelope["supports"][number]): number {
+  const a = brief.spanM / 2;
+  const from = Math.max(0, s.radiusM - s.clearRadiusM);
+  const to = Math.min(a, s.radiusM + s.clearRadiusM);
+  if (!(to > from)) return 0;
+  const dr = (to - from) / ZONE_RINGS;
+  const usable = Array.from({ length: ZONE_RINGS }, (_, k) => clearAt(brief, floor, from + (k + 0.5) * dr));
+  if (usable.every(Boolean) && s.radiusM + s.clearRadiusM <= a) return Math.PI * s.clearRadiusM ** 2;
+  return usable.reduce((sum, ok, k) => sum + (ok ? arcInsideDiscM(from + (k + 0.5) * dr, s.radiusM, s.clearRadiusM) * dr : 0), 0);
+}
+
 /**
  * Usable floor by one rule: the plan area where the soffit of the structure's lowest members is at
  * least the brief's minimum clear height above the floor, less the clear zones of the supports that
- * stand on the floor inside the plan (each zone counted where the floor around it is otherwise usable).
+ * stand on the floor inside the plan (each zone counted where the floor under it is otherwise usable).
  */
 export function usableFloorM2(brief: Brief, floor: FloorEnvelope): number {
   const a = brief.spanM / 2;
@@ -36,14 +63,7 @@ export function usableFloorM2(brief: Brief, floor: FloorEnvelope): number {
     if (!(s.radiusM >= 0 && s.clearRadiusM >= 0 && Number.isInteger(s.count) && s.count >= 0)) {
       throw new RangeError(`invalid floor.supports entry: radius ${s.radiusM} m, clear radius ${s.clearRadiusM} m, count ${s.count} (expected radii ≥ 0 and a whole count ≥ 0)`);
     }
-    if (s.radiusM - s.clearRadiusM >= a) continue;
-    const samples = 16;
-    let usable = 0;
-    for (let k = 0; k < samples; k++) {
-      const r = s.radiusM - s.clearRadiusM + ((k + 0.5) / samples) * 2 * s.clearRadiusM;
-      if (r >= 0 && r <= a && clearAt(brief, floor, r)) usable++;
-    }
-    supportsM2 += s.count * Math.PI * s.clearRadiusM ** 2 * (usable / samples);
+    supportsM2 += s.count * supportLossM2(brief, floor, s);
   }
   return Math.max(0, underSoffit - supportsM2);
 }
