@@ -26,6 +26,18 @@ export interface PartialFactors {
 /** Which EN 1990 expression sets the ULS gravity load: 6.10 alone, or the less favourable of 6.10a and 6.10b. */
 export type UlsExpression = "6.10" | "6.10a/b";
 
+/**
+ * How each scheme's rise is set: "own" — each scheme's rise is searched within its rise ÷ span range
+ * and the height limit; "common" — every scheme takes the brief's rise (in proportion at other spans,
+ * within the height limit).
+ */
+export type RiseRule = "own" | "common";
+export const RISE_RULES: readonly RiseRule[] = ["own", "common"];
+
+/** What the proportion search minimises per m² of usable floor. */
+export type SearchObjective = "carbon" | "mass" | "cost";
+export const SEARCH_OBJECTIVES: readonly SearchObjective[] = ["carbon", "mass", "cost"];
+
 export interface Brief {
   /** Clear span of the circular plan (diameter), m. Allowed 30–500. */
   spanM: number;
@@ -35,6 +47,12 @@ export interface Brief {
   eavesHeightM: number;
   /** Minimum clear height under the structure for floor to count as usable, m. */
   minClearHeightM: number;
+  /** Highest the roof may reach above the floor (the planning envelope), m. Eaves + rise ≤ this. */
+  heightLimitM: number;
+  /** Each scheme at its own rise, or one common rise for all. */
+  riseRule: RiseRule;
+  /** What each scheme's free proportions are chosen to minimise, per m² of usable floor. */
+  objective: SearchObjective;
   /** Characteristic ground snow load s_k, kPa (EN 1991-1-3 §4). */
   snowGroundKPa: number;
   /** Fundamental basic wind velocity v_b, m/s (EN 1991-1-4 §4.2). */
@@ -70,6 +88,9 @@ export const DEFAULT_BRIEF: Brief = {
   riseM: 24, // span/rise ≈ 6.7, common practice for domes (no source)
   eavesHeightM: 12,
   minClearHeightM: 10,
+  heightLimitM: 60, // a planning envelope placeholder for the demo arena, to be replaced by the project's own
+  riseRule: "own",
+  objective: "carbon",
   snowGroundKPa: 0.6,
   windBasicMPerS: 24,
   terrain: "III",

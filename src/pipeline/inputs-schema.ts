@@ -25,6 +25,8 @@ function schemeSettingSchema(model: SchemeModel) {
   const setting = v.object({
     enabled: v.optional(flag(), true),
     options: v.optional(v.strictObject(entries, (issue) => `unknown option ${JSON.stringify((issue as { key?: unknown }).key ?? "")} (expected one of ${model.options.map((o) => o.key).join(", ")})`), {}),
+    pinned: v.optional(v.array(oneOf(model.options.map((o) => o.key) as unknown as readonly [string, ...string[]]), "expected a list of option keys")),
+    riseM: v.optional(numberIn(0.5, 250, "m")),
   });
   const optionsOf = (s: unknown) => ({ ...model.defaults, ...((s as { options?: SchemeOptions }).options ?? {}) });
   const rules = OPTION_RULES.filter((rule) => rule.scheme === model.id).map((rule) =>

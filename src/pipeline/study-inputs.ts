@@ -5,7 +5,12 @@ import type { RateRow, OnCosts } from "../cost";
 
 export interface SchemeSetting {
   enabled: boolean;
+  /** The scheme's options; a free one that is not pinned is only the proportion search's starting point. */
   options: SchemeOptions;
+  /** Free proportions the user fixed: the search leaves them at their value in `options`. */
+  pinned?: string[];
+  /** A rise the user fixed for this scheme under the "own" rise rule, m (the search then leaves it). */
+  riseM?: number;
 }
 
 /**

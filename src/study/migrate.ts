@@ -1,5 +1,6 @@
 import { STUDY_SCHEMA_VERSION } from "./study";
 import { migrateRiskInputsV1 } from "../risk/migrate-risk-inputs";
+import { migrateEnvelopeV2 } from "./migrate-envelope";
 
 /** A step that turns a study of version n into version n + 1. */
 export type Migration = (study: Record<string, unknown>) => Record<string, unknown>;
@@ -9,9 +10,12 @@ export type Migration = (study: Record<string, unknown>) => Record<string, unkno
  * bumps STUDY_SCHEMA_VERSION.
  * 1 → 2: risk inputs address table rows by material or item id instead of position, and store
  * their ranges as factors on (or offsets from) the study's value instead of absolute low/mode/high.
+ * 2 → 3: the brief gains its envelope (height limit, rise rule "common" for a study saved before,
+ * the search objective) and each scheme the pins of the options its user changed.
  */
 export const MIGRATIONS: Readonly<Record<number, Migration>> = {
   1: migrateRiskInputsV1,
+  2: migrateEnvelopeV2,
 };
 
 /**

@@ -4,7 +4,7 @@ import type { SchemeSetting } from "../pipeline/study-inputs";
 export type { SchemeSetting };
 
 /** The version of the study file this code writes. Older files are migrated on load. */
-export const STUDY_SCHEMA_VERSION = 2;
+export const STUDY_SCHEMA_VERSION = 3;
 
 export interface StudyMeta {
   title: string;

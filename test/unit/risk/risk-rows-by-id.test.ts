@@ -4,7 +4,7 @@
 // material or cost item id, and ranges are stored around the study's value.
 import { describe, it, expect } from "vitest";
 import { readFileSync } from "node:fs";
-import { studyFromJson, setIn, getIn, type Study } from "../../../src/study";
+import { studyFromJson, setIn, getIn, STUDY_SCHEMA_VERSION, type Study } from "../../../src/study";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { parseFactorCsv, factorRowsToCsv } from "../../../src/carbon";
 import { parseRateCsv, rateRowsToCsv } from "../../../src/cost";
@@ -100,7 +100,7 @@ describe("a study saved by schema version 1 (rows by position, absolute ranges) 
     const opened = studyFromJson(JSON.stringify(old));
     expect(opened.ok).toBe(true);
     if (!opened.ok) return;
-    expect(opened.study.schemaVersion).toBe(2);
+    expect(opened.study.schemaVersion).toBe(STUDY_SCHEMA_VERSION);
     expect(opened.study.risk.samples).toBe(777);
     const steel = opened.study.risk.inputs.find((i) => i.id === "carbon-steel-plate");
     expect(steel?.path).toEqual(["carbon", "factors", { material: "steel-plate" }, "a1a3KgCO2ePerKg"]);
