@@ -1,7 +1,11 @@
+import type { DesignStatus } from "../schemes/types";
+
 /** One span's value of a metric for each scheme (NaN or missing where the scheme is infeasible). */
 export interface SpanValues {
   spanM: number;
   values: Readonly<Record<string, number>>;
+  /** Each scheme's status there: only "feasible" ones can be best (a scheme without one counts by its value alone). */
+  status?: Readonly<Record<string, DesignStatus>>;
 }
 
 /** A change of the best (lowest) scheme between two consecutive spans. */
@@ -14,12 +18,16 @@ export interface Crossover {
   to: string | null;
 }
 
-/** The scheme with the lowest finite value at one span, or null when none is feasible. */
-export function bestAt(values: Readonly<Record<string, number>>): string | null {
+/**
+ * The scheme with the lowest finite value at one span, or null when none is feasible. A scheme
+ * whose status is given and is not "feasible" (out of its method's range, or infeasible) is never best.
+ */
+export function bestAt(values: Readonly<Record<string, number>>, status?: Readonly<Record<string, DesignStatus>>): string | null {
   let best: string | null = null;
   let bestValue = Number.POSITIVE_INFINITY;
   for (const [id, value] of Object.entries(values)) {
-    if (Number.isFinite(value) && value < bestValue) {
+    const ranked = status?.[id] === undefined || status[id] === "feasible";
+    if (ranked && Number.isFinite(value) && value < bestValue) {
       best = id;
       bestValue = value;
     }
@@ -36,7 +44,7 @@ export function crossovers(rows: readonly SpanValues[]): Crossover[] {
   const out: Crossover[] = [];
   let previous: { spanM: number; best: string | null } | undefined;
   for (const row of sorted) {
-    const best = bestAt(row.values);
+    const best = bestAt(row.values, row.status);
     if (previous && best !== previous.best) out.push({ fromSpanM: previous.spanM, toSpanM: row.spanM, from: previous.best, to: best });
     previous = { spanM: row.spanM, best };
   }
@@ -51,7 +59,7 @@ export function describeCrossovers(rows: readonly SpanValues[], quality: string,
   if (!first || !last) return "No spans were evaluated.";
   const changes = crossovers(sorted);
   const name = (id: string | null) => (id === null ? "no scheme" : label(id));
-  const start = bestAt(first.values);
+  const start = bestAt(first.values, first.status);
   if (changes.length === 0) return `${name(start)} is ${quality} across the whole range (${first.spanM}–${last.spanM} m).`;
   const parts = [`${name(start)} is ${quality} from ${first.spanM} m`];
   for (const c of changes) parts.push(`${name(c.to)} from ${c.toSpanM} m (the change lies between ${c.fromSpanM} and ${c.toSpanM} m)`);
