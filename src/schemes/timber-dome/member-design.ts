@@ -27,44 +27,78 @@ export interface MemberCheck {
   demand: MemberDemand;
 }
 
+/** Instability factors k_c of a section about both axes for its buckling lengths (EN 1995-1-1 eqs 6.21/6.22, 6.25–6.29, β_c = 0.1): they depend on the section, not the load. */
+interface SectionBuckling {
+  kcY: number;
+  kcZ: number;
+}
+
+function kcAbout(section: GlulamSection, glulam: GlulamClass, lengthM: number, secondMomentM4: number): number {
+  return timberBucklingFactor(timberRelativeSlenderness(lengthM / Math.sqrt(secondMomentM4 / section.areaM2), glulam.compressionPa, glulam.modulus5PctPa), GLULAM_BETA_C);
+}
+
+function sectionBuckling(section: GlulamSection, glulam: GlulamClass, lengths: BucklingLengths): SectionBuckling {
+  return { kcY: kcAbout(section, glulam, lengths.strongM, section.secondMomentYM4), kcZ: kcAbout(section, glulam, lengths.weakM, section.secondMomentZM4) };
+}
+
+/** The utilisation number alone (no text), for the section search. */
+function utilisationOf(section: GlulamSection, glulam: GlulamClass, buckling: SectionBuckling, demand: MemberDemand, gammaM: number): number {
+  const bendingPa = Math.abs(demand.momentNm) / section.sectionModulusYM3;
+  const axialPa = Math.abs(demand.forceN) / section.areaM2;
+  const bendingStrengthPa = timberDesignStrengthPa(glulam.bendingPa, demand.kMod, gammaM);
+  if (demand.forceN >= 0) return timberTensionBendingUtilisation(axialPa, timberDesignStrengthPa(glulam.tensionPa, demand.kMod, gammaM), bendingPa, bendingStrengthPa);
+  return timberCompressionBendingUtilisation({
+    compressionPa: axialPa,
+    compressionStrengthPa: timberDesignStrengthPa(glulam.compressionPa, demand.kMod, gammaM),
+    kcY: buckling.kcY,
+    kcZ: buckling.kcZ,
+    bendingYPa: bendingPa,
+    bendingZPa: 0,
+    bendingStrengthYPa: bendingStrengthPa,
+    bendingStrengthZPa: bendingStrengthPa,
+  });
+}
+
+function checkOf(utilisation: number, demand: MemberDemand): MemberCheck {
+  const governing = demand.forceN >= 0 ? `tension and bending (${demand.label}), EN 1995-1-1 eq. 6.17` : `compression, bending and buckling (${demand.label}), EN 1995-1-1 eqs 6.23/6.24`;
+  return { utilisation, governing, demand };
+}
+
 /**
  * Utilisation of a glulam member under one case: compression with bending and buckling
  * (EN 1995-1-1 §6.3.2 eqs 6.23/6.24, k_c from eqs 6.25–6.29 with β_c = 0.1) or tension with bending
  * (§6.2.3 eq. 6.17), design strengths k_mod·f_k/γ_M (eq. 2.14).
  */
 export function memberUtilisation(section: GlulamSection, glulam: GlulamClass, lengths: BucklingLengths, demand: MemberDemand, gammaM: number): MemberCheck {
-  const design = (fk: number) => timberDesignStrengthPa(fk, demand.kMod, gammaM);
-  const bendingPa = Math.abs(demand.momentNm) / section.sectionModulusYM3;
-  const axialPa = Math.abs(demand.forceN) / section.areaM2;
-  if (demand.forceN >= 0) {
-    const utilisation = timberTensionBendingUtilisation(axialPa, design(glulam.tensionPa), bendingPa, design(glulam.bendingPa));
-    return { utilisation, governing: `tension and bending (${demand.label}), EN 1995-1-1 eq. 6.17`, demand };
+  return checkOf(utilisationOf(section, glulam, sectionBuckling(section, glulam, lengths), demand, gammaM), demand);
+}
+
+/**
+ * The worst case of a member over its demands (the first of equal ones); with `limit`, null as soon
+ * as one demand exceeds it (the section search needs no more).
+ */
+function worstOf(section: GlulamSection, glulam: GlulamClass, lengths: BucklingLengths, demands: readonly MemberDemand[], gammaM: number, limit?: number): MemberCheck | null {
+  const buckling = sectionBuckling(section, glulam, lengths);
+  let worst = -Infinity;
+  let at = 0;
+  for (let i = 0; i < demands.length; i++) {
+    const u = utilisationOf(section, glulam, buckling, demands[i]!, gammaM);
+    if (limit !== undefined && !(u <= limit)) return null;
+    if (i === 0 || u > worst) [worst, at] = [u, i];
   }
-  const kc = (lengthM: number, secondMomentM4: number) =>
-    timberBucklingFactor(timberRelativeSlenderness(lengthM / Math.sqrt(secondMomentM4 / section.areaM2), glulam.compressionPa, glulam.modulus5PctPa), GLULAM_BETA_C);
-  const utilisation = timberCompressionBendingUtilisation({
-    compressionPa: axialPa,
-    compressionStrengthPa: design(glulam.compressionPa),
-    kcY: kc(lengths.strongM, section.secondMomentYM4),
-    kcZ: kc(lengths.weakM, section.secondMomentZM4),
-    bendingYPa: bendingPa,
-    bendingZPa: 0,
-    bendingStrengthYPa: design(glulam.bendingPa),
-    bendingStrengthZPa: design(glulam.bendingPa),
-  });
-  return { utilisation, governing: `compression, bending and buckling (${demand.label}), EN 1995-1-1 eqs 6.23/6.24`, demand };
+  return checkOf(worst, demands[at]!);
 }
 
 /** The worst case of a member over its demands. */
 export function worstCase(section: GlulamSection, glulam: GlulamClass, lengths: BucklingLengths, demands: readonly MemberDemand[], gammaM: number): MemberCheck {
-  return demands
-    .map((d) => memberUtilisation(section, glulam, lengths, d, gammaM))
-    .reduce((worst, c) => (c.utilisation > worst.utilisation ? c : worst));
+  if (demands.length === 0) throw new TypeError("worstCase needs at least one demand");
+  return worstOf(section, glulam, lengths, demands, gammaM)!;
 }
 
 /**
  * The lightest section (list sorted by area) that passes every demand and an extra test (general
- * buckling of the lattice, deflection…); null when none does.
+ * buckling of the lattice, deflection…); null when none does. The extra test is a few operations, so
+ * it is asked first; a section is dropped at its first demand over 1.
  */
 export function pickGlulam(
   sections: readonly GlulamSection[],
@@ -75,8 +109,9 @@ export function pickGlulam(
   accept: (section: GlulamSection) => boolean = () => true,
 ): { section: GlulamSection; check: MemberCheck } | null {
   for (const section of sections) {
-    const check = worstCase(section, glulam, lengths, demands, gammaM);
-    if (check.utilisation <= 1 && accept(section)) return { section, check };
+    if (!accept(section)) continue;
+    const check = worstOf(section, glulam, lengths, demands, gammaM, 1);
+    if (check !== null) return { section, check };
   }
   return null;
 }
