@@ -66,6 +66,7 @@ export { zoellyCoefficient, zoellyPressurePa, zoellyThicknessM, continuumShellPr
 export { threeWayGridStiffness, doubleLayerGridStiffness, threeWayGridBarForces, type GridStiffness, type GridBarForces } from "./three-way-grid";
 export { geodesicCap, strutLengths, geodesicFrequencyFor, MEAN_CHORD_FACTOR, type GeodesicCap, type StrutLengths, type Vec3 } from "./geodesic";
 export { cachedGeodesicCap } from "./geodesic-cache";
+export { latticeBands, bandOfEachEdge, edgeMidpointAngleRad, type LatticeBand } from "./lattice-bands";
 export { simplySupportedUdl, type BeamResponse } from "./beam";
 
 // units

@@ -12,29 +12,14 @@ import type { Combination } from "../../loads/design-combinations";
 import { latticeBuckling, latticeFrame, latticePlanLoads, tubeSection } from "../../analysis/lattice";
 import { frameSystem, solveFrameLinear, type FrameModel } from "../../analysis/frame";
 import { check } from "../kit";
+import { bandOfEachEdge } from "../../mechanics/lattice-bands";
 
 /** Steel's Poisson's ratio (EN 1993-1-1 §3.2.6). */
 const STEEL_POISSON = 0.3;
 
-/** The band of each strut of the mesh: by the angle of its midpoint, the struts meeting the ring in the edge band (as strutBands sorts them). */
-function bandOfEdge(mesh: GeodesicCap, bands: readonly BandResult[]): number[] {
-  const onRing = new Uint8Array(mesh.nodes.length);
-  for (const n of mesh.ringNodes) onRing[n] = 1;
-  const edgeBand = bands.findIndex((b) => b.band.edge);
-  const inner = bands.filter((b) => !b.band.edge);
-  return mesh.edges.map(([p, q]) => {
-    if ((onRing[p] || onRing[q]) && edgeBand >= 0) return edgeBand;
-    const a = mesh.nodes[p]!;
-    const b = mesh.nodes[q]!;
-    const phi = Math.atan2(Math.hypot(a[0] + b[0], a[1] + b[1]), a[2] + b[2]);
-    const k = inner.findIndex((r) => phi < r.band.toRad);
-    return bands.indexOf(inner[k < 0 ? inner.length - 1 : k]!);
-  });
-}
-
 /** The rigid-jointed frame of the actual net, each strut with its band's tube, the base ring pinned. */
 function netFrame(mesh: GeodesicCap, bands: readonly BandResult[]): { frame: FrameModel; band: number[] } {
-  const band = bandOfEdge(mesh, bands);
+  const band = bandOfEachEdge(mesh, bands.map((b) => b.band));
   const sections = bands.map((b) => tubeSection(STEEL_E_PA, STEEL_POISSON, b.choice.section.diameterM, b.choice.section.thicknessM));
   const frame = latticeFrame(mesh, sections[0]!, { base: "pinned" });
   return { frame: { ...frame, members: frame.members.map((m, e) => ({ ...m, section: sections[band[e]!]! })) }, band };

@@ -8,7 +8,8 @@ import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
 import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
 import { hoopSignChangeAngleRad } from "../../mechanics/spherical-membrane";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
-import { latticeSelfWeightKPa, sizeLattice, strutBands, type LatticeInputs, type LatticeResult } from "./sizing";
+import { latticeBands } from "../../mechanics/lattice-bands";
+import { latticeSelfWeightKPa, sizeLattice, type LatticeInputs, type LatticeResult } from "./sizing";
 import { latticePlan, latticeSection } from "./drawing";
 import { analyseNet } from "./analysis";
 
@@ -135,7 +136,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
   const cladding = findCladding(catalogue, opts.cladding);
   const section = latticeSection(brief, depthM);
   const { frequency, mesh } = latticeMesh(cap, opts.targetStrutLengthM, section);
-  const bands = strutBands(mesh, Math.min(opts.bands, Math.max(1, Math.floor(frequency / 2))));
+  const bands = latticeBands(mesh, Math.min(opts.bands, Math.max(1, Math.floor(frequency / 2))));
   const lengths = strutLengths(mesh.edgeLengthsM);
   const webLengthM = double ? Math.hypot(depthM, lengths.meanM / Math.sqrt(3)) : 0;
   const inputs: LatticeInputs = {

@@ -1,6 +1,6 @@
 import type { ChsSection } from "../../catalogue/types";
 import type { ChsChoice } from "../../catalogue/pick-chs";
-import type { GeodesicCap } from "../../mechanics/geodesic";
+import type { LatticeBand } from "../../mechanics/lattice-bands";
 import type { BucklingCurve } from "../../mechanics/flexural-buckling";
 import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
 import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
@@ -9,57 +9,6 @@ import { threeWayGridBarForces, threeWayGridStiffness, doubleLayerGridStiffness 
 import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { heaviestCase, membraneLoadCases, pickChs, type MembraneLoadCase, type UniformCombination } from "../kit";
-
-/** Struts of one band of the lattice, crown to edge (ring struts excluded). */
-export interface StrutBand {
-  index: number;
-  /** True for the struts that meet the ring (lengthened when the ring nodes move onto the cut circle). */
-  edge: boolean;
-  /** Band limits as meridional angle from the crown, rad. */
-  fromRad: number;
-  toRad: number;
-  count: number;
-  totalLengthM: number;
-  meanLengthM: number;
-  maxLengthM: number;
-}
-
-/**
- * Groups the non-ring struts of a geodesic cap into equal bands of meridional angle (by strut
- * midpoint), crown to edge, plus a last group of the struts that meet the ring (their lengths vary
- * most, so they are sized apart, for the forces of the outer band).
- */
-export function strutBands(cap: GeodesicCap, bandCount: number): StrutBand[] {
-  const phi0 = cap.capAngleRad;
-  const ringNode = new Uint8Array(cap.nodes.length);
-  for (const n of cap.ringNodes) ringNode[n] = 1;
-  const bands: StrutBand[] = Array.from({ length: bandCount + 1 }, (_, i) => ({
-    index: i,
-    edge: i === bandCount,
-    fromRad: (phi0 * Math.min(i, bandCount - 1)) / bandCount,
-    toRad: (phi0 * Math.min(i + 1, bandCount)) / bandCount,
-    count: 0,
-    totalLengthM: 0,
-    meanLengthM: 0,
-    maxLengthM: 0,
-  }));
-  cap.edges.forEach(([p, q], e) => {
-    if (cap.edgeOnRing[e]) return;
-    const a = cap.nodes[p]!;
-    const b = cap.nodes[q]!;
-    const mx = (a[0] + b[0]) / 2;
-    const my = (a[1] + b[1]) / 2;
-    const mz = (a[2] + b[2]) / 2;
-    const phi = Math.atan2(Math.hypot(mx, my), mz);
-    const band = bands[ringNode[p] || ringNode[q] ? bandCount : Math.min(bandCount - 1, Math.floor((phi / phi0) * bandCount))]!;
-    const length = cap.edgeLengthsM[e]!;
-    band.count++;
-    band.totalLengthM += length;
-    band.maxLengthM = Math.max(band.maxLengthM, length);
-  });
-  for (const b of bands) b.meanLengthM = b.count > 0 ? b.totalLengthM / b.count : 0;
-  return bands.filter((b) => b.count > 0);
-}
 
 export interface LatticeInputs {
   /** The design combinations with their uniform equivalents (the membrane method takes uniform loads). */
@@ -70,7 +19,7 @@ export interface LatticeInputs {
   capAngleRad: number;
   baseRadiusM: number;
   surfaceM2: number;
-  bands: StrutBand[];
+  bands: LatticeBand[];
   sections: readonly ChsSection[];
   steel: { yieldPa: number; curve: BucklingCurve };
   knockDown: number;
@@ -84,7 +33,7 @@ export interface LatticeInputs {
 }
 
 export interface BandResult {
-  band: StrutBand;
+  band: LatticeBand;
   choice: ChsChoice;
   compressionN: number;
   tensionN: number;
@@ -117,7 +66,7 @@ export interface LatticeResult {
 }
 
 /** The bar forces of one band under one case, resolved into the three-way grid at the band's ends and middle. */
-function bandForces(input: LatticeInputs, band: StrutBand, c: MembraneLoadCase, layers: number): { compressionN: number; tensionN: number } {
+function bandForces(input: LatticeInputs, band: LatticeBand, c: MembraneLoadCase, layers: number): { compressionN: number; tensionN: number } {
   let compressionN = 0;
   let tensionN = 0;
   for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, input.capAngleRad)]) {
@@ -134,7 +83,7 @@ function bandForces(input: LatticeInputs, band: StrutBand, c: MembraneLoadCase, 
  * grid) and the lightest CHS that carries them and gives the lattice its general-buckling
  * resistance; or why none does.
  */
-function sizeBand(input: LatticeInputs, band: StrutBand, cases: readonly MembraneLoadCase[], pressurePa: number, layers: number): { result: BandResult | null; failedWhy: string; largestBarForceN: number } {
+function sizeBand(input: LatticeInputs, band: LatticeBand, cases: readonly MembraneLoadCase[], pressurePa: number, layers: number): { result: BandResult | null; failedWhy: string; largestBarForceN: number } {
   const R = input.radiusM;
   let compressionN = 0;
   let tensionN = 0;

@@ -12,7 +12,7 @@ import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRE
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { designBasis } from "../../loads/design-basis";
 import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineOptions, defineScheme, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
-import { memberBands } from "./geometry";
+import { latticeBands } from "../../mechanics/lattice-bands";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
 import { timberPlan, timberSection } from "./drawing";
@@ -84,7 +84,7 @@ function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalog
     capAngleRad: cap.edgeAngleRad,
     baseRadiusM: cap.baseRadiusM,
     surfaceM2: cap.surfaceM2,
-    bands: memberBands(mesh, opts.bands),
+    bands: latticeBands(mesh, opts.bands),
     sections: GLULAM_SECTIONS,
     glulam,
     deckBendingPa: deck.bendingPa,
@@ -132,7 +132,7 @@ function timberMembers(r: TimberLatticeResult, charDepthM: number): { members: M
     governing,
   });
   for (const b of r.bands) {
-    const name = `members, band ${b.band.index + 1} of ${r.bands.length}`;
+    const name = b.band.edge ? "members meeting the ring" : `members, band ${b.band.index + 1} of ${r.bands.filter((x) => !x.band.edge).length}`;
     members.push(group(`lattice ${name}`, b.band.count, b.band.meanLengthM, b.section, b.check.utilisation, b.check.demand.forceN, b.check.governing));
     checks.push(check(`${name}: ${b.check.governing.split(", EN")[0]}`, "EN 1995-1-1 §6.2.3, §6.3.2", b.check.utilisation, 1, ""));
     checks.push(check(`${name}: general buckling of the lattice`, "equivalent continuum 4√(DB)/R² × knock-down, E/(1 + k_def) (EN 1995-1-1 Table 3.2)", b.pressurePa, b.bucklingPa, "Pa"));

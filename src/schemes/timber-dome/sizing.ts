@@ -6,7 +6,7 @@ import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
 import { simplySupportedUdl } from "../../mechanics/beam";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
-import type { MemberBand } from "./geometry";
+import type { LatticeBand } from "../../mechanics/lattice-bands";
 import { pickGlulam, type MemberCheck, type MemberDemand } from "./member-design";
 import { rectangularSection, type GlulamSection } from "./sections";
 import { deckThicknessM, sizePurlins, type PurlinResult } from "./secondary";
@@ -36,7 +36,7 @@ export interface TimberLatticeInputs {
   capAngleRad: number;
   baseRadiusM: number;
   surfaceM2: number;
-  bands: MemberBand[];
+  bands: LatticeBand[];
   sections: readonly GlulamSection[];
   glulam: GlulamClass;
   /** Deck boards' bending strength f_m,k, Pa. */
@@ -65,7 +65,7 @@ export interface TimberLatticeInputs {
 }
 
 export interface BandResult {
-  band: MemberBand;
+  band: LatticeBand;
   section: GlulamSection;
   check: MemberCheck;
   compressionN: number;
@@ -115,7 +115,7 @@ export function loadCases(input: TimberLatticeInputs, selfWeightKPa: number): Lo
 }
 
 /** Axial demands (membrane forces resolved into the three-way grid) and member bending from the panel load, for one band and one case. */
-function bandDemands(input: TimberLatticeInputs, band: MemberBand, c: LoadCase): MemberDemand[] {
+function bandDemands(input: TimberLatticeInputs, band: LatticeBand, c: LoadCase): MemberDemand[] {
   let compressionN = 0;
   let tensionN = 0;
   for (const phi of [band.fromRad, (band.fromRad + band.toRad) / 2, Math.min(band.toRad, input.capAngleRad)]) {
@@ -150,7 +150,7 @@ function sizeBands(input: TimberLatticeInputs, cases: LoadCase[], pressurePa: nu
     const pick = pickGlulam(input.sections, input.glulam, lengths, demands, input.gammaM, (s) => bucklingOf(s) >= pressurePa);
     if (pick === null) {
       const memberOnly = pickGlulam(input.sections, input.glulam, lengths, demands, input.gammaM);
-      const where = `band ${band.index + 1} (members up to ${band.maxLengthM.toFixed(1)} m)`;
+      const where = band.edge ? `the members meeting the ring (up to ${band.maxLengthM.toFixed(1)} m)` : `band ${band.index + 1} (members up to ${band.maxLengthM.toFixed(1)} m)`;
       return {
         bands,
         failure: memberOnly === null ? `no glulam section up to 300 × 2,400 mm carries the members of ${where}: shorten the members or choose a stronger class` : `no glulam section up to 300 × 2,400 mm gives the lattice enough general-buckling resistance at ${where} (${(pressurePa / 1000).toFixed(2)} kPa needed): raise the rise or shorten the members`,

@@ -7,6 +7,7 @@ import { expectRelClose } from "../../helpers/close";
 // Regression pins, not check values: the figures the timber dome gave (default options, rise 0.15
 // span) when they were pinned, so that work on its speed cannot move a result unnoticed. When a
 // deliberate change moves them, the commit names the change and the new figures are pasted here.
+// Moved by: the shared banding (members meeting the ring sized apart), 160 m −3.65 %, 300 m −0.47 %.
 const PINNED = [
   {
     spanM: 60,
@@ -18,19 +19,19 @@ const PINNED = [
   },
   {
     spanM: 160,
-    totalMassKg: 2534534.9080698905,
+    totalMassKg: 2441947.5683542145,
     governingLoadCase: "drifted snow + wind (6.10b)",
-    takeoffQuantities: [1770.3128278366073, 1694.818027178212, 21915.7503514424, 173.25654275074098, 187.42741771316705, 21915.7503514424],
-    sections: ["GL 160×1160", "GL 160×1200", "GL 160×1240", "GL 220×1680", "GL 160×1160"],
-    utilisations: [0.532737712989946, 0.579108277471658, 0.6484626026980239, 0.9711770990249929, 0.5429245036695659],
+    takeoffQuantities: [1588.7690244725363, 1694.818027178212, 21915.7503514424, 164.17935258253743, 187.42741771316705, 21915.7503514424],
+    sections: ["GL 160×1160", "GL 160×1200", "GL 160×1240", "GL 160×1280", "GL 220×1640", "GL 160×1160"],
+    utilisations: [0.5245331346672283, 0.5701804658027945, 0.6384259228157103, 0.681051444772657, 0.9931533282122044, 0.5345637338545002],
   },
   {
     spanM: 300,
-    totalMassKg: 13894712.454007927,
+    totalMassKg: 13829211.42638454,
     governingLoadCase: "drifted snow + wind (6.10b)",
-    takeoffQuantities: [13659.252711842686, 6369.264945887946, 77047.55982928968, 1001.4258828865317, 1479.6901398407924, 77047.55982928968],
-    sections: ["GL 240×1880", "GL 260×1920", "GL 260×1960", "GL 280×2120", "GL 160×1240"],
-    utilisations: [0.3719715437572618, 0.3905241380889276, 0.4338368917265749, 0.9993442630756338, 0.587544126909837],
+    takeoffQuantities: [13530.819324345843, 6369.264945887946, 77047.55982928968, 995.0042135116896, 1479.6901398407924, 77047.55982928968],
+    sections: ["GL 240×1880", "GL 260×1920", "GL 260×1960", "GL 260×2000", "GL 300×2360", "GL 160×1240"],
+    utilisations: [0.37107495379763555, 0.38958179111375274, 0.4327855567932032, 0.4770135598019973, 0.8065499614899103, 0.5861280441244074],
   },
 ] as const;
 

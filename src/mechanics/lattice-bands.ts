@@ -1,0 +1,76 @@
+import type { GeodesicCap } from "./geodesic";
+
+/** Members of one band of a lattice cap, crown to edge (the ring edges are left out: the ring is sized apart). */
+export interface LatticeBand {
+  /** Position of the band, crown first; the edge band is numbered after the last angle band. */
+  index: number;
+  /** True for the band of the members that meet the ring (their lengths vary most: the ring nodes are moved onto the cut circle). */
+  edge: boolean;
+  /** Limits of meridional angle from the crown whose membrane forces the band is sized for, rad (the edge band takes those of the outermost angle band). */
+  fromRad: number;
+  toRad: number;
+  count: number;
+  totalLengthM: number;
+  meanLengthM: number;
+  maxLengthM: number;
+  /** Indices of the cap's edges in the band. */
+  edges: number[];
+}
+
+/** Meridional angle of an edge's midpoint from the crown, rad. */
+export function edgeMidpointAngleRad(cap: GeodesicCap, e: number): number {
+  const [p, q] = cap.edges[e]!;
+  const a = cap.nodes[p]!;
+  const b = cap.nodes[q]!;
+  return Math.atan2(Math.hypot(a[0] + b[0], a[1] + b[1]), a[2] + b[2]);
+}
+
+/**
+ * Groups the members of a geodesic cap (every edge not on the boundary ring) for sizing: `bandCount`
+ * bands of equal meridional angle by the angle of the member's midpoint, crown to edge, and one
+ * more band of the members that meet the ring, sized apart for the forces of the outermost band
+ * (the ring nodes are moved onto the cut circle, so these lengths vary most: left in the outer band
+ * they would set its buckling length and span for every member of it). Empty bands are dropped.
+ */
+export function latticeBands(cap: GeodesicCap, bandCount: number): LatticeBand[] {
+  if (!(Number.isInteger(bandCount) && bandCount >= 1)) throw new RangeError(`invalid bandCount: ${bandCount} (expected a whole number ≥ 1)`);
+  const phi0 = cap.capAngleRad;
+  const ringNode = new Uint8Array(cap.nodes.length);
+  for (const n of cap.ringNodes) ringNode[n] = 1;
+  const bands: LatticeBand[] = Array.from({ length: bandCount + 1 }, (_, i) => ({
+    index: i,
+    edge: i === bandCount,
+    fromRad: (phi0 * Math.min(i, bandCount - 1)) / bandCount,
+    toRad: (phi0 * Math.min(i + 1, bandCount)) / bandCount,
+    count: 0,
+    totalLengthM: 0,
+    meanLengthM: 0,
+    maxLengthM: 0,
+    edges: [],
+  }));
+  cap.edges.forEach(([p, q], e) => {
+    if (cap.edgeOnRing[e]) return;
+    const at = ringNode[p] || ringNode[q] ? bandCount : Math.min(bandCount - 1, Math.floor((edgeMidpointAngleRad(cap, e) / phi0) * bandCount));
+    const band = bands[at]!;
+    const lengthM = cap.edgeLengthsM[e]!;
+    band.count += 1;
+    band.totalLengthM += lengthM;
+    band.maxLengthM = Math.max(band.maxLengthM, lengthM);
+    band.edges.push(e);
+  });
+  for (const b of bands) b.meanLengthM = b.count > 0 ? b.totalLengthM / b.count : 0;
+  return bands.filter((b) => b.count > 0);
+}
+
+/**
+ * The position in `bands` of every edge of the cap: its band's, the ring edges with the band of the
+ * members meeting the ring (the last band when there is none).
+ */
+export function bandOfEachEdge(cap: GeodesicCap, bands: readonly Pick<LatticeBand, "edge" | "edges">[]): number[] {
+  const edgeBand = bands.findIndex((b) => b.edge);
+  const of = new Array<number>(cap.edges.length).fill(edgeBand >= 0 ? edgeBand : bands.length - 1);
+  bands.forEach((b, i) => {
+    for (const e of b.edges) of[e] = i;
+  });
+  return of;
+}
