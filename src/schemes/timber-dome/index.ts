@@ -21,7 +21,7 @@ const GLULAM_CHOICES = ["GL24h", "GL28h", "GL30h", "GL32h"].map((value) => ({ va
 
 const declarations = {
   // Superior Dome (163 m): 781 members over ≈ 21,000 m² of plan → ≈ 10 m members (derived from the published count)
-  memberLengthM: { kind: "number", label: "Target member length", unit: "m", min: 4, max: 20, step: 0.5, default: 10, source: "mesh size; ≈ 10 m in the 163 m Superior Dome (781 members), frequency v = round(1.2 R / L)", free: true },
+  memberLengthM: { kind: "number", label: "Target member length", unit: "m", min: 4, max: 20, step: 0.5, default: 10, source: "mesh size; ≈ 10 m in the 163 m Superior Dome (781 members); frequency v = round(1.2 R / L) and its two neighbours are designed, the lightest kept", free: true },
   strengthClass: { kind: "select", label: "Glulam strength class", choices: GLULAM_CHOICES, default: "GL28h", source: "EN 14080:2013 Table 5 (data/glulam.csv)" },
   // covered heated buildings are SC1; SC2 is the safe side (common practice, no source)
   serviceClass: {
@@ -175,28 +175,20 @@ function timberSummary(r: TimberLatticeResult, mesh: GeodesicCap, frequency: num
   ];
 }
 
-/** The geodesic mesh at the frequency whose mean member meets the target length; a SchemeError when none can be made. */
-function latticeMesh(cap: SphericalCap, memberLengthM: number, failure: { warnings: string[]; section: DrawingLine[] }): { frequency: number; mesh: GeodesicCap } {
-  const frequency = geodesicFrequencyFor(cap.radiusM, memberLengthM);
+/** The geodesic mesh of one frequency; a SchemeError when it cannot be made. */
+function latticeMesh(cap: SphericalCap, frequency: number, failure: { warnings: string[]; section: DrawingLine[] }): GeodesicCap {
   if (frequency > 200) throw new SchemeError(`the mesh would need frequency ${frequency} (over 200): lengthen the members`, failure);
   try {
-    return { frequency, mesh: cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad) };
+    return cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad);
   } catch (e) {
     if (e instanceof CapTooSmallError) throw new SchemeError("the mesh is too coarse for so small a cap: shorten the members", { ...failure, cause: e });
     throw e;
   }
 }
 
-/**
- * Designs a glulam lattice dome: a class I geodesic (three-way) cap at the member length asked for,
- * membrane forces resolved into the grid, members to EN 1995-1-1 with the bending of the panel load,
- * general buckling with the creep-reduced stiffness, purlins and deck, optional charring, steel
- * connectors as an allowance and a steel tension ring; self-weight iterated to convergence.
- */
-function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): DesignParts {
-  const cap = sphericalCap(brief.spanM, brief.riseM);
-  const warnings = timberWarnings(opts);
-  const { frequency, mesh } = latticeMesh(cap, opts.memberLengthM, { warnings, section: timberSection(brief, 0) });
+/** The timber dome on one mesh: self-weight iterated to convergence, then its parts; a SchemeError when it cannot be built. */
+function designOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): { parts: DesignParts; massKg: number } {
+  const mesh = latticeMesh(cap, frequency, { warnings, section: timberSection(brief, 0) });
   const inputs = latticeInputs(brief, opts, catalogue, cap, mesh);
   const converged = convergeSelfWeight<TimberLatticeResult>(
     (g) => {
@@ -210,11 +202,12 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
   const depthM = Math.max(0, ...r.bands.map((b) => b.section.depthM));
   if (r.failure) throw new SchemeError(r.failure, { warnings, section: timberSection(brief, depthM) });
   const { members, checks } = timberMembers(r, inputs.charDepthM);
-  return {
+  const takeoff = timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3);
+  const parts: DesignParts = {
     governingLoadCase: r.governingCase,
     summary: timberSummary(r, mesh, frequency, cap),
     members,
-    takeoff: timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3),
+    takeoff,
     checks,
     warnings,
     iterations: converged.iterations,
@@ -222,6 +215,37 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
     ...capEnvelope(cap, brief.eavesHeightM),
     drawing: { section: timberSection(brief, depthM), plan: timberPlan(mesh) },
   };
+  return { parts, massKg: takeoff.reduce((sum, row) => sum + row.massKg, 0) };
+}
+
+/**
+ * Designs a glulam lattice dome: a class I geodesic (three-way) cap, membrane forces resolved into
+ * the grid, members to EN 1995-1-1 with the bending of the panel load, general buckling with the
+ * creep-reduced stiffness, purlins and deck, optional charring, steel connectors as an allowance
+ * and a steel tension ring; self-weight iterated to convergence. The mesh is designed at the
+ * frequency whose mean member meets the target length and at its two neighbours, and the lightest
+ * that can be built is kept: a frequency is a whole number, so at small spans one step of it moves
+ * the members by a quarter of their length, and the mass jumped where the rounding stepped (+21 %
+ * from 40 to 45 m).
+ */
+function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): DesignParts {
+  const cap = sphericalCap(brief.spanM, brief.riseM);
+  const warnings = timberWarnings(opts);
+  const nominal = geodesicFrequencyFor(cap.radiusM, opts.memberLengthM);
+  let best: { parts: DesignParts; massKg: number } | null = null;
+  let nominalFailure: unknown = null;
+  for (const frequency of [nominal, nominal - 1, nominal + 1]) {
+    if (frequency < 1) continue;
+    try {
+      const candidate = designOnMesh(brief, opts, catalogue, cap, frequency, warnings);
+      if (best === null || candidate.massKg < best.massKg) best = candidate;
+    } catch (e) {
+      if (!(e instanceof SchemeError)) throw e;
+      if (frequency === nominal) nominalFailure = e;
+    }
+  }
+  if (best === null) throw nominalFailure ?? new SchemeError("no mesh near the target member length can be built: change the member length", { warnings, section: timberSection(brief, 0) });
+  return best.parts;
 }
 
 export const timberDome = defineScheme({

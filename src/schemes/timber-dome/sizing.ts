@@ -11,6 +11,9 @@ import { pickGlulam, type MemberCheck, type MemberDemand } from "./member-design
 import { rectangularSection, type GlulamSection } from "./sections";
 import { deckThicknessM, sizePurlins, type PurlinResult } from "./secondary";
 
+/** Smallest tension ring, m² (common practice, no source: a box of 10 mm plates about 60 mm across). */
+const MIN_RING_AREA_M2 = 25e-4;
+
 /** Share of a triangular panel's load that one lattice member carries per metre: two panels × (√3/4 L²)/3 over L = (√3/6)L (tributary area). */
 const TRIBUTARY_WIDTH_PER_LENGTH = Math.sqrt(3) / 6;
 
@@ -162,11 +165,11 @@ function sizeBands(input: TimberLatticeInputs, cases: LoadCase[], pressurePa: nu
   return { bands, failure: "" };
 }
 
-/** The steel tension ring for the edge thrust: T = |N_φ| cos φ0 · a (Timoshenko & Woinowsky-Krieger ch. 14 §129), A = T/f_y (EN 1993-1-1 eq. 6.6, γ_M0 = 1.0) rounded up to a 25 cm² step of plate. */
+/** The steel tension ring for the edge thrust: T = |N_φ| cos φ0 · a (Timoshenko & Woinowsky-Krieger ch. 14 §129), A = T/f_y (EN 1993-1-1 eq. 6.6, γ_M0 = 1.0), at least 25 cm². The area is taken as it comes, not rounded up to 25 cm² steps as before: a box of plates can be made to any area within a plate's thickness step (a few %), and the 25 cm² steps doubled the ring between neighbouring spans at small spans (+78 % from 40 to 45 m). */
 function tensionRing(input: TimberLatticeInputs, c: LoadCase): { tensionN: number; areaM2: number; massKg: number } {
   const edge = sphericalMembraneForces(c.surfacePa, c.planPa, input.radiusM, Math.min(input.capAngleRad, Math.PI / 2 - 1e-9));
   const tensionN = edgeRingTensionN(edge.meridionalNPerM, input.capAngleRad, input.baseRadiusM);
-  const areaM2 = Math.max(25e-4, Math.ceil(tensionN / input.ringYieldPa / 25e-4) * 25e-4);
+  const areaM2 = Math.max(MIN_RING_AREA_M2, tensionN / input.ringYieldPa);
   return { tensionN, areaM2, massKg: areaM2 * 2 * Math.PI * input.baseRadiusM * STEEL_DENSITY_KG_PER_M3 };
 }
 
