@@ -7,7 +7,9 @@ import { roofActions } from "../../loads/roof-actions";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeSoffit, type CableDomeLayout } from "./geometry";
-import { sizeCableDome, type DomeSizing } from "./sizing";
+import { domeMembers, sizeCableDome, type DomeSizing, type DomeSizingInput } from "./sizing";
+import { analyseDome, type DomeAnalysis, type DomeSlackRule } from "./analysis";
+import { designBasis, type DesignBasis } from "../../loads";
 import { designCompressionRing, type RingDesign, type RingMaterial } from "./compression-ring";
 
 const declarations = {
@@ -26,6 +28,8 @@ const declarations = {
   // the cables do restrain the ring; false gives the bare-ring 3EI/R³ (Timoshenko & Gere ch. 7)
   ringCableRestraint: { kind: "toggle", label: "Ridge cables restrain ring buckling", default: true, source: "ring on elastic foundation (from memory); off: bare ring, Timoshenko & Gere ch. 7" },
   bareRingLoad: { kind: "select", label: "Bare ring: direction of the cable pull", choices: [{ value: "normal", label: "Normal to the ring (3EI/r³)" }, { value: "centre", label: "Directed to the centre (4.5EI/r³)" }], default: "normal", source: "Timoshenko & Gere, Theory of Elastic Stability, 1961, ch. 7 (from memory): q_cr = 3EI/r³ for pressure normal to the ring, 4.5EI/r³ for a load that stays directed to the centre" },
+  analysis: { kind: "select", label: "Analysis", choices: [{ value: "3d", label: "3D nonlinear (sizes from the analysed forces)" }, { value: "closed-form", label: "Axisymmetric closed form only" }], default: "3d", source: "issue 13: the 3D analysis designs, the closed form seeds and cross-checks it" },
+  slackAllowed: { kind: "select", label: "Cables allowed to slacken", choices: [{ value: "none", label: "None" }, { value: "diagonals", label: "Diagonals" }], default: "none", source: "design choice" },
   ...FABRIC_OPTION,
   ...TENSION_COMMON_OPTIONS,
 } as const;
@@ -95,26 +99,53 @@ function domeSummary(layout: CableDomeLayout, sized: DomeSizing, ring: RingDesig
 }
 
 /** The dome with a given number of hoops: layout, self-weight iterated around the sizing, ring, checks and take-off. */
-function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, hoops: number, combinations: readonly PlanCombination[]): DesignParts {
+/**
+ * The closed-form sizing re-done from the 3D analysis: members sized for the analysed forces
+ * (enveloped over the trusses), the ring for the largest analysed pull, the prestress the analysis
+ * found; null when the analysis failed (its reason is returned instead).
+ */
+function analysedSizing(input: DomeSizingInput, sized: DomeSizing, selfWeightKPa: number, opts: CableDomeOptions): { sized: DomeSizing; analysis: DomeAnalysis } {
+  const analysis = analyseDome({
+    brief: input.brief, basis: input.basis, layout: input.layout, combinations: input.combinations, selfWeightKPa, groups: sized.groups,
+    seedPrestressN: sized.prestressN, residualPrestress: opts.residualPrestress, slack: opts.slackAllowed as DomeSlackRule, displacementLimitM: input.brief.spanM * DEFLECTION_LIMIT_RATIO,
+  });
+  if (analysis.reason !== "") return { sized, analysis };
+  const groups = domeMembers(input, analysis.cases.map((c) => ({ name: c.name, pressurePa: 0, forces: c.envelope })));
+  return { sized: { ...sized, groups, prestressN: analysis.prestressN, ringCompressionN: analysis.ringCompressionN, ringCase: analysis.ringCase }, analysis };
+}
+
+/** Largest displacement under the analysed combinations ÷ span allowed (common practice for cable roofs, no source). */
+export const DEFLECTION_LIMIT_RATIO = 1 / 100;
+
+function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, hoops: number, combinations: readonly PlanCombination[], basis: DesignBasis, analyse: boolean): DesignParts {
   const fabric = findFabric(catalogue, opts.fabric);
   const actions = roofActions(brief);
   const layout = cableDomeLayout(brief, opts.radialTrusses, hoops, opts.centralRingRatio, opts.postHeightRatio, opts.ringHeightRatio * brief.spanM, widestPanelM(brief, opts, fabric, actions));
   const section = cableDomeSection(layout, brief.eavesHeightM);
   const input = {
-    brief, actions, combinations, layout, catalogue, fabric, yieldPa: opts.steelYieldMPa * 1e6,
+    brief, actions, combinations, basis, layout, catalogue, fabric, yieldPa: opts.steelYieldMPa * 1e6,
     residualPrestress: opts.residualPrestress, gammaR: opts.gammaR, fabricAllowancePct: opts.fabricAllowancePct, fabricSagRatio: opts.fabricSagRatio,
   };
   const converged = convergeSelfWeight<DomeSizing>((g) => {
     const value = sizeCableDome(input, g);
     return { value, selfWeightKPa: value.selfWeightKPa };
   }, 0.15, { section });
-  const sized = converged.value;
+  const closedForm = converged.value;
+  const analysed = analyse ? analysedSizing(input, closedForm, converged.selfWeightKPa, opts) : null;
+  const sized = analysed?.sized ?? closedForm;
   const ring = compressionRing(layout, sized, opts);
   const checks = sized.groups.map((m) => check(m.element, m.governing, m.designForceN, m.resistanceN, "N"));
+  const analysis = analysed?.analysis;
+  if (analysis && analysis.reason === "") {
+    const largest = Math.max(...analysis.cases.map((c) => c.maxDisplacementM));
+    checks.push(check("largest displacement (3D analysis, design combinations)", `≤ span × ${DEFLECTION_LIMIT_RATIO} (common practice for cable roofs, no source; ULS loads, an upper bound of the service value)`, largest, brief.spanM * DEFLECTION_LIMIT_RATIO, "m"));
+  }
   checks.push(...fabricPanelChecks(sized.fabricGravityNPerM, sized.fabricUpliftNPerM, fabricAllowableNPerM(fabric, opts.fabricStrengthFactor)));
   if (ring) checks.push(check("compression ring", ring.governing, sized.ringCompressionN, ring.resistanceN, "N"));
   const warnings = [
-    "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); the antisymmetric part of drifted snow and one-sided wind is not analysed by it",
+    analysis
+      ? `members, ring and prestress from the 3D analysis (Newton–Raphson, tension-only cables) of ${analysis.cases.map((c) => c.name).join(", ")} — the combinations with the largest gravity peak, drifted snow and the largest uplift; the closed form (uniform equivalents) seeds it and is the cross-check: prestress ${(closedForm.prestressN / 1000).toFixed(0)} kN there; the ring is taken as rigid in the analysis, the wind's horizontal part is left out, and member stiffness is the closed form's`
+      : "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); the antisymmetric part of drifted snow and one-sided wind is not analysed by it",
     "temperature: a uniform change does not change the forces of cables, posts and a steel ring that expand alike; with a concrete ring the small difference of expansion is left out",
     "the columns or stand structure under the compression ring are not designed",
     "self-weight is smeared over the plan and applied at the post heads",
@@ -132,7 +163,8 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
     governingLoadCase: ringGoverns ? sized.ringCase : worstGroup.caseName,
     ...capEnvelope(layout.cap, brief.eavesHeightM + layout.ringRaiseM),
     drawing: { section, plan: cableDomePlan(layout) },
-    reason: ring ? "" : `no ${opts.ringMaterial} compression ring up to 8 m wide carries ${(sized.ringCompressionN / 1e6).toFixed(0)} MN with in-plane buckling: use more radial trusses (stiffer restraint) or the other ring material`,
+    ...(analysis ? { analysis: analysis.summary } : {}),
+    reason: analysis && analysis.reason !== "" ? analysis.reason : ring ? "" : `no ${opts.ringMaterial} compression ring up to 8 m wide carries ${(sized.ringCompressionN / 1e6).toFixed(0)} MN with in-plane buckling: use more radial trusses (stiffer restraint) or the other ring material`,
   };
 }
 
@@ -152,14 +184,17 @@ const identity = {
  * steps; with none feasible, the usual count's answer.
  */
 function design(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue) {
-  const combinations = planCombinations(brief);
-  const withHoops = (hoops: number) => infeasibleOnFailure(identity.id, brief, () => assembleDesign(identity, brief, designWith(brief, opts, catalogue, hoops, combinations)));
-  if (opts.hoops > 0) return withHoops(opts.hoops);
+  const basis = designBasis(brief);
+  const combinations = planCombinations(brief, basis);
+  const withHoops = (hoops: number, analyse: boolean) => infeasibleOnFailure(identity.id, brief, () => assembleDesign(identity, brief, designWith(brief, opts, catalogue, hoops, combinations, basis, analyse)));
+  const analyse = opts.analysis === "3d";
+  if (opts.hoops > 0) return withHoops(opts.hoops, analyse);
   const usual = autoHoopCount(brief.spanM);
-  const candidates = [usual - 1, usual, usual + 1].filter((n) => n >= 1 && n <= 8).map(withHoops);
+  const counts = [usual - 1, usual, usual + 1].filter((n) => n >= 1 && n <= 8);
+  const candidates = counts.map((n) => withHoops(n, false));
   const feasible = candidates.filter((d) => d.feasible);
-  if (feasible.length === 0) return candidates[usual > 1 ? 1 : 0] as Design;
-  return feasible.reduce((best, d) => (d.roofMassKg < best.roofMassKg ? d : best));
+  const chosen = feasible.length === 0 ? (counts[usual > 1 ? 1 : 0] as number) : (counts[candidates.indexOf(feasible.reduce((best, d) => (d.roofMassKg < best.roofMassKg ? d : best)))] as number);
+  return analyse ? withHoops(chosen, true) : (candidates[counts.indexOf(chosen)] as Design);
 }
 
 /** Cable dome: radial cable trusses between a perimeter compression ring and a central tension ring, fabric between the ridges. */

@@ -1,6 +1,7 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { RoofActions } from "../../loads/roof-actions";
+import type { DesignBasis } from "../../loads";
 import { cableDomeLoadState, cableDomeSelfStress, combineCableDomeStates, type CableDomeTrussForces } from "../../mechanics/cable-dome-truss";
 import { membraneStripForceNPerM } from "../../mechanics/membrane-strip";
 import { kPaOfMass } from "../../mechanics/gravity";
@@ -44,6 +45,7 @@ export type DomeSizingInput = {
   brief: Brief;
   actions: RoofActions;
   combinations: readonly PlanCombination[];
+  basis: DesignBasis;
   layout: CableDomeLayout;
   catalogue: Catalogue;
   fabric: Fabric;
@@ -133,7 +135,7 @@ export function sizeCableDome(input: DomeSizingInput, selfWeightKPa: number): Do
  * and the central rings (steel, A f_y).
  * @throws SizingError when a member cannot be sized
  */
-function domeMembers(input: DomeSizingInput, states: readonly DomeCaseState[]): DomeMemberGroup[] {
+export function domeMembers(input: DomeSizingInput, states: readonly DomeCaseState[]): DomeMemberGroup[] {
   const { layout, catalogue } = input;
   const g = layout.truss;
   const N = layout.trusses;

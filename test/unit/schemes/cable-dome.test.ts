@@ -129,3 +129,26 @@ describe("cableDome ring restraint", () => {
     expect(ringKg(bare)).toBeGreaterThan(ringKg(restrained));
   });
 });
+
+describe("cableDome through the 3D analysis (issue 13)", () => {
+  const d = design();
+  it("fills Design.analysis: every analysed combination converged, its prestress, and a view of the case that moves it most", () => {
+    expect(d.analysis).toBeDefined();
+    const a = d.analysis!;
+    expect(a.loadCases.length).toBeGreaterThanOrEqual(2);
+    expect(a.loadCases.every((c) => c.converged && c.slackMembers === 0)).toBe(true);
+    expect(a.prestressKN).toBeGreaterThan(0);
+    expect(a.view?.nodes.length).toBeGreaterThan(0);
+    expect(a.loadCases.map((c) => c.name)).toContain(a.view?.caseName);
+  });
+  it("checks the largest displacement against its limit and keeps it", () => {
+    const c = d.checks.find((x) => x.name.startsWith("largest displacement"));
+    expect(c?.passed).toBe(true);
+    expect(c?.capacity).toBeCloseTo(DEFAULT_BRIEF.spanM / 100, 9);
+  });
+  it("the closed form alone stays available as the cross-check, without an analysis", () => {
+    const closed = design(DEFAULT_BRIEF, { ...cableDome.defaults, analysis: "closed-form" });
+    expect(closed.analysis).toBeUndefined();
+    expect(closed.feasible).toBe(true);
+  });
+});

@@ -1,0 +1,232 @@
+import type { Brief } from "../../brief";
+import type { AnalysisView, DesignAnalysis, PlanCombination } from "../kit";
+import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
+import { cableDomeModel, type DomeMemberTag } from "../../analysis/models/cable-dome-model";
+import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
+import { cableDomeSelfStress, type CableDomeTrussForces } from "../../mechanics/cable-dome-truss";
+import type { NodalLoad } from "../../analysis/model";
+import type { CableDomeLayout } from "./geometry";
+import type { DomeMemberGroup } from "./sizing";
+
+/** Which cables may go slack under a combination: none, or the diagonals (the designer's choice). */
+export type DomeSlackRule = "none" | "diagonals";
+
+export interface DomeAnalysisInput {
+  brief: Brief;
+  basis: DesignBasis;
+  layout: CableDomeLayout;
+  combinations: readonly PlanCombination[];
+  /** Converged self-weight, kPa on plan, and the closed-form sizes (for EA) and prestress (the seed). */
+  selfWeightKPa: number;
+  groups: readonly DomeMemberGroup[];
+  seedPrestressN: number;
+  residualPrestress: number;
+  slack: DomeSlackRule;
+  /** Largest displacement allowed, m: the prestress is raised until no analysed case moves more. */
+  displacementLimitM: number;
+}
+
+/** The forces of one analysed combination, enveloped over the trusses in the shape of the ring-by-ring statics. */
+export interface DomeAnalysedCase {
+  name: string;
+  solution: CableSolution;
+  envelope: CableDomeTrussForces;
+  maxDisplacementM: number;
+  slackMembers: number;
+}
+
+export interface DomeAnalysis {
+  prestressN: number;
+  cases: DomeAnalysedCase[];
+  /** Why it failed (a case did not converge), "" otherwise. */
+  reason: string;
+  summary: DesignAnalysis;
+  ringCompressionN: number;
+  ringCase: string;
+}
+
+/**
+ * The combinations the 3D analysis runs: the gravity combination with the largest peak, the
+ * largest drifted-snow one, and the most upward uplift one (the others are bounded by these in the
+ * uniform equivalents; common practice at feasibility, no source).
+ */
+export function analysedCombinations(combinations: readonly PlanCombination[]): PlanCombination[] {
+  const gravity = combinations.filter((c) => c.purpose === "gravity").sort((a, b) => b.baseKPa - a.baseKPa);
+  const drifted = gravity.find((c) => c.combination.terms.some((t) => t.caseId === "snow-drifted"));
+  const uplift = combinations.filter((c) => c.purpose === "uplift").sort((a, b) => a.baseKPa - b.baseKPa);
+  return [...new Set([gravity[0], drifted, uplift[0]].filter((c): c is PlanCombination => c !== undefined))];
+}
+
+function stiffnessOf(groups: readonly DomeMemberGroup[]) {
+  const byName = new Map(groups.map((g) => [g.element, g]));
+  const STEEL_E = 2.1e11;
+  return (family: DomeMemberTag["family"], index: number): number => {
+    const name = family === "post" ? (index === 0 ? "central drum strut" : `post ${index}`) : family === "ridge" ? `ridge cable ${index}` : family === "diagonal" ? `diagonal ${index}` : family === "hoop" ? `hoop ${index}` : family;
+    const g = byName.get(name);
+    if (!g) return 1e9;
+    return (g.modulusPa > 0 ? g.modulusPa : STEEL_E) * g.areaM2;
+  };
+}
+
+/** Nodal loads of a combination at the post heads: the map at each head's plan position × its tributary plan area (vertical; the horizontal part of the wind is left out). */
+function headLoads(input: DomeAnalysisInput, model: ReturnType<typeof cableDomeModel>, c: PlanCombination): NodalLoad[] {
+  const at = combinationAtPlanKPa(input.basis, c.combination, input.selfWeightKPa);
+  const { trusses } = input.layout;
+  const loads: NodalLoad[] = [];
+  model.headAreaM2.forEach((area, i) => {
+    const r = input.layout.truss.radiiM[i] as number;
+    for (let k = 0; k < trusses; k++) {
+      const angle = (2 * Math.PI * k) / trusses;
+      loads.push({ node: model.headNode(k, i), forceN: [0, 0, -at(r * Math.cos(angle), r * Math.sin(angle)) * 1000 * area] });
+    }
+  });
+  return loads;
+}
+
+function envelopeOf(model: ReturnType<typeof cableDomeModel>, n: number, forces: Float64Array): CableDomeTrussForces {
+  const e: CableDomeTrussForces = {
+    ridgeN: Array(n + 1).fill(-Infinity), diagonalN: Array(n + 1).fill(-Infinity), postN: Array(n + 1).fill(Infinity), hoopN: Array(n).fill(-Infinity),
+    centralTopRingN: -Infinity, centralBottomRingN: -Infinity, compressionRingN: 0, ringPullN: 0, ringReactionN: 0,
+  };
+  model.tags.forEach((t, m) => {
+    const f = forces[m] as number;
+    if (t.family === "ridge") e.ridgeN[t.index - 1] = Math.max(e.ridgeN[t.index - 1] as number, f);
+    else if (t.family === "diagonal") e.diagonalN[t.index - 1] = Math.max(e.diagonalN[t.index - 1] as number, f);
+    else if (t.family === "hoop") e.hoopN[t.index - 1] = Math.max(e.hoopN[t.index - 1] as number, f);
+    else if (t.family === "post") e.postN[t.index] = Math.min(e.postN[t.index] as number, f);
+    else if (t.family === "central upper ring") e.centralTopRingN = Math.max(e.centralTopRingN, f);
+    else e.centralBottomRingN = Math.max(e.centralBottomRingN, f);
+  });
+  return e;
+}
+
+/** The largest radial pull of the ring nodes (from the reactions), N: the ring force as if every truss pulled that hard. */
+function ringCompressionOf(model: ReturnType<typeof cableDomeModel>, s: CableSolution, trusses: number): number {
+  let pull = 0;
+  for (const node of model.ringNodes) {
+    const [x, y] = model.model.nodes[node] as readonly [number, number, number];
+    const r = Math.hypot(x, y);
+    pull = Math.max(pull, Math.abs((s.reactionsN[3 * node] as number) * x + (s.reactionsN[3 * node + 1] as number) * y) / r);
+  }
+  return pull / (2 * Math.sin(Math.PI / trusses));
+}
+
+function maxDisplacement(s: CableSolution): number {
+  let m = 0;
+  for (let k = 0; k < s.displacementsM.length; k += 3) m = Math.max(m, Math.hypot(s.displacementsM[k] as number, s.displacementsM[k + 1] as number, s.displacementsM[k + 2] as number));
+  return m;
+}
+
+/** Times the prestress may be raised by half while no passing value is found. */
+const RAISES = 5;
+/** Bisection steps between a failing and a passing prestress. */
+const BISECTIONS = 3;
+
+type Round = { alpha: number; model: ReturnType<typeof cableDomeModel>; solved: { c: PlanCombination; s: CableSolution }[]; pass: boolean; estimate: number };
+
+/**
+ * The 3D analysis of the dome (Newton–Raphson, tension-only cables, src/analysis) under the
+ * analysed combinations, with the least prestress (a multiple α of the axisymmetric self-stress
+ * state, seeded by the closed form) under which every case converges, every cable — or every cable
+ * but the diagonals when the designer lets them slacken — keeps at least `residualPrestress` × its
+ * prestress force, and no node moves more than the displacement limit. A passing α is bracketed
+ * (from the linear estimate N_j = α s_j + l_j ⇒ α = max −l_j/((1 − m) s_j), or by raising α by
+ * half) and then bisected against the highest failing one; the passing end is kept.
+ */
+export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
+  const g = input.layout.truss;
+  const n = g.radiiM.length - 1;
+  const unit = cableDomeSelfStress(g, 1);
+  const stiffness = stiffnessOf(input.groups);
+  const unitModel = cableDomeModel(g, unit, stiffness);
+  const s = unitModel.model.members.map((m) => m.initialForceN ?? 0);
+  const mustStayTaut = unitModel.tags.map((t, m) => unitModel.model.members[m]?.kind === "cable" && !(input.slack === "diagonals" && t.family === "diagonal"));
+  const combos = analysedCombinations(input.combinations);
+  const margin = input.residualPrestress;
+  const run = (alpha: number): Round => {
+    const model = cableDomeModel(g, scaleForces(unit, alpha), stiffness);
+    const solved = combos.map((c) => ({ c, s: solveCableModel({ ...model.model, loads: headLoads(input, model, c) }, { steps: 1, maxIterations: 30 }) }));
+    let pass = true;
+    let estimate = 0;
+    for (const { s: sol } of solved) {
+      if (!sol.converged) {
+        pass = false;
+        continue;
+      }
+      if (maxDisplacement(sol) > input.displacementLimitM) pass = false;
+      sol.forcesN.forEach((f, j) => {
+        if (!mustStayTaut[j]) return;
+        const sj = s[j] as number;
+        if (sol.slack[j] || f < margin * alpha * sj) pass = false;
+        estimate = Math.max(estimate, -(f - alpha * sj) / ((1 - margin) * sj));
+      });
+    }
+    return { alpha, model, solved, pass, estimate };
+  };
+  let hi = run(input.seedPrestressN);
+  let lo: Round | null = null;
+  if (hi.pass) {
+    const trial = run(Math.min(hi.alpha, Math.max(0.3 * hi.alpha, 1.02 * hi.estimate)));
+    if (trial.pass) hi = trial;
+    else lo = trial;
+  }
+  for (let k = 0; k < RAISES && !hi.pass; k++) {
+    lo = hi;
+    hi = run(1.5 * hi.alpha);
+  }
+  for (let k = 0; k < BISECTIONS && lo !== null && hi.pass; k++) {
+    const mid = run((lo.alpha + hi.alpha) / 2);
+    if (mid.pass) hi = mid;
+    else lo = mid;
+  }
+  return summarise(input, hi, n, mustStayTaut);
+}
+
+function scaleForces(f: CableDomeTrussForces, a: number): CableDomeTrussForces {
+  const times = (xs: readonly number[]) => xs.map((x) => a * x);
+  return {
+    ridgeN: times(f.ridgeN), diagonalN: times(f.diagonalN), postN: times(f.postN), hoopN: times(f.hoopN),
+    centralTopRingN: a * f.centralTopRingN, centralBottomRingN: a * f.centralBottomRingN, compressionRingN: a * f.compressionRingN, ringPullN: a * f.ringPullN, ringReactionN: a * f.ringReactionN,
+  };
+}
+
+function summarise(input: DomeAnalysisInput, last: Round, n: number, mustStayTaut: boolean[]): DomeAnalysis {
+  const { model, solved, alpha } = last;
+  const cases = solved.map(({ c, s }) => ({ name: c.name, solution: s, envelope: envelopeOf(model, n, s.forcesN), maxDisplacementM: maxDisplacement(s), slackMembers: s.slack.filter(Boolean).length }));
+  const notConverged = solved.find(({ s }) => !s.converged);
+  const slackTaut = solved.find(({ s }) => s.slack.some((sl, j) => sl && mustStayTaut[j]));
+  const reason = notConverged
+    ? `the 3D analysis did not converge under ${notConverged.c.name}: ${notConverged.s.reason ?? "no equilibrium"}`
+    : slackTaut
+      ? `cables go slack under ${slackTaut.c.name} even at the largest prestress tried (${(alpha / 1000).toFixed(0)} kN): add hoops or deepen the posts`
+      : "";
+  const ring = solved.reduce((w, { c, s }) => {
+    const r = ringCompressionOf(model, s, input.layout.trusses);
+    return r > w.n ? { n: r, name: c.name } : w;
+  }, { n: 0, name: "" });
+  const worst = cases.reduce((w, c) => (c.maxDisplacementM > w.maxDisplacementM ? c : w), cases[0] as DomeAnalysedCase);
+  return {
+    prestressN: alpha,
+    cases,
+    reason,
+    ringCompressionN: ring.n,
+    ringCase: ring.name,
+    summary: {
+      loadCases: cases.map((c) => ({ name: c.name, iterations: c.solution.iterations, converged: c.solution.converged, maxDisplacementM: c.maxDisplacementM, slackMembers: c.slackMembers })),
+      prestressKN: alpha / 1000,
+      view: domeView(input, model, worst),
+    },
+  };
+}
+
+/** The model drawn for the case that moves it most: heights above the floor, forces, displacements, slack cables. */
+function domeView(input: DomeAnalysisInput, model: ReturnType<typeof cableDomeModel>, c: DomeAnalysedCase): AnalysisView {
+  const base = input.layout.baseM;
+  const d = c.solution.displacementsM;
+  return {
+    caseName: c.name,
+    nodes: model.model.nodes.map(([x, y, z]) => [x, y, z + base] as const),
+    members: model.model.members.map((m, j) => ({ a: m.i, b: m.j, kind: m.kind, forceN: c.solution.forcesN[j] as number, slack: c.solution.slack[j] as boolean })),
+    displacementsM: model.model.nodes.map((_, k) => [d[3 * k] as number, d[3 * k + 1] as number, d[3 * k + 2] as number] as const),
+  };
+}
