@@ -32,6 +32,7 @@ import { envelope } from "../src/takeoff";
 import {
   sectionChartOptions,
   planChartOptions,
+  model3dChartOptions,
   chartCaption,
   massByMaterialChart,
   carbonByModuleChart,
@@ -216,6 +217,12 @@ for (const s of schemes) {
       ),
     );
     if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, roles, title: `${s.model.label}: plan`, caption: caption.value }), `${id}-plan`));
+    const view = design.analysis?.view;
+    if (view) {
+      for (const projection of ["plan", "oblique"] as const) {
+        wrap.append(chartFigure(model3dChartOptions({ view, projection, title: `${s.model.label}: 3D analysis, ${projection === "plan" ? "plan" : "oblique view"}`, caption: caption.value }), `${id}-model-${projection}`));
+      }
+    }
     return wrap;
   });
   // Slot for the scheme's 3D analysis model (issue 13, item 7): a cell with id `${id}-model` goes here.

@@ -10,3 +10,4 @@ export { costChartOptions, costByElementData, ON_COSTS_PART, type SchemeCost, ty
 export { planChartOptions, type PlanChartInput } from "./plan-chart";
 export { spanMetricChart, spanValidityChart, type SpanMetric } from "./span-charts";
 export * from "./risk-charts";
+export { model3dChartOptions, model3dMagnification, type Model3dChartInput, type ModelProjection } from "./model-3d-chart";
