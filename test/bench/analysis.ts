@@ -81,3 +81,27 @@ benchTension("160 m saddle cable net, 4 m mesh", saddleNet({ spanM: 160, spacing
 const dome = radialCableDome({ spanM: 160, trusses: 32, panels: 8, hubRatio: 0.12, ringDepthM: 4, hubDepthM: 14, prestressN: 4e6, cableEaN: 4e9, postEaN: 8e9 });
 benchTension("160 m radial cable-truss dome, 32 trusses × 8 panels", dome, 80, 5);
 benchLattice();
+
+// The tension schemes' full design (closed form, hoop choice, 3D analysis and prestress search) at
+// 60, 160 and 300 m with the default brief's rise ÷ span: CPU medians (the budget is ~100 ms at 160 m).
+{
+  const { cableDome } = await import("../../src/schemes/cable-dome");
+  const { cableNet } = await import("../../src/schemes/cable-net");
+  const { DEFAULT_BRIEF } = await import("../../src/brief");
+  const { defaultCatalogue } = await import("../../src/catalogue/default-catalogue");
+  const catalogue = defaultCatalogue();
+  for (const [name, model] of [["cable dome", cableDome], ["cable net", cableNet]] as const) {
+    for (const spanM of [60, 160, 300]) {
+      const brief = { ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM };
+      const cpu: number[] = [];
+      let d = model.design(brief, model.defaults as never, catalogue);
+      for (let r = 0; r < 3; r++) {
+        const c0 = cpuMs();
+        d = model.design(brief, model.defaults as never, catalogue);
+        cpu.push(cpuMs() - c0);
+      }
+      const cases = d.analysis?.loadCases.map((c) => `${c.name}: ${c.iterations} it, ${c.maxDisplacementM.toFixed(2)} m, ${c.slackMembers} slack`).join("; ") ?? "no 3D analysis";
+      console.log(`${name} ${spanM} m: full design median ${median(cpu).toFixed(0)} ms CPU; ${d.status}; prestress ${d.analysis?.prestressKN?.toFixed(0) ?? "–"} kN; ${cases}`);
+    }
+  }
+}

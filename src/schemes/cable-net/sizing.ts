@@ -206,8 +206,11 @@ function sizeMast(input: NetSizingInput, cableMastN: number): Omit<NetMemberGrou
   let mast: ReturnType<typeof pickChs> = null;
   for (let pass = 0; pass < 6; pass++) {
     const demand = [{ forceN: -mastN, effectiveLengthM: effective }];
-    catalogueMast = pickChs(input.catalogue.chs, demand, { yieldPa: input.yieldPa, curve: "a" });
-    mast = catalogueMast ?? pickChs(FABRICATED_TUBES, demand, { yieldPa: input.yieldPa, curve: "b" });
+    const fromCatalogue = pickChs(input.catalogue.chs, demand, { yieldPa: input.yieldPa, curve: "a" });
+    const fabricatedTube = pickChs(FABRICATED_TUBES, demand, { yieldPa: input.yieldPa, curve: "b" });
+    // the lighter of the catalogue and the fabricated tube: the catalogue's large sizes step coarsely (a jump in mass across span otherwise)
+    catalogueMast = fromCatalogue && (!fabricatedTube || fromCatalogue.section.massKgPerM <= fabricatedTube.section.massKgPerM) ? fromCatalogue : null;
+    mast = catalogueMast ?? fabricatedTube;
     if (!mast) break;
     const withWeight = cableMastN + brief.factors.gammaGSup * mast.section.massKgPerM * layout.mastLengthM * GRAVITY_M_PER_S2;
     if (withWeight <= mastN) break;

@@ -1,0 +1,38 @@
+// Issue 12 item 5: along 40–400 m in 5 m steps no metric of a feasible, in-range scheme changes by
+// more than 15 % between neighbouring spans (no regime change is reported by these two schemes).
+// The brief keeps the default rise ÷ span at every span.
+import { describe, expect, it } from "vitest";
+import { DEFAULT_BRIEF } from "../../src/brief";
+import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
+import { cableNet } from "../../src/schemes/cable-net";
+import type { Design, SchemeModel } from "../../src/schemes/types";
+
+const catalogue = defaultCatalogue();
+const spans = Array.from({ length: 73 }, (_, i) => 40 + 5 * i);
+const metrics: [string, (d: Design) => number][] = [
+  ["self-weight per m² of plan", (d) => d.selfWeightKgPerM2],
+  ["usable floor ÷ plan", (d) => d.usableFloorM2 / d.planAreaM2],
+  ["total mass per m² of plan", (d) => d.totalMassKg / d.planAreaM2],
+];
+
+function jumps(model: SchemeModel): string[] {
+  const designs = spans.map((spanM) => model.design({ ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM }, model.defaults, catalogue));
+  const found: string[] = [];
+  designs.forEach((d, i) => {
+    const prev = designs[i - 1];
+    if (!prev || prev.status !== "feasible" || d.status !== "feasible") return;
+    for (const [name, metric] of metrics) {
+      const [a, b] = [metric(prev), metric(d)];
+      if (Math.abs(b - a) > 0.15 * Math.abs(a)) found.push(`${name} ${a.toFixed(3)} → ${b.toFixed(3)} between ${spans[i - 1]} and ${spans[i]} m`);
+    }
+  });
+  return found;
+}
+
+describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
+  // NOT YET: with the 3D prestress search the dome jumps 22 % in self-weight between 215 and 220 m at the
+  // default rise ÷ span (0.15), and the sweep takes minutes on this machine; at rise ÷ span 0.1375 its
+  // largest step was 12 % (measured, 40–300 m). Left visible as a todo, not passed.
+  it.todo("cable dome (22 % jump 215 → 220 m with the 3D prestress search)");
+  it("cable net", () => expect(jumps(cableNet as unknown as SchemeModel)).toEqual([]), 600_000);
+});
