@@ -2,7 +2,7 @@ import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Design, DesignParts, OptionValues, PlanCombination } from "../kit";
-import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, planCombinations, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
+import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, planCombinations, SizingError, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
@@ -105,10 +105,17 @@ function domeSummary(layout: CableDomeLayout, sized: DomeSizing, ring: RingDesig
  * found; null when the analysis failed (its reason is returned instead).
  */
 function analysedSizing(input: DomeSizingInput, sized: DomeSizing, selfWeightKPa: number, opts: CableDomeOptions): { sized: DomeSizing; analysis: DomeAnalysis } {
-  const analysis = analyseDome({
-    brief: input.brief, basis: input.basis, layout: input.layout, combinations: input.combinations, selfWeightKPa, groups: sized.groups,
-    seedPrestressN: sized.prestressN, residualPrestress: opts.residualPrestress, slack: opts.slackAllowed as DomeSlackRule, displacementLimitM: input.brief.spanM * DEFLECTION_LIMIT_RATIO,
-  });
+  let analysis: DomeAnalysis;
+  try {
+    analysis = analyseDome({
+      brief: input.brief, basis: input.basis, layout: input.layout, combinations: input.combinations, selfWeightKPa, groups: sized.groups,
+      seedPrestressN: sized.prestressN, residualPrestress: opts.residualPrestress, slack: opts.slackAllowed as DomeSlackRule, displacementLimitM: input.brief.spanM * DEFLECTION_LIMIT_RATIO,
+    });
+  } catch (error) {
+    // the model refuses a member state it cannot represent (e.g. a strut squeezed beyond −EA by a very large prestress)
+    if (!(error instanceof RangeError)) throw error;
+    throw new SizingError(`the 3D analysis could not be set up: ${error.message}; try the closed form, more hoops or a deeper truss`);
+  }
   if (analysis.reason !== "") return { sized, analysis };
   const groups = domeMembers(input, analysis.cases.map((c) => ({ name: c.name, pressurePa: 0, forces: c.envelope })));
   return { sized: { ...sized, groups, prestressN: analysis.prestressN, ringCompressionN: analysis.ringCompressionN, ringCase: analysis.ringCase }, analysis };
