@@ -217,19 +217,23 @@ for (const s of schemes) {
       ),
     );
     if (design.drawing.plan) wrap.append(chartFigure(planChartOptions({ brief: brief.value, lines: design.drawing.plan, roles, title: `${s.model.label}: plan`, caption: caption.value }), `${id}-plan`));
-    const view = design.analysis?.view;
-    if (view) {
-      for (const projection of ["plan", "oblique"] as const) {
-        wrap.append(chartFigure(model3dChartOptions({ view, projection, title: `${s.model.label}: 3D analysis, ${projection === "plan" ? "plan" : "oblique view"}`, caption: caption.value }), `${id}-model-${projection}`));
-      }
-    }
     return wrap;
   });
-  // Slot for the scheme's 3D analysis model (issue 13, item 7): a cell with id `${id}-model` goes here.
+  // The scheme's 3D analysis model (issue 13, item 7), when its design carries a view.
   const modelSlot = document.createElement("div");
   modelSlot.className = "model-slot";
   modelSlot.id = `${id}-model-slot`;
   detail.body.append(modelSlot);
+  reactiveCell(modelSlot, { id: `${id}-model` }, () => {
+    const view = s.enabled.value && detail.open.value ? s.design.value.analysis?.view : undefined;
+    if (!view) return null;
+    const wrap = document.createElement("div");
+    wrap.className = "grid charts";
+    for (const projection of ["plan", "oblique"] as const) {
+      wrap.append(chartFigure(model3dChartOptions({ view, projection, title: `${s.model.label}: 3D analysis, ${projection === "plan" ? "plan" : "oblique view"}`, caption: caption.value }), `${id}-model-${projection}`));
+    }
+    return wrap;
+  });
   reactiveCell(detail.body, { id: `${id}-tables` }, () => {
     if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;

@@ -20,23 +20,35 @@ const briefArb = fc
   })
   .map(({ riseRatio, ...b }) => ({ ...DEFAULT_BRIEF, ...b, riseM: Math.min(250, Math.max(0.5, b.spanM * riseRatio)) }));
 
-describe("every scheme's take-off (fast-check over briefs)", () => {
+/** Runs per property; the cable dome's 3D analysis (up to seconds a design at the largest spans) runs fewer, its closed form the full count. */
+const RUNS = 120;
+const RUNS_3D = Number(process.env.TAKEOFF_RUNS_3D ?? 16);
+
+function assertTakeoff(model: (typeof SCHEMES)[number], options: Record<string, string> | undefined, numRuns: number): void {
   const catalogue = defaultCatalogue();
+  fc.assert(
+    fc.property(briefArb, (brief) => {
+      const design = designScheme(model, brief, options, catalogue);
+      expect(design.reason).not.toMatch(/^could not be computed/);
+      for (const row of design.takeoff) {
+        expect(Number.isFinite(row.massKg) && row.massKg >= 0, `${row.element} mass ${row.massKg}`).toBe(true);
+        expect(Number.isFinite(row.quantity) && row.quantity >= 0, `${row.element} quantity ${row.quantity}`).toBe(true);
+      }
+      expect(Number.isFinite(design.selfWeightKgPerM2)).toBe(true);
+      expect(Number.isFinite(design.usableFloorM2) && design.usableFloorM2 >= 0 && design.usableFloorM2 <= design.planAreaM2 * (1 + 1e-9)).toBe(true);
+    }),
+    { numRuns },
+  );
+}
+
+describe("every scheme's take-off (fast-check over briefs)", () => {
   for (const model of SCHEMES) {
-    it(`${model.id}: quantities and masses are finite and ≥ 0, and no internal error`, () => {
-      fc.assert(
-        fc.property(briefArb, (brief) => {
-          const design = designScheme(model, brief, undefined, catalogue);
-          expect(design.reason).not.toMatch(/^could not be computed/);
-          for (const row of design.takeoff) {
-            expect(Number.isFinite(row.massKg) && row.massKg >= 0, `${row.element} mass ${row.massKg}`).toBe(true);
-            expect(Number.isFinite(row.quantity) && row.quantity >= 0, `${row.element} quantity ${row.quantity}`).toBe(true);
-          }
-          expect(Number.isFinite(design.selfWeightKgPerM2)).toBe(true);
-          expect(Number.isFinite(design.usableFloorM2) && design.usableFloorM2 >= 0 && design.usableFloorM2 <= design.planAreaM2 * (1 + 1e-9)).toBe(true);
-        }),
-        { numRuns: 120 },
-      );
+    const hasAnalysis = model.options.some((o) => o.key === "analysis");
+    it(`${model.id}: quantities and masses are finite and ≥ 0, and no internal error${hasAnalysis ? " (closed form)" : ""}`, () => {
+      assertTakeoff(model, hasAnalysis ? { analysis: "closed-form" } : undefined, RUNS);
     });
+    if (hasAnalysis) {
+      it(`${model.id}: the same with the 3D analysis (${RUNS_3D} briefs)`, () => assertTakeoff(model, { analysis: "3d" }, RUNS_3D), 300_000);
+    }
   }
 });

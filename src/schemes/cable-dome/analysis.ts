@@ -1,5 +1,5 @@
 import type { Brief } from "../../brief";
-import type { AnalysisView, DesignAnalysis, PlanCombination } from "../kit";
+import { uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
 import { cableDomeModel, type DomeMemberTag } from "../../analysis/models/cable-dome-model";
 import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
@@ -117,8 +117,14 @@ function maxDisplacement(s: CableSolution): number {
   return m;
 }
 
-/** Times the prestress may be raised by half while no passing value is found. */
-const RAISES = 5;
+/** Times the prestress may be raised while no passing value is found (by half, or fourfold while a case does not converge). */
+const RAISES = 8;
+/**
+ * Least prestress tried, as a share of the heaviest combination's total load on plan: the closed
+ * form's prestress is nil where no combination lifts the roof, and a Geiger dome with (almost) no
+ * prestress is a mechanism under asymmetric load (a floor for the search, not a design value).
+ */
+const PRESTRESS_FLOOR_OF_LOAD = 0.02;
 /** Bisection steps between a failing and a passing prestress. */
 const BISECTIONS = 3;
 
@@ -163,7 +169,9 @@ export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
     }
     return { alpha, model, solved, pass, estimate };
   };
-  let hi = run(input.seedPrestressN);
+  const planAreaM2 = Math.PI * g.ringRadiusM ** 2;
+  const heaviestN = Math.max(0, ...combos.map((c) => uniformPressurePa(c, input.selfWeightKPa))) * planAreaM2;
+  let hi = run(Math.max(input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestN));
   let lo: Round | null = null;
   if (hi.pass) {
     const trial = run(Math.min(hi.alpha, Math.max(0.3 * hi.alpha, 1.02 * hi.estimate)));
@@ -172,7 +180,8 @@ export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
   }
   for (let k = 0; k < RAISES && !hi.pass; k++) {
     lo = hi;
-    hi = run(1.5 * hi.alpha);
+    const allConverged = hi.solved.every(({ s: sol }) => sol.converged);
+    hi = run(allConverged ? Math.max(1.5 * hi.alpha, Math.min(4 * hi.alpha, 1.02 * hi.estimate)) : 4 * hi.alpha);
   }
   for (let k = 0; k < BISECTIONS && lo !== null && hi.pass; k++) {
     const mid = run((lo.alpha + hi.alpha) / 2);

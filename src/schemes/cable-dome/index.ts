@@ -98,7 +98,6 @@ function domeSummary(layout: CableDomeLayout, sized: DomeSizing, ring: RingDesig
   ];
 }
 
-/** The dome with a given number of hoops: layout, self-weight iterated around the sizing, ring, checks and take-off. */
 /**
  * The closed-form sizing re-done from the 3D analysis: members sized for the analysed forces
  * (enveloped over the trusses), the ring for the largest analysed pull, the prestress the analysis
@@ -124,6 +123,7 @@ function analysedSizing(input: DomeSizingInput, sized: DomeSizing, selfWeightKPa
 /** Largest displacement under the analysed combinations ÷ span allowed (common practice for cable roofs, no source). */
 export const DEFLECTION_LIMIT_RATIO = 1 / 100;
 
+/** The dome with a given number of hoops: layout, self-weight iterated around the sizing, ring, checks and take-off. */
 function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, hoops: number, combinations: readonly PlanCombination[], basis: DesignBasis, analyse: boolean): DesignParts {
   const fabric = findFabric(catalogue, opts.fabric);
   const actions = roofActions(brief);
