@@ -194,8 +194,15 @@ function design(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue) {
   const basis = designBasis(brief);
   const combinations = planCombinations(brief, basis);
   const withHoops = (hoops: number, analyse: boolean) => infeasibleOnFailure(identity.id, brief, () => assembleDesign(identity, brief, designWith(brief, opts, catalogue, hoops, combinations, basis, analyse)));
-  const analyse = opts.analysis === "3d";
-  if (opts.hoops > 0) return withHoops(opts.hoops, analyse);
+  // outside the method's span range the design is not ranked: the closed form answers there, in milliseconds rather than seconds
+  const inRange = brief.spanM >= identity.validSpanM.min && brief.spanM <= identity.validSpanM.max;
+  const analyse = opts.analysis === "3d" && inRange;
+  const result = opts.hoops > 0 ? withHoops(opts.hoops, analyse) : lightestHoops(brief, withHoops, analyse);
+  return opts.analysis === "3d" && !inRange ? { ...result, warnings: [...result.warnings, `outside the valid span range (${identity.validSpanM.min}–${identity.validSpanM.max} m) the 3D analysis is not run: closed form only`] } : result;
+}
+
+/** The lightest feasible of one hoop fewer, the usual count and one more, by the closed form; then analysed when asked. */
+function lightestHoops(brief: Brief, withHoops: (hoops: number, analyse: boolean) => Design, analyse: boolean): Design {
   const usual = autoHoopCount(brief.spanM);
   const counts = [usual - 1, usual, usual + 1].filter((n) => n >= 1 && n <= 8);
   const candidates = counts.map((n) => withHoops(n, false));

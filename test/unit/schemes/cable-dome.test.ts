@@ -151,6 +151,11 @@ describe("cableDome through the 3D analysis (issue 13)", () => {
     expect(closed.analysis).toBeUndefined();
     expect(closed.feasible).toBe(true);
   });
+  it("runs the 3D analysis only within the valid span range (out of range it is not ranked: the closed form answers, and says so)", () => {
+    const wide = design({ ...DEFAULT_BRIEF, spanM: 280, riseM: 42 });
+    expect(wide.analysis).toBeUndefined();
+    expect(wide.warnings.some((w) => w.includes("3D analysis is not run"))).toBe(true);
+  });
   it("finds a prestress where no combination lifts the roof (the closed form's is nil; a light wind was infeasible)", () => {
     const calm = design({ ...DEFAULT_BRIEF, spanM: 120, riseM: 18, windBasicMPerS: 10 });
     expect(calm.reason).toBe("");
