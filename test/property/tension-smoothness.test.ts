@@ -5,6 +5,7 @@ import { describe, expect, it } from "vitest";
 import { DEFAULT_BRIEF } from "../../src/brief";
 import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { cableNet } from "../../src/schemes/cable-net";
+import { cableDome } from "../../src/schemes/cable-dome";
 import type { Design, SchemeModel } from "../../src/schemes/types";
 
 const catalogue = defaultCatalogue();
@@ -15,8 +16,8 @@ const metrics: [string, (d: Design) => number][] = [
   ["total mass per m² of plan", (d) => d.totalMassKg / d.planAreaM2],
 ];
 
-function jumps(model: SchemeModel): string[] {
-  const designs = spans.map((spanM) => model.design({ ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM }, model.defaults, catalogue));
+function jumps(model: SchemeModel, options: Record<string, string> = {}): string[] {
+  const designs = spans.map((spanM) => model.design({ ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM }, { ...model.defaults, ...options }, catalogue));
   const found: string[] = [];
   designs.forEach((d, i) => {
     const prev = designs[i - 1];
@@ -30,9 +31,10 @@ function jumps(model: SchemeModel): string[] {
 }
 
 describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
-  // NOT YET: with the 3D prestress search the dome jumps 22 % in self-weight between 215 and 220 m at the
-  // default rise ÷ span (0.15), and the sweep takes minutes on this machine; at rise ÷ span 0.1375 its
-  // largest step was 12 % (measured, 40–300 m). Left visible as a todo, not passed.
-  it.todo("cable dome (22 % jump 215 → 220 m with the 3D prestress search)");
+  // NOT YET: with the 3D prestress search the dome's self-weight still steps 16.8 % between 215 and 220 m
+  // at the default rise ÷ span (measured after the prestress floor; 10.6 % at 75 → 80 m and 11.5 % at
+  // 150 → 155 m are within the 15 %). Kept as an expected failure, so it is seen the day it passes.
+  it.fails("cable dome with the 3D analysis (16.8 % jump 215 → 220 m)", () => expect(jumps(cableDome as unknown as SchemeModel, { analysis: "3d" })).toEqual([]), 600_000);
+  it("cable dome, closed form (the default)", () => expect(jumps(cableDome as unknown as SchemeModel)).toEqual([]), 600_000);
   it("cable net", () => expect(jumps(cableNet as unknown as SchemeModel)).toEqual([]), 600_000);
 });

@@ -1,5 +1,5 @@
 import type { Brief } from "../../brief";
-import { uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
+import { analysedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
 import { cableDomeModel, type DomeMemberTag } from "../../analysis/models/cable-dome-model";
 import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
@@ -43,18 +43,6 @@ export interface DomeAnalysis {
   summary: DesignAnalysis;
   ringCompressionN: number;
   ringCase: string;
-}
-
-/**
- * The combinations the 3D analysis runs: the gravity combination with the largest peak, the
- * largest drifted-snow one, and the most upward uplift one (the others are bounded by these in the
- * uniform equivalents; common practice at feasibility, no source).
- */
-export function analysedCombinations(combinations: readonly PlanCombination[]): PlanCombination[] {
-  const gravity = combinations.filter((c) => c.purpose === "gravity").sort((a, b) => b.baseKPa - a.baseKPa);
-  const drifted = gravity.find((c) => c.combination.terms.some((t) => t.caseId === "snow-drifted"));
-  const uplift = combinations.filter((c) => c.purpose === "uplift").sort((a, b) => a.baseKPa - b.baseKPa);
-  return [...new Set([gravity[0], drifted, uplift[0]].filter((c): c is PlanCombination => c !== undefined))];
 }
 
 function stiffnessOf(groups: readonly DomeMemberGroup[]) {

@@ -2,7 +2,7 @@ import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Design, DesignParts, OptionValues, PlanCombination } from "../kit";
-import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, planCombinations, SizingError, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
+import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, planCombinations, SizingError, ANALYSIS_OPTION, CABLE_ROOF_DEFLECTION_RATIO, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
@@ -28,7 +28,7 @@ const declarations = {
   // the cables do restrain the ring; false gives the bare-ring 3EI/R³ (Timoshenko & Gere ch. 7)
   ringCableRestraint: { kind: "toggle", label: "Ridge cables restrain ring buckling", default: true, source: "ring on elastic foundation (from memory); off: bare ring, Timoshenko & Gere ch. 7" },
   bareRingLoad: { kind: "select", label: "Bare ring: direction of the cable pull", choices: [{ value: "normal", label: "Normal to the ring (3EI/r³)" }, { value: "centre", label: "Directed to the centre (4.5EI/r³)" }], default: "normal", source: "Timoshenko & Gere, Theory of Elastic Stability, 1961, ch. 7 (from memory): q_cr = 3EI/r³ for pressure normal to the ring, 4.5EI/r³ for a load that stays directed to the centre" },
-  analysis: { kind: "select", label: "Analysis", choices: [{ value: "3d", label: "3D nonlinear (sizes from the analysed forces)" }, { value: "closed-form", label: "Axisymmetric closed form only" }], default: "3d", source: "issue 13: the 3D analysis designs, the closed form seeds and cross-checks it" },
+  ...ANALYSIS_OPTION,
   slackAllowed: { kind: "select", label: "Cables allowed to slacken", choices: [{ value: "none", label: "None" }, { value: "diagonals", label: "Diagonals" }], default: "none", source: "design choice" },
   ...FABRIC_OPTION,
   ...TENSION_COMMON_OPTIONS,
@@ -120,8 +120,8 @@ function analysedSizing(input: DomeSizingInput, sized: DomeSizing, selfWeightKPa
   return { sized: { ...sized, groups, prestressN: analysis.prestressN, ringCompressionN: analysis.ringCompressionN, ringCase: analysis.ringCase }, analysis };
 }
 
-/** Largest displacement under the analysed combinations ÷ span allowed (common practice for cable roofs, no source). */
-export const DEFLECTION_LIMIT_RATIO = 1 / 100;
+/** Largest displacement under the analysed combinations ÷ span allowed. */
+export const DEFLECTION_LIMIT_RATIO = CABLE_ROOF_DEFLECTION_RATIO;
 
 /** The dome with a given number of hoops: layout, self-weight iterated around the sizing, ring, checks and take-off. */
 function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, hoops: number, combinations: readonly PlanCombination[], basis: DesignBasis, analyse: boolean): DesignParts {

@@ -2,12 +2,18 @@ import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { DesignParts, FloorEnvelope, OptionValues } from "../kit";
-import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, planCombinations, SchemeError, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
+import { capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, planCombinations, SchemeError, SizingError, ANALYSIS_OPTION, CABLE_ROOF_DEFLECTION_RATIO, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
 import { capHeightAt } from "../../mechanics/spherical-cap";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
-import { sizeCableNet, type NetSizing } from "./sizing";
+import { sizeCableNet, sizeNetFromAnalysis, type NetSizing, type NetSizingInput } from "./sizing";
+import { analyseNet, type NetAnalysis } from "./analysis";
+import { designBasis } from "../../loads";
+import { strandResistanceN } from "../../catalogue/pick-strand";
+
+/** Parallel strands a group may have (the catalogue pick's default). */
+const MAX_PARALLEL_STRANDS = 8;
 
 const declarations = {
   // default: common practice for large nets, no source
@@ -24,6 +30,7 @@ const declarations = {
   mastType: { kind: "select", label: "Mast type", choices: [{ value: "plain", label: "Plain tube (buckles over full length)" }, { value: "braced", label: "Braced at mid-height (half length)" }], default: "braced", source: "assumption: braced L_cr = L/2" },
   // default ≈ 1/0.9: EN 1990 Table A1.2(A) (EQU) γ_G,inf = 0.9 on the stabilising weight
   anchorUpliftMargin: { kind: "number", label: "Anchor weight / uplift", unit: "", min: 1.0, max: 3.0, step: 0.05, default: 1.1, source: "EN 1990 Table A1.2(A): 1/0.9" },
+  ...ANALYSIS_OPTION,
   ...TENSION_COMMON_OPTIONS,
 } as const;
 export type CableNetOptions = OptionValues<typeof declarations>;
@@ -56,15 +63,23 @@ function netTakeoff(sized: NetSizing, fabric: Fabric): TakeoffRow[] {
   ];
 }
 
-function netSummary(layout: CableNetLayout, sized: NetSizing) {
+function netSummary(layout: CableNetLayout, sized: NetSizing, analysis: NetAnalysis | undefined) {
   const perM2 = (kg: number) => kg / layout.cap.planAreaM2;
+  const prestress = analysis
+    ? [
+        { key: "prestressRadial", label: "Prestress of a radial cable (3D analysis)", value: analysis.prestressN / 1000, unit: "kN" },
+        { key: "crownHeight", label: "Net crown above the eaves (form-found)", value: analysis.crownM, unit: "m" },
+      ]
+    : [
+        { key: "prestressOuter", label: "Valley pull on the net, outer bay", value: sized.prestressOuterNPerM / 1000, unit: "kN/m" },
+        { key: "prestressInner", label: "Valley pull on the net, inner bay", value: sized.prestressInnerNPerM / 1000, unit: "kN/m" },
+      ];
   return [
     { key: "masts", label: "Masts", value: layout.masts, unit: "" },
     { key: "mastLength", label: "Mast length", value: layout.mastLengthM, unit: "m" },
     { key: "mastForce", label: "Mast force (ULS)", value: sized.mastForceN / 1000, unit: "kN" },
     { key: "backstayForce", label: "Backstay force (ULS)", value: sized.backstayForceN / 1000, unit: "kN" },
-    { key: "prestressOuter", label: "Valley pull on the net, outer bay", value: sized.prestressOuterNPerM / 1000, unit: "kN/m" },
-    { key: "prestressInner", label: "Valley pull on the net, inner bay", value: sized.prestressInnerNPerM / 1000, unit: "kN/m" },
+    ...prestress,
     { key: "gravityUls", label: "ULS gravity, uniform equivalent of the worst combination", value: Math.max(...sized.casesPa) / 1000, unit: "kPa" },
     { key: "upliftUls", label: "ULS net pressure, uniform equivalent of the worst uplift (negative up)", value: Math.min(...sized.casesPa) / 1000, unit: "kPa" },
     { key: "cableKgPerM2", label: "Cables", value: perM2(massOfKinds(sized.groups, ["suspension", "valley", "circumferential", "edge", "backstay"])), unit: "kg/m²" },
@@ -72,6 +87,58 @@ function netSummary(layout: CableNetLayout, sized: NetSizing) {
     { key: "fabricKgPerM2", label: "Fabric", value: perM2(sized.fabricMassKg), unit: "kg/m²" },
     { key: "anchorKgPerM2", label: "Anchors (concrete; substructure allowance, not designed)", value: perM2(sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3), unit: "kg/m²" },
   ];
+}
+
+/** EA of a group of the closed form, N (1 GN where it has none: only a ring of no force). */
+function stiffnessOf(sized: NetSizing, element: string): number {
+  return sized.groups.find((x) => x.element === element)?.eaN ?? 1e9;
+}
+
+/**
+ * The closed-form net re-sized from the 3D analysis (analysis.ts): the analysis seeded by the closed
+ * form's prestress (the radial cable's horizontal tension H = w_p L²/(8f)) and stiffnesses; when it
+ * fails, the closed form's sizes with the analysis's reason.
+ */
+function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: number): { sized: NetSizing; analysis: NetAnalysis } {
+  const { layout } = input;
+  let analysis: NetAnalysis;
+  try {
+    analysis = analyseNet({
+      brief: input.brief, basis: designBasis(input.brief), layout, combinations: input.combinations, selfWeightKPa,
+      seedPrestressN: (closed.prestressOuterNPerM * layout.outer.spanM ** 2) / (8 * layout.outer.sagM), residualPrestress: input.residualPrestress,
+      displacementLimitM: input.brief.spanM * CABLE_ROOF_DEFLECTION_RATIO,
+      maxPrestressN: MAX_PARALLEL_STRANDS * Math.max(...input.catalogue.strands.map((x) => strandResistanceN(x.minBreakingForceN, input.gammaR))),
+      eaN: { outer: stiffnessOf(closed, "outer radial cables"), inner: stiffnessOf(closed, "inner radial cables"), hoop: stiffnessOf(closed, "circumferential cable 1"), ring: stiffnessOf(closed, "central tension ring") },
+    });
+  } catch (error) {
+    // the force density network or the model refuses a state it cannot represent
+    if (!(error instanceof RangeError)) throw error;
+    throw new SizingError(`the 3D analysis of the net could not be set up: ${error.message}; try the closed form or other mast proportions`);
+  }
+  if (analysis.reason !== "") return { sized: closed, analysis };
+  const e = analysis.envelope;
+  const sized = sizeNetFromAnalysis(input, closed, {
+    outerN: e.outerN, innerN: e.innerN, hoopN: e.hoopN, ringN: e.ringN, caseOf: e.caseOf, outerLengthM: analysis.outerLengthM, innerLengthM: analysis.innerLengthM,
+    mastForceN: analysis.mastForceN, mastCase: analysis.mastCase, backstayHorizontalN: analysis.backstayHorizontalN, anchorUpliftN: analysis.anchorUpliftN,
+  });
+  return { sized, analysis };
+}
+
+function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnalysis | undefined): string[] {
+  const mast = sized.groups.find((g) => g.kind === "mast");
+  const warnings = [
+    analysis
+      ? `cables, masts, backstays, ring and anchors from the 3D analysis (force density form finding under the permanent load, then Newton–Raphson with tension-only cables) of every design combination's load map; the circumferential cables of the form-found net are its stabilising family (no separate valley cables); the closed form (uniform equivalents) seeds it and is the cross-check: a radial cable's prestress ${(((sized.prestressOuterNPerM * layout.outer.spanM ** 2) / (8 * layout.outer.sagM)) / 1000).toFixed(0)} kN there, ${(analysis.prestressN / 1000).toFixed(0)} kN here; the net's crown hangs ${analysis.crownM.toFixed(1)} m above the eaves (the roof's ${capHeightAt(layout.cap, layout.centralRingRadiusM).toFixed(1)} m); mast heads and edge anchors held, the wind's horizontal part left out, member stiffness the closed form's`
+      : "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); fan angles of the cables in plan and large displacements are not analysed by it",
+    "temperature: not in the closed form (the sagging cables between masts and ground anchors are flexible; a uniform change moves the net more than it changes its forces)",
+    `the masts stand on the floor: each takes a clear zone of ${MAST_CLEAR_RADIUS_M} m radius out of the usable floor (common practice, no source)`,
+    ...(analysis ? [] : ["uplift is resisted by an idealised valley-cable family sharing load equally with the radial cables (equal sag and stiffness assumed)"]),
+    "anchors are a substructure allowance, not designed: dead weight for the uplift × margin only (sliding and the mast foundations are not designed)",
+  ];
+  if (analysis?.outwardPull) warnings.push("the net pulls some mast heads outwards under some combination: the backstay there would have to be a stay to the inside (its force is taken the same)");
+  if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);
+  if (layout.mastRadiusM + layout.backstayRunM < layout.cap.baseRadiusM) warnings.push("backstay anchors fall inside the plan: raise the mast ring ratio or check the floor layout");
+  return warnings;
 }
 
 function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): DesignParts {
@@ -88,31 +155,29 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     const value = sizeCableNet(input, g);
     return { value, selfWeightKPa: value.selfWeightKPa };
   }, 0.1, { section });
-  const sized = converged.value;
+  const analysed = opts.analysis === "3d" ? analysedNet(input, converged.value, converged.selfWeightKPa) : null;
+  const sized = analysed?.sized ?? converged.value;
+  const analysis = analysed?.analysis;
   const checks = sized.groups.map((g) => check(g.element, g.governing, g.designForceN, g.resistanceN, "N"));
+  if (analysis && analysis.reason === "") {
+    const largest = Math.max(...analysis.summary.loadCases.map((c) => c.maxDisplacementM));
+    checks.push(check("largest displacement (3D analysis, design combinations)", `≤ span × ${CABLE_ROOF_DEFLECTION_RATIO} (common practice for cable roofs, no source; ULS loads, an upper bound of the service value)`, largest, brief.spanM * CABLE_ROOF_DEFLECTION_RATIO, "m"));
+  }
   checks.push(...fabricPanelChecks(sized.fabricGravityNPerM, sized.fabricUpliftNPerM, fabricAllowableNPerM(fabric, opts.fabricStrengthFactor)));
-  const mast = sized.groups.find((g) => g.kind === "mast");
-  const warnings = [
-    "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); fan angles of the cables in plan and large displacements are not analysed by it",
-    "temperature: not in the closed form (the sagging cables between masts and ground anchors are flexible; a uniform change moves the net more than it changes its forces)",
-    `the masts stand on the floor: each takes a clear zone of ${MAST_CLEAR_RADIUS_M} m radius out of the usable floor (common practice, no source)`,
-    "uplift is resisted by an idealised valley-cable family sharing load equally with the radial cables (equal sag and stiffness assumed)",
-    "anchors are a substructure allowance, not designed: dead weight for the uplift × margin only (sliding and the mast foundations are not designed)",
-  ];
-  if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);
-  if (layout.mastRadiusM + layout.backstayRunM < layout.cap.baseRadiusM) warnings.push("backstay anchors fall inside the plan: raise the mast ring ratio or check the floor layout");
   return {
-    summary: netSummary(layout, sized),
+    summary: netSummary(layout, sized, analysis),
     members: sized.groups.map(memberOf),
     takeoff: netTakeoff(sized, fabric),
     checks,
-    warnings,
+    warnings: netWarnings(layout, sized, analysis),
     iterations: converged.iterations,
     floor: netFloor(layout, brief.eavesHeightM),
-    // the central ring's pull is the same in every combination (ridge and valley share the load): the most utilised of the others names the case
+    // the central ring's pull is the same in every combination of the closed form (ridge and valley share the load): the most utilised of the others names the case
     governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
     ...capEnvelope(layout.cap, brief.eavesHeightM),
     drawing: { section, plan: cableNetPlan(layout) },
+    ...(analysis ? { analysis: analysis.summary } : {}),
+    reason: analysis?.reason ?? "",
   };
 }
 

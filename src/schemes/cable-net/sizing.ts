@@ -13,7 +13,8 @@ import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type Net
 export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring";
 
 /** A member group of the net; a mast may be fabricated from plate (not a catalogue section). */
-export type NetMemberGroup = SizedGroup<NetMemberKind, { fabricated?: boolean; caseName: string }>;
+/** A member group of the net; `eaN` its axial stiffness (cables and ring), N. */
+export type NetMemberGroup = SizedGroup<NetMemberKind, { fabricated?: boolean; caseName: string; eaN?: number }>;
 
 export interface NetSizing {
   /** The design combinations' uniform equivalents, Pa on plan (down positive), in the order of `caseNames`. */
@@ -92,10 +93,7 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   const names = input.combinations.map((c) => c.name);
   const lines = layout.masts * layout.cablesPerSide;
   const groups: NetMemberGroup[] = [];
-  const strands = (kind: NetMemberKind, element: string, count: number, lengthM: number, [forceN, k]: Worst) => {
-    const choice = pickStrandGroup(input.catalogue.strands, forceN, input.gammaR, `no strand group in the catalogue carries the ${element} (${(forceN / 1e6).toFixed(1)} MN): add masts or radial cables per mast`);
-    groups.push({ kind, element, material: "steel-strand", count, lengthM, section: choice.designation, designForceN: forceN, resistanceN: choice.resistanceN, utilisation: choice.utilisation, governing: choice.governing, massKg: choice.massKgPerM * lengthM * count, caseName: names[k] ?? "" });
-  };
+  const strands = (kind: NetMemberKind, element: string, count: number, lengthM: number, [forceN, k]: Worst) => groups.push(strandGroup(input, kind, element, count, lengthM, forceN, names[k] ?? ""));
   const radial = radialFamilies(input, cases, strands);
   const a = layout.cap.baseRadiusM;
   const worstP = worstOf(cases.map(Math.abs));
@@ -116,7 +114,7 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   groups.push(mast);
   const ringN = ringForceFromPullsN(radial.ringPull[0], lines);
   const ringLength = 2 * Math.PI * layout.centralRingRadiusM;
-  groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: ringN, ...steelTensionRing(ringN, input.yieldPa, ringLength), caseName: names[radial.ringPull[1]] ?? "" });
+  groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: ringN, ...tensionRing(ringN, input.yieldPa, ringLength), caseName: names[radial.ringPull[1]] ?? "" });
   const anchorUpliftN = lines * radial.edgeUplift + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
   const anchorConcreteM3 = (anchorUpliftN * input.anchorUpliftMargin) / (PLAIN_CONCRETE_DENSITY_KG_PER_M3 * GRAVITY_M_PER_S2);
   const fabricCut = fabricCover(layout.cap.surfaceM2, input.fabricAllowancePct, fabric);
@@ -137,6 +135,18 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
     fabricUpliftNPerM: membraneStripForceNPerM(Math.max(0, actions.upliftKPa - permanentKPa) * 1000, input.hangerSpacingM, fabricSag),
     selfWeightKPa: kPaOfMass(roofKg, layout.cap.planAreaM2),
   };
+}
+
+/** A steel tension ring with its axial stiffness (E = 210 GPa, EN 1993-1-1 §3.2.6). */
+function tensionRing(forceN: number, yieldPa: number, lengthM: number) {
+  const ring = steelTensionRing(forceN, yieldPa, lengthM);
+  return { ...ring, eaN: 2.1e11 * Math.max(ring.areaM2, 1e-4) };
+}
+
+/** A group of strands for a force, from the catalogue. @throws SizingError when none carries it */
+function strandGroup(input: NetSizingInput, kind: NetMemberKind, element: string, count: number, lengthM: number, forceN: number, caseName: string): NetMemberGroup {
+  const choice = pickStrandGroup(input.catalogue.strands, forceN, input.gammaR, `no strand group in the catalogue carries the ${element} (${(forceN / 1e6).toFixed(1)} MN): add masts or radial cables per mast`);
+  return { kind, element, material: "steel-strand", count, lengthM, section: choice.designation, designForceN: forceN, resistanceN: choice.resistanceN, utilisation: choice.utilisation, governing: choice.governing, massKg: choice.massKgPerM * lengthM * count, caseName, eaN: choice.count * choice.strand.metallicAreaM2 * choice.strand.modulusPa };
 }
 
 /** A largest value and the index of the combination giving it. */
@@ -221,5 +231,64 @@ function sizeMast(input: NetSizingInput, cableMastN: number): Omit<NetMemberGrou
   return {
     kind: "mast", element: "masts", material: fabricated ? "steel-plate" : "steel-hot-finished-hollow", count: layout.masts, lengthM: layout.mastLengthM, section: mast.section.designation, designForceN: -mastN,
     resistanceN: mast.resistanceN, utilisation: mastN / mast.resistanceN, governing: mast.governing, massKg: mast.section.massKgPerM * layout.mastLengthM * layout.masts, fabricated,
+  };
+}
+
+/** The net's forces from the 3D analysis, for sizing (see analysis.ts). */
+export interface NetAnalysedForces {
+  outerN: number;
+  innerN: number;
+  /** Each circumferential cable's largest force, N. */
+  hoopN: readonly number[];
+  ringN: number;
+  /** The combination giving each: keys "outer radial", "inner radial", "central ring", "circumferential i". */
+  caseOf: Readonly<Record<string, string>>;
+  /** Length of one outer and one inner radial cable as found, m. */
+  outerLengthM: number;
+  innerLengthM: number;
+  mastForceN: number;
+  mastCase: string;
+  backstayHorizontalN: number;
+  anchorUpliftN: number;
+}
+
+/**
+ * The net re-sized from the 3D analysis: radial cables, circumferential cables (the larger of the
+ * analysed force and the closed form's local sag between radial cables under the fabric), the
+ * central ring, masts, backstays and anchors from the analysed forces and reactions. The
+ * circumferential cables of the form-found net are its stabilising family, so the closed form's
+ * idealised valley cables are not added. Edge cables and the fabric stay as the closed form sized them.
+ * @throws SizingError when a member cannot be sized
+ */
+export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f: NetAnalysedForces): NetSizing {
+  const { layout } = input;
+  const lines = layout.masts * layout.cablesPerSide;
+  const groups: NetMemberGroup[] = [];
+  const strands = (kind: NetMemberKind, element: string, count: number, lengthM: number, forceN: number, caseName: string) => groups.push(strandGroup(input, kind, element, count, lengthM, forceN, caseName));
+  strands("suspension", "outer radial cables", lines, f.outerLengthM, f.outerN, f.caseOf["outer radial"] ?? "");
+  strands("suspension", "inner radial cables", lines, f.innerLengthM, f.innerN, f.caseOf["inner radial"] ?? "");
+  layout.hoopRadiiM.forEach((r, i) => {
+    const element = `circumferential cable ${i + 1}`;
+    const local = closed.groups.find((g) => g.element === element);
+    const analysed = f.hoopN[i] ?? 0;
+    const governs = local !== undefined && local.designForceN > analysed;
+    strands("circumferential", element, 1, 2 * Math.PI * r, governs ? local.designForceN : analysed, governs ? local.caseName : (f.caseOf[`circumferential ${i + 1}`] ?? ""));
+  });
+  groups.push(...closed.groups.filter((g) => g.kind === "edge"));
+  const backstayN = f.backstayHorizontalN / Math.cos(BACKSTAY_SLOPE_RAD);
+  strands("backstay", "backstays", layout.masts, layout.backstayLengthM, Math.max(backstayN, 1), f.mastCase);
+  groups.push({ ...sizeMast(input, f.mastForceN), caseName: f.mastCase });
+  const ringLength = 2 * Math.PI * layout.centralRingRadiusM;
+  groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: f.ringN, ...tensionRing(f.ringN, input.yieldPa, ringLength), caseName: f.caseOf["central ring"] ?? "" });
+  const anchorUpliftN = f.anchorUpliftN + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
+  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay").reduce((s, g) => s + g.massKg, 0) + closed.fabricMassKg;
+  return {
+    ...closed,
+    groups,
+    mastForceN: f.mastForceN,
+    backstayForceN: backstayN,
+    anchorUpliftN,
+    anchorConcreteM3: (anchorUpliftN * input.anchorUpliftMargin) / (PLAIN_CONCRETE_DENSITY_KG_PER_M3 * GRAVITY_M_PER_S2),
+    selfWeightKPa: kPaOfMass(roofKg, layout.cap.planAreaM2),
   };
 }

@@ -68,3 +68,15 @@ function extremePoints(basis: DesignBasis, count = 240): [number, number][] {
 export function uniformPressurePa(c: PlanCombination, selfWeightKPa: number): number {
   return (c.baseKPa + c.permanentFactor * selfWeightKPa) * 1000;
 }
+
+/**
+ * The combinations the 3D analysis runs: the gravity combination with the largest peak, the
+ * largest drifted-snow one, and the most upward uplift one (the others are bounded by these in the
+ * uniform equivalents; common practice at feasibility, no source).
+ */
+export function analysedCombinations(combinations: readonly PlanCombination[]): PlanCombination[] {
+  const gravity = combinations.filter((c) => c.purpose === "gravity").sort((a, b) => b.baseKPa - a.baseKPa);
+  const drifted = gravity.find((c) => c.combination.terms.some((t) => t.caseId === "snow-drifted"));
+  const uplift = combinations.filter((c) => c.purpose === "uplift").sort((a, b) => a.baseKPa - b.baseKPa);
+  return [...new Set([gravity[0], drifted, uplift[0]].filter((c): c is PlanCombination => c !== undefined))];
+}

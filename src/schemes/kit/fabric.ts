@@ -44,6 +44,19 @@ export const TENSION_COMMON_OPTIONS = {
   steelYieldMPa: { kind: "number", label: "Steel yield strength", unit: "MPa", min: 235, max: 460, step: 5, default: 355, source: "EN 1993-1-1 Table 3.1" },
 } as const satisfies Record<string, OptionDeclaration>;
 
+/**
+ * The tension roofs' choice of analysis: the 3D analysis designs, the closed form seeds and
+ * cross-checks it (issue 13). The closed form is the default: with the 3D analysis on by default the
+ * risk page (one design per draw) and the span study took over a minute on this machine; the 3D
+ * analysis is asked for per study, and shown on the compare page when it ran.
+ */
+export const ANALYSIS_OPTION = {
+  analysis: { kind: "select", label: "Analysis", choices: [{ value: "3d", label: "3D nonlinear (sizes from the analysed forces)" }, { value: "closed-form", label: "Closed form only" }], default: "closed-form", source: "issue 13: the 3D analysis designs, the closed form seeds and cross-checks it" },
+} as const satisfies Record<string, OptionDeclaration>;
+
+/** Largest displacement under the analysed design combinations ÷ span allowed (common practice for cable roofs, no source; ULS loads, an upper bound of the service value). */
+export const CABLE_ROOF_DEFLECTION_RATIO = 1 / 100;
+
 /** Allowable membrane force of a fabric under characteristic load: the weaker direction's strength / factor, N/m. */
 export function fabricAllowableNPerM(fabric: Fabric, strengthFactor: number): number {
   return Math.min(fabric.tensileWarpNPerM, fabric.tensileWeftNPerM) / strengthFactor;

@@ -12,7 +12,7 @@ export { memberOf, massOfKinds, tonnesRow, pickStrandGroup, steelTensionRing, ty
 export { pickChs, type AxialDemand } from "./pick-chs";
 export { STEEL_GRADES, STEEL_GRADE_CHOICES, steelGrade, type SteelGrade } from "./steel";
 export { CLADDING_CHOICES, findCladding, claddingCostItem } from "./cladding";
-export { FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
+export { ANALYSIS_OPTION, CABLE_ROOF_DEFLECTION_RATIO, FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
 export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction } from "./load-combinations";
 export { capFloor } from "./cap-floor";
-export { planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";
+export { analysedCombinations, planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";

@@ -131,7 +131,8 @@ describe("cableDome ring restraint", () => {
 });
 
 describe("cableDome through the 3D analysis (issue 13)", () => {
-  const d = design();
+  const analysed = { ...cableDome.defaults, analysis: "3d" };
+  const d = design(DEFAULT_BRIEF, analysed);
   it("fills Design.analysis: every analysed combination converged, its prestress, and a view of the case that moves it most", () => {
     expect(d.analysis).toBeDefined();
     const a = d.analysis!;
@@ -152,12 +153,12 @@ describe("cableDome through the 3D analysis (issue 13)", () => {
     expect(closed.feasible).toBe(true);
   });
   it("runs the 3D analysis only within the valid span range (out of range it is not ranked: the closed form answers, and says so)", () => {
-    const wide = design({ ...DEFAULT_BRIEF, spanM: 280, riseM: 42 });
+    const wide = design({ ...DEFAULT_BRIEF, spanM: 280, riseM: 42 }, analysed);
     expect(wide.analysis).toBeUndefined();
     expect(wide.warnings.some((w) => w.includes("3D analysis is not run"))).toBe(true);
   });
   it("finds a prestress where no combination lifts the roof (the closed form's is nil; a light wind was infeasible)", () => {
-    const calm = design({ ...DEFAULT_BRIEF, spanM: 120, riseM: 18, windBasicMPerS: 10 });
+    const calm = design({ ...DEFAULT_BRIEF, spanM: 120, riseM: 18, windBasicMPerS: 10 }, analysed);
     expect(calm.reason).toBe("");
     expect(calm.analysis?.loadCases.every((c) => c.converged)).toBe(true);
     expect(calm.analysis?.prestressKN).toBeGreaterThan(100);

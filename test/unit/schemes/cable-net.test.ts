@@ -119,3 +119,28 @@ describe("cableNet on the shared design basis (issue 12)", () => {
     expect(cableNet.riseSpanRatio?.preferred).toBeGreaterThan(0);
   });
 });
+
+describe("cableNet through the 3D analysis (issue 13, option analysis = 3d)", () => {
+  const d = design({ ...DEFAULT_BRIEF, spanM: 60, riseM: 6 }, { ...cableNet.defaults, analysis: "3d" });
+  it("fills Design.analysis: every design combination converged with no slack cable, the prestress, and a view with the masts", () => {
+    expect(d.reason).toBe("");
+    const a = d.analysis!;
+    expect(a.loadCases.length).toBeGreaterThanOrEqual(8);
+    expect(a.loadCases.every((c) => c.converged && c.slackMembers === 0)).toBe(true);
+    expect(a.prestressKN).toBeGreaterThan(0);
+    expect(a.view?.members.filter((m) => m.kind === "strut")).toHaveLength(cableNet.defaults.masts);
+    expect(a.loadCases.map((c) => c.name)).toContain(a.view?.caseName);
+  });
+  it("checks the largest displacement against span/100 and keeps it", () => {
+    const c = d.checks.find((x) => x.name.startsWith("largest displacement"));
+    expect(c?.passed).toBe(true);
+    expect(c?.capacity).toBeCloseTo(60 / 100, 9);
+  });
+  it("sizes the radial cables from the analysed forces, not the closed form's (no valley cables in the form-found net)", () => {
+    expect(d.members.some((m) => m.element === "outer radial cables")).toBe(true);
+    expect(d.members.some((m) => m.element.includes("valley"))).toBe(false);
+    const closed = design({ ...DEFAULT_BRIEF, spanM: 60, riseM: 6 });
+    expect(closed.analysis).toBeUndefined();
+    expect(closed.members.some((m) => m.element.includes("valley"))).toBe(true);
+  });
+});

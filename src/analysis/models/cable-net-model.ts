@@ -1,0 +1,220 @@
+/**
+ * The 3D pin-jointed model of a mast-supported cable net, form-found by the force density method
+ * (Schek 1974, src/analysis/force-density.ts): M masts on a ring of radius r_m, each with n radial
+ * cables fanning out over its sector to anchors at the edge (radius a, at the eaves) and n fanning in
+ * to a central tension ring (radius r_c); circumferential cables at the given radii tie every radial
+ * cable that crosses them (their nodes are where the radial cables cross those radii in plan). The
+ * mast heads and the edge anchors are held (the masts, backstays and anchors take the reactions);
+ * the central ring and every cable node are free.
+ *
+ * Force densities: q = T/ℓ with ℓ the circumferential-cable spacing for the radial cables,
+ * `hoopShare` × that for the circumferential cables, and for the central ring the q that balances
+ * the radial cables' pull on a ring of radius r_c (T_ring = pull/(2 sin(π/N)), N ring nodes). The
+ * shape is the one in equilibrium under those force densities and the permanent load at the nodes
+ * (so it hangs under its own weight; the prestress sets how far). Every member starts at its found
+ * force, in equilibrium with the permanent load (the solver's start).
+ */
+import { formFind } from "../force-density";
+import type { CableModel, Member, Vec3 } from "../model";
+
+export interface CableNetModelInput {
+  masts: number;
+  /** Radial cables per mast on each side (out to the edge, in to the central ring). */
+  cablesPerSide: number;
+  mastRadiusM: number;
+  /** Mast head height (above the eaves), m. */
+  mastHeadM: number;
+  edgeRadiusM: number;
+  centralRingRadiusM: number;
+  /** Radii of the circumferential cables (between r_c and a, none at r_m), m. */
+  hoopRadiiM: readonly number[];
+  /** Prestress force of a radial cable, N, and the circumferential cables' share of it. */
+  prestressN: number;
+  hoopShare: number;
+  /** Permanent load on plan, Pa (down positive), lumped to the nodes for the form finding. */
+  permanentPa: number;
+  /** Axial stiffness EA of each family, N. */
+  eaN: { outer: number; inner: number; hoop: number; ring: number };
+}
+
+export type NetMemberFamily = "outer radial" | "inner radial" | "circumferential" | "central ring";
+
+export interface NetMemberTag {
+  family: NetMemberFamily;
+  /** Circumferential cable number (1…) for the circumferential family, else 0. */
+  index: number;
+}
+
+export interface CableNetModel {
+  model: CableModel;
+  tags: NetMemberTag[];
+  /** The held nodes: mast heads (by mast) and edge anchors. */
+  mastHeads: number[];
+  anchors: number[];
+  ringNodes: number[];
+  /** Plan tributary area of each node (0 at held nodes: their load goes straight to the support), m². */
+  areaM2: number[];
+}
+
+/** The parameters t in (0, 1) where the plan segment p + t(q − p) crosses radius r (the first crossing from p). */
+function crossing(p: readonly [number, number], q: readonly [number, number], r: number): number | null {
+  const d = [q[0] - p[0], q[1] - p[1]] as const;
+  const A = d[0] * d[0] + d[1] * d[1];
+  const B = 2 * (p[0] * d[0] + p[1] * d[1]);
+  const C = p[0] * p[0] + p[1] * p[1] - r * r;
+  const disc = B * B - 4 * A * C;
+  if (disc < 0) return null;
+  const roots = [(-B - Math.sqrt(disc)) / (2 * A), (-B + Math.sqrt(disc)) / (2 * A)].filter((t) => t > 1e-9 && t < 1 - 1e-9).sort((x, y) => x - y);
+  return roots[0] ?? null;
+}
+
+interface Topology {
+  nodes: Vec3[];
+  fixed: number[];
+  branches: [number, number][];
+  tags: NetMemberTag[];
+  mastHeads: number[];
+  anchors: number[];
+  ringNodes: number[];
+  /** Node of each circumferential cable crossing, by hoop, with its plan angle. */
+  onHoop: { node: number; angle: number }[][];
+}
+
+/** Nodes (plan positions where the cables cross; heights a first guess) and the branches of the net. */
+function topology(input: CableNetModelInput): Topology {
+  const { masts: M, cablesPerSide: n, mastRadiusM: rm, edgeRadiusM: a, centralRingRadiusM: rc } = input;
+  const t: Topology = { nodes: [], fixed: [], branches: [], tags: [], mastHeads: [], anchors: [], ringNodes: [], onHoop: input.hoopRadiiM.map(() => []) };
+  const node = (x: number, y: number, z: number) => t.nodes.push([x, y, z]) - 1;
+  const sector = (2 * Math.PI) / M;
+  const ringAt: number[] = [];
+  for (let m = 0; m < M; m++) {
+    const theta = m * sector;
+    const head: [number, number] = [rm * Math.cos(theta), rm * Math.sin(theta)];
+    const h = node(head[0], head[1], input.mastHeadM);
+    t.mastHeads.push(h);
+    t.fixed.push(h);
+    for (let j = 0; j < n; j++) {
+      const phi = theta + sector * ((j + 0.5) / n - 0.5);
+      for (const side of ["outer", "inner"] as const) {
+        const endR = side === "outer" ? a : rc;
+        const end: [number, number] = [endR * Math.cos(phi), endR * Math.sin(phi)];
+        const hoops = input.hoopRadiiM.map((r, i) => ({ r, i })).filter(({ r }) => (side === "outer" ? r > rm && r < a : r < rm && r > rc));
+        const along = hoops.map(({ r, i }) => ({ i, t: crossing(head, end, r) })).filter((c): c is { i: number; t: number } => c.t !== null).sort((x, y) => x.t - y.t);
+        let previous = h;
+        for (const c of along) {
+          const k = node(head[0] + c.t * (end[0] - head[0]), head[1] + c.t * (end[1] - head[1]), input.mastHeadM * (1 - c.t));
+          t.onHoop[c.i]!.push({ node: k, angle: Math.atan2(t.nodes[k]![1], t.nodes[k]![0]) });
+          t.branches.push([previous, k]);
+          t.tags.push({ family: side === "outer" ? "outer radial" : "inner radial", index: 0 });
+          previous = k;
+        }
+        const e = node(end[0], end[1], 0);
+        if (side === "outer") {
+          t.anchors.push(e);
+          t.fixed.push(e);
+        } else ringAt.push(e);
+        t.branches.push([previous, e]);
+        t.tags.push({ family: side === "outer" ? "outer radial" : "inner radial", index: 0 });
+      }
+    }
+  }
+  // the ring nodes in angle order (they were made mast by mast, fan by fan: already in order)
+  t.ringNodes = ringAt;
+  ringAt.forEach((k, i) => {
+    t.branches.push([k, ringAt[(i + 1) % ringAt.length]!]);
+    t.tags.push({ family: "central ring", index: 0 });
+  });
+  t.onHoop.forEach((ring, i) => {
+    ring.sort((x, y) => x.angle - y.angle);
+    ring.forEach((c, k) => {
+      if (ring.length < 3) return;
+      t.branches.push([c.node, ring[(k + 1) % ring.length]!.node]);
+      t.tags.push({ family: "circumferential", index: i + 1 });
+    });
+  });
+  return t;
+}
+
+/** Plan tributary areas: radially half-way to the neighbouring circumferential cables (or ring, or edge), around half-way to the neighbours on the same one. */
+function tributaryAreas(input: CableNetModelInput, t: Topology): number[] {
+  const area = t.nodes.map(() => 0);
+  const radii = [input.centralRingRadiusM, ...input.hoopRadiiM, input.edgeRadiusM];
+  const band = (i: number) => {
+    // i indexes radii: the band of plan radius that the circle radii[i] carries
+    const lo = i === 0 ? 0 : ((radii[i - 1] as number) + (radii[i] as number)) / 2;
+    const hi = ((radii[i] as number) + (radii[i + 1] as number)) / 2;
+    return (hi * hi - lo * lo) / 2; // ∫ r dr over the band
+  };
+  const share = (ring: readonly { node: number; angle: number }[], i: number) => {
+    ring.forEach((c, k) => {
+      const prev = ring[(k - 1 + ring.length) % ring.length]!.angle;
+      const next = ring[(k + 1) % ring.length]!.angle;
+      const span = ((next - prev + 4 * Math.PI) % (2 * Math.PI)) / 2;
+      area[c.node] = band(i) * (ring.length === 1 ? 2 * Math.PI : span);
+    });
+  };
+  share(t.ringNodes.map((node) => ({ node, angle: Math.atan2(t.nodes[node]![1], t.nodes[node]![0]) })), 0);
+  t.onHoop.forEach((ring, i) => share(ring, i + 1));
+  return area;
+}
+
+/** Outward horizontal pull of the outer and inward pull of the inner cables on the first mast head, N. */
+function headPulls(t: Topology, nodes: readonly Vec3[], forcesN: readonly number[]): { outer: number; inner: number } {
+  const h = t.mastHeads[0] as number;
+  const [hx, hy] = nodes[h] as Vec3;
+  const r = Math.hypot(hx, hy);
+  const pull = { outer: 0, inner: 0 };
+  t.branches.forEach(([i, j], k) => {
+    if (i !== h && j !== h) return;
+    const other = nodes[i === h ? j : i] as Vec3;
+    const d = [other[0] - hx, other[1] - hy, other[2] - (nodes[h] as Vec3)[2]];
+    const radial = (forcesN[k]! * (d[0]! * hx + d[1]! * hy)) / (r * Math.hypot(d[0]!, d[1]!, d[2]!));
+    if (t.tags[k]!.family === "outer radial") pull.outer += radial;
+    else pull.inner -= radial;
+  });
+  return pull;
+}
+
+/** Largest strain of a cable under its prestress: 0.2 % (≈ 320 MPa in a strand of E ≈ 160 GPa, a quarter to a fifth of its breaking stress; common practice, no source). */
+export const PRESTRESS_STRAIN = 0.002;
+
+/** Force density passes that scale the inner cables so they pull the mast heads inwards as hard as the outer ones pull outwards. */
+const BALANCE_PASSES = 6;
+
+/**
+ * Builds and form-finds the net; the inner radial cables' force density is scaled (a few passes)
+ * until the prestress pulls on the mast heads balance horizontally, so the backstays carry only
+ * what the loads add (the closed form balances them the same way).
+ * @throws RangeError when the force density network is singular
+ */
+export function cableNetModel(input: CableNetModelInput): CableNetModel {
+  const t = topology(input);
+  const areaM2 = tributaryAreas(input, t);
+  const spacing = input.hoopRadiiM.length > 1 ? ((input.hoopRadiiM[input.hoopRadiiM.length - 1] as number) - (input.hoopRadiiM[0] as number)) / (input.hoopRadiiM.length - 1) : input.edgeRadiusM / 4;
+  const qRadial = input.prestressN / spacing;
+  const lines = input.masts * input.cablesPerSide;
+  const chord = 2 * Math.sin(Math.PI / lines);
+  const loadsN = areaM2.map((A) => [0, 0, -input.permanentPa * A] as const);
+  let innerScale = 1;
+  let found = formFind({ nodes: t.nodes, branches: t.branches, forceDensityNPerM: 1, fixed: t.fixed });
+  for (let pass = 0; pass < BALANCE_PASSES; pass++) {
+    const qInner = innerScale * qRadial;
+    const qRing = (qInner * spacing) / (chord * chord * input.centralRingRadiusM);
+    const q = t.tags.map((tag) => (tag.family === "circumferential" ? input.hoopShare * qRadial : tag.family === "central ring" ? qRing : tag.family === "inner radial" ? qInner : qRadial));
+    found = formFind({ nodes: t.nodes, branches: t.branches, forceDensityNPerM: q, fixed: t.fixed, loadsN });
+    const pull = headPulls(t, found.nodes, found.forcesN);
+    if (!(pull.inner > 0 && pull.outer > 0) || Math.abs(pull.outer / pull.inner - 1) < 1e-3) break;
+    innerScale *= pull.outer / pull.inner;
+  }
+  const ea = (tag: NetMemberTag) => (tag.family === "outer radial" ? input.eaN.outer : tag.family === "inner radial" ? input.eaN.inner : tag.family === "circumferential" ? input.eaN.hoop : input.eaN.ring);
+  // a cable is at least as stiff as a strand group sized for its prestress at PRESTRESS_STRAIN (the given EA is the closed form's, for its lower prestress)
+  const members: Member[] = t.branches.map(([i, j], k) => ({ i, j, eaN: Math.max(ea(t.tags[k]!), found.forcesN[k]! / PRESTRESS_STRAIN), kind: "cable", initialForceN: found.forcesN[k]! }));
+  return {
+    model: { nodes: found.nodes, members, supports: t.fixed.map((node) => ({ node, fixed: [true, true, true] as const })), loads: [] },
+    tags: t.tags,
+    mastHeads: t.mastHeads,
+    anchors: t.anchors,
+    ringNodes: t.ringNodes,
+    areaM2,
+  };
+}

@@ -1,0 +1,50 @@
+import { describe, it, expect } from "vitest";
+import { cableNetModel, type CableNetModelInput } from "../../../src/analysis/models/cable-net-model";
+import { solveCableModel } from "../../../src/analysis/cable-solver";
+import { lengthOf, type Vec3 } from "../../../src/analysis/model";
+
+// A small net: 6 masts × 2 radial cables a side over a 60 m plan, circumferential cables every 5 m.
+const input: CableNetModelInput = {
+  masts: 6, cablesPerSide: 2, mastRadiusM: 18, mastHeadM: 12, edgeRadiusM: 30, centralRingRadiusM: 2,
+  hoopRadiiM: [5, 10, 15, 20, 25], prestressN: 200e3, hoopShare: 0.5, permanentPa: 400,
+  eaN: { outer: 2e9, inner: 2e9, hoop: 1e9, ring: 1e10 },
+};
+const net = cableNetModel(input);
+const loads = net.areaM2.map((A, node) => ({ node, forceN: [0, 0, -input.permanentPa * A] as const })).filter((l) => l.forceN[2] !== 0);
+
+describe("cableNetModel (force density form finding of a mast-supported net)", () => {
+  it("holds the mast heads and edge anchors, and frees every other node", () => {
+    expect(net.mastHeads).toHaveLength(6);
+    expect(net.anchors).toHaveLength(12);
+    expect(net.model.supports.map((s) => s.node).sort((a, b) => a - b)).toEqual([...net.mastHeads, ...net.anchors].sort((a, b) => a - b));
+  });
+
+  it("the tributary areas cover the plan inside the band the edge anchors take: π((r_last + a)/2)²", () => {
+    const total = net.areaM2.reduce((s, a) => s + a, 0);
+    expect(Math.abs(total / (Math.PI * ((25 + 30) / 2) ** 2) - 1)).toBeLessThan(1e-9);
+  });
+
+  it("is in equilibrium under the permanent load it was found for: Newton–Raphson moves it by nothing", () => {
+    const s = solveCableModel({ ...net.model, loads });
+    expect(s.converged).toBe(true);
+    const largest = Math.max(...Array.from(s.displacementsM, Math.abs));
+    expect(largest).toBeLessThan(1e-6);
+    expect(s.slack.some(Boolean)).toBe(false);
+  });
+
+  it("balances the prestress pulls on a mast head horizontally (the inner cables scaled to the outer)", () => {
+    const s = solveCableModel({ ...net.model, loads });
+    const h = net.mastHeads[0]!;
+    const [x, y] = net.model.nodes[h] as Vec3;
+    const radial = ((s.reactionsN[3 * h] as number) * x + (s.reactionsN[3 * h + 1] as number) * y) / Math.hypot(x, y);
+    expect(Math.abs(radial)).toBeLessThan(2e-3 * (s.reactionsN[3 * h + 2] as number));
+  });
+
+  it("twice the prestress: the same plan, the net hangs less under the same load", () => {
+    const stiffer = cableNetModel({ ...input, prestressN: 2 * input.prestressN });
+    const ringZ = (m: typeof net) => m.ringNodes.reduce((s, k) => s + (m.model.nodes[k] as Vec3)[2], 0) / m.ringNodes.length;
+    expect(ringZ(stiffer)).toBeGreaterThan(ringZ(net));
+    const span = (m: typeof net) => m.model.members.reduce((s, mm) => s + lengthOf(m.model.nodes[mm.i] as Vec3, m.model.nodes[mm.j] as Vec3), 0);
+    expect(Number.isFinite(span(stiffer))).toBe(true);
+  });
+});
