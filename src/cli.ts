@@ -9,7 +9,7 @@ import { defaultCatalogue } from "./catalogue/default-catalogue";
 import { formatCsv, parseDecimal, shown } from "./kernel/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
-import { evaluateStudy, tableGaps, describeGaps, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
+import { evaluateStudy, tableGaps, describeGaps, OBJECTIVES, type Objective, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
 import { runSpanStudy } from "./comparison/span-study";
 import { CAUTION } from "./kernel/caution";
 import { failure, messageOf } from "./kernel/errors";
@@ -27,7 +27,10 @@ export const USAGE = `usage: npm run evaluate -- FILE [--json] [--span M] [--swe
   --risk N          also run N Monte Carlo samples of the study's uncertain inputs (P10/P50/P90)
   --seed S          seed for --risk (default: the study's seed)
   --partial         print the results even when a table lacks a row a scheme needs (its carbon or
-                    cost is left blank and the gap named on stderr; without it: exit 2)`;
+                    cost is left blank and the gap named on stderr; without it: exit 2)
+  --objective O     choose each scheme's free proportions for least mass, carbon or cost per m² of
+                    usable floor (default: the study's objective)
+  --buckling        also run the on-demand 3D buckling analysis where a scheme offers one`;
 
 export interface CliResult {
   code: number;
@@ -49,6 +52,9 @@ interface Parsed {
   rates?: string;
   risk?: number;
   seed?: number;
+  objective?: Objective;
+  /** Run the on-demand buckling analysis of the schemes that offer it. */
+  buckling?: boolean;
 }
 
 function wholeNumber(text: string, what: string, min: number, max: number, unit: string): number {
@@ -81,10 +87,13 @@ const OPTIONS = {
   rates: { type: "string" },
   risk: { type: "string" },
   seed: { type: "string" },
+  objective: { type: "string" },
+  buckling: { type: "boolean" },
 } as const satisfies ParseArgsConfig["options"];
 
 type OptionName = keyof typeof OPTIONS;
-type Flags = Omit<Parsed, "file" | "json" | "partial">;
+type Flags = Omit<Parsed, "file" | "json" | "partial" | "buckling">;
+type Switch = "help" | "json" | "partial" | "buckling";
 
 const ALLOWED = `allowed: ${Object.keys(OPTIONS).map((name) => `--${name}`).join(", ")}`;
 
@@ -109,7 +118,7 @@ function schemesIn(text: string): SchemeId[] {
 }
 
 /** How each option that takes a value reads it into `Flags`; the message names the option and what it allows. */
-const READERS: Record<Exclude<OptionName, "help" | "json" | "partial">, (text: string, flags: Flags) => void> = {
+const READERS: Record<Exclude<OptionName, Switch>, (text: string, flags: Flags) => void> = {
   span: (text, flags) => (flags.spanM = spanIn(text, "--span")),
   sweep: (text, flags) => (flags.sweep = sweepIn(text)),
   schemes: (text, flags) => (flags.schemes = schemesIn(text)),
@@ -117,6 +126,10 @@ const READERS: Record<Exclude<OptionName, "help" | "json" | "partial">, (text: s
   rates: (text, flags) => (flags.rates = text),
   risk: (text, flags) => (flags.risk = wholeNumber(text, "--risk", RISK_LIMITS.samples.min, RISK_LIMITS.samples.max, "samples")),
   seed: (text, flags) => (flags.seed = wholeNumber(text, "--seed", 0, 2 ** 31 - 1, "")),
+  objective: (text, flags) => {
+    if (!(OBJECTIVES as readonly string[]).includes(text)) throw new UsageError(`invalid --objective: ${shown(text)} (expected one of ${OBJECTIVES.join(", ")})`);
+    flags.objective = text as Objective;
+  },
 };
 
 /** What each option that takes a value expects, for the message when the value is missing. */
@@ -128,6 +141,7 @@ const EXPECTED: Record<keyof typeof READERS, () => string> = {
   rates: () => "a rate table (.csv)",
   risk: () => `a whole number of samples from ${RISK_LIMITS.samples.min} to ${RISK_LIMITS.samples.max}`,
   seed: () => `a whole number from 0 to ${2 ** 31 - 1}`,
+  objective: () => `one of ${OBJECTIVES.join(", ")}`,
 };
 
 function isOption(name: string): name is OptionName {
@@ -142,7 +156,7 @@ function isOption(name: string): name is OptionName {
 function parseArgs(args: readonly string[]): Parsed | "help" {
   const { tokens } = nodeParseArgs({ args: [...args], options: OPTIONS, allowPositionals: true, strict: false, tokens: true });
   const flags: Flags = {};
-  const switches = { json: false, partial: false };
+  const switches = { json: false, partial: false, buckling: false };
   let file: string | undefined;
   for (const token of tokens) {
     if (token.kind === "option-terminator") continue;
@@ -154,7 +168,7 @@ function parseArgs(args: readonly string[]): Parsed | "help" {
     const { name, rawName, value } = token;
     if (!isOption(name)) throw new UsageError(`unknown option: ${rawName} (${ALLOWED}; see --help)`);
     if (name === "help") return "help";
-    if (name === "json" || name === "partial") {
+    if (name === "json" || name === "partial" || name === "buckling") {
       if (value !== undefined) throw new UsageError(`${rawName} takes no value (got ${shown(value)})`);
       switches[name] = true;
       continue;
@@ -194,10 +208,26 @@ function loadStudy(parsed: Parsed, readText: (p: string) => string): Study {
     if (error instanceof UsageError) throw error;
     throw failure(`invalid table: ${oneLine(messageOf(error))}`, error, UsageError);
   }
-  return study;
+  return withRunFlags(study, parsed);
 }
 
-const SWEEP_COLUMNS = ["span_m", "id", "feasible", "self_weight_kg_per_m2", "total_mass_t", "roof_mass_t", "mass_to_air", "usable_floor_m2", "carbon_kgco2e_per_m2_floor", "cost_per_m2_floor", "governing", "reason"] as const;
+/** The option a scheme offers for its on-demand 3D buckling analysis (issue 13). */
+const BUCKLING_OPTION = "bucklingAnalysis";
+
+/** The study as this run asks: --objective replaces the study's; --buckling switches on (and pins) the on-demand buckling analysis wherever a scheme offers it. */
+function withRunFlags(study: Study, parsed: Parsed): Study {
+  const brief = parsed.objective ? { ...study.brief, objective: parsed.objective } : study.brief;
+  if (!parsed.buckling) return { ...study, brief };
+  const schemes = Object.fromEntries(
+    Object.entries(study.schemes).map(([id, setting]) => {
+      const offers = SCHEMES.find((m) => m.id === id)?.options.some((o) => o.key === BUCKLING_OPTION) === true;
+      return [id, offers ? { ...setting, options: { ...setting.options, [BUCKLING_OPTION]: true }, pinned: [...(setting.pinned ?? []), BUCKLING_OPTION] } : setting];
+    }),
+  ) as Study["schemes"];
+  return { ...study, brief, schemes };
+}
+
+const SWEEP_COLUMNS = ["span_m", "id", "feasible", "self_weight_kg_per_m2", "total_mass_t", "roof_mass_t", "mass_to_air", "usable_floor_m2", "carbon_kgco2e_per_m2_floor", "cost_per_m2_floor", "governing", "reason", "status", "governing_load_case", "rise_m", "structure_t", "perimeter_t", "substructure_t", "envelope_t"] as const;
 
 function round(x: number | null, digits = 3): number | null {
   return x === null || !Number.isFinite(x) ? null : Number(x.toPrecision(digits + 3));
@@ -244,11 +274,59 @@ export function jsonFigures(f: SchemeFigures) {
   };
 }
 
+/** What the 3D analysis found, with the command line's keys; null where none ran. */
+function analysisJson(result: SchemeResult) {
+  const a = result.design.analysis;
+  if (!a) return null;
+  return {
+    load_cases: a.loadCases.map((c) => ({ name: c.name, iterations: c.iterations, converged: c.converged, max_displacement_m: c.maxDisplacementM, slack_members: c.slackMembers })),
+    ...(a.prestressKN !== undefined ? { prestress_kn: a.prestressKN } : {}),
+    ...(a.bucklingFactor !== undefined ? { buckling_factor: a.bucklingFactor } : {}),
+    ...(a.continuumBucklingFactor !== undefined ? { continuum_buckling_factor: a.continuumBucklingFactor } : {}),
+  };
+}
+
+/**
+ * One scheme's result with the command line's keys: its figures, then its status, the governing
+ * load case, the rise it was designed with, its chosen proportions (with the runner-up), its mass by
+ * the four groups and, where one ran, its 3D analysis.
+ */
+export function jsonResult(result: SchemeResult) {
+  const f = result.figures;
+  const p = result.proportions;
+  return {
+    ...jsonFigures(f),
+    status: f.status,
+    governing_load_case: f.governingLoadCase,
+    rise_m: result.brief?.riseM ?? null,
+    rise_source: p?.riseSource ?? null,
+    proportions: p ? p.proportions : {},
+    runner_up: p?.runnerUp ? { proportions: p.runnerUp.proportions, difference_pct: round(p.runnerUp.differencePct) } : null,
+    structure_t: f.massByGroupKg.structure / 1000,
+    perimeter_t: f.massByGroupKg.perimeter / 1000,
+    substructure_t: f.massByGroupKg.substructure / 1000,
+    envelope_t: f.massByGroupKg.envelope / 1000,
+    ...(result.design.analysis ? { analysis: analysisJson(result) } : {}),
+  };
+}
+
+/** Which rise each scheme was designed with, and for what objective its proportions were chosen. */
+function riseLine(study: Study, results: readonly SchemeResult[]): string {
+  const rises = results.map((r) => `${r.id} ${r.brief ? r.brief.riseM.toFixed(1) : "–"} m${r.proportions?.riseSource === "searched" ? " (own)" : r.proportions?.riseSource === "pinned" ? " (pinned)" : ""}`);
+  const rule = study.brief.riseRule === "own" ? "each scheme's own rise within the height limit" : "one common rise";
+  return `Rise: ${rule} — ${rises.join(", ")}; free proportions chosen for least ${study.brief.objective} per m² of usable floor`;
+}
+
+/** The "feasible" column: yes only for a feasible result in its method's range. */
+function feasibleWord(f: SchemeFigures): string {
+  return f.status === "feasible" ? "yes" : f.status === "out-of-range" ? "out of range" : "no";
+}
+
 function table(rows: readonly SchemeFigures[]): string {
   const header = ["scheme", "feasible", "kg/m² plan", "steel t", "cable t", "fabric m²", "concrete m³", "kgCO2e/m² floor", "cost/m² floor", "governing"];
   const body = rows.map((f) => [
     f.id,
-    f.feasible ? "yes" : "no",
+    feasibleWord(f),
     f.selfWeightKgPerM2.toFixed(1),
     (f.massByKindKg.steel / 1000).toFixed(0),
     (f.massByKindKg.cable / 1000).toFixed(0),
@@ -339,8 +417,8 @@ function sweepCsv(study: Study, parsed: Parsed, catalogue: ReturnType<typeof def
   const { from, to, step } = parsed.sweep as NonNullable<Parsed["sweep"]>;
   const onResult = (spanM: number, result: SchemeResult) => {
     all.push(result);
-    const h = jsonFigures(result.figures);
-    rows.push({ ...h, span_m: spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air) });
+    const h = jsonResult(result);
+    rows.push({ ...h, span_m: spanM, self_weight_kg_per_m2: round(h.self_weight_kg_per_m2), mass_to_air: round(h.mass_to_air), rise_m: round(h.rise_m) });
   };
   runSpanStudy(study, catalogue, { fromM: from, toM: to, stepM: step }, { onResult, maxSpans: MAX_SWEEP_SPANS + 1, ...(parsed.schemes ? { schemeIds: parsed.schemes } : {}) });
   const stderr = refuseGaps(gapsOf(all, study), parsed);
@@ -362,13 +440,13 @@ export function runCli(args: readonly string[], readText: (path: string) => stri
     const figures = evaluation.results.map((r) => r.figures);
     const risk = parsed.risk === undefined ? null : riskRun(study, evaluation.brief, schemeIds, parsed.risk, parsed.seed, catalogue);
     if (parsed.json) {
-      const schemes = figures.map((f) => (risk ? { ...jsonFigures(f), risk: riskJson(risk, f.id) } : jsonFigures(f)));
-      const out = { span_m: evaluation.brief.spanM, caution: CAUTION, schemes, ...(gaps.length > 0 ? { gaps } : {}), ...(risk ? { risk: riskMeta(risk) } : {}) };
+      const schemes = evaluation.results.map((r) => (risk ? { ...jsonResult(r), risk: riskJson(risk, r.id) } : jsonResult(r)));
+      const out = { span_m: evaluation.brief.spanM, caution: CAUTION, objective: study.brief.objective, rise_rule: study.brief.riseRule, schemes, ...(gaps.length > 0 ? { gaps } : {}), ...(risk ? { risk: riskMeta(risk) } : {}) };
       return { code: 0, stdout: `${JSON.stringify(out, null, 2)}\n`, stderr };
     }
     const riskText = risk ? `\n\n${riskTable(risk)}` : "";
     const gapText = gaps.length > 0 ? `\nLeft blank (–): ${describeGaps(gaps, 12, "\n  ")}` : "";
-    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${table(figures)}${gapText}${riskText}\n\n${CAUTION}\n`, stderr };
+    return { code: 0, stdout: `${study.meta.title} — span ${evaluation.brief.spanM} m\n${riseLine(study, evaluation.results)}\n${table(figures)}${gapText}${riskText}\n\n${CAUTION}\n`, stderr };
   } catch (error) {
     if (error instanceof UsageError) return { code: 2, stdout: "", stderr: `spanbook: ${error.message}\n` };
     return { code: 1, stdout: "", stderr: `spanbook: internal error: ${messageOf(error)}\n` };

@@ -44,7 +44,8 @@ export function comparisonTable(results: readonly SchemeResult[]): ComparisonRow
       costMillion: f.costTotal === null ? null : f.costTotal / 1e6,
       costPerM2Floor: f.costPerM2Floor,
       governing: f.feasible ? `${f.governing} (${f.maxUtilisation.toFixed(2)})` : "",
-      verdict: f.feasible ? "yes" : `no: ${f.reason}`,
+      // Out of the method's valid range is never "yes" (issue 12 item 7).
+      verdict: f.status === "feasible" ? "yes" : f.status === "out-of-range" ? "out of range: outside the method's valid span" : `no: ${f.reason}`,
       warningCount: f.warnings.length,
     };
   });

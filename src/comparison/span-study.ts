@@ -1,5 +1,5 @@
 import type { Catalogue } from "../catalogue/types";
-import type { SchemeId } from "../schemes/types";
+import type { DesignStatus, SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
 import { evaluateStudy, type SchemeResult, type StudyInputs } from "../pipeline";
 
@@ -12,6 +12,12 @@ export interface SpanPoint {
   /** Span inside the method's valid range. */
   inValidRange: boolean;
   reason: string;
+  /** feasible, out-of-range or infeasible: only "feasible" is ranked and used in crossovers. */
+  status: DesignStatus;
+  /** The rise this scheme was designed with there, m. */
+  riseM: number;
+  /** The scheme's named regime there (e.g. single or double layer), "" when it names none; a change between spans is marked. */
+  regime: string;
   selfWeightKgPerM2: number;
   carbonKgCO2ePerM2Floor: number;
   costPerM2Floor: number;
@@ -57,6 +63,9 @@ function spanPoint(spanM: number, result: SchemeResult): SpanPoint {
     feasible: ok,
     inValidRange: model ? spanM >= model.validSpanM.min && spanM <= model.validSpanM.max : false,
     reason: f.reason,
+    status: f.status,
+    riseM: result.brief?.riseM ?? Number.NaN,
+    regime: result.design.regime ?? "",
     selfWeightKgPerM2: ok ? f.selfWeightKgPerM2 : Number.NaN,
     carbonKgCO2ePerM2Floor: ok && f.carbonKgCO2ePerM2Floor !== null ? f.carbonKgCO2ePerM2Floor : Number.NaN,
     costPerM2Floor: ok && f.costPerM2Floor !== null ? f.costPerM2Floor : Number.NaN,
@@ -82,13 +91,29 @@ export function runSpanStudy(study: StudyInputs, catalogue: Catalogue, range: Sp
   return points;
 }
 
-/** The points of one metric grouped by span, for the crossover analysis. */
-export function valuesBySpan(points: readonly SpanPoint[], metric: "selfWeightKgPerM2" | "carbonKgCO2ePerM2Floor" | "costPerM2Floor"): { spanM: number; values: Record<string, number> }[] {
-  const bySpan = new Map<number, Record<string, number>>();
+/** The points of one metric grouped by span, with each scheme's status, for the crossover analysis (only feasible ones are best). */
+export function valuesBySpan(points: readonly SpanPoint[], metric: "selfWeightKgPerM2" | "carbonKgCO2ePerM2Floor" | "costPerM2Floor"): { spanM: number; values: Record<string, number>; status: Record<string, DesignStatus> }[] {
+  const bySpan = new Map<number, { values: Record<string, number>; status: Record<string, DesignStatus> }>();
   for (const p of points) {
-    const row = bySpan.get(p.spanM) ?? {};
-    row[p.id] = p[metric];
+    const row = bySpan.get(p.spanM) ?? { values: {}, status: {} };
+    row.values[p.id] = p[metric];
+    row.status[p.id] = p.status;
     bySpan.set(p.spanM, row);
   }
-  return [...bySpan.entries()].map(([spanM, values]) => ({ spanM, values }));
+  return [...bySpan.entries()].map(([spanM, row]) => ({ spanM, ...row }));
+}
+
+/** Where a scheme's named regime changes between neighbouring spans: the span study marks them (a jump there is explained). */
+export function regimeChanges(points: readonly SpanPoint[]): { id: SchemeId; fromSpanM: number; toSpanM: number; from: string; to: string }[] {
+  const out: { id: SchemeId; fromSpanM: number; toSpanM: number; from: string; to: string }[] = [];
+  const byScheme = new Map<SchemeId, SpanPoint[]>();
+  for (const p of points) byScheme.set(p.id, [...(byScheme.get(p.id) ?? []), p]);
+  for (const [id, list] of byScheme) {
+    const sorted = [...list].sort((a, b) => a.spanM - b.spanM);
+    sorted.forEach((p, i) => {
+      const q = sorted[i - 1];
+      if (q && q.regime !== "" && p.regime !== "" && q.regime !== p.regime) out.push({ id, fromSpanM: q.spanM, toSpanM: p.spanM, from: q.regime, to: p.regime });
+    });
+  }
+  return out;
 }

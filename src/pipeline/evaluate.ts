@@ -1,4 +1,3 @@
-import type { StudyInputs } from "./study-inputs";
 import type { Brief } from "../brief";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
@@ -7,6 +6,8 @@ import { assessCarbon, type CarbonAssessment } from "../carbon";
 import { assessCost, type CostAssessment } from "../cost";
 import { messageOf } from "../kernel/errors";
 import { schemeFigures, type SchemeFigures } from "./figures";
+import { commonRiseM, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice } from "./proportions";
+import type { SchemeSetting, StudyInputs } from "./study-inputs";
 
 /** One scheme's design with its carbon and cost, and the figures read from them. */
 export interface SchemeResult {
@@ -20,6 +21,10 @@ export interface SchemeResult {
   error: string;
   /** The figures every table, chart and the command line read. */
   figures: SchemeFigures;
+  /** The brief this scheme was designed for: the evaluated one with the scheme's own rise. */
+  brief?: Brief;
+  /** The proportions the search chose (and the rise used), with the runner-up. */
+  proportions?: ProportionChoice;
 }
 
 export interface Evaluation {
@@ -34,9 +39,9 @@ export interface EvaluateOptions {
   schemeIds?: readonly SchemeId[];
 }
 
-/** The brief at another span, keeping the rise-to-span ratio. */
+/** The brief at another span: the common rise there (the rise-to-span ratio kept, within the height limit). */
 export function briefAtSpan(brief: Brief, spanM: number): Brief {
-  return { ...brief, spanM, riseM: (brief.riseM / brief.spanM) * spanM };
+  return { ...brief, spanM, riseM: commonRiseM(brief, spanM) };
 }
 
 /**
@@ -87,6 +92,56 @@ export function schemeResult(id: SchemeId, label: string, design: Design, study:
 export function evaluateStudy(study: StudyInputs, catalogue: Catalogue, options: EvaluateOptions = {}): Evaluation {
   const brief = options.spanM === undefined ? study.brief : briefAtSpan(study.brief, options.spanM);
   const chosen = options.schemeIds ? SCHEMES.filter((m) => options.schemeIds?.includes(m.id)) : SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
-  const results = chosen.map((model) => schemeResult(model.id, model.label, designScheme(model, brief, study.schemes[model.id]?.options, catalogue), study));
+  const results = chosen.map((model) => {
+    const searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue);
+    return { ...schemeResult(model.id, model.label, searched.design, study), brief: searched.brief, proportions: searched.proportions };
+  });
   return { brief, results };
+}
+
+/**
+ * The objective of a design per m² of its usable floor: total mass (substructure included), counted
+ * embodied carbon, or cost, assessed with the study's tables; +∞ when there is no usable floor or
+ * the figure cannot be assessed. The schemes know nothing of it: the search calls it on each candidate.
+ */
+export function objectiveValue(design: Design, study: Pick<StudyInputs, "carbon" | "cost">, objective: Objective): number {
+  if (!(design.usableFloorM2 > 0)) return Number.POSITIVE_INFINITY;
+  if (objective === "mass") return design.totalMassKg / design.usableFloorM2;
+  const assessed = assessDesign(design, study);
+  const value = objective === "carbon" ? assessed.carbon?.perM2UsableFloor.perM2?.counted : assessed.cost?.perM2UsableFloor?.total;
+  return value ?? Number.POSITIVE_INFINITY;
+}
+
+/** One scheme designed at its best proportions for a brief (already at its span): the design, the brief it was designed for, and the choice. */
+export interface SearchedDesign {
+  design: Design;
+  /** The brief this scheme was designed for: the evaluated brief with the scheme's own rise. */
+  brief: Brief;
+  proportions: ProportionChoice;
+}
+
+/**
+ * The one rule every page and the command line use: a scheme's free proportions (and its rise under
+ * the "own" rule) searched for the brief's objective, pinned ones left as the study sets them; the
+ * rise within the scheme's rise ÷ span range and the height limit. The brief is at its span, its
+ * rise the common rise there (briefAtSpan).
+ */
+export function designAtBestProportions(model: SchemeModel, brief: Brief, setting: SchemeSetting | undefined, study: Pick<StudyInputs, "carbon" | "cost">, catalogue: Catalogue): SearchedDesign {
+  const objective = brief.objective;
+  const options = { ...model.defaults, ...(setting?.options ?? {}) };
+  const rise = riseSettingFor(model, brief, brief.spanM, setting?.riseM);
+  if (rise.kind === "none") {
+    const design = infeasibleDesign(model.id, brief, rise.reason);
+    return { design, brief, proportions: { objective, searched: [], pinned: setting?.pinned ?? [], proportions: { [RISE_KEY]: brief.riseM }, riseM: brief.riseM, riseSource: "searched", value: Number.POSITIVE_INFINITY, evaluations: 0, runnerUp: null } };
+  }
+  const { chosen, choice } = searchProportions(
+    model,
+    options,
+    setting?.pinned ?? [],
+    rise,
+    objective,
+    (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue),
+    (design) => objectiveValue(design, study, objective),
+  );
+  return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice };
 }

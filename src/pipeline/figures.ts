@@ -1,5 +1,5 @@
 import { MATERIAL_KINDS, materialInfo, type MaterialKind } from "../materials";
-import type { Design, SchemeId } from "../schemes/types";
+import type { Design, DesignStatus, MassByGroupKg, SchemeId } from "../schemes/types";
 import type { TakeoffRow } from "../takeoff";
 import type { CarbonAssessment } from "../carbon";
 import type { CostAssessment } from "../cost";
@@ -13,7 +13,13 @@ export interface SchemeFigures {
   id: SchemeId;
   label: string;
   feasible: boolean;
+  /** feasible, out-of-range (outside the method's valid span) or infeasible: only "feasible" is ranked. */
+  status: DesignStatus;
   reason: string;
+  /** The design combination that governed ("" when the scheme does not report one). */
+  governingLoadCase: string;
+  /** Mass by the four groups of the one accounting, kg. */
+  massByGroupKg: MassByGroupKg;
   selfWeightKgPerM2: number;
   /** Take-off mass by material kind, kg (every kind, 0 where the scheme has none). */
   massByKindKg: Record<MaterialKind, number>;
@@ -90,7 +96,10 @@ export function schemeFigures(result: AssessedDesign): SchemeFigures {
     id: result.id,
     label: result.label,
     feasible: design.feasible,
+    status: design.status,
     reason: design.reason,
+    governingLoadCase: design.governingLoadCase,
+    massByGroupKg: design.massByGroupKg,
     selfWeightKgPerM2: design.selfWeightKgPerM2,
     massByKindKg: massByKind(design.takeoff),
     fabricM2: quantityOf(design.takeoff, "fabric", "m2"),

@@ -132,8 +132,9 @@ function descend(dims: readonly Dimension[], assess: (index: readonly number[]) 
 
 /**
  * Searches a scheme's free proportions for the least objective. `design` designs one candidate and
- * `objectiveOf` assesses it (the scheme knows nothing of carbon or cost: the caller assesses). A
- * candidate counts only when its design is not infeasible and its objective is finite.
+ * `assess` gives its objective (the scheme knows nothing of carbon or cost: the caller assesses). A
+ * candidate counts only when its design is not infeasible and its objective is finite. With nothing
+ * to search, the one design is not assessed (value NaN): the objective cannot change it.
  */
 export function searchProportions(
   model: SchemeModel,
@@ -141,7 +142,8 @@ export function searchProportions(
   pinned: readonly string[],
   rise: RiseSetting,
   objective: Objective,
-  run: (options: SchemeOptions, riseM: number) => { design: Design; value: number },
+  design: (options: SchemeOptions, riseM: number) => Design,
+  assess: (design: Design) => number,
 ): { chosen: Candidate; choice: ProportionChoice } {
   const dims = dimensionsOf(model, options, pinned, rise);
   const candidates = new Map<string, Candidate>();
@@ -156,8 +158,9 @@ export function searchProportions(
     const key = index.join(",");
     const known = candidates.get(key);
     if (known) return known;
-    const { design, value } = run(opts, riseM);
-    const candidate = { options: opts, riseM, design, value: design.status === "infeasible" || !Number.isFinite(value) ? Number.POSITIVE_INFINITY : value };
+    const designed = design(opts, riseM);
+    const value = dims.length === 0 ? Number.NaN : designed.status === "infeasible" ? Number.POSITIVE_INFINITY : assess(designed);
+    const candidate = { options: opts, riseM, design: designed, value: dims.length === 0 || Number.isFinite(value) ? value : Number.POSITIVE_INFINITY };
     candidates.set(key, candidate);
     return candidate;
   };

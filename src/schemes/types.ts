@@ -160,6 +160,8 @@ export interface Design {
   drawing: { section: DrawingLine[]; plan?: DrawingLine[] };
   /** The 3D analysis, where the scheme ran one. */
   analysis?: DesignAnalysis;
+  /** The structural regime the design is in, named (e.g. "single layer", "double layer"); a change of it between spans explains a jump. */
+  regime?: string;
 }
 
 /** A scheme: its description, its valid range, its options and its designer. */

@@ -62,8 +62,8 @@ export function fixtureResults(): SchemeResult[] {
 export function fixtureSpanPoints(): SpanPoint[] {
   const points: SpanPoint[] = [];
   for (const spanM of [60, 90, 120]) {
-    points.push({ spanM, id: "cable-dome", label: "Cable dome", feasible: spanM < 120, inValidRange: true, reason: spanM < 120 ? "" : "fails a check", selfWeightKgPerM2: spanM < 120 ? spanM / 3 : Number.NaN, carbonKgCO2ePerM2Floor: spanM, costPerM2Floor: 10 * spanM, massToAir: spanM / 100 });
-    points.push({ spanM, id: "truss-roof", label: "Steel truss roof", feasible: true, inValidRange: spanM <= 90, reason: "", selfWeightKgPerM2: spanM, carbonKgCO2ePerM2Floor: 2 * spanM, costPerM2Floor: 5 * spanM, massToAir: spanM / 50 });
+    points.push({ spanM, id: "cable-dome", label: "Cable dome", feasible: spanM < 120, inValidRange: true, reason: spanM < 120 ? "" : "fails a check", status: spanM < 120 ? "feasible" : "infeasible", riseM: spanM / 7, regime: "", selfWeightKgPerM2: spanM < 120 ? spanM / 3 : Number.NaN, carbonKgCO2ePerM2Floor: spanM, costPerM2Floor: 10 * spanM, massToAir: spanM / 100 });
+    points.push({ spanM, id: "truss-roof", label: "Steel truss roof", feasible: true, inValidRange: spanM <= 90, reason: "", status: spanM <= 90 ? "feasible" : "out-of-range", riseM: spanM / 7, regime: "", selfWeightKgPerM2: spanM, carbonKgCO2ePerM2Floor: 2 * spanM, costPerM2Floor: 5 * spanM, massToAir: spanM / 50 });
   }
   return points;
 }

@@ -20,6 +20,8 @@ export interface DesignParts {
   governingLoadCase?: string;
   /** The 3D analysis, where the scheme ran one. */
   analysis?: DesignAnalysis;
+  /** The structural regime the design is in, named ("single layer", "double layer"); see Design.regime. */
+  regime?: string;
   roofSurfaceM2: number;
   /** Enclosed volume, m³ (walls to eaves plus the roof's own volume). */
   enclosedVolumeM3: number;
@@ -117,6 +119,7 @@ export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "l
     // The section carries the usable floor exactly as counted (role "usable floor").
     drawing: parts.floor ? { ...parts.drawing, section: [...parts.drawing.section, ...usableFloorLines(brief, parts.floor)] } : parts.drawing,
     ...(parts.analysis ? { analysis: parts.analysis } : {}),
+    ...(parts.regime ? { regime: parts.regime } : {}),
   };
 }
 

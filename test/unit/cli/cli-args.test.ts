@@ -12,7 +12,7 @@ const run = (...args: string[]) => runCli(args, (path) => {
 
 describe("command-line arguments", () => {
   const refused: [string[], RegExp][] = [
-    [["demo.json", "--frobnicate"], /unknown option: --frobnicate \(allowed: --help, --json, --partial, --span, --sweep, --schemes, --factors, --rates, --risk, --seed; see --help\)/],
+    [["demo.json", "--frobnicate"], /unknown option: --frobnicate \(allowed: --help, --json, --partial, --span, --sweep, --schemes, --factors, --rates, --risk, --seed, --objective, --buckling; see --help\)/],
     [["demo.json", "-x"], /unknown option: -x \(allowed: /],
     [["demo.json", "--span"], /missing value for --span \(expected a span in m from 30 to 500\)/],
     [["demo.json", "--schemes"], /missing value for --schemes \(expected scheme ids separated by commas, from cable-dome, /],
@@ -39,5 +39,32 @@ describe("command-line arguments", () => {
       expect(result.code).toBe(0);
       expect(result.stdout).toMatch(/^usage: npm run evaluate -- FILE/);
     }
+  });
+});
+
+describe("the equal-footing keys (issue 12, issue 13 command-line sections)", () => {
+  const files: Record<string, string> = { "demo.json": readFileSync("data/demo-study.json", "utf8") };
+  const readDemo = (p: string) => {
+    const t = files[p];
+    if (t === undefined) throw Object.assign(new Error("missing"), { code: "ENOENT" });
+    return t;
+  };
+  it("adds status, load case, rise, proportions and the four mass groups per scheme, and the objective and rise rule on top", () => {
+    const out = runCli(["demo.json", "--json", "--objective", "mass"], readDemo);
+    expect(out.code).toBe(0);
+    const json = JSON.parse(out.stdout) as { objective: string; rise_rule: string; schemes: Record<string, unknown>[] };
+    expect(json.objective).toBe("mass");
+    expect(json.rise_rule).toBe("common");
+    for (const s of json.schemes) {
+      expect(["feasible", "out-of-range", "infeasible"]).toContain(s.status);
+      expect(typeof s.governing_load_case).toBe("string");
+      expect(typeof s.proportions).toBe("object");
+      const groups = ["structure_t", "perimeter_t", "substructure_t", "envelope_t"].map((k) => s[k] as number);
+      expect(groups.reduce((a, b) => a + b, 0)).toBeCloseTo(s.total_mass_t as number, 6);
+      if (s.status !== "infeasible") expect(s.rise_m).toBe(22);
+    }
+  });
+  it("refuses an unknown objective, naming the option and what it allows", () => {
+    expect(runCli(["demo.json", "--objective", "beauty"], readDemo).stderr).toMatch(/invalid --objective: "?beauty"? \(expected one of mass, carbon, cost\)/);
   });
 });

@@ -15,10 +15,11 @@ describe("proportion search", () => {
   it("finds the least of a smooth bowl over two free options, from the defaults", () => {
     const m = model([spec("hoops", 1, 12, 1, true), spec("depth", 0.05, 0.5, 0.01)], { hoops: 3, depth: 0.1 });
     let calls = 0;
+    const bowl = (o: SchemeOptions) => 10 + ((o.hoops as number) - 7) ** 2 + 100 * ((o.depth as number) - 0.31) ** 2;
     const { choice } = searchProportions(m, m.defaults, [], fixed, "mass", (o) => {
       calls++;
-      return { design: feasible(), value: 10 + ((o.hoops as number) - 7) ** 2 + 100 * ((o.depth as number) - 0.31) ** 2 };
-    });
+      return { ...feasible(), totalMassKg: bowl(o) };
+    }, (d) => d.totalMassKg);
     expect(choice.proportions.hoops).toBe(7);
     expect(choice.proportions.depth).toBeCloseTo(0.31, 2);
     expect(choice.searched).toEqual(["hoops", "depth"]);
@@ -31,8 +32,8 @@ describe("proportion search", () => {
     const m = model([spec("hoops", 1, 12, 1, true), spec("depth", 0.05, 0.5, 0.01)], { hoops: 3, depth: 0.1 });
     const { choice, chosen } = searchProportions(m, { hoops: 4, depth: 0.1 }, ["hoops"], fixed, "carbon", (o) => {
       const bad = (o.depth as number) > 0.2; // the least value lies where the design is infeasible
-      return { design: bad ? infeasibleDesign("cable-dome", DEFAULT_BRIEF, "fails") : feasible(), value: 1 - (o.depth as number) };
-    });
+      return { ...(bad ? infeasibleDesign("cable-dome", DEFAULT_BRIEF, "fails") : feasible()), totalMassKg: 1 - (o.depth as number) };
+    }, (d) => d.totalMassKg);
     expect(chosen.options.hoops).toBe(4);
     expect(choice.pinned).toEqual(["hoops"]);
     expect(choice.searched).toEqual(["depth"]);
@@ -44,12 +45,21 @@ describe("proportion search", () => {
     const brief = { ...DEFAULT_BRIEF, spanM: 160, riseM: 24, eavesHeightM: 12, heightLimitM: 40, riseRule: "own" as const };
     const rise = riseSettingFor(m, brief, 160, undefined);
     expect(rise).toMatchObject({ kind: "search", minM: 8, maxM: 28 }); // 0.3 × 160 = 48 cut to 40 − 12
-    const { choice } = searchProportions(m, {}, [], rise as RiseSetting, "mass", (_o, riseM) => ({ design: feasible(), value: (riseM - 25) ** 2 }));
+    const { choice } = searchProportions(m, {}, [], rise as RiseSetting, "mass", (_o, riseM) => ({ ...feasible(), totalMassKg: (riseM - 25) ** 2 }), (d) => d.totalMassKg);
     expect(choice.riseM).toBeCloseTo(25, 0);
     expect(choice.riseSource).toBe("searched");
     expect(riseSettingFor(m, brief, 160, 18)).toEqual({ kind: "fixed", riseM: 18, source: "pinned" });
     expect(riseSettingFor(m, { ...brief, riseRule: "common" }, 160, undefined)).toEqual({ kind: "fixed", riseM: 24, source: "common" });
     expect(riseSettingFor(m, { ...brief, heightLimitM: 18 }, 160, undefined)).toMatchObject({ kind: "none", reason: expect.stringMatching(/height limit 18 m/) });
+  });
+
+  it("with nothing to search designs once and assesses nothing", () => {
+    const m = model([], {});
+    let assessed = 0;
+    const { choice } = searchProportions(m, {}, [], fixed, "carbon", () => feasible(), () => ++assessed);
+    expect(assessed).toBe(0);
+    expect(choice.evaluations).toBe(1);
+    expect(choice.runnerUp).toBeNull();
   });
 
   it("the common rise keeps the brief's rise/span ratio within the height limit", () => {
