@@ -10,7 +10,7 @@ import { chromium, type Page } from "playwright-core";
 import { defaultStudy } from "../../src/study";
 import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { SCHEMES } from "../../src/schemes";
-import { designScheme, assessDesign, briefAtSpan } from "../../src/pipeline";
+import { designScheme, assessDesign, briefAtSpan, designAtBestProportions, evaluateStudy } from "../../src/pipeline";
 import { CHROMIUM_ARGS } from "../browser/browser";
 
 const only = process.argv[2];
@@ -48,6 +48,35 @@ function benchDesigns(): void {
       );
     }
   }
+}
+
+/** One full design of each scheme including the proportion search (issue 12 budget: 50 ms per scheme at 160 m), and the ranking by the objective. */
+function benchSearch(): void {
+  console.log("\n## proportion search per scheme (one full design including the search, median, node)");
+  const study = defaultStudy();
+  const catalogue = defaultCatalogue();
+  for (const spanM of [60, 160, 300]) {
+    const brief = briefAtSpan(study.brief, spanM);
+    for (const model of SCHEMES) {
+      const times: number[] = [];
+      let searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue);
+      for (let i = 0; i < 5; i++) {
+        const t = performance.now();
+        searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue);
+        times.push(performance.now() - t);
+      }
+      const p = searched.proportions;
+      const g = searched.design.massByGroupKg;
+      const plan = searched.design.planAreaM2;
+      console.log(
+        `${model.id.padEnd(15)} ${String(spanM).padStart(3)} m  ${ms(stats(times).median)}  ${p.evaluations} designs  rise ${searched.brief.riseM.toFixed(1)} m (${p.riseSource})  ${JSON.stringify(p.proportions)}  runner-up ${p.runnerUp ? `+${p.runnerUp.differencePct.toFixed(1)} %` : "none"}  ${searched.design.status}  kg/m² plan: structure ${(g.structure / plan).toFixed(1)}, perimeter ${(g.perimeter / plan).toFixed(1)}, substructure ${(g.substructure / plan).toFixed(1)}, envelope ${(g.envelope / plan).toFixed(1)}  floor/plan ${(searched.design.usableFloorM2 / plan).toFixed(2)}  load case "${searched.design.governingLoadCase}"`,
+      );
+    }
+  }
+  const ranked = evaluateStudy(study, catalogue)
+    .results.filter((r) => r.figures.status === "feasible" && r.figures.carbonKgCO2ePerM2Floor !== null)
+    .sort((a, b) => (a.figures.carbonKgCO2ePerM2Floor ?? 0) - (b.figures.carbonKgCO2ePerM2Floor ?? 0));
+  console.log(`ranking at ${study.brief.spanM} m by kgCO2e/m² floor (feasible only): ${ranked.map((r) => `${r.id} ${r.figures.carbonKgCO2ePerM2Floor?.toFixed(0)}`).join(" < ")}`);
 }
 
 function benchBuild(): void {
@@ -167,6 +196,7 @@ async function benchBrowser(): Promise<void> {
 }
 
 if (!only || only === "designs") benchDesigns();
+if (!only || only === "designs" || only === "search") benchSearch();
 if (!only || only === "build") benchBuild();
 if (!only || only === "browser") await benchBrowser();
 // The risk benchmark is its own script (test/bench/risk.ts) when present.
