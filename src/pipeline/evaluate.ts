@@ -1,12 +1,12 @@
 import type { Brief } from "../brief";
 import type { Catalogue } from "../catalogue/types";
-import type { Design, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
+import type { Design, OptionValue, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
 import { SCHEMES, infeasibleDesign, isDesignAnswer } from "../schemes";
 import { assessCarbon, type CarbonAssessment } from "../carbon";
 import { assessCost, type CostAssessment } from "../cost";
 import { messageOf } from "../kernel/errors";
 import { schemeFigures, type SchemeFigures } from "./figures";
-import { commonRiseM, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice } from "./proportions";
+import { commonRiseM, dimensionsOf, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice } from "./proportions";
 import type { SchemeSetting, StudyInputs } from "./study-inputs";
 
 /** One scheme's design with its carbon and cost, and the figures read from them. */
@@ -120,28 +120,61 @@ export interface SearchedDesign {
   proportions: ProportionChoice;
 }
 
+/** The options a search candidate is designed with: the scheme's screening options, except those the user pinned. */
+function screened(model: SchemeModel, options: SchemeOptions, pinned: readonly string[]): SchemeOptions {
+  const screening = Object.entries(model.screeningOptions ?? {}).filter((entry): entry is [string, OptionValue] => entry[1] !== undefined && !pinned.includes(entry[0]));
+  return screening.length === 0 ? options : { ...options, ...Object.fromEntries(screening) };
+}
+
 /**
  * The one rule every page and the command line use: a scheme's free proportions (and its rise under
  * the "own" rule) searched for the brief's objective, pinned ones left as the study sets them; the
  * rise within the scheme's rise ÷ span range and the height limit. The brief is at its span, its
- * rise the common rise there (briefAtSpan).
+ * rise the common rise there (briefAtSpan). Candidates are designed with the scheme's screening
+ * options when it declares any; the chosen proportions are then designed with the full options and
+ * that design's value reported (the runner-up's difference stays the screening one).
  */
 export function designAtBestProportions(model: SchemeModel, brief: Brief, setting: SchemeSetting | undefined, study: Pick<StudyInputs, "carbon" | "cost">, catalogue: Catalogue): SearchedDesign {
   const objective = brief.objective;
   const options = { ...model.defaults, ...(setting?.options ?? {}) };
+  const pinned = setting?.pinned ?? [];
   const rise = riseSettingFor(model, brief, brief.spanM, setting?.riseM);
   if (rise.kind === "none") {
     const design = infeasibleDesign(model.id, brief, rise.reason);
-    return { design, brief, proportions: { objective, searched: [], pinned: setting?.pinned ?? [], proportions: { [RISE_KEY]: brief.riseM }, riseM: brief.riseM, riseSource: "searched", value: Number.POSITIVE_INFINITY, evaluations: 0, runnerUp: null } };
+    return { design, brief, proportions: { objective, searched: [], pinned: [...pinned], proportions: { [RISE_KEY]: brief.riseM }, riseM: brief.riseM, riseSource: "searched", value: Number.POSITIVE_INFINITY, evaluations: 0, runnerUp: null } };
   }
+  const screening = dimensionsOf(model, options, pinned, rise).length > 0 ? screened(model, options, pinned) : options;
   const { chosen, choice } = searchProportions(
     model,
-    options,
-    setting?.pinned ?? [],
+    screening,
+    pinned,
     rise,
     objective,
     (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue),
     (design) => objectiveValue(design, study, objective),
   );
-  return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice };
+  const chosenBrief = { ...brief, riseM: chosen.riseM };
+  if (screening === options) return { design: chosen.design, brief: chosenBrief, proportions: choice };
+  const design = designScheme(model, chosenBrief, { ...chosen.options, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, catalogue);
+  const value = design.status === "infeasible" ? Number.POSITIVE_INFINITY : objectiveValue(design, study, objective);
+  return { design, brief: chosenBrief, proportions: { ...choice, value } };
+}
+
+function pick(options: SchemeOptions, keys: readonly string[]): SchemeOptions {
+  return Object.fromEntries(keys.filter((k) => k in options).map((k) => [k, options[k] as OptionValue]));
+}
+
+/**
+ * A scheme designed again at proportions the search already chose (for the same study at its own
+ * values) under changed inputs — the risk analysis's draws: the searched options keep their chosen
+ * values, a searched rise keeps its rise ÷ span, everything else (pinned options, the common rise,
+ * the loads) comes from the changed study. Without a choice, the options as given.
+ */
+export function designWithChoice(model: SchemeModel, brief: Brief, options: SchemeOptions | undefined, choice: { proportions: ProportionChoice; spanM: number } | undefined, catalogue: Catalogue): Design {
+  if (!choice) return designScheme(model, brief, options, catalogue);
+  const { proportions } = choice;
+  const fixed: SchemeOptions = { ...(options ?? {}) };
+  for (const key of proportions.searched) if (key !== RISE_KEY && proportions.proportions[key] !== undefined) fixed[key] = proportions.proportions[key] as OptionValue;
+  const riseM = proportions.riseSource === "common" ? brief.riseM : proportions.riseSource === "pinned" ? proportions.riseM : (proportions.riseM * brief.spanM) / choice.spanM;
+  return designScheme(model, { ...brief, riseM }, fixed, catalogue);
 }

@@ -2,7 +2,7 @@ import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { evaluateStudy, designScheme, assessDesign, type SchemeFigures } from "../pipeline";
+import { evaluateStudy, designWithChoice, assessDesign, type SchemeFigures, type SchemeResult } from "../pipeline";
 import { CONCEPT_SCREENING } from "../cost";
 import { getIn } from "../kernel/patch";
 import { createPrng } from "./prng";
@@ -86,8 +86,9 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
   const plan = planInputs(study, check.resolved, samples, designSamples, options);
   const rng = createPrng(seed);
   const poolU = latinHypercube(plan, rng);
-  const deterministic = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, r.figures]));
-  const designs = drawDesigns(study, catalogue, plan, poolU);
+  const evaluated = new Map(evaluateStudy(study, catalogue).results.map((r) => [r.id, r]));
+  const deterministic = new Map([...evaluated].map(([id, r]) => [id, r.figures]));
+  const designs = drawDesigns(study, catalogue, plan, poolU, evaluated);
   const drawn = drawSamples(study, plan, poolU, designs, rng);
 
   const carbonOutputs = drawn.outputs.map((o) => o[1] as Float64Array);
@@ -183,8 +184,11 @@ function latinHypercube(plan: Plan, rng: ReturnType<typeof createPrng>): (Float6
   });
 }
 
-/** Designs: once per scheme per distinct draw of the inputs that affect it. */
-function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: readonly (Float64Array | null)[]): Designs {
+/**
+ * Designs: once per scheme per distinct draw of the inputs that affect it, at the proportions the
+ * pipeline chose for the study's own values (a draw changes loads and sizes, not the scheme's form).
+ */
+function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: readonly (Float64Array | null)[], evaluated: ReadonlyMap<string, SchemeResult>): Designs {
   const { inputs, models, designSamples, options } = plan;
   const designTotal = models.length * designSamples;
   const entries = models.map(() => [] as DesignEntry[]);
@@ -200,7 +204,7 @@ function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: 
       let index = seen.get(key);
       if (index === undefined) {
         const drawn = applyValues(study, paths, values);
-        const design = designScheme(model, drawn.brief, drawn.schemes[model.id]?.options, catalogue);
+        const design = designWithChoice(model, drawn.brief, drawn.schemes[model.id]?.options, choiceOf(evaluated.get(model.id)), catalogue);
         index = (entries[s] as DesignEntry[]).push({ design, quantities: designQuantities(design) }) - 1;
         seen.set(key, index);
       }
@@ -213,6 +217,11 @@ function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: 
     }
   });
   return { entries, entryOf };
+}
+
+/** The proportions the pipeline chose for a scheme, with the span it chose them at. */
+function choiceOf(result: SchemeResult | undefined): Parameters<typeof designWithChoice>[3] {
+  return result?.proportions && result.brief ? { proportions: result.proportions, spanM: result.brief.spanM } : undefined;
 }
 
 /** Every input's value in sample i: design groups from their hypercube draw, the others from a fresh one. */

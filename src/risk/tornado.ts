@@ -2,7 +2,7 @@ import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { designScheme, schemeResult } from "../pipeline";
+import { designAtBestProportions, designWithChoice, schemeResult } from "../pipeline";
 import { setIn } from "../kernel/patch";
 import { checkRiskInputs } from "./check-risk-inputs";
 import type { ResolvedInput } from "./resolve-inputs";
@@ -30,8 +30,8 @@ function metricsOf(design: Design, study: Pick<RiskStudy, "carbon" | "cost">): {
 /**
  * One-at-a-time sensitivity (a tornado diagram): for every scheme and for carbon and cost per m²
  * of usable floor, each uncertain input set to its low and to its high end with all others at
- * the study's values, by the pipeline itself (designScheme only when the input changes that
- * scheme's design, then assessDesign); bars sorted by swing. It shows each input alone; it does
+ * the study's values, by the pipeline itself (the scheme at the proportions the pipeline chose for the
+ * study's values, designed again only when the input changes that scheme's design, then assessDesign); bars sorted by swing. It shows each input alone; it does
  * not show interactions or joint extremes (the Monte Carlo does).
  * @throws Error naming the input for invalid risk settings
  */
@@ -41,12 +41,14 @@ export function riskTornado(study: RiskStudy, catalogue: Catalogue): Tornado[] {
   const inputs = check.resolved.filter((i) => i.low < i.high);
   const out: Tornado[] = [];
   for (const model of SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false)) {
-    const baseDesign = designScheme(model, study.brief, study.schemes[model.id]?.options, catalogue);
+    const searched = designAtBestProportions(model, study.brief, study.schemes[model.id], study, catalogue);
+    const choice = { proportions: searched.proportions, spanM: searched.brief.spanM };
+    const baseDesign = searched.design;
     const base = metricsOf(baseDesign, study);
     const ends = (input: ResolvedInput, value: number) => {
       const moved = setIn(study, input.path, value);
       const changesDesign = input.path[0] === "brief" || (input.path[0] === "schemes" && input.path[1] === model.id);
-      const design = changesDesign ? designScheme(model, moved.brief, moved.schemes[model.id]?.options, catalogue) : baseDesign;
+      const design = changesDesign ? designWithChoice(model, moved.brief, moved.schemes[model.id]?.options, choice, catalogue) : baseDesign;
       return metricsOf(design, moved);
     };
     const bars = inputs.map((input) => ({ input, low: ends(input, input.low), high: ends(input, input.high) }));

@@ -178,6 +178,12 @@ export interface SchemeModel<O extends SchemeOptions = SchemeOptions, Id extends
   riseSpanRatio?: { min: number; max: number; preferred: number };
   options: readonly OptionSpec[];
   defaults: O;
+  /**
+   * Cheaper options the proportion search designs its candidates with (say, the closed form in
+   * place of a 3D analysis); the chosen proportions are then designed once with the full options.
+   * An option the user pinned is never overridden.
+   */
+  screeningOptions?: Partial<O>;
   /** Preliminary design. Never throws for a valid brief: infeasible is an answer. */
   design(brief: Brief, options: O, catalogue: Catalogue): Design;
 }

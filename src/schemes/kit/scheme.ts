@@ -21,6 +21,8 @@ export interface SchemeDefinition<O extends SchemeOptions, Id extends string> {
   /** The rise ÷ span the scheme may take when each scheme chooses its own rise. */
   riseSpanRatio?: { min: number; max: number; preferred: number };
   options: DeclaredOptions<O>;
+  /** Cheaper options for the proportion search's candidates (SchemeModel.screeningOptions). */
+  screeningOptions?: Partial<O>;
   /**
    * The scheme's own steps: geometry → loads → self-weight iterated around sizing
    * (`convergeSelfWeight`) → checks, returning the design's parts, which the template assembles
