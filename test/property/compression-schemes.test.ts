@@ -81,7 +81,8 @@ describe("compression and bending schemes never throw for valid input", () => {
   };
   for (const model of [geodesicDome, trussRoof, concreteShell] as unknown as SchemeModel[]) {
     it(`${model.id}`, () => {
-      const options = fc.record(Object.fromEntries(model.options.map((s) => [s.key, optionArb(s)])) as Record<string, fc.Arbitrary<OptionValue>>);
+      // The on-demand 3D analysis is left off here (seconds a design): its own tests cover it.
+      const options = fc.record(Object.fromEntries(model.options.map((s) => [s.key, s.key === "bucklingAnalysis" ? fc.constant(false) : optionArb(s)])) as Record<string, fc.Arbitrary<OptionValue>>);
       fc.assert(
         fc.property(options, fc.integer({ min: 30, max: 320 }), fc.double({ min: 0.05, max: 0.5, noNaN: true }), (opts, spanM, riseRatio) => {
           const d = model.design({ ...DEFAULT_BRIEF, spanM, riseM: riseRatio * spanM }, opts as SchemeOptions, catalogue);

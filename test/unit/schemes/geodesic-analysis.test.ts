@@ -31,4 +31,9 @@ describe("geodesic dome: 3D analysis of the net on demand", () => {
     // the base ring stands at the eaves
     expect(Math.min(...v.nodes.map((p) => p[2]))).toBeCloseTo(brief.eavesHeightM, 6);
   });
+  it("declines a net larger than it can analyse in reasonable time, and says so (320 m at 1.5 m struts)", () => {
+    const big = geodesicDome.design({ ...brief, spanM: 320, riseM: 48 }, { ...geodesicDome.defaults, targetStrutLengthM: 1.5, bucklingAnalysis: true }, defaultCatalogue());
+    expect(big.analysis).toBeUndefined();
+    expect(big.warnings.some((w) => /more than the 2,000 the on-demand 3D analysis takes/.test(w))).toBe(true);
+  });
 });
