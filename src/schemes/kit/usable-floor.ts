@@ -5,17 +5,44 @@ import { usableFloorAreaM2 } from "../../mechanics/usable-floor";
 /** Rings the plan radius is divided into for the usable floor (error ≤ one ring's area per crossing). */
 const FLOOR_RINGS = 2000;
 
+/** Whether each soffit's radii never decrease (then the first point at or beyond r is found by bisection). */
+const ascending = new WeakMap<FloorEnvelope["soffit"], boolean>();
+
+function isAscending(soffit: FloorEnvelope["soffit"]): boolean {
+  let known = ascending.get(soffit);
+  if (known === undefined) {
+    known = soffit.every((p, i) => i === 0 || (soffit[i - 1] as readonly [number, number])[0] <= p[0]);
+    ascending.set(soffit, known);
+  }
+  return known;
+}
+
+/** Index of the first point from 1 on whose radius is at least r (soffit.length when none). */
+function firstAtOrBeyond(soffit: FloorEnvelope["soffit"], rM: number): number {
+  if (!isAscending(soffit)) {
+    for (let i = 1; i < soffit.length; i++) if (rM <= (soffit[i] as readonly [number, number])[0]) return i;
+    return soffit.length;
+  }
+  let lo = 1;
+  let hi = soffit.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (rM <= (soffit[mid] as readonly [number, number])[0]) hi = mid;
+    else lo = mid + 1;
+  }
+  return lo;
+}
+
 /** Height of the soffit above the floor at plan radius r: linear between the given points, flat beyond the ends. */
 export function soffitHeightAtM(soffit: FloorEnvelope["soffit"], rM: number): number {
   if (soffit.length === 0) throw new RangeError("invalid floor.soffit: empty (expected at least one (radius, height) point)");
   const first = soffit[0] as readonly [number, number];
   if (rM <= first[0]) return first[1];
-  for (let i = 1; i < soffit.length; i++) {
-    const [r0, z0] = soffit[i - 1] as readonly [number, number];
-    const [r1, z1] = soffit[i] as readonly [number, number];
-    if (rM <= r1) return r1 > r0 ? z0 + ((z1 - z0) * (rM - r0)) / (r1 - r0) : Math.min(z0, z1);
-  }
-  return (soffit[soffit.length - 1] as readonly [number, number])[1];
+  const i = firstAtOrBeyond(soffit, rM);
+  if (i >= soffit.length) return (soffit[soffit.length - 1] as readonly [number, number])[1];
+  const [r0, z0] = soffit[i - 1] as readonly [number, number];
+  const [r1, z1] = soffit[i] as readonly [number, number];
+  return r1 > r0 ? z0 + ((z1 - z0) * (rM - r0)) / (r1 - r0) : Math.min(z0, z1);
 }
 
 /** Whether the soffit at radius r leaves the brief's clear height. */
