@@ -20,8 +20,8 @@ import { timberPlan, timberSection } from "./drawing";
 const GLULAM_CHOICES = ["GL24h", "GL28h", "GL30h", "GL32h"].map((value) => ({ value, label: `${value} (EN 14080)` }));
 
 const declarations = {
-  // Superior Dome (163 m): 781 members over ≈ 21,000 m² of plan → ≈ 10 m members (derived from the published count)
-  memberLengthM: { kind: "number", label: "Target member length", unit: "m", min: 4, max: 20, step: 0.5, default: 10, source: "mesh size; ≈ 10 m in the 163 m Superior Dome (781 members); frequency v = round(1.2 R / L) and its two neighbours are designed, the lightest kept", free: true },
+  // the built 163.4 m glulam lattice dome (1991): 781 members over ≈ 21,000 m² of plan → ≈ 10 m members (derived from the published count)
+  memberLengthM: { kind: "number", label: "Target member length", unit: "m", min: 4, max: 20, step: 0.5, default: 10, source: "mesh size; ≈ 10 m in a built 163 m glulam lattice dome (781 members); frequency v = round(1.2 R / L) and its two neighbours are designed, the lightest kept", free: true },
   strengthClass: { kind: "select", label: "Glulam strength class", choices: GLULAM_CHOICES, default: "GL28h", source: "EN 14080:2013 Table 5 (data/glulam.csv)" },
   // covered heated buildings are SC1; SC2 is the safe side (common practice, no source)
   serviceClass: {
@@ -253,8 +253,8 @@ export const timberDome = defineScheme({
   label: "Glulam timber dome",
   colour: "#D55E00",
   description:
-    "A single-layer lattice of glued-laminated timber members on a three-way geodesic grid, with purlins, a board deck and a roofing membrane, cut to a spherical cap on a steel tension ring. The triangulated grid is chosen over ribs and rings because it carries unbalanced load by in-plane action with straight members of nearly one length, as in the two largest built timber domes (Tacoma, 161.5 m; Superior Dome, 163.4 m). Members are designed to EN 1995-1-1 for axial force with the bending of the panel load, the lattice for general buckling with creep-reduced stiffness; fire resistance adds charring to each member.",
-  // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (Tacoma Dome, 1983) and 163.4 m (Superior Dome, 1991), published figures.
+    "A single-layer lattice of glued-laminated timber members on a three-way geodesic grid, with purlins, a board deck and a roofing membrane, cut to a spherical cap on a steel tension ring. The triangulated grid is chosen over ribs and rings because it carries unbalanced load by in-plane action with straight members of nearly one length, as in the two largest built timber domes (161.5 m and 163.4 m spans). Members are designed to EN 1995-1-1 for axial force with the bending of the panel load, the lattice for general buckling with creep-reduced stiffness; fire resistance adds charring to each member.",
+  // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (completed 1983) and 163.4 m (completed 1991), published figures.
   validSpanM: { min: 40, max: 165 },
   // rise ÷ span 0.1–0.3, preferring 0.15 (the built glulam domes are near it; common practice, no source)
   riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15 },
