@@ -118,18 +118,8 @@ function sameValue(a: unknown, b: unknown): boolean {
   return Object.is(a, b);
 }
 
-/** Builds the editor: the table is a component tree (one component per row and cell), so a removed row takes its subscriptions with it. */
-export function tableEditor<R extends Record<string, unknown>>(options: TableEditorOptions<R>): HTMLElement {
-  ensureStyle();
-  const wrap = document.createElement("div");
-  wrap.className = "table-editor";
-  const status = document.createElement("div");
-  status.id = `${options.id}-import-status`;
-  status.setAttribute("aria-live", "polite");
-
-  const defaultsByKey = computed(() => new Map(options.defaults().map((r) => [String(r[options.keyField]), r])));
-  const tableHolder = document.createElement("div");
-  tableHolder.className = "table-scroll";
+/** The table itself: one component per row and cell, each row with its state, reset and remove. */
+function mountRows<R extends Record<string, unknown>>(options: TableEditorOptions<R>, defaultsByKey: ReadonlySignal<Map<string, R>>, holder: HTMLElement): void {
   const keyOf = (r: R) => String(r[options.keyField]);
   const replaceRow = (key: string, row: R) => {
     const i = options.rows.peek().findIndex((r) => keyOf(r) === key);
@@ -147,9 +137,13 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
     replaceRow(key, result.row);
     return { ok: true, value: result.row[field] };
   };
+  const isChanged = (key: string, row: R) => {
+    const base = defaultsByKey.value.get(key);
+    return base !== undefined && options.columns.some((c) => c.kind !== "computed" && !sameValue(row[c.field], base[c.field]));
+  };
   const rowState = ({ key, row, refresh }: { key: string; row: R; refresh(): void }) => {
     const base = defaultsByKey.value.get(key);
-    const changed = base !== undefined && options.columns.some((c) => c.kind !== "computed" && !sameValue(row[c.field], base[c.field]));
+    const changed = isChanged(key, row);
     const reset = () => {
       const original = defaultsByKey.peek().get(key);
       if (original) replaceRow(key, { ...original });
@@ -164,7 +158,7 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
       h("button", { type: "button", hidden: base !== undefined, "aria-label": `Remove ${key}`, onClick: remove }, "Remove"),
     );
   };
-  mountEditableTable<R>(tableHolder, {
+  mountEditableTable<R>(holder, {
     tableId: `${options.id}-table`,
     ...(options.caption ? { caption: options.caption } : {}),
     rows: options.rows,
@@ -176,40 +170,73 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
     edit,
     defaults: defaultsByKey,
     messages: "cell",
-    rowAttributes: (key, row) => {
-      const base = defaultsByKey.value.get(key);
-      const changed = base !== undefined && options.columns.some((c) => c.kind !== "computed" && !sameValue(row[c.field], base[c.field]));
-      return { "data-key": key, class: base === undefined ? "row-added" : changed ? "row-changed" : "" };
-    },
+    rowAttributes: (key, row) => ({ "data-key": key, class: defaultsByKey.value.get(key) === undefined ? "row-added" : isChanged(key, row) ? "row-changed" : "" }),
     rowTools: rowState,
     toolsHeading: "State",
     ...(options.selected ? { selected: options.selected, onRowFocus: (key: string) => ((options.selected as Signal<string | null>).value = key) } : {}),
   });
+}
 
-  // Tools: add a row, reset all, import, export.
-  const tools = document.createElement("div");
-  tools.className = "editor-tools";
-  if (options.newRow) {
-    const newKey = document.createElement("input");
-    newKey.type = "text";
-    newKey.id = `${options.id}-new-key`;
-    newKey.placeholder = `new ${options.rowNoun} id`;
-    newKey.setAttribute("aria-label", `Id of a new ${options.rowNoun}`);
-    const add = button(`Add ${options.rowNoun}`, () => {
-      const made = options.newRow?.(newKey.value.trim(), options.rows.peek());
-      if (made === undefined) return;
-      if (typeof made === "string") {
-        status.className = "import-problems";
-        status.textContent = made;
-        return;
-      }
-      options.setRows([...options.rows.peek(), made]);
-      status.className = "import-ok";
-      status.textContent = `Added ${String(made[options.keyField])}: fill in its factors and source.`;
-      newKey.value = "";
-    }, `${options.id}-add`);
-    tools.append(newKey, add);
-  }
+/** The new-row id field and its Add button (none when the table takes no new rows). */
+function addRowTools<R extends Record<string, unknown>>(options: TableEditorOptions<R>, status: HTMLElement): HTMLElement[] {
+  if (!options.newRow) return [];
+  const newKey = document.createElement("input");
+  newKey.type = "text";
+  newKey.id = `${options.id}-new-key`;
+  newKey.placeholder = `new ${options.rowNoun} id`;
+  newKey.setAttribute("aria-label", `Id of a new ${options.rowNoun}`);
+  const add = button(`Add ${options.rowNoun}`, () => {
+    const made = options.newRow?.(newKey.value.trim(), options.rows.peek());
+    if (made === undefined) return;
+    if (typeof made === "string") {
+      status.className = "import-problems";
+      status.textContent = made;
+      return;
+    }
+    options.setRows([...options.rows.peek(), made]);
+    status.className = "import-ok";
+    status.textContent = `Added ${String(made[options.keyField])}: fill in its factors and source.`;
+    newKey.value = "";
+  }, `${options.id}-add`);
+  return [newKey, add];
+}
+
+/** The hidden file input and the Import and Merge buttons that open it. */
+function importButtons(id: string, importText: (text: string, name: string, mode: "replace" | "merge") => void): HTMLElement[] {
+  let mode: "replace" | "merge" = "replace";
+  const file = document.createElement("input");
+  file.type = "file";
+  file.accept = ".csv,text/csv";
+  file.hidden = true;
+  file.id = `${id}-import-file`;
+  file.setAttribute("aria-label", "CSV file to import");
+  file.addEventListener("change", async () => {
+    const chosen = file.files?.[0];
+    if (!chosen) return;
+    importText(await chosen.text(), chosen.name, mode);
+    file.value = "";
+    mode = "replace";
+  });
+  const open = (next: "replace" | "merge") => () => {
+    mode = next;
+    file.click();
+  };
+  return [button("Import CSV…", open("replace"), `${id}-import`), button("Merge CSV (partial update)…", open("merge"), `${id}-merge`), file];
+}
+
+/** Builds the editor: the table is a component tree (one component per row and cell), so a removed row takes its subscriptions with it. */
+export function tableEditor<R extends Record<string, unknown>>(options: TableEditorOptions<R>): HTMLElement {
+  ensureStyle();
+  const wrap = document.createElement("div");
+  wrap.className = "table-editor";
+  const status = document.createElement("div");
+  status.id = `${options.id}-import-status`;
+  status.setAttribute("aria-live", "polite");
+  const defaultsByKey = computed(() => new Map(options.defaults().map((r) => [String(r[options.keyField]), r])));
+  const tableHolder = document.createElement("div");
+  tableHolder.className = "table-scroll";
+  mountRows(options, defaultsByKey, tableHolder);
+
   const applyNamed = (rows: R[], name: string | null) => {
     if (options.setName && name !== null) options.setName.apply(rows, name);
     else options.setRows(rows);
@@ -234,37 +261,15 @@ export function tableEditor<R extends Record<string, unknown>>(options: TableEdi
     },
     status,
   );
-  let mode: "replace" | "merge" = "replace";
-  const file = document.createElement("input");
-  file.type = "file";
-  file.accept = ".csv,text/csv";
-  file.hidden = true;
-  file.id = `${options.id}-import-file`;
-  file.setAttribute("aria-label", "CSV file to import");
-  file.addEventListener("change", async () => {
-    const chosen = file.files?.[0];
-    if (!chosen) return;
-    importText(await chosen.text(), chosen.name, mode);
-    file.value = "";
-    mode = "replace";
-  });
-  const importButton = button("Import CSV…", () => {
-    mode = "replace";
-    file.click();
-  }, `${options.id}-import`);
-  const mergeButton = button("Merge CSV (partial update)…", () => {
-    mode = "merge";
-    file.click();
-  }, `${options.id}-merge`);
   const exportButton = button("Export CSV", () => downloadText(options.csvFilename, options.toCsv(options.rows.peek()), "text/csv"), `${options.id}-export`);
-  tools.append(resetAll, importButton, mergeButton, exportButton, file);
-
+  const tools = document.createElement("div");
+  tools.className = "editor-tools";
+  tools.append(...addRowTools(options, status), resetAll, ...importButtons(options.id, importText), exportButton);
   // Tests (and drag-and-drop, later) can import text directly.
   wrap.addEventListener("import-csv", (event) => {
     const detail = (event as CustomEvent<{ text: string; name: string; merge?: boolean }>).detail;
     importText(detail.text, detail.name, detail.merge ? "merge" : "replace");
   });
-
   wrap.append(tools, ...(options.extraTools ? [options.extraTools] : []), status, preview, tableHolder);
   return wrap;
 }
