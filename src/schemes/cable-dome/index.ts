@@ -178,6 +178,8 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
 const identity = {
   id: "cable-dome",
   riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 },
+  // the proportion search designs its candidates by the closed form; the chosen ones are analysed in 3D when asked
+  screeningOptions: { analysis: "closed-form" },
   label: "Cable dome",
   colour: "#0072B2",
   description:
