@@ -26,6 +26,8 @@ export interface FrameMember {
   i: number;
   j: number;
   section: FrameSection;
+  /** Direction the member's local z (the axis bending about local y moves along) is turned towards; default global z. For a section that is not round, e.g. the surface normal. */
+  zReference?: Vec3;
 }
 
 export interface FrameModel {
@@ -38,14 +40,16 @@ export interface FrameModel {
 }
 
 /** Rotation from global to member axes: rows are the member's local x (along it), y and z. */
-function memberAxes(p: Vec3, q: Vec3): { R: number[]; L: number } {
+function memberAxes(p: Vec3, q: Vec3, zReference?: Vec3): { R: number[]; L: number } {
   const dx = q[0] - p[0];
   const dy = q[1] - p[1];
   const dz = q[2] - p[2];
   const L = Math.hypot(dx, dy, dz);
   const x = [dx / L, dy / L, dz / L];
   // Local y normal to x and to a reference axis (global z, or global x for a vertical member).
-  const ref = Math.abs(x[2]!) > 0.999 ? [1, 0, 0] : [0, 0, 1];
+  const given = zReference ? Math.hypot(...zReference) : 0;
+  const along = given > 0 ? (x[0]! * zReference![0] + x[1]! * zReference![1] + x[2]! * zReference![2]) / given : 1;
+  const ref = given > 0 && Math.abs(along) < 0.999 ? zReference! : Math.abs(x[2]!) > 0.999 ? [1, 0, 0] : [0, 0, 1];
   let y = [ref[1]! * x[2]! - ref[2]! * x[1]!, ref[2]! * x[0]! - ref[0]! * x[2]!, ref[0]! * x[1]! - ref[1]! * x[0]!];
   const ny = Math.hypot(y[0]!, y[1]!, y[2]!);
   y = y.map((c) => c / ny);
@@ -115,7 +119,7 @@ export function frameSystem(model: FrameModel) {
   const fixed = new Uint8Array(6 * n);
   for (const s of model.supports) s.fixed.forEach((f, d) => f && (fixed[6 * s.node + d] = 1));
   const { equationOf, matrix, count } = numberEquations(n, 6, model.members.map((m) => [m.i, m.j]), (node, d) => fixed[6 * node + d] === 1);
-  const axes = model.members.map((m) => memberAxes(model.nodes[m.i]!, model.nodes[m.j]!));
+  const axes = model.members.map((m) => memberAxes(model.nodes[m.i]!, model.nodes[m.j]!, m.zReference));
   /** Assembles Σ Tᵀ k T over the members (elastic, and/or geometric with the given axial forces). */
   const assemble = (elastic: boolean, axialN?: Float64Array): EnvelopeMatrix => {
     const K = matrix();

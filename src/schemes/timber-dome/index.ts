@@ -16,6 +16,7 @@ import { latticeBands } from "../../mechanics/lattice-bands";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
 import { timberPlan, timberSection } from "./drawing";
+import { analyseTimberNet } from "./analysis";
 
 const GLULAM_CHOICES = ["GL24h", "GL28h", "GL30h", "GL32h"].map((value) => ({ value, label: `${value} (EN 14080)` }));
 
@@ -53,6 +54,8 @@ const declarations = {
   // steel hubs, plates and dowels ≈ 5–15 % of the timber mass (common practice, no source)
   connectorKgPerM3: { kind: "number", label: "Steel connectors", unit: "kg per m³ of glulam", min: 0, max: 200, step: 5, default: 50, source: "allowance for hubs, plates and dowels, common practice, no source", uncertainty: "allowance" },
   fireMinutes: { kind: "number", label: "Fire resistance (charring added)", unit: "min", min: 0, max: 120, step: 15, integer: true, default: 0, source: "EN 1995-1-2 §3.4 (β_n 0.7 mm/min) and §4.2.2 (d_ef = β_n t + 7 mm)" },
+  // on demand: a frame of the whole net (seconds at 160 m); the command line's --buckling and the details panel set it
+  bucklingAnalysis: { kind: "toggle", label: "3D analysis of the net (general buckling)", default: false, source: "rigid-jointed frame of the net at E/(1 + k_def) under the heaviest gravity combination, linear buckling × knock-down (issue 15)" },
 } as const;
 export type TimberDomeOptions = OptionValues<typeof declarations>;
 
@@ -187,7 +190,15 @@ function latticeMesh(cap: SphericalCap, frequency: number, failure: { warnings: 
 }
 
 /** The timber dome on one mesh: self-weight iterated to convergence, then its parts; a SchemeError when it cannot be built. */
-function designOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): { parts: DesignParts; massKg: number } {
+interface MeshDesign {
+  parts: DesignParts;
+  massKg: number;
+  mesh: GeodesicCap;
+  result: TimberLatticeResult;
+  inputs: TimberLatticeInputs;
+}
+
+function designOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): MeshDesign {
   const mesh = latticeMesh(cap, frequency, { warnings, section: timberSection(brief, 0) });
   const inputs = latticeInputs(brief, opts, catalogue, cap, mesh);
   const converged = convergeSelfWeight<TimberLatticeResult>(
@@ -215,7 +226,14 @@ function designOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogu
     ...capEnvelope(cap, brief.eavesHeightM),
     drawing: { section: timberSection(brief, depthM), plan: timberPlan(mesh) },
   };
-  return { parts, massKg: takeoff.reduce((sum, row) => sum + row.massKg, 0) };
+  return { parts, massKg: takeoff.reduce((sum, row) => sum + row.massKg, 0), mesh, result: r, inputs };
+}
+
+/** The chosen design with the 3D analysis of its net: Design.analysis and the 3D buckling check beside the continuum one. */
+function withNetAnalysis(brief: Brief, cap: SphericalCap, d: MeshDesign, knockDown: number): DesignParts {
+  const selfWeightPlanKPa = timberSelfWeightKPa(d.result, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2);
+  const net = analyseTimberNet({ brief, cap, mesh: d.mesh, bands: d.result.bands, selfWeightPlanKPa, creepModulusPa: d.inputs.creepModulusPa, knockDown, purlinSpacingM: d.inputs.purlinSpacingM });
+  return { ...d.parts, checks: [...d.parts.checks, ...net.checks], analysis: net.analysis };
 }
 
 /**
@@ -232,7 +250,7 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
   const cap = sphericalCap(brief.spanM, brief.riseM);
   const warnings = timberWarnings(opts);
   const nominal = geodesicFrequencyFor(cap.radiusM, opts.memberLengthM);
-  let best: { parts: DesignParts; massKg: number } | null = null;
+  let best: MeshDesign | null = null;
   let nominalFailure: unknown = null;
   for (const frequency of [nominal, nominal - 1, nominal + 1]) {
     if (frequency < 1) continue;
@@ -245,7 +263,7 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
     }
   }
   if (best === null) throw nominalFailure ?? new SchemeError("no mesh near the target member length can be built: change the member length", { warnings, section: timberSection(brief, 0) });
-  return best.parts;
+  return opts.bucklingAnalysis ? withNetAnalysis(brief, cap, best, opts.knockDown) : best.parts;
 }
 
 export const timberDome = defineScheme({
