@@ -1,7 +1,7 @@
 // Span study: every enabled scheme across a range of spans, with the spans where the best one changes.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, numberControl, controlGroup, spanStudyRunner, fmt } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, numberControl, toggleControl, controlGroup, spanStudyRunner, fmt } from "../src/notebook";
 import { spanMetricChart, spanValidityChart, chartCaption, type SpanMetric } from "../src/charts";
 import { describeCrossovers, valuesBySpan, type SpanRange, type SpanPoint } from "../src/comparison";
 import { SCHEMES } from "../src/schemes";
@@ -10,7 +10,7 @@ const { store, main } = startPage({
   id: "span-study",
   demoStudy,
   intro:
-    "Each enabled scheme redesigned at every span of the range, the rise kept in proportion to the span as in the brief. Lines are drawn only where a scheme is feasible; dashed where the span is outside its method's valid range.",
+    "Each enabled scheme redesigned at every span of the range, the rise kept in proportion to the span as in the brief. Lines are solid where a scheme is feasible and inside its method's valid span range, dashed outside it (and left out of the scale unless brought in), broken where it is not feasible. Carbon and cost are per m² of usable floor; self-weight per m² of plan.",
 });
 
 const range = signal<SpanRange>({ fromM: 40, toM: 400, stepM: 10 });
@@ -20,24 +20,40 @@ const part = (key: keyof SpanRange) => ({
     range.value = { ...range.value, [key]: x };
   },
 });
+const relative = signal(false);
+const includeExcluded = signal(false);
 staticCell(
   main,
   { id: "range", title: "Span range" },
-  controlGroup("Spans to evaluate", [
+  controlGroup("Spans to evaluate and how to draw them", [
     numberControl(part("fromM"), { id: "fromM", label: "From", unit: "m", min: 30, max: 500, step: 10 }),
     numberControl(part("toM"), { id: "toM", label: "To", unit: "m", min: 30, max: 500, step: 10 }),
     numberControl(part("stepM"), { id: "stepM", label: "Step", unit: "m", min: 1, max: 100, step: 1 }),
+    toggleControl({ value: relative, set: (x: boolean) => { relative.value = x; } }, { id: "relative", label: "Relative: each scheme against the best at that span" }),
+    toggleControl({ value: includeExcluded, set: (x: boolean) => { includeExcluded.value = x; } }, { id: "include-excluded", label: "Bring spans outside a method's valid range into the scale" }),
   ]),
 );
 
 const state = spanStudyRunner(store.study, range);
 const points = computed(() => (state.value.status === "failed" ? null : state.value.points));
 const labelOf = (id: string) => SCHEMES.find((m) => m.id === id)?.label ?? id;
+const studySpanM = computed(() => store.study.value.brief.spanM);
 
 reactiveCell(main, { id: "status" }, () => {
   const s = state.value;
   if (s.status === "failed") throw new Error(s.error);
-  if (s.status === "running") return "Computing the span study…";
+  if (s.status === "running") {
+    const bar = document.createElement("div");
+    const label = document.createElement("label");
+    label.htmlFor = "span-progress";
+    label.textContent = `Computing the span study… ${s.done} of ${s.total} spans`;
+    const progress = document.createElement("progress");
+    progress.id = "span-progress";
+    progress.max = Math.max(1, s.total);
+    progress.value = s.done;
+    bar.append(label, " ", progress);
+    return bar;
+  }
   const spans = new Set(s.points.map((p) => p.spanM)).size;
   return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (in ${s.workers} background worker${s.workers > 1 ? "s" : ""}).`;
 });
@@ -47,15 +63,15 @@ reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () =>
   if (!list) return null;
   const ranges = SCHEMES.filter((m) => list.some((p) => p.id === m.id)).map((m) => ({ id: m.id, label: m.label, min: m.validSpanM.min, max: m.validSpanM.max }));
   return chartFigure(
-    spanValidityChart(list, ranges, { title: "Valid span range of each method (shaded) and spans where the scheme is infeasible (×)", caption: chartCaption(store.study.value, "hover a cross for the reason") }),
+    spanValidityChart(list, ranges, { title: "Valid span range of each method (shaded) and spans where the scheme is infeasible (×)", caption: chartCaption(store.study.value, "hover a cross for the reason"), studySpanM: studySpanM.value }),
     "span-validity",
   );
 });
 
 const METRICS: { metric: SpanMetric; title: string; y: string; file: string }[] = [
-  { metric: "selfWeightKgPerM2", title: "Self-weight per m² of plan against span", y: "Self-weight (kg/m² of plan)", file: "span-self-weight" },
   { metric: "carbonKgCO2ePerM2Floor", title: "Embodied carbon per m² of usable floor against span", y: "Embodied carbon (kgCO2e/m² of usable floor)", file: "span-carbon" },
   { metric: "costPerM2Floor", title: "Cost per m² of usable floor against span", y: "Cost per m² of usable floor", file: "span-cost" },
+  { metric: "selfWeightKgPerM2", title: "Self-weight per m² of plan against span", y: "Self-weight (kg/m² of plan)", file: "span-self-weight" },
   { metric: "massToAir", title: "Structure mass ÷ mass of the enclosed air against span", y: "Structure mass ÷ enclosed air mass (–)", file: "span-mass-to-air" },
 ];
 
@@ -67,7 +83,8 @@ reactiveCell(main, { id: "span-charts", title: "Across the span range" }, () => 
   const currency = store.study.value.cost.onCosts.currency;
   for (const m of METRICS) {
     const y = m.metric === "costPerM2Floor" ? `Cost (${currency}/m² of usable floor)` : m.y;
-    grid.append(chartFigure(spanMetricChart(list, m.metric, y, { title: m.title, caption: chartCaption(store.study.value, "span varied, rise/span fixed") }), m.file));
+    const title = relative.value ? `${m.title}, against the best at each span` : m.title;
+    grid.append(chartFigure(spanMetricChart(list, m.metric, y, { title, caption: chartCaption(store.study.value, "span varied, rise/span fixed"), studySpanM: studySpanM.value, relative: relative.value, includeExcluded: includeExcluded.value }), relative.value ? `${m.file}-relative` : m.file));
   }
   return grid;
 });
@@ -75,15 +92,22 @@ reactiveCell(main, { id: "span-charts", title: "Across the span range" }, () => 
 reactiveCell(main, { id: "crossovers", title: "Where the best scheme changes" }, () => {
   const list: SpanPoint[] | null = points.value;
   if (!list) return null;
+  // Only feasible results inside their method's valid range take part (issue 14).
+  const ranked = list.map((p) => (p.feasible && p.inValidRange ? p : { ...p, selfWeightKgPerM2: Number.NaN, carbonKgCO2ePerM2Floor: Number.NaN, costPerM2Floor: Number.NaN }));
   const ul = document.createElement("ul");
   for (const [metric, quality] of [
-    ["selfWeightKgPerM2", "the lightest"],
     ["carbonKgCO2ePerM2Floor", "the lowest-carbon"],
     ["costPerM2Floor", "the cheapest"],
+    ["selfWeightKgPerM2", "the lightest"],
   ] as const) {
     const li = document.createElement("li");
-    li.textContent = describeCrossovers(valuesBySpan(list, metric), quality, labelOf);
+    li.textContent = describeCrossovers(valuesBySpan(ranked, metric), quality, labelOf);
     ul.append(li);
   }
-  return ul;
+  const note = document.createElement("p");
+  note.className = "intro";
+  note.textContent = "Only schemes that are feasible and inside their method's valid range take part; a change of the best that does not hold for two neighbouring spans is not reported as a crossover.";
+  const wrap = document.createElement("div");
+  wrap.append(ul, note);
+  return wrap;
 });

@@ -3,11 +3,11 @@ export { SCHEME_COLOURS, MATERIAL_COLOURS, MATERIAL_KIND_COLOURS, MODULE_PALETTE
 export { contrastRatio } from "./contrast";
 export { sectionChartOptions, type SectionChartInput } from "./section-chart";
 export { chartCaption } from "./caption";
-export { massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart } from "./comparison-charts";
+export { massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart, type ComparisonChartCommon, type DescribedChart } from "./comparison-charts";
 export { carbonChartOptions, carbonApartChartOptions, carbonByElementChartOptions, targetApplies, type CarbonChartInput } from "./carbon-chart";
 export { carbonByModuleData, carbonByMaterialData, carbonByElementData, carbonApartData, CARBON_METRICS, COUNTED_MODULES, APART_MODULES, type CarbonMetric, type SchemeCarbon, type CarbonBarDatum } from "./carbon-chart-data";
 export { costChartOptions, costByElementData, ON_COSTS_PART, type SchemeCost, type CostBarDatum, type CostChartInput } from "./cost-chart";
 export { planChartOptions, type PlanChartInput } from "./plan-chart";
-export { spanMetricChart, spanValidityChart, type SpanMetric } from "./span-charts";
+export { spanMetricChart, spanValidityChart, relativeToBest, needsLogScale, type SpanMetric, type SpanChartCommon } from "./span-charts";
 export * from "./risk-charts";
 export { model3dChartOptions, model3dMagnification, type Model3dChartInput, type ModelProjection } from "./model-3d-chart";

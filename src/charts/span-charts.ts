@@ -11,42 +11,96 @@ interface Common {
   width?: number;
 }
 
+export interface SpanChartCommon extends Common {
+  /** The study's own span, marked on the chart, m. */
+  studySpanM?: number;
+  /** Each scheme against the best feasible, in-range scheme at that span (1 = the best). */
+  relative?: boolean;
+  /** Bring spans outside a method's valid range into the scale (default: drawn dashed, off the scale). */
+  includeExcluded?: boolean;
+}
+
 function colours(points: readonly SpanPoint[]) {
   const seen = new Map<string, SchemeId>();
   for (const p of points) seen.set(p.label, p.id);
   return { domain: [...seen.keys()], range: [...seen.values()].map((id) => SCHEME_COLOURS[id]), legend: true };
 }
 
+const ranked = (p: SpanPoint) => p.feasible && p.inValidRange;
+
+/** Each point's value divided by the lowest feasible, in-range value at its span (NaN where there is none). */
+export function relativeToBest(points: readonly SpanPoint[], metric: SpanMetric): Map<SpanPoint, number> {
+  const best = new Map<number, number>();
+  for (const p of points) {
+    if (!ranked(p) || !Number.isFinite(p[metric])) continue;
+    best.set(p.spanM, Math.min(best.get(p.spanM) ?? Number.POSITIVE_INFINITY, p[metric]));
+  }
+  return new Map(points.map((p) => [p, p[metric] / (best.get(p.spanM) ?? Number.NaN)]));
+}
+
+/** Whether the values drawn on the scale differ by more than ten times (then a log scale reads better). */
+export function needsLogScale(values: readonly number[]): boolean {
+  const positive = values.filter((v) => Number.isFinite(v) && v > 0);
+  return positive.length > 1 && Math.max(...positive) / Math.min(...positive) > 10;
+}
+
 /**
- * Lines of one metric against span, one per scheme, drawn only where the scheme is feasible
- * (NaN breaks the line): solid inside the method's valid range, dashed outside it. Pure.
+ * Lines of one metric against span, one per scheme: solid where the scheme is feasible and inside
+ * its method's valid range, dashed (and off the scale unless `includeExcluded`) outside it, broken
+ * where infeasible. Optionally relative to the best at each span; a log scale when the values on
+ * the scale differ by more than ten times; the study's own span marked. Pure.
  */
-export function spanMetricChart(points: readonly SpanPoint[], metric: SpanMetric, yLabel: string, common: Common): Plot.PlotOptions {
-  const feasible = points.filter((p) => p.feasible && Number.isFinite(p[metric]));
-  // Values inside and outside the valid range as two series so each can have its own dash.
-  const inside = points.map((p) => ({ ...p, value: p.inValidRange && p.feasible ? p[metric] : Number.NaN }));
-  const outside = points.map((p) => ({ ...p, value: !p.inValidRange && p.feasible ? p[metric] : Number.NaN }));
+export function spanMetricChart(points: readonly SpanPoint[], metric: SpanMetric, yLabel: string, common: SpanChartCommon): Plot.PlotOptions & { ariaDescription: string } {
+  const relative = common.relative ? relativeToBest(points, metric) : null;
+  const valueOf = (p: SpanPoint) => (relative ? (relative.get(p) ?? Number.NaN) : p[metric]);
+  const inside = points.map((p) => ({ ...p, value: ranked(p) ? valueOf(p) : Number.NaN }));
+  const outside = points.map((p) => ({ ...p, value: p.feasible && !p.inValidRange ? valueOf(p) : Number.NaN }));
+  const scaled = [...inside, ...(common.includeExcluded ? outside : [])].map((p) => p.value).filter(Number.isFinite);
+  const log = !relative && needsLogScale(scaled);
+  const lo = scaled.length > 0 ? Math.min(...scaled) : 0;
+  const hi = scaled.length > 0 ? Math.max(...scaled) : 1;
+  const domain: [number, number] = log ? [lo / 1.2, hi * 1.2] : relative ? [1, Math.max(1.05, hi * 1.05)] : [0, hi * 1.05];
+  const label = `${relative ? `${yLabel.replace(/ \(.*\)$/, "")} ÷ the best at that span (–)` : yLabel}${log ? ", log scale" : ""}`;
+  const spanMark = common.studySpanM === undefined ? [] : [Plot.ruleX([common.studySpanM], { stroke: "#1d4e89", strokeDasharray: "2 3" }), Plot.text([common.studySpanM], { x: (d: number) => d, frameAnchor: "top", text: () => `this study, ${common.studySpanM} m`, dy: 4, dx: 4, textAnchor: "start", fill: "#1d4e89", fontSize: 10 })];
   return {
-    ...common,
+    title: common.title,
+    caption: common.caption,
+    ariaLabel: common.title,
+    ariaDescription: spanDescription(points, metric, common, log),
     width: common.width ?? 580,
     height: 320,
     marginLeft: 60,
     x: { label: "Clear span (m)", grid: true },
-    y: { label: yLabel, grid: true, zero: true },
+    y: { label, grid: true, type: log ? "log" : "linear", domain },
     color: colours(points),
     marks: [
-      Plot.line(outside, { x: "spanM", y: "value", stroke: "label", strokeDasharray: "4 3", strokeOpacity: 0.8 }),
-      Plot.line(inside, { x: "spanM", y: "value", stroke: "label", strokeWidth: 2 }),
-      Plot.dot(feasible, { x: "spanM", y: metric, fill: "label", r: 2, tip: { format: { x: true, y: true, fill: true } } }),
+      ...(relative ? [Plot.ruleY([1], { stroke: "#888" })] : []),
+      Plot.line(outside, { x: "spanM", y: "value", stroke: "label", strokeDasharray: "4 3", strokeOpacity: 0.6, clip: true }),
+      Plot.line(inside, { x: "spanM", y: "value", stroke: "label", strokeWidth: 2, clip: true }),
+      Plot.dot(inside.filter((p) => Number.isFinite(p.value)), { x: "spanM", y: "value", fill: "label", r: 2, clip: true, tip: { format: { x: true, y: true, fill: true } } }),
+      ...spanMark,
     ],
   };
+}
+
+/** The chart in words: the range, the basis, which scale, the study's span. */
+function spanDescription(points: readonly SpanPoint[], metric: SpanMetric, common: SpanChartCommon, log: boolean): string {
+  const spans = points.map((p) => p.spanM);
+  const schemes = [...new Set(points.map((p) => p.label))];
+  return [
+    `${common.title}, ${Math.min(...spans)} to ${Math.max(...spans)} m, for ${schemes.join(", ")}.`,
+    common.relative ? "Each scheme divided by the best feasible scheme in range at that span, so the best is 1." : log ? "Log scale: the values differ by more than ten times." : "",
+    common.includeExcluded ? "Spans outside a method's valid range are in the scale, drawn dashed." : "Spans outside a method's valid range are drawn dashed and left out of the scale.",
+    common.studySpanM === undefined ? "" : `The study's own span, ${common.studySpanM} m, is marked.`,
+    `Metric: ${metric}.`,
+  ].filter((s) => s !== "").join(" ");
 }
 
 /**
  * Where each scheme applies: its method's valid span range shaded, the spans at which it is
  * infeasible marked with a cross (reason in the tooltip). Pure.
  */
-export function spanValidityChart(points: readonly SpanPoint[], validRanges: readonly { label: string; id: SchemeId; min: number; max: number }[], common: Common): Plot.PlotOptions {
+export function spanValidityChart(points: readonly SpanPoint[], validRanges: readonly { label: string; id: SchemeId; min: number; max: number }[], common: Common & { studySpanM?: number }): Plot.PlotOptions & { ariaDescription: string } {
   const spans = points.map((p) => p.spanM);
   const lo = Math.min(...spans);
   const hi = Math.max(...spans);
@@ -55,6 +109,8 @@ export function spanValidityChart(points: readonly SpanPoint[], validRanges: rea
   const feasible = points.filter((p) => p.feasible);
   return {
     ...common,
+    ariaLabel: common.title,
+    ariaDescription: `${common.title}. ${validRanges.map((r) => `${r.label}: valid ${r.min}–${r.max} m, not feasible at ${infeasible.filter((p) => p.id === r.id).length} of ${points.filter((p) => p.id === r.id).length} spans`).join("; ")}.`,
     width: common.width ?? 1160,
     height: 60 + 32 * validRanges.length,
     marginLeft: 160,
@@ -65,6 +121,7 @@ export function spanValidityChart(points: readonly SpanPoint[], validRanges: rea
       Plot.barX(ranges, { x1: "x1", x2: "x2", y: "label", fill: "label", fillOpacity: 0.22 }),
       Plot.dot(feasible, { x: "spanM", y: "label", fill: "label", r: 2.5 }),
       Plot.dot(infeasible, { x: "spanM", y: "label", symbol: "times", stroke: "#a11d1d", r: 4, tip: true, title: (p: SpanPoint) => `${p.label} at ${p.spanM} m: ${p.reason}` }),
+      ...(common.studySpanM === undefined ? [] : [Plot.ruleX([common.studySpanM], { stroke: "#1d4e89", strokeDasharray: "2 3" })]),
     ],
   };
 }

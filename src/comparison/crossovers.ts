@@ -35,18 +35,41 @@ export function bestAt(values: Readonly<Record<string, number>>, status?: Readon
   return best;
 }
 
+/** Within this fraction of the lowest value the scheme that was best at the previous span stays best (a tie is no crossover). */
+export const CROSSOVER_TIE = 0.02;
+
 /**
- * The spans at which the best (lowest) scheme changes, scanning the spans in order. Between two
- * sampled spans the change is known only to lie in that interval; both ends are reported.
+ * The best scheme at each span, with hysteresis: the previous span's best stays best while it is
+ * within CROSSOVER_TIE of the lowest value, so two schemes within a whisker of each other do not
+ * flip-flop between neighbouring spans (issue 14).
+ */
+export function steadyBest(rows: readonly SpanValues[], tie = CROSSOVER_TIE): { spanM: number; best: string | null }[] {
+  const sorted = [...rows].sort((a, b) => a.spanM - b.spanM);
+  const out: { spanM: number; best: string | null }[] = [];
+  let previous: string | null = null;
+  for (const row of sorted) {
+    const lowest = bestAt(row.values, row.status);
+    const keptRanked: boolean = previous !== null && (row.status?.[previous] === undefined || row.status[previous] === "feasible");
+    const kept: number | undefined = keptRanked && previous !== null ? row.values[previous] : undefined;
+    const low = lowest === null ? Number.NaN : (row.values[lowest] ?? Number.NaN);
+    const best: string | null = kept !== undefined && Number.isFinite(kept) && kept <= low * (1 + tie) ? previous : lowest;
+    out.push({ spanM: row.spanM, best });
+    previous = best;
+  }
+  return out;
+}
+
+/**
+ * The spans at which the best (lowest) scheme changes, scanning the spans in order, with
+ * near-ties kept with the previous best (see steadyBest). Between two sampled spans the change is known
+ * only to lie in that interval; both ends are reported.
  */
 export function crossovers(rows: readonly SpanValues[]): Crossover[] {
-  const sorted = [...rows].sort((a, b) => a.spanM - b.spanM);
   const out: Crossover[] = [];
   let previous: { spanM: number; best: string | null } | undefined;
-  for (const row of sorted) {
-    const best = bestAt(row.values, row.status);
-    if (previous && best !== previous.best) out.push({ fromSpanM: previous.spanM, toSpanM: row.spanM, from: previous.best, to: best });
-    previous = { spanM: row.spanM, best };
+  for (const step of steadyBest(rows)) {
+    if (previous && step.best !== previous.best) out.push({ fromSpanM: previous.spanM, toSpanM: step.spanM, from: previous.best, to: step.best });
+    previous = step;
   }
   return out;
 }
@@ -59,7 +82,7 @@ export function describeCrossovers(rows: readonly SpanValues[], quality: string,
   if (!first || !last) return "No spans were evaluated.";
   const changes = crossovers(sorted);
   const name = (id: string | null) => (id === null ? "no scheme" : label(id));
-  const start = bestAt(first.values, first.status);
+  const start = steadyBest(sorted)[0]?.best ?? null;
   if (changes.length === 0) return `${name(start)} is ${quality} across the whole range (${first.spanM}–${last.spanM} m).`;
   const parts = [`${name(start)} is ${quality} from ${first.spanM} m`];
   for (const c of changes) parts.push(`${name(c.to)} from ${c.toSpanM} m (the change lies between ${c.fromSpanM} and ${c.toSpanM} m)`);

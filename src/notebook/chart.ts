@@ -36,12 +36,43 @@ export async function svgToPng(svg: SVGSVGElement, scale = 2): Promise<Blob> {
   }
 }
 
+/** Gives the chart's own SVG (the last one in the figure; the first are legend swatches) a <title> and a <desc>. */
+function nameChart(rendered: Element, name: string, description: string): void {
+  const svgs = rendered instanceof SVGSVGElement ? [rendered] : [...rendered.querySelectorAll(":scope > svg")];
+  const svg = svgs[svgs.length - 1];
+  if (!svg) return;
+  const ns = "http://www.w3.org/2000/svg";
+  const title = document.createElementNS(ns, "title");
+  title.textContent = name;
+  const desc = document.createElementNS(ns, "desc");
+  desc.textContent = description;
+  svg.prepend(title, desc);
+  svg.setAttribute("role", "img");
+  svg.setAttribute("aria-label", name);
+}
+
+function saveButton(kind: "svg" | "png", name: string, onClick: () => void): HTMLButtonElement {
+  const button = document.createElement("button");
+  button.type = "button";
+  button.textContent = `Save ${kind.toUpperCase()}`;
+  button.className = `save-${kind}`;
+  // The button says which chart it saves (issue 14).
+  button.setAttribute("aria-label", `Save the chart “${name}” as ${kind.toUpperCase()}`);
+  button.title = `Save “${name}” as ${kind.toUpperCase()}`;
+  button.addEventListener("click", onClick);
+  return button;
+}
+
 /**
- * Renders Plot options (with title and caption) as a figure with "SVG" and "PNG" save buttons.
+ * Renders Plot options (with title and caption) as a figure with "SVG" and "PNG" save buttons
+ * that name the chart; the chart carries an accessible name and description (<title>, <desc>)
+ * from `ariaLabel` / `ariaDescription` (or the title and caption).
  * @param filename base name of the saved files, without extension
  */
 export function chartFigure(options: Plot.PlotOptions, filename: string): HTMLElement {
   const rendered = Plot.plot(options);
+  const name = options.ariaLabel ?? (typeof options.title === "string" ? options.title : filename);
+  nameChart(rendered, name, options.ariaDescription ?? (typeof options.caption === "string" ? options.caption : name));
   const wrap = document.createElement("div");
   wrap.className = "figure";
   wrap.append(rendered);
@@ -50,17 +81,10 @@ export function chartFigure(options: Plot.PlotOptions, filename: string): HTMLEl
   if (rendered.querySelector("svg") || rendered instanceof SVGSVGElement) {
     const tools = document.createElement("div");
     tools.className = "chart-tools";
-    const saveSvg = document.createElement("button");
-    saveSvg.type = "button";
-    saveSvg.textContent = "Save SVG";
-    saveSvg.className = "save-svg";
-    saveSvg.addEventListener("click", () => downloadText(`${filename}.svg`, svgText(figureSvg(rendered)), "image/svg+xml"));
-    const savePng = document.createElement("button");
-    savePng.type = "button";
-    savePng.textContent = "Save PNG";
-    savePng.className = "save-png";
-    savePng.addEventListener("click", async () => downloadBlob(`${filename}.png`, await svgToPng(figureSvg(rendered))));
-    tools.append(saveSvg, savePng);
+    tools.append(
+      saveButton("svg", name, () => downloadText(`${filename}.svg`, svgText(figureSvg(rendered)), "image/svg+xml")),
+      saveButton("png", name, () => void svgToPng(figureSvg(rendered)).then((png) => downloadBlob(`${filename}.png`, png))),
+    );
     wrap.append(tools);
   }
   return wrap;

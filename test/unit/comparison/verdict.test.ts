@@ -39,3 +39,12 @@ describe("verdict", () => {
     expect(parts.map((p) => p.text).join(" ")).toMatch(/EUR\/m²/);
   });
 });
+
+describe("crossovers without flip-flop (issue 14)", () => {
+  it("two schemes within 2 % of each other do not swap the best at every span", async () => {
+    const { crossovers, steadyBest } = await import("../../../src/comparison/crossovers");
+    const rows = [40, 50, 60, 70, 80].map((spanM, i) => ({ spanM, values: { a: 100 + (i % 2 === 0 ? 0 : 1.5), b: 100.5, c: spanM >= 80 ? 90 : 200 } }));
+    expect(steadyBest(rows).map((s) => s.best)).toEqual(["a", "a", "a", "a", "c"]);
+    expect(crossovers(rows)).toEqual([{ fromSpanM: 70, toSpanM: 80, from: "a", to: "c" }]);
+  });
+});
