@@ -10,9 +10,10 @@ import {
   chartFigure,
   computed,
   signal,
+  effect,
   fmt,
   type ReadonlySignal,
-  studySignals,
+  workerStudySignals,
   controlGroup,
   toggleControl,
   schemeSummary,
@@ -113,7 +114,8 @@ reactiveCell(inputs, { id: "section", title: "Roof section" }, () =>
 );
 
 // ——— the schemes ———
-const { schemes, results } = studySignals(store);
+// Designs run in workers (issue 14): the page keeps drawing while they run.
+const { schemes, results, busy, failure } = workerStudySignals(store);
 // The tables, for naming rows they lack; untouched tables keep their identity, so the table re-renders only when they change.
 const factorRows = computed(() => store.study.value.carbon.factors);
 const rateRows = computed(() => store.study.value.cost.rates);
@@ -131,6 +133,7 @@ const currency = computed(() => store.study.value.cost.onCosts.currency);
 
 reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answer" }, () => {
   const list = results.value;
+  if (list === null) return "Designing the schemes…";
   if (list.length === 0) return "Switch on at least one scheme to compare.";
   const wrap = document.createElement("div");
   for (const part of answerParts(list, currency.value)) {
@@ -147,6 +150,7 @@ reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answe
 
 reactiveCell(outputs, { id: "comparison", title: "Side by side" }, () => {
   const list = results.value;
+  if (list === null) return "Designing the schemes…";
   if (list.length === 0) return "Switch on at least one scheme to compare.";
   const wrap = document.createElement("div");
   wrap.className = "table-scroll";
@@ -156,19 +160,25 @@ reactiveCell(outputs, { id: "comparison", title: "Side by side" }, () => {
   return wrap;
 });
 
-reactiveCell(outputs, { id: "comparison-charts", title: "Option charts" }, () => {
+// Schemes outside their method's valid range are drawn apart and off the scale unless brought in.
+const includeExcluded = signal(false);
+const chartCell = reactiveCell(outputs, { id: "comparison-charts", title: "Option charts — every figure per m² of usable floor" }, () => {
   const list = results.value;
-  if (list.length === 0) return null;
+  if (list === null || list.length === 0) return null;
   const grid = document.createElement("div");
   grid.className = "grid charts";
+  const common = { caption: caption.value, includeExcluded: includeExcluded.value };
   grid.append(
-    chartFigure(massByMaterialChart(list, { title: "Self-weight per m² of plan, by material", caption: caption.value }), "mass-by-material"),
-    chartFigure(carbonByModuleChart(list, { title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)", caption: caption.value }), "carbon-by-module"),
-    chartFigure(costPerM2Chart(list, { title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)", caption: caption.value }), "cost-per-m2"),
-    chartFigure(carbonVsCostChart(list, { title: "Carbon against cost per m² of usable floor", caption: caption.value }), "carbon-vs-cost"),
+    chartFigure(massByMaterialChart(list, { ...common, title: "Roof mass per m² of usable floor, by material" }), "mass-by-material"),
+    chartFigure(carbonByModuleChart(list, { ...common, title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)" }), "carbon-by-module"),
+    chartFigure(costPerM2Chart(list, { ...common, title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)" }), "cost-per-m2"),
+    chartFigure(carbonVsCostChart(list, { ...common, title: "Carbon against cost per m² of usable floor" }), "carbon-vs-cost"),
   );
   return grid;
 });
+chartCell.element.querySelector("h2")?.after(
+  toggleControl({ value: includeExcluded, set: (x: boolean) => { includeExcluded.value = x; } }, { id: "include-excluded", label: "Bring schemes outside their method's valid range into the scales (faded, named so)" }),
+);
 
 /** A <details> block whose open state is a signal, so the cells inside compute only while it is open. */
 function lazyDetails(parent: HTMLElement, id: string, summaryText: string): { body: HTMLElement; open: ReadonlySignal<boolean> } {
@@ -197,16 +207,23 @@ for (const s of schemes) {
   heading.style.borderLeft = `6px solid ${SCHEME_COLOURS[id]}`;
   heading.style.paddingLeft = "0.5rem";
   panel.append(heading);
-  reactiveCell(panel, { id: `${id}-summary` }, () => (s.enabled.value ? schemeStatusLine(s.result.value) : "Switched off."));
+  reactiveCell(panel, { id: `${id}-summary` }, () => {
+    if (!s.enabled.value) return "Switched off.";
+    const result = s.result.value;
+    return result === null ? "Designing…" : schemeStatusLine(result);
+  });
   const detail = lazyDetails(panel, `${id}-details`, "Engineering detail: figures, cautions, drawings, members, checks and take-off");
   const about = document.createElement("p");
   about.className = "intro";
   about.textContent = `${s.model.description} Method valid for spans of ${s.model.validSpanM.min}–${s.model.validSpanM.max} m.`;
   detail.body.append(about);
-  reactiveCell(detail.body, { id: `${id}-figures` }, () => (s.enabled.value && detail.open.value ? schemeSummary(s.result.value) : null));
+  reactiveCell(detail.body, { id: `${id}-figures` }, () => {
+    const result = s.result.value;
+    return s.enabled.value && detail.open.value && result !== null ? schemeSummary(result) : null;
+  });
   reactiveCell(detail.body, { id: `${id}-drawing` }, () => {
-    if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;
+    if (!s.enabled.value || !detail.open.value || design === null) return null;
     const roles = [...new Set([...design.drawing.section, ...(design.drawing.plan ?? [])].map((l) => l.role))].sort();
     const wrap = document.createElement("div");
     wrap.className = "grid charts";
@@ -235,8 +252,8 @@ for (const s of schemes) {
     return wrap;
   });
   reactiveCell(detail.body, { id: `${id}-tables` }, () => {
-    if (!s.enabled.value || !detail.open.value) return null;
     const design = s.design.value;
+    if (!s.enabled.value || !detail.open.value || design === null) return null;
     const wrap = document.createElement("div");
     wrap.className = "table-scroll";
     wrap.append(memberTable(design), checkTable(design), takeoffTable(design));
@@ -248,3 +265,11 @@ for (const s of schemes) {
 
 // The study's own lines (title, prepared by, date, notes), at the foot of the brief.
 staticCell(inputs, { id: "study", title: "Study" }, studyDetailsEditor(store));
+
+// While newer designs are on their way the results say so (aria-busy), and a worker failure is shown.
+effect(() => {
+  for (const id of ["verdict", "comparison", "comparison-charts"]) document.getElementById(`cell-${id}`)?.setAttribute("aria-busy", String(busy.value));
+});
+effect(() => {
+  if (failure.value) store.notice.value = `A design could not be made: ${failure.value}`;
+});

@@ -1,25 +1,17 @@
-// Module worker: runs the span study off the main thread so the page stays responsive.
+// Module worker: runs span-study points off the main thread (its calls through the one typed worker interface).
+import { exposeWorker } from "../kernel/worker-call";
 import { runSpanStudy, type SpanPoint } from "./span-study";
 import { defaultCatalogue } from "../catalogue/default-catalogue";
 import type { Study } from "../study/study";
-import { messageOf } from "../kernel/errors";
 
-export interface SpanRequest {
-  id: number;
-  study: Study;
-  /** The spans this worker evaluates. */
-  spans: number[];
-}
+const catalogue = defaultCatalogue();
 
-export type SpanReply = { id: number; ok: true; points: SpanPoint[]; ms: number } | { id: number; ok: false; error: string };
-
-self.onmessage = (event: MessageEvent<SpanRequest>) => {
-  const { id, study, spans } = event.data;
-  const start = performance.now();
-  try {
-    const points = runSpanStudy(study, defaultCatalogue(), spans);
-    self.postMessage({ id, ok: true, points, ms: performance.now() - start } satisfies SpanReply);
-  } catch (error) {
-    self.postMessage({ id, ok: false, error: messageOf(error) } satisfies SpanReply);
-  }
+export const spanWorkerApi = {
+  /** The study's enabled schemes at each of these spans. */
+  run(study: Study, spans: number[]): SpanPoint[] {
+    return runSpanStudy(study, catalogue, spans);
+  },
 };
+export type SpanWorkerApi = typeof spanWorkerApi;
+
+exposeWorker(spanWorkerApi);

@@ -15,6 +15,7 @@ export { answerParts, inSentence, metricText, type AnswerPart } from "./answer";
 export { sortableTable, type SortColumn, type SortableOptions } from "./sortable-table";
 export { resultsTable, resultColumns } from "./results-table";
 export { studySignals, type SchemeSignals, type StudySignals } from "./scheme-signals";
+export { workerStudySignals, type AsyncSchemeSignals, type AsyncStudySignals } from "./worker-scheme-signals";
 export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";
 export { tableEditor, type EditorColumn } from "./table-editor";
@@ -24,3 +25,4 @@ export { studyDetailsEditor, studyDetailItems, describeChangedAt } from "./study
 export { factorColumns, provenanceCard, groupEditTools, benchmarkEditor, trackCarbonEdits, describeCarbonEdit, type LastEdit } from "./carbon-editors";
 export { mountEditableTable, unmountEditableTable, type TableColumn, type EditableTableProps, type EditOutcome } from "./editable-table";
 export { studyFilePicker } from "./file-picker";
+export { optionCards, recommendationBlock, glossary } from "./client-summary";

@@ -1,10 +1,14 @@
 import { signal, effect, type ReadonlySignal } from "@preact/signals-core";
 import type { Study } from "../study/study";
 import { spansOf, type SpanPoint, type SpanRange } from "../comparison/span-study";
-import type { SpanReply, SpanRequest } from "../comparison/span-worker";
+import type { SpanWorkerApi } from "../comparison/span-worker";
+import { workerApi } from "../kernel/worker-call";
 import { messageOf } from "../kernel/errors";
 
-export type SpanStudyState = { status: "running"; points: SpanPoint[] | null } | { status: "done"; points: SpanPoint[]; ms: number; workers: number } | { status: "failed"; error: string };
+export type SpanStudyState =
+  | { status: "running"; points: SpanPoint[] | null; done: number; total: number }
+  | { status: "done"; points: SpanPoint[]; ms: number; workers: number }
+  | { status: "failed"; error: string };
 
 /** How many workers: one per core the browser reports, between 1 and 4 (the page itself waits while they run). */
 function workerCount(): number {
@@ -12,37 +16,19 @@ function workerCount(): number {
   return Math.max(1, Math.min(4, cores));
 }
 
+/** Spans per call: small enough for a progress bar that moves, large enough that messages cost little. */
+const SPANS_PER_CALL = 2;
+
 /**
- * Runs the span study in Web Workers whenever the study or the range changes, the spans dealt
- * out in turn so that each worker gets short and long spans alike. Only the newest request's
- * answers are kept; while one runs the previous points stay on screen.
+ * Runs the span study in Web Workers (through the one typed worker interface) whenever the study
+ * or the range changes. The spans are dealt out a few at a time to whichever worker is free, so the
+ * progress bar moves and a newer request stops the older one after the calls already running;
+ * while one runs the previous points stay on screen.
  */
 export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySignal<SpanRange>): ReadonlySignal<SpanStudyState> {
-  const state = signal<SpanStudyState>({ status: "running", points: null });
-  const workers = Array.from({ length: workerCount() }, () => new Worker(new URL("../comparison/span-worker.ts", import.meta.url), { type: "module" }));
+  const state = signal<SpanStudyState>({ status: "running", points: null, done: 0, total: 0 });
+  const pool = Array.from({ length: workerCount() }, () => workerApi<SpanWorkerApi>(new Worker(new URL("../comparison/span-worker.ts", import.meta.url), { type: "module" })));
   let latest = 0;
-  let pending: { parts: SpanPoint[][]; left: number; started: number } | null = null;
-  for (const worker of workers) {
-    worker.onmessage = (event: MessageEvent<SpanReply>) => {
-      const reply = event.data;
-      if (reply.id !== latest || !pending) return;
-      if (!reply.ok) {
-        state.value = { status: "failed", error: reply.error };
-        pending = null;
-        return;
-      }
-      pending.parts.push(reply.points);
-      pending.left -= 1;
-      if (pending.left === 0) {
-        const points = pending.parts.flat().sort((a, b) => a.spanM - b.spanM);
-        state.value = { status: "done", points, ms: performance.now() - pending.started, workers: workers.length };
-        pending = null;
-      }
-    };
-    worker.onerror = (event) => {
-      state.value = { status: "failed", error: event.message || "the span study worker failed" };
-    };
-  }
   effect(() => {
     const id = ++latest;
     let spans: number[];
@@ -52,12 +38,30 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
       state.value = { status: "failed", error: messageOf(error) };
       return;
     }
-    const chunks = workers.map((_, w) => spans.filter((_, i) => i % workers.length === w)).filter((c) => c.length > 0);
-    const previous = state.peek();
-    state.value = { status: "running", points: previous.status === "failed" ? null : previous.points };
-    pending = { parts: [], left: chunks.length, started: performance.now() };
     const current = study.value;
-    chunks.forEach((chunk, w) => workers[w]?.postMessage({ id, study: current, spans: chunk } satisfies SpanRequest));
+    const queue = Array.from({ length: Math.ceil(spans.length / SPANS_PER_CALL) }, (_, i) => spans.slice(i * SPANS_PER_CALL, (i + 1) * SPANS_PER_CALL));
+    const previous = state.peek();
+    const shown = previous.status === "failed" ? null : previous.points;
+    const parts: SpanPoint[][] = [];
+    let done = 0;
+    state.value = { status: "running", points: shown, done, total: spans.length };
+    const started = performance.now();
+    const work = async (worker: (typeof pool)[number]) => {
+      for (let chunk = queue.shift(); chunk !== undefined && id === latest; chunk = queue.shift()) {
+        parts.push(await worker.api.run(current, chunk));
+        done += chunk.length;
+        if (id === latest) state.value = { status: "running", points: shown, done, total: spans.length };
+      }
+    };
+    Promise.all(pool.map(work)).then(
+      () => {
+        if (id !== latest) return;
+        state.value = { status: "done", points: parts.flat().sort((a, b) => a.spanM - b.spanM), ms: performance.now() - started, workers: pool.length };
+      },
+      (error: unknown) => {
+        if (id === latest) state.value = { status: "failed", error: messageOf(error) };
+      },
+    );
   });
   return state;
 }

@@ -1,0 +1,46 @@
+// One typed call interface for the pages' workers (issue 11 item 5, issue 14): a worker exposes an
+// object of functions with `exposeWorker`; the page calls them as async functions through
+// `workerApi` (comlink carries the calls). `latestOnly` keeps a page from queueing stale work: while
+// a call runs, newer arguments replace any that wait, and an answer for old arguments is dropped.
+import { wrap, expose, type Remote } from "comlink";
+
+/** In a worker module: answers the page's calls with these functions. */
+export function exposeWorker<T extends object>(api: T): void {
+  expose(api);
+}
+
+/** On the page: the worker's functions as typed async calls, and a way to stop the worker. */
+export function workerApi<T extends object>(worker: Worker): { api: Remote<T>; terminate(): void } {
+  return { api: wrap<T>(worker), terminate: () => worker.terminate() };
+}
+
+/**
+ * Wraps an async call so that at most one runs and at most one waits: `request(args)` while a call
+ * runs replaces the waiting arguments; `onResult` gets only the answer to the newest arguments sent.
+ */
+export function latestOnly<A, R>(call: (args: A) => Promise<R>, onResult: (result: R, args: A) => void, onError: (error: unknown, args: A) => void): (args: A) => void {
+  let running = false;
+  let waiting: { args: A } | null = null;
+  let newest = 0;
+  const run = (args: A) => {
+    running = true;
+    const id = ++newest;
+    call(args).then(
+      (result) => {
+        if (id === newest && waiting === null) onResult(result, args);
+      },
+      (error: unknown) => {
+        if (id === newest && waiting === null) onError(error, args);
+      },
+    ).finally(() => {
+      running = false;
+      const next = waiting;
+      waiting = null;
+      if (next) run(next.args);
+    });
+  };
+  return (args: A) => {
+    if (running) waiting = { args };
+    else run(args);
+  };
+}
