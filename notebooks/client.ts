@@ -1,9 +1,11 @@
-// Client view: read-only headline table, option charts, cautions and assumptions of the working
-// study (the one every other page opens); exports one HTML file.
+// Client view: one page a non-engineer reads (issue 14) — the answer, the project lead's
+// recommendation, the options side by side with a small drawing each and their cautions in
+// plain words, a one-line glossary and the caution; the engineering figures follow in an
+// appendix. Read-only view of the working study (the one every other page opens); exports one HTML file.
 import "../src/notebook/style.css";
 import css from "../src/notebook/style.css?inline";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, studySignals, tableElement, keyValues, downloadText, clientExportHtml, studyDetailItems, CAUTION, fmt } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, studySignals, tableElement, keyValues, downloadText, clientExportHtml, studyDetailItems, answerParts, optionCards, recommendationBlock, glossary, CAUTION, fmt } from "../src/notebook";
 import { chartCaption, massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart } from "../src/charts";
 import { comparisonTable, comparisonRows } from "../src/comparison";
 import { assumptionsRecord, readStoredStudy, STORAGE_KEY, type Study } from "../src/study";
@@ -13,7 +15,7 @@ const { store, main } = startPage({
   id: "client",
   demoStudy,
   readOnly: true,
-  intro: "The roof options of the working study — the one the other pages show — read-only: the headline comparison, the option charts, the cautions and the assumptions behind them. Opening a study file or a link shows that study here instead, without changing the working study.",
+  intro: "The roof options of the working study — the one the other pages show — for the client: the answer, the project lead's recommendation and the options side by side on the first page; the engineering figures in the appendix. Opening a study file or a link shows that study here instead, without changing the working study.",
 });
 const { results } = studySignals(store);
 
@@ -41,7 +43,7 @@ function headlineTable(list: readonly SchemeResult[], study: Study) {
 function figures(list: readonly SchemeResult[], study: Study): HTMLElement[] {
   const caption = chartCaption(study);
   return [
-    chartFigure(massByMaterialChart(list, { title: "Self-weight per m² of plan, by material", caption }), "client-mass"),
+    chartFigure(massByMaterialChart(list, { title: "Roof mass per m² of usable floor, by material", caption }), "client-mass"),
     chartFigure(carbonByModuleChart(list, { title: "Embodied carbon per m² of usable floor, by life-cycle module", caption }), "client-carbon"),
     chartFigure(costPerM2Chart(list, { title: "Cost per m² of usable floor", caption }), "client-cost"),
     chartFigure(carbonVsCostChart(list, { title: "Carbon against cost per m² of usable floor", caption }), "client-carbon-vs-cost"),
@@ -65,12 +67,37 @@ function assumptionSections(study: Study): { heading: string; items: [string, st
     },
     {
       heading: `Inputs changed from spanbook's defaults (${changed.length})`,
-      items: changed.slice(0, 60).map((a) => [a.label, `${a.value}${a.unit ? ` ${a.unit}` : ""} (default ${a.default || "none"})`]),
+      items: changed.slice(0, 60).map((a) => [a.label, `${a.value}${a.unit ? ` ${fmt.unit(a.unit)}` : ""} (default ${a.default || "none"})`]),
     },
   ];
 }
 
-reactiveCell(main, { id: "meta", title: "Study" }, () => {
+/** The answer sentences as paragraphs. */
+function answer(list: readonly SchemeResult[], study: Study): HTMLElement {
+  const wrap = document.createElement("div");
+  wrap.className = "answer-text";
+  for (const part of answerParts(list, study.cost.onCosts.currency)) {
+    const p = document.createElement("p");
+    p.textContent = part.text;
+    wrap.append(p);
+  }
+  return wrap;
+}
+
+/** The one-page summary: answer, recommendation, options, glossary, caution. */
+function summary(list: readonly SchemeResult[], study: Study): HTMLElement {
+  const wrap = document.createElement("div");
+  const gloss = document.createElement("p");
+  gloss.className = "glossary";
+  gloss.textContent = glossary(study);
+  const caution = document.createElement("p");
+  caution.className = "caution summary-caution";
+  caution.textContent = CAUTION;
+  wrap.append(answer(list, study), recommendationBlock(study), optionCards(list, study), gloss, caution);
+  return wrap;
+}
+
+reactiveCell(main, { id: "meta", title: "Study", className: "summary-part" }, () => {
   const s = store.study.value;
   const title = document.createElement("p");
   title.className = "study-heading";
@@ -84,7 +111,22 @@ reactiveCell(main, { id: "meta", title: "Study" }, () => {
   return wrap;
 });
 
-reactiveCell(main, { id: "headline", title: "Headline comparison" }, () => {
+reactiveCell(main, { id: "summary", title: "At a glance", className: "summary-part" }, () => {
+  const list = results.value;
+  if (list.length === 0) return "No scheme is switched on in this study.";
+  return summary(list, store.study.value);
+});
+
+const appendix = document.createElement("section");
+appendix.className = "appendix";
+appendix.id = "appendix";
+const appendixTitle = document.createElement("h2");
+appendixTitle.className = "appendix-title";
+appendixTitle.textContent = "Appendix: the engineering figures";
+appendix.append(appendixTitle);
+main.append(appendix);
+
+reactiveCell(appendix, { id: "headline", title: "Headline comparison" }, () => {
   const list = results.value;
   if (list.length === 0) return "No scheme is switched on in this study.";
   const t = headlineTable(list, store.study.value);
@@ -103,7 +145,7 @@ function headlineShape(table: HTMLTableElement, fields: number, schemes: number)
   table.style.setProperty("--schemes", String(schemes));
 }
 
-reactiveCell(main, { id: "charts", title: "Option charts" }, () => {
+reactiveCell(appendix, { id: "charts", title: "Option charts" }, () => {
   const list = results.value;
   if (list.length === 0) return null;
   const grid = document.createElement("div");
@@ -112,7 +154,7 @@ reactiveCell(main, { id: "charts", title: "Option charts" }, () => {
   return grid;
 });
 
-reactiveCell(main, { id: "assumptions", title: "Assumptions" }, () => {
+reactiveCell(appendix, { id: "assumptions", title: "Assumptions" }, () => {
   const wrap = document.createElement("div");
   for (const section of assumptionSections(store.study.value)) {
     const h = document.createElement("h3");
@@ -131,6 +173,7 @@ function exportForClient(): void {
     details: studyDetailItems(study),
     caution: CAUTION,
     css,
+    summaryHtml: list.length === 0 ? "" : summary(list, study).outerHTML,
     table: headlineTable(list, study),
     chartsHtml: list.length === 0 ? [] : figures(list, study).map((f) => f.querySelector("figure, svg")?.outerHTML ?? ""),
     assumptions: assumptionSections(study),
@@ -147,7 +190,7 @@ exportButton.textContent = "Export for the client (one HTML file)";
 exportButton.addEventListener("click", exportForClient);
 const printButton = document.createElement("button");
 printButton.type = "button";
-printButton.textContent = "Print (A4)";
+printButton.textContent = "Print (A4: the summary on page 1, the appendix after)";
 printButton.addEventListener("click", () => window.print());
 const tools = document.createElement("div");
 tools.className = "study-tools";

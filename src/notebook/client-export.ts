@@ -9,6 +9,8 @@ export interface ClientExportInput {
   /** The study's own lines (title, prepared by, date, last changed, notes), shown under the title. */
   details?: readonly (readonly [string, string])[];
   caution: string;
+  /** The one-page summary (answer, recommendation, options side by side, glossary, caution) as HTML, already serialised. */
+  summaryHtml?: string;
   /** Stylesheet text, inlined. */
   css: string;
   table: { caption: string; header: readonly string[]; rows: readonly (readonly string[])[] };
@@ -38,10 +40,13 @@ export function clientExportHtml(input: ClientExportInput): string {
 <h1>${escapeHtml(input.title)}</h1>
 <p class="intro">${escapeHtml(input.subtitle)}</p>
 <p class="caution" role="note">${escapeHtml(input.caution)}</p>
-${input.details ? `<section class="cell"><h2>Study</h2>${keyValuesHtml(input.details)}</section>` : ""}
+${input.details ? `<section class="cell summary-part"><h2>Study</h2>${keyValuesHtml(input.details)}</section>` : ""}
+${input.summaryHtml ? `<section class="cell summary-part"><h2>At a glance</h2>${input.summaryHtml}</section>` : ""}
+<section class="appendix"><h2 class="appendix-title">Appendix: the engineering figures</h2>
 <section class="cell"><h2>Headline comparison</h2><div class="table-scroll">${headlineTableHtml(input.table)}</div></section>
 <section class="cell"><h2>Option charts</h2><div class="grid charts">${input.chartsHtml.join("\n")}</div></section>
 <section class="cell"><h2>Assumptions</h2>${assumptions}</section>
+</section>
 <p class="caution">${escapeHtml(input.caution)}</p>
 <footer class="intro">${escapeHtml(input.generated)}</footer>
 </main>

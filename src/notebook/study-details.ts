@@ -27,6 +27,7 @@ const FIELDS = [
   { key: "author", label: "Prepared by", size: 32, hint: "Name or practice; may be left empty." },
   { key: "date", label: "Date", size: 12, hint: "The study's date, YYYY-MM-DD." },
   { key: "notes", label: "Notes", size: 72, hint: "Shown to the client (up to 5000 characters)." },
+  { key: "recommendation", label: "Recommendation to the client", size: 72, hint: "The project lead's recommendation, shown on the client page beside the computed facts (up to 5000 characters)." },
 ] as const;
 
 /**

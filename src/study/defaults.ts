@@ -12,7 +12,7 @@ export function defaultStudy(): Study {
   const schemes = Object.fromEntries(SCHEMES.map((m) => [m.id, { enabled: true, options: { ...m.defaults } }])) as Record<SchemeId, SchemeSetting>;
   const study: Omit<Study, "risk"> = {
     schemaVersion: STUDY_SCHEMA_VERSION,
-    meta: { title: "Untitled study", author: "", date: "2026-01-01", notes: "" },
+    meta: { title: "Untitled study", author: "", date: "2026-01-01", notes: "", recommendation: "" },
     brief: structuredClone(DEFAULT_BRIEF),
     schemes,
     carbon: { factors: defaultFactorRows(), settings: structuredClone(DEFAULT_CARBON_SETTINGS) },

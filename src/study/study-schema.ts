@@ -16,17 +16,19 @@ const isoTimestamp = v.pipe(
   v.isoTimestamp((issue) => `${JSON.stringify(issue.input)} (expected a date and time such as 2026-12-02T20:15:00Z)`),
 );
 
-/** The study's title, prepared-by, date, notes and last-changed time. */
+/** The study's title, prepared-by, date, notes, the lead's recommendation and last-changed time. */
 export const StudyMetaSchema = v.object({
   title: v.pipe(textUpTo(200), v.minLength(1, "an empty title (expected 1 to 200 characters)")),
   author: textUpTo(200),
   date: isoDate,
   notes: v.optional(textUpTo(5000), ""),
+  /** The project lead's recommendation shown to the client (issue 14); files saved before it open with "". */
+  recommendation: v.optional(textUpTo(5000), ""),
   changedAt: v.optional(isoTimestamp),
 });
 
 /** The message for a value of one meta field that is not allowed (null when it is), from the study schema. */
-export function metaFieldProblem(key: "title" | "author" | "date" | "notes", raw: string): string | null {
+export function metaFieldProblem(key: "title" | "author" | "date" | "notes" | "recommendation", raw: string): string | null {
   const result = v.safeParse(StudyMetaSchema.entries[key], raw);
   return result.success ? null : (result.issues[0]?.message ?? "not allowed");
 }

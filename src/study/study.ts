@@ -12,6 +12,8 @@ export interface StudyMeta {
   /** ISO date, YYYY-MM-DD. */
   date: string;
   notes: string;
+  /** The project lead's recommendation for the client view (issue 14); "" when none is written. Optional in files saved before it. */
+  recommendation?: string;
   /**
    * When the study was last changed: ISO 8601 date and time in UTC, stamped by the pages on every
    * edit. Absent in files saved before spanbook recorded it.

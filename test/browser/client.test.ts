@@ -168,9 +168,15 @@ describe("the client file fits A4 (issue 10, item 12)", () => {
     const client = await openClient(context);
     const printed = await printA4(client);
     await expectWholeTableOnPaper(client, "#cell-headline table", printed.text);
-    expect(printed.firstPage).toContain("Headline comparison");
-    expect(printed.firstPage).toContain("Warnings");
-    expect(printed.pages).toBeLessThanOrEqual(4);
+    // Issue 14: the first page is the summary a client reads — the answer, the recommendation, every
+    // option side by side, the glossary — whole; the engineering table follows in the appendix.
+    expect(printed.firstPage).toContain("At a glance");
+    expect(printed.firstPage).toContain("Recommendation of the project lead");
+    for (const model of SCHEMES) expect(printed.firstPage).toContain(model.label);
+    expect(printed.firstPage).toContain("Usable floor: the floor area");
+    expect(printed.firstPage).not.toContain("Headline comparison");
+    expect(printed.text).toContain("Warnings");
+    expect(printed.pages).toBeLessThanOrEqual(5);
     await context.close();
   });
 
@@ -182,8 +188,10 @@ describe("the client file fits A4 (issue 10, item 12)", () => {
     await view.goto(`file://${path}`);
     const printed = await printA4(view);
     await expectWholeTableOnPaper(view, "table", printed.text);
-    expect(printed.firstPage).toContain("Warnings");
-    expect(printed.pages).toBeLessThanOrEqual(4);
+    expect(printed.firstPage).toContain("At a glance");
+    expect(printed.firstPage).toContain("Usable floor: the floor area");
+    expect(printed.text).toContain("Warnings");
+    expect(printed.pages).toBeLessThanOrEqual(5);
     await context.close();
   });
 });
