@@ -8,6 +8,7 @@ export { downloadText, downloadBlob } from "./download";
 export { fmt, tableElement } from "./format";
 export { signal, computed, effect, batch, type Signal, type ReadonlySignal } from "@preact/signals-core";
 export { chartFigure, svgText, svgToPng } from "./chart";
+export { settled, inTurns, nextFrame, SETTLE_MS } from "./settle";
 export { briefControls } from "./brief-controls";
 export { keyValues } from "./key-values";
 export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary, schemeStatusLine } from "./scheme-panel";

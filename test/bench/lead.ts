@@ -27,6 +27,7 @@ async function watchLongTasks(page: Page): Promise<void> {
   });
 }
 const longest = (page: Page) => page.evaluate(() => Math.max(0, ...(window as unknown as { __long: number[] }).__long));
+const longCount = (page: Page) => page.evaluate(() => (window as unknown as { __long: number[] }).__long.length);
 
 /**
  * Drags the span slider one step per animation frame, as a hand does, and counts the frames each
@@ -69,7 +70,8 @@ async function sliderDrag(page: Page, steps: number): Promise<{ framesPerStep: n
 }
 
 async function optionEdit(page: Page, value: string): Promise<number> {
-  const before = Number(await page.locator("#cell-comparison-charts").getAttribute("data-renders"));
+  // The charts are drawn in turns after the results settle: `data-drawn` counts finished drawings.
+  const before = Number((await page.locator("#cell-comparison-charts").getAttribute("data-drawn")) ?? 0);
   const t0 = await page.evaluate(() => performance.now());
   await page.evaluate((v) => {
     const input = document.querySelector<HTMLInputElement>("#truss-roof-spanDepthRatio");
@@ -77,7 +79,7 @@ async function optionEdit(page: Page, value: string): Promise<number> {
     input.value = v;
     input.dispatchEvent(new Event("input", { bubbles: true }));
   }, value);
-  await page.waitForFunction((n) => Number(document.querySelector("#cell-comparison-charts")?.getAttribute("data-renders")) > n, before, { polling: "raf" });
+  await page.waitForFunction((n) => Number(document.querySelector("#cell-comparison-charts")?.getAttribute("data-drawn") ?? 0) > n, before, { polling: "raf" });
   return (await page.evaluate(() => performance.now())) - t0;
 }
 
@@ -93,8 +95,12 @@ try {
   await page.waitForSelector("#cell-comparison table", { timeout: 60_000 });
   await page.waitForSelector("#cell-comparison-charts svg", { timeout: 60_000 });
   await watchLongTasks(page);
+  const drawnBefore = Number((await page.locator("#cell-comparison-charts").getAttribute("data-drawn")) ?? 0);
   const drag = await sliderDrag(page, 40);
-  console.log(`span slider drag, 40 steps one per frame: frames per step median ${median(drag.framesPerStep)}, p95 ${p95(drag.framesPerStep)}, max ${Math.max(...drag.framesPerStep)}; table shows the last span ${drag.settleMs.toFixed(0)} ms after the drag; longest main-thread task ${(await longest(page)).toFixed(0)} ms`);
+  const t0 = await page.evaluate(() => performance.now());
+  await page.waitForFunction((n) => Number(document.querySelector("#cell-comparison-charts")?.getAttribute("data-drawn") ?? 0) > n, drawnBefore, { polling: "raf", timeout: 60_000 });
+  const chartsMs = (await page.evaluate(() => performance.now())) - t0;
+  console.log(`span slider drag, 40 steps one per frame: frames per step median ${median(drag.framesPerStep)}, p95 ${p95(drag.framesPerStep)}, max ${Math.max(...drag.framesPerStep)}; table shows the last span ${drag.settleMs.toFixed(0)} ms after the drag, the charts ${chartsMs.toFixed(0)} ms after that; longest main-thread task ${(await longest(page)).toFixed(0)} ms; tasks over 50 ms: ${await longCount(page)}`);
 
   await page.click("#truss-roof-options-panel summary");
   await watchLongTasks(page);
