@@ -1,4 +1,6 @@
-import type { Design, SchemeModel } from "../schemes/types";
+import type { Design, OptionValue, SchemeModel } from "../schemes/types";
+import { computed } from "@preact/signals-core";
+import { setIn } from "../kernel/patch";
 import type { SchemeResult } from "../pipeline";
 import { materialInfo } from "../materials";
 import { tableElement, fmt } from "./format";
@@ -7,20 +9,50 @@ import { keyValues } from "./key-values";
 import { numberControl, selectControl, toggleControl, controlGroup } from "./controls";
 import type { StudyStore } from "./study-store";
 
-/** The option controls of one scheme, from its OptionSpecs, bound to the study. */
-export function schemeOptionControls(store: StudyStore, model: SchemeModel): HTMLElement {
+/**
+ * A free proportion's "pinned" box (issue 12 item 4): pinned, the search leaves the option at its
+ * value; pinning takes the value the search chose (`chosen`), so the design does not move, in one
+ * checked edit of the study.
+ */
+function pinControl(store: StudyStore, model: SchemeModel, key: string, chosen: (key: string) => OptionValue | undefined): HTMLElement {
+  const pinned = computed(() => store.study.value.schemes[model.id]?.pinned ?? []);
+  const binding = {
+    value: computed(() => pinned.value.includes(key)),
+    set(on: boolean): void {
+      const study = store.study.peek();
+      const list = pinned.peek().filter((k) => k !== key);
+      const value = chosen(key);
+      const withValue = on && value !== undefined ? setIn(study, ["schemes", model.id, "options", key], value) : study;
+      const problem = store.replace(setIn(withValue, ["schemes", model.id, "pinned"], on ? [...list, key] : list));
+      if (problem !== null) store.notice.value = `Pinning ${key}: ${problem}`;
+    },
+  };
+  const box = toggleControl(binding, { id: `${model.id}-${key}-pinned`, label: "pinned (not searched)" });
+  box.classList.add("pin");
+  return box;
+}
+
+/** The option controls of one scheme, from its OptionSpecs, bound to the study; a free one has a "pinned" box beside it. */
+export function schemeOptionControls(store: StudyStore, model: SchemeModel, chosen: (key: string) => OptionValue | undefined = () => undefined): HTMLElement {
   const controls = model.options.map((spec) => {
     const path = ["schemes", model.id, "options", spec.key];
     const id = `${model.id}-${spec.key}`;
     const hint = spec.source;
-    switch (spec.kind) {
-      case "number":
-        return numberControl(store.bind<number>(path), { id, label: spec.label, unit: spec.unit, min: spec.min, max: spec.max, step: spec.step, integer: spec.integer ?? false, hint });
-      case "select":
-        return selectControl(store.bind<string>(path), { id, label: spec.label, choices: spec.choices });
-      case "toggle":
-        return toggleControl(store.bind<boolean>(path), { id, label: spec.label });
-    }
+    const control = (() => {
+      switch (spec.kind) {
+        case "number":
+          return numberControl(store.bind<number>(path), { id, label: spec.label, unit: spec.unit, min: spec.min, max: spec.max, step: spec.step, integer: spec.integer ?? false, hint });
+        case "select":
+          return selectControl(store.bind<string>(path), { id, label: spec.label, choices: spec.choices });
+        case "toggle":
+          return toggleControl(store.bind<boolean>(path), { id, label: spec.label });
+      }
+    })();
+    if (spec.free !== true) return control;
+    const pair = document.createElement("div");
+    pair.className = "free-option";
+    pair.append(control, pinControl(store, model, spec.key, chosen));
+    return pair;
   });
   return controlGroup(`${model.label}: options`, controls);
 }

@@ -1,0 +1,49 @@
+// The proportions the search chose for a scheme, in words (issue 12 item 4: "the page shows the
+// chosen proportions and how much the runner-up differs"). Pure text: no DOM.
+import { RISE_KEY, type ProportionChoice } from "../pipeline/proportions";
+import type { OptionValue, SchemeModel } from "../schemes/types";
+import { fmt } from "./format";
+
+const GOAL: Record<ProportionChoice["objective"], string> = { mass: "the least mass", carbon: "the least embodied carbon", cost: "the least cost" };
+
+/** One proportion as "Target strut length 5.5 m", "rise 24.0 m", "Layers double". */
+export function proportionText(model: SchemeModel, key: string, value: OptionValue | undefined): string {
+  if (key === RISE_KEY) return `rise ${typeof value === "number" ? fmt.one(value) : String(value)} m`;
+  const spec = model.options.find((s) => s.key === key);
+  if (!spec) return `${key} ${String(value)}`;
+  if (spec.kind === "number") return `${spec.label} ${typeof value === "number" ? fmt.sig3(value) : String(value)}${spec.unit ? ` ${spec.unit}` : ""}`;
+  if (spec.kind === "select") return `${spec.label}: ${spec.choices.find((c) => c.value === value)?.label ?? String(value)}`;
+  return `${spec.label}: ${value ? "on" : "off"}`;
+}
+
+/** The proportions that differ between two sets, as words (the runner-up against the chosen). */
+function differences(model: SchemeModel, chosen: ProportionChoice, other: NonNullable<ProportionChoice["runnerUp"]>): string[] {
+  const out = Object.keys(other.proportions)
+    .filter((k) => k !== RISE_KEY && other.proportions[k] !== chosen.proportions[k])
+    .map((k) => proportionText(model, k, other.proportions[k]));
+  if (Math.abs(other.riseM - chosen.riseM) > 1e-6) out.push(proportionText(model, RISE_KEY, other.riseM));
+  return out;
+}
+
+/**
+ * Sentences for a scheme's panel: what was searched and chosen, for which goal, what the user pinned,
+ * where the rise came from, and how much worse the runner-up is (or that there is none).
+ */
+export function proportionsSentences(model: SchemeModel, choice: ProportionChoice): string[] {
+  const searched = choice.searched.filter((k) => k !== RISE_KEY);
+  const riseWord =
+    choice.riseSource === "searched" ? `${proportionText(model, RISE_KEY, choice.riseM)} (searched)` : choice.riseSource === "pinned" ? `${proportionText(model, RISE_KEY, choice.riseM)} (pinned)` : `${proportionText(model, RISE_KEY, choice.riseM)} (the brief's common rise)`;
+  const out: string[] = [];
+  if (!Number.isFinite(choice.value)) out.push(`No feasible proportions were found among the ${choice.evaluations} designs tried.`);
+  else if (choice.searched.length === 0) out.push(`Nothing to search: the design uses the options as set; ${riseWord}.`);
+  else {
+    const chosen = searched.map((k) => proportionText(model, k, choice.proportions[k]));
+    out.push(`Proportions chosen for ${GOAL[choice.objective]} per m² of usable floor (${choice.evaluations} designs tried): ${[...chosen, riseWord].join("; ")}.`);
+  }
+  if (choice.pinned.length > 0) out.push(`Pinned by you: ${choice.pinned.map((k) => proportionText(model, k, choice.proportions[k])).join("; ")}.`);
+  if (choice.searched.length > 0 && Number.isFinite(choice.value)) {
+    const r = choice.runnerUp;
+    out.push(r === null || !Number.isFinite(r.value) ? "No other proportions tried were feasible." : `The runner-up (${differences(model, choice, r).join("; ") || "same proportions"}) is ${fmt.one(r.differencePct)} % higher.`);
+  }
+  return out;
+}

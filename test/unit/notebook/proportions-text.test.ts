@@ -1,0 +1,44 @@
+// The chosen proportions in words (issue 12 item 4): each searched proportion with its label and
+// unit, the goal, the pins, where the rise came from, and the runner-up's difference.
+import { describe, it, expect } from "vitest";
+import { geodesicDome } from "../../../src/schemes/geodesic-dome";
+import type { SchemeModel } from "../../../src/schemes/types";
+import type { ProportionChoice } from "../../../src/pipeline/proportions";
+import { proportionsSentences, proportionText } from "../../../src/notebook/proportions-text";
+
+const model = geodesicDome as unknown as SchemeModel;
+// A choice as the search reports one (its numbers are inputs to the wording, not check values).
+const choice: ProportionChoice = {
+  objective: "carbon",
+  searched: ["targetStrutLengthM", "riseM"],
+  pinned: ["doubleLayerDepthPct"],
+  proportions: { targetStrutLengthM: 6.5, doubleLayerDepthPct: 2, riseM: 22.4 },
+  riseM: 22.4,
+  riseSource: "searched",
+  value: 120,
+  evaluations: 17,
+  runnerUp: { proportions: { targetStrutLengthM: 7, doubleLayerDepthPct: 2, riseM: 22.4 }, riseM: 22.4, value: 121.5, differencePct: 1.25 },
+};
+
+describe("proportions in words", () => {
+  it("names each proportion with its label and unit", () => {
+    expect(proportionText(model, "targetStrutLengthM", 6.5)).toBe("Target strut length 6.5 m");
+    expect(proportionText(model, "riseM", 22.4)).toBe("rise 22.4 m");
+  });
+
+  it("says what was chosen for which goal, what is pinned, and how much the runner-up differs in what", () => {
+    const text = proportionsSentences(model, choice).join(" ");
+    expect(text).toContain("least embodied carbon");
+    expect(text).toContain("Target strut length 6.5 m");
+    expect(text).toContain("rise 22.4 m (searched)");
+    expect(text).toContain("17 designs tried");
+    expect(text).toContain("Pinned by you: Double-layer depth 2 % of span.");
+    expect(text).toContain("The runner-up (Target strut length 7 m) is 1.3 % higher.");
+  });
+
+  it("says so when nothing was searched, when nothing feasible was found, and when no runner-up was feasible", () => {
+    expect(proportionsSentences(model, { ...choice, searched: [], pinned: [], riseSource: "common", runnerUp: null }).join(" ")).toContain("Nothing to search");
+    expect(proportionsSentences(model, { ...choice, value: Number.POSITIVE_INFINITY }).join(" ")).toContain("No feasible proportions were found among the 17 designs tried");
+    expect(proportionsSentences(model, { ...choice, runnerUp: null }).join(" ")).toContain("No other proportions tried were feasible");
+  });
+});
