@@ -119,7 +119,7 @@ reactiveCell(inputs, { id: "section", title: "Roof section" }, () =>
 
 // ——— the schemes ———
 // Designs run in workers (issue 14): the page keeps drawing while they run.
-const { schemes, results, busy, failure } = workerStudySignals(store);
+const { schemes, results, resultsSpanM, busy, failure } = workerStudySignals(store);
 // The tables, for naming rows they lack; untouched tables keep their identity, so the table re-renders only when they change.
 const factorRows = computed(() => store.study.value.carbon.factors);
 const rateRows = computed(() => store.study.value.cost.rates);
@@ -158,7 +158,7 @@ reactiveCell(outputs, { id: "comparison", title: "Side by side" }, () => {
   if (list.length === 0) return "Switch on at least one scheme to compare.";
   const wrap = document.createElement("div");
   wrap.className = "table-scroll";
-  wrap.append(resultsTable(list, currency.value, brief.value.spanM));
+  wrap.append(resultsTable(list, currency.value, resultsSpanM.value));
   const gaps = gapNotice(tableGaps(list, { factors: factorRows.value, rates: rateRows.value }), "comparison-gaps");
   if (gaps) wrap.append(gaps);
   return wrap;

@@ -27,6 +27,8 @@ export interface AsyncStudySignals {
   schemes: AsyncSchemeSignals[];
   /** Results of the enabled schemes, in registry order, all for the same brief. */
   results: ReadonlySignal<SchemeResult[] | null>;
+  /** The span the results are for, m (it moves with them, not with the slider). */
+  resultsSpanM: ReadonlySignal<number>;
   /** A design is being computed for a newer brief or option. */
   busy: ReadonlySignal<boolean>;
   /** A worker failed (the message), or "". */
@@ -78,13 +80,17 @@ export function workerStudySignals(store: StudyStore): AsyncStudySignals {
   });
   const busy = computed(() => schemes.some((s) => s.enabled.value && !s.current.value));
   const results = signal<SchemeResult[] | null>(null);
+  const resultsSpanM = signal(brief.peek().spanM);
   effect(() => {
     const on = schemes.filter((s) => s.enabled.value);
     if (on.some((s) => !s.current.value)) return;
     const list = on.map((s) => s.result.value).filter((r): r is SchemeResult => r !== null);
+    // Every enabled design is current, so the brief now is the one they were designed for.
+    const spanM = brief.value.spanM;
     batch(() => {
       results.value = list;
+      resultsSpanM.value = spanM;
     });
   });
-  return { schemes, results, busy, failure };
+  return { schemes, results, resultsSpanM, busy, failure };
 }
