@@ -264,7 +264,7 @@ for (const s of schemes) {
   modelSlot.id = `${id}-model-slot`;
   detail.body.append(modelSlot);
   reactiveCell(modelSlot, { id: `${id}-model` }, () => {
-    const view = s.enabled.value && detail.open.value ? s.design.value.analysis?.view : undefined;
+    const view = s.enabled.value && detail.open.value ? s.design.value?.analysis?.view : undefined;
     if (!view) return null;
     const wrap = document.createElement("div");
     wrap.className = "grid charts";
