@@ -29,6 +29,7 @@ import {
   errorBox,
   settled,
   inTurns,
+  proportionsSentences,
 } from "../src/notebook";
 import type * as Plot from "@observablehq/plot";
 import { tableGaps } from "../src/pipeline";
@@ -234,6 +235,18 @@ for (const s of schemes) {
     const result = s.result.value;
     return result === null ? "Designing…" : schemeStatusLine(result);
   });
+  // The proportions the search chose and how much the runner-up differs (issue 12 item 4), under the status line.
+  reactiveCell(panel, { id: `${id}-proportions`, className: "proportions" }, () => {
+    const choice = s.enabled.value ? s.result.value?.proportions : undefined;
+    if (!choice) return null;
+    const wrap = document.createElement("div");
+    for (const sentence of proportionsSentences(s.model, choice)) {
+      const p = document.createElement("p");
+      p.textContent = sentence;
+      wrap.append(p);
+    }
+    return wrap;
+  });
   const detail = lazyDetails(panel, `${id}-details`, "Engineering detail: figures, cautions, drawings, members, checks and take-off");
   const about = document.createElement("p");
   about.className = "intro";
@@ -282,7 +295,7 @@ for (const s of schemes) {
     return wrap;
   });
   const options = lazyDetails(panel, `${id}-options-panel`, "Options");
-  staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model));
+  staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model, (key) => s.result.peek()?.proportions?.proportions[key]));
 }
 
 // The study's own lines (title, prepared by, date, notes), at the foot of the brief.

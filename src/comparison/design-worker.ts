@@ -1,20 +1,19 @@
 // Module worker: designs schemes off the main thread so the compare page stays responsive while
-// designs run (issue 14: the main thread is never blocked for more than 50 ms by a design).
+// designs run (issue 14: the main thread is never blocked for more than 50 ms by a design). Each
+// design is the scheme at its best proportions by the pipeline's one rule (design-job.ts).
 import { exposeWorker } from "../kernel/worker-call";
-import { designScheme } from "../pipeline";
-import { SCHEMES } from "../schemes";
+import { designJob } from "./design-job";
 import { defaultCatalogue } from "../catalogue/default-catalogue";
 import type { Brief } from "../brief";
-import type { Design, SchemeId, SchemeOptions } from "../schemes/types";
+import type { SearchedDesign, SchemeSetting, StudyInputs } from "../pipeline";
+import type { SchemeId } from "../schemes/types";
 
 const catalogue = defaultCatalogue();
 
 export const designWorkerApi = {
-  /** The scheme's design for a brief and its options (defaults fill the rest). */
-  design(schemeId: SchemeId, brief: Brief, options: SchemeOptions | undefined): Design {
-    const model = SCHEMES.find((m) => m.id === schemeId);
-    if (!model) throw new Error(`unknown scheme: ${schemeId}`);
-    return designScheme(model, brief, options, catalogue);
+  /** The scheme at its best proportions for a brief, its setting in the study and the study's tables. */
+  design(schemeId: SchemeId, brief: Brief, setting: SchemeSetting | undefined, tables: Pick<StudyInputs, "carbon" | "cost">): SearchedDesign {
+    return designJob(schemeId, brief, setting, tables, catalogue);
   },
 };
 export type DesignWorkerApi = typeof designWorkerApi;

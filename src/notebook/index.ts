@@ -9,6 +9,7 @@ export { fmt, tableElement } from "./format";
 export { signal, computed, effect, batch, type Signal, type ReadonlySignal } from "@preact/signals-core";
 export { chartFigure, svgText, svgToPng } from "./chart";
 export { settled, inTurns, nextFrame, SETTLE_MS } from "./settle";
+export { proportionsSentences, proportionText } from "./proportions-text";
 export { briefControls } from "./brief-controls";
 export { keyValues } from "./key-values";
 export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary, schemeStatusLine } from "./scheme-panel";

@@ -1,6 +1,6 @@
 // The proportions the search chose for a scheme, in words (issue 12 item 4: "the page shows the
 // chosen proportions and how much the runner-up differs"). Pure text: no DOM.
-import { RISE_KEY, type ProportionChoice } from "../pipeline/proportions";
+import { RISE_KEY, type ProportionChoice } from "../pipeline";
 import type { OptionValue, SchemeModel } from "../schemes/types";
 import { fmt } from "./format";
 

@@ -1,17 +1,19 @@
 // Per-scheme designs computed in workers for the compare page (issue 14, "a slider that keeps
 // up"): the page keeps drawing while designs run; each scheme's design is asked for only when its
-// brief or options change, and only the newest answer is kept. Carbon and cost are assessed on the
-// page (they take a millisecond or two). `results` moves only when every enabled scheme's design
-// is for the current brief, so the table never mixes two spans; `busy` says a newer one is coming.
+// brief, its setting or the study's tables change, and only the newest answer is kept. Each design
+// is the scheme at its best proportions by the pipeline's one rule (designAtBestProportions, in
+// src/comparison/design-job.ts), so this page agrees with the span study and the command line.
+// Carbon and cost of the chosen design are assessed on the page (a millisecond or two). `results`
+// moves only when every enabled scheme's design is for the current inputs, so the table never mixes
+// two spans; `busy` says a newer one is coming.
 import { signal, computed, effect, batch, type ReadonlySignal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { SCHEMES, type Design, type SchemeModel } from "../schemes";
-import { schemeResult, type SchemeResult } from "../pipeline";
+import { schemeResult, type SchemeResult, type SearchedDesign, type SchemeSetting, type StudyInputs } from "../pipeline";
 import { workerApi, latestOnly } from "../kernel/worker-call";
 import type { DesignWorkerApi } from "../comparison/design-worker";
 import { messageOf } from "../kernel/errors";
 import type { Brief } from "../brief";
-import type { SchemeOptions } from "../schemes/types";
 
 export interface AsyncSchemeSignals {
   model: SchemeModel;
@@ -19,7 +21,7 @@ export interface AsyncSchemeSignals {
   /** The newest design (null until the first arrives). */
   design: ReadonlySignal<Design | null>;
   result: ReadonlySignal<SchemeResult | null>;
-  /** Whether the design shown is for the current brief and options. */
+  /** Whether the design shown is for the current brief, setting and tables. */
   current: ReadonlySignal<boolean>;
 }
 
@@ -35,58 +37,74 @@ export interface AsyncStudySignals {
   failure: ReadonlySignal<string>;
 }
 
-type Request = { brief: Brief; options: SchemeOptions | undefined; key: string };
+/** What one design is asked for; its identity marks the answer as current. */
+type Request = { brief: Brief; setting: SchemeSetting | undefined; tables: Pick<StudyInputs, "carbon" | "cost"> };
 
 function workers(): ReturnType<typeof workerApi<DesignWorkerApi>>[] {
   const cores = typeof navigator !== "undefined" && navigator.hardwareConcurrency ? navigator.hardwareConcurrency : 2;
   return Array.from({ length: Math.max(1, Math.min(2, cores)) }, () => workerApi<DesignWorkerApi>(new Worker(new URL("../comparison/design-worker.ts", import.meta.url), { type: "module" })));
 }
 
+/** The parts of the study every scheme's request reads, each a new object only when that part changed. */
+interface Shared {
+  brief: ReadonlySignal<Brief>;
+  tables: ReadonlySignal<Pick<StudyInputs, "carbon" | "cost">>;
+}
+
+function sharedSignals(store: StudyStore): Shared {
+  const carbon = computed(() => store.study.value.carbon);
+  const cost = computed(() => store.study.value.cost);
+  return { brief: computed(() => store.study.value.brief), tables: computed(() => ({ carbon: carbon.value, cost: cost.value })) };
+}
+
+/** One scheme's signals: asks its worker for the newest request, keeps the newest answer, assesses it with the study's tables. */
+function schemeSignals(model: SchemeModel, store: StudyStore, shared: Shared, worker: ReturnType<typeof workerApi<DesignWorkerApi>> | undefined, failure: { value: string }): AsyncSchemeSignals {
+  const setting = computed(() => store.study.value.schemes[model.id]);
+  const enabled = computed(() => setting.value?.enabled !== false);
+  // A new request only when the brief, this scheme's setting or a table changed (the store keeps untouched parts' identity).
+  const wanted = computed((): Request => ({ brief: shared.brief.value, setting: setting.value, tables: shared.tables.value }));
+  const { tables } = shared;
+  const answer = signal<{ searched: SearchedDesign; request: Request } | null>(null);
+  const ask = latestOnly<Request, SearchedDesign>(
+    (r) => (worker ? worker.api.design(model.id, r.brief, r.setting, r.tables) : Promise.reject(new Error("no design worker"))),
+    (searched, request) => {
+      answer.value = { searched, request };
+    },
+    (error) => {
+      failure.value = `${model.label}: ${messageOf(error)}`;
+    },
+  );
+  effect(() => {
+    if (!enabled.value) return;
+    const request = wanted.value;
+    if (answer.peek()?.request !== request) ask(request);
+  });
+  const design = computed(() => answer.value?.searched.design ?? null);
+  const result = computed((): SchemeResult | null => {
+    const a = answer.value;
+    if (a === null) return null;
+    const { searched } = a;
+    return { ...schemeResult(model.id, model.label, searched.design, tables.value), brief: searched.brief, proportions: searched.proportions };
+  });
+  const current = computed(() => answer.value?.request === wanted.value);
+  return { model, enabled, design, result, current };
+}
+
 /** The compare page's per-scheme designs from workers, assessed on the page with the study's tables. */
 export function workerStudySignals(store: StudyStore): AsyncStudySignals {
   const pool = workers();
-  const brief = computed(() => store.study.value.brief);
-  const carbon = computed(() => store.study.value.carbon);
-  const cost = computed(() => store.study.value.cost);
   const failure = signal("");
-  const schemes = SCHEMES.map((model, index): AsyncSchemeSignals => {
-    const setting = computed(() => store.study.value.schemes[model.id]);
-    const enabled = computed(() => setting.value?.enabled !== false);
-    const options = computed(() => setting.value?.options);
-    const wanted = computed(() => JSON.stringify([brief.value, options.value]));
-    const answer = signal<{ design: Design; key: string } | null>(null);
-    const worker = pool[index % pool.length];
-    const ask = latestOnly<Request, Design>(
-      (r) => (worker ? worker.api.design(model.id, r.brief, r.options) : Promise.reject(new Error("no design worker"))),
-      (design, r) => {
-        answer.value = { design, key: r.key };
-      },
-      (error) => {
-        failure.value = `${model.label}: ${messageOf(error)}`;
-      },
-    );
-    effect(() => {
-      if (!enabled.value) return;
-      const key = wanted.value;
-      if (answer.peek()?.key !== key) ask({ brief: brief.peek(), options: options.peek(), key });
-    });
-    const design = computed(() => answer.value?.design ?? null);
-    const result = computed((): SchemeResult | null => {
-      const d = design.value;
-      return d === null ? null : schemeResult(model.id, model.label, d, { carbon: carbon.value, cost: cost.value });
-    });
-    const current = computed(() => answer.value?.key === wanted.value);
-    return { model, enabled, design, result, current };
-  });
+  const shared = sharedSignals(store);
+  const schemes = SCHEMES.map((model, index) => schemeSignals(model, store, shared, pool[index % pool.length], failure));
   const busy = computed(() => schemes.some((s) => s.enabled.value && !s.current.value));
   const results = signal<SchemeResult[] | null>(null);
-  const resultsSpanM = signal(brief.peek().spanM);
+  const resultsSpanM = signal(shared.brief.peek().spanM);
   effect(() => {
     const on = schemes.filter((s) => s.enabled.value);
     if (on.some((s) => !s.current.value)) return;
     const list = on.map((s) => s.result.value).filter((r): r is SchemeResult => r !== null);
     // Every enabled design is current, so the brief now is the one they were designed for.
-    const spanM = brief.value.spanM;
+    const spanM = shared.brief.value.spanM;
     batch(() => {
       results.value = list;
       resultsSpanM.value = spanM;
