@@ -12,6 +12,7 @@ import { latticeBands } from "../../mechanics/lattice-bands";
 import { latticeSelfWeightKPa, sizeLattice, type LatticeInputs, type LatticeResult } from "./sizing";
 import { latticePlan, latticeSection } from "./drawing";
 import { analyseNet } from "./analysis";
+import { frameTooLarge } from "../../analysis/frame";
 
 const declarations = {
   // default: single-layer lattices are usually meshed at 3–6 m (common practice, no source)
@@ -42,13 +43,6 @@ export type GeodesicDomeOptions = OptionValues<typeof declarations>;
 
 /** Usual upper span of a single-layer lattice dome, m (from memory: single-layer braced domes to ≈ 100 m, double-layer beyond). */
 const SINGLE_LAYER_USUAL_MAX_SPAN_M = 100;
-
-/**
- * The largest net the on-demand 3D analysis takes: 2,000 nodes (12,000 degrees of freedom). A 160 m
- * dome at 5 m struts has about 1,000 nodes and took 4 s on a loaded machine (1 s quiet); 4,000 nodes
- * took 29 s. Measured here, not a published limit.
- */
-const MAX_ANALYSED_NODES = 2000;
 
 /** The geodesic mesh at the frequency whose mean strut meets the target length; a SchemeError when none can be made. */
 function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, section: ReturnType<typeof latticeSection>): { frequency: number; mesh: GeodesicCap } {
@@ -180,8 +174,9 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
   const governingBand = r.bands.reduce((worst, b) => (b.choice.utilisation > worst.choice.utilisation ? b : worst));
   const membraneCase = governingBand.bucklingPa > 0 && governingBand.pressurePa / governingBand.bucklingPa >= governingBand.choice.utilisation ? r.heaviestCase : governingBand.governingCase;
   const members = latticeMembers(r, inputs, double);
-  const tooLarge = !double && opts.bucklingAnalysis && mesh.nodes.length > MAX_ANALYSED_NODES;
-  if (tooLarge) warnings.push(`the net has ${mesh.nodes.length.toLocaleString("en")} nodes, more than the ${MAX_ANALYSED_NODES.toLocaleString("en")} the on-demand 3D analysis takes (it would run for minutes): bar forces from membrane theory and the continuum buckling check only; lengthen the target strut to analyse it`);
+  const tooLargeWarning = !double && opts.bucklingAnalysis ? frameTooLarge(mesh.nodes.length, "bar forces from membrane theory; lengthen the target strut") : null;
+  const tooLarge = tooLargeWarning !== null;
+  if (tooLargeWarning) warnings.push(tooLargeWarning);
   const net = double || !opts.bucklingAnalysis || tooLarge ? null : analyseNet({ brief, cap, mesh, bands: r.bands, selfWeightPlanKPa: latticeSelfWeightKPa(r, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2), steel: inputs.steel, knockDown: opts.knockDown, buckling: opts.bucklingAnalysis });
   if (double && opts.bucklingAnalysis) warnings.push("double layer: no 3D analysis of the net (the frame model is single-layer); bar forces from membrane theory only");
   if (!net && !tooLarge) warnings.push("bar forces from membrane theory; the 3D analysis of the net (member forces under drifted snow, buckling factor) runs on demand");

@@ -17,6 +17,7 @@ import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
 import { timberPlan, timberSection } from "./drawing";
 import { analyseTimberNet } from "./analysis";
+import { frameTooLarge } from "../../analysis/frame";
 
 const GLULAM_CHOICES = ["GL24h", "GL28h", "GL30h", "GL32h"].map((value) => ({ value, label: `${value} (EN 14080)` }));
 
@@ -231,6 +232,8 @@ function designOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogu
 
 /** The chosen design with the 3D analysis of its net: Design.analysis and the 3D buckling check beside the continuum one. */
 function withNetAnalysis(brief: Brief, cap: SphericalCap, d: MeshDesign, knockDown: number): DesignParts {
+  const tooLarge = frameTooLarge(d.mesh.nodes.length, "lengthen the target member");
+  if (tooLarge) return { ...d.parts, warnings: [...d.parts.warnings, tooLarge] };
   const selfWeightPlanKPa = timberSelfWeightKPa(d.result, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2);
   const net = analyseTimberNet({ brief, cap, mesh: d.mesh, bands: d.result.bands, selfWeightPlanKPa, creepModulusPa: d.inputs.creepModulusPa, knockDown, purlinSpacingM: d.inputs.purlinSpacingM });
   return { ...d.parts, checks: [...d.parts.checks, ...net.checks], analysis: net.analysis };

@@ -54,14 +54,21 @@ describe("the equal-footing keys (issue 12, issue 13 command-line sections)", ()
     expect(out.code).toBe(0);
     const json = JSON.parse(out.stdout) as { objective: string; rise_rule: string; schemes: Record<string, unknown>[] };
     expect(json.objective).toBe("mass");
-    expect(json.rise_rule).toBe("common");
+    expect(json.rise_rule).toBe("own"); // the demo study lets each scheme choose its rise
+    const demo = JSON.parse(files["demo.json"]!) as { brief: { spanM: number; riseM: number; eavesHeightM: number; heightLimitM: number } };
     for (const s of json.schemes) {
       expect(["feasible", "out-of-range", "infeasible"]).toContain(s.status);
       expect(typeof s.governing_load_case).toBe("string");
       expect(typeof s.proportions).toBe("object");
       const groups = ["structure_t", "perimeter_t", "substructure_t", "envelope_t"].map((k) => s[k] as number);
       expect(groups.reduce((a, b) => a + b, 0)).toBeCloseTo(s.total_mass_t as number, 6);
-      if (s.status !== "infeasible") expect(s.rise_m).toBe(22);
+      if (s.status === "infeasible") continue;
+      // a scheme without a rise range keeps the common rise; the others' own rise stays under the height limit
+      if (s.rise_source === "common") expect(s.rise_m).toBe(demo.brief.riseM);
+      else {
+        expect(s.rise_source).toBe("searched");
+        expect(s.rise_m as number).toBeLessThanOrEqual(demo.brief.heightLimitM - demo.brief.eavesHeightM + 1e-9);
+      }
     }
   });
   it("refuses an unknown objective, naming the option and what it allows", () => {
