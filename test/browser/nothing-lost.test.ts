@@ -112,12 +112,14 @@ describe("nothing lost (issue 10)", () => {
     await page.fill("#riseM", "18");
     await page.click("#cable-net-options-panel summary").catch(() => undefined);
     await expect.poll(() => storedStudy(page).then((t) => t?.includes('"riseM": 18') ?? false)).toBe(true);
+    // the designs run in workers: read the table once the newest results are in (not while it is busy)
+    await page.waitForSelector('#cell-comparison[aria-busy="false"] table');
     const before = await page.locator("#cell-comparison table").innerText();
     const geometry = await page.locator("#cell-geometry").innerText();
     const saved = await storedStudy(page);
     const t0 = Date.now();
     await page.reload();
-    await page.waitForSelector("#cell-comparison table");
+    await page.waitForSelector('#cell-comparison[aria-busy="false"] table');
     const reloadMs = Date.now() - t0;
     expect(await page.locator("#cell-comparison table").innerText()).toBe(before);
     expect(await page.locator("#cell-geometry").innerText()).toBe(geometry);
