@@ -44,7 +44,7 @@ const TABLE_A1_2B = "EN 1990 Table A1.2(B)";
 
 export const BRIEF_FIELDS = [
   { key: "spanM", kind: "number", label: "Clear span (plan diameter)", unit: "m", min: 30, max: 500, step: 1, slider: true, source: "brief", group: GEOMETRY },
-  { key: "riseM", kind: "number", label: "Rise of the roof above the eaves", unit: "m", min: 0.5, max: 250, step: 0.5, slider: true, hint: "at most half the span", source: "brief", group: GEOMETRY },
+  { key: "riseM", kind: "number", label: "Rise of the roof above the eaves", unit: "m", min: 0.5, max: 250, step: 0.5, slider: true, hint: "at most half the span; the one rise every scheme shares when 'Rise of each scheme' says so, else only for schemes without a rise range", source: "brief", group: GEOMETRY },
   { key: "eavesHeightM", kind: "number", label: "Eaves height", unit: "m", min: 0, max: 60, step: 0.5, source: "brief", group: GEOMETRY },
   { key: "minClearHeightM", kind: "number", label: "Minimum clear height for usable floor", unit: "m", min: 0, max: 60, step: 0.5, hint: "at most the eaves height", source: "brief", group: GEOMETRY },
   { key: "heightLimitM", kind: "number", label: "Roof height limit above the floor", unit: "m", min: 1, max: 400, step: 0.5, hint: "the planning envelope: eaves + rise at most this", source: "brief (planning envelope)", group: GEOMETRY },

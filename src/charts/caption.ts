@@ -5,7 +5,7 @@ import { DEFAULT_RATE_SET_NAME } from "../cost/rate-table";
 export function chartCaption(study: Study, extra = ""): string {
   const b = study.brief;
   const parts = [
-    `Span ${b.spanM} m, rise ${b.riseM} m, eaves ${b.eavesHeightM} m, ≥ ${b.minClearHeightM} m clear`,
+    `Span ${b.spanM} m, ${b.riseRule === "own" ? "each scheme its own rise" : `rise ${b.riseM} m`}, eaves ${b.eavesHeightM} m, ≥ ${b.minClearHeightM} m clear`,
     `s_k ${b.snowGroundKPa} kPa, v_b ${b.windBasicMPerS} m/s terrain ${b.terrain}`,
     `carbon factors: ${study.carbon.settings.factorSetName}`,
     // The rate set is named once it is not the bundled one (an import or an edited name).

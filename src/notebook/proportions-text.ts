@@ -43,7 +43,7 @@ export function proportionsSentences(model: SchemeModel, choice: ProportionChoic
   if (choice.pinned.length > 0) out.push(`Pinned by you: ${choice.pinned.map((k) => proportionText(model, k, choice.proportions[k])).join("; ")}.`);
   if (choice.searched.length > 0 && Number.isFinite(choice.value)) {
     const r = choice.runnerUp;
-    out.push(r === null || !Number.isFinite(r.value) ? "No other proportions tried were feasible." : `The runner-up (${differences(model, choice, r).join("; ") || "same proportions"}) is ${fmt.one(r.differencePct)} % higher.`);
+    out.push(r === null || !Number.isFinite(r.value) ? "No other proportions tried were feasible." : r.differencePct < 0.05 ? `The runner-up (${differences(model, choice, r).join("; ") || "same proportions"}) is as good (within 0.05 %): the choice between them does not matter here.` : `The runner-up (${differences(model, choice, r).join("; ") || "same proportions"}) is ${fmt.one(r.differencePct)} % higher.`);
   }
   return out;
 }

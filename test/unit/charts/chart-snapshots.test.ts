@@ -37,7 +37,8 @@ describe("chart specifications (snapshots)", () => {
     expect(html).toMatchSnapshot();
   });
   it("captions name the span, the brief and the factor set", () => {
-    expect(caption).toMatch(/^Span 160 m, rise 24 m/);
+    expect(caption).toMatch(/^Span 160 m, each scheme its own rise, eaves/); // the default study's rise rule is "own"
+    expect(chartCaption({ ...study, brief: { ...study.brief, riseRule: "common" } })).toMatch(/^Span 160 m, rise 24 m/);
     expect(caption).toContain(study.carbon.settings.factorSetName);
   });
 });

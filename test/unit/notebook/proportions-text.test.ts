@@ -41,4 +41,11 @@ describe("proportions in words", () => {
     expect(proportionsSentences(model, { ...choice, value: Number.POSITIVE_INFINITY }).join(" ")).toContain("No feasible proportions were found among the 17 designs tried");
     expect(proportionsSentences(model, { ...choice, runnerUp: null }).join(" ")).toContain("No other proportions tried were feasible");
   });
+
+  it("calls a runner-up of the same value as good rather than '0.0 % higher'", () => {
+    const tie = { ...choice, runnerUp: { ...choice.runnerUp!, value: 120, differencePct: 0 } };
+    const text = proportionsSentences(model, tie).join(" ");
+    expect(text).toContain("is as good (within 0.05 %)");
+    expect(text).not.toContain("0.0 % higher");
+  });
 });
