@@ -10,7 +10,7 @@ const { store, main } = startPage({
   id: "span-study",
   demoStudy,
   intro:
-    "Each enabled scheme redesigned at every span of the range, the rise kept in proportion to the span as in the brief. Lines are solid where a scheme is feasible and inside its method's valid span range, dashed outside it (and left out of the scale unless brought in), broken where it is not feasible. Carbon and cost are per m² of usable floor; self-weight per m² of plan.",
+    "Each enabled scheme redesigned at every span of the range at its best proportions, as on the compare page: its own rise within the height limit, or, when the study sets one common rise, that rise kept in proportion to the span. Lines are solid where a scheme is feasible and inside its method's valid span range, dashed outside it (and left out of the scale unless brought in), broken where it is not feasible. Carbon and cost are per m² of usable floor; self-weight per m² of plan.",
 });
 
 const range = signal<SpanRange>({ fromM: 40, toM: 400, stepM: 10 });
