@@ -3,11 +3,13 @@
 //   - a compare edit (a scheme option) → the option charts redrawn;
 //   - the span study (37 spans, every scheme) from a range change to its charts.
 // BENCH_DIST=other/dist serves another build (to time "before" against "after"). Nothing asserted.
+import { resolve } from "node:path";
 import { preview } from "vite";
 import { chromium, type Page } from "playwright-core";
 import { CHROMIUM_ARGS } from "../browser/browser";
 
-const dist = process.env.BENCH_DIST ?? "dist";
+// absolute: vite preview resolved the relative "dist" to a directory that answered every page with an error
+const dist = resolve(process.env.BENCH_DIST ?? "dist");
 
 function median(samples: readonly number[]): number {
   const sorted = [...samples].sort((a, b) => a - b);
