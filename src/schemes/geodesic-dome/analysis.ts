@@ -11,7 +11,7 @@ import { combinationAtPlanKPa } from "../../loads/combination-summary";
 import type { Combination } from "../../loads/design-combinations";
 import { latticeBuckling, latticeFrame, latticePlanLoads, tubeSection } from "../../analysis/lattice";
 import { frameSystem, solveFrameLinear, type FrameModel } from "../../analysis/frame";
-import { check } from "../kit";
+import { check, heaviestByUniformEquivalent } from "../kit";
 import { bandOfEachEdge } from "../../mechanics/lattice-bands";
 
 /** Steel's Poisson's ratio (EN 1993-1-1 §3.2.6). */
@@ -27,9 +27,9 @@ function netFrame(mesh: GeodesicCap, bands: readonly BandResult[]): { frame: Fra
 
 /** The gravity combination with a snow case that is largest by its uniform equivalents (a cheap ranking; the analysis then takes the distribution). */
 function snowCombination(basis: DesignBasis, caseId: "snow-uniform" | "snow-drifted", selfWeightKPa: number): Combination {
-  const led = basis.combinations.filter((c) => c.purpose === "gravity" && c.terms.some((t) => t.caseId === caseId) && !c.terms.some((t) => t.caseId === (caseId === "snow-uniform" ? "snow-drifted" : "snow-uniform")));
-  const size = (c: Combination) => c.permanentFactor * (selfWeightKPa + basis.cases.services.peakKPa) + c.terms.reduce((sum, t) => sum + t.factor * basis.cases[t.caseId].uniformEquivalent.kPa, 0);
-  return led.reduce((w, c) => (size(c) > size(w) ? c : w));
+  const other = caseId === "snow-uniform" ? "snow-drifted" : "snow-uniform";
+  const led = basis.combinations.filter((c) => c.purpose === "gravity" && c.terms.some((t) => t.caseId === caseId) && !c.terms.some((t) => t.caseId === other));
+  return heaviestByUniformEquivalent(basis, led, selfWeightKPa);
 }
 
 export interface NetAnalysisInputs {

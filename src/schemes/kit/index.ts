@@ -13,6 +13,6 @@ export { pickChs, type AxialDemand } from "./pick-chs";
 export { STEEL_GRADES, STEEL_GRADE_CHOICES, steelGrade, type SteelGrade } from "./steel";
 export { CLADDING_CHOICES, findCladding, claddingCostItem } from "./cladding";
 export { ANALYSIS_OPTION, CABLE_ROOF_DEFLECTION_RATIO, FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
-export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction } from "./load-combinations";
+export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction, heaviestByUniformEquivalent } from "./load-combinations";
 export { capFloor } from "./cap-floor";
 export { analysedCombinations, planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";

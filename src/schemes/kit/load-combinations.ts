@@ -1,6 +1,6 @@
 import type { Brief } from "../../brief";
 import type { DesignBasis } from "../../loads/design-basis";
-import type { VariableCaseId } from "../../loads/design-combinations";
+import type { Combination, VariableCaseId } from "../../loads/design-combinations";
 import { designBasis } from "../../loads/design-basis";
 
 /** The actions of a combination that set a timber member's load duration. */
@@ -86,4 +86,16 @@ export function heaviestCase<T extends { purpose: "gravity" | "uplift"; surfaceP
   const gravity = cases.filter((c) => c.purpose === "gravity");
   if (gravity.length === 0) throw new RangeError("no gravity combination in the design basis");
   return gravity.reduce((worst, c) => (c.surfacePa + c.planPa > worst.surfacePa + worst.planPa ? c : worst));
+}
+
+/**
+ * Of the given combinations, the one whose total load is largest by its cases' uniform equivalents
+ * (γ_G × (self-weight + services) + Σ factor × equivalent, kPa): a cheap ranking, after which an
+ * analysis takes the chosen combination's distribution on plan.
+ */
+export function heaviestByUniformEquivalent(basis: DesignBasis, combinations: readonly Combination[], selfWeightKPa: number): Combination {
+  const size = (c: Combination) => c.permanentFactor * (selfWeightKPa + basis.cases.services.peakKPa) + c.terms.reduce((sum, t) => sum + t.factor * basis.cases[t.caseId].uniformEquivalent.kPa, 0);
+  const first = combinations[0];
+  if (!first) throw new RangeError("invalid combinations: none to choose from");
+  return combinations.reduce((w, c) => (size(c) > size(w) ? c : w), first);
 }

@@ -10,7 +10,7 @@ import { combinationAtPlanKPa } from "../../loads/combination-summary";
 import type { Combination } from "../../loads/design-combinations";
 import { latticeBuckling, latticeFrame, latticePlanLoads } from "../../analysis/lattice";
 import { frameSystem, solveFrameLinear, type FrameModel, type FrameSection } from "../../analysis/frame";
-import { check } from "../kit";
+import { check, heaviestByUniformEquivalent } from "../kit";
 
 /** Shear modulus of glulam as a share of E_0,mean: EN 14080:2013 Table 5 gives G_g,mean 650 MPa for 11,500–14,200 MPa, about E/16 (from memory). */
 const GLULAM_SHEAR_PER_MODULUS = 1 / 16;
@@ -56,9 +56,7 @@ export function timberNetFrame(mesh: GeodesicCap, sectionOfBand: readonly Glulam
 
 /** The gravity combination of the design basis that is largest by its uniform equivalents (the analysis then takes its distribution on plan). */
 function heaviestGravityCombination(basis: DesignBasis, selfWeightKPa: number): Combination {
-  const gravity = basis.combinations.filter((c) => c.purpose === "gravity");
-  const size = (c: Combination) => c.permanentFactor * (selfWeightKPa + basis.cases.services.peakKPa) + c.terms.reduce((sum, t) => sum + t.factor * basis.cases[t.caseId].uniformEquivalent.kPa, 0);
-  return gravity.reduce((w, c) => (size(c) > size(w) ? c : w));
+  return heaviestByUniformEquivalent(basis, basis.combinations.filter((c) => c.purpose === "gravity"), selfWeightKPa);
 }
 
 export interface TimberNetInputs {
