@@ -1,6 +1,6 @@
 // Home: what spanbook is, and the pages with who each is for.
 import "../src/notebook/style.css";
-import { PAGES, CAUTION } from "../src/notebook";
+import { PAGES, CAUTION } from "../src/notebook/pages";
 
 const main = document.createElement("main");
 main.className = "notebook";
