@@ -8,7 +8,10 @@ import demoStudy from "../data/demo-study.json";
 import { startPage, reactiveCell, staticCell, chartFigure, numberControl, controlGroup, signal, computed, effect, fmt, tableElement, studySignals, inputUsedBy, type Binding } from "../src/notebook";
 import { riskRangeChart, riskLowestChart, riskTornadoChart, riskRankChart, chartCaption } from "../src/charts";
 import { checkRiskInputs, RISK_LIMITS, RISK_METRICS, RISK_METRIC_LABELS, type RiskResult, type Tornado, type RiskMetric } from "../src/risk";
-import type { RiskWorkerReply, RiskWorkerRequest } from "../src/risk/risk-worker-messages";
+import type { RiskWorkerApi } from "../src/risk/risk-worker";
+import type { RiskProgress } from "../src/risk/run-risk";
+import { workerApi, callback } from "../src/kernel/worker-call";
+import { messageOf } from "../src/kernel/errors";
 import type { Study } from "../src/study";
 import type { SchemeId } from "../src/schemes";
 import { riskInputsEditor, ensureRiskStyle } from "../src/notebook";
@@ -109,29 +112,35 @@ runButton.addEventListener("click", () => {
   runButton.disabled = true;
   cancelButton.disabled = false;
   status.value = { state: "running", text: "Starting…", fraction: 0 };
-  worker = new Worker(new URL("../src/risk/risk-worker.ts", import.meta.url), { type: "module" });
+  const started = new Worker(new URL("../src/risk/risk-worker.ts", import.meta.url), { type: "module" });
+  worker = started;
   const designShare = 0.4;
-  worker.onmessage = (event: MessageEvent<RiskWorkerReply>) => {
-    const reply = event.data;
-    if (reply.type === "progress") {
-      const fraction = reply.phase === "designs" ? (designShare * reply.done) / reply.total : designShare + ((1 - designShare) * reply.done) / reply.total;
-      status.value = { state: "running", text: reply.phase === "designs" ? `Designing: ${reply.done} of ${reply.total} designs` : `Sampling: ${reply.done} of ${reply.total} samples`, fraction };
-    } else if (reply.type === "result") {
-      const mainThreadLongestMs = longest;
-      finish();
-      run.value = { study, result: reply.result, tornado: reply.tornado, samplingMs: reply.samplingMs, totalMs: reply.totalMs, progressMessages: reply.progressMessages, mainThreadLongestMs };
-      status.value = { state: "done", text: `Done: ${reply.result.samples} samples in ${fmt.one(reply.samplingMs / 1000)} s (with the one-at-a-time swings: ${fmt.one(reply.totalMs / 1000)} s), ${reply.progressMessages} progress updates; longest main-thread task ${fmt.int(mainThreadLongestMs)} ms.`, fraction: 1 };
-    } else {
-      finish();
-      status.value = { state: "failed", text: `The run failed: ${reply.message}`, fraction: 0 };
-    }
+  const onProgress = (p: RiskProgress) => {
+    if (worker !== started) return;
+    const fraction = p.phase === "designs" ? (designShare * p.done) / p.total : designShare + ((1 - designShare) * p.done) / p.total;
+    status.value = { state: "running", text: p.phase === "designs" ? `Designing: ${p.done} of ${p.total} designs` : `Sampling: ${p.done} of ${p.total} samples`, fraction };
   };
-  worker.onerror = (event) => {
+  started.onerror = (event) => {
+    if (worker !== started) return;
     finish();
     status.value = { state: "failed", text: `The risk worker failed: ${event.message}`, fraction: 0 };
   };
-  const request: RiskWorkerRequest = { type: "run", study, samples: study.risk.samples, seed: study.seed };
-  worker.postMessage(request);
+  workerApi<RiskWorkerApi>(started)
+    .api.run(study, study.risk.samples, study.seed, callback(onProgress))
+    .then(
+      (reply) => {
+        if (worker !== started) return;
+        const mainThreadLongestMs = longest;
+        finish();
+        run.value = { study, result: reply.result, tornado: reply.tornado, samplingMs: reply.samplingMs, totalMs: reply.totalMs, progressMessages: reply.progressMessages, mainThreadLongestMs };
+        status.value = { state: "done", text: `Done: ${reply.result.samples} samples in ${fmt.one(reply.samplingMs / 1000)} s (with the one-at-a-time swings: ${fmt.one(reply.totalMs / 1000)} s), ${reply.progressMessages} progress updates; longest main-thread task ${fmt.int(mainThreadLongestMs)} ms.`, fraction: 1 };
+      },
+      (error: unknown) => {
+        if (worker !== started) return;
+        finish();
+        status.value = { state: "failed", text: `The run failed: ${messageOf(error)}`, fraction: 0 };
+      },
+    );
 });
 cancelButton.addEventListener("click", () => {
   finish();

@@ -2,7 +2,7 @@
 // object of functions with `exposeWorker`; the page calls them as async functions through
 // `workerApi` (comlink carries the calls). `latestOnly` keeps a page from queueing stale work: while
 // a call runs, newer arguments replace any that wait, and an answer for old arguments is dropped.
-import { wrap, expose, type Remote } from "comlink";
+import { wrap, expose, proxy, type Remote } from "comlink";
 
 /** In a worker module: answers the page's calls with these functions. */
 export function exposeWorker<T extends object>(api: T): void {
@@ -12,6 +12,11 @@ export function exposeWorker<T extends object>(api: T): void {
 /** On the page: the worker's functions as typed async calls, and a way to stop the worker. */
 export function workerApi<T extends object>(worker: Worker): { api: Remote<T>; terminate(): void } {
   return { api: wrap<T>(worker), terminate: () => worker.terminate() };
+}
+
+/** A function the page passes to a worker call (progress, say): the worker calls it back on the page. */
+export function callback<F extends (...args: never[]) => unknown>(fn: F): F {
+  return proxy(fn);
 }
 
 /**

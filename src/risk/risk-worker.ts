@@ -1,35 +1,35 @@
-// Module Web Worker that runs the risk analysis off the page's main thread and posts progress.
-// The page starts it with new Worker(new URL("../src/risk/risk-worker.ts", import.meta.url), { type: "module" })
-// and cancels by terminating it (a running synchronous loop cannot read messages).
+// Module worker: runs the risk analysis off the page's main thread, through the one typed worker
+// interface (src/kernel/worker-call.ts). Progress comes back through a callback the page passes;
+// the page cancels by terminating the worker (a running synchronous loop cannot read messages).
+import { exposeWorker } from "../kernel/worker-call";
 import type { RiskStudy } from "./risk-study";
+import type { RiskResult } from "./risk-result";
 import { defaultCatalogue } from "../catalogue/default-catalogue";
 import { runRisk, type RiskProgress } from "./run-risk";
-import { riskTornado } from "./tornado";
-import type { RiskWorkerReply, RiskWorkerRequest } from "./risk-worker-messages";
-import { messageOf } from "../kernel/errors";
+import { riskTornado, type Tornado } from "./tornado";
 
-const scope = self as unknown as { onmessage: ((event: MessageEvent<RiskWorkerRequest>) => void) | null; postMessage(message: RiskWorkerReply): void };
+/** What a run answers. Timings are for display only. */
+export type RiskRun = { result: RiskResult; tornado: Tornado[]; samplingMs: number; totalMs: number; progressMessages: number };
 
-scope.onmessage = (event) => {
-  const request = event.data;
-  if (request.type !== "run") return;
-  const started = performance.now();
-  try {
-    const study: RiskStudy = request.study;
+export const riskWorkerApi = {
+  /** The seeded Monte Carlo run of the study and its one-at-a-time swings; `onProgress` hears each step. */
+  run(study: RiskStudy, samples: number, seed: number, onProgress: (progress: RiskProgress) => void): RiskRun {
+    const started = performance.now();
     const catalogue = defaultCatalogue();
-    let posted = 0;
+    let progressMessages = 0;
     const result = runRisk(study, catalogue, {
-      samples: request.samples,
-      seed: request.seed,
-      onProgress: (progress: RiskProgress) => {
-        posted += 1;
-        scope.postMessage({ type: "progress", ...progress });
+      samples,
+      seed,
+      onProgress: (progress) => {
+        progressMessages += 1;
+        onProgress(progress);
       },
     });
     const samplingMs = performance.now() - started;
     const tornado = riskTornado(study, catalogue);
-    scope.postMessage({ type: "result", result, tornado, samplingMs, totalMs: performance.now() - started, progressMessages: posted });
-  } catch (error) {
-    scope.postMessage({ type: "error", message: messageOf(error) });
-  }
+    return { result, tornado, samplingMs, totalMs: performance.now() - started, progressMessages };
+  },
 };
+export type RiskWorkerApi = typeof riskWorkerApi;
+
+exposeWorker(riskWorkerApi);
