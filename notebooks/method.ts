@@ -138,7 +138,7 @@ const pickerText = document.createElement("span");
 pickerText.textContent = "A is the current study; B is a study file you choose.";
 picker.append(
   pickerText,
-  ...studyFilePicker({
+  studyFilePicker({
     label: "Choose study file B…",
     inputLabel: "Study file to compare with the current study",
     id: "other-study",
