@@ -1,7 +1,9 @@
 // Work that may wait for the hand to stop (issues 13/14: the main thread is never blocked for more
 // than 50 ms while a slider moves). `settled` follows a signal only once it has stayed unchanged
 // for a moment; `inTurns` does a list of jobs one per animation frame, so several charts drawn
-// after an edit are several short tasks instead of one long one.
+// after an edit are several short tasks instead of one long one; `whenQuiet` puts work off (saving
+// the study, rebuilding its link) until the hand stops, and can do it at once when the page is left;
+// `perFrame` lets a cell draw at most once a frame, the newest value only.
 import { signal, effect, type ReadonlySignal } from "@preact/signals-core";
 
 /** Quiet time before a settled signal follows its source, ms: longer than the gap between two slider steps. */
@@ -55,4 +57,68 @@ export function inTurns(turns: { generation: number }, jobs: readonly (() => voi
     nextFrame(() => step(k + 1));
   };
   nextFrame(() => step(0));
+}
+
+/** Work put off until the hand stops, that can also be done at once (see `whenQuiet`). */
+export interface Deferred {
+  /** (Re)starts the quiet time: the work runs once nothing has asked for it for `quietMs`. */
+  schedule(): void;
+  /** Runs the work now if it is waiting (and only then), synchronously. */
+  flush(): void;
+  /** Drops the waiting work. */
+  cancel(): void;
+  /** Whether the work is waiting. */
+  readonly pending: boolean;
+}
+
+/**
+ * Runs `work` once `schedule` has not been called for `quietMs` (a drag's many steps make one run,
+ * after the last), or at once on `flush` (the page is about to be left: nothing may wait).
+ */
+export function whenQuiet(work: () => void, quietMs: number): Deferred {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const cancel = () => {
+    if (timer !== undefined) clearTimeout(timer);
+    timer = undefined;
+  };
+  const flush = () => {
+    if (timer === undefined) return;
+    cancel();
+    work();
+  };
+  return {
+    schedule() {
+      cancel();
+      timer = setTimeout(flush, quietMs);
+    },
+    flush,
+    cancel,
+    get pending() {
+      return timer !== undefined;
+    },
+  };
+}
+
+/**
+ * A signal that follows `source` at most once per animation frame, taking its newest value then:
+ * several values arriving within one frame are drawn once (only the last). `dispose` stops following.
+ */
+export function perFrame<T>(source: ReadonlySignal<T>): ReadonlySignal<T> & { dispose: () => void } {
+  const out = signal(source.peek());
+  const frame = typeof requestAnimationFrame === "function" ? requestAnimationFrame : (run: () => void) => setTimeout(run, 0);
+  let queued = false;
+  let live = true;
+  const dispose = effect(() => {
+    void source.value; // subscribe
+    if (queued || Object.is(source.peek(), out.peek())) return;
+    queued = true;
+    frame(() => {
+      queued = false;
+      if (live) out.value = source.peek();
+    });
+  });
+  return Object.assign(out, { dispose: () => {
+    live = false;
+    dispose();
+  } });
 }

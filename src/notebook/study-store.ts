@@ -24,6 +24,14 @@ import {
 import type { Binding } from "./controls";
 import { downloadText } from "./download";
 import { stampEdits } from "./stamp-edits";
+import { whenQuiet, type Deferred } from "./settle";
+
+/**
+ * Quiet time before an edit is saved and the address relinked, ms. Saving the study (a full
+ * check and a 57 kB write) and compressing its link on every step of a drag kept the slider from
+ * keeping up (issue 14); the page flushes at once when it is hidden or left, so nothing waits then.
+ */
+export const SAVE_QUIET_MS = 300;
 
 /** A message on the page about the study's safety, with what the user can do about it. */
 export interface Banner {
@@ -47,8 +55,14 @@ export interface StudyStore {
   bind<T>(path: readonly (string | number)[]): Binding<T>;
   /** Replaces the whole study if it validates; else changes nothing and returns the problems as text. */
   replace(study: Study): string | null;
-  /** The link that reopens the current study. */
+  /** The link that reopens the current study (always the current one, computed when read). */
   link: ReadonlySignal<string>;
+  /**
+   * Saves a waiting edit to browser storage and puts the study's link in the address now. Edits
+   * are saved once the hand stops (SAVE_QUIET_MS); the store flushes by itself when the page is
+   * hidden or left and before an in-page link is followed. Call it before anything reads the stored study.
+   */
+  flush(): void;
   /** Where the shown study came from: "link", "storage" (the working study saved in this browser), "defaults" (storage unreadable), "demo", or "file NAME". */
   origin: Signal<string>;
 }
@@ -184,6 +198,7 @@ export function createStudyStore(options: StoreOptions): StudyStore {
       return;
     }
     replace(result.study);
+    flush(); // a click, not a drag: saved at once
     show({
       id: "link",
       text: `The previous study (“${result.study.meta.title}”) is restored. The link's study (“${current.meta.title}”) is kept in its place.`,
@@ -195,19 +210,18 @@ export function createStudyStore(options: StoreOptions): StudyStore {
   const study = signal(opened.study);
   const notice = signal(opened.notices.join("\n"));
   banners.value = opened.banners;
-  const link = shortLink(study, defaults);
-
-  if (options.persist) {
-    stampEdits(study);
-    const fromOtherTab = persist(study, link, notice, opened);
-    followOtherTabs(study, fromOtherTab, show, replace);
-  }
+  const packed = signal<Packed | null>(null);
+  const link = computed(() => linkOf(study.value, packed.value, defaults));
+  let saving: Deferred | null = null;
+  const flush = () => saving?.flush();
+  if (options.persist) saving = startSaving(study, { notice, opened, relink: () => relink(study, defaults, packed) }, (fromOtherTab) => followOtherTabs(study, fromOtherTab, show, replace, flush));
 
   return {
     study,
     notice,
     banners,
     link,
+    flush,
     origin: signal(opened.origin),
     replace,
     bind<T>(path: readonly (string | number)[]): Binding<T> {
@@ -236,54 +250,111 @@ export function createStudyStore(options: StoreOptions): StudyStore {
   };
 }
 
-/**
- * The link that reopens the study: the plain fragment at once, then the compressed one when it is
- * ready (if the study has not changed meanwhile), so the address and "Copy link" stay short.
- */
-function shortLink(study: ReadonlySignal<Study>, defaults: Study): ReadonlySignal<string> {
-  const link = signal(`#s=${encodeStudyLink(study.peek(), defaults)}`);
-  effect(() => {
-    const current = study.value;
-    const plain = encodeStudyLink(current, defaults);
-    link.value = `#s=${plain}`;
-    if (typeof CompressionStream === "undefined") return;
-    compressStudyLink(plain).then(
-      (packed) => {
-        if (study.peek() === current) link.value = `#s=${packed}`;
-      },
-      () => undefined, // the plain link stays
-    );
-  });
-  return link;
+/** A compressed link and the study it was made from. */
+interface Packed {
+  of: Study;
+  text: string;
+}
+
+/** The link that reopens `study`: the compressed one when it was made from this very study, else the plain one. */
+function linkOf(study: Study, packed: Packed | null, defaults: Study): string {
+  return packed?.of === study ? `#s=${packed.text}` : `#s=${encodeStudyLink(study, defaults)}`;
+}
+
+/** Puts `fragment` ("" for none) in the address without a new history entry. */
+function toAddress(fragment: string): void {
+  try {
+    history.replaceState(null, "", `${location.pathname}${location.search}${fragment}`);
+  } catch {
+    // an address that cannot be changed (the page is going away): storage holds the study
+  }
 }
 
 /**
- * Saves the study to storage and the link to the URL on every change, not on opening (unless a
- * link was opened) and not for a study taken over from another tab. A study that fails the
- * schema (written around `replace`) is not saved, and the notice says why.
+ * Puts the study's plain link in the address at once, then the compressed one when it is ready
+ * (if the study has not changed meanwhile), so the address and "Copy link" stay short.
  */
-function persist(study: Signal<Study>, link: ReadonlySignal<string>, notice: Signal<string>, opened: Opened): { current: Study | null } {
+function relink(study: ReadonlySignal<Study>, defaults: Study, packed: Signal<Packed | null>): void {
+  const current = study.peek();
+  const plain = encodeStudyLink(current, defaults);
+  toAddress(`#s=${plain}`);
+  if (typeof CompressionStream === "undefined") return;
+  compressStudyLink(plain).then(
+    (text) => {
+      if (study.peek() !== current) return;
+      packed.value = { of: current, text };
+      toAddress(`#s=${text}`);
+    },
+    () => undefined, // the plain link stays
+  );
+}
+
+interface PersistParts {
+  notice: Signal<string>;
+  opened: Opened;
+  relink: () => void;
+}
+
+/** Stamps and saves the page's edits, flushes as the page goes, and follows other tabs (`follow`). */
+function startSaving(study: Signal<Study>, parts: PersistParts, follow: (fromOtherTab: { current: Study | null }) => void): Deferred {
+  stampEdits(study);
   const fromOtherTab: { current: Study | null } = { current: null };
+  const saving = persist(study, parts, fromOtherTab);
+  flushWhenLeaving(() => saving.flush());
+  follow(fromOtherTab);
+  return saving;
+}
+
+/**
+ * Saves the study to storage and its link to the address once an edit has settled (see
+ * SAVE_QUIET_MS), not on opening (unless a link was opened) and not for a study taken over from
+ * another tab. While an edit waits the address carries no study, so a reload opens the saved one
+ * (flushed as the page goes) rather than an older link. A study that fails the schema (written
+ * around `replace`) is not saved, and the notice says why.
+ */
+function persist(study: Signal<Study>, parts: PersistParts, fromOtherTab: { current: Study | null }): Deferred {
+  const { notice, opened } = parts;
+  const save = () => {
+    const current = study.peek();
+    if (current !== fromOtherTab.current) {
+      const checked = validateStudy(current);
+      if (!checked.ok) notice.value = `This change was not saved (the study would not open again):\n${describeProblems(checked.problems)}`;
+      else {
+        const error = writeStoredStudy(localStorage, current);
+        if (error) notice.value = error;
+      }
+    }
+    parts.relink();
+  };
+  const saving = whenQuiet(save, SAVE_QUIET_MS);
+  if (opened.writeNow) save();
+  else parts.relink();
   let first = true;
-  effect(() => history.replaceState(null, "", link.value));
   effect(() => {
-    const current = study.value;
-    const skip = (first && !opened.writeNow) || current === fromOtherTab.current;
-    first = false;
-    if (skip) return;
-    const checked = validateStudy(current);
-    if (!checked.ok) {
-      notice.value = `This change was not saved (the study would not open again):\n${describeProblems(checked.problems)}`;
+    void study.value; // every change, the page's own or another tab's
+    if (first) {
+      first = false;
       return;
     }
-    const error = writeStoredStudy(localStorage, current);
-    if (error) notice.value = error;
+    if (!saving.pending) toAddress("");
+    saving.schedule();
   });
-  return fromOtherTab;
+  return saving;
+}
+
+/** Saves a waiting edit as the page is hidden or left, and before an in-page link is followed. */
+function flushWhenLeaving(flush: () => void): void {
+  window.addEventListener("pagehide", flush);
+  document.addEventListener("visibilitychange", () => {
+    if (document.visibilityState === "hidden") flush();
+  });
+  document.addEventListener("click", (event) => {
+    if (event.target instanceof Element && event.target.closest("a[href]")) flush();
+  }, { capture: true });
 }
 
 /** Takes over the study another tab saves (the `storage` event), with a banner to keep this tab's version instead. */
-function followOtherTabs(study: Signal<Study>, fromOtherTab: { current: Study | null }, show: (b: Banner) => void, replace: (s: Study) => string | null): void {
+function followOtherTabs(study: Signal<Study>, fromOtherTab: { current: Study | null }, show: (b: Banner) => void, replace: (s: Study) => string | null, flush: () => void): void {
   window.addEventListener("storage", (event) => {
     if (event.key !== STORAGE_KEY || event.newValue === null) return;
     const result = studyFromJson(event.newValue);
@@ -299,7 +370,10 @@ function followOtherTabs(study: Signal<Study>, fromOtherTab: { current: Study | 
     show({
       id: "other-tab",
       text: `Another tab changed the study (“${result.study.meta.title}”); this page now shows that version, so both tabs agree.`,
-      actions: [{ label: "Keep this tab's version instead", run: () => void replace(mine) }],
+      actions: [{ label: "Keep this tab's version instead", run: () => {
+        replace(mine);
+        flush(); // a click: saved at once, so the other tab follows now
+      } }],
     });
   });
 }

@@ -1,8 +1,8 @@
 // The slider budget's helpers (issues 13/14): a settled signal waits for the hand to stop, and
 // jobs in turns run one per frame, a newer run dropping the older one's rest.
 import { describe, it, expect, vi, afterEach } from "vitest";
-import { signal } from "@preact/signals-core";
-import { settled, inTurns } from "../../../src/notebook/settle";
+import { signal, effect } from "@preact/signals-core";
+import { settled, inTurns, whenQuiet, perFrame } from "../../../src/notebook/settle";
 
 afterEach(() => {
   vi.useRealTimers();
@@ -51,5 +51,77 @@ describe("inTurns", () => {
     inTurns(turns, ["new1", "new2"].map((x) => () => seen.push(x)), () => seen.push("new done"));
     vi.runAllTimers();
     expect(seen).toEqual(["old1", "new1", "new2", "new done"]);
+  });
+});
+
+describe("whenQuiet", () => {
+  it("runs the work once, after the last of many steps and the quiet time", () => {
+    vi.useFakeTimers();
+    const runs: number[] = [];
+    let step = 0;
+    const job = whenQuiet(() => runs.push(step), 300);
+    for (step = 1; step <= 40; step++) {
+      job.schedule();
+      vi.advanceTimersByTime(16);
+    }
+    step = 40;
+    expect(runs).toEqual([]);
+    expect(job.pending).toBe(true);
+    vi.advanceTimersByTime(299 - 16);
+    expect(runs).toEqual([]);
+    vi.advanceTimersByTime(1);
+    expect(runs).toEqual([40]);
+    expect(job.pending).toBe(false);
+  });
+
+  it("flush runs waiting work at once and only once; with nothing waiting it does nothing", () => {
+    vi.useFakeTimers();
+    let runs = 0;
+    const job = whenQuiet(() => (runs += 1), 300);
+    job.flush();
+    expect(runs).toBe(0);
+    job.schedule();
+    job.flush();
+    expect(runs).toBe(1);
+    job.flush();
+    vi.advanceTimersByTime(1000);
+    expect(runs).toBe(1);
+  });
+
+  it("cancel drops the waiting work", () => {
+    vi.useFakeTimers();
+    let runs = 0;
+    const job = whenQuiet(() => (runs += 1), 300);
+    job.schedule();
+    job.cancel();
+    vi.advanceTimersByTime(1000);
+    job.flush();
+    expect(runs).toBe(0);
+  });
+});
+
+describe("perFrame", () => {
+  it("follows its source at most once a frame, with the newest value", () => {
+    vi.useFakeTimers();
+    const source = signal(1);
+    const drawn = perFrame(source);
+    const seen: number[] = [];
+    const stop = effect(() => {
+      seen.push(drawn.value);
+    });
+    source.value = 2;
+    source.value = 3;
+    source.value = 4;
+    expect(drawn.value).toBe(1);
+    vi.advanceTimersToNextTimer();
+    expect(drawn.value).toBe(4);
+    source.value = 5;
+    vi.runAllTimers();
+    expect(seen).toEqual([1, 4, 5]);
+    drawn.dispose();
+    source.value = 6;
+    vi.runAllTimers();
+    expect(drawn.value).toBe(5);
+    stop();
   });
 });

@@ -1,9 +1,9 @@
 // @vitest-environment happy-dom
 // The study store in a simulated page (happy-dom): what is written to browser storage and when,
 // links, other tabs, and the controls' refusals (issue 10, items 3, 4, 6, 7, 8).
-import { describe, it, expect, beforeEach } from "vitest";
+import { describe, it, expect, beforeEach, afterEach, vi } from "vitest";
 import demo from "../../../data/demo-study.json";
-import { createStudyStore } from "../../../src/notebook/study-store";
+import { createStudyStore, SAVE_QUIET_MS } from "../../../src/notebook/study-store";
 import { numberControl, selectControl } from "../../../src/notebook/controls";
 import { briefControls } from "../../../src/notebook/brief-controls";
 import { schemeOptionControls } from "../../../src/notebook/scheme-panel";
@@ -36,10 +36,18 @@ function type(input: HTMLInputElement, text: string, commit = false): void {
 const field = (id: string) => document.getElementById(id) as HTMLInputElement;
 const messageOf = (id: string) => document.getElementById(`${id}-message`)?.textContent ?? "";
 
+/** The hand stops: the quiet time passes and the waiting save runs. */
+const settle = () => vi.advanceTimersByTime(SAVE_QUIET_MS);
+
 beforeEach(() => {
+  vi.useFakeTimers();
   localStorage.clear();
   history.replaceState(null, "", "/compare.html");
   document.body.replaceChildren();
+});
+afterEach(() => {
+  vi.runOnlyPendingTimers(); // no store left with a save waiting for the next test
+  vi.useRealTimers();
 });
 
 describe("item 3: controls check the candidate study against the schema", () => {
@@ -140,6 +148,7 @@ describe("item 4: a stored study that fails validation is never overwritten", ()
     expect(banner?.text).toMatch(/could not be used \(schemaVersion.*kept in browser storage under "spanbook\.study\.unreadable"/s);
     expect(banner?.actions.map((a) => a.label)).toEqual(["Download the unreadable study"]);
     store.bind<number>(["brief", "spanM"]).set(150);
+    settle();
     expect(stored()?.brief.spanM).toBe(150);
     expect(localStorage.getItem(UNREADABLE_KEY)).toBe(newer);
   });
@@ -201,6 +210,93 @@ describe("item 6: another tab's save", () => {
     expect(store.study.value.brief.spanM).toBe(160);
     expect(localStorage.getItem(UNREADABLE_KEY)).toBe("{nope");
     store.bind<number>(["brief", "spanM"]).set(150);
+    settle();
     expect(stored()?.brief.spanM).toBe(150);
+  });
+});
+
+describe("issue 14: saved once the hand stops, and never lost when the page goes", () => {
+  const drag = (store: ReturnType<typeof open>, spans: readonly number[]) => {
+    const span = store.bind<number>(["brief", "spanM"]);
+    for (const x of spans) {
+      span.set(x);
+      vi.advanceTimersByTime(16);
+    }
+  };
+  const spans = Array.from({ length: 20 }, (_, k) => 100 + k);
+
+  it("a drag of 20 steps writes nothing to browser storage until the quiet time after the last step, then the last span", () => {
+    const store = open();
+    const span = store.bind<number>(["brief", "spanM"]);
+    for (const x of spans) {
+      span.set(x);
+      vi.advanceTimersByTime(16);
+      expect(localStorage.getItem(STORAGE_KEY)).toBeNull();
+    }
+    vi.advanceTimersByTime(SAVE_QUIET_MS - 17);
+    expect(localStorage.getItem(STORAGE_KEY)).toBeNull();
+    vi.advanceTimersByTime(1);
+    expect(stored()?.brief.spanM).toBe(119);
+  });
+
+  it("while an edit waits the address carries no study; once saved it carries the study's link", () => {
+    const store = open();
+    expect(location.hash).toMatch(/^#s=/);
+    drag(store, spans);
+    expect(location.hash).toBe("");
+    // "Copy link" reads the store's link: always the current study, saved or not.
+    expect(store.link.value).toBe(`#s=${encodeStudyLink(store.study.value, defaultStudy())}`);
+    settle();
+    expect(location.hash).toMatch(/^#s=/);
+  });
+
+  it("pagehide saves the waiting edit at once", () => {
+    const store = open();
+    drag(store, spans);
+    expect(stored()).toBeNull();
+    window.dispatchEvent(new Event("pagehide"));
+    expect(stored()?.brief.spanM).toBe(119);
+    expect(location.hash).toMatch(/^#s=/);
+  });
+
+  it("the page going hidden saves the waiting edit at once", () => {
+    const store = open();
+    drag(store, spans);
+    Object.defineProperty(document, "visibilityState", { value: "hidden", configurable: true });
+    try {
+      document.dispatchEvent(new Event("visibilitychange"));
+    } finally {
+      Object.defineProperty(document, "visibilityState", { value: "visible", configurable: true });
+    }
+    expect(stored()?.brief.spanM).toBe(119);
+  });
+
+  it("following a link on the page saves the waiting edit first; another click does not", () => {
+    const store = open();
+    const a = document.createElement("a");
+    a.href = "#nowhere";
+    a.append(document.createElement("span"));
+    const button = document.createElement("button");
+    document.body.append(a, button);
+    drag(store, spans);
+    button.click();
+    expect(stored()).toBeNull();
+    a.querySelector("span")?.click();
+    expect(stored()?.brief.spanM).toBe(119);
+  });
+
+  it("another tab's save arriving while an edit waits is taken over; this tab's edit is offered back, not written over it", () => {
+    const store = open();
+    drag(store, [150]);
+    const theirs = setIn(defaultStudy(), ["brief", "riseM"], 30);
+    const text = studyToJson(theirs);
+    localStorage.setItem(STORAGE_KEY, text);
+    window.dispatchEvent(new StorageEvent("storage", { key: STORAGE_KEY, newValue: text, oldValue: null }));
+    settle();
+    expect(localStorage.getItem(STORAGE_KEY)).toBe(text);
+    expect(store.study.value.brief.riseM).toBe(30);
+    store.banners.value.find((b) => b.id === "other-tab")?.actions[0]?.run();
+    expect(stored()?.brief.spanM).toBe(150);
+    expect(stored()?.brief.riseM).toBe(22);
   });
 });
