@@ -59,6 +59,7 @@ describe("edits through the controls (fast-check, happy-dom)", () => {
           else expect(message).toMatch(new RegExp(`in force: ${String(inStudy).replace(/[.+]/g, "\\$&")}`));
           input.blur();
         }
+        store.flush(); // the page is left (pagehide): a save waiting for the hand to stop is written now
         const reopened = readStoredStudy(localStorage, defaultStudy);
         expect(reopened?.message ?? null).toBeNull();
         expect(reopened ? reopened.study : store.study.value).toEqual(store.study.value);
