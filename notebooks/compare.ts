@@ -28,6 +28,7 @@ import {
   gapNotice,
   errorBox,
   settled,
+  perFrame,
   inTurns,
   proportionsSentences,
 } from "../src/notebook";
@@ -136,8 +137,19 @@ staticCell(
 
 const currency = computed(() => store.study.value.cost.onCosts.currency);
 
-reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answer" }, () => {
+// The results with the span and the chart caption of the brief they were designed for, taken when
+// they arrive (every enabled design is then current, so the brief now is theirs). The table, the
+// answer and the status lines draw them on the next frame, only the newest if several came meanwhile
+// (issue 14: a slider that keeps up); the charts wait for them to be still.
+const arrived = signal({ list: results.peek(), spanM: resultsSpanM.peek(), caption: caption.peek() });
+effect(() => {
   const list = results.value;
+  arrived.value = { list, spanM: resultsSpanM.peek(), caption: caption.peek() };
+});
+const drawn = perFrame(arrived);
+
+reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answer" }, () => {
+  const { list } = drawn.value;
   if (list === null) return "Designing the schemes…";
   if (list.length === 0) return "Switch on at least one scheme to compare.";
   const wrap = document.createElement("div");
@@ -154,12 +166,12 @@ reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answe
 });
 
 reactiveCell(outputs, { id: "comparison", title: "Side by side" }, () => {
-  const list = results.value;
+  const { list, spanM } = drawn.value;
   if (list === null) return "Designing the schemes…";
   if (list.length === 0) return "Switch on at least one scheme to compare.";
   const wrap = document.createElement("div");
   wrap.className = "table-scroll";
-  wrap.append(resultsTable(list, currency.value, resultsSpanM.value));
+  wrap.append(resultsTable(list, currency.value, spanM));
   const gaps = gapNotice(tableGaps(list, { factors: factorRows.value, rates: rateRows.value }), "comparison-gaps");
   if (gaps) wrap.append(gaps);
   return wrap;
@@ -170,15 +182,16 @@ const includeExcluded = signal(false);
 // The option charts wait for the hand to stop (issue 13/14: no task over 50 ms while the span slider
 // moves): they follow the results once these have been still for a moment, and the four are drawn
 // one per frame into their own slots (the previous drawing stays until its successor is ready).
-const calmResults = settled(results);
+const calm = settled(arrived);
 const chartTurns = { generation: 0 };
 const chartGrid = document.createElement("div");
 chartGrid.className = "grid charts";
 const chartSlots = Array.from({ length: 4 }, () => chartGrid.appendChild(document.createElement("div")));
 const chartCell = reactiveCell(outputs, { id: "comparison-charts", title: "Option charts — every figure per m² of usable floor" }, () => {
-  const list = calmResults.value;
+  const { list, caption: resultsCaption } = calm.value;
   if (list === null || list.length === 0) return null;
-  const common = { caption: caption.value, includeExcluded: includeExcluded.value };
+  // the caption of the brief these results are for: the live one moves with every step of a drag
+  const common = { caption: resultsCaption, includeExcluded: includeExcluded.value };
   const charts: [() => Plot.PlotOptions, string][] = [
     [() => massByMaterialChart(list, { ...common, title: "Roof mass per m² of usable floor, by material" }), "mass-by-material"],
     [() => carbonByModuleChart(list, { ...common, title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)" }), "carbon-by-module"],
@@ -230,14 +243,16 @@ for (const s of schemes) {
   heading.style.borderLeft = `6px solid ${SCHEME_COLOURS[id]}`;
   heading.style.paddingLeft = "0.5rem";
   panel.append(heading);
+  // The status line and the proportions drawn on the next frame, the newest result only (like the table).
+  const status = perFrame(computed(() => ({ on: s.enabled.value, result: s.result.value })));
   reactiveCell(panel, { id: `${id}-summary` }, () => {
-    if (!s.enabled.value) return "Switched off.";
-    const result = s.result.value;
+    const { on, result } = status.value;
+    if (!on) return "Switched off.";
     return result === null ? "Designing…" : schemeStatusLine(result);
   });
   // The proportions the search chose and how much the runner-up differs (issue 12 item 4), under the status line.
   reactiveCell(panel, { id: `${id}-proportions`, className: "proportions" }, () => {
-    const choice = s.enabled.value ? s.result.value?.proportions : undefined;
+    const choice = status.value.on ? status.value.result?.proportions : undefined;
     if (!choice) return null;
     const wrap = document.createElement("div");
     for (const sentence of proportionsSentences(s.model, choice)) {
@@ -303,7 +318,9 @@ staticCell(inputs, { id: "study", title: "Study" }, studyDetailsEditor(store));
 
 // While newer designs are on their way the results say so (aria-busy), and a worker failure is shown.
 effect(() => {
-  for (const id of ["verdict", "comparison", "comparison-charts"]) document.getElementById(`cell-${id}`)?.setAttribute("aria-busy", String(busy.value));
+  // busy until the newest results are drawn too (the table follows them a frame later)
+  const waiting = busy.value || drawn.value !== arrived.value;
+  for (const id of ["verdict", "comparison", "comparison-charts"]) document.getElementById(`cell-${id}`)?.setAttribute("aria-busy", String(waiting));
 });
 effect(() => {
   if (failure.value) store.notice.value = `A design could not be made: ${failure.value}`;

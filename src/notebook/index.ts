@@ -8,7 +8,7 @@ export { downloadText, downloadBlob } from "./download";
 export { fmt, tableElement } from "./format";
 export { signal, computed, effect, batch, type Signal, type ReadonlySignal } from "@preact/signals-core";
 export { chartFigure, svgText, svgToPng } from "./chart";
-export { settled, inTurns, nextFrame, SETTLE_MS } from "./settle";
+export { settled, inTurns, nextFrame, perFrame, SETTLE_MS } from "./settle";
 export { proportionsSentences, proportionText } from "./proportions-text";
 export { briefControls } from "./brief-controls";
 export { keyValues } from "./key-values";
