@@ -9,7 +9,7 @@
  * transformation Lanczos method", Math. Comp. 35 (1980); Parlett, The Symmetric Eigenvalue Problem
  * (1980), ch. 13. One factorisation of K, one solve per step.
  */
-import { type EnvelopeMatrix, factorLDL } from "./sparse";
+import { type SymmetricMatrix, factorLDL } from "./sparse";
 
 export interface BucklingResult {
   converged: boolean;
@@ -102,8 +102,8 @@ function ritz(alpha: number[], beta: number[], count: number) {
  * on the 160 m lattice, the factors equal to 8 digits).
  */
 export function lowestBucklingFactors(
-  K: EnvelopeMatrix,
-  G: EnvelopeMatrix,
+  K: SymmetricMatrix,
+  G: SymmetricMatrix,
   count = 3,
   options: { tolerance?: number; maxSteps?: number; solve?: (b: Float64Array) => Float64Array } = {},
 ): BucklingResult {
@@ -165,7 +165,7 @@ export function lowestBucklingFactors(
 }
 
 /** Number of buckling factors below σ: the negative pivots of K − σ·G (Sylvester's law of inertia). */
-export function factorsBelow(K: EnvelopeMatrix, G: EnvelopeMatrix, sigma: number): number {
+export function factorsBelow(K: SymmetricMatrix, G: SymmetricMatrix, sigma: number): number {
   const A = K.copy();
   for (let k = 0; k < A.values.length; k++) A.values[k]! -= sigma * G.values[k]!;
   const f = factorLDL(A, 0);

@@ -14,7 +14,9 @@
  * freedoms and of the support reactions). Otherwise the result says `converged: false` and why.
  */
 import { type CableModel, checkCableModel, flatCoordinates, flatLoads, restLengths } from "./model";
-import { type EnvelopeMatrix, factorLDL, numberEquations } from "./sparse";
+import { type Factorisation, factorLDL, numberEquations } from "./sparse";
+import type { SparsePattern, SparseSymmetricMatrix } from "./sparse-ldl";
+import { SecantUpdates } from "./secant";
 
 export interface CableSolverOptions {
   /** Load steps (equal increments of the load factor), default 1. */
@@ -63,7 +65,25 @@ interface Prepared {
   load: Float64Array;
   prescribed: Float64Array;
   equationOf: Int32Array;
-  matrix: () => EnvelopeMatrix;
+  matrix: () => SparseSymmetricMatrix;
+  /** Per member, the 21 positions in the matrix's values of its 6×6 tangent's upper triangle (−1: restrained). */
+  slots: Int32Array;
+}
+
+/** Member tangent slots by pattern (one pattern ⇔ one topology, members in one order: see numberEquations). */
+const slotCache = new WeakMap<SparsePattern, Int32Array>();
+
+function memberSlots(pattern: SparsePattern, equationOf: Int32Array, members: CableModel["members"]): Int32Array {
+  const known = slotCache.get(pattern);
+  if (known) return known;
+  const slots = new Int32Array(21 * members.length);
+  members.forEach((m, k) => {
+    const eq = [0, 1, 2].map((d) => equationOf[3 * m.i + d]!).concat([0, 1, 2].map((d) => equationOf[3 * m.j + d]!));
+    let s = 21 * k;
+    for (let a = 0; a < 6; a++) for (let b = a; b < 6; b++) slots[s++] = eq[a]! >= 0 && eq[b]! >= 0 ? pattern.slot(eq[a]!, eq[b]!) : -1;
+  });
+  slotCache.set(pattern, slots);
+  return slots;
 }
 
 function prepare(model: CableModel): Prepared {
@@ -78,12 +98,13 @@ function prepare(model: CableModel): Prepared {
       prescribed[3 * s.node + d] = s.displacementM?.[d] ?? 0;
     }
   }
-  const { equationOf, matrix } = numberEquations(n, 3, model.members.map((m) => [m.i, m.j]), (node, d) => fixed[3 * node + d] === 1);
-  return { model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix };
+  const { equationOf, matrix, pattern } = numberEquations(n, 3, model.members.map((m) => [m.i, m.j]), (node, d) => fixed[3 * node + d] === 1);
+  const slots = memberSlots(pattern, equationOf, model.members);
+  return { model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix, slots };
 }
 
 /** Member forces and the internal force vector at displacements u; optionally the tangent. */
-function internal(p: Prepared, u: Float64Array, tangent?: EnvelopeMatrix): { forces: Float64Array; fint: Float64Array; slack: boolean[] } {
+function internal(p: Prepared, u: Float64Array, tangent?: SparseSymmetricMatrix): { forces: Float64Array; fint: Float64Array; slack: boolean[] } {
   const { model, x0, restM, equationOf } = p;
   const forces = new Float64Array(model.members.length);
   const fint = new Float64Array(x0.length);
@@ -112,23 +133,22 @@ function internal(p: Prepared, u: Float64Array, tangent?: EnvelopeMatrix): { for
       fint[a + d]! -= force * e[d]!;
       fint[b + d]! += force * e[d]!;
     }
-    if (tangent) addBarTangent(tangent, equationOf, m.i, m.j, e, axial, force / l);
+    if (tangent) addBarTangent(tangent.values, p.slots, k, e, axial, force / l);
   });
   return { forces, fint, slack };
 }
 
-/** Adds the 6×6 bar tangent [k −k; −k k], k = axial·e eᵀ + geometric·(I − e eᵀ). */
-function addBarTangent(K: EnvelopeMatrix, equationOf: Int32Array, i: number, j: number, e: number[], axial: number, geometric: number): void {
-  for (let r = 0; r < 3; r++) {
-    for (let c = 0; c < 3; c++) {
+/** Adds the 6×6 bar tangent [k −k; −k k], k = axial·e eᵀ + geometric·(I − e eᵀ), through the member's slots. */
+function addBarTangent(values: Float64Array, slots: Int32Array, member: number, e: number[], axial: number, geometric: number): void {
+  let s = 21 * member;
+  for (let a = 0; a < 6; a++) {
+    for (let b = a; b < 6; b++, s++) {
+      const slot = slots[s]!;
+      if (slot < 0) continue;
+      const r = a % 3;
+      const c = b % 3;
       const k = (axial - geometric) * e[r]! * e[c]! + (r === c ? geometric : 0);
-      const ir = equationOf[3 * i + r]!;
-      const jr = equationOf[3 * j + r]!;
-      const ic = equationOf[3 * i + c]!;
-      const jc = equationOf[3 * j + c]!;
-      if (ir >= 0 && ic >= 0 && ir >= ic) K.add(ir, ic, k);
-      if (jr >= 0 && jc >= 0 && jr >= jc) K.add(jr, jc, k);
-      if (ir >= 0 && jc >= 0) K.add(ir, jc, -k);
+      values[slot]! += a < 3 === b < 3 ? k : -k;
     }
   }
 }
@@ -144,7 +164,7 @@ interface State {
 }
 
 /** Residual (free freedoms) and reactions at load factor λ. */
-function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSolverOptions, tangent?: EnvelopeMatrix): State {
+function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSolverOptions, tangent?: SparseSymmetricMatrix): State {
   const { forces, fint, slack } = internal(p, u, tangent);
   const extra = options.loadAt ? options.loadAt(Float64Array.from(p.x0, (x, k) => x + u[k]!)) : undefined;
   const residual = new Float64Array(tangent ? tangent.n : countFree(p));
@@ -185,6 +205,16 @@ function describeEquation(p: Prepared, equation: number): string {
 }
 
 type NewtonOutcome = { ok: true; state: State; iterations: number } | { ok: false; reason: string; iterations: number; state: State };
+
+/** v − u over the free freedoms, by equation. */
+function freeDifference(p: Prepared, v: Float64Array, u: Float64Array): Float64Array {
+  const d = new Float64Array(countFree(p));
+  for (let k = 0; k < u.length; k++) {
+    const eq = p.equationOf[k]!;
+    if (eq >= 0) d[eq] = v[k]! - u[k]!;
+  }
+  return d;
+}
 
 /** u + s·Δu over the free freedoms. */
 function stepped(p: Prepared, u: Float64Array, du: Float64Array, s: number): Float64Array {
@@ -230,26 +260,64 @@ function lineSearch(p: Prepared, u: Float64Array, du: Float64Array, state: State
   return Number.isFinite(trial.residualN) && Math.abs(g(trial)) <= 0.5 * Math.abs(g0) ? trial : best;
 }
 
-/** Newton–Raphson with a line search from state u to equilibrium at load factor λ. */
+/**
+ * A factorised tangent is kept for the next iteration (its inverse corrected by BFGS updates,
+ * secant.ts) while the residual falls at least this much per iteration; otherwise it is refreshed
+ * at the current state. Near the solution Newton's own rate is far below it, so a good tangent is
+ * never thrown away; an old one costs a few cheap solves instead of a factorisation (≈ 15 solves'
+ * work on the 160 m net). Our choice: 0.25 gave the fewest factorisations on the bench's net
+ * (0.5: as many, more iterations; 0.9: half as many again, one combination at 41 iterations).
+ */
+const CHORD_RATE = 0.25;
+
+/** The factorised tangent at the unloaded state, by model (same members and nodes ⇒ same tangent). */
+const initialTangents = new WeakMap<CableModel["members"], { nodes: CableModel["nodes"]; factor: Factorisation }>();
+
+function tangentAt(p: Prepared, u: Float64Array, K: SparseSymmetricMatrix): Factorisation {
+  const atRest = u.every((v) => v === 0);
+  const known = atRest ? initialTangents.get(p.model.members) : undefined;
+  if (known && known.nodes === p.model.nodes) return known.factor;
+  K.values.fill(0);
+  internal(p, u, K);
+  const factor = factorLDL(K);
+  if (atRest) initialTangents.set(p.model.members, { nodes: p.model.nodes, factor });
+  return factor;
+}
+
+/**
+ * Newton–Raphson with a line search from state u to equilibrium at load factor λ; the tangent is
+ * refactorised only when the last step did not cut the residual by CHORD_RATE, and between
+ * refactorisations BFGS-corrected (every factorisation is checked for a mechanism and, unless
+ * allowed, for loss of positive definiteness). The tangent at rest is factorised once per model
+ * and shared by every load case solved on it.
+ */
 function newton(p: Prepared, start: Float64Array, lambda: number, options: CableSolverOptions): NewtonOutcome {
   const tolerance = options.tolerance ?? 1e-6;
   const maxIterations = options.maxIterations ?? 40;
   let u = withPrescribed(p, start, lambda);
   const K = p.matrix();
-  let state = evaluate(p, u, lambda, options, K);
+  let state = evaluate(p, u, lambda, options);
+  let solve: ((b: Float64Array) => Float64Array) | undefined;
+  let updates = new SecantUpdates();
   for (let iteration = 0; ; iteration++) {
     if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
     if (state.residualN <= tolerance * state.appliedN || state.appliedN === 0) return { ok: true, state, iterations: iteration };
     if (iteration >= maxIterations) return { ok: false, reason: `no equilibrium after ${iteration} Newton iterations (residual ${state.residualN.toExponential(2)} N against ${state.appliedN.toExponential(2)} N applied)`, iterations: iteration, state };
-    const f = factorLDL(K);
-    if (!f.ok) return { ok: false, reason: `the stiffness is singular at ${describeEquation(p, f.equation)}: a mechanism (a node held only by slack cables, or too few supports)`, iterations: iteration, state };
-    if (f.negativePivots > 0 && !options.allowUnstable) {
-      return { ok: false, reason: `the tangent stiffness lost positive definiteness (${f.negativePivots} negative pivots): a limit point or bifurcation, the structure is unstable under this load`, iterations: iteration, state };
+    if (!solve) {
+      const f = tangentAt(p, u, K);
+      if (!f.ok) return { ok: false, reason: `the stiffness is singular at ${describeEquation(p, f.equation)}: a mechanism (a node held only by slack cables, or too few supports)`, iterations: iteration, state };
+      if (f.negativePivots > 0 && !options.allowUnstable) {
+        return { ok: false, reason: `the tangent stiffness lost positive definiteness (${f.negativePivots} negative pivots): a limit point or bifurcation, the structure is unstable under this load`, iterations: iteration, state };
+      }
+      solve = f.solve;
+      updates = new SecantUpdates();
     }
-    const du = f.solve(state.residual);
-    u = lineSearch(p, u, du, state, lambda, options).u;
-    K.values.fill(0);
-    state = evaluate(p, u, lambda, options, K);
+    const du = updates.direction(state.residual, solve);
+    const before = state;
+    state = lineSearch(p, u, du, state, lambda, options);
+    updates.push(freeDifference(p, state.u, u), Float64Array.from(before.residual, (r, k) => r - state.residual[k]!));
+    u = state.u;
+    if (!(state.residualN <= CHORD_RATE * before.residualN)) solve = undefined;
   }
 }
 

@@ -21,7 +21,7 @@ export function frameTooLarge(nodes: number, remedy: string): string | null {
  * Node freedoms: ux, uy, uz, θx, θy, θz (right-hand rotations about the global axes).
  */
 import type { Vec3 } from "./model";
-import { type EnvelopeMatrix, factorLDL, numberEquations } from "./sparse";
+import { type SymmetricMatrix, factorLDL, numberEquations } from "./sparse";
 
 export interface FrameSection {
   /** E·A, N */
@@ -134,7 +134,7 @@ export function frameSystem(model: FrameModel) {
   const { equationOf, matrix, count } = numberEquations(n, 6, model.members.map((m) => [m.i, m.j]), (node, d) => fixed[6 * node + d] === 1);
   const axes = model.members.map((m) => memberAxes(model.nodes[m.i]!, model.nodes[m.j]!, m.zReference));
   /** Assembles Σ Tᵀ k T over the members (elastic, and/or geometric with the given axial forces). */
-  const assemble = (elastic: boolean, axialN?: Float64Array): EnvelopeMatrix => {
+  const assemble = (elastic: boolean, axialN?: Float64Array): SymmetricMatrix => {
     const K = matrix();
     model.members.forEach((m, e) => {
       const { R, L } = axes[e]!;

@@ -12,6 +12,8 @@
  * this envelope LDLᵀ takes a few ms on the same matrix (see the commit that added it).
  */
 
+import { SparsePattern, SparseSymmetricMatrix, factorSparseLDL, minimumDegreeOrder } from "./sparse-ldl";
+
 /** Symmetric matrix stored by rows of its lower triangle from the first nonzero column to the diagonal. */
 export class EnvelopeMatrix {
   /** Order of the matrix. */
@@ -74,6 +76,9 @@ export class EnvelopeMatrix {
   }
 }
 
+/** The matrices the analysis layer assembles: the envelope kind here or the sparse kind of sparse-ldl.ts. */
+export type SymmetricMatrix = EnvelopeMatrix | SparseSymmetricMatrix;
+
 /** The outcome of an LDLᵀ factorisation. */
 export type Factorisation =
   | { ok: true; solve: (b: Float64Array) => Float64Array; negativePivots: number }
@@ -83,7 +88,8 @@ export type Factorisation =
  * Factors A = L·D·Lᵀ in place (A's values are overwritten). A pivot smaller than
  * relativeTolerance × |a_ii| (the diagonal before factoring) counts as zero: the matrix is singular.
  */
-export function factorLDL(a: EnvelopeMatrix, relativeTolerance = 1e-11): Factorisation {
+export function factorLDL(a: SymmetricMatrix, relativeTolerance = 1e-11): Factorisation {
+  if (a instanceof SparseSymmetricMatrix) return factorSparseLDL(a, relativeTolerance);
   const { n, first, start, values } = a;
   const d = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -201,39 +207,72 @@ function pseudoPeripheral(seed: number, adjacency: number[][]): number {
 }
 
 /**
- * Equation numbering for a model of nodes with `dofPerNode` freedoms each: nodes taken in reverse
- * Cuthill–McKee order, restrained freedoms left out (−1). Returns the equation of each freedom and
- * the envelope matrix that holds every element coupling (elements given by their node lists).
+ * Equation numbering for a model of nodes with `dofPerNode` freedoms each: nodes taken in
+ * minimum-degree order (sparse-ldl.ts), restrained freedoms left out (−1). Returns the equation of
+ * each freedom and a factory of sparse matrices whose pattern holds every element coupling
+ * (elements given by their node lists); the pattern and its symbolic factorisation are shared by
+ * every matrix the factory makes.
  */
 export function numberEquations(
   nodeCount: number,
   dofPerNode: number,
   elements: readonly (readonly number[])[],
   restrained: (node: number, dof: number) => boolean,
-): { equationOf: Int32Array; matrix: () => EnvelopeMatrix; count: number } {
+): Numbering {
+  const key = numberingKey(nodeCount, dofPerNode, elements, restrained);
+  const known = numberings.get(key);
+  if (known) return known;
+  const numbering = numberAnew(nodeCount, dofPerNode, elements, restrained);
+  if (numberings.size >= 16) numberings.delete(numberings.keys().next().value!);
+  numberings.set(key, numbering);
+  return numbering;
+}
+
+export interface Numbering {
+  equationOf: Int32Array;
+  matrix: () => SparseSymmetricMatrix;
+  count: number;
+  pattern: SparsePattern;
+}
+
+/**
+ * The last few numberings, by topology: a prestress search or a set of load combinations builds
+ * model after model of the same members and supports, and the ordering and symbolic factorisation
+ * depend only on that. (Equal keys give identical numberings: the key holds every input.)
+ */
+const numberings = new Map<string, Numbering>();
+
+function numberingKey(nodeCount: number, dofPerNode: number, elements: readonly (readonly number[])[], restrained: (node: number, dof: number) => boolean): string {
+  const fixed: number[] = [];
+  for (let node = 0; node < nodeCount; node++) for (let d = 0; d < dofPerNode; d++) if (restrained(node, d)) fixed.push(node * dofPerNode + d);
+  return `${nodeCount}/${dofPerNode}/${elements.map((el) => el.join(",")).join(";")}/${fixed.join(",")}`;
+}
+
+function numberAnew(
+  nodeCount: number,
+  dofPerNode: number,
+  elements: readonly (readonly number[])[],
+  restrained: (node: number, dof: number) => boolean,
+): Numbering {
   const pairs: [number, number][] = [];
   for (const el of elements) for (let a = 0; a < el.length; a++) for (let b = a + 1; b < el.length; b++) pairs.push([el[a]!, el[b]!]);
-  const order = reverseCuthillMcKee(nodeCount, pairs);
+  const order = minimumDegreeOrder(nodeCount, pairs);
   const equationOf = new Int32Array(nodeCount * dofPerNode).fill(-1);
   let count = 0;
   for (const node of order) for (let d = 0; d < dofPerNode; d++) if (!restrained(node, d)) equationOf[node * dofPerNode + d] = count++;
-  const first = new Int32Array(count);
-  for (let e = 0; e < count; e++) first[e] = e;
-  const lowest = (node: number) => {
-    let low = Number.MAX_SAFE_INTEGER;
-    for (let d = 0; d < dofPerNode; d++) {
-      const eq = equationOf[node * dofPerNode + d]!;
-      if (eq >= 0 && eq < low) low = eq;
+  const columns: Set<number>[] = Array.from({ length: count }, (_, k) => new Set([k]));
+  const couple = (p: number, q: number) => {
+    for (let a = 0; a < dofPerNode; a++) {
+      const i = equationOf[p * dofPerNode + a]!;
+      if (i < 0) continue;
+      for (let b = 0; b < dofPerNode; b++) {
+        const j = equationOf[q * dofPerNode + b]!;
+        if (j >= 0) columns[Math.max(i, j)]!.add(Math.min(i, j));
+      }
     }
-    return low;
   };
-  for (const el of elements) {
-    let low = Number.MAX_SAFE_INTEGER;
-    for (const node of el) low = Math.min(low, lowest(node));
-    for (const node of el) for (let d = 0; d < dofPerNode; d++) {
-      const eq = equationOf[node * dofPerNode + d]!;
-      if (eq >= 0 && low < first[eq]!) first[eq] = low;
-    }
-  }
-  return { equationOf, count, matrix: () => new EnvelopeMatrix(first) };
+  for (let node = 0; node < nodeCount; node++) couple(node, node);
+  for (const [p, q] of pairs) couple(p, q);
+  const pattern = new SparsePattern(count, columns.map((c) => [...c].sort((x, y) => x - y)));
+  return { equationOf, count, pattern, matrix: () => new SparseSymmetricMatrix(pattern) };
 }
