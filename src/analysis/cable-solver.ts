@@ -105,7 +105,7 @@ function prepare(model: CableModel): Prepared {
 
 /** Member forces and the internal force vector at displacements u; optionally the tangent. */
 function internal(p: Prepared, u: Float64Array, tangent?: SparseSymmetricMatrix): { forces: Float64Array; fint: Float64Array; slack: boolean[] } {
-  const { model, x0, restM, equationOf } = p;
+  const { model, x0, restM } = p;
   const forces = new Float64Array(model.members.length);
   const fint = new Float64Array(x0.length);
   const slack: boolean[] = new Array<boolean>(model.members.length).fill(false);
