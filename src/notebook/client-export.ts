@@ -39,7 +39,7 @@ export function clientExportHtml(input: ClientExportInput): string {
 <main class="notebook client-export">
 <h1>${escapeHtml(input.title)}</h1>
 <p class="intro">${escapeHtml(input.subtitle)}</p>
-<p class="caution" role="note">${escapeHtml(input.caution)}</p>
+<p class="caution top-caution" role="note">${escapeHtml(input.caution)}</p>
 ${input.details ? `<section class="cell summary-part"><h2>Study</h2>${keyValuesHtml(input.details)}</section>` : ""}
 ${input.summaryHtml ? `<section class="cell summary-part"><h2>At a glance</h2>${input.summaryHtml}</section>` : ""}
 <section class="appendix"><h2 class="appendix-title">Appendix: the engineering figures</h2>
