@@ -8,6 +8,7 @@ import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { GRAVITY_M_PER_S2, kPaOfMass } from "../../mechanics/gravity";
 import { chsFromDimensions } from "../../catalogue/chs";
 import { fabricCover, pickChs, pickStrandGroup, SizingError, steelTensionRing, uniformPressurePa, type SizedGroup, type PlanCombination } from "../kit";
+import { designLacedMast, MAST_FACE_MAX_M } from "./laced-mast";
 import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./geometry";
 
 export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring";
@@ -204,34 +205,59 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
 }
 
 /**
- * The masts: a CHS from the catalogue, else a fabricated tube, for the cable forces plus the mast's
- * own weight (γ_G,sup, EN 1990 Table A1.2(B)): size, add the weight, resize.
- * @throws SizingError when not even the largest fabricated tube carries it
+ * The masts: the lightest of a CHS from the catalogue, a fabricated tube and a laced built-up
+ * column of catalogue tubes (laced-mast.ts, EN 1993-1-1 §6.4), for the cable forces plus the
+ * mast's own weight (γ_G,sup, EN 1990 Table A1.2(B)): size, add the weight, resize.
+ * @throws SizingError when none of them carries it
  */
 function sizeMast(input: NetSizingInput, cableMastN: number): Omit<NetMemberGroup, "caseName"> {
   const { layout, brief } = input;
   const effective = input.braced ? layout.mastLengthM / 2 : layout.mastLengthM;
-  let mastN = cableMastN;
-  let catalogueMast: ReturnType<typeof pickChs> = null;
-  let mast: ReturnType<typeof pickChs> = null;
-  for (let pass = 0; pass < 6; pass++) {
-    const demand = [{ forceN: -mastN, effectiveLengthM: effective }];
-    const fromCatalogue = pickChs(input.catalogue.chs, demand, { yieldPa: input.yieldPa, curve: "a" });
-    const fabricatedTube = pickChs(FABRICATED_TUBES, demand, { yieldPa: input.yieldPa, curve: "b" });
-    // the lighter of the catalogue and the fabricated tube: the catalogue's large sizes step coarsely (a jump in mass across span otherwise)
-    catalogueMast = fromCatalogue && (!fabricatedTube || fromCatalogue.section.massKgPerM <= fabricatedTube.section.massKgPerM) ? fromCatalogue : null;
-    mast = catalogueMast ?? fabricatedTube;
-    if (!mast) break;
-    const withWeight = cableMastN + brief.factors.gammaGSup * mast.section.massKgPerM * layout.mastLengthM * GRAVITY_M_PER_S2;
-    if (withWeight <= mastN) break;
-    mastN = withWeight;
-  }
-  if (!mast || mastN > mast.resistanceN) throw new SizingError(`no mast section up to a 4 m tube carries ${(mastN / 1e6).toFixed(1)} MN over ${effective.toFixed(0)} m: use braced masts, more masts or shorter masts`);
-  const fabricated = catalogueMast === null;
+  const withWeight = (massKgPerM: number) => cableMastN + brief.factors.gammaGSup * massKgPerM * layout.mastLengthM * GRAVITY_M_PER_S2;
+  const tube = selfWeighing(cableMastN, withWeight, (mastN) => singleTube(input, mastN, effective));
+  const laced = selfWeighing(cableMastN, withWeight, (mastN) => {
+    const m = designLacedMast(input.catalogue.chs, mastN, effective, input.yieldPa);
+    return m && { massKgPerM: m.massKgPerM, resistanceN: mastN / m.utilisation, governing: "laced built-up column, EN 1993-1-1 §6.4", designation: m.designation, fabricated: false };
+  });
+  const mast = tube && (!laced || tube.choice.massKgPerM <= laced.choice.massKgPerM) ? tube : laced;
+  if (!mast) throw new SizingError(`no mast (a tube up to 4 m or a laced column up to ${MAST_FACE_MAX_M} m square) carries ${(cableMastN / 1e6).toFixed(1)} MN over ${effective.toFixed(0)} m: use braced masts, more masts or shorter masts`);
+  const { choice, mastN } = mast;
   return {
-    kind: "mast", element: "masts", material: fabricated ? "steel-plate" : "steel-hot-finished-hollow", count: layout.masts, lengthM: layout.mastLengthM, section: mast.section.designation, designForceN: -mastN,
-    resistanceN: mast.resistanceN, utilisation: mastN / mast.resistanceN, governing: mast.governing, massKg: mast.section.massKgPerM * layout.mastLengthM * layout.masts, fabricated,
+    kind: "mast", element: "masts", material: choice.fabricated ? "steel-plate" : "steel-hot-finished-hollow", count: layout.masts, lengthM: layout.mastLengthM, section: choice.designation, designForceN: -mastN,
+    resistanceN: choice.resistanceN, utilisation: mastN / choice.resistanceN, governing: choice.governing, massKg: choice.massKgPerM * layout.mastLengthM * layout.masts, fabricated: choice.fabricated,
   };
+}
+
+interface MastChoice {
+  massKgPerM: number;
+  resistanceN: number;
+  governing: string;
+  designation: string;
+  fabricated: boolean;
+}
+
+/** Sizes for the cable force, adds the mast's weight and resizes until it carries both (or null). */
+function selfWeighing(cableMastN: number, withWeight: (massKgPerM: number) => number, size: (mastN: number) => MastChoice | null): { choice: MastChoice; mastN: number } | null {
+  let mastN = cableMastN;
+  for (let pass = 0; pass < 6; pass++) {
+    const choice = size(mastN);
+    if (!choice) return null;
+    const next = withWeight(choice.massKgPerM);
+    if (next <= mastN) return choice.resistanceN >= mastN ? { choice, mastN } : null;
+    mastN = next;
+  }
+  const choice = size(mastN);
+  return choice && choice.resistanceN >= mastN ? { choice, mastN } : null;
+}
+
+/** A single tube: the lighter of the catalogue's CHS and a fabricated tube (the catalogue's large sizes step coarsely). */
+function singleTube(input: NetSizingInput, mastN: number, effectiveM: number): MastChoice | null {
+  const demand = [{ forceN: -mastN, effectiveLengthM: effectiveM }];
+  const fromCatalogue = pickChs(input.catalogue.chs, demand, { yieldPa: input.yieldPa, curve: "a" });
+  const fabricatedTube = pickChs(FABRICATED_TUBES, demand, { yieldPa: input.yieldPa, curve: "b" });
+  const catalogueMast = fromCatalogue && (!fabricatedTube || fromCatalogue.section.massKgPerM <= fabricatedTube.section.massKgPerM) ? fromCatalogue : null;
+  const mast = catalogueMast ?? fabricatedTube;
+  return mast && { massKgPerM: mast.section.massKgPerM, resistanceN: mast.resistanceN, governing: mast.governing, designation: mast.section.designation, fabricated: catalogueMast === null };
 }
 
 /** The net's forces from the 3D analysis, for sizing (see analysis.ts). */
