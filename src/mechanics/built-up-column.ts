@@ -84,8 +84,11 @@ export function lacingShearStiffnessN(input: Pick<LacedColumnInput, "chordSpacin
 /** The member's forces at mid-height by EN 1993-1-1 eqs. 6.69–6.73 (see the file's note). */
 export function lacedColumnForces(input: LacedColumnInput): LacedColumnForces {
   const { lengthM: L, axialN: N, chordSpacingM: h0, chordAreaM2, chordsPerSide, lacing } = input;
-  for (const [field, v] of [["lengthM", L], ["axialN", N], ["chordSpacingM", h0], ["chordAreaM2", chordAreaM2], ["lacing.panelM", lacing.panelM], ["lacing.diagonalAreaM2", lacing.diagonalAreaM2], ["lacing.planes", lacing.planes]] as const) {
-    if (!(v > 0 && Number.isFinite(v))) throw new RangeError(`invalid ${field}: ${v} (expected a finite number > 0)`);
+  if (!(L > 0 && N > 0 && h0 > 0 && chordAreaM2 > 0 && lacing.panelM > 0 && lacing.diagonalAreaM2 > 0 && lacing.planes > 0 && Number.isFinite(L + N + h0 + chordAreaM2 + lacing.panelM + lacing.diagonalAreaM2 + lacing.planes))) {
+    // the slow path only on bad input: name the first bad field
+    for (const [field, v] of [["lengthM", L], ["axialN", N], ["chordSpacingM", h0], ["chordAreaM2", chordAreaM2], ["lacing.panelM", lacing.panelM], ["lacing.diagonalAreaM2", lacing.diagonalAreaM2], ["lacing.planes", lacing.planes]] as const) {
+      if (!(v > 0 && Number.isFinite(v))) throw new RangeError(`invalid ${field}: ${v} (expected a finite number > 0)`);
+    }
   }
   const E = input.modulusPa ?? STEEL_E_PA;
   const sideArea = chordsPerSide * chordAreaM2;

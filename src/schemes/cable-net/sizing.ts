@@ -6,7 +6,7 @@ import { inclinedParabolicCable, parabolaLengthM, parabolicCable } from "../../m
 import { ringForceFromPullsN } from "../../mechanics/ring-buckling";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { GRAVITY_M_PER_S2, kPaOfMass } from "../../mechanics/gravity";
-import { chsFromDimensions } from "../../catalogue/chs";
+import { chsFromDimensions, STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
 import { fabricCover, pickChs, pickStrandGroup, SizingError, steelTensionRing, uniformPressurePa, type SizedGroup, type PlanCombination } from "../kit";
 import { designLacedMast, MAST_FACE_MAX_M } from "./laced-mast";
 import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./geometry";
@@ -215,8 +215,10 @@ function sizeMast(input: NetSizingInput, cableMastN: number): Omit<NetMemberGrou
   const effective = input.braced ? layout.mastLengthM / 2 : layout.mastLengthM;
   const withWeight = (massKgPerM: number) => cableMastN + brief.factors.gammaGSup * massKgPerM * layout.mastLengthM * GRAVITY_M_PER_S2;
   const tube = selfWeighing(cableMastN, withWeight, (mastN) => singleTube(input, mastN, effective));
-  const laced = selfWeighing(cableMastN, withWeight, (mastN) => {
-    const m = designLacedMast(input.catalogue.chs, mastN, effective, input.yieldPa);
+  // A laced mast weighs at least its chords' N/f_y of steel a metre: where the tube is lighter than that, it wins.
+  const lacedFloorKgPerM = (cableMastN / input.yieldPa) * STEEL_DENSITY_KG_PER_M3;
+  const laced = tube && tube.choice.massKgPerM <= lacedFloorKgPerM ? null : selfWeighing(cableMastN, withWeight, (mastN) => {
+    const m = designLacedMast(input.catalogue.chs, mastN, effective, input.yieldPa, tube ? 1.5 * tube.choice.massKgPerM : Infinity);
     return m && { massKgPerM: m.massKgPerM, resistanceN: mastN / m.utilisation, governing: "laced built-up column, EN 1993-1-1 §6.4", designation: m.designation, fabricated: false };
   });
   const mast = tube && (!laced || tube.choice.massKgPerM <= laced.choice.massKgPerM) ? tube : laced;
