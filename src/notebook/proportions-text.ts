@@ -31,14 +31,15 @@ function differences(model: SchemeModel, chosen: ProportionChoice, other: NonNul
  */
 export function proportionsSentences(model: SchemeModel, choice: ProportionChoice): string[] {
   const searched = choice.searched.filter((k) => k !== RISE_KEY);
-  const riseWord =
-    choice.riseSource === "searched" ? `${proportionText(model, RISE_KEY, choice.riseM)} (searched)` : choice.riseSource === "pinned" ? `${proportionText(model, RISE_KEY, choice.riseM)} (pinned)` : `${proportionText(model, RISE_KEY, choice.riseM)} (the brief's common rise)`;
+  // a scheme that uses no rise (the flat truss) reports none
+  const riseWord = !(RISE_KEY in choice.proportions) ? [] : [
+    choice.riseSource === "searched" ? `${proportionText(model, RISE_KEY, choice.riseM)} (searched)` : choice.riseSource === "pinned" ? `${proportionText(model, RISE_KEY, choice.riseM)} (pinned)` : `${proportionText(model, RISE_KEY, choice.riseM)} (the brief's common rise)`];
   const out: string[] = [];
   if (!Number.isFinite(choice.value)) out.push(`No feasible proportions were found among the ${choice.evaluations} designs tried.`);
-  else if (choice.searched.length === 0) out.push(`Nothing to search: the design uses the options as set; ${riseWord}.`);
+  else if (choice.searched.length === 0) out.push(`Nothing to search: the design uses the options as set${riseWord.map((w) => `; ${w}`).join("")}.`);
   else {
     const chosen = searched.map((k) => proportionText(model, k, choice.proportions[k]));
-    out.push(`Proportions chosen for ${GOAL[choice.objective]} per m² of usable floor (${choice.evaluations} designs tried): ${[...chosen, riseWord].join("; ")}.`);
+    out.push(`Proportions chosen for ${GOAL[choice.objective]} per m² of usable floor (${choice.evaluations} designs tried): ${[...chosen, ...riseWord].join("; ")}.`);
   }
   if (choice.pinned.length > 0) out.push(`Pinned by you: ${choice.pinned.map((k) => proportionText(model, k, choice.proportions[k])).join("; ")}.`);
   if (choice.searched.length > 0 && Number.isFinite(choice.value)) {

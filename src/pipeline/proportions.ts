@@ -42,8 +42,10 @@ interface Dimension {
   key: string;
   values: readonly OptionValue[];
   start: number;
-  /** Ordered numbers (stepped by halving strides) or a small set tried in full. */
-  ordered: boolean;
+  /** A form of the scheme (a choice, a toggle or a count): every value is tried; else ordered numbers searched by descent. */
+  form: boolean;
+  /** Searched (and reported) only while another option has this value. */
+  when?: { key: string; value: OptionValue };
 }
 
 /** Values of a number option on its step grid within [min, max]. */
@@ -64,10 +66,10 @@ function nearestIndex(values: readonly OptionValue[], value: OptionValue): numbe
 function optionDimension(spec: OptionSpec, start: OptionValue): Dimension {
   if (spec.kind === "number") {
     const values = gridOf(spec.min, spec.max, spec.step, spec.integer === true);
-    return { key: spec.key, values, start: nearestIndex(values, start), ordered: true };
+    return { key: spec.key, values, start: nearestIndex(values, start), form: spec.integer === true, ...(spec.freeWhen ? { when: spec.freeWhen } : {}) };
   }
   const values = spec.kind === "select" ? spec.choices.map((c) => c.value) : [false, true];
-  return { key: spec.key, values, start: Math.max(0, values.indexOf(start as never)), ordered: false };
+  return { key: spec.key, values, start: Math.max(0, values.indexOf(start as never)), form: true };
 }
 
 /** The searchable dimensions of a scheme: its free, unpinned options, and its rise when the search owns it. */
@@ -75,7 +77,24 @@ export function dimensionsOf(model: SchemeModel, options: SchemeOptions, pinned:
   const dims = model.options.filter((spec) => spec.free === true && !pinned.includes(spec.key)).map((spec) => optionDimension(spec, options[spec.key] ?? model.defaults[spec.key] ?? 0));
   if (rise.kind === "search") {
     const values = gridOf(rise.minM, rise.maxM, rise.stepM, false);
-    dims.push({ key: RISE_KEY, values, start: nearestIndex(values, rise.startM), ordered: true });
+    dims.push({ key: RISE_KEY, values, start: nearestIndex(values, rise.startM), form: false });
+  }
+  return demoteForms(dims);
+}
+
+/** Most forms (combinations of the form dimensions' values) one search tries in full; beyond it the widest count is searched by descent instead. */
+export const MAX_FORMS = 64;
+
+function formCount(dims: readonly Dimension[]): number {
+  return dims.reduce((n, d) => (d.form ? n * d.values.length : n), 1);
+}
+
+/** While the forms are too many, the form dimension of most values (a count) is searched by descent like a proportion. */
+function demoteForms(dims: Dimension[]): Dimension[] {
+  while (formCount(dims) > MAX_FORMS) {
+    const widest = dims.filter((d) => d.form && typeof d.values[0] === "number").sort((a, b) => b.values.length - a.values.length)[0];
+    if (!widest) break;
+    widest.form = false;
   }
   return dims;
 }
@@ -83,51 +102,124 @@ export function dimensionsOf(model: SchemeModel, options: SchemeOptions, pinned:
 /** How the rise is set for one scheme: searched within a range, or fixed (pinned by the user, or the common rise). */
 export type RiseSetting = { kind: "search"; minM: number; maxM: number; stepM: number; startM: number } | { kind: "fixed"; riseM: number; source: "pinned" | "common" };
 
+/** Designs the descent from the set values may assess before the forms are tried. */
+const WARM_BUDGET = 24;
+/** The forms best at the warm proportions whose proportions are searched again, and the designs each such descent may assess. */
+const BRANCHES = 3;
+const BRANCH_BUDGET = 12;
 /** Most designs one search assesses (the search is deterministic: no clock decides it). */
-export const MAX_EVALUATIONS = 48;
+export const MAX_EVALUATIONS = WARM_BUDGET + MAX_FORMS + BRANCHES * BRANCH_BUDGET;
+/**
+ * Forms whose best is within this fraction of the least objective count as equal, and the simplest
+ * of them (the first in declaration order: the smaller count, the first choice) is chosen, so that
+ * neighbouring spans do not flip between two forms of the same merit. 1 %: candidates differing by
+ * one catalogue size already differ by about that much (measured on the cable net, 95–100 m).
+ */
+export const FORM_TIE_FRACTION = 0.01;
+
+/** The objective at an index, each design assessed once, within a budget the phases of the search set. */
+interface Evaluator {
+  value: (at: readonly number[]) => number;
+  allow: (designs: number) => void;
+  count: () => number;
+}
+
+function evaluator(assess: (index: readonly number[]) => number): Evaluator {
+  const seen = new Map<string, number>();
+  let limit = 0;
+  return {
+    value: (at) => {
+      const key = at.join(",");
+      const known = seen.get(key);
+      if (known !== undefined) return known;
+      if (seen.size >= limit) return Number.POSITIVE_INFINITY;
+      const v = assess(at);
+      seen.set(key, v);
+      return v;
+    },
+    allow: (designs) => (limit = seen.size + designs),
+    count: () => seen.size,
+  };
+}
 
 /**
- * Coordinate descent over the dimensions, from the scheme's set values (the warm start): an ordered
- * one by a line search whose stride starts at a quarter of its range (a grid step after the first
- * pass) and halves when neither neighbour improves; a choice or toggle tried in full. Passes repeat
- * until one moves nothing, or MAX_EVALUATIONS designs were assessed (no clock decides it).
+ * Coordinate descent over the `moving` dimensions from `from`: an ordered one by a line search whose
+ * stride starts at a quarter of its range (a grid step after the first pass) and halves when neither
+ * neighbour improves; a choice tried in full. Passes repeat until one moves nothing (or the budget ends).
  */
-function descend(dims: readonly Dimension[], assess: (index: readonly number[]) => number): { index: number[]; evaluations: number } {
-  const seen = new Map<string, number>();
-  const value = (at: readonly number[]): number => {
-    const key = at.join(",");
-    const known = seen.get(key);
-    if (known !== undefined) return known;
-    if (seen.size >= MAX_EVALUATIONS) return Number.POSITIVE_INFINITY;
-    const v = assess(at);
-    seen.set(key, v);
-    return v;
-  };
-  let index = dims.map((d) => d.start);
-  let best = value(index);
+function descend(dims: readonly Dimension[], moving: readonly number[], from: readonly number[], ev: Evaluator): number[] {
+  let index = [...from];
+  let best = ev.value(index);
   const tryAt = (k: number, at: number): boolean => {
     if (at < 0 || at >= (dims[k]?.values.length ?? 0) || at === index[k]) return false;
     const next = index.map((x, j) => (j === k ? at : x));
-    const v = value(next);
+    const v = ev.value(next);
     if (!(v < best)) return false;
     [best, index] = [v, next];
     return true;
   };
   for (let pass = 0, moved = true; moved && pass < 4; pass++) {
     moved = false;
-    dims.forEach((dim, k) => {
-      if (!dim.ordered) {
+    for (const k of moving) {
+      const dim = dims[k] as Dimension;
+      if (typeof dim.values[0] !== "number") {
         dim.values.forEach((_, i) => (moved = tryAt(k, i) || moved));
-        return;
+        continue;
       }
       for (let stride = pass === 0 ? Math.max(1, Math.floor((dim.values.length - 1) / 4)) : 1; stride >= 1; ) {
         const here = index[k] ?? 0;
         if (tryAt(k, here + stride) || tryAt(k, here - stride)) moved = true;
         else stride = Math.floor(stride / 2);
       }
-    });
+    }
   }
-  return { index, evaluations: seen.size };
+  return index;
+}
+
+/** Every combination of the form dimensions' values laid over `base`, simplest first (declaration order, values in order). */
+function formsOver(dims: readonly Dimension[], base: readonly number[]): number[][] {
+  let out: number[][] = [[...base]];
+  dims.forEach((d, k) => {
+    if (d.form) out = out.flatMap((at) => d.values.map((_, i) => at.map((x, j) => (j === k ? i : x))));
+  });
+  return out;
+}
+
+/** Whether a dimension is searched at an index: unconditional, or its condition met there (or by the fixed options). */
+function activeAt(dims: readonly Dimension[], d: Dimension, at: readonly number[], options: SchemeOptions): boolean {
+  if (!d.when) return true;
+  const k = dims.findIndex((x) => x.key === d.when?.key);
+  const value = k >= 0 ? dims[k]?.values[at[k] ?? 0] : options[d.when.key];
+  return value === d.when.value;
+}
+
+/**
+ * The search: a descent over the proportions from the set values (warm start); then every form
+ * (every value of each count, choice and toggle) designed at those proportions; the BRANCHES forms
+ * best there searched again by descent; the chosen one is the simplest form whose best is within
+ * FORM_TIE_FRACTION of the least. Deterministic: the same inputs give the same choice, whatever asked.
+ */
+function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Evaluator): number[] {
+  const moving = (at: readonly number[]) => dims.flatMap((d, k) => (!d.form && activeAt(dims, d, at, options) ? [k] : []));
+  const start = dims.map((d) => d.start);
+  ev.allow(WARM_BUDGET);
+  const warm = descend(dims, moving(start), start, ev);
+  if (!dims.some((d) => d.form)) return warm;
+  const forms = formsOver(dims, warm);
+  ev.allow(forms.length);
+  const scanned = forms.map((at, order) => ({ at, order, value: ev.value(at) }));
+  const branches = [...scanned]
+    .sort((a, b) => a.value - b.value || a.order - b.order)
+    .slice(0, BRANCHES)
+    .map(({ at, order }) => {
+      ev.allow(BRANCH_BUDGET);
+      const end = descend(dims, moving(at), at, ev);
+      return { at: end, order, value: ev.value(end) };
+    });
+  const least = Math.min(...branches.map((b) => b.value));
+  if (!Number.isFinite(least)) return warm;
+  const simplest = branches.filter((b) => b.value - least <= FORM_TIE_FRACTION * Math.abs(least)).sort((a, b) => a.order - b.order)[0];
+  return simplest?.at ?? warm;
 }
 
 /**
@@ -148,6 +240,9 @@ export function searchProportions(
   const dims = dimensionsOf(model, options, pinned, rise);
   const candidates = new Map<string, Candidate>();
   const candidateAt = (index: readonly number[]): Candidate => {
+    const key = index.join(",");
+    const known = candidates.get(key);
+    if (known) return known;
     const opts: SchemeOptions = { ...options };
     let riseM = rise.kind === "fixed" ? rise.riseM : 0;
     dims.forEach((d, k) => {
@@ -155,34 +250,44 @@ export function searchProportions(
       if (d.key === RISE_KEY) riseM = v as number;
       else opts[d.key] = v;
     });
-    const key = index.join(",");
-    const known = candidates.get(key);
-    if (known) return known;
     const designed = design(opts, riseM);
     const value = dims.length === 0 ? Number.NaN : designed.status === "infeasible" ? Number.POSITIVE_INFINITY : assess(designed);
     const candidate = { options: opts, riseM, design: designed, value: dims.length === 0 || Number.isFinite(value) ? value : Number.POSITIVE_INFINITY };
     candidates.set(key, candidate);
     return candidate;
   };
-  const { index, evaluations } = descend(dims, (i) => candidateAt(i).value);
+  const ev = evaluator((i) => candidateAt(i).value);
+  const index = searchIndex(dims, options, ev);
   const chosen = candidateAt(index);
+  return { chosen, choice: choiceOf(model, dims, { chosen, index, candidates: [...candidates.values()], evaluations: ev.count() }, { pinned, rise, objective }) };
+}
+
+/** The free options reported for a candidate: those pinned, and those searched whose condition its options meet; and the rise when the scheme has one of its own. */
+function proportionsOf(model: SchemeModel, c: Candidate, pinned: readonly string[]): Record<string, OptionValue> {
+  const shown = model.options.filter((s) => s.free === true && (pinned.includes(s.key) || s.kind !== "number" || !s.freeWhen || c.options[s.freeWhen.key] === s.freeWhen.value));
+  return { ...Object.fromEntries(shown.map((s) => [s.key, c.options[s.key] ?? model.defaults[s.key] ?? ""])), ...(model.riseSpanRatio ? { [RISE_KEY]: c.riseM } : {}) };
+}
+
+function choiceOf(
+  model: SchemeModel,
+  dims: readonly Dimension[],
+  found: { chosen: Candidate; index: readonly number[]; candidates: readonly Candidate[]; evaluations: number },
+  asked: { pinned: readonly string[]; rise: RiseSetting; objective: Objective },
+): ProportionChoice {
+  const { chosen, index, evaluations } = found;
+  const { pinned, rise, objective } = asked;
   const freeKeys = model.options.filter((s) => s.free === true).map((s) => s.key);
-  const proportionsOf = (c: Candidate) => ({ ...Object.fromEntries(freeKeys.map((k) => [k, c.options[k] ?? model.defaults[k] ?? ""])), [RISE_KEY]: c.riseM });
-  const others = [...candidates.values()].filter((c) => c !== chosen && Number.isFinite(c.value)).sort((a, b) => a.value - b.value);
-  const second = others[0];
+  const second = found.candidates.filter((c) => c !== chosen && Number.isFinite(c.value)).sort((a, b) => a.value - b.value)[0];
   return {
-    chosen,
-    choice: {
-      objective,
-      searched: dims.map((d) => d.key),
-      pinned: freeKeys.filter((k) => pinned.includes(k)).concat(rise.kind === "fixed" && rise.source === "pinned" ? [RISE_KEY] : []),
-      proportions: proportionsOf(chosen),
-      riseM: chosen.riseM,
-      riseSource: rise.kind === "search" ? "searched" : rise.source,
-      value: chosen.value,
-      evaluations,
-      runnerUp: second && Number.isFinite(chosen.value) ? { proportions: proportionsOf(second), riseM: second.riseM, value: second.value, differencePct: (100 * (second.value - chosen.value)) / chosen.value } : null,
-    },
+    objective,
+    searched: dims.filter((d) => activeAt(dims, d, index, chosen.options)).map((d) => d.key),
+    pinned: freeKeys.filter((k) => pinned.includes(k)).concat(rise.kind === "fixed" && rise.source === "pinned" ? [RISE_KEY] : []),
+    proportions: proportionsOf(model, chosen, pinned),
+    riseM: chosen.riseM,
+    riseSource: rise.kind === "search" ? "searched" : rise.source,
+    value: chosen.value,
+    evaluations,
+    runnerUp: second && Number.isFinite(chosen.value) ? { proportions: proportionsOf(model, second, pinned), riseM: second.riseM, value: second.value, differencePct: (100 * (second.value - chosen.value)) / chosen.value } : null,
   };
 }
 

@@ -35,6 +35,8 @@ export type OptionSpec =
       uncertainty?: UncertaintyKind;
       /** A free proportion: the pipeline may search it within [min, max] (step / integer respected) unless the user pins it. */
       free?: boolean;
+      /** A free proportion only while another option has this value (rib spacing while the shell is ribbed); else neither searched nor reported. */
+      freeWhen?: { key: string; value: string | boolean };
     }
   | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string; free?: boolean }
   | { key: string; label: string; kind: "toggle"; unit: ""; source: string; free?: boolean };

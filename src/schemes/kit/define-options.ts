@@ -16,6 +16,8 @@ export interface NumberOption {
   uncertainty?: UncertaintyKind;
   /** A free proportion the pipeline may search within [min, max] unless the user pins it. */
   free?: boolean;
+  /** Free only while another option has this value (see OptionSpec). */
+  freeWhen?: { key: string; value: string | boolean };
 }
 
 /** A choice among named values. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { searchProportions, riseSettingFor, commonRiseM, MAX_EVALUATIONS, type RiseSetting } from "../../../src/pipeline/proportions";
+import { searchProportions, riseSettingFor, commonRiseM, FORM_TIE_FRACTION, MAX_EVALUATIONS, type RiseSetting } from "../../../src/pipeline/proportions";
 import { infeasibleDesign } from "../../../src/schemes/kit";
 import { DEFAULT_BRIEF } from "../../../src/brief";
 import type { Design, OptionSpec, SchemeModel, SchemeOptions } from "../../../src/schemes/types";
@@ -60,6 +60,50 @@ describe("proportion search", () => {
     expect(assessed).toBe(0);
     expect(choice.evaluations).toBe(1);
     expect(choice.runnerUp).toBeNull();
+  });
+
+  it("tries every value of a count: finds the least of a bumpy objective the descent alone stalls on", () => {
+    // a count with a local minimum at 3 next to the start and the global one at 9, and a smooth proportion
+    const m = model([spec("masts", 3, 12, 1, true), spec("ratio", 0.3, 0.9, 0.05)], { masts: 4, ratio: 0.6 });
+    const bumpy: Record<number, number> = { 3: 40, 4: 41, 5: 42, 6: 43, 7: 42, 8: 41, 9: 38, 10: 39, 11: 40, 12: 41 };
+    let calls = 0;
+    const { choice } = searchProportions(m, m.defaults, [], fixed, "mass", (o) => {
+      calls++;
+      return { ...feasible(), totalMassKg: bumpy[o.masts as number]! + 50 * ((o.ratio as number) - 0.45) ** 2 };
+    }, (d) => d.totalMassKg);
+    expect(choice.proportions.masts).toBe(9);
+    expect(choice.proportions.ratio).toBeCloseTo(0.45, 9);
+    expect(calls).toBe(choice.evaluations);
+    expect(calls).toBeLessThanOrEqual(MAX_EVALUATIONS);
+  });
+
+  it("of forms within the tie band chooses the simplest (first declared, fewer), and outside it the least", () => {
+    const m = model([{ key: "form", label: "form", kind: "select", unit: "", choices: [{ value: "plain", label: "" }, { value: "fancy", label: "" }], source: "test", free: true }], { form: "fancy" });
+    const run = (fancyBetterBy: number) =>
+      searchProportions(m, m.defaults, [], fixed, "mass", (o) => ({ ...feasible(), totalMassKg: o.form === "plain" ? 100 : 100 * (1 - fancyBetterBy) }), (d) => d.totalMassKg).choice.proportions.form;
+    expect(run(FORM_TIE_FRACTION / 2)).toBe("plain");
+    expect(run(FORM_TIE_FRACTION * 2)).toBe("fancy");
+  });
+
+  it("searches and reports a proportion declared free only while its condition holds", () => {
+    const form: OptionSpec = { key: "form", label: "form", kind: "select", unit: "", choices: [{ value: "smooth", label: "" }, { value: "ribbed", label: "" }], source: "test", free: true };
+    const ribs = { ...spec("ribs", 3, 20, 0.5), freeWhen: { key: "form", value: "ribbed" } } as OptionSpec;
+    const m = model([form, ribs], { form: "smooth", ribs: 8 });
+    const cost = (ribbedBest: number) => (o: SchemeOptions) => ({ ...feasible(), totalMassKg: o.form === "smooth" ? 100 : ribbedBest + ((o.ribs as number) - 6) ** 2 });
+    const smooth = searchProportions(m, m.defaults, [], fixed, "mass", cost(120), (d) => d.totalMassKg).choice;
+    expect(smooth.proportions).toEqual({ form: "smooth" });
+    expect(smooth.searched).toEqual(["form"]);
+    const ribbed = searchProportions(m, m.defaults, [], fixed, "mass", cost(80), (d) => d.totalMassKg).choice;
+    expect(ribbed.proportions).toEqual({ form: "ribbed", ribs: 6 });
+    expect(ribbed.searched).toEqual(["form", "ribs"]);
+  });
+
+  it("reports a rise only for a scheme with a rise of its own", () => {
+    const m = model([spec("depth", 0.05, 0.5, 0.01)], { depth: 0.1 });
+    const { choice } = searchProportions(m, m.defaults, [], fixed, "mass", (o) => ({ ...feasible(), totalMassKg: o.depth as number }), (d) => d.totalMassKg);
+    expect(Object.keys(choice.proportions)).toEqual(["depth"]);
+    const withRise = model([spec("depth", 0.05, 0.5, 0.01)], { depth: 0.1 }, { min: 0.1, max: 0.2, preferred: 0.15 });
+    expect(Object.keys(searchProportions(withRise, withRise.defaults, [], fixed, "mass", () => feasible(), (d) => d.totalMassKg).choice.proportions)).toEqual(["depth", "riseM"]);
   });
 
   it("the common rise keeps the brief's rise/span ratio within the height limit", () => {
