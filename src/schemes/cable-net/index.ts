@@ -172,6 +172,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     warnings: netWarnings(layout, sized, analysis),
     iterations: converged.iterations,
     floor: netFloor(layout, brief.eavesHeightM),
+    regime: `${layout.masts} masts`,
     // the central ring's pull is the same in every combination of the closed form (ridge and valley share the load): the most utilised of the others names the case
     governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
     ...capEnvelope(layout.cap, brief.eavesHeightM),

@@ -41,10 +41,11 @@ const declarations = {
       { value: "ribbed", label: "Ribbed shell (three-way ribs)" },
     ],
     default: "smooth",
+    free: true,
     source: "ribbed: equivalent continuum of the shell and its ribs (as the lattice's), 4√(DB)/R²",
   },
   // default: ≈ 8 m between ribs keeps a thin panel between them (common practice, no source)
-  ribSpacingM: { kind: "number", label: "Rib spacing (ribbed shell)", unit: "m", min: 3, max: 20, step: 0.5, default: 8, source: "common practice 5–15 m, no source", free: true },
+  ribSpacingM: { kind: "number", label: "Rib spacing (ribbed shell)", unit: "m", min: 3, max: 20, step: 0.5, default: 8, source: "common practice 5–15 m, no source", free: true, freeWhen: { key: "form", value: "ribbed" } },
   edgeThickening: { kind: "number", label: "Edge thickness / shell thickness", unit: "", min: 1, max: 4, step: 0.1, default: 2, source: "common practice, no source" },
   // default: two meshes both ways
   shellRateKgPerM3: { kind: "number", label: "Reinforcement rate, shell", unit: "kg/m³", min: 0, max: 300, step: 5, default: 80, source: "common practice, no source; never below EN 1992-1-1 eq. 9.1N", uncertainty: "reinforcement" },
@@ -267,6 +268,7 @@ function design(brief: Brief, opts: ConcreteShellOptions): DesignParts {
     takeoff: shellTakeoff(opts, q, tie, cap),
     checks: shellChecks(opts, s, fcd, ringTensionUlsN, tie),
     governingLoadCase: s.governingCase,
+    regime: ribbed ? "ribbed" : "smooth",
     warnings: shellWarnings(brief, cap, s, ribbed),
     iterations,
     floor: capFloor(cap, brief.eavesHeightM, soffitDepthM),

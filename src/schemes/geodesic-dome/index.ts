@@ -25,10 +25,11 @@ const declarations = {
       { value: "double", label: "Double-layer grid" },
     ],
     default: "single",
+    free: true,
     source: "double layer: two grids at a depth, webs between (equivalent sandwich stiffness)",
   },
   // default span/50 (common practice for double-layer domes, no source)
-  doubleLayerDepthPct: { kind: "number", label: "Double-layer depth", unit: "% of span", min: 0.5, max: 6, step: 0.1, default: 2, source: "common practice span/50, no source", free: true },
+  doubleLayerDepthPct: { kind: "number", label: "Double-layer depth", unit: "% of span", min: 0.5, max: 6, step: 0.1, default: 2, source: "common practice span/50, no source", free: true, freeWhen: { key: "layers", value: "double" } },
   // default: lattice shells reach 0.2–0.4 of p_cl with imperfections (from memory; cf. Kollár & Dulácska)
   knockDown: { kind: "number", label: "Buckling knock-down on p_cl", unit: "", min: 0.05, max: 1, step: 0.05, default: 0.3, source: "imperfection sensitivity of lattice shells, from memory 0.2–0.4", uncertainty: "knock-down" },
   bands: { kind: "number", label: "Bar size bands, crown to edge", unit: "", min: 1, max: 20, step: 1, integer: true, default: 6, source: "grouping of alike members" },
@@ -187,6 +188,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
     checks: [...members.checks, ...(net?.checks ?? [])],
     ...(net ? { analysis: net.analysis } : {}),
     governingLoadCase: net && maxNet > maxMembrane ? net.governingCase : membraneCase,
+    regime: double ? "double layer" : "single layer",
     summary: latticeSummary(r, mesh, frequency, cap, double),
     takeoff: latticeTakeoff(r, cladding, cap),
     warnings,
