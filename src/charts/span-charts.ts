@@ -1,5 +1,5 @@
 import * as Plot from "@observablehq/plot";
-import type { SpanPoint } from "../comparison/span-study";
+import { regimeChanges, type SpanPoint } from "../comparison/span-study";
 import type { SchemeId } from "../schemes/types";
 import { SCHEME_COLOURS } from "./palette";
 
@@ -44,11 +44,22 @@ export function needsLogScale(values: readonly number[]): boolean {
   return positive.length > 1 && Math.max(...positive) / Math.min(...positive) > 10;
 }
 
+/** Where a scheme's named form changes (regimeChanges), at the first span of the new form as drawn: a small diamond and the new form's name. */
+function regimeMarks(points: readonly SpanPoint[], drawn: readonly (SpanPoint & { value: number })[]) {
+  const at = regimeChanges(points).flatMap((c) => {
+    const p = drawn.find((q) => q.id === c.id && q.spanM === c.toSpanM && Number.isFinite(q.value));
+    return p ? [{ spanM: p.spanM, value: p.value, label: p.label, text: c.to }] : [];
+  });
+  if (at.length === 0) return [];
+  return [Plot.dot(at, { x: "spanM", y: "value", stroke: "label", fill: "white", symbol: "diamond", r: 4, clip: true }), Plot.text(at, { x: "spanM", y: "value", text: "text", fill: "label", dy: -9, fontSize: 9, clip: true })];
+}
+
 /**
  * Lines of one metric against span, one per scheme: solid where the scheme is feasible and inside
  * its method's valid range, dashed (and off the scale unless `includeExcluded`) outside it, broken
  * where infeasible. Optionally relative to the best at each span; a log scale when the values on
- * the scale differ by more than ten times; the study's own span marked. Pure.
+ * the scale differ by more than ten times; the study's own span marked; where a scheme's named form
+ * changes (single to double layer, 3 to 4 masts), a diamond and the new form's name. Pure.
  */
 export function spanMetricChart(points: readonly SpanPoint[], metric: SpanMetric, yLabel: string, common: SpanChartCommon): Plot.PlotOptions & { ariaDescription: string } {
   const relative = common.relative ? relativeToBest(points, metric) : null;
@@ -78,6 +89,7 @@ export function spanMetricChart(points: readonly SpanPoint[], metric: SpanMetric
       Plot.line(outside, { x: "spanM", y: "value", stroke: "label", strokeDasharray: "4 3", strokeOpacity: 0.6, clip: true }),
       Plot.line(inside, { x: "spanM", y: "value", stroke: "label", strokeWidth: 2, clip: true }),
       Plot.dot(inside.filter((p) => Number.isFinite(p.value)), { x: "spanM", y: "value", fill: "label", r: 2, clip: true, tip: { format: { x: true, y: true, fill: true } } }),
+      ...regimeMarks(points, [...inside, ...(common.includeExcluded ? outside : [])]),
       ...spanMark,
     ],
   };
@@ -92,6 +104,7 @@ function spanDescription(points: readonly SpanPoint[], metric: SpanMetric, commo
     common.relative ? "Each scheme divided by the best feasible scheme in range at that span, so the best is 1." : log ? "Log scale: the values differ by more than ten times." : "",
     common.includeExcluded ? "Spans outside a method's valid range are in the scale, drawn dashed." : "Spans outside a method's valid range are drawn dashed and left out of the scale.",
     common.studySpanM === undefined ? "" : `The study's own span, ${common.studySpanM} m, is marked.`,
+    regimeChanges(points).length === 0 ? "" : "A diamond marks where a scheme changes its form, with the new form's name.",
     `Metric: ${metric}.`,
   ].filter((s) => s !== "").join(" ");
 }

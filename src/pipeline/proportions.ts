@@ -112,16 +112,27 @@ export const MAX_EVALUATIONS = WARM_BUDGET + MAX_FORMS + BRANCHES * BRANCH_BUDGE
 /**
  * Forms whose best is within this fraction of the least objective count as equal, and the simplest
  * of them (the first in declaration order: the smaller count, the first choice) is chosen, so that
- * neighbouring spans do not flip between two forms of the same merit. 1 %: candidates differing by
- * one catalogue size already differ by about that much (measured on the cable net, 95–100 m).
+ * neighbouring spans do not flip between two forms of the same merit. 3 %: the cable net's objective
+ * moves by 1–2 % from one mast count to the next (catalogue steps; 95–100 m: 3 masts 39.1/40.3, 5
+ * masts 40.0/39.9 kgCO2e/m²); at 1 % it flipped 3 → 4 → 3 masts at 135–145 m and 155–165 m, at 3 %
+ * it keeps 3 masts to 165 m. A feasibility estimate does not tell forms 3 % apart.
  */
-export const FORM_TIE_FRACTION = 0.01;
+export const FORM_TIE_FRACTION = 0.03;
+/**
+ * Within the chosen form, proportions of the same objective (a plateau: member lengths that give the
+ * same mesh) count as equal, and those nearest the set values are chosen, so the choice on a plateau
+ * does not wander with the path the descent took. A wider band (0.5 % was tried) steadies flat
+ * objectives more but no longer finds the least of a smooth bowl, which the search must.
+ */
+export const PROPORTION_TIE_FRACTION = 0;
 
 /** The objective at an index, each design assessed once, within a budget the phases of the search set. */
 interface Evaluator {
   value: (at: readonly number[]) => number;
   allow: (designs: number) => void;
   count: () => number;
+  /** Every index assessed, with its value. */
+  assessed: () => { at: number[]; value: number }[];
 }
 
 function evaluator(assess: (index: readonly number[]) => number): Evaluator {
@@ -139,13 +150,15 @@ function evaluator(assess: (index: readonly number[]) => number): Evaluator {
     },
     allow: (designs) => (limit = seen.size + designs),
     count: () => seen.size,
+    assessed: () => [...seen.entries()].map(([key, value]) => ({ at: key.split(",").map(Number), value })),
   };
 }
 
 /**
  * Coordinate descent over the `moving` dimensions from `from`: an ordered one by a line search whose
  * stride starts at a quarter of its range (a grid step after the first pass) and halves when neither
- * neighbour improves; a choice tried in full. Passes repeat until one moves nothing (or the budget ends).
+ * neighbour improves; a choice tried in full (a five-point scan across each range first was tried:
+ * it found other basins at neighbouring spans and made the cable dome jump more, not less). Passes repeat until one moves nothing (or the budget ends).
  */
 function descend(dims: readonly Dimension[], moving: readonly number[], from: readonly number[], ev: Evaluator): number[] {
   let index = [...from];
@@ -204,7 +217,7 @@ function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Eva
   const start = dims.map((d) => d.start);
   ev.allow(WARM_BUDGET);
   const warm = descend(dims, moving(start), start, ev);
-  if (!dims.some((d) => d.form)) return warm;
+  if (!dims.some((d) => d.form)) return nearestStart(dims, warm, ev);
   const forms = formsOver(dims, warm);
   ev.allow(forms.length);
   const scanned = forms.map((at, order) => ({ at, order, value: ev.value(at) }));
@@ -217,9 +230,24 @@ function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Eva
       return { at: end, order, value: ev.value(end) };
     });
   const least = Math.min(...branches.map((b) => b.value));
-  if (!Number.isFinite(least)) return warm;
+  if (!Number.isFinite(least)) return nearestStart(dims, warm, ev);
   const simplest = branches.filter((b) => b.value - least <= FORM_TIE_FRACTION * Math.abs(least)).sort((a, b) => a.order - b.order)[0];
-  return simplest?.at ?? warm;
+  return nearestStart(dims, simplest?.at ?? warm, ev);
+}
+
+/**
+ * Of the assessed candidates of the same form as `best` whose objective is within
+ * PROPORTION_TIE_FRACTION of its own, the one nearest the set values (the sum over the proportions
+ * of the distance as a fraction of each range; a lower objective breaks a tie).
+ */
+function nearestStart(dims: readonly Dimension[], best: readonly number[], ev: Evaluator): number[] {
+  const bestValue = ev.value(best);
+  if (!Number.isFinite(bestValue)) return [...best];
+  const distance = (at: readonly number[]) => dims.reduce((sum, d, k) => (d.form ? sum : sum + Math.abs((at[k] ?? 0) - d.start) / Math.max(1, d.values.length - 1)), 0);
+  const sameForm = (at: readonly number[]) => dims.every((d, k) => !d.form || at[k] === best[k]);
+  const near = ev.assessed().filter((c) => sameForm(c.at) && c.value - bestValue <= PROPORTION_TIE_FRACTION * Math.abs(bestValue));
+  near.sort((a, b) => distance(a.at) - distance(b.at) || a.value - b.value);
+  return near[0]?.at ?? [...best];
 }
 
 /**

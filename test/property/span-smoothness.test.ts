@@ -13,14 +13,18 @@ const LIMIT = 0.15;
 /**
  * Schemes that still jump at the time of writing (issue 12 item 5 open for them): the test runs
  * them and expects the failure, so the day one becomes smooth this test says so and it must be
- * moved back to the list that holds.
+ * moved back to the list that holds. A jump is allowed only where the scheme's named regime
+ * (Design.regime) changes, and the regime must not flip back within 3 steps.
  */
-// Measured at 05:00 on 3 Dec with the search in the pipeline (default study: each scheme its own
-// rise and free proportions, carbon objective): cable dome 7 jumps (largest 24 % mass ÷ air,
-// 95→100 m; 18 % self-weight 225→230 m), cable net 14 (20 % self-weight 95→100 m), geodesic dome
-// 11 (52 % mass ÷ air 185→190 m), timber dome 14 (41 % self-weight 40→45 m). Truss (5 %) and shell
-// (10 %) hold. Most are the search's choice moving between two proportions of nearly equal carbon
-// (the objective itself is nearly continuous; the form it picks is not).
+// Measured at 08:05 on 3 Dec with the search trying every form (every hoop and mast count, single
+// and double layer, smooth and ribbed; the simplest within 3 % of the least): cable dome always
+// 1 hoop, 4 jumps within it (largest 30 % mass ÷ air 245→250 m: the ring height, on which carbon is
+// nearly flat, wanders and carries the enclosed air); cable net no jump over 15 % within one mast
+// count (largest 14.8 %) but the count flips back (3→5→3 at 195–200 m, 4→6→4 at 255–260 m and on);
+// geodesic dome flips single/double layer (145, 160, 190–200, 220 m) and jumps 22–27 % mass ÷ air
+// within the double layer (200→205, 240→245 m); timber dome jumps 36–57 % (50→55 m: the joint
+// descent of member length and rise lands on 13.5 m members where 6 m is 24 % lower; mass ÷ air as
+// the rise moves 155→160 m). Truss (5 %) and shell (smooth to 110 m, ribbed from 115 m; 12 %) hold.
 const KNOWN_FAILING: readonly SchemeId[] = ["cable-dome", "cable-net", "geodesic-dome", "timber-dome"];
 
 /** Every neighbour-to-neighbour change over the limit, where both ends are feasible and in range and the regime is the same. */
@@ -38,14 +42,28 @@ function jumps(points: readonly SpanPoint[]): { from: number; to: number; metric
   return out;
 }
 
+/** Where the named regime flips back within 3 steps (A at one span, B at the next, A again at most 3 steps on), among feasible points. */
+function flips(points: readonly SpanPoint[]): { from: number; to: number; regimes: string }[] {
+  const sorted = [...points].filter((p) => p.status === "feasible").sort((a, b) => a.spanM - b.spanM);
+  const out: { from: number; to: number; regimes: string }[] = [];
+  sorted.forEach((p, i) => {
+    const q = sorted[i + 1];
+    if (!q || q.regime === p.regime) return;
+    const back = sorted.slice(i + 2, i + 4).find((r) => r.regime === p.regime);
+    if (back) out.push({ from: p.spanM, to: back.spanM, regimes: `${p.regime} → ${q.regime} → ${back.regime}` });
+  });
+  return out;
+}
+
 describe("smooth across span (40–400 m, 5 m steps)", () => {
   const study = defaultStudy();
   const catalogue = defaultCatalogue();
   for (const model of SCHEMES) {
     const run = KNOWN_FAILING.includes(model.id) ? it.fails : it;
-    run(`${model.id}: no metric jumps more than 15 % between neighbours without a named regime change`, () => {
+    run(`${model.id}: no metric jumps more than 15 % between neighbours without a named regime change, and the regime does not flip back`, () => {
       const points = runSpanStudy(study, catalogue, { fromM: 40, toM: 400, stepM: 5 }, { schemeIds: [model.id] });
       expect(jumps(points)).toEqual([]);
+      expect(flips(points)).toEqual([]);
     }, 400_000); // each scheme: 73 spans, each with its proportion search (about 3–170 s here)
   }
 });

@@ -36,6 +36,15 @@ describe("chart specifications (snapshots)", () => {
     expect(html).toContain("Self-weight (kg/m² of plan)");
     expect(html).toMatchSnapshot();
   });
+  it("span study marks where a scheme's named form changes, with the new form's name, and nowhere else", () => {
+    const points = fixtureSpanPoints().map((p) => (p.id === "truss-roof" ? { ...p, regime: p.spanM < 90 ? "single layer" : "double layer" } : p));
+    const options = spanMetricChart(points, "selfWeightKgPerM2", "Self-weight (kg/m² of plan)", { title: "Self-weight against span", caption });
+    const html = render(options);
+    expect(html.match(/double layer/g)).toHaveLength(1);
+    expect(html).not.toContain("single layer");
+    expect(options.ariaDescription).toMatch(/diamond marks where a scheme changes its form/);
+    expect(spanMetricChart(fixtureSpanPoints(), "selfWeightKgPerM2", "Self-weight", { title: "t", caption }).ariaDescription).not.toMatch(/diamond/);
+  });
   it("captions name the span, the brief and the factor set", () => {
     expect(caption).toMatch(/^Span 160 m, each scheme its own rise, eaves/); // the default study's rise rule is "own"
     expect(chartCaption({ ...study, brief: { ...study.brief, riseRule: "common" } })).toMatch(/^Span 160 m, rise 24 m/);
