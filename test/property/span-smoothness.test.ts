@@ -21,7 +21,7 @@ const LIMIT = 0.15;
 // 1 hoop, 4 jumps within it (largest 30 % mass ÷ air 245→250 m: the ring height, on which carbon is
 // nearly flat, wanders and carries the enclosed air); cable net no jump over 15 % within one mast
 // count (largest 14.8 %) but the count flips back (3→5→3 at 195–200 m, 4→6→4 at 255–260 m and on);
-// geodesic dome flips single/double layer (145, 160, 190–200, 220 m) and jumps 22–27 % mass ÷ air
+// geodesic dome flips single/double layer (110–115, 145, 160, 190–200, 215–225 m) and jumps 22–27 % mass ÷ air
 // within the double layer (200→205, 240→245 m); timber dome jumps 36–57 % (50→55 m: the joint
 // descent of member length and rise lands on 13.5 m members where 6 m is 24 % lower; mass ÷ air as
 // the rise moves 155→160 m). Truss (5 %) and shell (smooth to 110 m, ribbed from 115 m; 12 %) hold.
