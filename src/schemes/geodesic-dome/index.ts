@@ -25,7 +25,6 @@ const declarations = {
       { value: "double", label: "Double-layer grid" },
     ],
     default: "single",
-    free: true,
     source: "double layer: two grids at a depth, webs between (equivalent sandwich stiffness)",
   },
   // default span/50 (common practice for double-layer domes, no source)
