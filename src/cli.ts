@@ -9,7 +9,7 @@ import { defaultCatalogue } from "./catalogue/default-catalogue";
 import { formatCsv, parseDecimal, shown } from "./kernel/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
-import { evaluateStudy, tableGaps, describeGaps, OBJECTIVES, type Objective, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
+import { evaluateStudy, tableGaps, describeGaps, OBJECTIVES, RISE_KEY, type Objective, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
 import { runSpanStudy } from "./comparison/span-study";
 import { CAUTION } from "./kernel/caution";
 import { failure, messageOf } from "./kernel/errors";
@@ -312,7 +312,11 @@ export function jsonResult(result: SchemeResult) {
 
 /** Which rise each scheme was designed with, and for what objective its proportions were chosen. */
 function riseLine(study: Study, results: readonly SchemeResult[]): string {
-  const rises = results.map((r) => `${r.id} ${r.brief ? r.brief.riseM.toFixed(1) : "–"} m${r.proportions?.riseSource === "searched" ? " (own)" : r.proportions?.riseSource === "pinned" ? " (pinned)" : ""}`);
+  const rises = results.map((r) => {
+    // a scheme that uses no rise (the flat truss) reports none, as its panel does
+    if (r.proportions && !(RISE_KEY in r.proportions.proportions)) return `${r.id} uses no rise`;
+    return `${r.id} ${r.brief ? r.brief.riseM.toFixed(1) : "–"} m${r.proportions?.riseSource === "searched" ? " (own)" : r.proportions?.riseSource === "pinned" ? " (pinned)" : ""}`;
+  });
   const rule = study.brief.riseRule === "own" ? "each scheme's own rise within the height limit" : "one common rise";
   return `Rise: ${rule} — ${rises.join(", ")}; free proportions chosen for least ${study.brief.objective} per m² of usable floor`;
 }

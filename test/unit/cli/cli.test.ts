@@ -75,4 +75,9 @@ describe("runCli results", () => {
   it("prints the caution with the table", () => {
     expect(run("demo.json").stdout).toMatch(/Feasibility-stage/);
   });
+  it("names each scheme's rise, and says the flat truss uses none (not the brief's rise it ignores)", () => {
+    const riseLine = run("demo.json").stdout.split("\n").find((l) => l.startsWith("Rise:")) ?? "";
+    expect(riseLine).toMatch(/cable-dome \d+\.\d m \(own\)/);
+    expect(riseLine).toContain("truss-roof uses no rise");
+  });
 });
