@@ -84,7 +84,7 @@ reactiveCell(main, { id: "span-charts", title: "Across the span range" }, () => 
   for (const m of METRICS) {
     const y = m.metric === "costPerM2Floor" ? `Cost (${currency}/m² of usable floor)` : m.y;
     const title = relative.value ? `${m.title}, against the best at each span` : m.title;
-    grid.append(chartFigure(spanMetricChart(list, m.metric, y, { title, caption: chartCaption(store.study.value, "span varied, rise/span fixed"), studySpanM: studySpanM.value, relative: relative.value, includeExcluded: includeExcluded.value }), relative.value ? `${m.file}-relative` : m.file));
+    grid.append(chartFigure(spanMetricChart(list, m.metric, y, { title, caption: chartCaption(store.study.value, store.study.value.brief.riseRule === "own" ? "span varied, proportions chosen afresh at each span" : "span varied, rise/span fixed"), studySpanM: studySpanM.value, relative: relative.value, includeExcluded: includeExcluded.value }), relative.value ? `${m.file}-relative` : m.file));
   }
   return grid;
 });
