@@ -44,14 +44,31 @@ export function needsLogScale(values: readonly number[]): boolean {
   return positive.length > 1 && Math.max(...positive) / Math.min(...positive) > 10;
 }
 
-/** Where a scheme's named form changes (regimeChanges), at the first span of the new form as drawn: a small diamond and the new form's name. */
+/** Spans in a row a form must hold, from where it starts, for its name to be written on the chart (or hold to the end of the range). */
+const NAMED_FORM_SPANS = 3;
+
+/** Whether the scheme keeps the form `regime` from `spanM` for NAMED_FORM_SPANS spans, or to the end of the range. */
+function formHolds(points: readonly SpanPoint[], id: SpanPoint["id"], spanM: number, regime: string): boolean {
+  const ahead = points.filter((p) => p.id === id && p.spanM >= spanM).sort((a, b) => a.spanM - b.spanM);
+  const held = ahead.findIndex((p) => p.regime !== regime);
+  return held === -1 || held >= NAMED_FORM_SPANS;
+}
+
+/**
+ * Where a scheme's named form changes (regimeChanges), at the first span of the new form as drawn:
+ * a small diamond, and the new form's name where that form holds (a count that flips from span to
+ * span, as the net's masts can, would write its names over one another).
+ */
 function regimeMarks(points: readonly SpanPoint[], drawn: readonly (SpanPoint & { value: number })[]) {
   const at = regimeChanges(points).flatMap((c) => {
     const p = drawn.find((q) => q.id === c.id && q.spanM === c.toSpanM && Number.isFinite(q.value));
-    return p ? [{ spanM: p.spanM, value: p.value, label: p.label, text: c.to }] : [];
+    return p ? [{ spanM: p.spanM, value: p.value, label: p.label, text: c.to, named: formHolds(points, c.id, c.toSpanM, c.to) }] : [];
   });
   if (at.length === 0) return [];
-  return [Plot.dot(at, { x: "spanM", y: "value", stroke: "label", fill: "white", symbol: "diamond", r: 4, clip: true }), Plot.text(at, { x: "spanM", y: "value", text: "text", fill: "label", dy: -9, fontSize: 9, clip: true })];
+  return [
+    Plot.dot(at, { x: "spanM", y: "value", stroke: "label", fill: "white", symbol: "diamond", r: 4, clip: true }),
+    Plot.text(at.filter((m) => m.named), { x: "spanM", y: "value", text: "text", fill: "label", dy: -9, fontSize: 9, clip: true }),
+  ];
 }
 
 /**
@@ -104,7 +121,7 @@ function spanDescription(points: readonly SpanPoint[], metric: SpanMetric, commo
     common.relative ? "Each scheme divided by the best feasible scheme in range at that span, so the best is 1." : log ? "Log scale: the values differ by more than ten times." : "",
     common.includeExcluded ? "Spans outside a method's valid range are in the scale, drawn dashed." : "Spans outside a method's valid range are drawn dashed and left out of the scale.",
     common.studySpanM === undefined ? "" : `The study's own span, ${common.studySpanM} m, is marked.`,
-    regimeChanges(points).length === 0 ? "" : "A diamond marks where a scheme changes its form, with the new form's name.",
+    regimeChanges(points).length === 0 ? "" : "A diamond marks where a scheme changes its form, with the new form's name where that form holds for three spans or more.",
     `Metric: ${metric}.`,
   ].filter((s) => s !== "").join(" ");
 }

@@ -45,6 +45,13 @@ describe("chart specifications (snapshots)", () => {
     expect(options.ariaDescription).toMatch(/diamond marks where a scheme changes its form/);
     expect(spanMetricChart(fixtureSpanPoints(), "selfWeightKgPerM2", "Self-weight", { title: "t", caption }).ariaDescription).not.toMatch(/diamond/);
   });
+  it("a form that does not hold (4 masts at one span between 3 masts) gets its diamond but not its name, so flipping counts do not write over one another", () => {
+    const points = fixtureSpanPoints().map((p) => (p.id === "truss-roof" ? { ...p, regime: p.spanM === 90 ? "4 masts" : "3 masts" } : p));
+    // the truss is out of its range at 120 m in the fixture: brought into the chart to draw that span
+    const html = render(spanMetricChart(points, "selfWeightKgPerM2", "Self-weight (kg/m² of plan)", { title: "Self-weight against span", caption, includeExcluded: true }));
+    expect(html).not.toContain("4 masts");
+    expect(html.match(/3 masts/g)).toHaveLength(1); // back to 3 masts at 120 m, held to the end of the range
+  });
   it("captions name the span, the brief and the factor set", () => {
     expect(caption).toMatch(/^Span 160 m, each scheme its own rise, eaves/); // the default study's rise rule is "own"
     expect(chartCaption({ ...study, brief: { ...study.brief, riseRule: "common" } })).toMatch(/^Span 160 m, rise 24 m/);
