@@ -1,4 +1,5 @@
 import { effect } from "@preact/signals-core";
+import { unmountWithin } from "./controls";
 import { messageOf } from "../kernel/errors";
 
 /** What a cell's render function may return. */
@@ -49,6 +50,7 @@ export function reactiveCell(parent: HTMLElement, options: CellOptions, render: 
       element.classList.add("cell-failed");
       content = errorBox(error);
     }
+    unmountWithin(body); // the last content's components end their effects before they leave
     body.replaceChildren(...(content === null || content === undefined ? [] : [typeof content === "string" ? textNode(content) : content]));
     element.dataset.renders = String(Number(element.dataset.renders) + 1);
     element.dataset.ms = (performance.now() - started).toFixed(1);

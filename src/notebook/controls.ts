@@ -1,4 +1,10 @@
+// The study's controls as preact components (issue 11 item 5): each renders its markup once and,
+// while mounted, ties its field to a binding (editField); unmounting disposes that tie, so a
+// control taken off the page leaves no effect behind. The functions `numberControl` … return one
+// mounted element for pages that lay out their cells by hand.
 import { effect, type ReadonlySignal } from "@preact/signals-core";
+import { h, render, type ComponentChild, type ComponentChildren, type VNode } from "preact";
+import { useLayoutEffect, useRef } from "preact/hooks";
 
 /**
  * A value a control shows and changes: read reactively, written through a callback. A binding
@@ -18,20 +24,37 @@ function refused<T>(binding: Binding<T>, next: T): string | null {
   return problem;
 }
 
-/** An inline message element tied to an input for screen readers. */
-function messageFor(input: HTMLElement, id: string): HTMLDivElement {
-  const message = document.createElement("div");
-  message.className = "control-message";
-  message.id = `${id}-message`;
-  message.setAttribute("aria-live", "polite");
-  input.setAttribute("aria-describedby", message.id);
-  return message;
+let counter = 0;
+/** The control's id: the given one, or a fresh one kept for the component's lifetime. */
+function useControlId(prefix: string, given: string | undefined): string {
+  const id = useRef<string | undefined>(undefined);
+  if (id.current === undefined) {
+    counter += 1;
+    id.current = given ?? `${prefix}-${counter}`;
+  }
+  return id.current;
 }
 
-let counter = 0;
-function uid(prefix: string): string {
-  counter += 1;
-  return `${prefix}-${counter}`;
+/** Runs `attach` once the component's elements exist and undoes it on unmount (layout effect: synchronous with render). */
+function useAttached(attach: () => () => void, deps: readonly unknown[]): void {
+  useLayoutEffect(attach, deps);
+}
+
+/** The inline message tied to its input for screen readers. */
+function Message({ id }: { id: string }): ComponentChild {
+  return h("div", { className: "control-message", id: `${id}-message`, "aria-live": "polite" });
+}
+
+function Hint({ text }: { text: string | undefined }): ComponentChild {
+  return text ? h("div", { className: "control-hint" }, text) : null;
+}
+
+/** The elements of a control found from its wrapper once rendered. */
+function parts<E extends HTMLElement = HTMLInputElement>(wrap: HTMLElement, id: string): { input: E; message: HTMLElement } {
+  const input = wrap.querySelector<E>(`#${CSS.escape(id)}`);
+  const message = wrap.querySelector<HTMLElement>(`#${CSS.escape(`${id}-message`)}`);
+  if (!input || !message) throw new Error(`control ${id}: its input or message is missing`);
+  return { input, message };
 }
 
 export interface NumberControlOptions {
@@ -49,73 +72,59 @@ export interface NumberControlOptions {
   id?: string;
 }
 
+/** Why a typed number is not allowed, or null. */
+function numberProblem(raw: string, o: NumberControlOptions): string | null {
+  if (raw.trim() === "") return `${o.label}: a value is required`;
+  const x = Number(raw);
+  if (!Number.isFinite(x)) return `${o.label}: "${raw}" is not a number`;
+  if (x < o.min || x > o.max) return `${o.label}: ${x} ${o.unit} is out of range (allowed ${o.min} to ${o.max} ${o.unit})`;
+  if (o.integer && !Number.isInteger(x)) return `${o.label}: ${x} is not a whole number`;
+  return null;
+}
+
 /**
  * A number field with its unit, min/max/step, an inline message when the typed value is not
  * allowed (the value is then not applied, and the one in force named: see editField), and
  * optionally a slider bound to the same value.
  */
-export function numberControl(binding: Binding<number>, options: NumberControlOptions): HTMLElement {
-  const id = options.id ?? uid("num");
-  const wrap = document.createElement("div");
-  wrap.className = "control control-number";
-  const label = document.createElement("label");
-  label.htmlFor = id;
-  label.textContent = options.label;
-  const unit = document.createElement("span");
-  unit.className = "unit";
-  unit.textContent = options.unit;
-  const input = document.createElement("input");
-  input.type = "number";
-  input.id = id;
-  input.min = String(options.min);
-  input.max = String(options.max);
-  input.step = String(options.step);
-  input.inputMode = "decimal";
-  const message = messageFor(input, id);
-  const row = document.createElement("div");
-  row.className = "control-row";
-  row.append(input, unit);
-  let slider: HTMLInputElement | undefined;
-  if (options.slider) {
-    slider = document.createElement("input");
-    slider.type = "range";
-    slider.min = String(options.min);
-    slider.max = String(options.max);
-    slider.step = String(options.step);
-    slider.setAttribute("aria-label", `${options.label} (slider)`);
-    row.append(slider);
-  }
-  wrap.append(label, row, message);
-  if (options.hint) {
-    const hint = document.createElement("div");
-    hint.className = "control-hint";
-    hint.textContent = options.hint;
-    wrap.append(hint);
-  }
-
-  const problem = (raw: string): string | null => {
-    if (raw.trim() === "") return `${options.label}: a value is required`;
-    const x = Number(raw);
-    if (!Number.isFinite(x)) return `${options.label}: "${raw}" is not a number`;
-    if (x < options.min || x > options.max) return `${options.label}: ${x} ${options.unit} is out of range (allowed ${options.min} to ${options.max} ${options.unit})`;
-    if (options.integer && !Number.isInteger(x)) return `${options.label}: ${x} is not a whole number`;
-    return null;
-  };
-  const unitText = options.unit && options.unit !== "–" ? ` ${options.unit}` : "";
-  const field = editField<number>(binding, { input, wrap, message, label: options.label }, {
-    parse: (raw) => {
-      const text = problem(raw);
-      return text === null ? { value: Number(raw) + 0 } : { problem: text }; // + 0: "-0" is stored as 0
-    },
-    shows: (raw, value) => raw !== "" && Number(raw) === value,
-    show: (value) => String(value),
-    inForce: (value) => `${value}${unitText}`,
-    slider,
-  });
-  slider?.addEventListener("input", () => {
-    if (slider) field.applyOnce(slider.value);
-  });
-  return wrap;
+export function NumberControl(props: NumberControlOptions & { binding: Binding<number> }): ComponentChild {
+  const { binding, ...o } = props;
+  const id = useControlId("num", o.id);
+  const wrap = useRef<HTMLDivElement>(null);
+  useAttached(() => {
+    const host = wrap.current;
+    if (!host) return () => undefined;
+    const { input, message } = parts(host, id);
+    const slider = host.querySelector<HTMLInputElement>('input[type="range"]') ?? undefined;
+    const unitText = o.unit && o.unit !== "–" ? ` ${o.unit}` : "";
+    const field = editField<number>(binding, { input, wrap: host, message, label: o.label }, {
+      parse: (raw) => {
+        const text = numberProblem(raw, o);
+        return text === null ? { value: Number(raw) + 0 } : { problem: text }; // + 0: "-0" is stored as 0
+      },
+      shows: (raw, value) => raw !== "" && Number(raw) === value,
+      show: (value) => String(value),
+      inForce: (value) => `${value}${unitText}`,
+      slider,
+    });
+    const step = () => slider && field.applyOnce(slider.value);
+    slider?.addEventListener("input", step);
+    return () => {
+      slider?.removeEventListener("input", step);
+      field.dispose();
+    };
+  }, [binding]);
+  const range = { min: String(o.min), max: String(o.max), step: String(o.step) };
+  return h("div", { className: "control control-number", ref: wrap }, [
+    h("label", { htmlFor: id }, o.label),
+    h("div", { className: "control-row" }, [
+      h("input", { type: "number", id, ...range, inputMode: "decimal", "aria-describedby": `${id}-message` }),
+      h("span", { className: "unit" }, o.unit),
+      o.slider ? h("input", { type: "range", ...range, "aria-label": `${o.label} (slider)` }) : null,
+    ]),
+    h(Message, { id }),
+    h(Hint, { text: o.hint }),
+  ]);
 }
 
 interface FieldParts {
@@ -140,8 +149,9 @@ interface FieldRules<T> {
  * not allowed, the value in force before this edit began is put back, so a valid prefix (typing
  * "1e308" passes through "1") is never left applied, and the message says which value is in force.
  * Enter or leaving the field replaces invalid text by that value; the message stays until the value changes.
+ * `dispose` removes the listeners and the effect.
  */
-function editField<T>(binding: Binding<T>, parts: FieldParts, rules: FieldRules<T>): { applyOnce(raw: string): void } {
+function editField<T>(binding: Binding<T>, parts: FieldParts, rules: FieldRules<T>): { applyOnce(raw: string): void; dispose(): void } {
   const { input, wrap, message } = parts;
   let committed = binding.value.peek();
   let holding = false;
@@ -161,18 +171,21 @@ function editField<T>(binding: Binding<T>, parts: FieldParts, rules: FieldRules<
     wrap.classList.toggle("invalid", text !== null);
     message.textContent = text ?? "";
   };
-  input.addEventListener("focus", () => {
+  const onFocus = () => {
     committed = binding.value.peek();
-  });
-  input.addEventListener("input", () => apply(input.value, true));
-  input.addEventListener("change", () => {
+  };
+  const onInput = () => apply(input.value, true);
+  const onChange = () => {
     if (!holding) committed = binding.value.peek();
     else {
       holding = false;
       input.value = rules.show(binding.value.peek());
     }
-  });
-  effect(() => {
+  };
+  input.addEventListener("focus", onFocus);
+  input.addEventListener("input", onInput);
+  input.addEventListener("change", onChange);
+  const stop = effect(() => {
     const value = binding.value.value;
     if (rules.slider) rules.slider.value = rules.show(value);
     if (holding) return;
@@ -190,6 +203,12 @@ function editField<T>(binding: Binding<T>, parts: FieldParts, rules: FieldRules<
       input.value = rules.show(binding.value.peek());
       if (rules.slider) rules.slider.value = rules.show(binding.value.peek());
     },
+    dispose() {
+      stop();
+      input.removeEventListener("focus", onFocus);
+      input.removeEventListener("input", onInput);
+      input.removeEventListener("change", onChange);
+    },
   };
 }
 
@@ -203,35 +222,54 @@ export interface TextControlOptions {
 }
 
 /** A text field checked on every keystroke: an inline message for a value not allowed, which is then not applied (see editField). */
-export function textControl(binding: Binding<string>, options: TextControlOptions): HTMLElement {
-  const id = options.id ?? uid("txt");
-  const wrap = document.createElement("div");
-  wrap.className = "control control-text";
-  const label = document.createElement("label");
-  label.htmlFor = id;
-  label.textContent = options.label;
-  const input = document.createElement("input");
-  input.type = "text";
-  input.id = id;
-  input.size = options.size ?? 8;
-  const message = messageFor(input, id);
-  wrap.append(label, input, message);
-  if (options.hint) {
-    const hint = document.createElement("div");
-    hint.className = "control-hint";
-    hint.textContent = options.hint;
-    wrap.append(hint);
-  }
-  editField<string>(binding, { input, wrap, message, label: options.label }, {
-    parse: (raw) => {
-      const problem = options.check(raw.trim());
-      return problem === null ? { value: raw.trim() } : { problem: `${options.label}: ${problem}` };
-    },
-    shows: (raw, value) => raw.trim() === value,
-    show: (value) => value,
-    inForce: (value) => `"${value}"`,
-  });
-  return wrap;
+export function TextControl(props: TextControlOptions & { binding: Binding<string> }): ComponentChild {
+  const { binding, ...o } = props;
+  const id = useControlId("txt", o.id);
+  const wrap = useRef<HTMLDivElement>(null);
+  useAttached(() => {
+    const host = wrap.current;
+    if (!host) return () => undefined;
+    const { input, message } = parts(host, id);
+    const field = editField<string>(binding, { input, wrap: host, message, label: o.label }, {
+      parse: (raw) => {
+        const problem = o.check(raw.trim());
+        return problem === null ? { value: raw.trim() } : { problem: `${o.label}: ${problem}` };
+      },
+      shows: (raw, value) => raw.trim() === value,
+      show: (value) => value,
+      inForce: (value) => `"${value}"`,
+    });
+    return field.dispose;
+  }, [binding]);
+  return h("div", { className: "control control-text", ref: wrap }, [
+    h("label", { htmlFor: id }, o.label),
+    h("input", { type: "text", id, size: o.size ?? 8, "aria-describedby": `${id}-message` }),
+    h(Message, { id }),
+    h(Hint, { text: o.hint }),
+  ]);
+}
+
+/**
+ * Ties a select or checkbox to a binding: a change the binding refuses is put back and named;
+ * the element follows the binding's value while mounted.
+ */
+function useChoice<T, E extends HTMLInputElement | HTMLSelectElement>(binding: Binding<T>, wrap: { current: HTMLElement | null }, id: string, label: string, read: (el: E) => T, write: (el: E, value: T) => void): void {
+  useAttached(() => {
+    const host = wrap.current;
+    if (!host) return () => undefined;
+    const { input, message } = parts<E>(host, id);
+    const onChange = () => {
+      const refusal = refused(binding, read(input));
+      message.textContent = refusal === null ? "" : `${label}: ${refusal} — not applied`;
+      if (refusal !== null) write(input, binding.value.peek());
+    };
+    input.addEventListener("change", onChange);
+    const stop = effect(() => write(input, binding.value.value));
+    return () => {
+      stop();
+      input.removeEventListener("change", onChange);
+    };
+  }, [binding]);
 }
 
 export interface SelectControlOptions {
@@ -241,59 +279,73 @@ export interface SelectControlOptions {
 }
 
 /** A drop-down list. */
-export function selectControl(binding: Binding<string>, options: SelectControlOptions): HTMLElement {
-  const id = options.id ?? uid("sel");
-  const wrap = document.createElement("div");
-  wrap.className = "control control-select";
-  const label = document.createElement("label");
-  label.htmlFor = id;
-  label.textContent = options.label;
-  const select = document.createElement("select");
-  select.id = id;
-  for (const choice of options.choices) {
-    const option = document.createElement("option");
-    option.value = choice.value;
-    option.textContent = choice.label;
-    select.append(option);
-  }
-  const message = messageFor(select, id);
-  select.addEventListener("change", () => {
-    const refusal = refused(binding, select.value);
-    message.textContent = refusal === null ? "" : `${options.label}: ${refusal} — not applied`;
-    if (refusal !== null) select.value = binding.value.peek();
-  });
-  effect(() => {
-    select.value = binding.value.value;
-  });
-  wrap.append(label, select, message);
-  return wrap;
+export function SelectControl(props: SelectControlOptions & { binding: Binding<string> }): ComponentChild {
+  const { binding, label, choices } = props;
+  const id = useControlId("sel", props.id);
+  const wrap = useRef<HTMLDivElement>(null);
+  useChoice<string, HTMLSelectElement>(binding, wrap, id, label, (el) => el.value, (el, value) => (el.value = value));
+  return h("div", { className: "control control-select", ref: wrap }, [
+    h("label", { htmlFor: id }, label),
+    h("select", { id, "aria-describedby": `${id}-message` }, choices.map((c) => h("option", { key: c.value, value: c.value }, c.label))),
+    h(Message, { id }),
+  ]);
 }
 
-/** A checkbox toggle. */
-export function toggleControl(binding: Binding<boolean>, options: { label: string; id?: string }): HTMLElement {
-  const id = options.id ?? uid("tog");
-  const wrap = document.createElement("div");
-  wrap.className = "control control-toggle";
-  const input = document.createElement("input");
-  input.type = "checkbox";
-  input.id = id;
-  const label = document.createElement("label");
-  label.htmlFor = id;
-  label.textContent = options.label;
-  const message = messageFor(input, id);
-  input.addEventListener("change", () => {
-    const refusal = refused(binding, input.checked);
-    message.textContent = refusal === null ? "" : `${options.label}: ${refusal} — not applied`;
-    if (refusal !== null) input.checked = binding.value.peek();
-  });
-  effect(() => {
-    input.checked = binding.value.value;
-  });
-  wrap.append(input, label, message);
-  return wrap;
+/** A checkbox toggle; `className` adds to the control's own (the "pinned" box is one). */
+export function ToggleControl(props: { binding: Binding<boolean>; label: string; id?: string; className?: string }): ComponentChild {
+  const { binding, label } = props;
+  const id = useControlId("tog", props.id);
+  const wrap = useRef<HTMLDivElement>(null);
+  useChoice<boolean, HTMLInputElement>(binding, wrap, id, label, (el) => el.checked, (el, value) => (el.checked = value));
+  return h("div", { className: `control control-toggle${props.className ? ` ${props.className}` : ""}`, ref: wrap }, [
+    h("input", { type: "checkbox", id, "aria-describedby": `${id}-message` }),
+    h("label", { htmlFor: id }, label),
+    h(Message, { id }),
+  ]);
 }
 
 /** A labelled group of controls. */
+export function ControlGroup({ title, children }: { title: string; children?: ComponentChildren }): ComponentChild {
+  return h("fieldset", { className: "control-group" }, [h("legend", null, title), children]);
+}
+
+/**
+ * Mounts a component tree on an element of its own (laid out as if absent: `display: contents`)
+ * for pages that build their cells by hand; `unmountWithin` takes such trees off again.
+ */
+export function mount<P>(vnode: VNode<P>): HTMLElement {
+  const host = document.createElement("div");
+  host.className = "mounted";
+  render(vnode, host);
+  return host;
+}
+
+/** Unmounts every tree mounted within `root` (their effects and listeners end with them). */
+export function unmountWithin(root: Element): void {
+  root.querySelectorAll(".mounted").forEach((host) => render(null, host));
+}
+
+/** A number field (see NumberControl), mounted. */
+export function numberControl(binding: Binding<number>, options: NumberControlOptions): HTMLElement {
+  return mount(h(NumberControl, { binding, ...options }));
+}
+
+/** A text field (see TextControl), mounted. */
+export function textControl(binding: Binding<string>, options: TextControlOptions): HTMLElement {
+  return mount(h(TextControl, { binding, ...options }));
+}
+
+/** A drop-down list (see SelectControl), mounted. */
+export function selectControl(binding: Binding<string>, options: SelectControlOptions): HTMLElement {
+  return mount(h(SelectControl, { binding, ...options }));
+}
+
+/** A checkbox (see ToggleControl), mounted. */
+export function toggleControl(binding: Binding<boolean>, options: { label: string; id?: string }): HTMLElement {
+  return mount(h(ToggleControl, { binding, ...options }));
+}
+
+/** A labelled group of elements built by hand. */
 export function controlGroup(title: string, controls: readonly HTMLElement[]): HTMLElement {
   const fieldset = document.createElement("fieldset");
   fieldset.className = "control-group";

@@ -1,4 +1,6 @@
-import type { Design, OptionValue, SchemeModel } from "../schemes/types";
+import type { Design, OptionSpec, OptionValue, SchemeModel } from "../schemes/types";
+import { h, type ComponentChild } from "preact";
+import { useMemo } from "preact/hooks";
 import { computed } from "@preact/signals-core";
 import { setIn } from "../kernel/patch";
 import type { SchemeResult } from "../pipeline";
@@ -6,7 +8,7 @@ import { materialInfo } from "../materials";
 import { tableElement, fmt } from "./format";
 import { statusOf, metricValue } from "../comparison/verdict";
 import { keyValues } from "./key-values";
-import { numberControl, selectControl, toggleControl, controlGroup } from "./controls";
+import { NumberControl, SelectControl, ToggleControl, ControlGroup, mount } from "./controls";
 import type { StudyStore } from "./study-store";
 
 /**
@@ -14,47 +16,54 @@ import type { StudyStore } from "./study-store";
  * value; pinning takes the value the search chose (`chosen`), so the design does not move, in one
  * checked edit of the study.
  */
-function pinControl(store: StudyStore, model: SchemeModel, key: string, chosen: (key: string) => OptionValue | undefined): HTMLElement {
-  const pinned = computed(() => store.study.value.schemes[model.id]?.pinned ?? []);
-  const binding = {
-    value: computed(() => pinned.value.includes(key)),
-    set(on: boolean): void {
-      const study = store.study.peek();
-      const list = pinned.peek().filter((k) => k !== key);
-      const value = chosen(key);
-      const withValue = on && value !== undefined ? setIn(study, ["schemes", model.id, "options", key], value) : study;
-      const problem = store.replace(setIn(withValue, ["schemes", model.id, "pinned"], on ? [...list, key] : list));
-      if (problem !== null) store.notice.value = `Pinning ${key}: ${problem}`;
-    },
-  };
-  const box = toggleControl(binding, { id: `${model.id}-${key}-pinned`, label: "pinned (not searched)" });
-  box.classList.add("pin");
-  return box;
+function PinControl({ store, model, optionKey, chosen }: { store: StudyStore; model: SchemeModel; optionKey: string; chosen: (key: string) => OptionValue | undefined }): ComponentChild {
+  const binding = useMemo(() => {
+    const pinned = computed(() => store.study.value.schemes[model.id]?.pinned ?? []);
+    return {
+      value: computed(() => pinned.value.includes(optionKey)),
+      set(on: boolean): void {
+        const study = store.study.peek();
+        const list = pinned.peek().filter((k) => k !== optionKey);
+        const value = chosen(optionKey);
+        const withValue = on && value !== undefined ? setIn(study, ["schemes", model.id, "options", optionKey], value) : study;
+        const problem = store.replace(setIn(withValue, ["schemes", model.id, "pinned"], on ? [...list, optionKey] : list));
+        if (problem !== null) store.notice.value = `Pinning ${optionKey}: ${problem}`;
+      },
+    };
+  }, [store, model, optionKey, chosen]);
+  return h(ToggleControl, { binding, id: `${model.id}-${optionKey}-pinned`, label: "pinned (not searched)", className: "pin" });
+}
+
+/** One option's control, bound to the study at the scheme's option path. */
+function OptionControl({ store, model, spec }: { store: StudyStore; model: SchemeModel; spec: OptionSpec }): ComponentChild {
+  const path = ["schemes", model.id, "options", spec.key];
+  const id = `${model.id}-${spec.key}`;
+  switch (spec.kind) {
+    case "number":
+      return h(NumberControl, { binding: store.bind<number>(path), id, label: spec.label, unit: spec.unit, min: spec.min, max: spec.max, step: spec.step, integer: spec.integer ?? false, hint: spec.source });
+    case "select":
+      return h(SelectControl, { binding: store.bind<string>(path), id, label: spec.label, choices: spec.choices });
+    case "toggle":
+      return h(ToggleControl, { binding: store.bind<boolean>(path), id, label: spec.label });
+  }
 }
 
 /** The option controls of one scheme, from its OptionSpecs, bound to the study; a free one has a "pinned" box beside it. */
+export function SchemeOptions({ store, model, chosen }: { store: StudyStore; model: SchemeModel; chosen: (key: string) => OptionValue | undefined }): ComponentChild {
+  return h(
+    ControlGroup,
+    { title: `${model.label}: options` },
+    model.options.map((spec) =>
+      spec.free === true
+        ? h("div", { key: spec.key, className: "free-option" }, [h(OptionControl, { store, model, spec }), h(PinControl, { store, model, optionKey: spec.key, chosen })])
+        : h(OptionControl, { key: spec.key, store, model, spec }),
+    ),
+  );
+}
+
+/** SchemeOptions mounted on an element of its own, for the compare page's hand-built cells. */
 export function schemeOptionControls(store: StudyStore, model: SchemeModel, chosen: (key: string) => OptionValue | undefined = () => undefined): HTMLElement {
-  const controls = model.options.map((spec) => {
-    const path = ["schemes", model.id, "options", spec.key];
-    const id = `${model.id}-${spec.key}`;
-    const hint = spec.source;
-    const control = (() => {
-      switch (spec.kind) {
-        case "number":
-          return numberControl(store.bind<number>(path), { id, label: spec.label, unit: spec.unit, min: spec.min, max: spec.max, step: spec.step, integer: spec.integer ?? false, hint });
-        case "select":
-          return selectControl(store.bind<string>(path), { id, label: spec.label, choices: spec.choices });
-        case "toggle":
-          return toggleControl(store.bind<boolean>(path), { id, label: spec.label });
-      }
-    })();
-    if (spec.free !== true) return control;
-    const pair = document.createElement("div");
-    pair.className = "free-option";
-    pair.append(control, pinControl(store, model, spec.key, chosen));
-    return pair;
-  });
-  return controlGroup(`${model.label}: options`, controls);
+  return mount(h(SchemeOptions, { store, model, chosen }));
 }
 
 /** The member table of a design: forces (kN or MN), sections, utilisations, governing checks. */
