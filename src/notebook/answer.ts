@@ -41,9 +41,7 @@ export function answerParts(results: readonly SchemeResult[], currency: string):
     if (!result) continue;
     const clauses = wins.map((w) => {
       const quality = VERDICT_METRICS.find((m) => m.key === w.metric)?.quality ?? w.metric;
-      const margin = w.next
-        ? `${fmt.pct(1 - w.value / w.next.value)} below ${inSentence(w.next.label)} at ${metricText(w.metric, w.next.value, currency)}`
-        : "the only scheme ranked";
+      const margin = w.next ? marginText(w.value, w.next.value, `${inSentence(w.next.label)} at ${metricText(w.metric, w.next.value, currency)}`) : "the only scheme ranked";
       return `${quality} at ${metricText(w.metric, w.value, currency)} (${margin})`;
     });
     const last = clauses.pop();
@@ -55,6 +53,16 @@ export function answerParts(results: readonly SchemeResult[], currency: string):
     parts.push({ text: `Left out of the ranking: ${v.excluded.map((e) => `${inSentence(e.label)} (${fmt.plain(e.reason)})`).join("; ")}.` });
   }
   return parts;
+}
+
+/**
+ * The lead over the next scheme. Under 1 % it is not written as "0 % below", which reads as a
+ * misprint: it says the two are level, well inside what a feasibility estimate can tell apart.
+ */
+export function marginText(value: number, next: number, nextText: string): string {
+  const gap = 1 - value / next;
+  if (gap < 0.01) return `less than 1 % below ${nextText}: level within the accuracy of these estimates`;
+  return `${fmt.pct(gap)} below ${nextText}`;
 }
 
 /** The main reason behind a winner: its governing check and the material that carries most of its carbon. */

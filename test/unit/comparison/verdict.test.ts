@@ -48,3 +48,12 @@ describe("crossovers without flip-flop (issue 14)", () => {
     expect(crossovers(rows)).toEqual([{ fromSpanM: 70, toSpanM: 80, from: "a", to: "c" }]);
   });
 });
+
+describe("the answer's margin (issue 14: words a project lead uses)", () => {
+  it("writes a lead of 1 % or more as a percentage and a smaller one as level, never as '0 % below'", async () => {
+    const { marginText } = await import("../../../src/notebook/answer");
+    expect(marginText(80, 100, "the truss at 100")).toBe("20 % below the truss at 100");
+    expect(marginText(663, 664, "the shell at 664 EUR/m²")).toBe("less than 1 % below the shell at 664 EUR/m²: level within the accuracy of these estimates");
+    expect(marginText(663, 664, "x")).not.toMatch(/\b0 %/);
+  });
+});
