@@ -6,6 +6,7 @@ import { domeCpe, windCase, type DomeCpe } from "./dome-wind";
 import { temperatureCase, TEMPERATURE_DEFAULTS, type TemperatureOptions } from "./temperature-case";
 import { designCombinations, type Combination } from "./design-combinations";
 import { domeWindReference } from "./wind";
+import { memoLast } from "../kernel/memo";
 
 /** The load cases and combinations every scheme of a study designs for. */
 export interface DesignBasis {
@@ -47,9 +48,16 @@ function uniformCase(id: "services" | "imposed", label: string, action: "permane
  * wind with internal pressure and with internal suction as net pressure maps, a uniform temperature
  * change, and the EN 1990 combinations of the study's expression. The permanent load G of a
  * combination is the scheme's self-weight plus the services case.
+ * The answer is remembered for the last few briefs and shared between callers: read only.
  * @throws when the brief's rise is not 0 < rise ≤ span/2 (from sphericalCap)
  */
-export function designBasis(brief: Brief, temperature: TemperatureOptions = TEMPERATURE_DEFAULTS): DesignBasis {
+export const designBasis: (brief: Brief, temperature?: TemperatureOptions) => DesignBasis = memoLast(
+  (brief: Brief, temperature: TemperatureOptions = TEMPERATURE_DEFAULTS) => buildDesignBasis(brief, temperature),
+  // the proportion search designs many candidates of one brief (one rise): each would rebuild the same basis
+  (brief: Brief, temperature: TemperatureOptions = TEMPERATURE_DEFAULTS) => JSON.stringify([brief, temperature]),
+);
+
+function buildDesignBasis(brief: Brief, temperature: TemperatureOptions): DesignBasis {
   const cap = sphericalCap(brief.spanM, brief.riseM);
   const fOverD = brief.riseM / brief.spanM;
   const hOverD = brief.eavesHeightM / brief.spanM;

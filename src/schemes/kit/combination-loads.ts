@@ -1,5 +1,6 @@
 import type { Brief } from "../../brief";
 import { combinationAtPlanKPa, designBasis, type Combination, type DesignBasis } from "../../loads";
+import { memoOnObject } from "../../kernel/memo";
 
 /** A design combination as a method that takes only a uniform load sees it. */
 export interface PlanCombination {
@@ -25,6 +26,11 @@ export interface PlanCombination {
  * equivalent at g is baseKPa + permanentFactor × g.
  */
 export function planCombinations(brief: Brief, basis: DesignBasis = designBasis(brief)): PlanCombination[] {
+  return combinationsOfBasis(basis);
+}
+
+/** planCombinations of one basis, remembered with it (designBasis shares one basis per brief): read only. */
+const combinationsOfBasis = memoOnObject((basis: DesignBasis): PlanCombination[] => {
   const points = extremePoints(basis);
   return basis.combinations.map((combination) => {
     const at = combinationAtPlanKPa(basis, combination, 0);
@@ -46,7 +52,7 @@ export function planCombinations(brief: Brief, basis: DesignBasis = designBasis(
       rule: gravity ? "the peak of the combined map over the whole plan" : "the most upward value of the combined map over the whole plan",
     };
   });
-}
+});
 
 /**
  * Where the basis's maps take their extremes (as src/loads summariseCombination samples them, more
