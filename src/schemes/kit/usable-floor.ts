@@ -38,11 +38,34 @@ export function soffitHeightAtM(soffit: FloorEnvelope["soffit"], rM: number): nu
   if (soffit.length === 0) throw new RangeError("invalid floor.soffit: empty (expected at least one (radius, height) point)");
   const first = soffit[0] as readonly [number, number];
   if (rM <= first[0]) return first[1];
-  const i = firstAtOrBeyond(soffit, rM);
+  return heightBefore(soffit, firstAtOrBeyond(soffit, rM), rM);
+}
+
+/** The soffit's height at r, given i: the first point from 1 on whose radius is at least r (r beyond the first point). */
+function heightBefore(soffit: FloorEnvelope["soffit"], i: number, rM: number): number {
   if (i >= soffit.length) return (soffit[soffit.length - 1] as readonly [number, number])[1];
   const [r0, z0] = soffit[i - 1] as readonly [number, number];
   const [r1, z1] = soffit[i] as readonly [number, number];
   return r1 > r0 ? z0 + ((z1 - z0) * (rM - r0)) / (r1 - r0) : Math.min(z0, z1);
+}
+
+/**
+ * soffitHeightAtM for radii asked in increasing order (the floor's rings, 2,000 of them per design):
+ * an ascending soffit is walked forward from the last point found instead of bisected for each
+ * ring — the same point, so the same heights. A radius smaller than the last starts again.
+ */
+function soffitHeightOutwards(soffit: FloorEnvelope["soffit"]): (rM: number) => number {
+  if (soffit.length === 0 || !isAscending(soffit)) return (rM) => soffitHeightAtM(soffit, rM);
+  const first = soffit[0] as readonly [number, number];
+  let i = 1;
+  let lastM = -Infinity;
+  return (rM) => {
+    if (rM <= first[0]) return first[1];
+    if (rM < lastM) i = 1;
+    lastM = rM;
+    while (i < soffit.length && rM > (soffit[i] as readonly [number, number])[0]) i++;
+    return heightBefore(soffit, i, rM);
+  };
 }
 
 /** Whether the soffit at radius r leaves the brief's clear height. */
@@ -84,7 +107,7 @@ function supportLossM2(brief: Brief, floor: FloorEnvelope, s: FloorEnvelope["sup
  */
 export function usableFloorM2(brief: Brief, floor: FloorEnvelope): number {
   const a = brief.spanM / 2;
-  const underSoffit = usableFloorAreaM2(a, (r) => soffitHeightAtM(floor.soffit, r), brief.minClearHeightM, FLOOR_RINGS);
+  const underSoffit = usableFloorAreaM2(a, soffitHeightOutwards(floor.soffit), brief.minClearHeightM, FLOOR_RINGS);
   let supportsM2 = 0;
   for (const s of floor.supports) {
     if (!(s.radiusM >= 0 && s.clearRadiusM >= 0 && Number.isInteger(s.count) && s.count >= 0)) {

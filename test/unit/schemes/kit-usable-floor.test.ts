@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { DEFAULT_BRIEF } from "../../../src/brief";
 import { designStatus, massByGroupKg, soffitHeightAtM, takeoffGroupOf, usableFloorM2 } from "../../../src/schemes/kit";
 import { expectRelClose } from "../../helpers/close";
+import { usableFloorAreaM2 } from "../../../src/mechanics/usable-floor";
 
 const brief = { ...DEFAULT_BRIEF, spanM: 100, minClearHeightM: 10 };
 
@@ -26,6 +27,18 @@ describe("usable floor by one rule (kit)", () => {
     expect(soffitHeightAtM([[10, 4], [20, 8]], 0)).toBe(4);
     expect(soffitHeightAtM([[10, 4], [20, 8]], 30)).toBe(8);
     expect(() => soffitHeightAtM([], 1)).toThrow(/floor\.soffit/);
+  });
+});
+
+describe("usable floor walked outwards (kit)", () => {
+  it("gives exactly the area of the soffit looked up ring by ring, for wavy, stepped, unsorted and one-point soffits", () => {
+    const wavy = Array.from({ length: 41 }, (_, k) => [k * 1.25, 10 + 4 * Math.sin(k / 2)] as const);
+    const stepped = [[0, 14], [20, 14], [20, 8], [35, 12], [35, 12], [50, 9]] as const;
+    const unsorted = [[0, 14], [30, 9], [20, 12], [50, 11]] as const;
+    for (const soffit of [wavy, stepped, unsorted, [[10, 12]] as const]) {
+      const byLookUp = usableFloorAreaM2(50, (r) => soffitHeightAtM(soffit, r), brief.minClearHeightM, 2000);
+      expect(usableFloorM2(brief, { soffit, supports: [] })).toBe(byLookUp);
+    }
   });
 });
 
