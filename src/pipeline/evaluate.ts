@@ -122,7 +122,8 @@ export interface SearchedDesign {
 
 /** The options a search candidate is designed with: the scheme's screening options, except those the user pinned. */
 function screened(model: SchemeModel, options: SchemeOptions, pinned: readonly string[]): SchemeOptions {
-  const screening = Object.entries(model.screeningOptions ?? {}).filter((entry): entry is [string, OptionValue] => entry[1] !== undefined && !pinned.includes(entry[0]));
+  // only the screening options that change something: when none does, the chosen candidate is already the full design
+  const screening = Object.entries(model.screeningOptions ?? {}).filter((entry): entry is [string, OptionValue] => entry[1] !== undefined && !pinned.includes(entry[0]) && options[entry[0]] !== entry[1]);
   return screening.length === 0 ? options : { ...options, ...Object.fromEntries(screening) };
 }
 

@@ -76,4 +76,24 @@ describe("one rule: each scheme at its best proportions, everywhere", () => {
     designAtBestProportions(model, brief, { enabled: true, options: { analysis: "full" }, pinned: ["analysis"] }, defaultStudy(), catalogue);
     expect(calls.every((o) => o.analysis === "full")).toBe(true);
   });
+
+  it("options that already are the screening ones: the chosen candidate is the design, not designed a second time", () => {
+    const depth: OptionSpec = { key: "depth", label: "depth", kind: "number", unit: "", min: 1, max: 9, step: 1, integer: true, source: "test", free: true };
+    const fidelity: OptionSpec = { key: "analysis", label: "analysis", kind: "select", unit: "", choices: [{ value: "full", label: "full" }, { value: "quick", label: "quick" }], source: "test" };
+    const calls: SchemeOptions[] = [];
+    const model = {
+      id: "cable-dome", label: "Test", colour: "#000", description: "", validSpanM: { min: 0, max: 1000 },
+      options: [depth, fidelity], defaults: { depth: 2, analysis: "quick" }, screeningOptions: { analysis: "quick" },
+      design: (brief: typeof DEFAULT_BRIEF, options: SchemeOptions): Design => {
+        calls.push(options);
+        const d = options.depth as number;
+        return { ...infeasibleDesign("cable-dome", brief, ""), status: "feasible", feasible: true, usableFloorM2: 1, totalMassKg: (d - 6) ** 2 + 1 };
+      },
+    } as unknown as SchemeModel;
+    const brief = { ...DEFAULT_BRIEF, objective: "mass" as const };
+    const { design, proportions } = designAtBestProportions(model, brief, { enabled: true, options: {} }, defaultStudy(), catalogue);
+    expect(proportions.proportions.depth).toBe(6);
+    expect(design.totalMassKg).toBe(1);
+    expect(calls.length).toBe(proportions.evaluations);
+  });
 });
