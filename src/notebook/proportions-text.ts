@@ -1,6 +1,6 @@
 // The proportions the search chose for a scheme, in words (issue 12 item 4: "the page shows the
 // chosen proportions and how much the runner-up differs"). Pure text: no DOM.
-import { RISE_KEY, type ProportionChoice } from "../pipeline";
+import { PROPORTION_TIE_FRACTION, RISE_KEY, type ProportionChoice } from "../pipeline";
 import type { OptionValue, SchemeModel } from "../schemes/types";
 import { fmt } from "./format";
 
@@ -43,8 +43,17 @@ export function proportionsSentences(model: SchemeModel, choice: ProportionChoic
   }
   if (choice.pinned.length > 0) out.push(`Pinned by you: ${choice.pinned.map((k) => proportionText(model, k, choice.proportions[k])).join("; ")}.`);
   if (choice.searched.length > 0 && Number.isFinite(choice.value)) {
-    const r = choice.runnerUp;
-    out.push(r === null || !Number.isFinite(r.value) ? "No other proportions tried were feasible." : r.differencePct < 0.05 ? `The runner-up (${differences(model, choice, r).join("; ") || "same proportions"}) is as good (within 0.05 %): the choice between them does not matter here.` : `The runner-up (${differences(model, choice, r).join("; ") || "same proportions"}) is ${fmt.one(r.differencePct)} % higher.`);
+    out.push(runnerUpSentence(model, choice));
   }
   return out;
+}
+
+/** The runner-up: higher; as good; or lower, where the chosen proportions are within the search's band of it and nearer the reference. */
+function runnerUpSentence(model: SchemeModel, choice: ProportionChoice): string {
+  const r = choice.runnerUp;
+  if (r === null || !Number.isFinite(r.value)) return "No other proportions tried were feasible.";
+  const which = differences(model, choice, r).join("; ") || "same proportions";
+  if (r.differencePct <= -0.05) return `The least found (${which}) is ${fmt.one(-r.differencePct)} % lower: within ${Math.round(1000 * PROPORTION_TIE_FRACTION) / 10} % of it the proportions nearest their reference are kept, so that they do not wander from span to span.`;
+  if (r.differencePct < 0.05) return `The runner-up (${which}) is as good (within 0.05 %): the choice between them does not matter here.`;
+  return `The runner-up (${which}) is ${fmt.one(r.differencePct)} % higher.`;
 }

@@ -153,6 +153,7 @@ export function designAtBestProportions(model: SchemeModel, brief: Brief, settin
     objective,
     (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue),
     (design) => objectiveValue(design, study, objective),
+    brief.spanM,
   );
   const chosenBrief = { ...brief, riseM: chosen.riseM };
   if (screening === options) return { design: chosen.design, brief: chosenBrief, proportions: choice };

@@ -1,6 +1,6 @@
 // The pipeline: study → designs → take-off → carbon and cost → each scheme's figures.
 export { evaluateStudy, designScheme, assessDesign, schemeResult, briefAtSpan, designAtBestProportions, designWithChoice, objectiveValue, type Evaluation, type SchemeResult, type EvaluateOptions, type SearchedDesign } from "./evaluate";
-export { searchProportions, riseSettingFor, commonRiseM, RISE_KEY, OBJECTIVES, MAX_EVALUATIONS, type Objective, type ProportionChoice, type RiseSetting } from "./proportions";
+export { searchProportions, riseSettingFor, commonRiseM, RISE_KEY, OBJECTIVES, MAX_EVALUATIONS, PROPORTION_TIE_FRACTION, type Objective, type ProportionChoice, type RiseSetting } from "./proportions";
 export { schemeFigures, massByKind, type SchemeFigures, type AssessedDesign } from "./figures";
 export { tableGaps, describeGap, describeGaps, type TableGap, type NamedDesign } from "./gaps";
 export type { StudyInputs, SchemeSetting } from "./study-inputs";

@@ -44,6 +44,8 @@ interface Dimension {
   start: number;
   /** A form of the scheme (a choice, a toggle or a count): every value is tried; else ordered numbers searched by descent. */
   form: boolean;
+  /** A wide count scanned at every `stride`-th value first, then the values next to the best. */
+  stride?: number;
   /** Searched (and reported) only while another option has this value. */
   when?: { key: string; value: OptionValue };
 }
@@ -63,43 +65,47 @@ function nearestIndex(values: readonly OptionValue[], value: OptionValue): numbe
   return best;
 }
 
-function optionDimension(spec: OptionSpec, start: OptionValue): Dimension {
+function optionDimension(spec: OptionSpec, set: OptionValue, spanM: number | undefined): Dimension {
   if (spec.kind === "number") {
     const values = gridOf(spec.min, spec.max, spec.step, spec.integer === true);
+    const start = spec.referencePerSpanM !== undefined && spanM !== undefined ? spec.referencePerSpanM * spanM : set;
     return { key: spec.key, values, start: nearestIndex(values, start), form: spec.integer === true, ...(spec.freeWhen ? { when: spec.freeWhen } : {}) };
   }
   const values = spec.kind === "select" ? spec.choices.map((c) => c.value) : [false, true];
-  return { key: spec.key, values, start: Math.max(0, values.indexOf(start as never)), form: true };
+  return { key: spec.key, values, start: Math.max(0, values.indexOf(set as never)), form: true };
 }
 
-/** The searchable dimensions of a scheme: its free, unpinned options, and its rise when the search owns it. */
-export function dimensionsOf(model: SchemeModel, options: SchemeOptions, pinned: readonly string[], rise: RiseSetting): Dimension[] {
-  const dims = model.options.filter((spec) => spec.free === true && !pinned.includes(spec.key)).map((spec) => optionDimension(spec, options[spec.key] ?? model.defaults[spec.key] ?? 0));
+/** The searchable dimensions of a scheme at a span: its free, unpinned options, and its rise when the search owns it. */
+export function dimensionsOf(model: SchemeModel, options: SchemeOptions, pinned: readonly string[], rise: RiseSetting, spanM?: number): Dimension[] {
+  const dims = model.options.filter((spec) => spec.free === true && !pinned.includes(spec.key)).map((spec) => optionDimension(spec, options[spec.key] ?? model.defaults[spec.key] ?? 0, spanM));
   if (rise.kind === "search") {
     const values = gridOf(rise.minM, rise.maxM, rise.stepM, false);
     dims.push({ key: RISE_KEY, values, start: nearestIndex(values, rise.startM), form: false });
   }
-  return demoteForms(dims);
+  return coarsenForms(dims);
 }
 
 /**
- * Most forms (combinations of the form dimensions' values) one search tries in full; beyond it the
- * widest count is searched by descent instead. 16: the cable net's 46 mast counts tried in full made
- * the demo's span study (37 spans) 2.8 times the designs of the net (3,851 against 1,361) and the page
- * no longer finished in a minute; hoops (9 values), layers and shell forms are tried in full.
+ * Most forms (combinations of the form dimensions' values) one search scans; a count with more values
+ * than fit (the cable net's 46 mast counts) is scanned at every k-th value and then at the values
+ * between the scanned ones next to the best (coarse then fine: 16 + 2 × (k − 1) designs, where trying
+ * all 46 made the demo's span study 2.8 times the net's designs and the page missed its minute).
  */
 export const MAX_FORMS = 16;
 
 function formCount(dims: readonly Dimension[]): number {
-  return dims.reduce((n, d) => (d.form ? n * d.values.length : n), 1);
+  return dims.reduce((n, d) => (d.form ? n * Math.ceil(d.values.length / (d.stride ?? 1)) : n), 1);
 }
 
-/** While the forms are too many, the form dimension of most values (a count) is searched by descent like a proportion. */
-function demoteForms(dims: Dimension[]): Dimension[] {
+/** While the forms are too many, the count of most values is scanned at every k-th value (k as small as fits); a descent when even that cannot fit. */
+function coarsenForms(dims: Dimension[]): Dimension[] {
   while (formCount(dims) > MAX_FORMS) {
-    const widest = dims.filter((d) => d.form && typeof d.values[0] === "number").sort((a, b) => b.values.length - a.values.length)[0];
+    const widest = dims.filter((d) => d.form && !d.stride && typeof d.values[0] === "number").sort((a, b) => b.values.length - a.values.length)[0];
     if (!widest) break;
-    widest.form = false;
+    const others = formCount(dims.filter((d) => d !== widest));
+    const stride = Math.ceil(widest.values.length / Math.max(1, Math.floor(MAX_FORMS / others)));
+    if (stride * 2 > widest.values.length) widest.form = false;
+    else widest.stride = stride;
   }
   return dims;
 }
@@ -112,8 +118,13 @@ const WARM_BUDGET = 24;
 /** The forms best at the warm proportions whose proportions are searched again, and the designs each such descent may assess. */
 const BRANCHES = 2;
 const BRANCH_BUDGET = 12;
+/** Designs of a coarsely scanned count between the scanned values (next to the best and to the preferred). */
+const FINE_BUDGET = 8;
+/** Designs each proportion's pull toward its reference may assess (a bisection), and all the pulls together. */
+const PULL_STEPS = 3;
+const PULL_BUDGET = 9;
 /** Most designs one search assesses (the search is deterministic: no clock decides it). */
-export const MAX_EVALUATIONS = WARM_BUDGET + MAX_FORMS + BRANCHES * BRANCH_BUDGET;
+export const MAX_EVALUATIONS = WARM_BUDGET + MAX_FORMS + FINE_BUDGET + BRANCHES * BRANCH_BUDGET + PULL_BUDGET;
 /**
  * Forms whose best is within this fraction of the least objective count as equal, and the simplest
  * of them (the first in declaration order: the smaller count, the first choice) is chosen, so that
@@ -124,12 +135,16 @@ export const MAX_EVALUATIONS = WARM_BUDGET + MAX_FORMS + BRANCHES * BRANCH_BUDGE
  */
 export const FORM_TIE_FRACTION = 0.03;
 /**
- * Within the chosen form, proportions of the same objective (a plateau: member lengths that give the
- * same mesh) count as equal, and those nearest the set values are chosen, so the choice on a plateau
- * does not wander with the path the descent took. A wider band (0.5 % was tried) steadies flat
- * objectives more but no longer finds the least of a smooth bowl, which the search must.
+ * Within the chosen form, proportions whose objective is within this fraction of the least count as
+ * equal, and those nearest the references (the set values; the rise's preferred rise ÷ span; a
+ * count's reference per metre of span) are chosen: on a flat objective (the cable net's mast ring and
+ * height, the cable dome's ring height, a plateau of member lengths that give the same mesh) the
+ * choice then stays at the same proportions from span to span instead of following the 1–2 % steps of
+ * the catalogue sections. 2 %: the search no longer finds the exact least of a smooth bowl but the
+ * point of the band nearest the reference (0 % was the rule before; the cable net's ring and height
+ * wandered over 0.6–0.65 and 0.15–0.3 between neighbouring spans).
  */
-export const PROPORTION_TIE_FRACTION = 0;
+export const PROPORTION_TIE_FRACTION = 0.02;
 
 /** The objective at an index, each design assessed once, within a budget the phases of the search set. */
 interface Evaluator {
@@ -198,7 +213,7 @@ function descend(dims: readonly Dimension[], moving: readonly number[], from: re
 function formsOver(dims: readonly Dimension[], base: readonly number[]): number[][] {
   let out: number[][] = [[...base]];
   dims.forEach((d, k) => {
-    if (d.form) out = out.flatMap((at) => d.values.map((_, i) => at.map((x, j) => (j === k ? i : x))));
+    if (d.form) out = out.flatMap((at) => d.values.flatMap((_, i) => (i % (d.stride ?? 1) === 0 ? [at.map((x, j) => (j === k ? i : x))] : [])));
   });
   return out;
 }
@@ -212,6 +227,46 @@ function activeAt(dims: readonly Dimension[], d: Dimension, at: readonly number[
 }
 
 /**
+ * Where a form sits in the order of preference among forms of equal merit: declaration order, a
+ * choice's first value first, a count's set value first, then the nearest to it (the fewer of two
+ * as near). The set value of a count is its reference (the cable net's 12 masts: where the objective
+ * is flat across counts, as it is from about 150 m, the choice stays there instead of following the
+ * 1–2 % steps of the catalogue sections from count to count).
+ */
+function formOrder(dims: readonly Dimension[], at: readonly number[]): number {
+  return dims.reduce((n, d, k) => {
+    if (!d.form) return n;
+    const i = at[k] ?? 0;
+    const rank = typeof d.values[0] === "number" ? 2 * Math.abs(i - d.start) - (i < d.start ? 1 : 0) : i;
+    return n * 2 * d.values.length + rank;
+  }, 0);
+}
+
+type Scanned = { at: number[]; order: number; value: number };
+
+/**
+ * The forms designed at the warm proportions, best first (the preferred first among equals: see
+ * formOrder); for a coarsely scanned count, the values between the scanned ones next to the best
+ * and next to the preferred within the tie band are designed too.
+ */
+function scanForms(dims: readonly Dimension[], forms: readonly number[][], ev: Evaluator): Scanned[] {
+  const assess = (list: readonly number[][]) => {
+    ev.allow(list.length);
+    return list.map((at) => ({ at, order: formOrder(dims, at), value: ev.value(at) }));
+  };
+  const byValue = (list: Scanned[]) => list.sort((a, b) => a.value - b.value || a.order - b.order);
+  const coarse = byValue(assess(forms));
+  const least = coarse[0]?.value ?? Number.POSITIVE_INFINITY;
+  const preferred = coarse.filter((f) => f.value - least <= FORM_TIE_FRACTION * Math.abs(least)).sort((a, b) => a.order - b.order)[0];
+  const around = (f: Scanned | undefined) =>
+    f ? dims.flatMap((d, k) => (d.stride ? Array.from({ length: 2 * (d.stride - 1) }, (_, i) => f.at.map((x, j) => (j === k ? x + (i < d.stride! - 1 ? i + 1 : -(i - d.stride! + 2)) : x))) : [])) : [];
+  const fine = [...around(coarse[0]), ...around(preferred)]
+    .filter((at, i, all) => at.every((x, k) => x >= 0 && x < (dims[k]?.values.length ?? 0)) && !coarse.some((c) => c.at.join() === at.join()) && all.findIndex((o) => o.join() === at.join()) === i)
+    .slice(0, FINE_BUDGET);
+  return byValue([...coarse, ...assess(fine)]);
+}
+
+/**
  * The search: a descent over the proportions from the set values (warm start); then every form
  * (every value of each count, choice and toggle, up to MAX_FORMS) designed at those proportions; the BRANCHES forms
  * best there searched again by descent; the chosen one is the simplest form whose best is within
@@ -222,37 +277,56 @@ function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Eva
   const start = dims.map((d) => d.start);
   ev.allow(WARM_BUDGET);
   const warm = descend(dims, moving(start), start, ev);
-  if (!dims.some((d) => d.form)) return nearestStart(dims, warm, ev);
-  const forms = formsOver(dims, warm);
-  ev.allow(forms.length);
-  const scanned = forms.map((at, order) => ({ at, order, value: ev.value(at) }));
-  const branches = [...scanned]
-    .sort((a, b) => a.value - b.value || a.order - b.order)
-    .slice(0, BRANCHES)
-    .map(({ at, order }) => {
-      ev.allow(BRANCH_BUDGET);
-      const end = descend(dims, moving(at), at, ev);
-      return { at: end, order, value: ev.value(end) };
-    });
+  if (!dims.some((d) => d.form)) return nearestStart(dims, warm, ev, moving);
+  const scanned = scanForms(dims, formsOver(dims, warm), ev);
+  const within = (value: number, least: number) => value - least <= FORM_TIE_FRACTION * Math.abs(least);
+  const bestScanned = scanned[0];
+  const simplestScanned = scanned.filter((f) => bestScanned && within(f.value, bestScanned.value)).sort((a, b) => a.order - b.order)[0];
+  const picks = [...new Set([simplestScanned, bestScanned].filter((f) => f !== undefined))];
+  const branches = picks.map(({ at, order }) => {
+    ev.allow(BRANCH_BUDGET);
+    const end = descend(dims, moving(at), at, ev);
+    return { at: end, order, value: ev.value(end) };
+  });
   const least = Math.min(...branches.map((b) => b.value));
-  if (!Number.isFinite(least)) return nearestStart(dims, warm, ev);
-  const simplest = branches.filter((b) => b.value - least <= FORM_TIE_FRACTION * Math.abs(least)).sort((a, b) => a.order - b.order)[0];
-  return nearestStart(dims, simplest?.at ?? warm, ev);
+  if (!Number.isFinite(least)) return nearestStart(dims, warm, ev, moving);
+  const simplest = branches.filter((b) => within(b.value, least)).sort((a, b) => a.order - b.order)[0];
+  return nearestStart(dims, simplest?.at ?? warm, ev, moving);
 }
 
 /**
  * Of the assessed candidates of the same form as `best` whose objective is within
  * PROPORTION_TIE_FRACTION of its own, the one nearest the set values (the sum over the proportions
- * of the distance as a fraction of each range; a lower objective breaks a tie).
+ * of the distance as a fraction of each range; a lower objective breaks a tie); then pulled further
+ * toward the set values along the straight line to them, by bisection (PULL_STEPS designs), as far
+ * as the objective stays within the band.
  */
-function nearestStart(dims: readonly Dimension[], best: readonly number[], ev: Evaluator): number[] {
+function nearestStart(dims: readonly Dimension[], best: readonly number[], ev: Evaluator, active: (at: readonly number[]) => readonly number[]): number[] {
   const bestValue = ev.value(best);
   if (!Number.isFinite(bestValue)) return [...best];
+  const limit = bestValue + PROPORTION_TIE_FRACTION * Math.abs(bestValue);
   const distance = (at: readonly number[]) => dims.reduce((sum, d, k) => (d.form ? sum : sum + Math.abs((at[k] ?? 0) - d.start) / Math.max(1, d.values.length - 1)), 0);
   const sameForm = (at: readonly number[]) => dims.every((d, k) => !d.form || at[k] === best[k]);
-  const near = ev.assessed().filter((c) => sameForm(c.at) && c.value - bestValue <= PROPORTION_TIE_FRACTION * Math.abs(bestValue));
+  const near = ev.assessed().filter((c) => sameForm(c.at) && c.value <= limit);
   near.sort((a, b) => distance(a.at) - distance(b.at) || a.value - b.value);
-  return near[0]?.at ?? [...best];
+  let at = near[0]?.at ?? [...best];
+  ev.allow(PULL_BUDGET);
+  for (const k of active(at)) at = pullDimension(dims, at, k, ev, limit);
+  return at;
+}
+
+/** Dimension k moved from `from` toward its set value, by bisection, as far as the objective stays within `limit`. */
+function pullDimension(dims: readonly Dimension[], from: readonly number[], k: number, ev: Evaluator, limit: number): number[] {
+  const x = from[k] ?? 0;
+  const target = dims[k]?.start ?? x;
+  const toward = (f: number) => from.map((v, j) => (j === k ? Math.round(x + f * (target - x)) : v));
+  let [lo, hi] = [0, 1];
+  for (let step = 0; step < PULL_STEPS && toward(lo)[k] !== toward(hi)[k]; step++) {
+    const f = step === 0 ? hi : (lo + hi) / 2;
+    if (ev.value(toward(f)) <= limit) lo = f;
+    else hi = f;
+  }
+  return toward(lo);
 }
 
 /**
@@ -269,8 +343,9 @@ export function searchProportions(
   objective: Objective,
   design: (options: SchemeOptions, riseM: number) => Design,
   assess: (design: Design) => number,
+  spanM?: number,
 ): { chosen: Candidate; choice: ProportionChoice } {
-  const dims = dimensionsOf(model, options, pinned, rise);
+  const dims = dimensionsOf(model, options, pinned, rise, spanM);
   const candidates = new Map<string, Candidate>();
   const candidateAt = (index: readonly number[]): Candidate => {
     const key = index.join(",");

@@ -37,6 +37,12 @@ export type OptionSpec =
       free?: boolean;
       /** A free proportion only while another option has this value (rib spacing while the shell is ribbed); else neither searched nor reported. */
       freeWhen?: { key: string; value: string | boolean };
+      /**
+       * The search's reference for a free option, per metre of span: it starts there and, among
+       * candidates of equal merit, keeps the nearest to it (the cable net's mast count grows with the
+       * span); without it the reference is the set value.
+       */
+      referencePerSpanM?: number;
     }
   | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string; free?: boolean }
   | { key: string; label: string; kind: "toggle"; unit: ""; source: string; free?: boolean };

@@ -17,7 +17,7 @@ const MAX_PARALLEL_STRANDS = 8;
 
 const declarations = {
   // default: common practice for large nets, no source
-  masts: { kind: "number", label: "Masts", unit: "", min: 3, max: 48, step: 1, integer: true, default: 12, free: true, source: "common practice, no source" },
+  masts: { kind: "number", label: "Masts", unit: "", min: 3, max: 48, step: 1, integer: true, default: 12, free: true, referencePerSpanM: 12 / 365, source: "common practice, no source; the search's reference grows with the span as 12 masts at about 365 m (a built mast-supported cable-net roof, trade press: issue 12's check values)" },
   mastRingRatio: { kind: "number", label: "Mast ring radius / plan radius", unit: "", min: 0.3, max: 0.9, step: 0.05, default: 0.6, free: true, source: "common practice, no source" },
   // default: mast head above the roof ≈ span/7 (common practice, no source)
   mastHeightRatio: { kind: "number", label: "Mast height above roof / span", unit: "", min: 0.03, max: 0.4, step: 0.01, default: 0.15, free: true, source: "common practice, no source" },

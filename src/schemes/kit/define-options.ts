@@ -18,6 +18,8 @@ export interface NumberOption {
   free?: boolean;
   /** Free only while another option has this value (see OptionSpec). */
   freeWhen?: { key: string; value: string | boolean };
+  /** The search's reference for a free option, per metre of span (see OptionSpec). */
+  referencePerSpanM?: number;
 }
 
 /** A choice among named values. */

@@ -48,4 +48,11 @@ describe("proportions in words", () => {
     expect(text).toContain("is as good (within 0.05 %)");
     expect(text).not.toContain("0.0 % higher");
   });
+
+  it("says when the least found is lower and the proportions nearer their reference were kept within the band", () => {
+    const lower = { ...choice, runnerUp: { ...choice.runnerUp!, value: 118.2, differencePct: -1.5 } };
+    const text = proportionsSentences(model, lower).join(" ");
+    expect(text).toContain("The least found (Target strut length 7 m) is 1.5 % lower: within 2 % of it the proportions nearest their reference are kept");
+    expect(text).not.toContain("as good");
+  });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { searchProportions, riseSettingFor, commonRiseM, FORM_TIE_FRACTION, MAX_EVALUATIONS, type RiseSetting } from "../../../src/pipeline/proportions";
+import { searchProportions, riseSettingFor, commonRiseM, FORM_TIE_FRACTION, MAX_EVALUATIONS, PROPORTION_TIE_FRACTION, type RiseSetting } from "../../../src/pipeline/proportions";
 import { infeasibleDesign } from "../../../src/schemes/kit";
 import { DEFAULT_BRIEF } from "../../../src/brief";
 import type { Design, OptionSpec, SchemeModel, SchemeOptions } from "../../../src/schemes/types";
@@ -10,9 +10,18 @@ const model = (options: OptionSpec[], defaults: SchemeOptions, riseSpanRatio?: S
   ({ id: "cable-dome", label: "Test", colour: "#000", description: "", validSpanM: { min: 0, max: 1000 }, options, defaults, ...(riseSpanRatio ? { riseSpanRatio } : {}), design: () => { throw new Error("not used"); } }) as SchemeModel;
 const feasible = (): Design => ({ ...infeasibleDesign("cable-dome", DEFAULT_BRIEF, ""), status: "feasible", feasible: true });
 const fixed: RiseSetting = { kind: "fixed", riseM: 20, source: "common" };
+/** Of a grid, the value nearest `reference` whose objective is within PROPORTION_TIE_FRACTION of the least (the search's rule on a proportion). */
+const nearestInBand = (grid: readonly number[], objective: (x: number) => number, reference: number): number => {
+  const least = Math.min(...grid.map(objective));
+  const band = grid.filter((x) => objective(x) <= least + PROPORTION_TIE_FRACTION * Math.abs(least));
+  return band.reduce((a, b) => (Math.abs(b - reference) < Math.abs(a - reference) ? b : a));
+};
+const grid = (min: number, max: number, step: number) => Array.from({ length: Math.round((max - min) / step) + 1 }, (_, i) => Number((min + i * step).toFixed(9)));
 
 describe("proportion search", () => {
-  it("finds the least of a smooth bowl over two free options, from the defaults", () => {
+  // The rule changed with the preference band (smooth4): within PROPORTION_TIE_FRACTION of the least,
+  // the proportion nearest its reference (the set value) is chosen, no longer the exact least.
+  it("of a smooth bowl over two free options finds the least count and, of the depths within the band of the least, the one nearest the set value", () => {
     const m = model([spec("hoops", 1, 12, 1, true), spec("depth", 0.05, 0.5, 0.01)], { hoops: 3, depth: 0.1 });
     let calls = 0;
     const bowl = (o: SchemeOptions) => 10 + ((o.hoops as number) - 7) ** 2 + 100 * ((o.depth as number) - 0.31) ** 2;
@@ -21,11 +30,16 @@ describe("proportion search", () => {
       return { ...feasible(), totalMassKg: bowl(o) };
     }, (d) => d.totalMassKg);
     expect(choice.proportions.hoops).toBe(7);
-    expect(choice.proportions.depth).toBeCloseTo(0.31, 2);
+    // between the band's point nearest the set value 0.1 (0.27) and the least (0.31), moved toward 0.1 by a bisection of few designs
+    expect(choice.proportions.depth).toBeGreaterThanOrEqual(nearestInBand(grid(0.05, 0.5, 0.01), (d) => bowl({ hoops: 7, depth: d }), 0.1) - 1e-9);
+    expect(choice.proportions.depth).toBeLessThan(0.31);
+    expect(choice.value).toBeLessThanOrEqual(10 * (1 + PROPORTION_TIE_FRACTION));
     expect(choice.searched).toEqual(["hoops", "depth"]);
     expect(calls).toBeLessThanOrEqual(MAX_EVALUATIONS);
     expect(choice.runnerUp).not.toBeNull();
-    expect(choice.runnerUp!.differencePct).toBeGreaterThan(0);
+    // the runner-up may now be the least itself, lower by at most the band
+    expect(choice.runnerUp!.differencePct).not.toBe(0);
+    expect(choice.runnerUp!.differencePct).toBeGreaterThanOrEqual(-100 * PROPORTION_TIE_FRACTION);
   });
 
   it("leaves a pinned option where the user set it, and skips infeasible candidates", () => {
@@ -37,7 +51,7 @@ describe("proportion search", () => {
     expect(chosen.options.hoops).toBe(4);
     expect(choice.pinned).toEqual(["hoops"]);
     expect(choice.searched).toEqual(["depth"]);
-    expect(choice.proportions.depth).toBeCloseTo(0.2, 9);
+    expect(choice.proportions.depth).toBeCloseTo(nearestInBand(grid(0.05, 0.2, 0.01), (d) => 1 - d, 0.1), 9); // 0.19: the least feasible is 0.2, within the band
   });
 
   it("searches the rise within the scheme's rise/span range and the height limit under the 'own' rule", () => {
@@ -72,7 +86,7 @@ describe("proportion search", () => {
       return { ...feasible(), totalMassKg: bumpy[o.masts as number]! + 50 * ((o.ratio as number) - 0.45) ** 2 };
     }, (d) => d.totalMassKg);
     expect(choice.proportions.masts).toBe(9);
-    expect(choice.proportions.ratio).toBeCloseTo(0.45, 9);
+    expect(choice.proportions.ratio).toBeCloseTo(nearestInBand(grid(0.3, 0.9, 0.05), (r) => 38 + 50 * (r - 0.45) ** 2, 0.6), 9); // 0.55 (least at 0.45)
     expect(calls).toBe(choice.evaluations);
     expect(calls).toBeLessThanOrEqual(MAX_EVALUATIONS);
   });
@@ -94,7 +108,7 @@ describe("proportion search", () => {
     expect(smooth.proportions).toEqual({ form: "smooth" });
     expect(smooth.searched).toEqual(["form"]);
     const ribbed = searchProportions(m, m.defaults, [], fixed, "mass", cost(80), (d) => d.totalMassKg).choice;
-    expect(ribbed.proportions).toEqual({ form: "ribbed", ribs: 6 });
+    expect(ribbed.proportions).toEqual({ form: "ribbed", ribs: nearestInBand(grid(3, 20, 0.5), (r) => 80 + (r - 6) ** 2, 8) }); // 7 (least at 6)
     expect(ribbed.searched).toEqual(["form", "ribs"]);
   });
 
@@ -111,5 +125,28 @@ describe("proportion search", () => {
     expect(commonRiseM(brief, 160)).toBe(24);
     expect(commonRiseM(brief, 80)).toBe(12);
     expect(commonRiseM(brief, 400)).toBe(48); // 60 would pass the 60 m limit over 12 m eaves
+  });
+
+  it("scans a count of more values than MAX_FORMS at every k-th value, then next to the best: finds a least between the scanned ones", () => {
+    const m = model([spec("masts", 3, 48, 1, true)], { masts: 3 });
+    const bumpy = (n: number) => 50 + 2 * Math.abs(n - 20); // 20 is not on the every-3rd grid from 3 (…, 18, 21, …)
+    let calls = 0;
+    const { choice } = searchProportions(m, m.defaults, [], fixed, "mass", (o) => {
+      calls++;
+      return { ...feasible(), totalMassKg: bumpy(o.masts as number) };
+    }, (d) => d.totalMassKg);
+    expect(choice.proportions.masts).toBe(20);
+    expect(calls).toBeLessThanOrEqual(MAX_EVALUATIONS);
+  });
+
+  it("of counts of equal merit keeps the one nearest its reference, which grows with the span when declared per metre of span", () => {
+    const masts = { ...spec("masts", 3, 48, 1, true), referencePerSpanM: 12 / 365 } as OptionSpec;
+    const m = model([masts], { masts: 12 });
+    const flat = (o: SchemeOptions) => ({ ...feasible(), totalMassKg: 40 + 0.001 * (o.masts as number) }); // within the tie band across all counts
+    const at = (spanM: number) => searchProportions(m, m.defaults, [], fixed, "mass", flat, (d) => d.totalMassKg, spanM).choice.proportions.masts;
+    expect(at(365)).toBe(12);
+    expect(at(160)).toBe(5); // 12 × 160 / 365 = 5.26
+    expect(at(60)).toBe(3); // 1.97, below the least count 3
+    expect(searchProportions(model([spec("masts", 3, 48, 1, true)], { masts: 12 }), { masts: 12 }, [], fixed, "mass", flat, (d) => d.totalMassKg, 160).choice.proportions.masts).toBe(12); // no per-span reference: the set value
   });
 });
