@@ -3,7 +3,7 @@
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
 import { startPage, reactiveCell, staticCell, tableElement, downloadText, signal, computed, fmt, studyFilePicker } from "../src/notebook";
-import { SCHEMES } from "../src/schemes";
+import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
 import { assumptionsRecord, type Assumption, type Study } from "../src/study";
 import { compareStudies, HEADLINE_METRICS, type SchemeDelta } from "../src/comparison";
 import { defaultCatalogue, formatCsv } from "../src/catalogue";
@@ -35,7 +35,7 @@ staticCell(
   { id: "scheme-methods", title: "Schemes" },
   tableElement(
     ["Scheme", "Structural system", "Valid spans (m)"],
-    SCHEMES.map((m) => [m.label, m.description, `${m.validSpanM.min}–${m.validSpanM.max}`]),
+    SCHEME_DECLARATIONS.map((m) => [m.label, m.description, `${m.validSpanM.min}–${m.validSpanM.max}`]),
   ),
 );
 

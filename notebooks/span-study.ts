@@ -4,7 +4,7 @@ import demoStudy from "../data/demo-study.json";
 import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, numberControl, toggleControl, controlGroup, spanStudyRunner, fmt } from "../src/notebook";
 import { spanMetricChart, spanValidityChart, chartCaption, type SpanMetric } from "../src/charts";
 import { describeCrossovers, valuesBySpan, type SpanRange, type SpanPoint } from "../src/comparison";
-import { SCHEMES } from "../src/schemes";
+import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
 
 const { store, main } = startPage({
   id: "span-study",
@@ -36,7 +36,7 @@ staticCell(
 
 const state = spanStudyRunner(store.study, range);
 const points = computed(() => (state.value.status === "failed" ? null : state.value.points));
-const labelOf = (id: string) => SCHEMES.find((m) => m.id === id)?.label ?? id;
+const labelOf = (id: string) => SCHEME_DECLARATIONS.find((m) => m.id === id)?.label ?? id;
 const studySpanM = computed(() => store.study.value.brief.spanM);
 
 reactiveCell(main, { id: "status" }, () => {
@@ -61,7 +61,7 @@ reactiveCell(main, { id: "status" }, () => {
 reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {
   const list = points.value;
   if (!list) return null;
-  const ranges = SCHEMES.filter((m) => list.some((p) => p.id === m.id)).map((m) => ({ id: m.id, label: m.label, min: m.validSpanM.min, max: m.validSpanM.max }));
+  const ranges = SCHEME_DECLARATIONS.filter((m) => list.some((p) => p.id === m.id)).map((m) => ({ id: m.id, label: m.label, min: m.validSpanM.min, max: m.validSpanM.max }));
   return chartFigure(
     spanValidityChart(list, ranges, { title: "Valid span range of each method (shaded) and spans where the scheme is infeasible (×)", caption: chartCaption(store.study.value, "hover a cross for the reason"), studySpanM: studySpanM.value }),
     "span-validity",

@@ -3,11 +3,11 @@
 // parts (elements of a cost). Every material, module and part colour reaches at least 3:1 against
 // white (WCAG 2.1 SC 1.4.11, tested), and no material colour is a scheme colour.
 import type { SchemeId } from "../schemes/types";
-import { SCHEMES } from "../schemes";
+import { SCHEME_DECLARATIONS } from "../schemes/declarations";
 import { MATERIALS, materialInfo, type MaterialId, type MaterialKind } from "../materials";
 
 /** One colour per scheme, the same on every page and export: each scheme declares its own (colour-blind-safe set, Okabe–Ito). */
-export const SCHEME_COLOURS: Readonly<Record<SchemeId, string>> = Object.fromEntries(SCHEMES.map((m) => [m.id, m.colour])) as Record<SchemeId, string>;
+export const SCHEME_COLOURS: Readonly<Record<SchemeId, string>> = Object.fromEntries(SCHEME_DECLARATIONS.map((m) => [m.id, m.colour])) as Record<SchemeId, string>;
 
 /** One colour per material: steels in blues, cable violet, rebar rust, concretes in greys, fabrics in teals and greens, claddings plum and brick, timber ochre. */
 export const MATERIAL_COLOURS: Readonly<Record<MaterialId, string>> = {

@@ -1,13 +1,13 @@
 // The proportions the search chose for a scheme, in words (issue 12 item 4: "the page shows the
 // chosen proportions and how much the runner-up differs"). Pure text: no DOM.
 import { PROPORTION_TIE_FRACTION, RISE_KEY, type ProportionChoice } from "../pipeline";
-import type { OptionValue, SchemeModel } from "../schemes/types";
+import type { OptionValue, SchemeDeclaration } from "../schemes/types";
 import { fmt } from "./format";
 
 const GOAL: Record<ProportionChoice["objective"], string> = { mass: "the least mass", carbon: "the least embodied carbon", cost: "the least cost" };
 
 /** One proportion as "Target strut length 5.5 m", "rise 24.0 m", "Layers double". */
-export function proportionText(model: SchemeModel, key: string, value: OptionValue | undefined): string {
+export function proportionText(model: SchemeDeclaration, key: string, value: OptionValue | undefined): string {
   if (key === RISE_KEY) return `rise ${typeof value === "number" ? fmt.one(value) : String(value)} m`;
   const spec = model.options.find((s) => s.key === key);
   if (!spec) return `${key} ${String(value)}`;
@@ -17,7 +17,7 @@ export function proportionText(model: SchemeModel, key: string, value: OptionVal
 }
 
 /** The proportions that differ between two sets, as words (the runner-up against the chosen). */
-function differences(model: SchemeModel, chosen: ProportionChoice, other: NonNullable<ProportionChoice["runnerUp"]>): string[] {
+function differences(model: SchemeDeclaration, chosen: ProportionChoice, other: NonNullable<ProportionChoice["runnerUp"]>): string[] {
   const out = Object.keys(other.proportions)
     .filter((k) => k !== RISE_KEY && other.proportions[k] !== chosen.proportions[k])
     .map((k) => proportionText(model, k, other.proportions[k]));
@@ -29,7 +29,7 @@ function differences(model: SchemeModel, chosen: ProportionChoice, other: NonNul
  * Sentences for a scheme's panel: what was searched and chosen, for which goal, what the user pinned,
  * where the rise came from, and how much worse the runner-up is (or that there is none).
  */
-export function proportionsSentences(model: SchemeModel, choice: ProportionChoice): string[] {
+export function proportionsSentences(model: SchemeDeclaration, choice: ProportionChoice): string[] {
   const searched = choice.searched.filter((k) => k !== RISE_KEY);
   // a scheme that uses no rise (the flat truss) reports none
   const riseWord = !(RISE_KEY in choice.proportions) ? [] : [
@@ -49,7 +49,7 @@ export function proportionsSentences(model: SchemeModel, choice: ProportionChoic
 }
 
 /** The runner-up: higher; as good; or lower, where the chosen proportions are within the search's band of it and nearer the reference. */
-function runnerUpSentence(model: SchemeModel, choice: ProportionChoice): string {
+function runnerUpSentence(model: SchemeDeclaration, choice: ProportionChoice): string {
   const r = choice.runnerUp;
   if (r === null || !Number.isFinite(r.value)) return "No other proportions tried were feasible.";
   const which = differences(model, choice, r).join("; ") || "same proportions";

@@ -1,4 +1,4 @@
-import type { Design, OptionSpec, OptionValue, SchemeModel } from "../schemes/types";
+import type { Design, OptionSpec, OptionValue, SchemeDeclaration } from "../schemes/types";
 import { h, type ComponentChild } from "preact";
 import { useMemo } from "preact/hooks";
 import { computed } from "@preact/signals-core";
@@ -16,7 +16,7 @@ import type { StudyStore } from "./study-store";
  * value; pinning takes the value the search chose (`chosen`), so the design does not move, in one
  * checked edit of the study.
  */
-function PinControl({ store, model, optionKey, chosen }: { store: StudyStore; model: SchemeModel; optionKey: string; chosen: (key: string) => OptionValue | undefined }): ComponentChild {
+function PinControl({ store, model, optionKey, chosen }: { store: StudyStore; model: SchemeDeclaration; optionKey: string; chosen: (key: string) => OptionValue | undefined }): ComponentChild {
   const binding = useMemo(() => {
     const pinned = computed(() => store.study.value.schemes[model.id]?.pinned ?? []);
     return {
@@ -35,7 +35,7 @@ function PinControl({ store, model, optionKey, chosen }: { store: StudyStore; mo
 }
 
 /** One option's control, bound to the study at the scheme's option path. */
-function OptionControl({ store, model, spec }: { store: StudyStore; model: SchemeModel; spec: OptionSpec }): ComponentChild {
+function OptionControl({ store, model, spec }: { store: StudyStore; model: SchemeDeclaration; spec: OptionSpec }): ComponentChild {
   const path = ["schemes", model.id, "options", spec.key];
   const id = `${model.id}-${spec.key}`;
   switch (spec.kind) {
@@ -49,7 +49,7 @@ function OptionControl({ store, model, spec }: { store: StudyStore; model: Schem
 }
 
 /** The option controls of one scheme, from its OptionSpecs, bound to the study; a free one has a "pinned" box beside it. */
-export function SchemeOptions({ store, model, chosen }: { store: StudyStore; model: SchemeModel; chosen: (key: string) => OptionValue | undefined }): ComponentChild {
+export function SchemeOptions({ store, model, chosen }: { store: StudyStore; model: SchemeDeclaration; chosen: (key: string) => OptionValue | undefined }): ComponentChild {
   return h(
     ControlGroup,
     { title: `${model.label}: options` },
@@ -62,7 +62,7 @@ export function SchemeOptions({ store, model, chosen }: { store: StudyStore; mod
 }
 
 /** SchemeOptions mounted on an element of its own, for the compare page's hand-built cells. */
-export function schemeOptionControls(store: StudyStore, model: SchemeModel, chosen: (key: string) => OptionValue | undefined = () => undefined): HTMLElement {
+export function schemeOptionControls(store: StudyStore, model: SchemeDeclaration, chosen: (key: string) => OptionValue | undefined = () => undefined): HTMLElement {
   return mount(h(SchemeOptions, { store, model, chosen }));
 }
 

@@ -8,7 +8,8 @@
 // two spans; `busy` says a newer one is coming.
 import { signal, computed, effect, batch, type ReadonlySignal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
-import { SCHEMES, type Design, type SchemeModel } from "../schemes";
+import { SCHEME_DECLARATIONS, type SchemeDeclaration } from "../schemes/declarations";
+import type { Design } from "../schemes/types";
 import { schemeResult, type SchemeResult, type SearchedDesign, type SchemeSetting, type StudyInputs } from "../pipeline";
 import { workerApi, latestOnly } from "../kernel/worker-call";
 import type { DesignWorkerApi } from "../comparison/design-worker";
@@ -16,7 +17,7 @@ import { messageOf } from "../kernel/errors";
 import type { Brief } from "../brief";
 
 export interface AsyncSchemeSignals {
-  model: SchemeModel;
+  model: SchemeDeclaration;
   enabled: ReadonlySignal<boolean>;
   /** The newest design (null until the first arrives). */
   design: ReadonlySignal<Design | null>;
@@ -58,7 +59,7 @@ function sharedSignals(store: StudyStore): Shared {
 }
 
 /** One scheme's signals: asks its worker for the newest request, keeps the newest answer, assesses it with the study's tables. */
-function schemeSignals(model: SchemeModel, store: StudyStore, shared: Shared, worker: ReturnType<typeof workerApi<DesignWorkerApi>> | undefined, failure: { value: string }): AsyncSchemeSignals {
+function schemeSignals(model: SchemeDeclaration, store: StudyStore, shared: Shared, worker: ReturnType<typeof workerApi<DesignWorkerApi>> | undefined, failure: { value: string }): AsyncSchemeSignals {
   const setting = computed(() => store.study.value.schemes[model.id]);
   const enabled = computed(() => setting.value?.enabled !== false);
   // A new request only when the brief, this scheme's setting or a table changed (the store keeps untouched parts' identity).
@@ -95,7 +96,7 @@ export function workerStudySignals(store: StudyStore): AsyncStudySignals {
   const pool = workers();
   const failure = signal("");
   const shared = sharedSignals(store);
-  const schemes = SCHEMES.map((model, index) => schemeSignals(model, store, shared, pool[index % pool.length], failure));
+  const schemes = SCHEME_DECLARATIONS.map((model, index) => schemeSignals(model, store, shared, pool[index % pool.length], failure));
   const busy = computed(() => schemes.some((s) => s.enabled.value && !s.current.value));
   const results = signal<SchemeResult[] | null>(null);
   const resultsSpanM = signal(shared.brief.peek().spanM);

@@ -1,8 +1,8 @@
 import * as v from "valibot";
 import { BriefSchema } from "../brief";
 import { numberIn, integerIn, oneOf, flag, validateWith, type FieldProblem } from "../kernel/validate";
-import { SCHEMES } from "../schemes";
-import type { OptionSpec, SchemeModel, SchemeOptions } from "../schemes/types";
+import { SCHEME_DECLARATIONS } from "../schemes/declarations";
+import type { OptionSpec, SchemeDeclaration, SchemeOptions } from "../schemes/types";
 import { OPTION_RULES } from "../schemes/option-rules";
 import { FactorRowSchema, CarbonSettingsSchema, defaultFactorRows, DEFAULT_CARBON_SETTINGS } from "../carbon";
 import { RateRowSchema, OnCostsSchema, defaultRateRows, DEFAULT_ON_COSTS } from "../cost";
@@ -20,7 +20,7 @@ function optionSchema(spec: OptionSpec) {
 }
 
 /** The options of one scheme: every key optional (a missing one takes the default), unknown keys refused, the scheme's OPTION_RULES applied. */
-function schemeSettingSchema(model: SchemeModel) {
+function schemeSettingSchema(model: SchemeDeclaration) {
   const entries = Object.fromEntries(model.options.map((spec) => [spec.key, v.optional(optionSchema(spec), model.defaults[spec.key])]));
   const setting = v.object({
     enabled: v.optional(flag(), true),
@@ -41,8 +41,8 @@ function schemeSettingSchema(model: SchemeModel) {
 /** Every registered scheme optional; an unknown scheme id is refused, so a misspelt id is not silently dropped. */
 function schemesSchema() {
   return v.strictObject(
-    Object.fromEntries(SCHEMES.map((m) => [m.id, v.optional(schemeSettingSchema(m), { enabled: true, options: {} })])),
-    (issue) => `unknown scheme ${JSON.stringify(issue.input)} (expected one of ${SCHEMES.map((m) => m.id).join(", ")})`,
+    Object.fromEntries(SCHEME_DECLARATIONS.map((m) => [m.id, v.optional(schemeSettingSchema(m), { enabled: true, options: {} })])),
+    (issue) => `unknown scheme ${JSON.stringify(issue.input)} (expected one of ${SCHEME_DECLARATIONS.map((m) => m.id).join(", ")})`,
   );
 }
 

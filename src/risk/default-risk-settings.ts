@@ -1,6 +1,6 @@
 import type { StudyInputs } from "../pipeline/study-inputs";
 import { BRIEF_LIMITS } from "../brief";
-import { SCHEMES, type UncertaintyKind } from "../schemes";
+import { SCHEME_DECLARATIONS, type UncertaintyKind } from "../schemes/declarations";
 import { materialInfo, type MaterialKind } from "../materials";
 import { FACTOR_LIMITS } from "../carbon";
 import { MAX_RATE } from "../cost";
@@ -98,7 +98,7 @@ export function defaultRiskSettings(study: StudyInputs): RiskSettings {
   add(spreadInput("wind", "Basic wind velocity v_b (m/s)", ["brief", "windBasicMPerS"], b.windBasicMPerS, DEFAULT_SPREADS.wind, BRIEF_LIMITS.windBasicMPerS, null));
   add(spreadInput("services", "Services and hung load (kPa)", ["brief", "servicesKPa"], b.servicesKPa, DEFAULT_SPREADS.services, BRIEF_LIMITS.servicesKPa, null));
 
-  for (const model of SCHEMES) {
+  for (const model of SCHEME_DECLARATIONS) {
     for (const spec of model.options) {
       if (spec.kind !== "number" || spec.integer) continue;
       if (!spec.uncertainty) continue;

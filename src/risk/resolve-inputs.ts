@@ -2,7 +2,7 @@
 // index paths into this study, and absolute low / mode / high with the mode the study's value.
 import type { RiskStudy } from "./risk-study";
 import { BRIEF_LIMITS } from "../brief";
-import { SCHEMES } from "../schemes";
+import { SCHEME_DECLARATIONS } from "../schemes/declarations";
 import { FACTOR_LIMITS } from "../carbon";
 import { MAX_RATE } from "../cost";
 import type { DistributionKind } from "./distribution";
@@ -71,7 +71,7 @@ export function fieldLimits(study: RiskStudy, path: IndexPath): { min: number; m
   const [head, a, b, c] = path;
   if (head === "brief" && typeof a === "string") return (BRIEF_LIMITS as Record<string, { min: number; max: number }>)[a] ?? null;
   if (head === "schemes" && b === "options") {
-    const spec = SCHEMES.find((m) => m.id === a)?.options.find((o) => o.key === c);
+    const spec = SCHEME_DECLARATIONS.find((m) => m.id === a)?.options.find((o) => o.key === c);
     return spec && spec.kind === "number" ? { min: spec.min, max: spec.max } : null;
   }
   if (head === "carbon" && a === "factors" && typeof c === "string") return (FACTOR_LIMITS as Record<string, { min: number; max: number }>)[c] ?? null;

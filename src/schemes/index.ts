@@ -1,5 +1,7 @@
-// Schemes: one folder per structural system, each a SchemeModel built on the kit (./kit). Adding a
-// scheme is one folder, its id in ./ids.ts and one line here.
+// The design registry: one folder per structural system, each a SchemeModel built on the kit (./kit)
+// and on its declaration (./<id>/declaration.ts). The pipeline, the workers and the command line
+// read it; main-thread pages read the declarations registry (./declarations.ts), which carries no
+// design code. Adding a scheme is one folder, its id in ./ids.ts and one line here and there.
 import type { SchemeModel, SchemeOptions } from "./types";
 import { SCHEME_IDS, type SchemeId } from "./ids";
 import { cableDome } from "./cable-dome";
@@ -10,7 +12,7 @@ import { concreteShell } from "./concrete-shell";
 import { timberDome } from "./timber-dome";
 
 export { SCHEME_IDS } from "./ids";
-export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind } from "./types";
+export type { SchemeModel, SchemeDeclaration, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind } from "./types";
 export { assembleDesign, infeasibleDesign, check, isSubstructure, isDesignAnswer, SchemeError, type DesignParts } from "./kit";
 export { iterateSelfWeight, ConvergenceError, type Converged } from "./kit";
 export { checkSchemeOptions } from "./kit";

@@ -172,8 +172,12 @@ export interface Design {
   regime?: string;
 }
 
-/** A scheme: its description, its valid range, its options and its designer. */
-export interface SchemeModel<O extends SchemeOptions = SchemeOptions, Id extends string = SchemeId> {
+/**
+ * What a scheme is, without its designer: who it is, its valid range, its options. The pages, the
+ * study schema, the defaults, the palette and the risk defaults read only this (the declarations
+ * registry, ../declarations.ts), so the main thread carries no design code.
+ */
+export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id extends string = SchemeId> {
   id: Id;
   label: string;
   /** Colour of the scheme on every chart and export (CSS colour). */
@@ -192,6 +196,10 @@ export interface SchemeModel<O extends SchemeOptions = SchemeOptions, Id extends
    * An option the user pinned is never overridden.
    */
   screeningOptions?: Partial<O>;
+}
+
+/** A scheme: its declaration and its designer (the design registry, ./index.ts: the pipeline, the workers and the command line). */
+export interface SchemeModel<O extends SchemeOptions = SchemeOptions, Id extends string = SchemeId> extends SchemeDeclaration<O, Id> {
   /** Preliminary design. Never throws for a valid brief: infeasible is an answer. */
   design(brief: Brief, options: O, catalogue: Catalogue): Design;
 }

@@ -1,6 +1,6 @@
 import type { Study } from "./study";
 import { defaultStudy } from "./defaults";
-import { SCHEMES } from "../schemes";
+import { SCHEME_DECLARATIONS } from "../schemes/declarations";
 import { BRIEF_FIELDS } from "../brief";
 import { getIn } from "../kernel/patch";
 import { studyToJson } from "./load-study";
@@ -84,7 +84,7 @@ function row(group: string, path: (string | number)[], info: FieldInfo, study: S
 export function assumptionsRecord(study: Study, defaults: Study = defaultStudy()): Assumption[] {
   const out: Assumption[] = [];
   for (const { key, label, unit, source } of BRIEF_FIELDS) out.push(row("brief", ["brief", ...key.split(".")], { label, unit, source }, study, defaults));
-  for (const model of SCHEMES) {
+  for (const model of SCHEME_DECLARATIONS) {
     out.push(row("scheme", ["schemes", model.id, "enabled"], { label: `${model.label}: compared`, unit: "", source: "study" }, study, defaults));
     for (const spec of model.options) {
       out.push(row("scheme", ["schemes", model.id, "options", spec.key], { label: `${model.label}: ${spec.label}`, unit: spec.unit, source: spec.source }, study, defaults));

@@ -1,5 +1,5 @@
 import { DEFAULT_BRIEF } from "../brief";
-import { SCHEMES } from "../schemes";
+import { SCHEME_DECLARATIONS } from "../schemes/declarations";
 import { defaultFactorRows, DEFAULT_CARBON_SETTINGS } from "../carbon";
 import { defaultRateRows, DEFAULT_ON_COSTS } from "../cost";
 import { STUDY_SCHEMA_VERSION, type Study } from "./study";
@@ -9,7 +9,7 @@ import { defaultRiskSettings } from "../risk/default-risk-settings";
 
 /** A study with every default: the tool's own starting point (the demo study is a separate file). */
 export function defaultStudy(): Study {
-  const schemes = Object.fromEntries(SCHEMES.map((m) => [m.id, { enabled: true, options: { ...m.defaults } }])) as Record<SchemeId, SchemeSetting>;
+  const schemes = Object.fromEntries(SCHEME_DECLARATIONS.map((m) => [m.id, { enabled: true, options: { ...m.defaults } }])) as Record<SchemeId, SchemeSetting>;
   const study: Omit<Study, "risk"> = {
     schemaVersion: STUDY_SCHEMA_VERSION,
     meta: { title: "Untitled study", author: "", date: "2026-01-01", notes: "", recommendation: "" },

@@ -1,6 +1,6 @@
 // Study schema version 2 → 3: the brief's envelope (height limit, rise rule, search objective) and
 // the pins of each scheme's proportions. Nothing stored is dropped; only fields are added.
-import { SCHEMES } from "../schemes";
+import { SCHEME_DECLARATIONS } from "../schemes/declarations";
 import { DEFAULT_BRIEF } from "../brief";
 
 type Json = Record<string, unknown>;
@@ -31,7 +31,7 @@ function migrateSchemes(schemes: unknown): unknown {
   if (!isObject(schemes)) return schemes;
   return Object.fromEntries(
     Object.entries(schemes).map(([id, setting]) => {
-      const model = SCHEMES.find((m) => m.id === id);
+      const model = SCHEME_DECLARATIONS.find((m) => m.id === id);
       if (!model || !isObject(setting) || !isObject(setting.options) || setting.pinned !== undefined) return [id, setting];
       const options = setting.options;
       const pinned = Object.keys(options).filter((key) => key in model.defaults && options[key] !== model.defaults[key]);

@@ -1,8 +1,8 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
-import type { Design, DesignParts, OptionValues, PlanCombination } from "../kit";
-import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineOptions, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, planCombinations, SizingError, ANALYSIS_OPTION, CABLE_ROOF_DEFLECTION_RATIO, FABRIC_OPTION, TENSION_COMMON_OPTIONS } from "../kit";
+import type { Design, DesignParts, PlanCombination } from "../kit";
+import { assembleDesign, capEnvelope, check, convergeSelfWeight, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, infeasibleOnFailure, massOfKinds, memberOf, tonnesRow, planCombinations, SizingError, CABLE_ROOF_DEFLECTION_RATIO } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
@@ -11,29 +11,7 @@ import { domeMembers, sizeCableDome, type DomeSizing, type DomeSizingInput } fro
 import { analyseDome, type DomeAnalysis, type DomeSlackRule } from "./analysis";
 import { designBasis, type DesignBasis } from "../../loads";
 import { designCompressionRing, type RingDesign, type RingMaterial } from "./compression-ring";
-
-const declarations = {
-  /** Radial trusses N; 0 = automatic (even count with ridges ≤ 12 m apart at the perimeter, closer where the fabric needs it, at least 12). */
-  radialTrusses: { kind: "number", label: "Radial trusses (0 = automatic)", unit: "", min: 0, max: 120, step: 2, integer: true, default: 0, source: "automatic: perimeter ridge spacing ≤ 12 m (common practice, no source), closer where the fabric panel needs it; at least 12" },
-  /** Hoops n; 0 = automatic (the lightest of three counts around one per 55 m of radius). */
-  hoops: { kind: "number", label: "Hoops (0 = automatic)", unit: "", min: 0, max: 8, step: 1, integer: true, default: 0, free: true, source: "automatic: the lightest of one fewer, the usual and one more than one per 55 m of radius (the lightest here; common practice 20–35 m, no source, is for low outer hoops)" },
-  centralRingRatio: { kind: "number", label: "Central ring radius / plan radius", unit: "", min: 0.03, max: 0.3, step: 0.01, default: 0.1, source: "common practice, no source" },
-  // default 0.6 gives the lightest roof with its ring at 160 m here; 0.4 more usable floor (common practice, no source)
-  postHeightRatio: { kind: "number", label: "Diagonal rise per bay (post depth; feet kept above the clear height)", unit: "", min: 0.05, max: 1.0, step: 0.01, default: 0.6, free: true, source: "common practice, no source" },
-  // the ring on a perimeter wall above the eaves lifts the whole truss; 0 keeps the brief's eaves
-  // 0.06: the ring high enough that the outer post foot keeps the clear height with a working outer diagonal (lightest at 160 m here; common practice, no source)
-  ringHeightRatio: { kind: "number", label: "Compression ring above the eaves / span", unit: "", min: 0, max: 0.15, step: 0.005, default: 0.06, free: true, source: "common practice, no source (the wall or stand under the ring is substructure, counted as an allowance)" },
-  // steel: the lighter ring for the same buckling resistance at every span here
-  ringMaterial: { kind: "select", label: "Compression ring", choices: [{ value: "concrete", label: "Reinforced concrete" }, { value: "steel", label: "Steel box" }], default: "steel", source: "design choice" },
-  // the cables do restrain the ring; false gives the bare-ring 3EI/R³ (Timoshenko & Gere ch. 7)
-  ringCableRestraint: { kind: "toggle", label: "Ridge cables restrain ring buckling", default: true, source: "ring on elastic foundation (from memory); off: bare ring, Timoshenko & Gere ch. 7" },
-  bareRingLoad: { kind: "select", label: "Bare ring: direction of the cable pull", choices: [{ value: "normal", label: "Normal to the ring (3EI/r³)" }, { value: "centre", label: "Directed to the centre (4.5EI/r³)" }], default: "normal", source: "Timoshenko & Gere, Theory of Elastic Stability, 1961, ch. 7 (from memory): q_cr = 3EI/r³ for pressure normal to the ring, 4.5EI/r³ for a load that stays directed to the centre" },
-  ...ANALYSIS_OPTION,
-  slackAllowed: { kind: "select", label: "Cables allowed to slacken", choices: [{ value: "none", label: "None" }, { value: "diagonals", label: "Diagonals" }], default: "none", source: "design choice" },
-  ...FABRIC_OPTION,
-  ...TENSION_COMMON_OPTIONS,
-} as const;
-export type CableDomeOptions = OptionValues<typeof declarations>;
+import { cableDomeDeclaration, type CableDomeOptions } from "./declaration";
 
 /**
  * Widest fabric panel the automatic truss count allows: n = p s/(8·sag ratio) ≤ allowable, with the
@@ -176,18 +154,6 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
   };
 }
 
-const identity = {
-  id: "cable-dome",
-  riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 },
-  // the proportion search designs its candidates by the closed form; the chosen ones are analysed in 3D when asked
-  screeningOptions: { analysis: "closed-form" },
-  label: "Cable dome",
-  colour: "#0072B2",
-  description:
-    "Radial cable trusses span from a perimeter compression ring to a central tension ring: ridge cables over the top, vertical posts standing on hoops, and diagonals from the foot of each post to the head of the next. Prestress in the cables holds the posts up; coated fabric spans between the ridges. The roof is very light; the compression ring carries the whole horizontal thrust.",
-  validSpanM: { min: 40, max: 250 },
-} as const;
-
 /**
  * Automatic hoops: the lightest feasible design of one fewer, the usual (one per 55 m of radius) and
  * one more hoop — the least over the candidates, so the result does not jump where the usual count
@@ -196,12 +162,12 @@ const identity = {
 function design(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue) {
   const basis = designBasis(brief);
   const combinations = planCombinations(brief, basis);
-  const withHoops = (hoops: number, analyse: boolean) => infeasibleOnFailure(identity.id, brief, () => assembleDesign(identity, brief, designWith(brief, opts, catalogue, hoops, combinations, basis, analyse)));
+  const withHoops = (hoops: number, analyse: boolean) => infeasibleOnFailure(cableDomeDeclaration.id, brief, () => assembleDesign(cableDomeDeclaration, brief, designWith(brief, opts, catalogue, hoops, combinations, basis, analyse)));
   // outside the method's span range the design is not ranked: the closed form answers there, in milliseconds rather than seconds
-  const inRange = brief.spanM >= identity.validSpanM.min && brief.spanM <= identity.validSpanM.max;
+  const inRange = brief.spanM >= cableDomeDeclaration.validSpanM.min && brief.spanM <= cableDomeDeclaration.validSpanM.max;
   const analyse = opts.analysis === "3d" && inRange;
   const result = opts.hoops > 0 ? withHoops(opts.hoops, analyse) : lightestHoops(brief, withHoops, analyse);
-  return opts.analysis === "3d" && !inRange ? { ...result, warnings: [...result.warnings, `outside the valid span range (${identity.validSpanM.min}–${identity.validSpanM.max} m) the 3D analysis is not run: closed form only`] } : result;
+  return opts.analysis === "3d" && !inRange ? { ...result, warnings: [...result.warnings, `outside the valid span range (${cableDomeDeclaration.validSpanM.min}–${cableDomeDeclaration.validSpanM.max} m) the 3D analysis is not run: closed form only`] } : result;
 }
 
 /** The lightest feasible of one hoop fewer, the usual count and one more, by the closed form; then analysed when asked. */
@@ -215,4 +181,4 @@ function lightestHoops(brief: Brief, withHoops: (hoops: number, analyse: boolean
 }
 
 /** Cable dome: radial cable trusses between a perimeter compression ring and a central tension ring, fabric between the ridges. */
-export const cableDome = defineScheme({ ...identity, options: defineOptions(declarations), design });
+export const cableDome = defineScheme(cableDomeDeclaration, design);

@@ -2,13 +2,6 @@ import type { Catalogue, Cladding } from "../../catalogue/types";
 import { findById } from "./find";
 import type { CostItemId } from "../../takeoff/takeoff-row";
 
-/** Roof coverings of data/claddings.csv offered to the rigid schemes. */
-export const CLADDING_CHOICES = [
-  { value: "metal-deck", label: "Insulated metal deck" },
-  { value: "etfe-cushion", label: "ETFE cushions" },
-  { value: "glazing", label: "Laminated glazing" },
-] as const;
-
 /** The cladding with this id. @throws RangeError when the catalogue has none */
 export function findCladding(catalogue: Catalogue, id: string): Cladding {
   return findById(catalogue.claddings, id, "cladding");

@@ -1,7 +1,8 @@
 // The scheme kit: what every scheme shares. A scheme folder imports from here, mechanics/, loads/
 // and catalogue/ — never from another scheme.
-export type { SchemeModel, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind, DesignStatus, MassByGroupKg, FloorEnvelope, AnalysisView, DesignAnalysis } from "../types";
-export { defineScheme, infeasibleOnFailure, convergeSelfWeight, type SchemeDefinition } from "./scheme";
+export type { SchemeModel, SchemeDeclaration, SchemeId, SchemeOptions, Design, MemberGroup, Check, OptionSpec, OptionValue, SummaryItem, DrawingLine, UncertaintyKind, DesignStatus, MassByGroupKg, FloorEnvelope, AnalysisView, DesignAnalysis } from "../types";
+export { defineScheme, infeasibleOnFailure, convergeSelfWeight, type SchemeDesign } from "./scheme";
+export { declareScheme, type SchemeIdentity } from "./declare";
 export { defineOptions, type DeclaredOptions, type OptionDeclaration, type OptionValues } from "./define-options";
 export { checkSchemeOptions } from "./check-options";
 export { SchemeError, SizingError, ConvergenceError, failWith, isDesignAnswer, type FailureContext } from "./errors";
@@ -10,9 +11,10 @@ export { assembleDesign, infeasibleDesign, check, capEnvelope, isSubstructure, t
 export { usableFloorM2, usableFloorLines, soffitHeightAtM } from "./usable-floor";
 export { memberOf, massOfKinds, tonnesRow, pickStrandGroup, steelTensionRing, type SizedGroup } from "./members";
 export { pickChs, type AxialDemand } from "./pick-chs";
-export { STEEL_GRADES, STEEL_GRADE_CHOICES, steelGrade, type SteelGrade } from "./steel";
-export { CLADDING_CHOICES, findCladding, claddingCostItem } from "./cladding";
-export { ANALYSIS_OPTION, CABLE_ROOF_DEFLECTION_RATIO, FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
+export { STEEL_GRADES, steelGrade, type SteelGrade } from "./steel";
+export { findCladding, claddingCostItem } from "./cladding";
+export { ANALYSIS_OPTION, FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS, CLADDING_CHOICES, STEEL_GRADE_CHOICES } from "./option-choices";
+export { CABLE_ROOF_DEFLECTION_RATIO, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
 export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction, heaviestByUniformEquivalent } from "./load-combinations";
 export { capFloor } from "./cap-floor";
 export { analysedCombinations, planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";

@@ -7,11 +7,6 @@ export const STEEL_GRADES = {
   S460: { yieldPa: 460e6, curve: "a0" as BucklingCurve },
 } as const;
 export type SteelGrade = keyof typeof STEEL_GRADES;
-export const STEEL_GRADE_CHOICES = [
-  { value: "S275", label: "S275" },
-  { value: "S355", label: "S355" },
-  { value: "S460", label: "S460" },
-] as const;
 
 /** The steel of a grade option (a value the options check has already accepted). */
 export function steelGrade(value: string): { yieldPa: number; curve: BucklingCurve } {

@@ -1,5 +1,5 @@
 import { describe, it, expect } from "vitest";
-import { defineOptions, defineScheme, failWith, SchemeError, SizingError, isDesignAnswer, infeasibleDesign, convergeSelfWeight, ConvergenceError } from "../../../src/schemes/kit";
+import { declareScheme, defineOptions, defineScheme, failWith, SchemeError, SizingError, isDesignAnswer, infeasibleDesign, convergeSelfWeight, ConvergenceError } from "../../../src/schemes/kit";
 import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 
@@ -22,7 +22,7 @@ describe("defineOptions", () => {
 
 describe("the design template (defineScheme)", () => {
   const identity = { id: "truss-roof" as const, label: "Test", colour: "#000000", description: "a test scheme", validSpanM: { min: 1, max: 1000 } };
-  const withDesign = (design: () => never) => defineScheme({ ...identity, options: declared, design });
+  const withDesign = (design: () => never) => defineScheme(declareScheme({ ...identity, options: declared }), design);
 
   it("checks the options before designing", () => {
     const model = withDesign(() => {

@@ -1,0 +1,41 @@
+// The cable-dome scheme's declaration: who it is, its valid range and its options, declared once.
+// No design code here: the main-thread pages read it through ../declarations.ts; the design
+// (./index.ts) is built on it.
+import { declareScheme, defineOptions, ANALYSIS_OPTION, FABRIC_OPTION, TENSION_COMMON_OPTIONS, type OptionValues } from "../kit/declare";
+
+const declarations = {
+  /** Radial trusses N; 0 = automatic (even count with ridges ≤ 12 m apart at the perimeter, closer where the fabric needs it, at least 12). */
+  radialTrusses: { kind: "number", label: "Radial trusses (0 = automatic)", unit: "", min: 0, max: 120, step: 2, integer: true, default: 0, source: "automatic: perimeter ridge spacing ≤ 12 m (common practice, no source), closer where the fabric panel needs it; at least 12" },
+  /** Hoops n; 0 = automatic (the lightest of three counts around one per 55 m of radius). */
+  hoops: { kind: "number", label: "Hoops (0 = automatic)", unit: "", min: 0, max: 8, step: 1, integer: true, default: 0, free: true, source: "automatic: the lightest of one fewer, the usual and one more than one per 55 m of radius (the lightest here; common practice 20–35 m, no source, is for low outer hoops)" },
+  centralRingRatio: { kind: "number", label: "Central ring radius / plan radius", unit: "", min: 0.03, max: 0.3, step: 0.01, default: 0.1, source: "common practice, no source" },
+  // default 0.6 gives the lightest roof with its ring at 160 m here; 0.4 more usable floor (common practice, no source)
+  postHeightRatio: { kind: "number", label: "Diagonal rise per bay (post depth; feet kept above the clear height)", unit: "", min: 0.05, max: 1.0, step: 0.01, default: 0.6, free: true, source: "common practice, no source" },
+  // the ring on a perimeter wall above the eaves lifts the whole truss; 0 keeps the brief's eaves
+  // 0.06: the ring high enough that the outer post foot keeps the clear height with a working outer diagonal (lightest at 160 m here; common practice, no source)
+  ringHeightRatio: { kind: "number", label: "Compression ring above the eaves / span", unit: "", min: 0, max: 0.15, step: 0.005, default: 0.06, free: true, source: "common practice, no source (the wall or stand under the ring is substructure, counted as an allowance)" },
+  // steel: the lighter ring for the same buckling resistance at every span here
+  ringMaterial: { kind: "select", label: "Compression ring", choices: [{ value: "concrete", label: "Reinforced concrete" }, { value: "steel", label: "Steel box" }], default: "steel", source: "design choice" },
+  // the cables do restrain the ring; false gives the bare-ring 3EI/R³ (Timoshenko & Gere ch. 7)
+  ringCableRestraint: { kind: "toggle", label: "Ridge cables restrain ring buckling", default: true, source: "ring on elastic foundation (from memory); off: bare ring, Timoshenko & Gere ch. 7" },
+  bareRingLoad: { kind: "select", label: "Bare ring: direction of the cable pull", choices: [{ value: "normal", label: "Normal to the ring (3EI/r³)" }, { value: "centre", label: "Directed to the centre (4.5EI/r³)" }], default: "normal", source: "Timoshenko & Gere, Theory of Elastic Stability, 1961, ch. 7 (from memory): q_cr = 3EI/r³ for pressure normal to the ring, 4.5EI/r³ for a load that stays directed to the centre" },
+  ...ANALYSIS_OPTION,
+  slackAllowed: { kind: "select", label: "Cables allowed to slacken", choices: [{ value: "none", label: "None" }, { value: "diagonals", label: "Diagonals" }], default: "none", source: "design choice" },
+  ...FABRIC_OPTION,
+  ...TENSION_COMMON_OPTIONS,
+} as const;
+export type CableDomeOptions = OptionValues<typeof declarations>;
+
+/** Cable dome: radial cable trusses between a perimeter compression ring and a central tension ring, fabric between the ridges. */
+export const cableDomeDeclaration = declareScheme({
+  id: "cable-dome",
+  riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 },
+  // the proportion search designs its candidates by the closed form; the chosen ones are analysed in 3D when asked
+  screeningOptions: { analysis: "closed-form" },
+  label: "Cable dome",
+  colour: "#0072B2",
+  description:
+    "Radial cable trusses span from a perimeter compression ring to a central tension ring: ridge cables over the top, vertical posts standing on hoops, and diagonals from the foot of each post to the head of the next. Prestress in the cables holds the posts up; coated fabric spans between the ridges. The roof is very light; the compression ring carries the whole horizontal thrust.",
+  validSpanM: { min: 40, max: 250 },
+  options: defineOptions(declarations),
+});

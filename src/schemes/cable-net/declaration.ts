@@ -1,0 +1,38 @@
+// The cable-net scheme's declaration: who it is, its valid range and its options, declared once.
+// No design code here: the main-thread pages read it through ../declarations.ts; the design
+// (./index.ts) is built on it.
+import { declareScheme, defineOptions, ANALYSIS_OPTION, FABRIC_OPTION, TENSION_COMMON_OPTIONS, type OptionValues } from "../kit/declare";
+
+const declarations = {
+  // default: common practice for large nets, no source
+  masts: { kind: "number", label: "Masts", unit: "", min: 3, max: 48, step: 1, integer: true, default: 12, free: true, referencePerSpanM: 12 / 365, source: "common practice, no source; the search's reference grows with the span as 12 masts at about 365 m (a built mast-supported cable-net roof, trade press: issue 12's check values)" },
+  mastRingRatio: { kind: "number", label: "Mast ring radius / plan radius", unit: "", min: 0.3, max: 0.9, step: 0.05, default: 0.6, free: true, source: "common practice, no source" },
+  // default: mast head above the roof ≈ span/7 (common practice, no source)
+  mastHeightRatio: { kind: "number", label: "Mast height above roof / span", unit: "", min: 0.03, max: 0.4, step: 0.01, default: 0.15, free: true, source: "common practice, no source" },
+  /** Radial cables from each mast head (half out to the edge, half in to the central ring). */
+  radialCablesPerMast: { kind: "number", label: "Radial cables per mast", unit: "", min: 2, max: 40, step: 2, integer: true, default: 8, source: "common practice, no source" },
+  // default: fabric panels 5–8 m (common practice, no source)
+  hangerSpacingM: { kind: "number", label: "Hanger (circumferential cable) spacing", unit: "m", min: 2, max: 15, step: 0.5, default: 6, source: "common practice, no source" },
+  ...FABRIC_OPTION,
+  /** Plain masts buckle over their full length; braced masts over half (guyed at mid-height). */
+  mastType: { kind: "select", label: "Mast type", choices: [{ value: "plain", label: "Plain tube (buckles over full length)" }, { value: "braced", label: "Braced at mid-height (half length)" }], default: "braced", source: "assumption: braced L_cr = L/2" },
+  // default ≈ 1/0.9: EN 1990 Table A1.2(A) (EQU) γ_G,inf = 0.9 on the stabilising weight
+  anchorUpliftMargin: { kind: "number", label: "Anchor weight / uplift", unit: "", min: 1.0, max: 3.0, step: 0.05, default: 1.1, source: "EN 1990 Table A1.2(A): 1/0.9" },
+  ...ANALYSIS_OPTION,
+  ...TENSION_COMMON_OPTIONS,
+} as const;
+export type CableNetOptions = OptionValues<typeof declarations>;
+
+/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against valley cables, masts stayed by backstays. */
+export const cableNetDeclaration = declareScheme({
+  id: "cable-net",
+  label: "Mast-supported cable net",
+  colour: "#009E73",
+  description:
+    "Masts on a ring inside the plan carry radial cables that hang the fabric: half run out to anchors at the edge, half in to a central tension ring. Circumferential cables between the radial cables carry the fabric panels. A second family of valley cables, prestressed against the radial ones, holds the roof down in wind uplift. Backstays take the difference of pull at each mast head down to ground anchors.",
+  validSpanM: { min: 60, max: 400 },
+  riseSpanRatio: { min: 0.05, max: 0.2, preferred: 0.1 },
+  // the proportion search designs its candidates by the closed form; the chosen ones are analysed in 3D when asked
+  screeningOptions: { analysis: "closed-form" },
+  options: defineOptions(declarations),
+});
