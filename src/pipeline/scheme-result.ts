@@ -1,0 +1,56 @@
+// One scheme's design assessed with the study's tables. Apart from ./evaluate.ts (which designs,
+// and so imports every scheme's design code) so that a page assessing designs a worker made (the
+// compare page) does not load the designs: the bundler groups modules by the pages that reach them.
+import type { Brief } from "../brief";
+import type { Design, SchemeId } from "../schemes/types";
+import { assessCarbon, type CarbonAssessment } from "../carbon";
+import { assessCost, type CostAssessment } from "../cost";
+import { messageOf } from "../kernel/errors";
+import { schemeFigures, type SchemeFigures } from "./figures";
+import type { ProportionChoice } from "./proportions";
+import type { StudyInputs } from "./study-inputs";
+
+/** One scheme's design with its carbon and cost, and the figures read from them. */
+export interface SchemeResult {
+  id: SchemeId;
+  label: string;
+  design: Design;
+  /** Null when the design has no take-off or the assessment failed (see `error`). */
+  carbon: CarbonAssessment | null;
+  cost: CostAssessment | null;
+  /** Why carbon or cost (or both) could not be assessed, or "". */
+  error: string;
+  /** The figures every table, chart and the command line read. */
+  figures: SchemeFigures;
+  /** The brief this scheme was designed for: the evaluated one with the scheme's own rise. */
+  brief?: Brief;
+  /** The proportions the search chose (and the rise used), with the runner-up. */
+  proportions?: ProportionChoice;
+}
+
+function attempt<T>(run: () => T): { value: T | null; error: string } {
+  try {
+    return { value: run(), error: "" };
+  } catch (error) {
+    return { value: null, error: messageOf(error) };
+  }
+}
+
+/**
+ * Carbon and cost of a design, with the study's tables, each assessed on its own: a gap in the
+ * factor table blanks the carbon but not the cost, and the other way round. `error` says why
+ * either is missing (both reasons, carbon first).
+ */
+export function assessDesign(design: Design, study: Pick<StudyInputs, "carbon" | "cost">): Pick<SchemeResult, "carbon" | "cost" | "error"> {
+  if (design.takeoff.length === 0) return { carbon: null, cost: null, error: design.feasible ? "no take-off" : "" };
+  const areas = { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
+  const carbon = attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areas));
+  const cost = attempt(() => assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areas));
+  return { carbon: carbon.value, cost: cost.value, error: [carbon.error, cost.error].filter((e) => e !== "").join("; ") };
+}
+
+/** A scheme's design assessed with the study's tables, with its figures. */
+export function schemeResult(id: SchemeId, label: string, design: Design, study: Pick<StudyInputs, "carbon" | "cost">): SchemeResult {
+  const assessed = { id, label, design, ...assessDesign(design, study) };
+  return { ...assessed, figures: schemeFigures(assessed) };
+}
