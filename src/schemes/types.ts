@@ -43,6 +43,8 @@ export type OptionSpec =
        * span); without it the reference is the set value.
        */
       referencePerSpanM?: number;
+      /** The least value the search tries, where values below it ask the scheme to choose (the cable dome's 0 hoops = automatic): the search stands in for that choice and reports the real value. */
+      searchMin?: number;
     }
   | { key: string; label: string; kind: "select"; unit: ""; choices: readonly { value: string; label: string }[]; source: string; free?: boolean }
   | { key: string; label: string; kind: "toggle"; unit: ""; source: string; free?: boolean };

@@ -7,7 +7,7 @@ const declarations = {
   /** Radial trusses N; 0 = automatic (even count with ridges ≤ 12 m apart at the perimeter, closer where the fabric needs it, at least 12). */
   radialTrusses: { kind: "number", label: "Radial trusses (0 = automatic)", unit: "", min: 0, max: 120, step: 2, integer: true, default: 0, source: "automatic: perimeter ridge spacing ≤ 12 m (common practice, no source), closer where the fabric panel needs it; at least 12" },
   /** Hoops n; 0 = automatic (the lightest of three counts around one per 55 m of radius). */
-  hoops: { kind: "number", label: "Hoops (0 = automatic)", unit: "", min: 0, max: 8, step: 1, integer: true, default: 0, free: true, source: "automatic: the lightest of one fewer, the usual and one more than one per 55 m of radius (the lightest here; common practice 20–35 m, no source, is for low outer hoops)" },
+  hoops: { kind: "number", label: "Hoops (0 = automatic)", unit: "", min: 0, max: 8, step: 1, integer: true, default: 0, free: true, searchMin: 1, source: "the search tries 1 to 8 (the automatic choice is one of them); automatic: the lightest of one fewer, the usual and one more than one per 55 m of radius (the lightest here; common practice 20–35 m, no source, is for low outer hoops)" },
   centralRingRatio: { kind: "number", label: "Central ring radius / plan radius", unit: "", min: 0.03, max: 0.3, step: 0.01, default: 0.1, source: "common practice, no source" },
   // default 0.6 gives the lightest roof with its ring at 160 m here; 0.4 more usable floor (common practice, no source)
   postHeightRatio: { kind: "number", label: "Diagonal rise per bay (post depth; feet kept above the clear height)", unit: "", min: 0.05, max: 1.0, step: 0.01, default: 0.6, free: true, source: "common practice, no source" },

@@ -149,4 +149,16 @@ describe("proportion search", () => {
     expect(at(60)).toBe(3); // 1.97, below the least count 3
     expect(searchProportions(model([spec("masts", 3, 48, 1, true)], { masts: 12 }), { masts: 12 }, [], fixed, "mass", flat, (d) => d.totalMassKg, 160).choice.proportions.masts).toBe(12); // no per-span reference: the set value
   });
+
+  it("does not try a count below its searchMin (the value that asks the scheme to choose) and reports the real count", () => {
+    const hoops = { ...spec("hoops", 0, 8, 1, true), searchMin: 1 } as OptionSpec;
+    const m = model([hoops], { hoops: 0 });
+    const tried: number[] = [];
+    const { choice } = searchProportions(m, m.defaults, [], fixed, "mass", (o) => {
+      tried.push(o.hoops as number);
+      return { ...feasible(), totalMassKg: 10 + Math.abs((o.hoops as number) - 2) };
+    }, (d) => d.totalMassKg);
+    expect(tried).not.toContain(0);
+    expect(choice.proportions.hoops).toBe(2);
+  });
 });
