@@ -114,6 +114,7 @@ reactiveCell(inputs, { id: "section", title: "Roof section" }, () =>
       brief: brief.value,
       title: "Roof section through the centre: roof surface, walls and usable floor",
       caption: caption.value,
+      height: 300,
     }),
     "roof-section",
   ),

@@ -13,6 +13,8 @@ export interface SectionChartInput {
   width?: number;
   /** Member roles in colour order, shared with the plan so a role has one colour in both. */
   roles?: readonly string[];
+  /** A fixed height (px) instead of one that follows the section's proportions (see sectionChartOptions). */
+  height?: number;
 }
 
 /**
@@ -45,7 +47,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
     title: input.title,
     caption: input.caption,
     width: input.width ?? 760,
-    height: Math.max(220, Math.min(420, 760 * ((top * 1.25) / brief.spanM) + 120)),
+    height: input.height ?? Math.max(220, Math.min(420, 760 * ((top * 1.25) / brief.spanM) + 120)),
     marginLeft: 50,
     x: { label: "Distance from centre (m)", domain: [-a * 1.05, a * 1.05] },
     y: { label: "Height above floor (m)", domain: [0, top * 1.2] },
