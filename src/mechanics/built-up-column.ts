@@ -18,6 +18,7 @@
  * the chord's lacing nodes on one chord, d = diagonal length, A_d, A_v diagonal and post areas.
  */
 import { STEEL_E_PA } from "./flexural-buckling";
+import { variableColumnCriticalForceN } from "./variable-column";
 
 export type LacingKind = "W" | "N" | "X";
 
@@ -114,4 +115,62 @@ export function lacedColumnForces(input: LacedColumnInput): LacedColumnForces {
     postForceN: lacing.kind === "N" ? shear / lacing.planes : 0,
     diagonalLengthM: d,
   };
+}
+
+/** One station along a tapered laced member: its chord spacing and the largest chord and diagonal forces there. */
+export interface LacedStation {
+  xM: number;
+  chordSpacingM: number;
+  /** Force in the most compressed chord, N: its share of N_Ed plus M_Ed·sin(πx/L) over the chord spacing. */
+  chordForceN: number;
+  /** Force in one diagonal, N, from V_Ed·|cos(πx/L)| (eq. 6.73 distributed as the bow's slope), and its length, m. */
+  diagonalForceN: number;
+  diagonalLengthM: number;
+}
+
+export interface TaperedLacedForces {
+  criticalForceN: number;
+  /** The least shear stiffness along the member (at the narrower end for the usual proportions), N. */
+  shearStiffnessN: number;
+  momentNm: number;
+  shearN: number;
+  stations: LacedStation[];
+}
+
+/**
+ * A laced member whose chord spacing grows linearly from `endChordSpacingM` at each end to
+ * `chordSpacingM` at mid-height (a mast "larger at mid-height", issue 13 item 6). EN 1993-1-1 §6.4
+ * is written for uniform members; here its method is kept and fed the tapered member's own
+ * stiffness (common practice, no source for the taper itself):
+ * - N_cr is the elastic critical force of the member with I_eff(x) = 0.5·h0(x)²·A_side (eq. 6.72 at
+ *   each section), from Euler's equation for a variable section (variable-column.ts) — or the
+ *   caller's `criticalForceN` (it is proportional to A_ch, so a search over chords computes it once);
+ * - S_v is the least of Fig. 6.9 along the member (chords' lacing at the same panel length);
+ * - M_Ed by eq. 6.70 with those two; along the member it follows the bow, M_Ed·sin(πx/L), and the
+ *   shear V_Ed = π·M_Ed/L (eq. 6.73) its slope, ·|cos(πx/L)|;
+ * - chord and diagonal forces (eqs. 6.69, 6.73 as in lacedColumnForces) at `stations` points along
+ *   half the member (it is symmetric), with the chord spacing and diagonal length there.
+ */
+export function taperedLacedColumnForces(input: LacedColumnInput & { endChordSpacingM: number; criticalForceN?: number }, stations = 11): TaperedLacedForces {
+  const { lengthM: L, axialN: N, chordSpacingM: hMid, endChordSpacingM: hEnd, chordAreaM2, chordsPerSide, lacing } = input;
+  if (!(hEnd > 0 && hEnd <= hMid)) throw new RangeError(`invalid endChordSpacingM: ${hEnd} (expected > 0 and at most chordSpacingM ${hMid})`);
+  const E = input.modulusPa ?? STEEL_E_PA;
+  const sideArea = chordsPerSide * chordAreaM2;
+  const spacingAt = (x: number) => hEnd + (hMid - hEnd) * (1 - Math.abs((2 * x) / L - 1));
+  const ncr = input.criticalForceN ?? variableColumnCriticalForceN(L, (x) => E * 0.5 * spacingAt(x) ** 2 * sideArea, 100);
+  const sv = Math.min(lacingShearStiffnessN({ chordSpacingM: hEnd, lacing, modulusPa: E }), lacingShearStiffnessN({ chordSpacingM: hMid, lacing, modulusPa: E }));
+  const denominator = 1 - N / ncr - N / sv;
+  const moment = denominator > 0 ? (N * (L / 500) + (input.firstOrderMomentNm ?? 0)) / denominator : Infinity;
+  const shear = (Math.PI * moment) / L;
+  const diagonalsPerPlane = lacing.kind === "X" ? 2 : 1;
+  const out: LacedStation[] = [];
+  for (let k = 0; k < stations; k++) {
+    const x = (k / (stations - 1)) * (L / 2);
+    const h0 = spacingAt(x);
+    const d = diagonalLengthM(lacing.kind, h0, lacing.panelM);
+    const sideForce = 0.5 * N + (moment * Math.sin((Math.PI * x) / L)) / h0;
+    const v = shear * Math.abs(Math.cos((Math.PI * x) / L));
+    out.push({ xM: x, chordSpacingM: h0, chordForceN: sideForce / chordsPerSide, diagonalForceN: (v * d) / (lacing.planes * diagonalsPerPlane * h0), diagonalLengthM: d });
+  }
+  return { criticalForceN: ncr, shearStiffnessN: sv, momentNm: moment, shearN: shear, stations: out };
 }
