@@ -16,6 +16,14 @@ const declarations = {
   ...FABRIC_OPTION,
   /** Plain masts buckle over their full length; braced masts over half (guyed at mid-height). */
   mastType: { kind: "select", label: "Mast type", choices: [{ value: "plain", label: "Plain tube (buckles over full length)" }, { value: "braced", label: "Braced at mid-height (half length)" }], default: "braced", source: "assumption: braced L_cr = L/2" },
+  /**
+   * A laced mast's shape over each buckling length (the whole mast, or each half of a braced one):
+   * uniform, or wider at mid-height and narrowing to half that face at the ends (issue 13 item 6).
+   * Not searched: with the default brief at 60, 160 and 300 m (plain and braced masts) a taper saved
+   * 0–5 % of mast steel (the chords are set by their share of N over a panel more than by the bow's
+   * moment) and made the net's proportion search 3–4 times slower.
+   */
+  mastShape: { kind: "select", label: "Laced mast shape", choices: [{ value: "uniform", label: "Uniform square" }, { value: "tapered", label: "Wider at mid-height (ends at half its face)" }], default: "uniform", source: "taper to half the face: common practice, no source" },
   // default ≈ 1/0.9: EN 1990 Table A1.2(A) (EQU) γ_G,inf = 0.9 on the stabilising weight
   anchorUpliftMargin: { kind: "number", label: "Anchor weight / uplift", unit: "", min: 1.0, max: 3.0, step: 0.05, default: 1.1, source: "EN 1990 Table A1.2(A): 1/0.9" },
   ...ANALYSIS_OPTION,

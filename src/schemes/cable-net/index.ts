@@ -130,7 +130,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
   const input = {
     brief, actions: roofActions(brief), combinations: planCombinations(brief), layout, catalogue, fabric,
     residualPrestress: opts.residualPrestress, gammaR: opts.gammaR, yieldPa: opts.steelYieldMPa * 1e6, hangerSpacingM: opts.hangerSpacingM,
-    braced: opts.mastType === "braced", anchorUpliftMargin: opts.anchorUpliftMargin, fabricAllowancePct: opts.fabricAllowancePct, fabricSagRatio: opts.fabricSagRatio,
+    braced: opts.mastType === "braced", taperedMasts: opts.mastShape === "tapered", anchorUpliftMargin: opts.anchorUpliftMargin, fabricAllowancePct: opts.fabricAllowancePct, fabricSagRatio: opts.fabricSagRatio,
   };
   const converged = convergeSelfWeight<NetSizing>((g) => {
     const value = sizeCableNet(input, g);

@@ -48,6 +48,8 @@ export type NetSizingInput = {
   yieldPa: number;
   hangerSpacingM: number;
   braced: boolean;
+  /** Laced masts may narrow from mid-height to half their face at the ends (option mastShape). */
+  taperedMasts?: boolean;
   anchorUpliftMargin: number;
   fabricAllowancePct: number;
   fabricSagRatio: number;
@@ -218,7 +220,7 @@ function sizeMast(input: NetSizingInput, cableMastN: number): Omit<NetMemberGrou
   // A laced mast weighs at least its chords' N/f_y of steel a metre: where the tube is lighter than that, it wins.
   const lacedFloorKgPerM = (cableMastN / input.yieldPa) * STEEL_DENSITY_KG_PER_M3;
   const laced = tube && tube.choice.massKgPerM <= lacedFloorKgPerM ? null : selfWeighing(cableMastN, withWeight, (mastN) => {
-    const m = designLacedMast(input.catalogue.chs, mastN, effective, input.yieldPa, tube ? 1.5 * tube.choice.massKgPerM : Infinity);
+    const m = designLacedMast(input.catalogue.chs, mastN, effective, input.yieldPa, tube ? 1.5 * tube.choice.massKgPerM : Infinity, { tapered: input.taperedMasts === true });
     return m && { massKgPerM: m.massKgPerM, resistanceN: mastN / m.utilisation, governing: "laced built-up column, EN 1993-1-1 §6.4", designation: m.designation, fabricated: false };
   });
   const mast = tube && (!laced || tube.choice.massKgPerM <= laced.choice.massKgPerM) ? tube : laced;

@@ -50,6 +50,18 @@ describe("cableNet.design", () => {
     expect(masts(plain)).toBeGreaterThan(masts(d));
   });
 
+  it("masts wider at mid-height (option mastShape): never heavier than uniform ones, and named so where the taper wins", () => {
+    for (const [spanM, riseM] of [[60, 8], [160, 22]] as const) {
+      const brief = { ...DEFAULT_BRIEF, spanM, riseM };
+      const masts = (x: typeof d) => ({ massKg: x.takeoff.find((r) => r.element === "masts")!.massKg, section: x.members.find((m) => m.element === "masts")!.section });
+      const uniform = masts(design(brief, { ...cableNet.defaults, mastType: "plain" }));
+      const tapered = masts(design(brief, { ...cableNet.defaults, mastType: "plain", mastShape: "tapered" }));
+      expect(tapered.massKg).toBeLessThanOrEqual(uniform.massKg * (1 + 1e-9));
+      if (tapered.massKg < uniform.massKg) expect(tapered.section).toMatch(/at mid-height, [\d.]+ m at the ends/);
+      else expect(tapered.section).toBe(uniform.section);
+    }
+  });
+
   it("flags spans outside 60–400 m", () => {
     const small = design({ ...DEFAULT_BRIEF, spanM: 40, riseM: 6 });
     expect(small.outsideValidRange).toBe(true);
