@@ -365,9 +365,29 @@ export function searchProportions(
     return candidate;
   };
   const ev = evaluator((i) => candidateAt(i).value);
-  const index = searchIndex(dims, options, ev);
+  const index = lastFormWhenNoneWorks(dims, searchIndex(dims, options, ev), candidates);
   const chosen = candidateAt(index);
   return { chosen, choice: choiceOf(model, dims, { chosen, index, candidates: [...candidates.values()], evaluations: ev.count() }, { pinned, rise, objective }) };
+}
+
+/**
+ * When no candidate works (every one infeasible), the one reported is of the last form tried in
+ * declaration order — forms run from the simplest to the most capable (fewer hoops first, smooth
+ * before ribbed) — so its reason says what lies beyond every form of this scheme, not that a form
+ * which also failed should be chosen (a 300 m shell said "choose the ribbed form" while the ribbed
+ * form was infeasible too).
+ */
+function lastFormWhenNoneWorks(dims: readonly Dimension[], index: number[], candidates: ReadonlyMap<string, Candidate>): number[] {
+  if (dims.length === 0 || [...candidates.values()].some((c) => Number.isFinite(c.value))) return index;
+  const tried = [...candidates.keys()].map((key) => key.split(",").map(Number));
+  const formsOf = (i: readonly number[]) => dims.map((d, k) => (d.form ? (i[k] ?? 0) : 0));
+  const later = (a: readonly number[], b: readonly number[]) => {
+    const fa = formsOf(a);
+    const fb = formsOf(b);
+    const k = fa.findIndex((x, j) => x !== fb[j]);
+    return k >= 0 && (fa[k] ?? 0) > (fb[k] ?? 0);
+  };
+  return tried.reduce((best, i) => (later(i, best) ? i : best), index);
 }
 
 /** The free options reported for a candidate: those pinned, and those searched whose condition its options meet; and the rise when the scheme has one of its own. */

@@ -162,3 +162,22 @@ describe("proportion search", () => {
     expect(choice.proportions.hoops).toBe(2);
   });
 });
+
+describe("when no form works", () => {
+  it("reports the last form tried in declaration order, whose reason says what lies beyond the scheme (a 300 m shell said 'choose the ribbed form' while that failed too)", () => {
+    const form: OptionSpec = { key: "form", label: "form", kind: "select", unit: "", choices: [{ value: "smooth", label: "smooth" }, { value: "ribbed", label: "ribbed" }], source: "test", free: true };
+    const m = model([form, spec("depth", 0.05, 0.5, 0.05)], { form: "smooth", depth: 0.1 });
+    const { chosen, choice } = searchProportions(m, m.defaults, [], fixed, "carbon", (o) =>
+      infeasibleDesign("cable-dome", DEFAULT_BRIEF, o.form === "smooth" ? "choose the ribbed form" : "choose another scheme"), (d) => d.totalMassKg);
+    expect(chosen.design.reason).toBe("choose another scheme");
+    expect(choice.proportions.form).toBe("ribbed");
+    expect(Number.isFinite(choice.value)).toBe(false);
+  });
+
+  it("leaves the choice alone when some candidate works", () => {
+    const form: OptionSpec = { key: "form", label: "form", kind: "select", unit: "", choices: [{ value: "smooth", label: "smooth" }, { value: "ribbed", label: "ribbed" }], source: "test", free: true };
+    const m = model([form], { form: "smooth" });
+    const { chosen } = searchProportions(m, m.defaults, [], fixed, "mass", (o) => (o.form === "smooth" ? { ...feasible(), totalMassKg: 5 } : infeasibleDesign("cable-dome", DEFAULT_BRIEF, "fails")), (d) => d.totalMassKg);
+    expect(chosen.options.form).toBe("smooth");
+  });
+});
