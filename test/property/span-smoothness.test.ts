@@ -18,13 +18,14 @@ const LIMIT = 0.15;
  */
 // Measured at 11:40 on 3 Dec (smooth4: within 2 % of the least the proportions nearest their
 // reference are kept; the net's mast count scanned every 3rd value with its reference growing with
-// span): cable net holds (3 → 13 masts rising monotonically, largest jump 7.1 %); cable dome always
-// 1 hoop, 2 jumps of 15.9–16 % in mass ÷ air (100 m, 180 m: the ring height, on which carbon is flat
-// above about 0.09 × span, sits at the band's noisy lower edge); geodesic dome 9 jumps, largest 38 %
+// span): cable net holds (3 → 13 masts rising monotonically, largest jump 7.1 %); the cable dome
+// jumped 15.9–16 % in mass ÷ air (100 m, 180 m) while its ring-height reference (0.06) sat below the
+// flat part of its objective — with the reference at 0.11 × span (12:10, lead) it holds, largest jump
+// 12.2 % (0.10 would not: 15.1 % at 40→45 m; see its declaration); geodesic dome 9 jumps, largest 38 %
 // and timber dome 11, largest 25 % — both in mass ÷ air: the rise wanders between about 0.15 and 0.3 ×
 // span because the objective steps ±5 % from one mesh frequency to the next (a 2 % band does not
 // reach across it). Truss (4 %) and shell (smooth to 115 m, ribbed from 120 m; 13.5 %) hold.
-const KNOWN_FAILING: readonly SchemeId[] = ["cable-dome", "geodesic-dome", "timber-dome"];
+const KNOWN_FAILING: readonly SchemeId[] = ["geodesic-dome", "timber-dome"];
 
 /** Every neighbour-to-neighbour change over the limit, where both ends are feasible and in range and the regime is the same. */
 function jumps(points: readonly SpanPoint[]): { from: number; to: number; metric: string; change: number }[] {
