@@ -68,7 +68,7 @@ function nearestIndex(values: readonly OptionValue[], value: OptionValue): numbe
 function optionDimension(spec: OptionSpec, set: OptionValue, spanM: number | undefined): Dimension {
   if (spec.kind === "number") {
     const values = gridOf(Math.max(spec.min, spec.searchMin ?? spec.min), spec.max, spec.step, spec.integer === true);
-    const start = spec.referencePerSpanM !== undefined && spanM !== undefined ? spec.referencePerSpanM * spanM : set;
+    const start = spec.referencePerSpanM !== undefined && spanM !== undefined ? spec.referencePerSpanM * spanM : (spec.searchReference ?? set);
     return { key: spec.key, values, start: nearestIndex(values, start), form: spec.integer === true, ...(spec.freeWhen ? { when: spec.freeWhen } : {}) };
   }
   const values = spec.kind === "select" ? spec.choices.map((c) => c.value) : [false, true];

@@ -43,6 +43,12 @@ export type OptionSpec =
        * span); without it the reference is the set value.
        */
       referencePerSpanM?: number;
+      /**
+       * The search's reference for a free option where it is not the default: the default design
+       * keeps its value, while the search, within its band of equal merit, keeps the candidate nearest
+       * this one (the cable dome's ring height: flat objective above about 0.09 × span).
+       */
+      searchReference?: number;
       /** The least value the search tries, where values below it ask the scheme to choose (the cable dome's 0 hoops = automatic): the search stands in for that choice and reports the real value. */
       searchMin?: number;
     }

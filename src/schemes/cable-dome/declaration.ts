@@ -12,13 +12,16 @@ const declarations = {
   // default 0.6 gives the lightest roof with its ring at 160 m here; 0.4 more usable floor (common practice, no source)
   postHeightRatio: { kind: "number", label: "Diagonal rise per bay (post depth; feet kept above the clear height)", unit: "", min: 0.05, max: 1.0, step: 0.01, default: 0.6, free: true, source: "common practice, no source" },
   // the ring on a perimeter wall above the eaves lifts the whole truss; 0 keeps the brief's eaves
-  // 0.11: the search's reference (issue 12 item 5). Carbon is flat in the ring height above about
-  // 0.09 × span and the search keeps, within its 2 % band, the height nearest this value; with 0.06
-  // (below the flat part) the chosen height sat on the band's edge and mass ÷ air jumped 15.9 % at
-  // 175→180 m. Measured 40–400 m (default study): 0.09, 0.11 and 0.12 hold (largest jump 10.0, 12.2,
-  // 13.5 %), 0.10 jumps 15.1 % at 40→45 m; 0.11 is also the least carbon of these at 160 m. Common
-  // practice, no source. The wall or stand under the ring is an allowance, not sized by its height.
-  ringHeightRatio: { kind: "number", label: "Compression ring above the eaves / span", unit: "", min: 0, max: 0.15, step: 0.005, default: 0.11, free: true, source: "common practice, no source (the wall or stand under the ring is substructure, counted as an allowance)" },
+  // 0.06 (the default design): the ring high enough that the outer post foot keeps the clear height
+  // with a working outer diagonal (common practice, no source). The search's reference is 0.11
+  // (issue 12 item 5): carbon is flat in the ring height above about 0.09 × span and the search keeps,
+  // within its 2 % band, the height nearest its reference; with 0.06 (below the flat part) the chosen
+  // height sat on the band's edge and mass ÷ air jumped 15.9 % at 175→180 m. Measured 40–400 m
+  // (default study): references 0.09, 0.11 and 0.12 hold (largest jump 10.0, 12.2, 13.5 %), 0.10 jumps
+  // 15.1 % at 40→45 m; 0.11 is also the least carbon of these at 160 m. The default design keeps 0.06
+  // (at 0.11 without the search it jumps 15.7 % at 120→125 m). The wall or stand under the ring is
+  // an allowance, not sized by its height.
+  ringHeightRatio: { kind: "number", label: "Compression ring above the eaves / span", unit: "", min: 0, max: 0.15, step: 0.005, default: 0.06, searchReference: 0.11, free: true, source: "common practice, no source (the wall or stand under the ring is substructure, counted as an allowance)" },
   // steel: the lighter ring for the same buckling resistance at every span here
   ringMaterial: { kind: "select", label: "Compression ring", choices: [{ value: "concrete", label: "Reinforced concrete" }, { value: "steel", label: "Steel box" }], default: "steel", source: "design choice" },
   // the cables do restrain the ring; false gives the bare-ring 3EI/R³ (Timoshenko & Gere ch. 7)

@@ -20,6 +20,8 @@ export interface NumberOption {
   freeWhen?: { key: string; value: string | boolean };
   /** The search's reference for a free option, per metre of span (see OptionSpec). */
   referencePerSpanM?: number;
+  /** The search's reference where it is not the default (see OptionSpec). */
+  searchReference?: number;
   /** The least value the search tries (see OptionSpec). */
   searchMin?: number;
 }

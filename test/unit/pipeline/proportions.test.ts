@@ -181,3 +181,12 @@ describe("when no form works", () => {
     expect(chosen.options.form).toBe("smooth");
   });
 });
+
+describe("a search reference apart from the default", () => {
+  it("on a flat objective keeps the candidate nearest searchReference, not the default", () => {
+    const ring: OptionSpec = { ...spec("ring", 0, 0.15, 0.005), searchReference: 0.11 } as OptionSpec;
+    const m = model([ring], { ring: 0.06 });
+    const { choice } = searchProportions(m, m.defaults, [], fixed, "mass", () => ({ ...feasible(), totalMassKg: 7 }), (d) => d.totalMassKg);
+    expect(choice.proportions.ring).toBeCloseTo(0.11, 9);
+  });
+});
