@@ -114,7 +114,10 @@ reactiveCell(inputs, { id: "section", title: "Roof section" }, () =>
       brief: brief.value,
       title: "Roof section through the centre: roof surface, walls and usable floor",
       caption: caption.value,
-      height: 300,
+      // drawn at the brief column's own width (about 400 px), so its labels are read at their size,
+      // not shrunk to half as a 760 px drawing was; one height while the span changes
+      width: 400,
+      height: 240,
     }),
     "roof-section",
   ),
