@@ -137,6 +137,20 @@ export interface TaperedLacedForces {
   stations: LacedStation[];
 }
 
+/** Chord spacing at x of a member narrowing linearly from `midM` at mid-length to `endM` at each end, m. */
+export function taperedChordSpacingM(xM: number, lengthM: number, midM: number, endM: number): number {
+  return endM + (midM - endM) * (1 - Math.abs((2 * xM) / lengthM - 1));
+}
+
+/**
+ * N_cr of such a member per m² of one chord's area (I_eff(x) = 0.5·h0(x)²·chordsPerSide·A_ch, eq.
+ * 6.72 at each section; Euler's equation for a variable section): N_cr is proportional to A_ch, so a
+ * search over chords computes this once.
+ */
+export function taperedCriticalForcePerAreaN(lengthM: number, midM: number, endM: number, chordsPerSide: 1 | 2, modulusPa = STEEL_E_PA): number {
+  return variableColumnCriticalForceN(lengthM, (x) => modulusPa * 0.5 * taperedChordSpacingM(x, lengthM, midM, endM) ** 2 * chordsPerSide, 100);
+}
+
 /**
  * A laced member whose chord spacing grows linearly from `endChordSpacingM` at each end to
  * `chordSpacingM` at mid-height (a mast "larger at mid-height", issue 13 item 6). EN 1993-1-1 §6.4
@@ -155,9 +169,8 @@ export function taperedLacedColumnForces(input: LacedColumnInput & { endChordSpa
   const { lengthM: L, axialN: N, chordSpacingM: hMid, endChordSpacingM: hEnd, chordAreaM2, chordsPerSide, lacing } = input;
   if (!(hEnd > 0 && hEnd <= hMid)) throw new RangeError(`invalid endChordSpacingM: ${hEnd} (expected > 0 and at most chordSpacingM ${hMid})`);
   const E = input.modulusPa ?? STEEL_E_PA;
-  const sideArea = chordsPerSide * chordAreaM2;
-  const spacingAt = (x: number) => hEnd + (hMid - hEnd) * (1 - Math.abs((2 * x) / L - 1));
-  const ncr = input.criticalForceN ?? variableColumnCriticalForceN(L, (x) => E * 0.5 * spacingAt(x) ** 2 * sideArea, 100);
+  const spacingAt = (x: number) => taperedChordSpacingM(x, L, hMid, hEnd);
+  const ncr = input.criticalForceN ?? taperedCriticalForcePerAreaN(L, hMid, hEnd, chordsPerSide, E) * chordAreaM2;
   const sv = Math.min(lacingShearStiffnessN({ chordSpacingM: hEnd, lacing, modulusPa: E }), lacingShearStiffnessN({ chordSpacingM: hMid, lacing, modulusPa: E }));
   const denominator = 1 - N / ncr - N / sv;
   const moment = denominator > 0 ? (N * (L / 500) + (input.firstOrderMomentNm ?? 0)) / denominator : Infinity;

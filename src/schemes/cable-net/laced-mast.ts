@@ -7,9 +7,7 @@
  */
 import type { ChsSection } from "../../catalogue/types";
 import { chsResistance } from "../../catalogue/pick-chs";
-import { lacedColumnForces, taperedLacedColumnForces, type LacedColumnForces } from "../../mechanics/built-up-column";
-import { variableColumnCriticalForceN } from "../../mechanics/variable-column";
-import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
+import { lacedColumnForces, taperedCriticalForcePerAreaN, taperedLacedColumnForces, type LacedColumnForces } from "../../mechanics/built-up-column";
 
 /** Longest mast segment shipped by road, m (common practice, no source). */
 export const MAST_SEGMENT_MAX_M = 12;
@@ -94,9 +92,8 @@ function lacedMastAt(sections: readonly ChsSection[], axialN: number, lengthM: n
   const panels = Math.max(1, Math.ceil(lengthM / (2 * faceM)));
   const panelM = lengthM / panels;
   const leastChordN = axialN / 4 + (axialN * lengthM) / 500 / (2 * faceM);
-  // N_cr of the tapered member per m² of chord (four chords, two a side: I_eff = h0(x)²·A_ch)
-  const spacingAt = (x: number) => endFaceM + (faceM - endFaceM) * (1 - Math.abs((2 * x) / lengthM - 1));
-  const criticalPerAreaN = endFaceM < faceM ? variableColumnCriticalForceN(lengthM, (x) => STEEL_E_PA * spacingAt(x) ** 2, 100) : NaN;
+  // N_cr of the tapered member per m² of chord (four chords, two a side)
+  const criticalPerAreaN = endFaceM < faceM ? taperedCriticalForcePerAreaN(lengthM, faceM, endFaceM, 2) : NaN;
   for (const chord of sections) {
     if (4 * chord.massKgPerM >= belowKgPerM) return null;
     if (chord.areaM2 * yieldPa < leastChordN) continue;
