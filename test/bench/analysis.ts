@@ -118,7 +118,7 @@ const NET_ROUNDS = 10;
   const { cableNetLayout } = await import("../../src/schemes/cable-net/geometry");
   const { cableNetModel, PRESTRESS_STRAIN } = await import("../../src/analysis/models/cable-net-model");
   const { netNodeLoads, NET_HOOP_PRESTRESS_SHARE } = await import("../../src/schemes/cable-net/analysis");
-  const { planCombinations } = await import("../../src/schemes/kit");
+  const { planCombinations, unboundedCombinations } = await import("../../src/schemes/kit");
   const { designBasis } = await import("../../src/loads");
   const { solveCableModel } = await import("../../src/analysis/cable-solver");
   const { DEFAULT_BRIEF } = await import("../../src/brief");
@@ -139,7 +139,9 @@ const NET_ROUNDS = 10;
     permanentPa: (selfWeightKPa + brief.servicesKPa) * 1000, eaN: { outer: ea, inner: ea, hoop: ea / 2, ring: 10 * ea },
   });
   const basis = designBasis(brief);
-  const combinations = planCombinations(brief, basis);
+  const every = planCombinations(brief, basis);
+  // as the scheme checks them: the lighter uniform combinations are bounded by the heaviest (kit unboundedCombinations)
+  const combinations = unboundedCombinations(every, selfWeightKPa);
   const free = net.model.nodes.length - net.model.supports.length;
   console.log(`160 m cable net (scheme model, ${layout.masts} masts × ${2 * layout.cablesPerSide} radial cables, ${layout.hoopRadiiM.length} circumferential): ${net.model.nodes.length} nodes, ${net.model.members.length} members, ${3 * free} dofs; radial prestress ${(prestressN / 1000).toFixed(0)} kN (self-weight of the design smeared)`);
   const times: number[] = [];
@@ -160,6 +162,6 @@ const NET_ROUNDS = 10;
     cpu.push(cpuMs() - c1);
   }
   lines.forEach((l) => console.log(l));
-  console.log(`  every combination (${combinations.length}): median ${median(times).toFixed(0)} ms wall, ${median(cpu).toFixed(0)} ms CPU (n=${NET_ROUNDS}; the first round ${cpu[0]!.toFixed(0)} ms CPU; budget 100 ms)`);
+  console.log(`  every combination (${combinations.length} analysed of ${every.length}; left out as bounded: ${every.filter((c) => !combinations.includes(c)).map((c) => c.name).join(", ")}): median ${median(times).toFixed(0)} ms wall, ${median(cpu).toFixed(0)} ms CPU (n=${NET_ROUNDS}; the first round ${cpu[0]!.toFixed(0)} ms CPU; budget 100 ms)`);
   console.log(`  full design with the 3D analysis (closed form, prestress search on the governing combinations, every combination at the end): ${designCpu.toFixed(0)} ms CPU; ${d.status}; governing ${d.governingLoadCase}`);
 }

@@ -1,5 +1,5 @@
 import type { Brief } from "../../brief";
-import { analysedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
+import { analysedCombinations, unboundedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
 import { cableNetModel, type CableNetModel, type NetMemberFamily } from "../../analysis/models/cable-net-model";
 import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
@@ -50,6 +50,8 @@ export interface NetAnalysis {
   crownM: number;
   model: CableNetModel;
   summary: DesignAnalysis;
+  /** Uniform combinations left out of the last check as bounded by the heaviest uniform one (kit unboundedCombinations). */
+  screened: string[];
 }
 
 /** Circumferential prestress ÷ radial (common practice for anticlastic nets of similar spacing, no source). */
@@ -139,10 +141,12 @@ export function analyseNet(input: NetAnalysisInput): NetAnalysis {
     if (mid.pass) hi = mid;
     else lo = mid;
   }
-  // the search ran the governing few; the prestress found must hold under every combination
-  let all = run(hi.alpha, input.combinations);
-  for (let k = 0; k < VERIFY_RAISES && hi.pass && !all.pass && all.alpha < input.maxPrestressN; k++) all = run(Math.min(input.maxPrestressN, 1.25 * all.alpha), input.combinations);
-  return summarise(input, hi.pass ? all : hi);
+  // the search ran the governing few; the prestress found must hold under every combination (less the uniform ones the heaviest uniform one bounds)
+  const checked = unboundedCombinations(input.combinations, input.selfWeightKPa);
+  let all = run(hi.alpha, checked);
+  for (let k = 0; k < VERIFY_RAISES && hi.pass && !all.pass && all.alpha < input.maxPrestressN; k++) all = run(Math.min(input.maxPrestressN, 1.25 * all.alpha), checked);
+  const screened = hi.pass ? input.combinations.filter((c) => !checked.includes(c)).map((c) => c.name) : [];
+  return { ...summarise(input, hi.pass ? all : hi), screened };
 }
 
 function envelopeOf(net: CableNetModel, solved: Round["solved"], hoops: number): NetForceEnvelope {
@@ -190,7 +194,7 @@ function supportsOf(net: CableNetModel, solved: Round["solved"]) {
   return { mastForceN: mastN, backstayHorizontalN: horizontal, mastCase, anchorUpliftN: uplift, outwardPull };
 }
 
-function summarise(input: NetAnalysisInput, last: Round): NetAnalysis {
+function summarise(input: NetAnalysisInput, last: Round): Omit<NetAnalysis, "screened"> {
   const { net, solved, alpha } = last;
   const notConverged = solved.find(({ s }) => !s.converged);
   const slack = solved.find(({ s }) => s.slack.some(Boolean));

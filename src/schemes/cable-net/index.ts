@@ -116,6 +116,7 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
     ...(analysis ? [] : ["uplift is resisted by an idealised valley-cable family sharing load equally with the radial cables (equal sag and stiffness assumed)"]),
     "anchors are a substructure allowance, not designed: dead weight for the uplift × margin only (sliding and the mast foundations are not designed)",
   ];
+  if (analysis && analysis.screened.length > 0) warnings.push(`not analysed, bounded by the heaviest uniform combination (a lighter uniform map is that one scaled down): ${analysis.screened.join(", ")}`);
   if (analysis?.outwardPull) warnings.push("the net pulls some mast heads outwards under some combination: the backstay there would have to be a stay to the inside (its force is taken the same)");
   if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);
   if (layout.mastRadiusM + layout.backstayRunM < layout.cap.baseRadiusM) warnings.push("backstay anchors fall inside the plan: raise the mast ring ratio or check the floor layout");

@@ -17,4 +17,4 @@ export { ANALYSIS_OPTION, FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS,
 export { CABLE_ROOF_DEFLECTION_RATIO, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
 export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction, heaviestByUniformEquivalent } from "./load-combinations";
 export { capFloor } from "./cap-floor";
-export { analysedCombinations, planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";
+export { analysedCombinations, unboundedCombinations, planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";
