@@ -24,6 +24,9 @@ export default defineConfig({
           testTimeout: 60_000,
           hookTimeout: 60_000,
           fileParallelism: false,
+          // Every results page designs in workers, so a result follows an edit after the designs run
+          // (a second or two on a loaded 2-core machine, not the next frame): polls wait for them.
+          expect: { poll: { timeout: 20_000 } },
         },
       },
     ],

@@ -24,7 +24,8 @@ import {
   trackCarbonEdits,
   gapNotice,
   missingFactorRows,
-  studySignals,
+  workerStudySignals,
+  designStateMarks,
   type Binding,
 } from "../src/notebook";
 import { setIn } from "../src/study";
@@ -56,7 +57,12 @@ const { store, main } = startPage({
 
 const factors = computed(() => store.study.value.carbon.factors);
 const settings = computed(() => store.study.value.carbon.settings);
-const { results } = studySignals(store);
+// Designs run in workers (issue 11: this page carries no design code); the results move together,
+// all designed and assessed with the same tables, which `assessedCarbon` names.
+const designed = workerStudySignals(store);
+const results = computed(() => designed.results.value ?? []);
+const assessedCarbon = computed(() => designed.resultsTables.value.carbon);
+const DESIGNING = "Designing the schemes…";
 /** The enabled schemes' designs (for the gap notices and the import check), from the shared per-scheme signals. */
 const designs = computed(() => results.value.map(({ id, label, design }) => ({ id, label, design })));
 
@@ -241,9 +247,10 @@ function bandLines(results: readonly SchemeCarbonResult[], s: CarbonSettings): s
 }
 
 reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, () => {
+  if (designed.results.value === null) return DESIGNING;
   const results = carbonBySchemes.value;
   if (results.length === 0) return "No scheme is registered or enabled yet, so there is no take-off to assess.";
-  const s = settings.value;
+  const s = assessedCarbon.value.settings;
   const table = tableElement(
     ["Scheme", "Mass (t)", "A1–A3 (tCO2e)", "A4", "A5", "C1–C4", `Counted (tCO2e)`, "kgCO2e/m² usable floor", "kgCO2e/m² plan", "Module D (tCO2e, apart)", "Biogenic stored (tCO2, apart)"],
     results.map((r) => {
@@ -257,7 +264,7 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
       numeric: [false, true, true, true, true, true, true, true, true, true, true],
     },
   );
-  const gaps = gapNotice(tableGaps(designs.value, { factors: factors.value }), "carbon-gaps");
+  const gaps = gapNotice(tableGaps(designs.value, { factors: assessedCarbon.value.factors }), "carbon-gaps");
   const notes = document.createElement("div");
   notes.className = "warnings";
   const lines: string[] = bandLines(results, s);
@@ -274,7 +281,7 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
 });
 
 // ── The last edit, before → after ────────────────────────────────────────────────────────────
-const lastEdit = trackCarbonEdits(computed(() => store.study.value.carbon), computed(() => carbonBySchemes.value.map((r) => ({ id: r.id, label: r.label, carbon: r.carbon }))));
+const lastEdit = trackCarbonEdits(computed(() => (designed.results.value === null ? null : { carbon: assessedCarbon.value, schemes: carbonBySchemes.value.map((r) => ({ id: r.id, label: r.label, carbon: r.carbon })) })));
 reactiveCell(main, { id: "last-edit", title: "What the last edit did" }, () => {
   const edit = lastEdit.value;
   if (!edit) return "Edit a factor or a setting: each scheme's carbon before and after the edit is shown here.";
@@ -319,7 +326,7 @@ staticCell(main, { id: "chart-controls", title: "Charts" }, selectControl(metric
 
 function chartInput(by: "module" | "material") {
   const schemes: SchemeCarbon[] = carbonBySchemes.value.flatMap((r) => (r.carbon ? [{ id: r.id, label: r.label, carbon: r.carbon }] : []));
-  const s = settings.value;
+  const s = assessedCarbon.value.settings;
   const targetNote = s.targetKgCO2ePerM2 !== null && !targetApplies(metric.value, s.areaBasis) ? ` · target (${s.areaBasis.replace("-", " ")} basis) not drawn on this measure` : "";
   const bandNote = (s.benchmarks ?? []).length > 0 ? " · shaded: benchmark bands of this basis" : "";
   return {
@@ -335,6 +342,7 @@ function chartInput(by: "module" | "material") {
 }
 
 reactiveCell(main, { id: "chart-module" }, () => {
+  if (designed.results.value === null) return DESIGNING;
   const input = chartInput("module");
   if (input.schemes.length === 0) return "No scheme has a carbon result to chart.";
   return chartFigure(carbonChartOptions(input), "carbon-by-module");
@@ -357,6 +365,9 @@ reactiveCell(main, { id: "chart-apart" }, () => {
     "carbon-apart",
   );
 });
+
+// While newer designs are on their way the results say so (after the cells exist).
+designStateMarks(store, designed, ["carbon-table", "last-edit", "carbon-elements", "chart-module", "chart-material", "chart-element", "chart-apart"]);
 
 staticCell(
   main,

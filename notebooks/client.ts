@@ -5,7 +5,7 @@
 import "../src/notebook/style.css";
 import css from "../src/notebook/style.css?inline";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, studySignals, tableElement, keyValues, downloadText, clientExportHtml, studyDetailItems, answerParts, optionCards, recommendationBlock, glossary, CAUTION, fmt } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, workerStudySignals, designStateMarks, tableElement, keyValues, downloadText, clientExportHtml, studyDetailItems, answerParts, optionCards, recommendationBlock, glossary, CAUTION, fmt, computed, effect } from "../src/notebook";
 import { chartCaption, massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart } from "../src/charts";
 import { comparisonTable, comparisonRows } from "../src/comparison";
 import { assumptionsRecord, readStoredStudy, STORAGE_KEY, type Study } from "../src/study";
@@ -17,7 +17,10 @@ const { store, main } = startPage({
   readOnly: true,
   intro: "The roof options of the working study — the one the other pages show — for the client: the answer, the project lead's recommendation and the options side by side on the first page; the engineering figures in the appendix. Opening a study file or a link shows that study here instead, without changing the working study.",
 });
-const { results } = studySignals(store);
+// Designs run in workers (issue 11: this page carries no design code).
+const designed = workerStudySignals(store);
+const results = computed(() => designed.results.value ?? []);
+const DESIGNING = "Designing the options…";
 
 /** Where the shown study came from, in words for the reader. */
 function originText(origin: string): string {
@@ -112,6 +115,7 @@ reactiveCell(main, { id: "meta", title: "Study", className: "summary-part" }, ()
 });
 
 reactiveCell(main, { id: "summary", title: "At a glance", className: "summary-part" }, () => {
+  if (designed.results.value === null) return DESIGNING;
   const list = results.value;
   if (list.length === 0) return "No scheme is switched on in this study.";
   return summary(list, store.study.value);
@@ -127,6 +131,7 @@ appendix.append(appendixTitle);
 main.append(appendix);
 
 reactiveCell(appendix, { id: "headline", title: "Headline comparison" }, () => {
+  if (designed.results.value === null) return DESIGNING;
   const list = results.value;
   if (list.length === 0) return "No scheme is switched on in this study.";
   const t = headlineTable(list, store.study.value);
@@ -195,4 +200,12 @@ printButton.addEventListener("click", () => window.print());
 const tools = document.createElement("div");
 tools.className = "study-tools";
 tools.append(exportButton, printButton);
+// Nothing is exported or printed half designed: both wait for the options of the study shown.
+effect(() => {
+  const waiting = designed.busy.value || designed.results.value === null;
+  exportButton.disabled = waiting;
+  printButton.disabled = waiting;
+  exportButton.title = printButton.title = waiting ? "Waiting for the options to be designed" : "";
+});
 staticCell(main, { id: "export", title: "Take it away" }, tools);
+designStateMarks(store, designed, ["summary", "headline", "charts"]);

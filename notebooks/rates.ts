@@ -19,7 +19,8 @@ import {
   tableEditor,
   gapNotice,
   missingRateRows,
-  studySignals,
+  workerStudySignals,
+  designStateMarks,
   type Binding,
   type EditorColumn,
 } from "../src/notebook";
@@ -36,7 +37,12 @@ const { store, main } = startPage({
 
 const rates = computed(() => store.study.value.cost.rates);
 const onCosts = computed(() => store.study.value.cost.onCosts);
-const { results } = studySignals(store);
+// Designs run in workers (issue 11: this page carries no design code); the results move together,
+// all designed and assessed with the same tables, which `assessedCost` names.
+const designed = workerStudySignals(store);
+const results = computed(() => designed.results.value ?? []);
+const assessedCost = computed(() => designed.resultsTables.value.cost);
+const DESIGNING = "Designing the schemes…";
 /** The enabled schemes' designs (for the gap notices and the import check), from the shared per-scheme signals. */
 const designs = computed(() => results.value.map(({ id, label, design }) => ({ id, label, design })));
 
@@ -211,9 +217,10 @@ staticCell(
 const money = (x: number) => fmt.int(x);
 
 reactiveCell(main, { id: "cost-table", title: "Cost per scheme" }, () => {
+  if (designed.results.value === null) return DESIGNING;
   const results = costBySchemes.value;
   if (results.length === 0) return "No scheme is registered or enabled yet, so there is no take-off to price.";
-  const o = onCosts.value;
+  const o = assessedCost.value.onCosts;
   const table = tableElement(
     ["Scheme", `Works (${o.currency})`, "Prelims", "OH&P", "Fees", "Risk", "Inflation", `Total (${o.currency})`, `Low–high (${o.currency})`, `${o.currency}/m² usable floor`, `${o.currency}/m² plan`],
     results.map((r) => {
@@ -234,7 +241,7 @@ reactiveCell(main, { id: "cost-table", title: "Cost per scheme" }, () => {
       numeric: [false, true, true, true, true, true, true, true, true, true, true],
     },
   );
-  const gaps = gapNotice(tableGaps(designs.value, { rates: rates.value }), "cost-gaps");
+  const gaps = gapNotice(tableGaps(designs.value, { rates: assessedCost.value.rates }), "cost-gaps");
   if (!gaps) return table;
   const wrap = document.createElement("div");
   wrap.append(gaps, table);
@@ -265,8 +272,9 @@ staticCell(main, { id: "cost-chart-controls", title: "Chart" }, toggleControl(pe
 
 reactiveCell(main, { id: "cost-chart" }, () => {
   const schemes: SchemeCost[] = costBySchemes.value.flatMap((r) => (r.cost ? [{ id: r.id, label: r.label, cost: r.cost }] : []));
+  if (designed.results.value === null) return DESIGNING;
   if (schemes.length === 0) return "No scheme has a cost to chart.";
-  const o = onCosts.value;
+  const o = assessedCost.value.onCosts;
   return chartFigure(
     costChartOptions({
       schemes,
@@ -277,6 +285,9 @@ reactiveCell(main, { id: "cost-chart" }, () => {
     perM2.value ? "cost-per-m2" : "cost-total",
   );
 });
+
+// While newer designs are on their way the results say so (after the cells exist).
+designStateMarks(store, designed, ["cost-table", "cost-elements", "cost-chart"]);
 
 staticCell(
   main,

@@ -5,7 +5,7 @@
 // are marked out of date as soon as an input changes.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, numberControl, controlGroup, signal, computed, effect, fmt, tableElement, studySignals, inputUsedBy, type Binding } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, numberControl, controlGroup, signal, computed, effect, fmt, tableElement, type Binding } from "../src/notebook";
 import { riskRangeChart, riskLowestChart, riskTornadoChart, riskRankChart, chartCaption } from "../src/charts";
 import { checkRiskInputs, RISK_LIMITS, RISK_METRICS, RISK_METRIC_LABELS, type RiskResult, type Tornado, type RiskMetric } from "../src/risk";
 import type { RiskWorkerApi } from "../src/risk/risk-worker";
@@ -251,13 +251,7 @@ resultsCells.push(reactiveCell(main, { id: "risk-pairwise", title: "Head to head
   return wrap;
 }).element);
 
-const { schemes: schemeSignals } = studySignals(store);
 const sensitivityScheme = signal<SchemeId | "">("");
-/** The inputs a scheme's result depends on (its options, the factor and rate rows of its take-off, and the shared inputs). */
-function inputsUsed(study: Study, scheme: SchemeId): Set<string> {
-  const takeoff = schemeSignals.find((s) => s.model.id === scheme)?.design.value.takeoff ?? [];
-  return new Set(study.risk.inputs.filter((i) => inputUsedBy(i, scheme, takeoff)).map((i) => i.id));
-}
 
 function schemePicker(r: Run, ids: readonly SchemeId[], chosen: SchemeId): HTMLElement {
   const label = document.createElement("label");
@@ -281,7 +275,7 @@ resultsCells.push(reactiveCell(main, { id: "risk-sensitivity", title: "Which inp
   const wrap = document.createElement("div");
   wrap.append(schemePicker(r, ids, chosen));
   const name = schemeLabel(r.result, chosen);
-  const only = inputsUsed(r.study, chosen);
+  const only = new Set(r.result.usedInputs[chosen] ?? []);
   const caption = (extra: string) => chartCaption(r.study, `${extra}; only the ${only.size} inputs the result of the ${name} depends on are listed`);
   for (const metric of ["carbonKgCO2ePerM2Floor", "costPerM2Floor"] as const) {
     const tornado = r.tornado.find((t) => t.scheme === chosen && t.metric === metric);

@@ -235,15 +235,17 @@ export function describeCarbonEdit(before: Study["carbon"], after: Study["carbon
 }
 
 /**
- * Follows the study's carbon tables: at every change, keeps what each scheme's counted carbon was
- * just before and is just after (kgCO2e/m² of usable floor and tCO2e). Changes elsewhere in the
- * study (the brief) only move the baseline.
+ * Follows the carbon tables the shown results were assessed with: when results arrive for another
+ * table, keeps what each scheme's counted carbon was just before and is just after (kgCO2e/m² of
+ * usable floor and tCO2e). Results for the same tables (a brief change) only move the baseline; null
+ * (results being designed) is skipped, so an edit is compared with the results it produced.
  */
-export function trackCarbonEdits(carbon: ReadonlySignal<Study["carbon"]>, schemes: ReadonlySignal<readonly CarbonOfScheme[]>): ReadonlySignal<LastEdit | null> {
+export function trackCarbonEdits(assessed: ReadonlySignal<{ carbon: Study["carbon"]; schemes: readonly CarbonOfScheme[] } | null>): ReadonlySignal<LastEdit | null> {
   const last = signal<LastEdit | null>(null);
   let previous: { carbon: Study["carbon"]; schemes: readonly CarbonOfScheme[] } | null = null;
   effect(() => {
-    const now = { carbon: carbon.value, schemes: schemes.value };
+    const now = assessed.value;
+    if (now === null) return;
     if (previous && previous.carbon !== now.carbon) {
       const before = new Map(previous.schemes.map((s) => [s.id, s.carbon]));
       last.value = {

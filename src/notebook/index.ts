@@ -16,13 +16,13 @@ export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSumm
 export { answerParts, inSentence, metricText, type AnswerPart } from "./answer";
 export { sortableTable, type SortColumn, type SortableOptions } from "./sortable-table";
 export { resultsTable, resultColumns } from "./results-table";
-export { studySignals, type SchemeSignals, type StudySignals } from "./scheme-signals";
-export { workerStudySignals, type AsyncSchemeSignals, type AsyncStudySignals } from "./worker-scheme-signals";
+export { workerStudySignals, type AsyncSchemeSignals, type AsyncStudySignals, type Designer } from "./worker-scheme-signals";
+export { designStateMarks } from "./design-state";
 export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";
 export { tableEditor, type EditorColumn } from "./table-editor";
 export { gapNotice, missingFactorRows, missingRateRows } from "./gap-notice";
-export { riskInputsEditor, ensureRiskStyle, inputUsedBy, inputKind, SHAPE_WORDS, INPUT_KINDS, type PendingEntries } from "./risk-inputs-editor";
+export { riskInputsEditor, ensureRiskStyle, inputKind, SHAPE_WORDS, INPUT_KINDS, type PendingEntries } from "./risk-inputs-editor";
 export { studyDetailsEditor, studyDetailItems, describeChangedAt } from "./study-details";
 export { factorColumns, provenanceCard, groupEditTools, benchmarkEditor, trackCarbonEdits, describeCarbonEdit, type LastEdit } from "./carbon-editors";
 export { mountEditableTable, unmountEditableTable, type TableColumn, type EditableTableProps, type EditOutcome } from "./editable-table";

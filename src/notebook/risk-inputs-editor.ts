@@ -153,18 +153,6 @@ function filterBar(kind: ReturnType<typeof signal<string>>, words: ReturnType<ty
 /** Entries typed in the table and refused (not applied), by input id and field: Run is refused while there is one. */
 export type PendingEntries = Signal<ReadonlyMap<string, string>>;
 
-/**
- * Which inputs a scheme's result can depend on: its own options, the factor and rate rows its
- * take-off names, and every input of the brief and of the carbon and cost settings.
- */
-export function inputUsedBy(input: UncertainInput, schemeId: string, takeoff: readonly { material: string | null; costItem: string }[]): boolean {
-  const [head, second, third] = input.path;
-  if (head === "schemes") return second === schemeId;
-  const selector = typeof third === "object" && third !== null ? (third as Record<string, string>) : null;
-  if (head === "carbon" && second === "factors" && selector?.material) return takeoff.some((r) => r.material === selector.material);
-  if (head === "cost" && second === "rates" && selector?.item) return takeoff.some((r) => r.costItem === selector.item);
-  return true;
-}
 
 /** The editable inputs table with its filter, reset button and summary line; refused entries are kept in `pending`. */
 export function riskInputsEditor(store: StudyStore, pending: PendingEntries = signal(new Map())): HTMLElement {

@@ -1,5 +1,5 @@
-// Per-scheme designs computed in workers for the compare page (issue 14, "a slider that keeps
-// up"): the page keeps drawing while designs run; each scheme's design is asked for only when its
+// Per-scheme designs computed in workers for every page that shows results (issue 14, "a slider
+// that keeps up"; issue 11: no page carries the design code): the page keeps drawing while designs run; each scheme's design is asked for only when its
 // brief, its setting or the study's tables change, and only the newest answer is kept. Each design
 // is the scheme at its best proportions by the pipeline's one rule (designAtBestProportions, in
 // src/comparison/design-job.ts), so this page agrees with the span study and the command line.
@@ -9,7 +9,7 @@
 import { signal, computed, effect, batch, type ReadonlySignal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { SCHEME_DECLARATIONS, type SchemeDeclaration } from "../schemes/declarations";
-import type { Design } from "../schemes/types";
+import type { Design, SchemeId } from "../schemes/types";
 import { schemeResult, type SchemeResult, type SearchedDesign, type SchemeSetting, type StudyInputs } from "../pipeline";
 import { workerApi, latestOnly } from "../kernel/worker-call";
 import type { DesignWorkerApi } from "../comparison/design-worker";
@@ -32,24 +32,34 @@ export interface AsyncStudySignals {
   results: ReadonlySignal<SchemeResult[] | null>;
   /** The span the results are for, m (it moves with them, not with the slider). */
   resultsSpanM: ReadonlySignal<number>;
+  /** The carbon and cost tables the results were designed and assessed with (they move with them, not with an edit). */
+  resultsTables: ReadonlySignal<Tables>;
   /** A design is being computed for a newer brief or option. */
   busy: ReadonlySignal<boolean>;
   /** A worker failed (the message), or "". */
   failure: ReadonlySignal<string>;
 }
 
+type Tables = Pick<StudyInputs, "carbon" | "cost">;
 /** What one design is asked for; its identity marks the answer as current. */
-type Request = { brief: Brief; setting: SchemeSetting | undefined; tables: Pick<StudyInputs, "carbon" | "cost"> };
+type Request = { brief: Brief; setting: SchemeSetting | undefined; tables: Tables };
 
-function workers(): ReturnType<typeof workerApi<DesignWorkerApi>>[] {
+/** Designs one scheme at its best proportions (in a worker on the pages; in-process in tests). */
+export type Designer = (schemeId: SchemeId, brief: Brief, setting: SchemeSetting | undefined, tables: Tables) => Promise<SearchedDesign>;
+
+/** A designer per worker: one or two module workers running src/comparison/design-worker.ts. */
+function workerDesigners(): Designer[] {
   const cores = typeof navigator !== "undefined" && navigator.hardwareConcurrency ? navigator.hardwareConcurrency : 2;
-  return Array.from({ length: Math.max(1, Math.min(2, cores)) }, () => workerApi<DesignWorkerApi>(new Worker(new URL("../comparison/design-worker.ts", import.meta.url), { type: "module" })));
+  return Array.from({ length: Math.max(1, Math.min(2, cores)) }, () => {
+    const { api } = workerApi<DesignWorkerApi>(new Worker(new URL("../comparison/design-worker.ts", import.meta.url), { type: "module" }));
+    return (schemeId, brief, setting, tables) => api.design(schemeId, brief, setting, tables);
+  });
 }
 
 /** The parts of the study every scheme's request reads, each a new object only when that part changed. */
 interface Shared {
   brief: ReadonlySignal<Brief>;
-  tables: ReadonlySignal<Pick<StudyInputs, "carbon" | "cost">>;
+  tables: ReadonlySignal<Tables>;
 }
 
 function sharedSignals(store: StudyStore): Shared {
@@ -59,7 +69,7 @@ function sharedSignals(store: StudyStore): Shared {
 }
 
 /** One scheme's signals: asks its worker for the newest request, keeps the newest answer, assesses it with the study's tables. */
-function schemeSignals(model: SchemeDeclaration, store: StudyStore, shared: Shared, worker: ReturnType<typeof workerApi<DesignWorkerApi>> | undefined, failure: { value: string }): AsyncSchemeSignals {
+function schemeSignals(model: SchemeDeclaration, store: StudyStore, shared: Shared, designer: Designer, failure: { value: string }): AsyncSchemeSignals {
   const setting = computed(() => store.study.value.schemes[model.id]);
   const enabled = computed(() => setting.value?.enabled !== false);
   // A new request only when the brief, this scheme's setting or a table changed (the store keeps untouched parts' identity).
@@ -67,7 +77,7 @@ function schemeSignals(model: SchemeDeclaration, store: StudyStore, shared: Shar
   const { tables } = shared;
   const answer = signal<{ searched: SearchedDesign; request: Request } | null>(null);
   const ask = latestOnly<Request, SearchedDesign>(
-    (r) => (worker ? worker.api.design(model.id, r.brief, r.setting, r.tables) : Promise.reject(new Error("no design worker"))),
+    (r) => designer(model.id, r.brief, r.setting, r.tables),
     (searched, request) => {
       answer.value = { searched, request };
     },
@@ -91,25 +101,31 @@ function schemeSignals(model: SchemeDeclaration, store: StudyStore, shared: Shar
   return { model, enabled, design, result, current };
 }
 
-/** The compare page's per-scheme designs from workers, assessed on the page with the study's tables. */
-export function workerStudySignals(store: StudyStore): AsyncStudySignals {
-  const pool = workers();
+/**
+ * A page's per-scheme designs from workers, assessed on the page with the study's tables. `designers`
+ * replaces the workers (tests design in-process); scheme i asks designer i mod n.
+ */
+export function workerStudySignals(store: StudyStore, designers: readonly Designer[] = workerDesigners()): AsyncStudySignals {
+  const none: Designer = () => Promise.reject(new Error("no design worker"));
   const failure = signal("");
   const shared = sharedSignals(store);
-  const schemes = SCHEME_DECLARATIONS.map((model, index) => schemeSignals(model, store, shared, pool[index % pool.length], failure));
+  const schemes = SCHEME_DECLARATIONS.map((model, index) => schemeSignals(model, store, shared, designers[index % designers.length] ?? none, failure));
   const busy = computed(() => schemes.some((s) => s.enabled.value && !s.current.value));
   const results = signal<SchemeResult[] | null>(null);
   const resultsSpanM = signal(shared.brief.peek().spanM);
+  const resultsTables = signal(shared.tables.peek());
   effect(() => {
     const on = schemes.filter((s) => s.enabled.value);
     if (on.some((s) => !s.current.value)) return;
     const list = on.map((s) => s.result.value).filter((r): r is SchemeResult => r !== null);
     // Every enabled design is current, so the brief now is the one they were designed for.
     const spanM = shared.brief.value.spanM;
+    const tables = shared.tables.value;
     batch(() => {
       results.value = list;
       resultsSpanM.value = spanM;
+      resultsTables.value = tables;
     });
   });
-  return { schemes, results, resultsSpanM, busy, failure };
+  return { schemes, results, resultsSpanM, resultsTables, busy, failure };
 }

@@ -38,3 +38,4 @@ export {
   type RankCorrelation,
 } from "./risk-result";
 export { riskTornado, type Tornado, type TornadoBar } from "./tornado";
+export { inputUsedBy } from "./input-used-by";

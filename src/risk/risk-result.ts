@@ -64,6 +64,8 @@ export type RiskResult = {
   /** Inputs that change designs and inputs that change only the assessment, by id. */
   designInputs: string[];
   assessmentInputs: string[];
+  /** The inputs each scheme's result can depend on at the study's values (its options, its take-off's factor and rate rows, the shared inputs), by id. */
+  usedInputs: Partial<Record<SchemeId, string[]>>;
   estimateClass: EstimateClass;
   /** What the ranges do and do not cover. */
   coverage: string;

@@ -15,6 +15,7 @@ import { summariseMetric, lowestProbabilities, pairwiseProbabilities, rankCorrel
 import { ranks } from "./rank-correlation";
 import { RISK_LIMITS, type PathStep } from "./risk-settings";
 import type { ResolvedInput } from "./resolve-inputs";
+import { inputUsedBy } from "./input-used-by";
 import { RISK_COVERAGE, RISK_METRICS, type RankCorrelation, type RiskMetric, type RiskResult, type SchemeRisk } from "./risk-result";
 
 export type RiskProgress = { phase: "designs" | "samples"; done: number; total: number };
@@ -116,6 +117,7 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
     rankCorrelations: rankCorrelationsOf(plan, drawn),
     designInputs: inputs.filter((_, k) => isDesign[k]).map((i) => i.id),
     assessmentInputs: inputs.filter((_, k) => !isDesign[k]).map((i) => i.id),
+    usedInputs: Object.fromEntries(models.map((m) => [m.id, study.risk.inputs.filter((i) => inputUsedBy(i, m.id, evaluated.get(m.id)?.design.takeoff ?? [])).map((i) => i.id)])),
     estimateClass: CONCEPT_SCREENING,
     coverage: RISK_COVERAGE,
     currency: study.cost.onCosts.currency,

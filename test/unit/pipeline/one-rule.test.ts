@@ -7,7 +7,9 @@ import { defaultStudy, setIn } from "../../../src/study";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { designAtBestProportions, designWithChoice, evaluateStudy } from "../../../src/pipeline";
 import { createStudyStore } from "../../../src/notebook/study-store";
-import { studySignals } from "../../../src/notebook/scheme-signals";
+import { workerStudySignals, type Designer } from "../../../src/notebook/worker-scheme-signals";
+import { designJob } from "../../../src/comparison/design-job";
+import { effect } from "@preact/signals-core";
 import { SCHEMES, infeasibleDesign } from "../../../src/schemes";
 import { DEFAULT_BRIEF } from "../../../src/brief";
 import type { Design, OptionSpec, SchemeModel, SchemeOptions } from "../../../src/schemes/types";
@@ -17,11 +19,19 @@ const ownRule = setIn(defaultStudy(), ["brief", "riseRule"], "own");
 const evaluated = evaluateStudy(ownRule, catalogue).results;
 
 describe("one rule: each scheme at its best proportions, everywhere", () => {
-  it("a page's reactive results are evaluateStudy's figures, proportions and rise", () => {
+  it("a page's reactive results are evaluateStudy's figures, proportions and rise", async () => {
     localStorage.clear();
     const store = createStudyStore({ initial: demo, persist: false });
     store.replace(ownRule);
-    const page = studySignals(store).results.value;
+    // the pages' signals with the design worker's own job run in-process
+    const inProcess: Designer = async (id, brief, setting, tables) => designJob(id, brief, setting, tables, catalogue);
+    const { results } = workerStudySignals(store, [inProcess]);
+    const page = await new Promise<NonNullable<typeof results.value>>((resolve) => {
+      const stop = effect(() => {
+        const list = results.value;
+        if (list !== null) queueMicrotask(() => (stop(), resolve(list)));
+      });
+    });
     const pipeline = evaluated;
     expect(page.map((r) => r.id)).toEqual(pipeline.map((r) => r.id));
     pipeline.forEach((r, i) => {

@@ -49,6 +49,21 @@ describe("runRisk options", () => {
     expect(() => runRisk(demo(), catalogue, { samples: 200, designSamples: 2, onProgress: () => (calls += 1), shouldStop: () => calls >= 3 })).toThrow(RiskCancelledError);
     expect(calls).toBe(3);
   });
+  it("the result lists the inputs each scheme depends on, from its own take-off at the study's values", () => {
+    const study = demo();
+    const result = runRisk(study, catalogue, { samples: 10, seed: 1, designSamples: 2 });
+    const truss = new Set(result.usedInputs["truss-roof"]);
+    const timber = new Set(result.usedInputs["timber-dome"]);
+    // shared inputs for every scheme; a scheme's own options only for it
+    for (const used of [truss, timber]) expect(used.has("snow")).toBe(true);
+    expect(truss.has("truss-roof.webAllowancePct")).toBe(true);
+    expect(timber.has("truss-roof.webAllowancePct")).toBe(false);
+    // factor rows: only the materials the take-off names (the truss carries no PTFE-glass fabric)
+    const trussMaterials = new Set(evaluateStudy(study, catalogue).results.find((r) => r.id === "truss-roof")?.design.takeoff.map((row) => row.material));
+    expect(trussMaterials.has("fabric-ptfe-glass")).toBe(false);
+    expect(truss.has("carbon-fabric-ptfe-glass")).toBe(false);
+    for (const material of trussMaterials) if (material && study.risk.inputs.some((i) => i.id === `carbon-${material}`)) expect(truss.has(`carbon-${material}`)).toBe(true);
+  });
   it("bad samples or seed throw naming them", () => {
     expect(() => runRisk(demo(), catalogue, { samples: 3 })).toThrow(/invalid samples: 3 \(expected a whole number from 10 to 50000\)/);
     expect(() => runRisk(demo(), catalogue, { samples: 20, seed: -2 })).toThrow(/invalid seed: -2/);
