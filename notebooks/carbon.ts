@@ -26,6 +26,7 @@ import {
   missingFactorRows,
   workerStudySignals,
   designStateMarks,
+  resultsStudy,
   type Binding,
 } from "../src/notebook";
 import { setIn } from "../src/study";
@@ -61,6 +62,8 @@ const settings = computed(() => store.study.value.carbon.settings);
 // all designed and assessed with the same tables, which `assessedCarbon` names.
 const designed = workerStudySignals(store);
 const results = computed(() => designed.results.value ?? []);
+/** The study as the shown results were designed (its brief and tables), for captions. */
+const shown = resultsStudy(store, designed);
 const assessedCarbon = computed(() => designed.resultsTables.value.carbon);
 const DESIGNING = "Designing the schemes…";
 /** The enabled schemes' designs (for the gap notices and the import check), from the shared per-scheme signals. */
@@ -337,7 +340,7 @@ function chartInput(by: "module" | "material") {
     targetBasis: s.areaBasis,
     bands: s.benchmarks ?? [],
     title: by === "module" ? "Embodied carbon of each scheme by life-cycle module" : "Embodied carbon of each scheme by material",
-    caption: chartCaption(store.study.value, `counted ${schemes[0]?.carbon.modulesCounted.join(" + ") ?? "A1–A3"}, ${s.quantityAllowancePct} % quantity allowance${targetNote}${bandNote}`),
+    caption: chartCaption(shown.value, `counted ${schemes[0]?.carbon.modulesCounted.join(" + ") ?? "A1–A3"}, ${s.quantityAllowancePct} % quantity allowance${targetNote}${bandNote}`),
   };
 }
 
@@ -361,7 +364,7 @@ reactiveCell(main, { id: "chart-apart" }, () => {
   const input = chartInput("module");
   if (input.schemes.length === 0) return null;
   return chartFigure(
-    carbonApartChartOptions({ ...input, title: "Reported apart, never netted: module D and biogenic CO2 stored", caption: chartCaption(store.study.value, "module D (kgCO2e) below 0 is a benefit beyond the life cycle (recycling, reuse); biogenic CO2 (kg CO2, EN 16449) is held in the timber while it lasts") }),
+    carbonApartChartOptions({ ...input, title: "Reported apart, never netted: module D and biogenic CO2 stored", caption: chartCaption(shown.value, "module D (kgCO2e) below 0 is a benefit beyond the life cycle (recycling, reuse); biogenic CO2 (kg CO2, EN 16449) is held in the timber while it lasts") }),
     "carbon-apart",
   );
 });

@@ -5,7 +5,7 @@
 import "../src/notebook/style.css";
 import css from "../src/notebook/style.css?inline";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, workerStudySignals, designStateMarks, tableElement, keyValues, downloadText, clientExportHtml, studyDetailItems, answerParts, optionCards, recommendationBlock, glossary, CAUTION, fmt, computed, effect } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, workerStudySignals, designStateMarks, resultsStudy, tableElement, keyValues, downloadText, clientExportHtml, studyDetailItems, answerParts, optionCards, recommendationBlock, glossary, CAUTION, fmt, computed, effect } from "../src/notebook";
 import { chartCaption, massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart } from "../src/charts";
 import { comparisonTable, comparisonRows } from "../src/comparison";
 import { assumptionsRecord, readStoredStudy, STORAGE_KEY, type Study } from "../src/study";
@@ -20,6 +20,8 @@ const { store, main } = startPage({
 // Designs run in workers (issue 11: this page carries no design code).
 const designed = workerStudySignals(store);
 const results = computed(() => designed.results.value ?? []);
+/** The study as the shown options were designed (its brief and tables), for every figure, caption and the export. */
+const shown = resultsStudy(store, designed);
 const DESIGNING = "Designing the options…";
 
 /** Where the shown study came from, in words for the reader. */
@@ -105,12 +107,12 @@ reactiveCell(main, { id: "meta", title: "Study", className: "summary-part" }, ()
   const title = document.createElement("p");
   title.className = "study-heading";
   title.textContent = s.meta.title;
-  const shown = document.createElement("p");
-  shown.id = "client-origin";
-  shown.className = "intro";
-  shown.textContent = `Shown here: ${originText(store.origin.value)}.`;
+  const origin = document.createElement("p");
+  origin.id = "client-origin";
+  origin.className = "intro";
+  origin.textContent = `Shown here: ${originText(store.origin.value)}.`;
   const wrap = document.createElement("div");
-  wrap.append(title, keyValues(studyDetailItems(s)), shown);
+  wrap.append(title, keyValues(studyDetailItems(s)), origin);
   return wrap;
 });
 
@@ -118,7 +120,7 @@ reactiveCell(main, { id: "summary", title: "At a glance", className: "summary-pa
   if (designed.results.value === null) return DESIGNING;
   const list = results.value;
   if (list.length === 0) return "No scheme is switched on in this study.";
-  return summary(list, store.study.value);
+  return summary(list, shown.value);
 });
 
 const appendix = document.createElement("section");
@@ -134,7 +136,7 @@ reactiveCell(appendix, { id: "headline", title: "Headline comparison" }, () => {
   if (designed.results.value === null) return DESIGNING;
   const list = results.value;
   if (list.length === 0) return "No scheme is switched on in this study.";
-  const t = headlineTable(list, store.study.value);
+  const t = headlineTable(list, shown.value);
   const table = tableElement(t.header, t.rows, { caption: t.caption, numeric: t.header.map((_, i) => i > 0 && i < t.header.length - 3) });
   headlineShape(table, t.header.length, t.rows.length);
   const wrap = document.createElement("div");
@@ -155,13 +157,13 @@ reactiveCell(appendix, { id: "charts", title: "Option charts" }, () => {
   if (list.length === 0) return null;
   const grid = document.createElement("div");
   grid.className = "grid charts";
-  grid.append(...figures(list, store.study.value));
+  grid.append(...figures(list, shown.value));
   return grid;
 });
 
 reactiveCell(appendix, { id: "assumptions", title: "Assumptions" }, () => {
   const wrap = document.createElement("div");
-  for (const section of assumptionSections(store.study.value)) {
+  for (const section of assumptionSections(shown.value)) {
     const h = document.createElement("h3");
     h.textContent = section.heading;
     wrap.append(h, keyValues(section.items));
@@ -170,7 +172,7 @@ reactiveCell(appendix, { id: "assumptions", title: "Assumptions" }, () => {
 });
 
 function exportForClient(): void {
-  const study = store.study.value;
+  const study = shown.value;
   const list = results.value;
   const html = clientExportHtml({
     title: study.meta.title,

@@ -21,6 +21,7 @@ import {
   missingRateRows,
   workerStudySignals,
   designStateMarks,
+  resultsStudy,
   type Binding,
   type EditorColumn,
 } from "../src/notebook";
@@ -41,6 +42,8 @@ const onCosts = computed(() => store.study.value.cost.onCosts);
 // all designed and assessed with the same tables, which `assessedCost` names.
 const designed = workerStudySignals(store);
 const results = computed(() => designed.results.value ?? []);
+/** The study as the shown results were designed (its brief and tables), for captions. */
+const shown = resultsStudy(store, designed);
 const assessedCost = computed(() => designed.resultsTables.value.cost);
 const DESIGNING = "Designing the schemes…";
 /** The enabled schemes' designs (for the gap notices and the import check), from the shared per-scheme signals. */
@@ -280,7 +283,7 @@ reactiveCell(main, { id: "cost-chart" }, () => {
       schemes,
       perM2Floor: perM2.value,
       title: perM2.value ? "Cost of each scheme per m² of usable floor, by element" : "Cost of each scheme, by element",
-      caption: chartCaption(store.study.value, `${CONCEPT_SCREENING.label}; price base ${o.priceBase}, ${o.currency}, location factor ${o.locationFactor}; whiskers: low and high rates`),
+      caption: chartCaption(shown.value, `${CONCEPT_SCREENING.label}; price base ${o.priceBase}, ${o.currency}, location factor ${o.locationFactor}; whiskers: low and high rates`),
     }),
     perM2.value ? "cost-per-m2" : "cost-total",
   );

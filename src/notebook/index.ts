@@ -17,7 +17,7 @@ export { answerParts, inSentence, metricText, type AnswerPart } from "./answer";
 export { sortableTable, type SortColumn, type SortableOptions } from "./sortable-table";
 export { resultsTable, resultColumns } from "./results-table";
 export { workerStudySignals, type AsyncSchemeSignals, type AsyncStudySignals, type Designer } from "./worker-scheme-signals";
-export { designStateMarks } from "./design-state";
+export { designStateMarks, resultsStudy } from "./design-state";
 export { spanStudyRunner, type SpanStudyState } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";
 export { tableEditor, type EditorColumn } from "./table-editor";

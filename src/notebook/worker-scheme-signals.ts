@@ -32,6 +32,8 @@ export interface AsyncStudySignals {
   results: ReadonlySignal<SchemeResult[] | null>;
   /** The span the results are for, m (it moves with them, not with the slider). */
   resultsSpanM: ReadonlySignal<number>;
+  /** The brief the results were designed for (it moves with them, not with an edit). */
+  resultsBrief: ReadonlySignal<Brief>;
   /** The carbon and cost tables the results were designed and assessed with (they move with them, not with an edit). */
   resultsTables: ReadonlySignal<Tables>;
   /** A design is being computed for a newer brief or option. */
@@ -114,18 +116,20 @@ export function workerStudySignals(store: StudyStore, designers: readonly Design
   const results = signal<SchemeResult[] | null>(null);
   const resultsSpanM = signal(shared.brief.peek().spanM);
   const resultsTables = signal(shared.tables.peek());
+  const resultsBrief = signal(shared.brief.peek());
   effect(() => {
     const on = schemes.filter((s) => s.enabled.value);
     if (on.some((s) => !s.current.value)) return;
     const list = on.map((s) => s.result.value).filter((r): r is SchemeResult => r !== null);
     // Every enabled design is current, so the brief now is the one they were designed for.
-    const spanM = shared.brief.value.spanM;
+    const brief = shared.brief.value;
     const tables = shared.tables.value;
     batch(() => {
       results.value = list;
-      resultsSpanM.value = spanM;
+      resultsSpanM.value = brief.spanM;
+      resultsBrief.value = brief;
       resultsTables.value = tables;
     });
   });
-  return { schemes, results, resultsSpanM, resultsTables, busy, failure };
+  return { schemes, results, resultsSpanM, resultsBrief, resultsTables, busy, failure };
 }
