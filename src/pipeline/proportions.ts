@@ -1,5 +1,6 @@
 import type { Brief, SearchObjective } from "../brief";
 import type { Design, OptionSpec, OptionValue, SchemeModel, SchemeOptions } from "../schemes/types";
+import { RISE_TREND_SAMPLES, trendChoice } from "./rise-trend";
 
 /** What the proportion search minimises, per m² of usable floor: total mass, counted embodied carbon, or cost. */
 export type Objective = SearchObjective;
@@ -48,6 +49,8 @@ interface Dimension {
   stride?: number;
   /** Searched (and reported) only while another option has this value. */
   when?: { key: string; value: OptionValue };
+  /** The rise of a scheme that asks for it chosen on the trend of the objective (see ./rise-trend.ts). */
+  trend?: boolean;
 }
 
 /** Values of a number option on its step grid within [min, max]. */
@@ -80,7 +83,7 @@ export function dimensionsOf(model: SchemeModel, options: SchemeOptions, pinned:
   const dims = model.options.filter((spec) => spec.free === true && !pinned.includes(spec.key)).map((spec) => optionDimension(spec, options[spec.key] ?? model.defaults[spec.key] ?? 0, spanM));
   if (rise.kind === "search") {
     const values = gridOf(rise.minM, rise.maxM, rise.stepM, false);
-    dims.push({ key: RISE_KEY, values, start: nearestIndex(values, rise.startM), form: false });
+    dims.push({ key: RISE_KEY, values, start: nearestIndex(values, rise.startM), form: false, ...(model.riseSpanRatio?.byTrend ? { trend: true } : {}) });
   }
   return coarsenForms(dims);
 }
@@ -275,6 +278,8 @@ function scanForms(dims: readonly Dimension[], forms: readonly number[][], ev: E
 function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Evaluator): number[] {
   const moving = (at: readonly number[]) => dims.flatMap((d, k) => (!d.form && activeAt(dims, d, at, options) ? [k] : []));
   const start = dims.map((d) => d.start);
+  const r = dims.findIndex((d) => d.trend === true);
+  if (r >= 0 && !dims.some((d) => d.form)) return trendIndex(dims, r, (at) => moving(at).filter((k) => k !== r), ev);
   ev.allow(WARM_BUDGET);
   const warm = descend(dims, moving(start), start, ev);
   if (!dims.some((d) => d.form)) return nearestStart(dims, warm, ev, moving);
@@ -294,6 +299,32 @@ function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Eva
   return nearestStart(dims, simplest?.at ?? warm, ev, moving);
 }
 
+/** Designs of the trend search: the descent over the other proportions at the reference rise, and again at the chosen rise. */
+const TREND_WARM_BUDGET = 12;
+const TREND_FINISH_BUDGET = 10;
+
+/**
+ * The rise on the trend (a scheme without forms whose declaration asks for it): the other proportions
+ * searched at the reference rise; the rise sampled at RISE_TREND_SAMPLES equal steps across its
+ * range with those proportions; of the rises whose fitted objective is within PROPORTION_TIE_FRACTION
+ * of the fitted least, the nearest the reference; the other proportions searched again there and
+ * pulled toward their references within the band (the rise stays).
+ */
+function trendIndex(dims: readonly Dimension[], r: number, others: (at: readonly number[]) => number[], ev: Evaluator): number[] {
+  const start = dims.map((d) => d.start);
+  ev.allow(TREND_WARM_BUDGET);
+  const warm = descend(dims, others(start), start, ev);
+  const n = dims[r]!.values.length;
+  const indices = [...new Set(Array.from({ length: RISE_TREND_SAMPLES }, (_, i) => Math.round((i * (n - 1)) / (RISE_TREND_SAMPLES - 1))))];
+  const at = (i: number) => warm.map((x, k) => (k === r ? i : x));
+  ev.allow(indices.length);
+  const samples = indices.map((index) => ({ index, value: ev.value(at(index)) }));
+  const chosen = at(trendChoice(dims[r]!.values as number[], samples, start[r]!, PROPORTION_TIE_FRACTION));
+  ev.allow(TREND_FINISH_BUDGET);
+  const end = descend(dims, others(chosen), chosen, ev);
+  return nearestStart(dims, end, ev, others, [r]);
+}
+
 /**
  * Of the assessed candidates of the same form as `best` whose objective is within
  * PROPORTION_TIE_FRACTION of its own, the one nearest the set values (the sum over the proportions
@@ -301,12 +332,12 @@ function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Eva
  * toward the set values along the straight line to them, by bisection (PULL_STEPS designs), as far
  * as the objective stays within the band.
  */
-function nearestStart(dims: readonly Dimension[], best: readonly number[], ev: Evaluator, active: (at: readonly number[]) => readonly number[]): number[] {
+function nearestStart(dims: readonly Dimension[], best: readonly number[], ev: Evaluator, active: (at: readonly number[]) => readonly number[], held: readonly number[] = []): number[] {
   const bestValue = ev.value(best);
   if (!Number.isFinite(bestValue)) return [...best];
   const limit = bestValue + PROPORTION_TIE_FRACTION * Math.abs(bestValue);
   const distance = (at: readonly number[]) => dims.reduce((sum, d, k) => (d.form ? sum : sum + Math.abs((at[k] ?? 0) - d.start) / Math.max(1, d.values.length - 1)), 0);
-  const sameForm = (at: readonly number[]) => dims.every((d, k) => !d.form || at[k] === best[k]);
+  const sameForm = (at: readonly number[]) => dims.every((d, k) => (!d.form && !held.includes(k)) || at[k] === best[k]);
   const near = ev.assessed().filter((c) => sameForm(c.at) && c.value <= limit);
   near.sort((a, b) => distance(a.at) - distance(b.at) || a.value - b.value);
   let at = near[0]?.at ?? [...best];

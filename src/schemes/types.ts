@@ -195,7 +195,13 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
   /** Span range in which the method is valid, m. */
   validSpanM: { min: number; max: number };
   /** The rise ÷ span the scheme may take when each scheme chooses its own rise. */
-  riseSpanRatio?: { min: number; max: number; preferred: number };
+  riseSpanRatio?: {
+    min: number;
+    max: number;
+    preferred: number;
+    /** The search chooses the rise on the trend of the objective across the range, not among single samples (a lattice: each rise gives another mesh and other sections). */
+    byTrend?: boolean;
+  };
   options: readonly OptionSpec[];
   defaults: O;
   /**
