@@ -2,7 +2,7 @@ import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, MemberGroup } from "../kit";
-import { briefCombinations, capEnvelope, capFloor, check, convergeSelfWeight, UNIFORM_EQUIVALENT_WARNING, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, SchemeError } from "../kit";
+import { briefCombinations, capEnvelope, capFloor, check, convergeSelfWeight, drawingWithLazyPlan, UNIFORM_EQUIVALENT_WARNING, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, SchemeError } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
 import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
@@ -168,7 +168,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
     iterations: converged.iterations,
     floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: { section, plan: latticePlan(mesh) },
+    drawing: drawingWithLazyPlan(section, () => latticePlan(mesh)),
   };
 }
 

@@ -4,6 +4,7 @@ import type { TakeoffGroup, TakeoffRow } from "../../takeoff/takeoff-row";
 import { usableFloorLines, usableFloorM2 } from "./usable-floor";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { enclosedAirMassKg } from "../../mechanics/air";
+import { withSection } from "./lazy-drawing";
 
 export interface DesignParts {
   summary: SummaryItem[];
@@ -117,7 +118,7 @@ export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "l
     governing: governingCheck ? governingCheck.name : "",
     maxUtilisation: governingCheck ? governingCheck.utilisation : 0,
     // The section carries the usable floor exactly as counted (role "usable floor").
-    drawing: parts.floor ? { ...parts.drawing, section: [...parts.drawing.section, ...usableFloorLines(brief, parts.floor)] } : parts.drawing,
+    drawing: parts.floor ? withSection(parts.drawing, [...parts.drawing.section, ...usableFloorLines(brief, parts.floor)]) : parts.drawing,
     ...(parts.analysis ? { analysis: parts.analysis } : {}),
     ...(parts.regime ? { regime: parts.regime } : {}),
   };

@@ -11,7 +11,7 @@ import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-cree
 import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "../../mechanics/timber-charring";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { designBasis } from "../../loads/design-basis";
-import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineScheme, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
+import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
 import { latticeBands } from "../../mechanics/lattice-bands";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
@@ -150,16 +150,18 @@ function latticeMesh(cap: SphericalCap, frequency: number, failure: { warnings: 
   }
 }
 
-/** The timber dome on one mesh: self-weight iterated to convergence, then its parts; a SchemeError when it cannot be built. */
+/** The timber dome sized on one mesh (self-weight iterated to convergence), and its mass; its parts are drawn up only for the mesh kept. */
 interface MeshDesign {
-  parts: DesignParts;
   massKg: number;
   mesh: GeodesicCap;
+  frequency: number;
   result: TimberLatticeResult;
   inputs: TimberLatticeInputs;
+  iterations: number;
 }
 
-function designOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): MeshDesign {
+/** The lattice sized on the mesh of one frequency; a SchemeError when it cannot be built. */
+function sizeOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): MeshDesign {
   const mesh = latticeMesh(cap, frequency, { warnings, section: timberSection(brief, 0) });
   const inputs = latticeInputs(brief, opts, catalogue, cap, mesh);
   const converged = convergeSelfWeight<TimberLatticeResult>(
@@ -171,32 +173,72 @@ function designOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogu
     { section: timberSection(brief, 0) },
   );
   const r = converged.value;
-  const depthM = Math.max(0, ...r.bands.map((b) => b.section.depthM));
-  if (r.failure) throw new SchemeError(r.failure, { warnings, section: timberSection(brief, depthM) });
-  const { members, checks } = timberMembers(r, inputs.charDepthM);
-  const takeoff = timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3);
-  const parts: DesignParts = {
+  if (r.failure) throw new SchemeError(r.failure, { warnings, section: timberSection(brief, memberDepthM(r)) });
+  const massKg = timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3).reduce((sum, row) => sum + row.massKg, 0);
+  return { massKg, mesh, frequency, result: r, inputs, iterations: converged.iterations };
+}
+
+/** Meshes sized lately, per catalogue, by frequency, brief and the options the sizing reads. */
+const SIZED_CACHE_SIZE = 48;
+const sized = new WeakMap<Catalogue, Map<string, MeshDesign | SchemeError>>();
+
+/**
+ * sizeOnMesh, remembering the last few answers: the proportion search asks for neighbouring member
+ * lengths at one rise, and each designs the nominal frequency and its two neighbours, so most meshes
+ * come again (at 160 m, lengths 5, 5.5 and 6 m give frequencies 26, 24 and 22: five of their nine
+ * meshes are repeats). The member length is not in the key: it acts only through the frequency. Shared
+ * answers: read only.
+ */
+function sizeOnMeshCached(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): MeshDesign {
+  const { memberLengthM: _length, bucklingAnalysis: _analysis, ...sizing } = opts;
+  const key = JSON.stringify([frequency, brief, sizing]);
+  const cache = sized.get(catalogue) ?? new Map<string, MeshDesign | SchemeError>();
+  sized.set(catalogue, cache);
+  let answer = cache.get(key);
+  if (answer === undefined) {
+    try {
+      answer = sizeOnMesh(brief, opts, catalogue, cap, frequency, warnings);
+    } catch (e) {
+      if (!(e instanceof SchemeError)) throw e;
+      answer = e;
+    }
+    if (cache.size >= SIZED_CACHE_SIZE) cache.delete(cache.keys().next().value as string);
+    cache.set(key, answer);
+  }
+  if (answer instanceof SchemeError) throw answer;
+  return answer;
+}
+
+function memberDepthM(r: TimberLatticeResult): number {
+  return Math.max(0, ...r.bands.map((b) => b.section.depthM));
+}
+
+/** The parts of the design on the mesh kept: members, checks, take-off, summary and drawings. */
+function partsOf(brief: Brief, cap: SphericalCap, d: MeshDesign, warnings: string[]): DesignParts {
+  const r = d.result;
+  const depthM = memberDepthM(r);
+  const { members, checks } = timberMembers(r, d.inputs.charDepthM);
+  return {
     governingLoadCase: r.governingCase,
-    summary: timberSummary(r, mesh, frequency, cap),
+    summary: timberSummary(r, d.mesh, d.frequency, cap),
     members,
-    takeoff,
+    takeoff: timberTakeoff(r, cap.surfaceM2, d.inputs.glulam.densityMeanKgPerM3),
     checks,
     warnings,
-    iterations: converged.iterations,
+    iterations: d.iterations,
     floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: { section: timberSection(brief, depthM), plan: timberPlan(mesh) },
+    drawing: drawingWithLazyPlan(timberSection(brief, depthM), () => timberPlan(d.mesh)),
   };
-  return { parts, massKg: takeoff.reduce((sum, row) => sum + row.massKg, 0), mesh, result: r, inputs };
 }
 
 /** The chosen design with the 3D analysis of its net: Design.analysis and the 3D buckling check beside the continuum one. */
-function withNetAnalysis(brief: Brief, cap: SphericalCap, d: MeshDesign, knockDown: number): DesignParts {
+function withNetAnalysis(brief: Brief, cap: SphericalCap, d: MeshDesign, parts: DesignParts, knockDown: number): DesignParts {
   const tooLarge = frameTooLarge(d.mesh.nodes.length, "lengthen the target member");
-  if (tooLarge) return { ...d.parts, warnings: [...d.parts.warnings, tooLarge] };
+  if (tooLarge) return { ...parts, warnings: [...parts.warnings, tooLarge] };
   const selfWeightPlanKPa = timberSelfWeightKPa(d.result, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2);
   const net = analyseTimberNet({ brief, cap, mesh: d.mesh, bands: d.result.bands, selfWeightPlanKPa, creepModulusPa: d.inputs.creepModulusPa, knockDown, purlinSpacingM: d.inputs.purlinSpacingM });
-  return { ...d.parts, checks: [...d.parts.checks, ...net.checks], analysis: net.analysis };
+  return { ...parts, checks: [...parts.checks, ...net.checks], analysis: net.analysis };
 }
 
 /**
@@ -218,7 +260,7 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
   for (const frequency of [nominal, nominal - 1, nominal + 1]) {
     if (frequency < 1) continue;
     try {
-      const candidate = designOnMesh(brief, opts, catalogue, cap, frequency, warnings);
+      const candidate = sizeOnMeshCached(brief, opts, catalogue, cap, frequency, warnings);
       if (best === null || candidate.massKg < best.massKg) best = candidate;
     } catch (e) {
       if (!(e instanceof SchemeError)) throw e;
@@ -226,7 +268,8 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
     }
   }
   if (best === null) throw nominalFailure ?? new SchemeError("no mesh near the target member length can be built: change the member length", { warnings, section: timberSection(brief, 0) });
-  return opts.bucklingAnalysis ? withNetAnalysis(brief, cap, best, opts.knockDown) : best.parts;
+  const parts = partsOf(brief, cap, best, warnings);
+  return opts.bucklingAnalysis ? withNetAnalysis(brief, cap, best, parts, opts.knockDown) : parts;
 }
 
 export const timberDome = defineScheme(timberDomeDeclaration, design);
