@@ -5,7 +5,8 @@
  * to a central tension ring (radius r_c); circumferential cables at the given radii tie every radial
  * cable that crosses them (their nodes are where the radial cables cross those radii in plan). The
  * mast heads and the edge anchors are held (the masts, backstays and anchors take the reactions);
- * the central ring and every cable node are free.
+ * the central ring is free, or held at a given height by a tie-down (its nodes then held), and every
+ * cable node is free.
  *
  * Force densities: q = T/ℓ with ℓ the circumferential-cable spacing for the radial cables,
  * `hoopShare` × that for the circumferential cables, and for the central ring the q that balances
@@ -35,6 +36,8 @@ export interface CableNetModelInput {
   permanentPa: number;
   /** Axial stiffness EA of each family, N. */
   eaN: { outer: number; inner: number; hoop: number; ring: number };
+  /** Height (above the eaves) at which a tie-down holds the central ring's nodes, m; absent: the ring is free. */
+  centreHeldAtM?: number;
 }
 
 export type NetMemberFamily = "outer radial" | "inner radial" | "circumferential" | "central ring";
@@ -108,11 +111,14 @@ function topology(input: CableNetModelInput): Topology {
           t.tags.push({ family: side === "outer" ? "outer radial" : "inner radial", index: 0 });
           previous = k;
         }
-        const e = node(end[0], end[1], 0);
+        const e = node(end[0], end[1], side === "inner" ? (input.centreHeldAtM ?? 0) : 0);
         if (side === "outer") {
           t.anchors.push(e);
           t.fixed.push(e);
-        } else ringAt.push(e);
+        } else {
+          ringAt.push(e);
+          if (input.centreHeldAtM !== undefined) t.fixed.push(e);
+        }
         t.branches.push([previous, e]);
         t.tags.push({ family: side === "outer" ? "outer radial" : "inner radial", index: 0 });
       }

@@ -21,6 +21,8 @@ export interface NetAnalysisInput {
   /** Largest radial prestress the search may try: what the largest strand group carries, N. */
   maxPrestressN: number;
   eaN: { outer: number; inner: number; hoop: number; ring: number };
+  /** The central ring held by a tie-down at the roof's crown (option centre = held-down); else free. */
+  heldCentre?: boolean;
 }
 
 /** The largest analysed force of each family (each circumferential cable apart) and the combination giving it. */
@@ -41,6 +43,10 @@ export interface NetAnalysis {
   backstayHorizontalN: number;
   mastCase: string;
   anchorUpliftN: number;
+  /** Held centre: the largest net upward pull on the ring (the tie-down's force) and its combination; the least (negative: the tie-down would be pushed), N. */
+  ringUpliftN: number;
+  ringUpliftCase: string;
+  ringLeastUpliftN: number;
   /** Whether the net pulls a mast head outwards in some combination (the backstay would then be a forestay). */
   outwardPull: boolean;
   /** Length of one outer and one inner radial cable as found, m (the mean over the cables). */
@@ -103,11 +109,14 @@ export function analyseNet(input: NetAnalysisInput): NetAnalysis {
     const net = cableNetModel({
       masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
       centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM, prestressN: alpha, hoopShare: NET_HOOP_PRESTRESS_SHARE, permanentPa, eaN: input.eaN,
+      ...(input.heldCentre ? { centreHeldAtM: roofCrownM } : {}),
     });
     const s0 = net.model.members.map((m) => m.initialForceN ?? 0);
     const crownM = net.ringNodes.reduce((sum, k) => sum + (net.model.nodes[k] as readonly number[])[2]!, 0) / net.ringNodes.length;
-    let pass = crownM >= roofCrownM;
-    let estimate = crownM >= roofCrownM ? 0 : alpha * 1.5;
+    // a held ring is at the roof's crown by construction (its mean height may differ in the last bit)
+    const high = input.heldCentre === true || crownM >= roofCrownM;
+    let pass = high;
+    let estimate = high ? 0 : alpha * 1.5;
     const solved = combos.map((c) => ({ c, s: solveCableModel({ ...net.model, loads: netNodeLoads(input, net, c) }, { steps: 1, maxIterations: 30 }) }));
     for (const { s } of solved) {
       if (!s.converged) {
@@ -175,6 +184,7 @@ function supportsOf(net: CableNetModel, solved: Round["solved"]) {
   let mastCase = "";
   let uplift = 0;
   let outwardPull = false;
+  const ring = { most: 0, mostCase: "", least: Infinity };
   for (const { c, s } of solved) {
     const R = s.reactionsN;
     for (const h of net.mastHeads) {
@@ -190,8 +200,13 @@ function supportsOf(net: CableNetModel, solved: Round["solved"]) {
       horizontal = Math.max(horizontal, rh);
     }
     uplift = Math.max(uplift, net.anchors.reduce((sum, k) => sum + Math.max(0, -(R[3 * k + 2] as number)), 0));
+    if (net.model.supports.some((sp) => sp.node === net.ringNodes[0])) {
+      const pull = net.ringNodes.reduce((sum, k) => sum - (R[3 * k + 2] as number), 0);
+      if (pull > ring.most) [ring.most, ring.mostCase] = [pull, c.name];
+      ring.least = Math.min(ring.least, pull);
+    }
   }
-  return { mastForceN: mastN, backstayHorizontalN: horizontal, mastCase, anchorUpliftN: uplift, outwardPull };
+  return { mastForceN: mastN, backstayHorizontalN: horizontal, mastCase, anchorUpliftN: uplift, outwardPull, ringUpliftN: ring.most, ringUpliftCase: ring.mostCase, ringLeastUpliftN: Number.isFinite(ring.least) ? ring.least : 0 };
 }
 
 function summarise(input: NetAnalysisInput, last: Round): Omit<NetAnalysis, "screened"> {

@@ -26,6 +26,13 @@ const declarations = {
   mastShape: { kind: "select", label: "Laced mast shape", choices: [{ value: "uniform", label: "Uniform square" }, { value: "tapered", label: "Wider at mid-height (ends at half its face)" }], default: "uniform", source: "taper to half the face: common practice, no source" },
   // default ≈ 1/0.9: EN 1990 Table A1.2(A) (EQU) γ_G,inf = 0.9 on the stabilising weight
   anchorUpliftMargin: { kind: "number", label: "Anchor weight / uplift", unit: "", min: 1.0, max: 3.0, step: 0.05, default: 1.1, source: "EN 1990 Table A1.2(A): 1/0.9" },
+  /**
+   * The central ring free (held only by the cables), or held at the roof's crown by a tie-down to the
+   * floor (issue 13): the tie-down is a strand sized for the net's pull and its anchor a dead-weight
+   * allowance (substructure, not designed); it stands in the floor with a mast's clear zone. Not
+   * searched: the search screens by the closed form, whose ring is held down either way.
+   */
+  centre: { kind: "select", label: "Centre of the net", choices: [{ value: "free", label: "Free central ring" }, { value: "held-down", label: "Held down by a tie-down to the floor" }], default: "free", source: "tie-down anchor: dead weight × margin (substructure allowance, not designed)" },
   ...ANALYSIS_OPTION,
   ...TENSION_COMMON_OPTIONS,
 } as const;

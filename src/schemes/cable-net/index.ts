@@ -28,6 +28,15 @@ function checkSags(layout: CableNetLayout, section: ReturnType<typeof cableNetSe
   }
 }
 
+/** A held centre's tie-down and its anchor (substructure allowances); none with a free centre. */
+function tieDownRows(sized: NetSizing): TakeoffRow[] {
+  if (!sized.groups.some((g) => g.kind === "tie-down")) return [];
+  return [
+    { ...tonnesRow("central tie-down (strand for the net's pull; substructure allowance)", "steel-strand", "cable", massOfKinds(sized.groups, ["tie-down"])), group: "substructure" },
+    { element: "central tie-down anchor", material: "concrete-c30-37", costItem: "anchor", quantity: sized.tieDownConcreteM3, unit: "m3", massKg: sized.tieDownConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3, group: "substructure" },
+  ];
+}
+
 function netTakeoff(sized: NetSizing, fabric: Fabric): TakeoffRow[] {
   const mast = sized.groups.find((g) => g.kind === "mast");
   const cables = (element: string, kind: NetSizing["groups"][number]["kind"]) => tonnesRow(element, "steel-strand", "cable", massOfKinds(sized.groups, [kind]));
@@ -37,6 +46,7 @@ function netTakeoff(sized: NetSizing, fabric: Fabric): TakeoffRow[] {
     cables("circumferential cables", "circumferential"),
     cables("edge cables", "edge"),
     cables("backstays", "backstay"),
+    ...tieDownRows(sized),
     tonnesRow("masts", mast?.fabricated ? "steel-plate" : "steel-hot-finished-hollow", "steel-mast", massOfKinds(sized.groups, ["mast"])),
     { ...tonnesRow("central tension ring", "steel-plate", "steel-ring", massOfKinds(sized.groups, ["central ring"])), group: "structure" },
     { element: "fabric", material: fabric.material, costItem: fabricCostItem(fabric), quantity: sized.fabricAreaM2, unit: "m2", massKg: sized.fabricMassKg, group: "envelope" },
@@ -89,6 +99,7 @@ function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: nu
       seedPrestressN: (closed.prestressOuterNPerM * layout.outer.spanM ** 2) / (8 * layout.outer.sagM), residualPrestress: input.residualPrestress,
       displacementLimitM: input.brief.spanM * CABLE_ROOF_DEFLECTION_RATIO,
       maxPrestressN: MAX_PARALLEL_STRANDS * Math.max(...input.catalogue.strands.map((x) => strandResistanceN(x.minBreakingForceN, input.gammaR))),
+      heldCentre: input.heldCentre,
       eaN: { outer: stiffnessOf(closed, "outer radial cables"), inner: stiffnessOf(closed, "inner radial cables"), hoop: stiffnessOf(closed, "circumferential cable 1"), ring: stiffnessOf(closed, "central tension ring") },
     });
   } catch (error) {
@@ -101,11 +112,12 @@ function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: nu
   const sized = sizeNetFromAnalysis(input, closed, {
     outerN: e.outerN, innerN: e.innerN, hoopN: e.hoopN, ringN: e.ringN, caseOf: e.caseOf, outerLengthM: analysis.outerLengthM, innerLengthM: analysis.innerLengthM,
     mastForceN: analysis.mastForceN, mastCase: analysis.mastCase, backstayHorizontalN: analysis.backstayHorizontalN, anchorUpliftN: analysis.anchorUpliftN,
+    ringUpliftN: analysis.ringUpliftN, ringUpliftCase: analysis.ringUpliftCase,
   });
   return { sized, analysis };
 }
 
-function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnalysis | undefined): string[] {
+function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnalysis | undefined, held: boolean): string[] {
   const mast = sized.groups.find((g) => g.kind === "mast");
   const warnings = [
     analysis
@@ -116,6 +128,10 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
     ...(analysis ? [] : ["uplift is resisted by an idealised valley-cable family sharing load equally with the radial cables (equal sag and stiffness assumed)"]),
     "anchors are a substructure allowance, not designed: dead weight for the uplift × margin only (sliding and the mast foundations are not designed)",
   ];
+  const kN = (n: number) => `${(n / 1000).toFixed(0)} kN`;
+  if (held) warnings.push(`the central ring is held at the roof's crown by a tie-down to the floor (${kN(analysis?.ringUpliftN ?? sized.ringUpliftN)} pull); the tie-down stands in the floor with a clear zone of ${MAST_CLEAR_RADIUS_M} m radius and its anchor is a dead-weight allowance (substructure, not designed)`);
+  else if (!analysis && sized.ringUpliftN > 0) warnings.push(`the closed form's valley cables pull the free central ring up by ${kN(sized.ringUpliftN)}, which nothing balances: the closed form's net is in fact held down at its centre (choose a held-down centre to cost the tie-down, or the 3D analysis, which finds the free net's prestress)`);
+  if (analysis && analysis.ringLeastUpliftN < 0) warnings.push(`under some combination the net presses the held ring down by ${kN(-analysis.ringLeastUpliftN)}: the tie-down must also take compression there (a strut, or enough prestress)`);
   if (analysis && analysis.screened.length > 0) warnings.push(`not analysed, bounded by the heaviest uniform combination (a lighter uniform map is that one scaled down): ${analysis.screened.join(", ")}`);
   if (analysis?.outwardPull) warnings.push("the net pulls some mast heads outwards under some combination: the backstay there would have to be a stay to the inside (its force is taken the same)");
   if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);
@@ -131,6 +147,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
   const input = {
     brief, actions: roofActions(brief), combinations: planCombinations(brief), layout, catalogue, fabric,
     residualPrestress: opts.residualPrestress, gammaR: opts.gammaR, yieldPa: opts.steelYieldMPa * 1e6, hangerSpacingM: opts.hangerSpacingM,
+    heldCentre: opts.centre === "held-down",
     braced: opts.mastType === "braced", taperedMasts: opts.mastShape === "tapered", anchorUpliftMargin: opts.anchorUpliftMargin, fabricAllowancePct: opts.fabricAllowancePct, fabricSagRatio: opts.fabricSagRatio,
   };
   const converged = convergeSelfWeight<NetSizing>((g) => {
@@ -151,9 +168,9 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     members: sized.groups.map(memberOf),
     takeoff: netTakeoff(sized, fabric),
     checks,
-    warnings: netWarnings(layout, sized, analysis),
+    warnings: netWarnings(layout, sized, analysis, opts.centre === "held-down"),
     iterations: converged.iterations,
-    floor: netFloor(layout, brief.eavesHeightM),
+    floor: netFloor(layout, brief.eavesHeightM, opts.centre === "held-down"),
     regime: `${layout.masts} masts`,
     // the central ring's pull is the same in every combination of the closed form (ridge and valley share the load): the most utilised of the others names the case
     governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
@@ -169,10 +186,10 @@ export const MAST_CLEAR_RADIUS_M = 3;
 
 /**
  * The net over the floor: the fabric on the cap (hung from the radial cables, the lowest member
- * along a radius), and under it any backstay that lands inside the plan; the masts stand on the floor
- * with their clear zones.
+ * along a radius), and under it any backstay that lands inside the plan; the masts (and a held
+ * centre's tie-down) stand on the floor with their clear zones.
  */
-function netFloor(layout: CableNetLayout, eavesM: number): FloorEnvelope {
+function netFloor(layout: CableNetLayout, eavesM: number, held: boolean): FloorEnvelope {
   const a = layout.cap.baseRadiusM;
   const steps = 200;
   const soffit: [number, number][] = [];
@@ -183,7 +200,8 @@ function netFloor(layout: CableNetLayout, eavesM: number): FloorEnvelope {
     const backstay = t > 0 && t < 1 ? layout.mastLengthM * (1 - t) : Infinity;
     soffit.push([r, Math.min(roof, backstay)]);
   }
-  return { soffit, supports: [{ radiusM: layout.mastRadiusM, clearRadiusM: MAST_CLEAR_RADIUS_M, count: layout.masts }] };
+  const tieDown = held ? [{ radiusM: 0, clearRadiusM: MAST_CLEAR_RADIUS_M, count: 1 }] : [];
+  return { soffit, supports: [{ radiusM: layout.mastRadiusM, clearRadiusM: MAST_CLEAR_RADIUS_M, count: layout.masts }, ...tieDown] };
 }
 
 /** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against valley cables, masts stayed by backstays. */

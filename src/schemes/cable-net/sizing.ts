@@ -11,7 +11,7 @@ import { fabricCover, pickChs, pickStrandGroup, SizingError, steelTensionRing, u
 import { designLacedMast, MAST_FACE_MAX_M } from "./laced-mast";
 import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./geometry";
 
-export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring";
+export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring" | "tie-down";
 
 /** A member group of the net; a mast may be fabricated from plate (not a catalogue section). */
 /** A member group of the net; `eaN` its axial stiffness (cables and ring), N. */
@@ -29,6 +29,13 @@ export interface NetSizing {
   backstayForceN: number;
   anchorUpliftN: number;
   anchorConcreteM3: number;
+  /**
+   * Largest upward pull of the net on its central ring, N: what a tie-down takes when the centre is
+   * held down (option centre), or what a free ring leaves unbalanced in the closed form.
+   */
+  ringUpliftN: number;
+  /** The tie-down's ground anchor (dead weight for its pull × margin; 0 with a free centre), m³. */
+  tieDownConcreteM3: number;
   fabricAreaM2: number;
   fabricMassKg: number;
   fabricGravityNPerM: number;
@@ -53,7 +60,19 @@ export type NetSizingInput = {
   anchorUpliftMargin: number;
   fabricAllowancePct: number;
   fabricSagRatio: number;
+  /** The central ring held down by a tie-down to the floor (option centre = held-down). */
+  heldCentre?: boolean;
 };
+
+/** Floor to the central ring, m: the tie-down's length. */
+const tieDownLengthM = (input: NetSizingInput) => input.brief.eavesHeightM + input.layout.inner.endHeightM;
+
+/** The tie-down (a strand group to the floor) and its anchor's concrete for a pull, when the centre is held down. */
+function tieDown(input: NetSizingInput, pullN: number, caseName: string): { groups: NetMemberGroup[]; concreteM3: number } {
+  if (!input.heldCentre) return { groups: [], concreteM3: 0 };
+  const group = strandGroup(input, "tie-down", "central tie-down", 1, tieDownLengthM(input), Math.max(pullN, 1), caseName);
+  return { groups: [group], concreteM3: (Math.max(pullN, 0) * input.anchorUpliftMargin) / (PLAIN_CONCRETE_DENSITY_KG_PER_M3 * GRAVITY_M_PER_S2) };
+}
 
 /** Sag / span of circumferential and edge cables between radial cables (common practice, no source). */
 export const NET_SECONDARY_SAG_RATIO = 0.1;
@@ -120,8 +139,11 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: ringN, ...tensionRing(ringN, input.yieldPa, ringLength), caseName: names[radial.ringPull[1]] ?? "" });
   const anchorUpliftN = lines * radial.edgeUplift + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
   const anchorConcreteM3 = (anchorUpliftN * input.anchorUpliftMargin) / (PLAIN_CONCRETE_DENSITY_KG_PER_M3 * GRAVITY_M_PER_S2);
+  const ringUpliftN = lines * radial.ringUplift[0];
+  const tie = tieDown(input, ringUpliftN, names[radial.ringUplift[1]] ?? "");
+  groups.push(...tie.groups);
   const fabricCut = fabricCover(layout.cap.surfaceM2, input.fabricAllowancePct, fabric);
-  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay").reduce((s, g) => s + g.massKg, 0) + fabricCut.massKg;
+  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay" && g.kind !== "tie-down").reduce((s, g) => s + g.massKg, 0) + fabricCut.massKg;
   return {
     casesPa: cases,
     caseNames: names,
@@ -132,6 +154,8 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
     backstayForceN: backstayN,
     anchorUpliftN,
     anchorConcreteM3,
+    ringUpliftN,
+    tieDownConcreteM3: tie.concreteM3,
     fabricAreaM2: fabricCut.areaM2,
     fabricMassKg: fabricCut.massKg,
     fabricGravityNPerM: membraneStripForceNPerM((permanentKPa + actions.leadingVariableKPa) * 1000, input.hangerSpacingM, fabricSag),
@@ -180,6 +204,7 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
   const horizontal = cases.map(() => 0);
   let edgeUplift = 0;
   let ringPull: Worst = [0, 0];
+  let ringUplift: Worst = [0, 0];
   for (const { bay, w, wp, label } of [
     { bay: layout.outer, w: outerW, wp: wpOuter, label: "outer" },
     { bay: layout.inner, w: innerW, wp: wpInner, label: "inner" },
@@ -201,9 +226,11 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
       });
     } else {
       ringPull = worstOf(ridge.map((e, k) => e.H + (valley[k] as { H: number }).H));
+      // the ring is the inner cables' lower end: their vertical pull on it, as on the edge anchors
+      ringUplift = worstOf(ridge.map((e, k) => (e.H * (bay.riseM - 4 * bay.sagM)) / bay.spanM + ((valley[k] as { H: number }).H * (bay.riseM + 4 * bay.sagM)) / bay.spanM));
     }
   }
-  return { wpOuter, wpInner, upperV, horizontal, edgeUplift, ringPull };
+  return { wpOuter, wpInner, upperV, horizontal, edgeUplift, ringPull, ringUplift };
 }
 
 /**
@@ -280,6 +307,9 @@ export interface NetAnalysedForces {
   mastCase: string;
   backstayHorizontalN: number;
   anchorUpliftN: number;
+  /** Largest upward pull of the net on the held central ring (the tie-down's force), N, and its combination. */
+  ringUpliftN: number;
+  ringUpliftCase: string;
 }
 
 /**
@@ -311,10 +341,14 @@ export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f:
   const ringLength = 2 * Math.PI * layout.centralRingRadiusM;
   groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: f.ringN, ...tensionRing(f.ringN, input.yieldPa, ringLength), caseName: f.caseOf["central ring"] ?? "" });
   const anchorUpliftN = f.anchorUpliftN + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
-  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay").reduce((s, g) => s + g.massKg, 0) + closed.fabricMassKg;
+  const tie = tieDown(input, f.ringUpliftN, f.ringUpliftCase);
+  groups.push(...tie.groups);
+  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay" && g.kind !== "tie-down").reduce((s, g) => s + g.massKg, 0) + closed.fabricMassKg;
   return {
     ...closed,
     groups,
+    ringUpliftN: f.ringUpliftN,
+    tieDownConcreteM3: tie.concreteM3,
     mastForceN: f.mastForceN,
     backstayForceN: backstayN,
     anchorUpliftN,

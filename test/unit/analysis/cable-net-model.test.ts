@@ -48,3 +48,30 @@ describe("cableNetModel (force density form finding of a mast-supported net)", (
     expect(Number.isFinite(span(stiffer))).toBe(true);
   });
 });
+
+describe("cableNetModel with the central ring held down (option centre = held-down)", () => {
+  const held = cableNetModel({ ...input, centreHeldAtM: 4 });
+  // prestressed well above the weight (20×): the inner cables run taut from the ring up to the heads
+  const taut = cableNetModel({ ...input, prestressN: 20 * input.prestressN, centreHeldAtM: 4 });
+  it("holds the ring's nodes at the given height besides the mast heads and anchors", () => {
+    const supported = held.model.supports.map((s) => s.node);
+    expect(held.ringNodes.every((k) => supported.includes(k) && (held.model.nodes[k] as Vec3)[2] === 4)).toBe(true);
+    expect(supported).toHaveLength(6 + 12 + held.ringNodes.length);
+  });
+  it("prestressed well above its weight, the inner net lies between the held ring and the mast heads", () => {
+    const inner = taut.model.nodes.filter((_, k) => !taut.mastHeads.includes(k) && Math.hypot((taut.model.nodes[k] as Vec3)[0], (taut.model.nodes[k] as Vec3)[1]) < 18 - 1e-9);
+    expect(inner.every(([, , z]) => z >= 4 - 1e-9 && z <= 12 + 1e-9)).toBe(true);
+  });
+  it("the supports' vertical reactions balance the loads; prestressed well above its weight the net pulls the held ring up", () => {
+    const heldLoads = held.areaM2.map((A, node) => ({ node, forceN: [0, 0, -input.permanentPa * A] as const })).filter((l) => l.forceN[2] !== 0);
+    const s = solveCableModel({ ...held.model, loads: heldLoads });
+    expect(s.converged).toBe(true);
+    const applied = heldLoads.reduce((sum, l) => sum + l.forceN[2], 0);
+    const reactions = held.model.supports.reduce((sum, sp) => sum + (s.reactionsN[3 * sp.node + 2] as number), 0);
+    expect(Math.abs(applied + reactions)).toBeLessThan(1e-6 * Math.abs(applied));
+    const st = solveCableModel({ ...taut.model, loads: heldLoads });
+    expect(st.converged).toBe(true);
+    // the net pulls the held ring upwards: its supports pull down
+    expect(taut.ringNodes.reduce((sum, k) => sum + (st.reactionsN[3 * k + 2] as number), 0)).toBeLessThan(0);
+  });
+});
