@@ -90,11 +90,13 @@ benchLattice();
   const { DEFAULT_BRIEF } = await import("../../src/brief");
   const { defaultCatalogue } = await import("../../src/catalogue/default-catalogue");
   const catalogue = defaultCatalogue();
-  for (const [name, model] of [["cable dome", cableDome], ["cable net", cableNet]] as const) {
-    for (const spanM of [60, 160, 300]) {
+  // the held-down net at 300 m takes ~20 s a design before it fails at the strand cap: left out
+  const variants = [["cable dome", cableDome, {}, [60, 160, 300]], ["cable net", cableNet, {}, [60, 160, 300]], ["cable net, centre held down", cableNet, { centre: "held-down" }, [60, 160]]] as const;
+  for (const [name, model, extra, spans] of variants) {
+    for (const spanM of spans) {
       const brief = { ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM };
       const cpu: number[] = [];
-      const options = { ...model.defaults, analysis: "3d" } as never;
+      const options = { ...model.defaults, ...extra, analysis: "3d" } as never;
       let d = model.design(brief, options, catalogue);
       for (let r = 0; r < 3; r++) {
         const c0 = cpuMs();
