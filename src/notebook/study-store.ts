@@ -12,6 +12,7 @@ import {
   studyFromJson,
   studyToJson,
   validateStudy,
+  studyProblems,
   describeProblems,
   getIn,
   setIn,
@@ -229,8 +230,9 @@ export function createStudyStore(options: StoreOptions): StudyStore {
       const problem = (next: T): { candidate: Study; message: string | null } => {
         const candidate = setIn(study.value, path, next);
         if (candidate === study.value || (passed?.base === study.value && Object.is(passed.next, next))) return { candidate, message: null };
-        const checked = validateStudy(candidate);
-        return { candidate, message: checked.ok ? null : refusal(checked.problems, path) };
+        // part by part: only the edited part is checked again (issue 14: one check per slider step)
+        const problems = studyProblems(candidate);
+        return { candidate, message: problems.length === 0 ? null : refusal(problems, path) };
       };
       return {
         value: computed(() => getIn(study.value, path) as T),
@@ -317,8 +319,8 @@ function persist(study: Signal<Study>, parts: PersistParts, fromOtherTab: { curr
   const save = () => {
     const current = study.peek();
     if (current !== fromOtherTab.current) {
-      const checked = validateStudy(current);
-      if (!checked.ok) notice.value = `This change was not saved (the study would not open again):\n${describeProblems(checked.problems)}`;
+      const problems = studyProblems(current);
+      if (problems.length > 0) notice.value = `This change was not saved (the study would not open again):\n${describeProblems(problems)}`;
       else {
         const error = writeStoredStudy(localStorage, current);
         if (error) notice.value = error;

@@ -4,7 +4,7 @@ export type { Brief, PartialFactors, TerrainCategory, UlsExpression } from "../b
 export { DEFAULT_BRIEF, DEFAULT_FACTORS, BRIEF_LIMITS, TERRAIN_CATEGORIES, BriefSchema } from "../brief";
 export type { Study, StudyMeta, SchemeSetting } from "./study";
 export { STUDY_SCHEMA_VERSION } from "./study";
-export { studySchema, validateStudy, StudyMetaSchema, metaFieldProblem } from "./study-schema";
+export { studySchema, validateStudy, studyProblems, StudyMetaSchema, metaFieldProblem } from "./study-schema";
 export { defaultStudy } from "./defaults";
 export { migrateStudy, MIGRATIONS, type Migration } from "./migrate";
 export { studyFromJson, studyFromObject, studyToJson, describeProblems, type LoadResult } from "./load-study";
