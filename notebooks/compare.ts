@@ -8,6 +8,7 @@ import {
   briefControls,
   keyValues,
   chartFigure,
+  outlineFigure,
   computed,
   signal,
   effect,
@@ -38,6 +39,7 @@ import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
 import {
   sectionChartOptions,
+  sectionOutline,
   planChartOptions,
   model3dChartOptions,
   chartCaption,
@@ -108,9 +110,12 @@ reactiveCell(inputs, { id: "geometry", title: "Roof geometry and floor" }, () =>
   ]);
 });
 
+// Drawn at every step of the span slider, so drawn directly from its outline rather than through
+// Plot (issue 14: Plot's layout of this small figure was most of each step's script); the same
+// roof, walls, usable floor and axes as the schemes' own sections below.
 reactiveCell(inputs, { id: "section", title: "Roof section" }, () =>
-  chartFigure(
-    sectionChartOptions({
+  outlineFigure(
+    sectionOutline({
       brief: brief.value,
       title: "Roof section through the centre: roof surface, walls and usable floor",
       caption: caption.value,

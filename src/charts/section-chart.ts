@@ -17,12 +17,20 @@ export interface SectionChartInput {
   height?: number;
 }
 
+/** A rectangle of floor from x1 to x2 (m from the centre), y1 to y2 high (m). */
+export interface FloorSpan {
+  x1: number;
+  x2: number;
+  y1: number;
+  y2: number;
+}
+
 /**
- * Plot options for the roof section: roof profile, walls, the floor with its usable part, and the
- * minimum clear height; optionally a scheme's members. Pure: no DOM access.
+ * What the roof section draws, in metres: the roof profile, the walls, the usable
+ * floor (with the support zones and its label), the roof top and a design's members by role.
+ * One place for the drawing of the section and the brief's outline (see section-outline.ts).
  */
-export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions {
-  const { brief } = input;
+export function sectionParts(brief: Brief, lines: readonly DrawingLine[]) {
   const a = brief.spanM / 2;
   const env = envelope(brief);
   const roof = roofProfile(brief).map(([x, y]) => ({ x, y }));
@@ -35,31 +43,58 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
   // A design that gives its floor carries the usable floor it counted as lines (role "usable floor",
   // "support zone"): those are shaded, exactly; otherwise the brief's envelope under the roof surface.
   const isFloorLine = (l: DrawingLine) => l.role === "usable floor" || l.role === "support zone";
-  const floorLines = (input.lines ?? []).filter(isFloorLine);
-  const members = joinByRole((input.lines ?? []).filter((l) => !isFloorLine(l)));
-  const usableSpans = floorLines.some((l) => l.role === "usable floor")
-    ? floorLines.filter((l) => l.role === "usable floor").map((l) => ({ x1: Math.min(...l.points.map((p) => p[0])), x2: Math.max(...l.points.map((p) => p[0])), y1: 0, y2: brief.minClearHeightM }))
+  const floorLines = lines.filter(isFloorLine);
+  const members = joinByRole(lines.filter((l) => !isFloorLine(l)));
+  const spanOf = (l: DrawingLine): FloorSpan => ({ x1: Math.min(...l.points.map((p) => p[0])), x2: Math.max(...l.points.map((p) => p[0])), y1: 0, y2: brief.minClearHeightM });
+  const usableSpans: FloorSpan[] = floorLines.some((l) => l.role === "usable floor")
+    ? floorLines.filter((l) => l.role === "usable floor").map(spanOf)
     : [{ x1: -env.usableRadiusM, x2: env.usableRadiusM, y1: 0, y2: brief.minClearHeightM }];
-  const supportZones = floorLines.filter((l) => l.role === "support zone").map((l) => ({ x1: Math.min(...l.points.map((p) => p[0])), x2: Math.max(...l.points.map((p) => p[0])), y1: 0, y2: brief.minClearHeightM }));
+  const supportZones = floorLines.filter((l) => l.role === "support zone").map(spanOf);
   const usableLabel = floorLines.length > 0 ? `usable floor (as counted) at ≥ ${brief.minClearHeightM} m clear` : `usable floor ⌀ ${(2 * env.usableRadiusM).toFixed(0)} m at ≥ ${brief.minClearHeightM} m clear`;
   const top = brief.eavesHeightM + brief.riseM;
+  // the axes' extents: a little beyond the walls, a fifth above the roof top
+  const xDomain: [number, number] = [-a * 1.05, a * 1.05];
+  const yDomain: [number, number] = [0, top * 1.2];
+  return { roof, walls, usableSpans, supportZones, usableLabel, top, members, xDomain, yDomain };
+}
+
+/** The section's axis labels and colours, shared with the brief's outline. */
+export const SECTION_STYLE = {
+  xLabel: "Distance from centre (m)",
+  yLabel: "Height above floor (m)",
+  usableFill: "#c9e3c5",
+  usableOpacity: 0.6,
+  clearStroke: "#3a7d32",
+  clearDash: "4 3",
+  wallStroke: "#555",
+  roofStroke: "#1b1f24",
+  lineWidth: 2,
+} as const;
+
+/**
+ * Plot options for the roof section: roof profile, walls, the floor with its usable part, and the
+ * minimum clear height; optionally a scheme's members. Pure: no DOM access.
+ */
+export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions {
+  const { brief } = input;
+  const { roof, walls, usableSpans, supportZones, usableLabel, top, members, xDomain, yDomain } = sectionParts(brief, input.lines ?? []);
   return {
     title: input.title,
     caption: input.caption,
     width: input.width ?? 760,
     height: input.height ?? Math.max(220, Math.min(420, 760 * ((top * 1.25) / brief.spanM) + 120)),
     marginLeft: 50,
-    x: { label: "Distance from centre (m)", domain: [-a * 1.05, a * 1.05] },
-    y: { label: "Height above floor (m)", domain: [0, top * 1.2] },
+    x: { label: SECTION_STYLE.xLabel, domain: xDomain },
+    y: { label: SECTION_STYLE.yLabel, domain: yDomain },
     color: { legend: members.length > 0, ...(input.roles ? { domain: [...input.roles] } : {}) },
     marks: [
       Plot.ruleY([0]),
-      Plot.rect(usableSpans, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#c9e3c5", fillOpacity: 0.6 }),
+      Plot.rect(usableSpans, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: SECTION_STYLE.usableFill, fillOpacity: SECTION_STYLE.usableOpacity }),
       ...(supportZones.length > 0 ? [Plot.rect(supportZones, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#b8b8b8", fillOpacity: 0.8 })] : []),
-      Plot.ruleY([brief.minClearHeightM], { stroke: "#3a7d32", strokeDasharray: "4 3" }),
-      Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => usableLabel, dy: -6, fill: "#3a7d32" }),
-      Plot.line(walls, { x: "x", y: "y", z: "side", stroke: "#555", strokeWidth: 2 }),
-      Plot.line(roof, { x: "x", y: "y", stroke: "#1b1f24", strokeWidth: 2 }),
+      Plot.ruleY([brief.minClearHeightM], { stroke: SECTION_STYLE.clearStroke, strokeDasharray: SECTION_STYLE.clearDash }),
+      Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => usableLabel, dy: -6, fill: SECTION_STYLE.clearStroke }),
+      Plot.line(walls, { x: "x", y: "y", z: "side", stroke: SECTION_STYLE.wallStroke, strokeWidth: SECTION_STYLE.lineWidth }),
+      Plot.line(roof, { x: "x", y: "y", stroke: SECTION_STYLE.roofStroke, strokeWidth: SECTION_STYLE.lineWidth }),
       ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 1.2 })] : []),
     ],
   };

@@ -72,7 +72,15 @@ function saveButton(kind: "svg" | "png", name: string, onClick: () => void): HTM
 export function chartFigure(options: Plot.PlotOptions, filename: string): HTMLElement {
   const rendered = Plot.plot(options);
   const name = options.ariaLabel ?? (typeof options.title === "string" ? options.title : filename);
-  nameChart(rendered, name, options.ariaDescription ?? (typeof options.caption === "string" ? options.caption : name));
+  return withSaveTools(rendered, name, options.ariaDescription ?? (typeof options.caption === "string" ? options.caption : name), filename);
+}
+
+/**
+ * A rendered chart (Plot's figure or SVG, or a figure built the same way: h2, svg, figcaption)
+ * named for assistive technology and wrapped with its "SVG" and "PNG" save buttons.
+ */
+export function withSaveTools(rendered: HTMLElement | SVGSVGElement, name: string, description: string, filename: string): HTMLElement {
+  nameChart(rendered, name, description);
   const wrap = document.createElement("div");
   wrap.className = "figure";
   wrap.append(rendered);

@@ -8,6 +8,7 @@ export { downloadText, downloadBlob } from "./download";
 export { fmt, tableElement } from "./format";
 export { signal, computed, effect, batch, type Signal, type ReadonlySignal } from "@preact/signals-core";
 export { chartFigure, svgText, svgToPng } from "./chart";
+export { outlineFigure } from "./outline-figure";
 export { settled, inTurns, nextFrame, perFrame, SETTLE_MS } from "./settle";
 export { proportionsSentences, proportionText } from "./proportions-text";
 export { briefControls } from "./brief-controls";
