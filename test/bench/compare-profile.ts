@@ -54,6 +54,47 @@ function heaviest(profile: CpuProfile, count: number): string[] {
     .map(([key, e]) => `${(e.us / 1000).toFixed(0).padStart(6)} ms  ${key}\n          ← ${e.chain}`);
 }
 
+/**
+ * The busy stretches of the profile (samples in a row that are not idle) longer than `minMs`, each
+ * with the functions that took most of it: which work makes the long tasks.
+ */
+function busyStretches(profile: CpuProfile, minMs: number): string[] {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+  const parent = new Map<number, number>();
+  for (const n of profile.nodes) for (const c of n.children ?? []) parent.set(c, n.id);
+  const label = (id: number) => {
+    const f = byId.get(id)!.callFrame;
+    return `${f.functionName || "(anonymous)"} ${f.url.split("/").pop() ?? ""}:${f.lineNumber + 1}`;
+  };
+  const out: string[] = [];
+  let at = 0;
+  let stretch: { startUs: number; us: number; by: Map<string, number> } | null = null;
+  const close = () => {
+    if (stretch && stretch.us / 1000 >= minMs) {
+      const top = [...stretch.by.entries()].sort((a, b) => b[1] - a[1]).slice(0, 6).map(([k, us]) => `${(us / 1000).toFixed(0)} ${k}`);
+      out.push(`${(stretch.startUs / 1000).toFixed(0).padStart(6)} ms +${(stretch.us / 1000).toFixed(0)}: ${top.join(" | ")}`);
+    }
+    stretch = null;
+  };
+  (profile.samples ?? []).forEach((s, i) => {
+    const dt = profile.timeDeltas?.[i] ?? 0;
+    at += dt;
+    const name = byId.get(s)!.callFrame.functionName;
+    if (name === "(idle)") return close();
+    stretch ??= { startUs: at, us: 0, by: new Map() };
+    stretch.us += dt;
+    const seen = new Set<string>();
+    for (let n: number | undefined = s; n !== undefined; n = parent.get(n)) {
+      const key = label(n);
+      if (seen.has(key) || key.startsWith("(root)") || key.startsWith("dispatchEvent") || key.startsWith("(anonymous) :")) continue;
+      seen.add(key);
+      stretch.by.set(key, (stretch.by.get(key) ?? 0) + dt);
+    }
+  });
+  close();
+  return out;
+}
+
 const server = await preview({ build: { outDir: dist }, preview: { host: "127.0.0.1", port: 4193, strictPort: true }, logLevel: "silent" });
 const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: CHROMIUM_ARGS });
 const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
@@ -96,6 +137,8 @@ try {
   console.log(`long tasks (> 50 ms): ${long.length}, longest ${Math.max(0, ...long.map((l) => l.ms)).toFixed(0)} ms; at ms from the drag's start: ${long.map((l) => `${(l.start - t0).toFixed(0)}+${l.ms.toFixed(0)}`).join(" ")}`);
   console.log("main-thread functions by inclusive time (whole drag and the 6 s after):");
   heaviest(profile as CpuProfile, 25).forEach((l) => console.log(l));
+  console.log("busy stretches over 40 ms (ms from the profile's start), with what took most of each:");
+  busyStretches(profile as CpuProfile, 40).forEach((l) => console.log(l));
 } finally {
   await browser.close();
   server.httpServer.close();
