@@ -27,13 +27,11 @@ import {
   schemeOptionControls,
   studyDetailsEditor,
   gapNotice,
-  errorBox,
   settled,
   perFrame,
-  inTurns,
+  chartTurns,
   proportionsSentences,
 } from "../src/notebook";
-import type * as Plot from "@observablehq/plot";
 import { tableGaps } from "../src/pipeline";
 import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
@@ -192,34 +190,19 @@ const includeExcluded = signal(false);
 // moves): they follow the results once these have been still for a moment, and the four are drawn
 // one per frame into their own slots (the previous drawing stays until its successor is ready).
 const calm = settled(arrived);
-const chartTurns = { generation: 0 };
-const chartGrid = document.createElement("div");
-chartGrid.className = "grid charts";
-const chartSlots = Array.from({ length: 4 }, () => chartGrid.appendChild(document.createElement("div")));
+const charts = chartTurns(4);
 const chartCell = reactiveCell(outputs, { id: "comparison-charts", title: "Option charts — every figure per m² of usable floor" }, () => {
   const { list, caption: resultsCaption } = calm.value;
   if (list === null || list.length === 0) return null;
   // the caption of the brief these results are for: the live one moves with every step of a drag
   const common = { caption: resultsCaption, includeExcluded: includeExcluded.value };
-  const charts: [() => Plot.PlotOptions, string][] = [
-    [() => massByMaterialChart(list, { ...common, title: "Roof mass per m² of usable floor, by material" }), "mass-by-material"],
-    [() => carbonByModuleChart(list, { ...common, title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)" }), "carbon-by-module"],
-    [() => costPerM2Chart(list, { ...common, title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)" }), "cost-per-m2"],
-    [() => carbonVsCostChart(list, { ...common, title: "Carbon against cost per m² of usable floor" }), "carbon-vs-cost"],
-  ];
-  const jobs = charts.map(([options, name], k) => () => {
-    let figure: HTMLElement;
-    try {
-      figure = chartFigure(options(), name);
-    } catch (error) {
-      figure = errorBox(error);
-    }
-    chartSlots[k]?.replaceChildren(figure);
-  });
-  inTurns(chartTurns, jobs, () => {
-    chartCell.element.dataset.drawn = String(Number(chartCell.element.dataset.drawn ?? 0) + 1);
-  });
-  return chartGrid;
+  charts.draw([
+    () => chartFigure(massByMaterialChart(list, { ...common, title: "Roof mass per m² of usable floor, by material" }), "mass-by-material"),
+    () => chartFigure(carbonByModuleChart(list, { ...common, title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)" }), "carbon-by-module"),
+    () => chartFigure(costPerM2Chart(list, { ...common, title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)" }), "cost-per-m2"),
+    () => chartFigure(carbonVsCostChart(list, { ...common, title: "Carbon against cost per m² of usable floor" }), "carbon-vs-cost"),
+  ], () => chartCell.element);
+  return charts.grid;
 });
 chartCell.element.querySelector("h2")?.after(
   toggleControl({ value: includeExcluded, set: (x: boolean) => { includeExcluded.value = x; } }, { id: "include-excluded", label: "Bring schemes outside their method's valid range into the scales (faded, named so)" }),

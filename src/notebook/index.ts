@@ -10,6 +10,7 @@ export { signal, computed, effect, batch, type Signal, type ReadonlySignal } fro
 export { chartFigure, svgText, svgToPng } from "./chart";
 export { outlineFigure } from "./outline-figure";
 export { settled, inTurns, nextFrame, perFrame, SETTLE_MS } from "./settle";
+export { chartTurns, type ChartTurns } from "./chart-turns";
 export { proportionsSentences, proportionText } from "./proportions-text";
 export { briefControls } from "./brief-controls";
 export { keyValues } from "./key-values";
