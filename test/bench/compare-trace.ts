@@ -25,6 +25,8 @@ try {
   const page = await context.newPage();
   await page.goto("http://127.0.0.1:4194/compare.html");
   await page.waitForSelector("#cell-comparison-charts svg", { timeout: 120_000 });
+  // EXTRA_CSS tries a style rule without a build (e.g. containment or a layer for the brief column)
+  if (process.env.EXTRA_CSS) await page.addStyleTag({ content: process.env.EXTRA_CSS });
   await page.waitForTimeout(2000);
   const cdp = await context.newCDPSession(page);
   const events: TraceEvent[] = [];
@@ -80,6 +82,15 @@ try {
   console.log(`main thread by kind (ms, nested events may overlap within script): ${[...byKind.entries()].map(([k, ms]) => `${k} ${ms.toFixed(0)}`).join(", ")}`);
   console.log(`elements restyled ${elements.style}, layout dirty objects ${elements.layout}`);
   console.log(`tasks over 50 ms: ${tasks.length} (${tasks.join(", ")})`);
+  const paints = new Map<string, { ms: number; n: number }>();
+  for (const e of mine.filter((x) => x.name === "Paint")) {
+    const key = String(e.args?.data?.nodeName ?? "?");
+    const entry = paints.get(key) ?? { ms: 0, n: 0 };
+    entry.ms += (e.dur ?? 0) / 1000;
+    entry.n += 1;
+    paints.set(key, entry);
+  }
+  console.log(`painted (ms/times): ${[...paints.entries()].map(([k, v]) => `${k} ${v.ms.toFixed(0)}/${v.n}`).join(", ")}`);
   const layouts = mine.filter((e) => e.name === "Layout" && (e.dur ?? 0) > 3000).slice(0, 8);
   for (const l of layouts) console.log(`layout ${(l.dur! / 1000).toFixed(1)} ms: ${JSON.stringify(l.args?.beginData)}`);
 } finally {
