@@ -32,7 +32,7 @@ const declarations = {
    * allowance (substructure, not designed); it stands in the floor with a mast's clear zone. Not
    * searched: the search screens by the closed form, whose ring is held down either way.
    */
-  centre: { kind: "select", label: "Centre of the net", choices: [{ value: "free", label: "Free central ring" }, { value: "held-down", label: "Held down by a tie-down to the floor" }], default: "free", source: "tie-down anchor: dead weight × margin (substructure allowance, not designed)" },
+  centre: { kind: "select", label: "Centre of the net", choices: [{ value: "free", label: "Free central ring" }, { value: "held-down", label: "Held down by a tie-down to the floor" }], default: "held-down", source: "the closed form balances the inner valley cables' upward pull on the central ring only if the ring is held down (160 m default brief: 15.5 MN); tie-down anchor: dead weight × margin (substructure allowance, not designed)" },
   ...ANALYSIS_OPTION,
   ...TENSION_COMMON_OPTIONS,
 } as const;

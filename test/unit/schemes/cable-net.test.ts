@@ -118,10 +118,14 @@ describe("cableNet on the shared design basis (issue 12)", () => {
     const fewer = design(DEFAULT_BRIEF, { ...cableNet.defaults, masts: 6 });
     expect(fewer.usableFloorM2).toBeGreaterThan(d.usableFloorM2);
   });
-  it("counts the anchors as substructure, outside the roof's self-weight", () => {
+  it("counts the anchors and the held centre's tie-down as substructure, outside the roof's self-weight", () => {
+    // since the held-down centre became the default (the closed form holds its ring down), the
+    // substructure is the edge anchors plus the central tie-down and its anchor
     const anchors = d.takeoff.find((r) => r.element === "anchors");
+    const tieDown = d.takeoff.filter((r) => r.element.startsWith("central tie-down"));
     expect(anchors?.group).toBe("substructure");
-    expectRelClose(d.massByGroupKg.substructure, anchors?.massKg ?? NaN, 1e-12);
+    expect(tieDown.map((r) => r.group)).toEqual(["substructure", "substructure"]);
+    expectRelClose(d.massByGroupKg.substructure, (anchors?.massKg ?? NaN) + tieDown.reduce((s, r) => s + r.massKg, 0), 1e-12);
     expectRelClose(d.roofMassKg, d.totalMassKg - d.massByGroupKg.substructure, 1e-12);
   });
   it("names the design combination that governs, and declares mast ring, mast height and mast count free", () => {
