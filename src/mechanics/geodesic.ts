@@ -98,6 +98,8 @@ interface Grid {
   /** Nodes shared between icosahedron faces, by key. */
   keyToNode: Map<number, number>;
   faces: [number, number, number][];
+  /** Index in `faces` of the first triangle of each icosahedron face (20 + 1 entries; a face skipped or with none kept starts where the next does). */
+  faceStart: number[];
 }
 
 const TOLERANCE = 1e-9;
@@ -111,7 +113,7 @@ function newGrid(v: number, zCut: number): Grid {
   }
   const floats = () => new Float64Array(localCount);
   const bytes = () => new Uint8Array(localCount);
-  return { v, zCut, rowStart, lx: floats(), ly: floats(), lz: floats(), localNode: new Int32Array(localCount), keep: bytes(), used: bytes(), unit: [], keyToNode: new Map(), faces: [] };
+  return { v, zCut, rowStart, lx: floats(), ly: floats(), lz: floats(), localNode: new Int32Array(localCount), keep: bytes(), used: bytes(), unit: [], keyToNode: new Map(), faces: [], faceStart: [] };
 }
 
 /** Grid point (i, j) = A + (B − A) i/v + (C − A) j/v, pushed out to the sphere; kept when on or above the cut. */
@@ -197,6 +199,7 @@ function numberNodes(g: Grid, ia: number, ib: number, ic: number): void {
 function subdivideCap(v: number, zCut: number, capAngleRad: number): Grid {
   const g = newGrid(v, zCut);
   for (const [ia, ib, ic] of ICOSA_FACES) {
+    g.faceStart.push(g.faces.length);
     const A = ICOSA_VERTICES[ia]!;
     const B = ICOSA_VERTICES[ib]!;
     const C = ICOSA_VERTICES[ic]!;
@@ -209,6 +212,7 @@ function subdivideCap(v: number, zCut: number, capAngleRad: number): Grid {
     const n = g.localNode;
     keptTriangles(g, (a, b, c) => g.faces.push([n[a]!, n[b]!, n[c]!]));
   }
+  g.faceStart.push(g.faces.length);
   return g;
 }
 
@@ -313,6 +317,46 @@ export function geodesicCap(frequency: number, radiusM: number, capAngleRad: num
   }
   return { frequency: v, radiusM, capAngleRad, cutHeightM: zCut * radiusM, nodes, edges, faces, ringNodes, edgeOnRing, edgeLengthsM };
 }
+
+/**
+ * The whole class I geodesic sphere of frequency v on the unit sphere, in the order geodesicCap
+ * builds a cap's parts: triangles icosahedron face by face, and for each icosahedron face the
+ * largest angle from the crown at which it can still reach a cap (the cut of geodesicCap keeps
+ * exactly the triangles with three corners on or above the plane, so a cap is this sphere cut).
+ */
+export interface GeodesicSphere {
+  frequency: number;
+  /** The part built: every triangle that reaches within this angle of the crown, rad (π: the whole sphere). */
+  upToRad: number;
+  /** x, y, z of each node on the unit sphere. */
+  unit: Float64Array;
+  /** Triangles as node index triples, flat. */
+  faces: Int32Array;
+  /** Index (in triangles) of the first triangle of each icosahedron face; 21 entries. */
+  faceStart: number[];
+  /** A cap of half-angle φ0 reaches icosahedron face f only when φ0 ≥ reachRad[f] (the test geodesicCap skips faces by). */
+  reachRad: number[];
+}
+
+/**
+ * The unit geodesic sphere of frequency v (1–400), for cutting caps from (geodesic-bands.ts): the
+ * triangles with three corners within upToRad of the crown (π: the whole sphere), so every cap of
+ * half-angle up to upToRad is a cut of it.
+ */
+export function geodesicSphere(frequency: number, upToRad = Math.PI): GeodesicSphere {
+  if (!(Number.isInteger(frequency) && frequency >= 1 && frequency <= 400)) throw new RangeError(`invalid geodesic frequency: ${frequency} (expected a whole number 1–400)`);
+  if (!(upToRad > 0 && upToRad <= Math.PI)) throw new RangeError(`invalid angle: ${upToRad} rad (expected 0 < angle ≤ π)`);
+  const g = subdivideCap(frequency, upToRad === Math.PI ? -1 : Math.cos(upToRad), upToRad);
+  const reachRad = ICOSA_FACES.map(([ia, ib, ic]) => {
+    const [A, B, C] = [ICOSA_VERTICES[ia]!, ICOSA_VERTICES[ib]!, ICOSA_VERTICES[ic]!];
+    const centre = normalise([A[0] + B[0] + C[0], A[1] + B[1] + C[1], A[2] + B[2] + C[2]]);
+    return Math.acos(Math.max(-1, Math.min(1, centre[2]))) - FACE_ANGULAR_RADIUS - 1e-9;
+  });
+  return { frequency, upToRad, unit: Float64Array.from(g.unit), faces: Int32Array.from(g.faces.flat()), faceStart: g.faceStart, reachRad };
+}
+
+/** Tolerance of the cut: a node is kept when z ≥ cos φ0 − this. */
+export const CUT_TOLERANCE = TOLERANCE;
 
 /** Strut length statistics, m. */
 export interface StrutLengths {

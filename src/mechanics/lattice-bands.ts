@@ -33,31 +33,44 @@ export function edgeMidpointAngleRad(cap: GeodesicCap, e: number): number {
  * they would set its buckling length and span for every member of it). Empty bands are dropped.
  */
 export function latticeBands(cap: GeodesicCap, bandCount: number): LatticeBand[] {
-  if (!(Number.isInteger(bandCount) && bandCount >= 1)) throw new RangeError(`invalid bandCount: ${bandCount} (expected a whole number ≥ 1)`);
   const phi0 = cap.capAngleRad;
   const ringNode = new Uint8Array(cap.nodes.length);
   for (const n of cap.ringNodes) ringNode[n] = 1;
-  const bands: LatticeBand[] = Array.from({ length: bandCount + 1 }, (_, i) => ({
+  const bands = emptyBands(phi0, bandCount);
+  cap.edges.forEach(([p, q], e) => {
+    if (cap.edgeOnRing[e]) return;
+    const at = ringNode[p] || ringNode[q] ? bandCount : Math.min(bandCount - 1, Math.floor((edgeMidpointAngleRad(cap, e) / phi0) * bandCount));
+    addToBand(bands[at]!, e, cap.edgeLengthsM[e]!);
+  });
+  return finishedBands(bands);
+}
+
+/** `bandCount` empty bands of equal meridional angle over a cap of half-angle φ0, and the edge band after them (latticeBands). */
+export function emptyBands(capAngleRad: number, bandCount: number): LatticeBand[] {
+  if (!(Number.isInteger(bandCount) && bandCount >= 1)) throw new RangeError(`invalid bandCount: ${bandCount} (expected a whole number ≥ 1)`);
+  return Array.from({ length: bandCount + 1 }, (_, i) => ({
     index: i,
     edge: i === bandCount,
-    fromRad: (phi0 * Math.min(i, bandCount - 1)) / bandCount,
-    toRad: (phi0 * Math.min(i + 1, bandCount)) / bandCount,
+    fromRad: (capAngleRad * Math.min(i, bandCount - 1)) / bandCount,
+    toRad: (capAngleRad * Math.min(i + 1, bandCount)) / bandCount,
     count: 0,
     totalLengthM: 0,
     meanLengthM: 0,
     maxLengthM: 0,
     edges: [],
   }));
-  cap.edges.forEach(([p, q], e) => {
-    if (cap.edgeOnRing[e]) return;
-    const at = ringNode[p] || ringNode[q] ? bandCount : Math.min(bandCount - 1, Math.floor((edgeMidpointAngleRad(cap, e) / phi0) * bandCount));
-    const band = bands[at]!;
-    const lengthM = cap.edgeLengthsM[e]!;
-    band.count += 1;
-    band.totalLengthM += lengthM;
-    band.maxLengthM = Math.max(band.maxLengthM, lengthM);
-    band.edges.push(e);
-  });
+}
+
+/** Adds edge e of the given length to a band. */
+export function addToBand(band: LatticeBand, e: number, lengthM: number): void {
+  band.count += 1;
+  band.totalLengthM += lengthM;
+  band.maxLengthM = Math.max(band.maxLengthM, lengthM);
+  band.edges.push(e);
+}
+
+/** The bands with their mean lengths, empty ones dropped. */
+export function finishedBands(bands: LatticeBand[]): LatticeBand[] {
   for (const b of bands) b.meanLengthM = b.count > 0 ? b.totalLengthM / b.count : 0;
   return bands.filter((b) => b.count > 0);
 }

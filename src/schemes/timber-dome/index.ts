@@ -3,7 +3,7 @@ import type { Catalogue, GlulamClass } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, DrawingLine, MemberGroup } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
-import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
+import { CapTooSmallError, geodesicFrequencyFor, type GeodesicCap } from "../../mechanics/geodesic";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
 import { glulamKMod, type LoadDurationClass, type ServiceClass } from "../../mechanics/timber-kmod";
 import { TIMBER_GAMMA_M } from "../../mechanics/timber-gamma-m";
@@ -12,7 +12,8 @@ import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRE
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { designBasis } from "../../loads/design-basis";
 import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
-import { latticeBands } from "../../mechanics/lattice-bands";
+import { geodesicCapBands } from "../../mechanics/geodesic-bands";
+import type { LatticeBand } from "../../mechanics/lattice-bands";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
 import { timberPlan, timberSection } from "./drawing";
@@ -33,7 +34,7 @@ function findGlulam(catalogue: Catalogue, strengthClass: string): GlulamClass {
   return found;
 }
 
-function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, mesh: GeodesicCap): TimberLatticeInputs {
+function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, bands: LatticeBand[]): TimberLatticeInputs {
   const basis = designBasis(brief);
   const glulam = findGlulam(catalogue, opts.strengthClass);
   const deck = findGlulam(catalogue, catalogue.glulam.some((g) => g.strengthClass === DECK_CLASS) ? DECK_CLASS : opts.strengthClass);
@@ -48,7 +49,7 @@ function latticeInputs(brief: Brief, opts: TimberDomeOptions, catalogue: Catalog
     capAngleRad: cap.edgeAngleRad,
     baseRadiusM: cap.baseRadiusM,
     surfaceM2: cap.surfaceM2,
-    bands: latticeBands(mesh, opts.bands),
+    bands,
     sections: GLULAM_SECTIONS,
     glulam,
     deckBendingPa: deck.bendingPa,
@@ -124,8 +125,9 @@ function timberTakeoff(r: TimberLatticeResult, surfaceM2: number, glulamDensity:
   ];
 }
 
-function timberSummary(r: TimberLatticeResult, mesh: GeodesicCap, frequency: number, cap: SphericalCap) {
-  const inner = strutLengths(mesh.edgeLengthsM, (e) => !mesh.edgeOnRing[e]);
+function timberSummary(r: TimberLatticeResult, frequency: number, cap: SphericalCap) {
+  // the bands hold every member not on the ring once
+  const inner = { count: r.bands.reduce((n, b) => n + b.band.count, 0), meanM: r.bands.reduce((sum, b) => sum + b.band.totalLengthM, 0) / r.bands.reduce((n, b) => n + b.band.count, 0) };
   const timberM3 = r.latticeVolumeM3 + r.purlinVolumeM3 + r.deckVolumeM3;
   return [
     { key: "frequency", label: "Geodesic frequency v", value: frequency, unit: "" },
@@ -139,21 +141,41 @@ function timberSummary(r: TimberLatticeResult, mesh: GeodesicCap, frequency: num
   ];
 }
 
+/** A SchemeError for a mesh of this frequency that cannot be made; rethrows anything else. */
+function meshFailure(e: unknown, failure: { warnings: string[]; section: DrawingLine[] }): SchemeError {
+  if (e instanceof CapTooSmallError) return new SchemeError("the mesh is too coarse for so small a cap: shorten the members", { ...failure, cause: e });
+  throw e;
+}
+
 /** The geodesic mesh of one frequency; a SchemeError when it cannot be made. */
 function latticeMesh(cap: SphericalCap, frequency: number, failure: { warnings: string[]; section: DrawingLine[] }): GeodesicCap {
   if (frequency > 200) throw new SchemeError(`the mesh would need frequency ${frequency} (over 200): lengthen the members`, failure);
   try {
     return cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad);
   } catch (e) {
-    if (e instanceof CapTooSmallError) throw new SchemeError("the mesh is too coarse for so small a cap: shorten the members", { ...failure, cause: e });
-    throw e;
+    throw meshFailure(e, failure);
+  }
+}
+
+/**
+ * The member bands of the mesh of one frequency, cut from the remembered sphere without building the
+ * mesh (the sizing reads only the bands; the mesh is built for the design kept); a SchemeError when
+ * the mesh cannot be made.
+ */
+function latticeMeshBands(cap: SphericalCap, frequency: number, bandCount: number, failure: { warnings: string[]; section: DrawingLine[] }): LatticeBand[] {
+  if (frequency > 200) throw new SchemeError(`the mesh would need frequency ${frequency} (over 200): lengthen the members`, failure);
+  try {
+    return geodesicCapBands(frequency, cap.radiusM, cap.edgeAngleRad, bandCount);
+  } catch (e) {
+    throw meshFailure(e, failure);
   }
 }
 
 /** The timber dome sized on one mesh (self-weight iterated to convergence), and its mass; its parts are drawn up only for the mesh kept. */
 interface MeshDesign {
   massKg: number;
-  mesh: GeodesicCap;
+  /** The mesh, built when first asked for (only the design kept needs it). */
+  mesh: () => GeodesicCap;
   frequency: number;
   result: TimberLatticeResult;
   inputs: TimberLatticeInputs;
@@ -162,8 +184,8 @@ interface MeshDesign {
 
 /** The lattice sized on the mesh of one frequency; a SchemeError when it cannot be built. */
 function sizeOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): MeshDesign {
-  const mesh = latticeMesh(cap, frequency, { warnings, section: timberSection(brief, 0) });
-  const inputs = latticeInputs(brief, opts, catalogue, cap, mesh);
+  const failure = { warnings, section: timberSection(brief, 0) };
+  const inputs = latticeInputs(brief, opts, catalogue, cap, latticeMeshBands(cap, frequency, opts.bands, failure));
   const converged = convergeSelfWeight<TimberLatticeResult>(
     (g) => {
       const r = sizeTimberLattice(inputs, g);
@@ -175,7 +197,7 @@ function sizeOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue,
   const r = converged.value;
   if (r.failure) throw new SchemeError(r.failure, { warnings, section: timberSection(brief, memberDepthM(r)) });
   const massKg = timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3).reduce((sum, row) => sum + row.massKg, 0);
-  return { massKg, mesh, frequency, result: r, inputs, iterations: converged.iterations };
+  return { massKg, mesh: () => latticeMesh(cap, frequency, failure), frequency, result: r, inputs, iterations: converged.iterations };
 }
 
 /** Meshes sized lately, per catalogue, by frequency, brief and the options the sizing reads. */
@@ -220,7 +242,7 @@ function partsOf(brief: Brief, cap: SphericalCap, d: MeshDesign, warnings: strin
   const { members, checks } = timberMembers(r, d.inputs.charDepthM);
   return {
     governingLoadCase: r.governingCase,
-    summary: timberSummary(r, d.mesh, d.frequency, cap),
+    summary: timberSummary(r, d.frequency, cap),
     members,
     takeoff: timberTakeoff(r, cap.surfaceM2, d.inputs.glulam.densityMeanKgPerM3),
     checks,
@@ -228,16 +250,17 @@ function partsOf(brief: Brief, cap: SphericalCap, d: MeshDesign, warnings: strin
     iterations: d.iterations,
     floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: drawingWithLazyPlan(timberSection(brief, depthM), () => timberPlan(d.mesh)),
+    drawing: drawingWithLazyPlan(timberSection(brief, depthM), () => timberPlan(d.mesh())),
   };
 }
 
 /** The chosen design with the 3D analysis of its net: Design.analysis and the 3D buckling check beside the continuum one. */
 function withNetAnalysis(brief: Brief, cap: SphericalCap, d: MeshDesign, parts: DesignParts, knockDown: number): DesignParts {
-  const tooLarge = frameTooLarge(d.mesh.nodes.length, "lengthen the target member");
+  const mesh = d.mesh();
+  const tooLarge = frameTooLarge(mesh.nodes.length, "lengthen the target member");
   if (tooLarge) return { ...parts, warnings: [...parts.warnings, tooLarge] };
   const selfWeightPlanKPa = timberSelfWeightKPa(d.result, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2);
-  const net = analyseTimberNet({ brief, cap, mesh: d.mesh, bands: d.result.bands, selfWeightPlanKPa, creepModulusPa: d.inputs.creepModulusPa, knockDown, purlinSpacingM: d.inputs.purlinSpacingM });
+  const net = analyseTimberNet({ brief, cap, mesh, bands: d.result.bands, selfWeightPlanKPa, creepModulusPa: d.inputs.creepModulusPa, knockDown, purlinSpacingM: d.inputs.purlinSpacingM });
   return { ...parts, checks: [...parts.checks, ...net.checks], analysis: net.analysis };
 }
 

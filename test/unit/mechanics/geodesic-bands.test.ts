@@ -1,0 +1,49 @@
+import { describe, it, expect } from "vitest";
+import { geodesicCap, CapTooSmallError } from "../../../src/mechanics/geodesic";
+import { latticeBands } from "../../../src/mechanics/lattice-bands";
+import { geodesicCapBands } from "../../../src/mechanics/geodesic-bands";
+import { sphericalCap } from "../../../src/mechanics/spherical-cap";
+import { expectRelClose } from "../../helpers/close";
+
+// geodesicCapBands cuts the bands from a remembered unit sphere instead of building the cap: it must
+// give what latticeBands gives on the built cap (the same edges in each band, lengths to rounding).
+const CASES = [
+  { spanM: 40, riseM: 6, frequency: 5, bandCount: 4 },
+  { spanM: 60, riseM: 9, frequency: 7, bandCount: 4 },
+  { spanM: 160, riseM: 24, frequency: 19, bandCount: 4 },
+  { spanM: 160, riseM: 33.6, frequency: 22, bandCount: 5 },
+  { spanM: 160, riseM: 48, frequency: 26, bandCount: 3 },
+  { spanM: 300, riseM: 45, frequency: 36, bandCount: 4 },
+  { spanM: 100, riseM: 50, frequency: 12, bandCount: 4 },
+  { spanM: 80, riseM: 40, frequency: 9, bandCount: 2 },
+];
+
+describe("geodesicCapBands: the bands of a cap cut from the remembered sphere", () => {
+  for (const c of CASES) {
+    it(`${c.spanM} m span, ${c.riseM} m rise, frequency ${c.frequency}, ${c.bandCount} bands: as latticeBands on the built cap`, () => {
+      const cap = sphericalCap(c.spanM, c.riseM);
+      const built = latticeBands(geodesicCap(c.frequency, cap.radiusM, cap.edgeAngleRad), c.bandCount);
+      const cut = geodesicCapBands(c.frequency, cap.radiusM, cap.edgeAngleRad, c.bandCount);
+      expect(cut.map((b) => [b.index, b.edge, b.count, b.fromRad, b.toRad])).toEqual(built.map((b) => [b.index, b.edge, b.count, b.fromRad, b.toRad]));
+      cut.forEach((b, i) => {
+        const w = built[i]!;
+        expect(b.edges).toEqual(w.edges);
+        expectRelClose(b.totalLengthM, w.totalLengthM, 1e-12);
+        expectRelClose(b.meanLengthM, w.meanLengthM, 1e-12);
+        expectRelClose(b.maxLengthM, w.maxLengthM, 1e-12);
+      });
+    });
+  }
+
+  it("the same bands when asked again after other caps (scratch arrays reused)", () => {
+    const cap = sphericalCap(160, 33.6);
+    const first = geodesicCapBands(22, cap.radiusM, cap.edgeAngleRad, 4);
+    geodesicCapBands(30, cap.radiusM * 2, cap.edgeAngleRad / 2, 3);
+    expect(geodesicCapBands(22, cap.radiusM, cap.edgeAngleRad, 4)).toEqual(first);
+  });
+
+  it("a cap too small for the frequency is refused as geodesicCap refuses it", () => {
+    expect(() => geodesicCap(1, 100, 0.2)).toThrow(CapTooSmallError);
+    expect(() => geodesicCapBands(1, 100, 0.2, 4)).toThrow(CapTooSmallError);
+  });
+});
