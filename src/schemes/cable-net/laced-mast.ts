@@ -7,7 +7,8 @@
  */
 import type { ChsSection } from "../../catalogue/types";
 import { chsResistance } from "../../catalogue/pick-chs";
-import { lacedColumnForces, taperedCriticalForcePerAreaN, taperedLacedColumnForces, type LacedColumnForces } from "../../mechanics/built-up-column";
+import { lacedColumnForces, lacingShearStiffnessN, taperedCriticalForcePerAreaN, taperedLacedColumnForces, type LacedColumnForces } from "../../mechanics/built-up-column";
+import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
 
 /** Longest mast segment shipped by road, m (common practice, no source). */
 export const MAST_SEGMENT_MAX_M = 12;
@@ -69,6 +70,27 @@ function pairForces(axialN: number, lengthM: number, faceM: number, endFaceM: nu
   };
 }
 
+/** Margin on eq. 6.70's denominator below which a pair is surely unstable (far above the rounding of the quick estimate). */
+const SURELY_UNSTABLE = -1e-9;
+
+/**
+ * A quick test of eq. 6.70's denominator 1 − N/N_cr − N/S_v, with S_v ∝ A_d (Fig. 6.9 at a given
+ * spacing and panel): a search over chords and diagonals skips the pairs it shows to be surely
+ * unstable (no finite M_Ed; pairForces gives null for them) without building their forces. Nine in
+ * ten pairs tried at 160 m were of that kind. Pairs near the limit go through the full check.
+ */
+function stabilityTest(axialN: number, lengthM: number, faceM: number, endFaceM: number, panelM: number, criticalPerAreaN: number) {
+  const lacing = { kind: "W" as const, planes: 2, panelM, diagonalAreaM2: 1 };
+  const shearPerAreaN = Math.min(lacingShearStiffnessN({ chordSpacingM: faceM, lacing }), lacingShearStiffnessN({ chordSpacingM: endFaceM, lacing }));
+  // N_cr per m² of one chord: uniform, π²·E·(0.5·h0²·2·A_ch)/L² (eqs. 6.70, 6.72); tapered, as computed for the member
+  const perAreaN = endFaceM < faceM ? criticalPerAreaN : (Math.PI ** 2 * STEEL_E_PA * faceM * faceM) / (lengthM * lengthM);
+  return {
+    /** What is left of the denominator once the chord has taken its share, N/N_cr. */
+    chordLeft: (chord: ChsSection) => 1 - axialN / (perAreaN * chord.areaM2),
+    surelyUnstable: (left: number, diagonal: ChsSection) => left - axialN / (shearPerAreaN * diagonal.areaM2) < SURELY_UNSTABLE,
+  };
+}
+
 /** The worst diagonal utilisation over its stations (each buckling over its own length), or null when one fails. */
 function diagonalCheck(diagonal: ChsSection, pairs: readonly { forceN: number; lengthM: number }[], yieldPa: number): { utilisation: number; resistanceN: number } | null {
   let worst = { utilisation: 0, resistanceN: Infinity };
@@ -94,12 +116,16 @@ function lacedMastAt(sections: readonly ChsSection[], axialN: number, lengthM: n
   const leastChordN = axialN / 4 + (axialN * lengthM) / 500 / (2 * faceM);
   // N_cr of the tapered member per m² of chord (four chords, two a side)
   const criticalPerAreaN = endFaceM < faceM ? taperedCriticalForcePerAreaN(lengthM, faceM, endFaceM, 2) : NaN;
+  const stability = stabilityTest(axialN, lengthM, faceM, endFaceM, panelM, criticalPerAreaN);
   for (const chord of sections) {
     if (4 * chord.massKgPerM >= belowKgPerM) return null;
     if (chord.areaM2 * yieldPa < leastChordN) continue;
     const c = chsResistance(chord, { forceN: -leastChordN, effectiveLengthM: panelM, yieldPa, curve: "a" });
     if (!c || c.utilisation > 1) continue;
+    const left = stability.chordLeft(chord);
+    if (left < SURELY_UNSTABLE) continue; // no lacing can hold this chord
     for (const diagonal of sections) {
+      if (stability.surelyUnstable(left, diagonal)) continue;
       const pair = pairForces(axialN, lengthM, faceM, endFaceM, panelM, chord, diagonal, criticalPerAreaN);
       if (!pair) continue;
       const chordUtilisation = pair.chordForceN / c.resistanceN;
