@@ -2,7 +2,7 @@ import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { DesignParts, FloorEnvelope } from "../kit";
-import { capEnvelope, check, convergeSelfWeight, defineScheme, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, planCombinations, SchemeError, SizingError, CABLE_ROOF_DEFLECTION_RATIO } from "../kit";
+import { capEnvelope, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, planCombinations, SchemeError, SizingError, CABLE_ROOF_DEFLECTION_RATIO } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
 import { capHeightAt } from "../../mechanics/spherical-cap";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
@@ -175,7 +175,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     // the central ring's pull is the same in every combination of the closed form (ridge and valley share the load): the most utilised of the others names the case
     governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
     ...capEnvelope(layout.cap, brief.eavesHeightM),
-    drawing: { section, plan: cableNetPlan(layout) },
+    drawing: drawingWithLazyPlan(section, () => cableNetPlan(layout)),
     ...(analysis ? { analysis: analysis.summary } : {}),
     reason: analysis?.reason ?? "",
   };
