@@ -105,20 +105,30 @@ export function geodesicCapBands(frequency: number, radiusM: number, capAngleRad
   for (let e = 0; e < p.length; e++) if (faceUse[e] === 1) scratch.ringSeen[p[e]!] = scratch.ringSeen[q[e]!] = generation;
   const onRing = (n: number) => scratch.ringSeen[n] === generation;
   const ringRadius = Math.sqrt(Math.max(0, 1 - zCut * zCut));
-  // a node's position, m: ring nodes moved along their meridian onto the cut circle (ringOntoCut)
-  const at = (n: number): [number, number, number] => {
-    const [x, y, z] = [unit[3 * n]!, unit[3 * n + 1]!, unit[3 * n + 2]!];
+  // a node on the unit sphere, ring nodes moved along their meridian onto the cut circle (ringOntoCut)
+  const moved = new Float64Array(6);
+  const place = (n: number, slot: number): void => {
+    const x = unit[3 * n]!;
+    const y = unit[3 * n + 1]!;
     const r = onRing(n) ? Math.hypot(x, y) : 0;
-    return r > 0 ? [(x / r) * ringRadius * radiusM, (y / r) * ringRadius * radiusM, zCut * radiusM] : [x * radiusM, y * radiusM, z * radiusM];
+    moved[slot] = r > 0 ? (x / r) * ringRadius : x;
+    moved[slot + 1] = r > 0 ? (y / r) * ringRadius : y;
+    moved[slot + 2] = r > 0 ? zCut : unit[3 * n + 2]!;
   };
   const bands = emptyBands(capAngleRad, bandCount);
   for (let e = 0; e < p.length; e++) {
     if (faceUse[e] === 1) continue;
-    const [a, b] = [at(p[e]!), at(q[e]!)];
-    const touchesRing = onRing(p[e]!) || onRing(q[e]!);
-    const angle = Math.atan2(Math.hypot(a[0] + b[0], a[1] + b[1]), a[2] + b[2]);
-    const band = bands[touchesRing ? bandCount : Math.min(bandCount - 1, Math.floor((angle / capAngleRad) * bandCount))]!;
-    addToBand(band, e, Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]));
+    place(p[e]!, 0);
+    place(q[e]!, 3);
+    const [ax, ay, az, bx, by, bz] = moved as unknown as [number, number, number, number, number, number];
+    let at = bandCount;
+    if (!(onRing(p[e]!) || onRing(q[e]!))) {
+      // the midpoint's angle from the crown, on the nodes in metres as latticeBands reads them
+      const angle = Math.atan2(Math.hypot(ax * radiusM + bx * radiusM, ay * radiusM + by * radiusM), az * radiusM + bz * radiusM);
+      at = Math.min(bandCount - 1, Math.floor((angle / capAngleRad) * bandCount));
+    }
+    const [dx, dy, dz] = [ax - bx, ay - by, az - bz];
+    addToBand(bands[at]!, e, Math.sqrt(dx * dx + dy * dy + dz * dz) * radiusM);
   }
   return finishedBands(bands);
 }
