@@ -352,7 +352,9 @@ export function geodesicSphere(frequency: number, upToRad = Math.PI): GeodesicSp
     const centre = normalise([A[0] + B[0] + C[0], A[1] + B[1] + C[1], A[2] + B[2] + C[2]]);
     return Math.acos(Math.max(-1, Math.min(1, centre[2]))) - FACE_ANGULAR_RADIUS - 1e-9;
   });
-  return { frequency, upToRad, unit: Float64Array.from(g.unit), faces: Int32Array.from(g.faces.flat()), faceStart: g.faceStart, reachRad };
+  const faces = new Int32Array(3 * g.faces.length);
+  g.faces.forEach(([a, b, c], t) => faces.set([a, b, c], 3 * t));
+  return { frequency, upToRad, unit: Float64Array.from(g.unit), faces, faceStart: g.faceStart, reachRad };
 }
 
 /** Tolerance of the cut: a node is kept when z ≥ cos φ0 − this. */
