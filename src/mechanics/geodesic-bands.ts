@@ -1,21 +1,23 @@
 import { CapTooSmallError, CUT_TOLERANCE, geodesicSphere, type GeodesicSphere } from "./geodesic";
 import { addToBand, emptyBands, finishedBands, type LatticeBand } from "./lattice-bands";
 
-const SPHERE_CACHE_SIZE = 32;
+/** Frequencies remembered: a timber search at 300 m cuts caps of about 40 frequencies (22–83). */
+const SPHERE_CACHE_SIZE = 64;
+/** A sphere is built to the next multiple of this angle above the cap asked for (π/8: at most eight sizes; strictly above, so a cap on a multiple is within it). */
+const SPHERE_ANGLE_STEP_RAD = Math.PI / 8;
 const spheres = new Map<number, GeodesicSphere>();
 
 /**
- * The unit sphere of frequency v, remembered for the last few frequencies (shared: read only): its
- * upper half, which holds every dome's cap (rise ≤ span/2), or all of it for a larger cap.
+ * The unit sphere of frequency v, remembered for the last frequencies used (shared: read only): built
+ * to the next multiple of π/8 above the cap angle, and again larger when a larger cap is asked for
+ * (a shallow cap of a fine mesh would otherwise pay for a hemisphere).
  */
 function sphereOf(frequency: number, capAngleRad: number): GeodesicSphere {
   let sphere = spheres.get(frequency);
-  if (!sphere || sphere.upToRad < capAngleRad) {
-    sphere = geodesicSphere(frequency, capAngleRad <= Math.PI / 2 ? Math.PI / 2 : Math.PI);
-    spheres.delete(frequency);
-    if (spheres.size >= SPHERE_CACHE_SIZE) spheres.delete(spheres.keys().next().value as number);
-    spheres.set(frequency, sphere);
-  }
+  if (!sphere || sphere.upToRad < capAngleRad) sphere = geodesicSphere(frequency, Math.min(Math.PI, (Math.floor(capAngleRad / SPHERE_ANGLE_STEP_RAD) + 1) * SPHERE_ANGLE_STEP_RAD));
+  spheres.delete(frequency); // last used last
+  if (spheres.size >= SPHERE_CACHE_SIZE) spheres.delete(spheres.keys().next().value as number);
+  spheres.set(frequency, sphere);
   return sphere;
 }
 

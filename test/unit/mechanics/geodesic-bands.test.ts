@@ -42,6 +42,15 @@ describe("geodesicCapBands: the bands of a cap cut from the remembered sphere", 
     expect(geodesicCapBands(22, cap.radiusM, cap.edgeAngleRad, 4)).toEqual(first);
   });
 
+  it("a larger cap of a frequency already cut (the sphere is built again larger), and caps beyond a hemisphere", () => {
+    for (const [frequency, capAngleRad] of [[12, 0.3], [12, Math.PI / 8], [12, 1.5], [12, 2.5], [12, Math.PI], [7, 0.9]] as const) {
+      const built = latticeBands(geodesicCap(frequency, 50, capAngleRad), 4);
+      const cut = geodesicCapBands(frequency, 50, capAngleRad, 4);
+      expect(cut.map((b) => [b.count, b.edges])).toEqual(built.map((b) => [b.count, b.edges]));
+      cut.forEach((b, i) => expectRelClose(b.totalLengthM, built[i]!.totalLengthM, 1e-12));
+    }
+  });
+
   it("a cap too small for the frequency is refused as geodesicCap refuses it", () => {
     expect(() => geodesicCap(1, 100, 0.2)).toThrow(CapTooSmallError);
     expect(() => geodesicCapBands(1, 100, 0.2, 4)).toThrow(CapTooSmallError);
