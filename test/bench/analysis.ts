@@ -117,12 +117,10 @@ const NET_ROUNDS = 10;
 // iterations per case. The full design (closed form, prestress search, every combination) beside it.
 {
   const { cableNet } = await import("../../src/schemes/cable-net");
-  const { cableNetLayout } = await import("../../src/schemes/cable-net/geometry");
-  const { cableNetModel, PRESTRESS_STRAIN } = await import("../../src/analysis/models/cable-net-model");
-  const { netNodeLoads, NET_HOOP_PRESTRESS_SHARE } = await import("../../src/schemes/cable-net/analysis");
+  const { netNodeLoads } = await import("../../src/schemes/cable-net/analysis");
   const { planCombinations, unboundedCombinations } = await import("../../src/schemes/kit");
   const { designBasis } = await import("../../src/loads");
-  const { capHeightAt } = await import("../../src/mechanics/spherical-cap");
+  const { cableNetDesignModel } = await import("../helpers/cable-net-design-model");
   const { solveCableModel } = await import("../../src/analysis/cable-solver");
   const { DEFAULT_BRIEF } = await import("../../src/brief");
   const { defaultCatalogue } = await import("../../src/catalogue/default-catalogue");
@@ -132,17 +130,7 @@ const NET_ROUNDS = 10;
   const d = cableNet.design(brief, options, defaultCatalogue());
   const designCpu = cpuMs() - c0;
   const o = cableNet.defaults;
-  const layout = cableNetLayout(brief, o.masts, o.mastRingRatio, o.mastHeightRatio, o.radialCablesPerMast, o.hangerSpacingM);
-  const prestressN = (d.analysis?.prestressKN ?? 0) * 1000;
-  const selfWeightKPa = (d.selfWeightKgPerM2 * 9.80665) / 1000;
-  const ea = prestressN / PRESTRESS_STRAIN;
-  const net = cableNetModel({
-    masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
-    centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM, prestressN, hoopShare: NET_HOOP_PRESTRESS_SHARE,
-    permanentPa: (selfWeightKPa + brief.servicesKPa) * 1000, eaN: { outer: ea, inner: ea, hoop: ea / 2, ring: 10 * ea },
-    // the model the scheme analysed: its centre held at the crown when the design holds it (the default)
-    ...(o.centre === "held-down" ? { centreHeldAtM: capHeightAt(layout.cap, layout.centralRingRadiusM) } : {}),
-  });
+  const { layout, prestressN, selfWeightKPa, net } = cableNetDesignModel(brief, o, d);
   const basis = designBasis(brief);
   const every = planCombinations(brief, basis);
   // as the scheme checks them: the lighter uniform combinations are bounded by the heaviest (kit unboundedCombinations)

@@ -7,14 +7,12 @@
 // under the imposed load than under the heavier uniform snow.)
 import { describe, it, expect } from "vitest";
 import { cableNet } from "../../../src/schemes/cable-net";
-import { cableNetLayout } from "../../../src/schemes/cable-net/geometry";
-import { netNodeLoads, NET_HOOP_PRESTRESS_SHARE } from "../../../src/schemes/cable-net/analysis";
-import { cableNetModel, PRESTRESS_STRAIN } from "../../../src/analysis/models/cable-net-model";
+import { netNodeLoads } from "../../../src/schemes/cable-net/analysis";
 import { solveCableModel } from "../../../src/analysis/cable-solver";
 import { planCombinations, unboundedCombinations, uniformPressurePa } from "../../../src/schemes/kit";
 import { designBasis } from "../../../src/loads";
 import { DEFAULT_BRIEF } from "../../../src/brief";
-import { capHeightAt } from "../../../src/mechanics/spherical-cap";
+import { cableNetDesignModel } from "../../helpers/cable-net-design-model";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 
 const catalogue = defaultCatalogue();
@@ -46,17 +44,7 @@ describe.each([60, 160])("the screened uniform combinations are bounded by the h
     expect(d.warnings.some((w) => w.startsWith("not analysed, bounded by the heaviest uniform combination"))).toBe(true);
   });
   it("moves less, stays as taut and pulls no cable harder than the combinations kept", () => {
-    const layout = cableNetLayout(brief, o.masts, o.mastRingRatio, o.mastHeightRatio, o.radialCablesPerMast, o.hangerSpacingM);
-    const prestressN = d.analysis!.prestressKN! * 1000;
-    const selfWeightKPa = (d.selfWeightKgPerM2 * 9.80665) / 1000;
-    const ea = prestressN / PRESTRESS_STRAIN;
-    const net = cableNetModel({
-      masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
-      centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM, prestressN, hoopShare: NET_HOOP_PRESTRESS_SHARE,
-      permanentPa: (selfWeightKPa + brief.servicesKPa) * 1000, eaN: { outer: ea, inner: ea, hoop: ea / 2, ring: 10 * ea },
-      // the model the scheme analysed: its centre held at the crown when the design holds it (the default)
-      ...(o.centre === "held-down" ? { centreHeldAtM: capHeightAt(layout.cap, layout.centralRingRadiusM) } : {}),
-    });
+    const { selfWeightKPa, net } = cableNetDesignModel(brief, o, d);
     const basis = designBasis(brief);
     const combinations = planCombinations(brief, basis);
     const kept = unboundedCombinations(combinations, selfWeightKPa);
