@@ -8,9 +8,11 @@
  * the central ring is free, or held at a given height by a tie-down (its nodes then held), and every
  * cable node is free.
  *
- * Force densities: q = T/ℓ with ℓ the circumferential-cable spacing for the radial cables,
- * `hoopShare` × that for the circumferential cables, and for the central ring the q that balances
- * the radial cables' pull on a ring of radius r_c (T_ring = pull/(2 sin(π/N)), N ring nodes). The
+ * Force densities: q = T/ℓ with ℓ each segment's own plan length (so every segment of a cable
+ * starts at the cable's prestress, horizontally for the radial cables), T the radial prestress for
+ * the radial cables, `hoopShare` × that for the circumferential cables (capped: see
+ * circumferentialPrestressN), and for the central ring the T that balances the inner radial cables'
+ * pull on it (T_ring = pull/(2 sin(π/N)), N ring nodes). The
  * shape is the one in equilibrium under those force densities and the permanent load at the nodes
  * (so it hangs under its own weight; the prestress sets how far). Every member starts at its found
  * force, in equilibrium with the permanent load (the solver's start).
@@ -188,6 +190,23 @@ export const PRESTRESS_STRAIN = 0.002;
 const BALANCE_PASSES = 6;
 
 /**
+ * Most of a radial cable's pull the circumferential cables inside the mast ring may take together
+ * (our rule, no source): each of them pulls every inner radial cable towards the centre by about
+ * 2π·T_c/lines, so the inner cable's pull falls from the mast head to the ring by that much at every
+ * crossing; were the sum to reach the pull itself, the ring would be pulled to a point (with 4
+ * radial cables per mast at 300 m, half the radial prestress on 13 inner circumferentials is 1.7×).
+ */
+export const INNER_HOOPS_SHARE_OF_RADIAL = 0.5;
+
+/** The circumferential cables' prestress: `hoopShare` × the radial one, less if the inner ones would take more than INNER_HOOPS_SHARE_OF_RADIAL of a radial cable's pull. */
+export function circumferentialPrestressN(input: Pick<CableNetModelInput, "masts" | "cablesPerSide" | "mastRadiusM" | "centralRingRadiusM" | "hoopRadiiM" | "prestressN" | "hoopShare">): number {
+  const inner = input.hoopRadiiM.filter((r) => r > input.centralRingRadiusM && r < input.mastRadiusM).length;
+  const lines = input.masts * input.cablesPerSide;
+  const cap = inner > 0 ? (INNER_HOOPS_SHARE_OF_RADIAL * lines) / (2 * Math.PI * inner) : Infinity;
+  return Math.min(input.hoopShare, cap) * input.prestressN;
+}
+
+/**
  * Builds and form-finds the net; the inner radial cables' force density is scaled (a few passes)
  * until the prestress pulls on the mast heads balance horizontally, so the backstays carry only
  * what the loads add (the closed form balances them the same way).
@@ -196,17 +215,19 @@ const BALANCE_PASSES = 6;
 export function cableNetModel(input: CableNetModelInput): CableNetModel {
   const t = topology(input);
   const areaM2 = tributaryAreas(input, t);
-  const spacing = input.hoopRadiiM.length > 1 ? ((input.hoopRadiiM[input.hoopRadiiM.length - 1] as number) - (input.hoopRadiiM[0] as number)) / (input.hoopRadiiM.length - 1) : input.edgeRadiusM / 4;
-  const qRadial = input.prestressN / spacing;
   const lines = input.masts * input.cablesPerSide;
   const chord = 2 * Math.sin(Math.PI / lines);
+  // every segment's force density from its own plan length (q = T/ℓ): each cable then starts at its prestress (radial: horizontally) all along
+  const planM = t.branches.map(([i, j]) => Math.hypot(t.nodes[j]![0] - t.nodes[i]![0], t.nodes[j]![1] - t.nodes[i]![1]));
   const loadsN = areaM2.map((A) => [0, 0, -input.permanentPa * A] as const);
+  const hoopN = circumferentialPrestressN(input);
   let innerScale = 1;
   let found = formFind({ nodes: t.nodes, branches: t.branches, forceDensityNPerM: 1, fixed: t.fixed });
   for (let pass = 0; pass < BALANCE_PASSES; pass++) {
-    const qInner = innerScale * qRadial;
-    const qRing = (qInner * spacing) / (chord * chord * input.centralRingRadiusM);
-    const q = t.tags.map((tag) => (tag.family === "circumferential" ? input.hoopShare * qRadial : tag.family === "central ring" ? qRing : tag.family === "inner radial" ? qInner : qRadial));
+    const inner = innerScale * input.prestressN;
+    // the ring's tension balances the inner cables' horizontal pull at each node: 2 T sin(π/N) = T_inner
+    const forceOf = (family: NetMemberFamily) => (family === "circumferential" ? hoopN : family === "central ring" ? inner / chord : family === "inner radial" ? inner : input.prestressN);
+    const q = t.tags.map((tag, k) => forceOf(tag.family) / (planM[k] as number));
     found = formFind({ nodes: t.nodes, branches: t.branches, forceDensityNPerM: q, fixed: t.fixed, loadsN });
     const pull = headPulls(t, found.nodes, found.forcesN);
     if (!(pull.inner > 0 && pull.outer > 0) || Math.abs(pull.outer / pull.inner - 1) < 1e-3) break;
