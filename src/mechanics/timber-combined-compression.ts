@@ -27,19 +27,23 @@ export interface TimberCompressionBending {
  */
 export function timberCompressionBendingUtilisation(m: TimberCompressionBending): number {
   const km = m.km ?? 0.7;
-  for (const [name, value] of [["compressionPa", m.compressionPa], ["bendingYPa", m.bendingYPa], ["bendingZPa", m.bendingZPa]] as const) {
-    if (!(value >= 0)) throw new RangeError(`invalid ${name}: ${value} Pa (expected ≥ 0)`);
-  }
-  for (const [name, value] of [["compressionStrengthPa", m.compressionStrengthPa], ["bendingStrengthYPa", m.bendingStrengthYPa], ["bendingStrengthZPa", m.bendingStrengthZPa]] as const) {
-    if (!(value > 0)) throw new RangeError(`invalid ${name}: ${value} Pa (expected > 0)`);
-  }
-  for (const [name, value] of [["kcY", m.kcY], ["kcZ", m.kcZ]] as const) {
-    if (!(value > 0 && value <= 1)) throw new RangeError(`invalid ${name}: ${value} (expected 0 < k_c ≤ 1)`);
-  }
+  // checked one by one, not by loops over new arrays: the section search calls this some hundred thousand times a search
+  inRange("compressionPa", m.compressionPa, m.compressionPa >= 0, "Pa (expected ≥ 0)");
+  inRange("bendingYPa", m.bendingYPa, m.bendingYPa >= 0, "Pa (expected ≥ 0)");
+  inRange("bendingZPa", m.bendingZPa, m.bendingZPa >= 0, "Pa (expected ≥ 0)");
+  inRange("compressionStrengthPa", m.compressionStrengthPa, m.compressionStrengthPa > 0, "Pa (expected > 0)");
+  inRange("bendingStrengthYPa", m.bendingStrengthYPa, m.bendingStrengthYPa > 0, "Pa (expected > 0)");
+  inRange("bendingStrengthZPa", m.bendingStrengthZPa, m.bendingStrengthZPa > 0, "Pa (expected > 0)");
+  inRange("kcY", m.kcY, m.kcY > 0 && m.kcY <= 1, "(expected 0 < k_c ≤ 1)");
+  inRange("kcZ", m.kcZ, m.kcZ > 0 && m.kcZ <= 1, "(expected 0 < k_c ≤ 1)");
   if (!(km > 0 && km <= 1)) throw new RangeError(`invalid km: ${km} (expected 0 < k_m ≤ 1)`);
   const my = m.bendingYPa / m.bendingStrengthYPa;
   const mz = m.bendingZPa / m.bendingStrengthZPa;
   const eq623 = m.compressionPa / (m.kcY * m.compressionStrengthPa) + my + km * mz;
   const eq624 = m.compressionPa / (m.kcZ * m.compressionStrengthPa) + km * my + mz;
   return Math.max(eq623, eq624);
+}
+
+function inRange(name: string, value: number, ok: boolean, expected: string): void {
+  if (!ok) throw new RangeError(`invalid ${name}: ${value} ${expected}`);
 }

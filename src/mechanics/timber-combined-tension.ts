@@ -10,9 +10,10 @@
  * @example timberTensionBendingUtilisation(6e6, 12e6, 4e6, 16e6) // 0.75
  */
 export function timberTensionBendingUtilisation(tensionPa: number, tensionStrengthPa: number, bendingYPa: number, bendingStrengthPa: number, bendingZPa = 0, km = 0.7): number {
-  for (const [name, value] of [["tension", tensionPa], ["bending y", bendingYPa], ["bending z", bendingZPa]] as const) {
-    if (!(value >= 0)) throw new RangeError(`invalid ${name} stress: ${value} Pa (expected ≥ 0)`);
-  }
+  // checked one by one, not by a loop over a new array: the section search calls this some hundred thousand times a search
+  nonNegativeStress("tension", tensionPa);
+  nonNegativeStress("bending y", bendingYPa);
+  nonNegativeStress("bending z", bendingZPa);
   if (!(tensionStrengthPa > 0)) throw new RangeError(`invalid tension strength: ${tensionStrengthPa} Pa (expected > 0)`);
   if (!(bendingStrengthPa > 0)) throw new RangeError(`invalid bending strength: ${bendingStrengthPa} Pa (expected > 0)`);
   if (!(km > 0 && km <= 1)) throw new RangeError(`invalid km: ${km} (expected 0 < k_m ≤ 1)`);
@@ -20,4 +21,8 @@ export function timberTensionBendingUtilisation(tensionPa: number, tensionStreng
   const my = bendingYPa / bendingStrengthPa;
   const mz = bendingZPa / bendingStrengthPa;
   return Math.max(t + my + km * mz, t + km * my + mz);
+}
+
+function nonNegativeStress(name: string, value: number): void {
+  if (!(value >= 0)) throw new RangeError(`invalid ${name} stress: ${value} Pa (expected ≥ 0)`);
 }
