@@ -155,7 +155,29 @@ export function frameSystem(model: FrameModel) {
       for (let d = 0; d < 3; d++) stretch += R[d]! * (u[6 * m.j + d]! - u[6 * m.i + d]!);
       return (m.section.eaN / L) * stretch;
     });
-  return { equationOf, count, assemble, axialForces, lengthsM: axes.map((a) => a.L) };
+  /**
+   * The larger end's bending moment of each member (the resultant of the moments about its local y
+   * and z, N·m) from global displacements: the member's end forces k·T·u. Loads act at the nodes
+   * only, so a member's moment is linear along it and largest at an end.
+   */
+  const endMomentsNm = (u: Float64Array): Float64Array => {
+    const local = new Float64Array(12);
+    return Float64Array.from(model.members, (m, e) => {
+      const { R, L } = axes[e]!;
+      for (let blk = 0; blk < 4; blk++) {
+        const at = (blk < 2 ? 6 * m.i : 6 * m.j) + (blk % 2) * 3;
+        for (let r = 0; r < 3; r++) local[blk * 3 + r] = R[r * 3]! * u[at]! + R[r * 3 + 1]! * u[at + 1]! + R[r * 3 + 2]! * u[at + 2]!;
+      }
+      const k = localStiffness(m.section, L, 0, true);
+      const force = (row: number) => {
+        let sum = 0;
+        for (let c = 0; c < 12; c++) sum += k[row * 12 + c]! * local[c]!;
+        return sum;
+      };
+      return Math.max(Math.hypot(force(4), force(5)), Math.hypot(force(10), force(11)));
+    });
+  };
+  return { equationOf, count, assemble, axialForces, endMomentsNm, lengthsM: axes.map((a) => a.L) };
 }
 
 export interface FrameSolution {

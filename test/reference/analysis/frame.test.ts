@@ -106,3 +106,29 @@ describe("geodesic lattice against the equivalent continuum (analysis-benchmarks
     expectRelClose(sorted[Math.floor(sorted.length / 2)]!, (-(1000 * R) / 2) * (meanL / Math.sqrt(3)), 0.05);
   });
 });
+
+describe("member end moments from the frame (frameSystem.endMomentsNm)", () => {
+  it("cantilever with a tip load P: PL at the root, PL/2 at the middle node (statics)", () => {
+    const L = 4;
+    const P = 2500;
+    const model = bar([1, 2, 2], L, 2, [clamp]);
+    const normal = [2, -1, 0].map((c) => c / Math.sqrt(5));
+    normal.forEach((c, k) => (model.loads[12 + k] = P * c));
+    const system = frameSystem(model);
+    const r = solveFrameLinear(model, system);
+    const m = system.endMomentsNm(r.displacements);
+    expectRelClose(m[0]!, P * L, 1e-9); // root element: PL at the root end, PL/2 at the other
+    expectRelClose(m[1]!, (P * L) / 2, 1e-9); // tip element: PL/2 at its root end, 0 at the tip
+  });
+  it("beam fixed at both ends, central point load: PL/8 at the ends and at mid-span (the fixed-end beam of any beam table, e.g. Roark's Formulas for Stress and Strain, Table 8.1; table number from memory)", () => {
+    const L = 10;
+    const P = 8000;
+    const model = bar([1, 0, 0], L, 2, [clamp, { node: 2, fixed: [true, true, true, true, true, true] }]);
+    model.loads[6 + 2] = -P;
+    const system = frameSystem(model);
+    const r = solveFrameLinear(model, system);
+    const m = system.endMomentsNm(r.displacements);
+    expectRelClose(m[0]!, (P * L) / 8, 1e-9);
+    expectRelClose(m[1]!, (P * L) / 8, 1e-9);
+  });
+});
