@@ -3,7 +3,7 @@ import type { ChsChoice } from "../../catalogue/pick-chs";
 import type { BucklingCurve } from "../../mechanics/flexural-buckling";
 import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
 import { simplySupportedUdl } from "../../mechanics/beam";
-import { chsResistance } from "../../catalogue/pick-chs";
+import { chsResistance, tubeBendingModulusM3 } from "../../catalogue/pick-chs";
 import { pickChs } from "../kit";
 
 /** What one parallel-chord Warren truss must carry. Loads in N/m along the span. */
@@ -109,7 +109,9 @@ function strengthZones(d: TrussDemand, sections: readonly ChsSection[], steel: {
   const withBendingFor = (chordN: number) => (s: ChsSection) => {
     if (localMomentNm === 0) return true;
     const c = chsResistance(s, { forceN: -chordN, effectiveLengthM: topLengthM, yieldPa: steel.yieldPa, curve: steel.curve });
-    return c !== null && c.utilisation + localMomentNm / (s.plasticModulusM3 * steel.yieldPa) <= 1;
+    // plastic modulus for class 1–2 tubes, elastic for class 3 (EN 1993-1-1 eqs 6.13–6.14): a class 3 chord with W_pl was over-rated by W_pl/W_el ≈ 1.3
+    const modulusM3 = tubeBendingModulusM3(s, steel.yieldPa);
+    return c !== null && modulusM3 !== null && c.utilisation + localMomentNm / (modulusM3 * steel.yieldPa) <= 1;
   };
   return Array.from({ length: d.zones }, (_, z) => {
     const x0 = edges[z]!;
