@@ -4,8 +4,9 @@ import type { GeodesicCap } from "../../mechanics/geodesic";
 import type { SphericalCap } from "../../mechanics/spherical-cap";
 import type { Check, DesignAnalysis } from "../kit";
 import type { BandResult } from "./sizing";
+import type { ChsSection } from "../../catalogue/types";
 import { STEEL_E_PA } from "../../mechanics/flexural-buckling";
-import { chsResistance } from "../../catalogue/pick-chs";
+import { chsResistance, tubeBendingModulusM3, tubeClass } from "../../catalogue/pick-chs";
 import { designBasis, type DesignBasis } from "../../loads/design-basis";
 import { combinationAtPlanKPa } from "../../loads/combination-summary";
 import type { Combination } from "../../loads/design-combinations";
@@ -48,9 +49,8 @@ export interface NetAnalysisInputs {
 /**
  * The 3D analysis of the actual net (issue 13 item 6): a rigid-jointed frame of the struts with
  * their chosen tubes, base ring pinned, under the uniform-snow and the drifted-snow combinations as
- * distributions over the plan (wind in them taken vertical on plan); each band's largest analysed
- * axial force checked against its tube (axial only: the joint moments of the frame are not
- * checked); on demand, the lowest elastic buckling factor of the governing case, times the
+ * distributions over the plan (wind in them taken vertical on plan); each bar's analysed axial force
+ * with the bending of the rigid joints checked against its band's tube (barUtilisation); on demand, the lowest elastic buckling factor of the governing case, times the
  * knock-down, for general buckling, beside the continuum formula's factor.
  */
 export function analyseNet(input: NetAnalysisInputs): { analysis: DesignAnalysis; checks: Check[]; governingCase: string } {
@@ -68,18 +68,17 @@ export function analyseNet(input: NetAnalysisInputs): { analysis: DesignAnalysis
   });
   const checks: Check[] = [];
   let worst = { utilisation: 0, caseName: cases[0]!.combination.name, caseIndex: 0 };
-  bands.forEach((b, k) => {
-    for (const [ci, c] of cases.entries()) {
-      let compressionN = 0;
-      c.solution.axialN.forEach((n, e) => band[e] === k && (compressionN = Math.min(compressionN, n)));
-      const r = chsResistance(b.choice.section, { forceN: compressionN, effectiveLengthM: b.band.maxLengthM, yieldPa: input.steel.yieldPa, curve: input.steel.curve });
-      const utilisation = r ? r.utilisation : Number.POSITIVE_INFINITY;
+  for (const [ci, c] of cases.entries()) {
+    const moments = system.endMomentsNm(c.solution.displacements);
+    c.solution.axialN.forEach((n, e) => {
+      const b = bands[band[e]!]!;
+      const utilisation = barUtilisation(b.choice.section, n, moments[e]!, b.band.maxLengthM, input.steel);
       if (utilisation > worst.utilisation) worst = { utilisation, caseName: c.combination.name, caseIndex: ci };
-    }
-  });
+    });
+  }
   const governing = cases[worst.caseIndex]!;
   const capacity = worst.utilisation > 0 ? 1 / worst.utilisation : 1;
-  checks.push(check(`bars under the analysed ${governing.combination.name}: axial force`, "3D frame of the net, EN 1993-1-1 §6.3.1 (joint moments not checked)", 1, capacity, ""));
+  checks.push(check(`bars under the analysed ${governing.combination.name}: axial force with the joints' bending`, "3D rigid-jointed frame of the net; EN 1993-1-1 §6.3.3, eq. 6.61 with Annex B's k for C_m = 1, in compression; §6.2.1(7) in tension; W plastic or elastic by the tube's class", 1, capacity, ""));
   const base = -(cap.radiusM - cap.riseM) + brief.eavesHeightM;
   const nodes = mesh.nodes.map((p) => [p[0], p[1], p[2] + base] as const);
   const analysis: DesignAnalysis = {
@@ -103,6 +102,25 @@ export function analyseNet(input: NetAnalysisInputs): { analysis: DesignAnalysis
     }
   }
   return { analysis, checks, governingCase: governing.combination.name };
+}
+
+/**
+ * A tube's utilisation under axial force N (tension +) and the resultant end moment M of the frame:
+ * in compression N/N_b,Rd + k·M/M_Rd (EN 1993-1-1 eq. 6.61) with Annex B Table B.1's k at its upper
+ * bound for C_m = 1 (any moment shape): 1 + 0.8n for class 1–2, 1 + 0.6n for class 3, n = N/N_b,Rd;
+ * in tension N/N_t,Rd + M/M_Rd (§6.2.1(7), the linear sum). M_Rd = W f_y with W plastic or elastic by
+ * class (γ_M0 = γ_M1 = 1.0, the recommended values of §6.1). The resultant moment of a tube, as is
+ * usual for circular sections (common practice, no source). +∞ when the tube is too slender for the
+ * buckling curve or class 4.
+ */
+function barUtilisation(section: ChsSection, axialN: number, momentNm: number, effectiveLengthM: number, steel: NetAnalysisInputs["steel"]): number {
+  const r = chsResistance(section, { forceN: axialN, effectiveLengthM, yieldPa: steel.yieldPa, curve: steel.curve });
+  const modulusM3 = tubeBendingModulusM3(section, steel.yieldPa);
+  if (!r || modulusM3 === null) return Number.POSITIVE_INFINITY;
+  const bending = momentNm / (modulusM3 * steel.yieldPa);
+  if (axialN >= 0) return r.utilisation + bending;
+  const k = 1 + (tubeClass(section, steel.yieldPa) <= 2 ? 0.8 : 0.6) * r.utilisation;
+  return r.utilisation + k * bending;
 }
 
 function maxTranslation(u: Float64Array): number {
