@@ -3,7 +3,7 @@ import { analysedCombinations, unboundedCombinations, uniformPressurePa, type An
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
 import { cableNetModel, type CableNetModel, type NetMemberFamily } from "../../analysis/models/cable-net-model";
 import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
-import { lengthOf, type NodalLoad, type Vec3 } from "../../analysis/model";
+import { lengthOf, restLengths, type NodalLoad, type Vec3 } from "../../analysis/model";
 import { capHeightAt } from "../../mechanics/spherical-cap";
 import { BACKSTAY_SLOPE_RAD, type CableNetLayout } from "./geometry";
 
@@ -81,81 +81,219 @@ export function netNodeLoads(input: Pick<NetAnalysisInput, "basis" | "selfWeight
   return loads;
 }
 
-type Round = { alpha: number; net: CableNetModel; solved: { c: PlanCombination; s: CableSolution }[]; pass: boolean; estimate: number; crownM: number };
+type Solved = { c: PlanCombination; s: CableSolution }[];
+/** A round of the prestress search: the net form-found at α and solved under some combinations; its worst margin (marginOf) and whether it passes (converged, margin ≥ 0). */
+export interface NetRound {
+  alpha: number;
+  net: CableNetModel;
+  solved: Solved;
+  pass: boolean;
+  crownM: number;
+  margin: number | null;
+}
+type Round = NetRound;
 
-const RAISES = 8;
-const BISECTIONS = 3;
-/** Times the prestress may be raised by a quarter when a combination the search did not run fails at the prestress found. */
-const VERIFY_RAISES = 4;
+/** One round of the prestress search as it ran (for benches and profiles). */
+export interface NetSearchRound {
+  alphaN: number;
+  combinations: number;
+  pass: boolean;
+  /** The round's worst normalised margin (analyseNet), null when some combination did not converge. */
+  margin: number | null;
+  iterations: number;
+}
+
+/** The search stops when the least passing prestress is within this share above the predicted least (or above a failing one). */
+const SEARCH_TOLERANCE = 0.02;
+/** …or when a passing round's worst margin (marginOf) is at most this: its least-taut cable within 0.2 % of the residual prestress's share of its prestress force (f/f0 ≤ m + 0.002(1 − m)). */
+const MARGIN_TOLERANCE = 0.002;
+/** Rounds the search may run (the searched combinations; each verification may add some and search again). */
+const MAX_ROUNDS = 14;
+const MAX_VERIFICATIONS = 3;
+/** Growth of the prestress after a round that did not converge (nothing to extrapolate from). */
+const GROWTH_UNCONVERGED = 3;
+/** Most the prestress may grow after a failing round that converged (its margin predicts how far). */
+const GROWTH = 4;
+/**
+ * The search starts at this multiple of the closed form's prestress: the 3D analysis needed 3.4–7×
+ * it held down and up to 16× free (default brief and rise ÷ span 0.1, 60–300 m, net6), and a round well below the answer
+ * does not converge, costing the most of any round, and tells nothing but "more".
+ */
+const START_OF_SEED = 3;
 /** Least radial prestress tried, as a share of the heaviest combination's load per radial cable (a floor for the search, not a design value). */
 const PRESTRESS_FLOOR_OF_LOAD = 0.05;
 
 /**
+ * A round's worst margin over the criteria, each normalised so that it reads g = 1 − c/α when the
+ * loads' effect does not grow with the prestress α (so a root is predicted from one round, α* = α(1 − g),
+ * and from two by a secant in 1/α): a cable's (f/f0 − m)/(1 − m) (a slack one at its would-be force
+ * EA(ℓ − ℓ_u)/ℓ_u, negative), the displacement's 1 − d/limit, and a free crown's
+ * 1 − (head − crown)/(head − roof crown) (when given). Null when some combination did not converge.
+ */
+function marginOf(net: CableNetModel, solved: Solved, m: number, limitM: number, crown?: { crownM: number; roofM: number; headM: number }): number | null {
+  if (solved.some(({ s }) => !s.converged)) return null;
+  const rest = restLengths(net.model);
+  const members = net.model.members;
+  let g = crown ? 1 - (crown.headM - crown.crownM) / (crown.headM - crown.roofM) : Infinity;
+  for (const { s } of solved) {
+    g = Math.min(g, 1 - maxDisplacement(s) / limitM);
+    const x = s.coordinatesM;
+    members.forEach((mem, j) => {
+      const f0 = mem.initialForceN ?? 0;
+      if (!(f0 > 0)) return;
+      let f = s.forcesN[j] as number;
+      if (s.slack[j]) {
+        const L = rest[j] as number;
+        f = (mem.eaN * (Math.hypot(x[3 * mem.j]! - x[3 * mem.i]!, x[3 * mem.j + 1]! - x[3 * mem.i + 1]!, x[3 * mem.j + 2]! - x[3 * mem.i + 2]!) - L)) / L;
+      }
+      g = Math.min(g, (f / f0 - m) / (1 - m));
+    });
+  }
+  return g;
+}
+
+/**
+ * The prestress where the margin is predicted to reach zero: by the secant in 1/α through the
+ * highest failing and the lowest passing round with margins, else through the two rounds nearest
+ * the root, else α(1 − g) from the one round (the model g = 1 − c/α).
+ */
+function predictedRoot(rounds: readonly Round[]): number | null {
+  const known = rounds.filter((r): r is Round & { margin: number } => r.margin !== null);
+  if (known.length === 0) return null;
+  const below = known.filter((r) => r.margin < 0).sort((a, b) => b.alpha - a.alpha)[0];
+  const above = known.filter((r) => r.margin >= 0).sort((a, b) => a.alpha - b.alpha)[0];
+  const pair = below && above ? [below, above] : known.length > 1 ? [...known].sort((a, b) => Math.abs(a.margin) - Math.abs(b.margin)).slice(0, 2) : null;
+  if (pair && pair[0]!.alpha !== pair[1]!.alpha) {
+    const [p, q] = pair as [Round & { margin: number }, Round & { margin: number }];
+    const [xp, xq] = [1 / p.alpha, 1 / q.alpha];
+    const x = xp - (p.margin * (xq - xp)) / (q.margin - p.margin);
+    if (x > 0 && Number.isFinite(x)) return 1 / x;
+  }
+  const r = known[known.length - 1]!;
+  return r.alpha * Math.max(0.25, 1 - r.margin);
+}
+
+/** A failing round's margin below which it predicts nothing (its slack cables' would-be forces are far from what more prestress gives: −8 at 60 m where 1.2× passed), and the prestress grows by GROWTH_FAR. */
+const LEAST_PREDICTING_MARGIN = -1;
+const GROWTH_FAR = 1.5;
+/** A failing round's margin below which its secant with a passing one is not trusted (slack cables' would-be forces are a poor guide): the bracket is halved instead. */
+const SECANT_LEAST_MARGIN = -0.3;
+
+/**
+ * The next prestress to try, or null when the least passing one is found (within SEARCH_TOLERANCE
+ * above a failing one, or with a margin within MARGIN_TOLERANCE; or none passes at the most allowed). Until one passes: just above the
+ * predicted root, 1.2–GROWTH × the last failing one (GROWTH_UNCONVERGED × when it did not
+ * converge). Until one fails: just below it. Then: the secant's root inside the bracket (or, when
+ * the failing end's margin is not trusted, just below the passing end's own prediction), or the
+ * bracket's geometric middle when the last two rounds landed on one side.
+ */
+function nextAlpha(rounds: readonly Round[], maxN: number): number | null {
+  const hi = rounds.filter((r) => r.pass).sort((a, b) => a.alpha - b.alpha)[0];
+  const lo = rounds.filter((r) => !r.pass).sort((a, b) => b.alpha - a.alpha)[0];
+  const last = rounds[rounds.length - 1]!;
+  if (!hi) {
+    if (lo!.alpha >= maxN) return null;
+    if (last.margin !== null && last.margin < LEAST_PREDICTING_MARGIN) return Math.min(maxN, GROWTH_FAR * lo!.alpha);
+    const root = last.margin === null ? null : predictedRoot(rounds);
+    return Math.min(maxN, root === null ? GROWTH_UNCONVERGED * lo!.alpha : Math.min(GROWTH * lo!.alpha, Math.max(1.2 * lo!.alpha, root * (1 + SEARCH_TOLERANCE))));
+  }
+  if (hi.margin !== null && hi.margin <= MARGIN_TOLERANCE) return null;
+  if (!lo) return Math.min(hi.alpha / (1 + SEARCH_TOLERANCE), Math.max(0.25 * hi.alpha, (predictedRoot(rounds) ?? 0.5 * hi.alpha) * (1 - SEARCH_TOLERANCE)));
+  if (hi.alpha <= lo.alpha * (1 + SEARCH_TOLERANCE)) return null;
+  // the last two rounds were both tried inside a bracket and landed on the same side: the secant is creeping
+  const before = rounds.slice(0, -2);
+  const previous = rounds[rounds.length - 2];
+  const sameSide = previous !== undefined && previous.pass === last.pass && before.some((r) => r.pass) && before.some((r) => !r.pass);
+  const trusted = lo.margin !== null && lo.margin > SECANT_LEAST_MARGIN;
+  const aim = sameSide || hi.margin === null ? Math.sqrt(lo.alpha * hi.alpha) : trusted ? predictedRoot([lo, hi])! : predictedRoot([hi])! * (1 - SEARCH_TOLERANCE);
+  return Math.min(hi.alpha / (1 + SEARCH_TOLERANCE / 2), Math.max(lo.alpha * (1 + SEARCH_TOLERANCE / 2), aim));
+}
+
+/**
+ * The combinations the prestress search runs: the kit's governing few (analysedCombinations: the
+ * heaviest downward, the heaviest with drifted snow, the most upward) and drifted snow with the
+ * largest factor and the fewest other actions. Held down at 60–300 m (default brief), drifted snow alone (6.10b)
+ * governed by a margin of ~0.005 while the kit's drifted pick (drifted snow + wind, the heavier peak)
+ * kept 0.05–0.12; without it the check of every combination failed and the search ran again.
+ */
+function searchedCombinations(combinations: readonly PlanCombination[]): PlanCombination[] {
+  const drift = (c: PlanCombination) => c.combination.terms.find((t) => t.caseId === "snow-drifted")?.factor ?? 0;
+  const most = combinations.filter((c) => c.purpose === "gravity" && drift(c) > 0).sort((a, b) => drift(b) - drift(a) || a.combination.terms.length - b.combination.terms.length)[0];
+  return [...new Set([...analysedCombinations(combinations), ...(most ? [most] : [])])];
+}
+
+/** The net form-found at a radial prestress α (N) under the permanent load. */
+function netAt(input: NetAnalysisInput, alpha: number): CableNetModel {
+  const { layout } = input;
+  return cableNetModel({
+    masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
+    centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM, prestressN: alpha, hoopShare: NET_HOOP_PRESTRESS_SHARE,
+    permanentPa: (input.selfWeightKPa + input.brief.servicesKPa) * 1000, eaN: input.eaN,
+    ...(input.heldCentre ? { centreHeldAtM: capHeightAt(layout.cap, layout.centralRingRadiusM) } : {}),
+  });
+}
+
+/** Every round solves as the final check does (the solver's default step halvings): with fewer, a round that converges only on a halved step would fail and the search would settle up to 10 % high (60 m, measured by the search test). */
+function solveNet(input: NetAnalysisInput, net: CableNetModel, combinations: readonly PlanCombination[]): Solved {
+  const options = { steps: 1, maxIterations: 30 };
+  return combinations.map((c) => ({ c, s: solveCableModel({ ...net.model, loads: netNodeLoads(input, net, c) }, options) }));
+}
+
+function judge(input: NetAnalysisInput, alpha: number, net: CableNetModel, solved: Solved): NetRound {
+  const crownM = net.ringNodes.reduce((sum, k) => sum + (net.model.nodes[k] as readonly number[])[2]!, 0) / net.ringNodes.length;
+  // a held ring is at the roof's crown by construction: only a free one is checked for hanging below it
+  const crown = input.heldCentre ? undefined : { crownM, roofM: capHeightAt(input.layout.cap, input.layout.centralRingRadiusM), headM: input.layout.mastHeadM };
+  const margin = marginOf(net, solved, input.residualPrestress, input.displacementLimitM, crown);
+  return { alpha, net, solved, crownM, margin, pass: margin !== null && margin >= 0 };
+}
+
+/** One round at a radial prestress α (N) under the given combinations (by default every one the final check runs): the net form-found, solved and judged as the search does. */
+export function netRoundAt(input: NetAnalysisInput, alphaN: number, combinations: readonly PlanCombination[] = unboundedCombinations(input.combinations, input.selfWeightKPa)): NetRound {
+  const net = netAt(input, alphaN);
+  return judge(input, alphaN, net, solveNet(input, net, combinations));
+}
+
+/**
  * The 3D analysis of the net: form-found (force density) at a radial prestress α under the
  * permanent load, then Newton–Raphson (tension-only cables) under every design combination's load
- * map. The prestress is the least α (bracketed from the closed form's, then bisected) under which
- * every combination converges, every cable keeps `residualPrestress` × its prestress force, no node
- * moves more than the limit, and the net's crown hangs no lower than the roof's (the fabric hangs
- * below the net).
+ * map. The prestress is the least α under which every combination converges, every cable keeps
+ * `residualPrestress` × its prestress force, no node moves more than the limit, and a free ring
+ * hangs no lower than the roof's crown (the fabric hangs below the net). It is searched on the
+ * governing few combinations (kit analysedCombinations) by a secant on the worst margin in 1/α
+ * (marginOf, nextAlpha), from START_OF_SEED × the closed form's prestress; the other combinations
+ * are then checked at the α found, and any that fails joins the searched ones and the search goes
+ * on from there.
  */
-export function analyseNet(input: NetAnalysisInput): NetAnalysis {
+export function analyseNet(input: NetAnalysisInput, onRound?: (round: NetSearchRound) => void): NetAnalysis {
   const { layout } = input;
-  const lines = layout.masts * layout.cablesPerSide;
-  const permanentPa = (input.selfWeightKPa + input.brief.servicesKPa) * 1000;
-  const roofCrownM = capHeightAt(layout.cap, layout.centralRingRadiusM);
-  const margin = input.residualPrestress;
-  const searched = analysedCombinations(input.combinations);
-  const run = (alpha: number, combos: readonly PlanCombination[] = searched): Round => {
-    const net = cableNetModel({
-      masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
-      centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM, prestressN: alpha, hoopShare: NET_HOOP_PRESTRESS_SHARE, permanentPa, eaN: input.eaN,
-      ...(input.heldCentre ? { centreHeldAtM: roofCrownM } : {}),
-    });
-    const s0 = net.model.members.map((m) => m.initialForceN ?? 0);
-    const crownM = net.ringNodes.reduce((sum, k) => sum + (net.model.nodes[k] as readonly number[])[2]!, 0) / net.ringNodes.length;
-    // a held ring is at the roof's crown by construction (its mean height may differ in the last bit)
-    const high = input.heldCentre === true || crownM >= roofCrownM;
-    let pass = high;
-    let estimate = high ? 0 : alpha * 1.5;
-    const solved = combos.map((c) => ({ c, s: solveCableModel({ ...net.model, loads: netNodeLoads(input, net, c) }, { steps: 1, maxIterations: 30 }) }));
-    for (const { s } of solved) {
-      if (!s.converged) {
-        pass = false;
-        continue;
-      }
-      if (maxDisplacement(s) > input.displacementLimitM) pass = false;
-      s.forcesN.forEach((f, j) => {
-        const f0 = s0[j] as number;
-        if (s.slack[j] || f < margin * f0) pass = false;
-        if (f0 > 0) estimate = Math.max(estimate, (alpha * (margin * f0 - f)) / ((1 - margin) * f0) + alpha);
-      });
-    }
-    return { alpha, net, solved, pass, estimate, crownM };
+  const seen = (r: NetRound) => {
+    onRound?.({ alphaN: r.alpha, combinations: r.solved.length, pass: r.pass, margin: r.margin, iterations: r.solved.reduce((n, { s }) => n + s.iterations, 0) });
+    return r;
   };
-  const heaviestPerLine = (Math.max(0, ...input.combinations.map((c) => uniformPressurePa(c, input.selfWeightKPa))) * layout.cap.planAreaM2) / (2 * lines);
-  let hi = run(Math.max(input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestPerLine));
-  let lo: Round | null = null;
-  for (let k = 0; k < RAISES && !hi.pass && hi.alpha < input.maxPrestressN; k++) {
-    lo = hi;
-    const allConverged = hi.solved.every(({ s }) => s.converged);
-    hi = run(Math.min(input.maxPrestressN, allConverged ? Math.max(1.5 * hi.alpha, Math.min(4 * hi.alpha, 1.02 * hi.estimate)) : 4 * hi.alpha));
-  }
-  if (lo === null && hi.pass) {
-    const trial = run(0.5 * hi.alpha);
-    if (trial.pass) hi = trial;
-    else lo = trial;
-  }
-  for (let k = 0; k < BISECTIONS && lo !== null && hi.pass; k++) {
-    const mid = run((lo.alpha + hi.alpha) / 2);
-    if (mid.pass) hi = mid;
-    else lo = mid;
-  }
-  // the search ran the governing few; the prestress found must hold under every combination (less the uniform ones the heaviest uniform one bounds)
+  const heaviestPerLine = (Math.max(0, ...input.combinations.map((c) => uniformPressurePa(c, input.selfWeightKPa))) * layout.cap.planAreaM2) / (2 * layout.masts * layout.cablesPerSide);
   const checked = unboundedCombinations(input.combinations, input.selfWeightKPa);
-  let all = run(hi.alpha, checked);
-  for (let k = 0; k < VERIFY_RAISES && hi.pass && !all.pass && all.alpha < input.maxPrestressN; k++) all = run(Math.min(input.maxPrestressN, 1.25 * all.alpha), checked);
-  const screened = hi.pass ? input.combinations.filter((c) => !checked.includes(c)).map((c) => c.name) : [];
-  return { ...summarise(input, hi.pass ? all : hi), screened };
+  let searched = searchedCombinations(input.combinations);
+  let rounds: NetRound[] = [];
+  let alpha: number | null = Math.min(input.maxPrestressN, Math.max(START_OF_SEED * input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestPerLine));
+  for (let verification = 0, total = 0; ; verification++) {
+    for (; alpha !== null && total < MAX_ROUNDS; total++) {
+      const net = netAt(input, alpha);
+      rounds.push(seen(judge(input, alpha, net, solveNet(input, net, searched))));
+      alpha = nextAlpha(rounds, input.maxPrestressN);
+    }
+    const hi = rounds.filter((r) => r.pass).sort((a, b) => a.alpha - b.alpha)[0];
+    if (!hi) return { ...summarise(input, rounds.reduce((h, r) => (r.alpha > h.alpha ? r : h))), screened: [] };
+    // the search ran the governing few; the prestress found must hold under every combination (less the uniform ones the heaviest uniform one bounds)
+    const rest = solveNet(input, hi.net, checked.filter((c) => !searched.includes(c)));
+    const all = seen(judge(input, hi.alpha, hi.net, checked.map((c) => hi.solved.find((x) => x.c === c) ?? rest.find((x) => x.c === c)!)));
+    if (all.pass || verification >= MAX_VERIFICATIONS || total >= MAX_ROUNDS) return { ...summarise(input, all), screened: all.pass ? input.combinations.filter((c) => !checked.includes(c)).map((c) => c.name) : [] };
+    // another combination governs: search again with it too, from the prestress that now fails
+    const failing = rest.filter((x) => (marginOf(hi.net, [x], input.residualPrestress, input.displacementLimitM) ?? -1) < 0);
+    searched = [...searched, ...failing.map(({ c }) => c)];
+    // a prestress that failed the fewer combinations fails the more too; one that passed them is no longer known to pass
+    rounds = [...rounds.filter((r) => !r.pass), { ...all, pass: false }];
+    alpha = nextAlpha(rounds, input.maxPrestressN);
+  }
 }
 
 function envelopeOf(net: CableNetModel, solved: Round["solved"], hoops: number): NetForceEnvelope {
@@ -209,22 +347,26 @@ function supportsOf(net: CableNetModel, solved: Round["solved"]) {
   return { mastForceN: mastN, backstayHorizontalN: horizontal, mastCase, anchorUpliftN: uplift, outwardPull, ringUpliftN: ring.most, ringUpliftCase: ring.mostCase, ringLeastUpliftN: Number.isFinite(ring.least) ? ring.least : 0 };
 }
 
+/** Why the net fails at the last prestress the search tried, in words for a project lead. */
+function failureReason(input: NetAnalysisInput, last: NetRound, cases: readonly { name: string; maxDisplacementM: number }[]): string {
+  const { solved, alpha } = last;
+  const tried = `at the largest prestress tried (${(alpha / 1000).toFixed(0)} kN a radial cable)`;
+  const notConverged = solved.find(({ s }) => !s.converged);
+  if (notConverged) return `the 3D analysis of the net did not converge under ${notConverged.c.name}: ${notConverged.s.reason ?? "no equilibrium"}`;
+  const slack = solved.find(({ s }) => s.slack.some(Boolean));
+  if (slack) return `cables of the net go slack under ${slack.c.name} ${tried}: add masts or raise them`;
+  const moving = cases.find((c) => c.maxDisplacementM > input.displacementLimitM);
+  if (moving) return `the net moves ${moving.maxDisplacementM.toFixed(2)} m under ${moving.name} ${tried}, more than the limit of ${input.displacementLimitM.toFixed(2)} m: add masts or raise them`;
+  const f0 = last.net.model.members.map((m) => m.initialForceN ?? 0);
+  const loose = solved.find(({ s }) => s.forcesN.some((f, j) => f < input.residualPrestress * (f0[j] as number)));
+  if (loose) return `cables of the net keep less than ${(100 * input.residualPrestress).toFixed(0)} % of their prestress under ${loose.c.name} ${tried}: add masts or raise them`;
+  return `the form-found net hangs below the roof's crown ${tried}`;
+}
+
 function summarise(input: NetAnalysisInput, last: Round): Omit<NetAnalysis, "screened"> {
   const { net, solved, alpha } = last;
-  const notConverged = solved.find(({ s }) => !s.converged);
-  const slack = solved.find(({ s }) => s.slack.some(Boolean));
   const cases = solved.map(({ c, s }) => ({ name: c.name, s, maxDisplacementM: maxDisplacement(s) }));
-  const moving = cases.find((c) => c.maxDisplacementM > input.displacementLimitM);
-  const tried = `at the largest prestress tried (${(alpha / 1000).toFixed(0)} kN a radial cable)`;
-  const reason = notConverged
-    ? `the 3D analysis of the net did not converge under ${notConverged.c.name}: ${notConverged.s.reason ?? "no equilibrium"}`
-    : slack
-      ? `cables of the net go slack under ${slack.c.name} ${tried}: add masts or raise them`
-      : moving
-        ? `the net moves ${moving.maxDisplacementM.toFixed(2)} m under ${moving.name} ${tried}, more than the limit of ${input.displacementLimitM.toFixed(2)} m: add masts or raise them`
-        : last.pass
-          ? ""
-          : `the form-found net hangs below the roof's crown ${tried}`;
+  const reason = last.pass ? "" : failureReason(input, last, cases);
   const lines = input.layout.masts * input.layout.cablesPerSide;
   const familyLength = (family: NetMemberFamily) =>
     net.model.members.reduce((sum, m, j) => (net.tags[j]?.family === family ? sum + lengthOf(net.model.nodes[m.i] as Vec3, net.model.nodes[m.j] as Vec3) : sum), 0) / lines;

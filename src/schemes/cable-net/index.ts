@@ -8,7 +8,7 @@ import { capHeightAt } from "../../mechanics/spherical-cap";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
 import { sizeCableNet, sizeNetFromAnalysis, type NetSizing, type NetSizingInput } from "./sizing";
-import { analyseNet, type NetAnalysis } from "./analysis";
+import { analyseNet, type NetAnalysis, type NetAnalysisInput } from "./analysis";
 import { designBasis } from "../../loads";
 import { strandResistanceN } from "../../catalogue/pick-strand";
 import { cableNetDeclaration, type CableNetOptions } from "./declaration";
@@ -85,23 +85,28 @@ function stiffnessOf(sized: NetSizing, element: string): number {
   return sized.groups.find((x) => x.element === element)?.eaN ?? 1e9;
 }
 
+/** What the 3D analysis is given: the closed form's converged self-weight, its prestress as the seed (a radial cable's horizontal tension H = w_p L²/(8f)) and its stiffnesses. */
+function netAnalysisInput(input: NetSizingInput, closed: NetSizing, selfWeightKPa: number): NetAnalysisInput {
+  const { layout } = input;
+  return {
+    brief: input.brief, basis: designBasis(input.brief), layout, combinations: input.combinations, selfWeightKPa,
+    seedPrestressN: (closed.prestressOuterNPerM * layout.outer.spanM ** 2) / (8 * layout.outer.sagM), residualPrestress: input.residualPrestress,
+    displacementLimitM: input.brief.spanM * CABLE_ROOF_DEFLECTION_RATIO,
+    maxPrestressN: MAX_PARALLEL_STRANDS * Math.max(...input.catalogue.strands.map((x) => strandResistanceN(x.minBreakingForceN, input.gammaR))),
+    heldCentre: input.heldCentre,
+    eaN: { outer: stiffnessOf(closed, "outer radial cables"), inner: stiffnessOf(closed, "inner radial cables"), hoop: stiffnessOf(closed, "circumferential cable 1"), ring: stiffnessOf(closed, "central tension ring") },
+  };
+}
+
 /**
  * The closed-form net re-sized from the 3D analysis (analysis.ts): the analysis seeded by the closed
  * form's prestress (the radial cable's horizontal tension H = w_p L²/(8f)) and stiffnesses; when it
  * fails, the closed form's sizes with the analysis's reason.
  */
 function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: number): { sized: NetSizing; analysis: NetAnalysis } {
-  const { layout } = input;
   let analysis: NetAnalysis;
   try {
-    analysis = analyseNet({
-      brief: input.brief, basis: designBasis(input.brief), layout, combinations: input.combinations, selfWeightKPa,
-      seedPrestressN: (closed.prestressOuterNPerM * layout.outer.spanM ** 2) / (8 * layout.outer.sagM), residualPrestress: input.residualPrestress,
-      displacementLimitM: input.brief.spanM * CABLE_ROOF_DEFLECTION_RATIO,
-      maxPrestressN: MAX_PARALLEL_STRANDS * Math.max(...input.catalogue.strands.map((x) => strandResistanceN(x.minBreakingForceN, input.gammaR))),
-      heldCentre: input.heldCentre,
-      eaN: { outer: stiffnessOf(closed, "outer radial cables"), inner: stiffnessOf(closed, "inner radial cables"), hoop: stiffnessOf(closed, "circumferential cable 1"), ring: stiffnessOf(closed, "central tension ring") },
-    });
+    analysis = analyseNet(netAnalysisInput(input, closed, selfWeightKPa));
   } catch (error) {
     // the force density network or the model refuses a state it cannot represent
     if (!(error instanceof RangeError)) throw error;
@@ -139,7 +144,8 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
   return warnings;
 }
 
-function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): DesignParts {
+/** The layout, the sizing input and the converged closed form of a design (the 3D analysis starts from it). */
+function closedNet(brief: Brief, opts: CableNetOptions, catalogue: Catalogue) {
   const fabric = findFabric(catalogue, opts.fabric);
   const layout = cableNetLayout(brief, opts.masts, opts.mastRingRatio, opts.mastHeightRatio, opts.radialCablesPerMast, opts.hangerSpacingM);
   const section = cableNetSection(layout, brief.eavesHeightM);
@@ -154,6 +160,17 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     const value = sizeCableNet(input, g);
     return { value, selfWeightKPa: value.selfWeightKPa };
   }, 0.1, { section });
+  return { fabric, layout, section, input, converged };
+}
+
+/** The input the design's 3D analysis gets (for benches and profiles that follow the prestress search round by round). */
+export function cableNetAnalysisInput(brief: Brief, options: CableNetOptions, catalogue: Catalogue): NetAnalysisInput {
+  const { input, converged } = closedNet(brief, options, catalogue);
+  return netAnalysisInput(input, converged.value, converged.selfWeightKPa);
+}
+
+function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): DesignParts {
+  const { fabric, layout, section, input, converged } = closedNet(brief, opts, catalogue);
   const analysed = opts.analysis === "3d" ? analysedNet(input, converged.value, converged.selfWeightKPa) : null;
   const sized = analysed?.sized ?? converged.value;
   const analysis = analysed?.analysis;

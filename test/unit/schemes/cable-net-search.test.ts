@@ -1,0 +1,53 @@
+// The cable net's prestress search (issue 13 item 6, net6): a secant on the worst margin in 1/α on
+// the governing combinations, then every combination checked once. Its answer must be the least
+// prestress that passes, to within the tolerance the bisection it replaced had (about 6 %: three
+// halvings of a bracket that grew by 1.5× a round).
+import { describe, it, expect } from "vitest";
+import { analyseNet, netRoundAt, type NetAnalysisInput, type NetSearchRound } from "../../../src/schemes/cable-net/analysis";
+import { cableNetLayout } from "../../../src/schemes/cable-net/geometry";
+import { cableNet } from "../../../src/schemes/cable-net";
+import { planCombinations, unboundedCombinations } from "../../../src/schemes/kit";
+import { designBasis } from "../../../src/loads";
+import { DEFAULT_BRIEF } from "../../../src/brief";
+
+const o = cableNet.defaults;
+
+function inputAt(spanM: number, heldCentre: boolean): NetAnalysisInput {
+  const brief = { ...DEFAULT_BRIEF, spanM, riseM: spanM / 10 };
+  return {
+    brief, basis: designBasis(brief), layout: cableNetLayout(brief, o.masts, o.mastRingRatio, o.mastHeightRatio, o.radialCablesPerMast, o.hangerSpacingM),
+    combinations: planCombinations(brief), selfWeightKPa: 0.1, seedPrestressN: 20e3, residualPrestress: 0.1, displacementLimitM: spanM / 100,
+    maxPrestressN: 100e6, eaN: { outer: 1e9, inner: 1e9, hoop: 5e8, ring: 1e10 }, heldCentre,
+  };
+}
+
+/** The least passing prestress by plain bisection on the pass/fail of every checked combination (the slow way), to 1 %. */
+function bisected(input: NetAnalysisInput, lo: number, hi: number): number {
+  expect(netRoundAt(input, hi).pass).toBe(true);
+  expect(netRoundAt(input, lo).pass).toBe(false);
+  while (hi / lo > 1.01) {
+    const mid = Math.sqrt(lo * hi);
+    if (netRoundAt(input, mid).pass) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
+describe("the net's prestress search at 60 m", () => {
+  for (const held of [true, false]) {
+    it(`${held ? "held" : "free"} centre: the prestress found passes every combination and is within 5 % of the least that does (bisection to 1 %)`, () => {
+      const input = inputAt(60, held);
+      const rounds: NetSearchRound[] = [];
+      const a = analyseNet(input, (r) => rounds.push(r));
+      expect(a.reason).toBe("");
+      const found = a.prestressN;
+      const every = netRoundAt(input, found, unboundedCombinations(input.combinations, input.selfWeightKPa));
+      expect(every.pass).toBe(true);
+      const least = bisected(input, found / 2, found * 1.5);
+      expect(found).toBeGreaterThanOrEqual(least / 1.01);
+      expect(found / least - 1).toBeLessThan(0.05);
+      // the last round reported is the check of every combination at the prestress found
+      expect(rounds.at(-1)).toMatchObject({ alphaN: found, pass: true, combinations: every.solved.length });
+    });
+  }
+});
