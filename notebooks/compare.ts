@@ -77,7 +77,7 @@ const caption = computed(() => chartCaption(store.study.value));
 
 staticCell(inputs, { id: "brief", title: "Brief" }, briefControls(store));
 
-reactiveCell(inputs, { id: "loads", title: "Design loads" }, () => {
+reactiveCell(inputs, { id: "loads", title: "Design loads", patch: true }, () => {
   const a = actions.value;
   const b = brief.value;
   // Unit permanent load of 1 kPa shows the ULS factors at work; schemes add their own self-weight.
@@ -94,7 +94,7 @@ reactiveCell(inputs, { id: "loads", title: "Design loads" }, () => {
   ]);
 });
 
-reactiveCell(inputs, { id: "geometry", title: "Roof geometry and floor" }, () => {
+reactiveCell(inputs, { id: "geometry", title: "Roof geometry and floor", patch: true }, () => {
   const e = env.value;
   return keyValues([
     ["Span / rise", `${fmt.one(brief.value.spanM / brief.value.riseM)} (rise/span ${fmt.two(brief.value.riseM / brief.value.spanM)})`],
@@ -110,8 +110,9 @@ reactiveCell(inputs, { id: "geometry", title: "Roof geometry and floor" }, () =>
 
 // Drawn at every step of the span slider, so drawn directly from its outline rather than through
 // Plot (issue 14: Plot's layout of this small figure was most of each step's script); the same
-// roof, walls, usable floor and axes as the schemes' own sections below.
-reactiveCell(inputs, { id: "section", title: "Roof section" }, () =>
+// roof, walls, usable floor and axes as the schemes' own sections below. Patched in place: the
+// figure's save buttons read the figure on the page when clicked, which is the kept one.
+reactiveCell(inputs, { id: "section", title: "Roof section", patch: true }, () =>
   outlineFigure(
     sectionOutline({
       brief: brief.value,
@@ -155,7 +156,7 @@ effect(() => {
 });
 const drawn = perFrame(arrived);
 
-reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answer" }, () => {
+reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answer", patch: true }, () => {
   const { list } = drawn.value;
   if (list === null) return "Designing the schemes…";
   if (list.length === 0) return "Switch on at least one scheme to compare.";
@@ -237,13 +238,13 @@ for (const s of schemes) {
   panel.append(heading);
   // The status line and the proportions drawn on the next frame, the newest result only (like the table).
   const status = perFrame(computed(() => ({ on: s.enabled.value, result: s.result.value })));
-  reactiveCell(panel, { id: `${id}-summary` }, () => {
+  reactiveCell(panel, { id: `${id}-summary`, patch: true }, () => {
     const { on, result } = status.value;
     if (!on) return "Switched off.";
     return result === null ? "Designing…" : schemeStatusLine(result);
   });
   // The proportions the search chose and how much the runner-up differs (issue 12 item 4), under the status line.
-  reactiveCell(panel, { id: `${id}-proportions`, className: "proportions" }, () => {
+  reactiveCell(panel, { id: `${id}-proportions`, className: "proportions", patch: true }, () => {
     const choice = status.value.on ? status.value.result?.proportions : undefined;
     if (!choice) return null;
     const wrap = document.createElement("div");
@@ -311,8 +312,11 @@ staticCell(inputs, { id: "study", title: "Study" }, studyDetailsEditor(store));
 // While newer designs are on their way the results say so (aria-busy), and a worker failure is shown.
 effect(() => {
   // busy until the newest results are drawn too (the table follows them a frame later)
-  const waiting = busy.value || drawn.value !== arrived.value;
-  for (const id of ["verdict", "comparison", "comparison-charts"]) document.getElementById(`cell-${id}`)?.setAttribute("aria-busy", String(waiting));
+  const waiting = String(busy.value || drawn.value !== arrived.value);
+  for (const id of ["verdict", "comparison", "comparison-charts"]) {
+    const cell = document.getElementById(`cell-${id}`);
+    if (cell && cell.getAttribute("aria-busy") !== waiting) cell.setAttribute("aria-busy", waiting);
+  }
 });
 effect(() => {
   if (failure.value) store.notice.value = `A design could not be made: ${failure.value}`;

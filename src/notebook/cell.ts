@@ -1,5 +1,6 @@
 import { effect } from "@preact/signals-core";
 import { unmountWithin } from "./controls";
+import { patchChildren } from "./patch";
 import { messageOf } from "../kernel/errors";
 
 /** What a cell's render function may return. */
@@ -12,6 +13,12 @@ export interface CellOptions {
   title?: string;
   /** Extra CSS class. */
   className?: string;
+  /**
+   * Update the content in place (see patchChildren): nodes of the same kind are kept and only the
+   * texts and attributes that differ are written, so a redraw with new numbers is not styled, laid
+   * out and painted from nothing. Only for plain content (kept nodes keep their own listeners).
+   */
+  patch?: boolean;
 }
 
 export interface Cell {
@@ -43,19 +50,38 @@ export function reactiveCell(parent: HTMLElement, options: CellOptions, render: 
   const dispose = effect(() => {
     const started = performance.now();
     let content: CellContent;
+    let failed = false;
     try {
       content = render();
-      element.classList.remove("cell-failed");
     } catch (error) {
-      element.classList.add("cell-failed");
+      failed = true;
       content = errorBox(error);
     }
-    unmountWithin(body); // the last content's components end their effects before they leave
-    body.replaceChildren(...(content === null || content === undefined ? [] : [typeof content === "string" ? textNode(content) : content]));
+    const wasFailed = element.classList.contains("cell-failed");
+    // written only when it changes: a rewritten class is a style invalidation on every render
+    if (failed !== wasFailed) element.classList.toggle("cell-failed", failed);
+    const nodes = content === null || content === undefined ? [] : [typeof content === "string" ? textNode(content) : content];
+    showContent(body, nodes, options.patch === true && !failed && !wasFailed);
     element.dataset.renders = String(Number(element.dataset.renders) + 1);
     element.dataset.ms = (performance.now() - started).toFixed(1);
   });
   return { element, dispose };
+}
+
+/**
+ * Puts `nodes` in `body`: nothing is written when they are already its children (a cell that returns
+ * the element it shows, such as a grid of charts drawn in turns), they are patched in when `patch`,
+ * otherwise they replace the last content, whose components end their effects before they leave.
+ */
+function showContent(body: HTMLElement, nodes: readonly Node[], patch: boolean): void {
+  const children = body.childNodes;
+  if (children.length === nodes.length && nodes.every((node, k) => children[k] === node)) return;
+  if (patch) {
+    patchChildren(body, nodes);
+    return;
+  }
+  unmountWithin(body);
+  body.replaceChildren(...nodes);
 }
 
 function textNode(text: string): Node {

@@ -38,6 +38,44 @@ function drag(page: Page, spans: readonly number[]): Promise<void> {
 }
 
 describe("the span slider (issue 14)", () => {
+  it("updates the brief's figures in place: same nodes, new values, no cell class rewritten", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector('#cell-comparison[aria-busy="false"] table');
+    await page.waitForSelector("#cell-section svg");
+    const before = await page.evaluate(() => {
+      const w = window as unknown as { __kept: Element[]; __writes: string[] };
+      w.__kept = ["#cell-section svg", "#cell-section .cell-body > *", "#cell-loads dl", "#cell-geometry dl"].map((s) => document.querySelector(s)!);
+      w.__writes = [];
+      // class writes on any cell, and content taken out of the brief's patched cells
+      new MutationObserver((list) => {
+        for (const r of list) {
+          const target = r.target as Element;
+          if (r.type === "attributes" && target.matches?.(".cell")) w.__writes.push(`class of ${target.id}`);
+          if (r.type === "childList" && r.removedNodes.length > 0 && target.matches?.("#cell-section .cell-body, #cell-loads .cell-body, #cell-geometry .cell-body")) w.__writes.push(`content of ${target.parentElement?.id}`);
+        }
+      }).observe(document.body, { subtree: true, childList: true, attributes: true, attributeFilter: ["class"] });
+      return { geometry: document.querySelector("#cell-geometry")!.textContent, drawing: document.querySelector("#cell-section svg")?.innerHTML };
+    });
+    await drag(page, Array.from({ length: 8 }, (_, k) => 150 + 5 * k));
+    await page.waitForFunction(() => document.querySelector("#cell-comparison caption")?.textContent?.includes("185 m") && document.querySelector('#cell-comparison[aria-busy="false"]'), undefined, { timeout: 60_000 });
+    const after = await page.evaluate(() => {
+      const w = window as unknown as { __kept: Element[]; __writes: string[] };
+      return {
+        kept: w.__kept.map((node) => node.isConnected),
+        writes: w.__writes,
+        geometry: document.querySelector("#cell-geometry")!.textContent,
+        drawing: document.querySelector("#cell-section svg")?.innerHTML,
+      };
+    });
+    expect(after.kept).toEqual([true, true, true, true]);
+    expect(after.writes).toEqual([]);
+    // the values did move with the span: the drawing and the figures are the new span's
+    expect(after.drawing).not.toBe(before.drawing);
+    expect(after.geometry).not.toBe(before.geometry);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("redraws the section per step, the charts only per set of results, captioned with their span", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
     await page.waitForSelector('#cell-comparison[aria-busy="false"] table');
