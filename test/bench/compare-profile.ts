@@ -136,7 +136,7 @@ try {
   console.log(`\n## compare page, span slider dragged 40 steps (${dist}; load average ${load.toFixed(1)})`);
   console.log(`long tasks (> 50 ms): ${long.length}, longest ${Math.max(0, ...long.map((l) => l.ms)).toFixed(0)} ms; at ms from the drag's start: ${long.map((l) => `${(l.start - t0).toFixed(0)}+${l.ms.toFixed(0)}`).join(" ")}`);
   console.log("main-thread functions by inclusive time (whole drag and the 6 s after):");
-  heaviest(profile as CpuProfile, 25).forEach((l) => console.log(l));
+  heaviest(profile as CpuProfile, Number(process.env.TOP ?? 25)).forEach((l) => console.log(l));
   console.log("busy stretches over 40 ms (ms from the profile's start), with what took most of each:");
   busyStretches(profile as CpuProfile, 40).forEach((l) => console.log(l));
 } finally {

@@ -78,10 +78,11 @@ try {
   }
   console.log(`by event: ${[...byName.entries()].sort((a, b) => b[1].ms - a[1].ms).slice(0, 16).map(([k, v]) => `${k} ${v.ms.toFixed(0)}/${v.n}`).join(", ")}`);
   const tasks = mine.filter((e) => e.name === "RunTask" && (e.dur ?? 0) > 50_000).map((e) => (e.dur! / 1000).toFixed(0));
-  console.log(`\n## compare page, span slider dragged ${steps} steps under a trace (${dist})`);
+  console.log(`\n## compare page, span slider dragged ${steps} steps under a trace (${dist}; load average ${(await import("node:os")).loadavg()[0]!.toFixed(1)})`);
   console.log(`main thread by kind (ms, nested events may overlap within script): ${[...byKind.entries()].map(([k, ms]) => `${k} ${ms.toFixed(0)}`).join(", ")}`);
   console.log(`elements restyled ${elements.style}, layout dirty objects ${elements.layout}`);
   console.log(`tasks over 50 ms: ${tasks.length} (${tasks.join(", ")})`);
+  for (const line of longTaskCauses(mine, 50)) console.log(line);
   const paints = new Map<string, { ms: number; n: number }>();
   for (const e of mine.filter((x) => x.name === "Paint")) {
     const key = String(e.args?.data?.nodeName ?? "?");
@@ -96,4 +97,32 @@ try {
 } finally {
   await browser.close();
   server.httpServer.close();
+}
+
+/** What one trace event was, in a few words: its name and, for script, the event type or function. */
+function describe(e: TraceEvent): string {
+  const d = e.args?.data ?? {};
+  if (e.name === "EventDispatch") return `EventDispatch(${String(d.type)})`;
+  if (e.name === "FunctionCall") return `FunctionCall(${String(d.functionName || "?")})`;
+  if (e.name === "TimerFire") return "TimerFire";
+  return e.name;
+}
+
+/**
+ * Each main-thread task longer than `minMs`, with the work directly inside it (one level down,
+ * merged by kind): which message, frame callback, style, layout or paint made it long.
+ */
+function longTaskCauses(mine: readonly TraceEvent[], minMs: number): string[] {
+  const tasks = mine.filter((e) => e.name === "RunTask" && (e.dur ?? 0) > minMs * 1000);
+  const t0 = Math.min(...mine.map((e) => e.ts));
+  return tasks.map((task) => {
+    const end = task.ts + task.dur!;
+    const inside = mine.filter((e) => e !== task && e.ts >= task.ts && e.ts + (e.dur ?? 0) <= end && e.dur);
+    // the events not inside another event of this task: the task's own steps
+    const top = inside.filter((e) => !inside.some((o) => o !== e && o.ts <= e.ts && o.ts + o.dur! >= e.ts + e.dur! && o.dur! > e.dur!));
+    const by = new Map<string, number>();
+    for (const e of top) by.set(describe(e), (by.get(describe(e)) ?? 0) + e.dur! / 1000);
+    const parts = [...by.entries()].sort((a, b) => b[1] - a[1]).slice(0, 6).map(([k, ms]) => `${k} ${ms.toFixed(0)}`);
+    return `  task at ${((task.ts - t0) / 1000).toFixed(0)} ms, ${(task.dur! / 1000).toFixed(0)} ms: ${parts.join(" | ")}`;
+  });
 }
