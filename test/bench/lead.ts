@@ -91,7 +91,7 @@ const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", arg
 const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
 await context.addInitScript("globalThis.__name = (f) => f");
 try {
-  console.log(`\n## the lead's interactions (${dist}, headless Chromium, 1400×900)`);
+  console.log(`\n## the lead's interactions (${dist}, headless Chromium, 1400×900; load average ${(await import("node:os")).loadavg()[0]!.toFixed(1)})`);
   const page = await context.newPage();
   await page.goto("http://127.0.0.1:4192/compare.html");
   await page.waitForSelector("#cell-comparison table", { timeout: 60_000 });
@@ -110,23 +110,26 @@ try {
   for (let i = 0; i < 12; i++) edits.push(await optionEdit(page, String(10 + (i % 6))));
   console.log(`compare edit (truss span/depth) → option charts redrawn: median ${median(edits).toFixed(0)} ms, p95 ${p95(edits).toFixed(0)} ms; longest main-thread task ${(await longest(page)).toFixed(0)} ms`);
 
-  const span = await context.newPage();
-  await span.goto("http://127.0.0.1:4192/span-study.html");
-  await span.waitForSelector("#cell-span-charts svg", { timeout: 120_000 });
-  await watchLongTasks(span);
-  const runs: number[] = [];
-  // The charts are drawn in turns once the study is done (`data-drawn` counts finished sets); a build
-  // from before that drew them with the cell (`data-renders`), which BENCH_DIST may still time.
-  await span.waitForTimeout(1000); // the first set's last charts
-  const counter = (await span.locator("#cell-span-charts").getAttribute("data-drawn")) === null ? "data-renders" : "data-drawn";
-  for (let i = 0; i < 3; i++) {
-    const count = Number(await span.locator("#cell-span-charts").getAttribute(counter));
-    const t0 = Date.now();
-    await span.fill("#toM", String(400 - (i % 2) * 10));
-    await span.waitForFunction(([n, attr]) => Number(document.querySelector("#cell-span-charts")?.getAttribute(attr)) > n && /computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), [count, counter] as const, { timeout: 120_000 });
-    runs.push(Date.now() - t0);
+  // SPAN_STUDY=0 leaves the span study out (a minute under load) when only the compare page is timed
+  if (process.env.SPAN_STUDY !== "0") {
+    const span = await context.newPage();
+    await span.goto("http://127.0.0.1:4192/span-study.html");
+    await span.waitForSelector("#cell-span-charts svg", { timeout: 120_000 });
+    await watchLongTasks(span);
+    const runs: number[] = [];
+    // The charts are drawn in turns once the study is done (`data-drawn` counts finished sets); a build
+    // from before that drew them with the cell (`data-renders`), which BENCH_DIST may still time.
+    await span.waitForTimeout(1000); // the first set's last charts
+    const counter = (await span.locator("#cell-span-charts").getAttribute("data-drawn")) === null ? "data-renders" : "data-drawn";
+    for (let i = 0; i < 3; i++) {
+      const count = Number(await span.locator("#cell-span-charts").getAttribute(counter));
+      const t0 = Date.now();
+      await span.fill("#toM", String(400 - (i % 2) * 10));
+      await span.waitForFunction(([n, attr]) => Number(document.querySelector("#cell-span-charts")?.getAttribute(attr)) > n && /computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), [count, counter] as const, { timeout: 120_000 });
+      runs.push(Date.now() - t0);
+    }
+    console.log(`span study 37/36 spans × every scheme, range change → charts: median ${median(runs)} ms; longest main-thread task ${(await longest(span)).toFixed(0)} ms`);
   }
-  console.log(`span study 37/36 spans × every scheme, range change → charts: median ${median(runs)} ms; longest main-thread task ${(await longest(span)).toFixed(0)} ms`);
 } finally {
   await browser.close();
   server.httpServer.close();
