@@ -31,6 +31,7 @@ import {
   perFrame,
   chartTurns,
   proportionsSentences,
+  setAttr,
 } from "../src/notebook";
 import { tableGaps } from "../src/pipeline";
 import { roofActions, designPressures } from "../src/loads";
@@ -315,7 +316,7 @@ effect(() => {
   const waiting = String(busy.value || drawn.value !== arrived.value);
   for (const id of ["verdict", "comparison", "comparison-charts"]) {
     const cell = document.getElementById(`cell-${id}`);
-    if (cell && cell.getAttribute("aria-busy") !== waiting) cell.setAttribute("aria-busy", waiting);
+    if (cell) setAttr(cell, "aria-busy", waiting);
   }
 });
 effect(() => {

@@ -1,6 +1,6 @@
 import { effect } from "@preact/signals-core";
 import { unmountWithin } from "./controls";
-import { patchChildren } from "./patch";
+import { patchChildren, setClass } from "./patch";
 import { messageOf } from "../kernel/errors";
 
 /** What a cell's render function may return. */
@@ -59,7 +59,7 @@ export function reactiveCell(parent: HTMLElement, options: CellOptions, render: 
     }
     const wasFailed = element.classList.contains("cell-failed");
     // written only when it changes: a rewritten class is a style invalidation on every render
-    if (failed !== wasFailed) element.classList.toggle("cell-failed", failed);
+    setClass(element, "cell-failed", failed);
     const nodes = content === null || content === undefined ? [] : [typeof content === "string" ? textNode(content) : content];
     showContent(body, nodes, options.patch === true && !failed && !wasFailed);
     element.dataset.renders = String(Number(element.dataset.renders) + 1);

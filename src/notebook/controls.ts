@@ -5,6 +5,7 @@
 import { effect, type ReadonlySignal } from "@preact/signals-core";
 import { h, render, type ComponentChild, type ComponentChildren, type VNode } from "preact";
 import { useLayoutEffect, useRef } from "preact/hooks";
+import { setAttr, setClass, setText } from "./patch";
 
 /**
  * A value a control shows and changes: read reactively, written through a callback. A binding
@@ -167,9 +168,10 @@ function editField<T>(binding: Binding<T>, parts: FieldParts, rules: FieldRules<
       if (!Object.is(binding.value.peek(), committed)) binding.set(committed);
       text += ` — not applied; in force: ${rules.inForce(committed)}`;
     }
-    input.setAttribute("aria-invalid", text ? "true" : "false");
-    wrap.classList.toggle("invalid", text !== null);
-    message.textContent = text ?? "";
+    // written only when they change: a slider step runs this for every step (issue 14)
+    setAttr(input, "aria-invalid", text ? "true" : "false");
+    setClass(wrap, "invalid", text !== null);
+    setText(message, text ?? "");
   };
   const onFocus = () => {
     committed = binding.value.peek();
@@ -191,9 +193,9 @@ function editField<T>(binding: Binding<T>, parts: FieldParts, rules: FieldRules<
     if (holding) return;
     if (document.activeElement !== input) committed = value;
     if (!rules.shows(input.value, value)) input.value = rules.show(value);
-    wrap.classList.remove("invalid");
-    input.setAttribute("aria-invalid", "false");
-    message.textContent = "";
+    setClass(wrap, "invalid", false);
+    setAttr(input, "aria-invalid", "false");
+    setText(message, "");
   });
   return {
     /** One step of a slider: checked and applied like a keystroke, and put back at once if refused. */

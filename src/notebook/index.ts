@@ -9,6 +9,7 @@ export { fmt, tableElement } from "./format";
 export { signal, computed, effect, batch, type Signal, type ReadonlySignal } from "@preact/signals-core";
 export { chartFigure, svgText, svgToPng } from "./chart";
 export { outlineFigure } from "./outline-figure";
+export { patchChildren, setText, setAttr, setClass } from "./patch";
 export { settled, inTurns, nextFrame, perFrame, SETTLE_MS } from "./settle";
 export { chartTurns, type ChartTurns } from "./chart-turns";
 export { proportionsSentences, proportionText } from "./proportions-text";

@@ -67,3 +67,18 @@ function patchNode(target: Node, source: Node): number {
   target.nodeValue = source.nodeValue;
   return 1;
 }
+
+/** Sets an element's text only when it differs (setting it replaces its text node, which is then laid out and painted again). */
+export function setText(node: Element, text: string): void {
+  if (node.textContent !== text) node.textContent = text;
+}
+
+/** Sets an attribute only when it differs (every write is a mutation the browser answers). */
+export function setAttr(node: Element, name: string, value: string): void {
+  if (node.getAttribute(name) !== value) node.setAttribute(name, value);
+}
+
+/** Adds or removes a class only when that changes it (classList.remove of an absent class still rewrites the attribute). */
+export function setClass(node: Element, name: string, on: boolean): void {
+  if (node.classList.contains(name) !== on) node.classList.toggle(name, on);
+}

@@ -2,6 +2,7 @@ import { effect } from "@preact/signals-core";
 import { metaFieldProblem, type Study } from "../study";
 import { textControl, controlGroup } from "./controls";
 import type { StudyStore } from "./study-store";
+import { setText } from "./patch";
 
 /** When the study was last changed, for people: "2 Dec 2026, 20:15 UTC", or that it was not recorded. */
 export function describeChangedAt(study: Study): string {
@@ -47,7 +48,8 @@ export function studyDetailsEditor(store: StudyStore): HTMLElement {
   changed.className = "control-hint";
   changed.id = "meta-changed-at";
   effect(() => {
-    changed.textContent = `Last changed: ${describeChangedAt(store.study.value)}.`;
+    // the same minute on most edits: written only when it differs (issue 14: every slider step ran this)
+    setText(changed, `Last changed: ${describeChangedAt(store.study.value)}.`);
   });
   return controlGroup("Study details", [...controls, changed]);
 }

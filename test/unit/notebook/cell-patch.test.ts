@@ -8,6 +8,7 @@ import { signal } from "@preact/signals-core";
 import { reactiveCell } from "../../../src/notebook/cell";
 import { keyValues } from "../../../src/notebook/key-values";
 import { patchChildren } from "../../../src/notebook/patch";
+import { numberControl } from "../../../src/notebook/controls";
 
 /** Records every mutation under `root` until `act` returns; the records, after a microtask. */
 async function mutations(root: Node, act: () => void): Promise<MutationRecord[]> {
@@ -127,5 +128,20 @@ describe("reactiveCell writes only what changed", () => {
     expect(body.firstChild).toBe(grid);
     expect(cell.element.dataset.renders).toBe("2");
     cell.dispose();
+  });
+});
+
+describe("a number control's step writes only what changed", () => {
+  it("a new value from elsewhere (the slider's twin) writes the field, not its class, message or aria-invalid", async () => {
+    const value = signal(100);
+    const root = document.createElement("div");
+    root.append(numberControl({ value, set: (x: number) => { value.value = x; } }, { id: "span", label: "Span", unit: "m", min: 40, max: 400, step: 1 }));
+    document.body.replaceChildren(root);
+    const input = document.getElementById("span") as HTMLInputElement;
+    const records = await mutations(root, () => {
+      value.value = 120;
+    });
+    expect(input.value).toBe("120");
+    expect(records.filter((r) => r.type !== "attributes" || r.attributeName !== "value").map((r) => `${r.type} ${r.attributeName ?? ""}`)).toEqual([]);
   });
 });
