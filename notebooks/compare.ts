@@ -20,7 +20,7 @@ import {
   schemeSummary,
   schemeStatusLine,
   answerParts,
-  resultsTable,
+  liveResultsTable,
   memberTable,
   checkTable,
   takeoffTable,
@@ -32,6 +32,7 @@ import {
   chartTurns,
   proportionsSentences,
   setAttr,
+  patchChildren,
 } from "../src/notebook";
 import { tableGaps } from "../src/pipeline";
 import { roofActions, designPressures } from "../src/loads";
@@ -174,16 +175,19 @@ reactiveCell(answerSlot, { id: "verdict", title: "The answer", className: "answe
   return wrap;
 });
 
+// One table for the page, updated in place as results arrive (issue 14: a new table on every slider
+// step was laid out and painted anew, and forgot the column the reader sorted by).
+const table = liveResultsTable();
+const tableWrap = document.createElement("div");
+tableWrap.className = "table-scroll";
 reactiveCell(outputs, { id: "comparison", title: "Side by side" }, () => {
   const { list, spanM } = drawn.value;
   if (list === null) return "Designing the schemes…";
   if (list.length === 0) return "Switch on at least one scheme to compare.";
-  const wrap = document.createElement("div");
-  wrap.className = "table-scroll";
-  wrap.append(resultsTable(list, currency.value, spanM));
+  table.update(list, currency.value, spanM);
   const gaps = gapNotice(tableGaps(list, { factors: factorRows.value, rates: rateRows.value }), "comparison-gaps");
-  if (gaps) wrap.append(gaps);
-  return wrap;
+  patchChildren(tableWrap, gaps ? [table.element, gaps] : [table.element]);
+  return tableWrap;
 });
 
 // Schemes outside their method's valid range are drawn apart and off the scale unless brought in.

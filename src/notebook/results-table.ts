@@ -3,7 +3,7 @@
 import type { SchemeResult } from "../pipeline";
 import { metricValue, statusOf } from "../comparison/verdict";
 import { materialInfo, type MaterialKind } from "../materials";
-import { sortableTable, type SortColumn } from "./sortable-table";
+import { liveSortableTable, type SortColumn, type SortableOptions } from "./sortable-table";
 import { fmt } from "./format";
 
 const STATUS_WORDS = { feasible: "feasible", "out-of-range": "outside valid span range", infeasible: "not feasible" } as const;
@@ -31,14 +31,32 @@ export function resultColumns(results: readonly SchemeResult[], currency: string
   ];
 }
 
-/** The sortable results table; ranked rows are the feasible, in-range ones. */
-export function resultsTable(results: readonly SchemeResult[], currency: string, spanM: number): HTMLTableElement {
-  const table = sortableTable(results, resultColumns(results, currency), {
+/** The options of the results table for results at `spanM`: ranked rows are the feasible, in-range ones. */
+function resultsOptions(spanM: number): SortableOptions<SchemeResult> {
+  return {
     caption: `The schemes at ${spanM} m span — carbon, cost and roof mass per m² of usable floor; under each, the difference to the best feasible scheme in range`,
     ranked: (r) => statusOf(r.design) === "feasible",
     rowId: (r) => r.id,
     sortKey: "carbon",
-  });
-  table.classList.add("results");
-  return table;
+  };
+}
+
+/**
+ * The results table kept on the page while the results change (a drag of the span slider): each
+ * update writes only what changed, and the column the reader sorted by stays chosen (issue 14).
+ */
+export function liveResultsTable(): { element: HTMLTableElement; update(results: readonly SchemeResult[], currency: string, spanM: number): void } {
+  const live = liveSortableTable<SchemeResult>();
+  live.element.classList.add("results");
+  return {
+    element: live.element,
+    update: (results, currency, spanM) => live.update(results, resultColumns(results, currency), resultsOptions(spanM)),
+  };
+}
+
+/** The sortable results table; ranked rows are the feasible, in-range ones. */
+export function resultsTable(results: readonly SchemeResult[], currency: string, spanM: number): HTMLTableElement {
+  const live = liveResultsTable();
+  live.update(results, currency, spanM);
+  return live.element;
 }

@@ -2,6 +2,7 @@
 // (again: the other way), aria-sort tells assistive technology, and a column marked `lowerIsBetter`
 // shows each ranked row's difference to the best. Rows not ranked stay at the bottom.
 import { fmt } from "./format";
+import { patchChildren, setText } from "./patch";
 
 export interface SortColumn<R> {
   key: string;
@@ -35,43 +36,84 @@ function compare(a: number | string | null, b: number | string | null): number {
   return typeof a === "number" && typeof b === "number" ? a - b : String(a).localeCompare(String(b));
 }
 
-/** The table, sorted by `sortKey` ascending at first; re-sorts in place when a heading is clicked. */
-export function sortableTable<R>(rows: readonly R[], columns: readonly SortColumn<R>[], options: SortableOptions<R>): HTMLTableElement {
-  const table = document.createElement("table");
-  table.className = "sortable";
-  const caption = document.createElement("caption");
-  caption.textContent = options.caption;
-  const thead = document.createElement("thead");
-  const headRow = document.createElement("tr");
-  const tbody = document.createElement("tbody");
-  thead.append(headRow);
-  table.append(caption, thead, tbody);
+/** A sortable table that stays on the page while its rows change (see liveSortableTable). */
+export interface LiveSortableTable<R> {
+  element: HTMLTableElement;
+  /** Shows these rows and columns, in the order the reader last chose (else `sortKey`). */
+  update(rows: readonly R[], columns: readonly SortColumn<R>[], options: SortableOptions<R>): void;
+}
+
+/** The best (lowest) ranked value of each `lowerIsBetter` column. */
+function bestValues<R>(rows: readonly R[], columns: readonly SortColumn<R>[], options: SortableOptions<R>): Map<string, number> {
   const best = new Map<string, number>();
   for (const c of columns) {
     if (!c.lowerIsBetter) continue;
     const values = rows.filter(options.ranked).map(c.value).filter((v): v is number => typeof v === "number" && Number.isFinite(v));
     if (values.length > 0) best.set(c.key, Math.min(...values));
   }
-  let sort = { key: options.sortKey ?? columns[0]?.key ?? "", ascending: true };
+  return best;
+}
+
+/**
+ * A sortable table kept on the page across updates (issue 14, "a slider that keeps up"): each
+ * update writes only the cells, texts and marks that changed (patchChildren), so a slider step's
+ * new results are not styled, laid out and painted as a new table, and the column the reader
+ * sorted by stays chosen. The headings' buttons hold no data: one listener on the table reads the
+ * clicked column's key and sorts the rows shown now.
+ */
+export function liveSortableTable<R>(): LiveSortableTable<R> {
+  const table = document.createElement("table");
+  table.className = "sortable";
+  const caption = document.createElement("caption");
+  const thead = document.createElement("thead");
+  const headRow = document.createElement("tr");
+  const tbody = document.createElement("tbody");
+  thead.append(headRow);
+  table.append(caption, thead, tbody);
+  let shown: { rows: readonly R[]; columns: readonly SortColumn<R>[]; options: SortableOptions<R> } | null = null;
+  let sort: { key: string; ascending: boolean } | null = null;
   const render = () => {
-    const column = columns.find((c) => c.key === sort.key) ?? columns[0];
+    if (!shown) return;
+    const { rows, columns, options } = shown;
+    const current = sort ?? { key: options.sortKey ?? columns[0]?.key ?? "", ascending: true };
+    const column = columns.find((c) => c.key === current.key) ?? columns[0];
     const sorted = [...rows].sort((a, b) => {
       const rank = Number(options.ranked(b)) - Number(options.ranked(a));
       if (rank !== 0 || !column) return rank;
       const order = compare(column.value(a), column.value(b));
-      return sort.ascending ? order : -order;
+      return current.ascending ? order : -order;
     });
-    headRow.replaceChildren(...columns.map((c) => heading(c, c.key === sort.key ? (sort.ascending ? "ascending" : "descending") : null, () => {
-      sort = { key: c.key, ascending: c.key === sort.key ? !sort.ascending : true };
-      render();
-    })));
-    tbody.replaceChildren(...sorted.map((row) => bodyRow(row, columns, options, best)));
+    const best = bestValues(rows, columns, options);
+    setText(caption, options.caption);
+    patchChildren(headRow, columns.map((c) => heading(c, c.key === column?.key ? (current.ascending ? "ascending" : "descending") : null)));
+    patchChildren(tbody, sorted.map((row) => bodyRow(row, columns, options, best)));
   };
-  render();
-  return table;
+  table.addEventListener("click", (event) => {
+    const key = (event.target as Element | null)?.closest?.("th button.sort")?.closest("th")?.dataset.key;
+    if (!key || !shown) return;
+    const now = sort ?? { key: shown.options.sortKey ?? shown.columns[0]?.key ?? "", ascending: true };
+    sort = { key, ascending: key === now.key ? !now.ascending : true };
+    render();
+  });
+  return {
+    element: table,
+    update(rows, columns, options) {
+      shown = { rows, columns, options };
+      // a chosen column that is gone (a material no scheme uses any more) gives way to the default
+      if (sort && !columns.some((c) => c.key === sort?.key)) sort = null;
+      render();
+    },
+  };
 }
 
-function heading<R>(column: SortColumn<R>, direction: "ascending" | "descending" | null, onClick: () => void): HTMLTableCellElement {
+/** The table, sorted by `sortKey` ascending at first; re-sorts in place when a heading is clicked. */
+export function sortableTable<R>(rows: readonly R[], columns: readonly SortColumn<R>[], options: SortableOptions<R>): HTMLTableElement {
+  const live = liveSortableTable<R>();
+  live.update(rows, columns, options);
+  return live.element;
+}
+
+function heading<R>(column: SortColumn<R>, direction: "ascending" | "descending" | null): HTMLTableCellElement {
   const th = document.createElement("th");
   th.scope = "col";
   th.dataset.key = column.key;
@@ -86,7 +128,6 @@ function heading<R>(column: SortColumn<R>, direction: "ascending" | "descending"
   mark.textContent = direction === "ascending" ? " ▲" : direction === "descending" ? " ▼" : "";
   button.append(mark);
   button.title = `Sort by ${column.heading}`;
-  button.addEventListener("click", onClick);
   th.append(button);
   return th;
 }

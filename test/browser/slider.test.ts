@@ -76,6 +76,40 @@ describe("the span slider (issue 14)", () => {
     await page.close();
   });
 
+  it("keeps the results table on the page through a drag: same table, new values, the reader's sort kept", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector('#cell-comparison[aria-busy="false"] table');
+    await page.click('#cell-comparison th[data-key="cost"] button');
+    const before = await page.evaluate(() => {
+      const w = window as unknown as { __table: Element; __row: Element };
+      w.__table = document.querySelector("#cell-comparison table")!;
+      w.__row = document.querySelector("#cell-comparison tbody tr")!;
+      return document.querySelector("#cell-comparison tbody")!.textContent;
+    });
+    await drag(page, Array.from({ length: 6 }, (_, k) => 200 + 4 * k));
+    await page.waitForFunction(() => document.querySelector("#cell-comparison caption")?.textContent?.includes("220 m") && document.querySelector('#cell-comparison[aria-busy="false"]'), undefined, { timeout: 60_000 });
+    const after = await page.evaluate(() => {
+      const w = window as unknown as { __table: Element; __row: Element };
+      const ranked = [...document.querySelectorAll("#cell-comparison tbody tr:not(.not-ranked)")];
+      const column = [...document.querySelectorAll("#cell-comparison thead th")].findIndex((th) => th.getAttribute("data-key") === "cost");
+      return {
+        sameTable: document.querySelector("#cell-comparison table") === w.__table,
+        rowKept: w.__row.isConnected,
+        sort: document.querySelector('#cell-comparison th[data-key="cost"]')?.getAttribute("aria-sort"),
+        costs: ranked.map((tr) => Number((tr.children[column]?.firstChild?.textContent ?? "").replace(/,/g, ""))),
+        body: document.querySelector("#cell-comparison tbody")!.textContent,
+      };
+    });
+    expect(after.sameTable).toBe(true);
+    expect(after.rowKept).toBe(true);
+    expect(after.sort).toBe("ascending");
+    expect(after.costs.length).toBeGreaterThan(1);
+    expect(after.costs).toEqual([...after.costs].sort((a, b) => a - b));
+    expect(after.body).not.toBe(before); // the values are the new span's
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("redraws the section per step, the charts only per set of results, captioned with their span", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
     await page.waitForSelector('#cell-comparison[aria-busy="false"] table');
