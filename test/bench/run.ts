@@ -1,6 +1,7 @@
 // `npm run bench`: prints timings and sizes. Nothing here is asserted; figures go in the issue notes.
 //   npm run bench               everything
 //   npm run bench -- designs    only the design() timings (no build, no browser)
+//   npm run bench -- dome       the cable dome's 3D prestress against the closed form's, 60–300 m
 import { execFileSync } from "node:child_process";
 import { readFileSync, readdirSync, existsSync, statSync } from "node:fs";
 import { gzipSync } from "node:zlib";
@@ -230,4 +231,6 @@ if (!only || only === "browser") await benchBrowser();
 const riskBench = "./risk.ts";
 const analysisBench = "./analysis.ts";
 if (!only || only === "analysis") await import(analysisBench);
+const domeBench = "./dome.ts";
+if (!only || only === "dome") await import(domeBench);
 if (existsSync("test/bench/risk.ts") && (!only || only === "risk")) await import(riskBench);

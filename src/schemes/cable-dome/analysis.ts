@@ -43,6 +43,15 @@ export interface DomeAnalysis {
   summary: DesignAnalysis;
   ringCompressionN: number;
   ringCase: string;
+  /** What set the prestress: the highest prestress tried that failed, and why (null when none failed: the least tried passed). */
+  governedBy: PrestressLimit | null;
+}
+
+/** Why a lower prestress failed: a cable kept too little of its prestress (or went slack), the roof moved too far, or a case found no equilibrium; and under which combination. */
+export interface PrestressLimit {
+  kind: "taut cables" | "displacement" | "no equilibrium";
+  caseName: string;
+  prestressN: number;
 }
 
 function stiffnessOf(groups: readonly DomeMemberGroup[]) {
@@ -105,6 +114,8 @@ function maxDisplacement(s: CableSolution): number {
   return m;
 }
 
+/** Newton–Raphson iterations allowed a case, in one load step: a case that has not converged by then fails the prestress tried. */
+export const DOME_MAX_ITERATIONS = 30;
 /** Times the prestress may be raised while no passing value is found (by half, or fourfold while a case does not converge). */
 const RAISES = 8;
 /**
@@ -116,7 +127,7 @@ const PRESTRESS_FLOOR_OF_LOAD = 0.02;
 /** Bisection steps between a failing and a passing prestress. */
 const BISECTIONS = 3;
 
-type Round = { alpha: number; model: ReturnType<typeof cableDomeModel>; solved: { c: PlanCombination; s: CableSolution }[]; pass: boolean; estimate: number };
+type Round = { alpha: number; model: ReturnType<typeof cableDomeModel>; solved: { c: PlanCombination; s: CableSolution }[]; pass: boolean; estimate: number; failure: PrestressLimit | null };
 
 /**
  * The 3D analysis of the dome (Newton–Raphson, tension-only cables, src/analysis) under the
@@ -139,23 +150,26 @@ export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
   const margin = input.residualPrestress;
   const run = (alpha: number): Round => {
     const model = cableDomeModel(g, scaleForces(unit, alpha), stiffness);
-    const solved = combos.map((c) => ({ c, s: solveCableModel({ ...model.model, loads: headLoads(input, model, c) }, { steps: 1, maxIterations: 30 }) }));
-    let pass = true;
+    const solved = combos.map((c) => ({ c, s: solveCableModel({ ...model.model, loads: headLoads(input, model, c) }, { steps: 1, maxIterations: DOME_MAX_ITERATIONS }) }));
     let estimate = 0;
-    for (const { s: sol } of solved) {
+    // the first failure found, in the order a lead would name it: no equilibrium, a cable losing its prestress, too much movement
+    const failures: PrestressLimit[] = [];
+    for (const { c, s: sol } of solved) {
       if (!sol.converged) {
-        pass = false;
+        failures.push({ kind: "no equilibrium", caseName: c.name, prestressN: alpha });
         continue;
       }
-      if (maxDisplacement(sol) > input.displacementLimitM) pass = false;
+      if (maxDisplacement(sol) > input.displacementLimitM) failures.push({ kind: "displacement", caseName: c.name, prestressN: alpha });
       sol.forcesN.forEach((f, j) => {
         if (!mustStayTaut[j]) return;
         const sj = s[j] as number;
-        if (sol.slack[j] || f < margin * alpha * sj) pass = false;
+        if ((sol.slack[j] || f < margin * alpha * sj) && !failures.some((x) => x.kind === "taut cables" && x.caseName === c.name)) failures.push({ kind: "taut cables", caseName: c.name, prestressN: alpha });
         estimate = Math.max(estimate, -(f - alpha * sj) / ((1 - margin) * sj));
       });
     }
-    return { alpha, model, solved, pass, estimate };
+    const order = ["no equilibrium", "taut cables", "displacement"];
+    const failure = failures.sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind))[0] ?? null;
+    return { alpha, model, solved, pass: failure === null, estimate, failure };
   };
   const planAreaM2 = Math.PI * g.ringRadiusM ** 2;
   const heaviestN = Math.max(0, ...combos.map((c) => uniformPressurePa(c, input.selfWeightKPa))) * planAreaM2;
@@ -176,7 +190,7 @@ export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
     if (mid.pass) hi = mid;
     else lo = mid;
   }
-  return summarise(input, hi, n, mustStayTaut);
+  return { ...summarise(input, hi, n, mustStayTaut), governedBy: lo?.failure ?? null };
 }
 
 function scaleForces(f: CableDomeTrussForces, a: number): CableDomeTrussForces {
@@ -187,7 +201,7 @@ function scaleForces(f: CableDomeTrussForces, a: number): CableDomeTrussForces {
   };
 }
 
-function summarise(input: DomeAnalysisInput, last: Round, n: number, mustStayTaut: boolean[]): DomeAnalysis {
+function summarise(input: DomeAnalysisInput, last: Round, n: number, mustStayTaut: boolean[]): Omit<DomeAnalysis, "governedBy"> {
   const { model, solved, alpha } = last;
   const cases = solved.map(({ c, s }) => ({ name: c.name, solution: s, envelope: envelopeOf(model, n, s.forcesN), maxDisplacementM: maxDisplacement(s), slackMembers: s.slack.filter(Boolean).length }));
   const notConverged = solved.find(({ s }) => !s.converged);

@@ -8,7 +8,7 @@ import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { autoHoopCount, cableDomeLayout, cableDomePlan, cableDomeSection, cableDomeSoffit, type CableDomeLayout } from "./geometry";
 import { domeMembers, sizeCableDome, type DomeSizing, type DomeSizingInput } from "./sizing";
-import { analyseDome, type DomeAnalysis, type DomeSlackRule } from "./analysis";
+import { analyseDome, DOME_MAX_ITERATIONS, type DomeAnalysis, type DomeSlackRule } from "./analysis";
 import { designBasis, type DesignBasis } from "../../loads";
 import { designCompressionRing, type RingDesign, type RingMaterial } from "./compression-ring";
 import { cableDomeDeclaration, type CableDomeOptions } from "./declaration";
@@ -98,6 +98,17 @@ function analysedSizing(input: DomeSizingInput, sized: DomeSizing, selfWeightKPa
   return { sized: { ...sized, groups, prestressN: analysis.prestressN, ringCompressionN: analysis.ringCompressionN, ringCase: analysis.ringCase }, analysis };
 }
 
+/** What set the analysed prestress, in a project lead's words: keeping the cables taut, how far the roof may move, or a lower prestress the analysis could not balance. */
+function prestressWarning(analysis: DomeAnalysis, spanM: number, residualPrestress: number): string {
+  const kN = `${(analysis.prestressN / 1000).toFixed(0)} kN`;
+  const limit = analysis.governedBy;
+  if (limit === null) return `prestress ${kN}: the lowest the analysis tried; with it every cable stays taut and the roof moves less than span/${(1 / DEFLECTION_LIMIT_RATIO).toFixed(0)} (no lower prestress was found to fail)`;
+  const lower = `at ${(limit.prestressN / 1000).toFixed(0)} kN`;
+  if (limit.kind === "displacement") return `prestress ${kN}, set by how far the roof may move: ${lower} it moves more than span/${(1 / DEFLECTION_LIMIT_RATIO).toFixed(0)} (${(spanM * DEFLECTION_LIMIT_RATIO).toFixed(2)} m) under ${limit.caseName}`;
+  if (limit.kind === "taut cables") return `prestress ${kN}, set by keeping the cables taut: ${lower} a cable keeps less than ${(100 * residualPrestress).toFixed(0)} % of its prestress under ${limit.caseName}`;
+  return `prestress ${kN}, set by the analysis converging: ${lower} it found no balanced shape under ${limit.caseName} within ${DOME_MAX_ITERATIONS} iterations (counted as failing)`;
+}
+
 /** Largest displacement under the analysed combinations ÷ span allowed. */
 export const DEFLECTION_LIMIT_RATIO = CABLE_ROOF_DEFLECTION_RATIO;
 
@@ -131,6 +142,7 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
     analysis
       ? `members, ring and prestress from the 3D analysis (Newton–Raphson, tension-only cables) of ${analysis.cases.map((c) => c.name).join(", ")} — the combinations with the largest gravity peak, drifted snow and the largest uplift; the closed form (uniform equivalents) seeds it and is the cross-check: prestress ${(closedForm.prestressN / 1000).toFixed(0)} kN there; the ring is taken as rigid in the analysis, the wind's horizontal part is left out, and member stiffness is the closed form's`
       : "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); the antisymmetric part of drifted snow and one-sided wind is not analysed by it",
+    ...(analysis && analysis.reason === "" ? [prestressWarning(analysis, brief.spanM, opts.residualPrestress)] : []),
     "temperature: a uniform change does not change the forces of cables, posts and a steel ring that expand alike; with a concrete ring the small difference of expansion is left out",
     "the columns or stand structure under the compression ring are not designed",
     "self-weight is smeared over the plan and applied at the post heads",

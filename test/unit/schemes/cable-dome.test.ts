@@ -147,6 +147,25 @@ describe("cableDome through the 3D analysis (issue 13)", () => {
     expect(c?.passed).toBe(true);
     expect(c?.capacity).toBeCloseTo(DEFAULT_BRIEF.spanM / 100, 9);
   });
+  it("says in words what set the prestress, and the design bears it out", () => {
+    const say = (x: ReturnType<typeof design>) => x.warnings.find((w) => w.startsWith("prestress "));
+    const displacement = (x: ReturnType<typeof design>) => x.checks.find((c) => c.name.startsWith("largest displacement"))!.utilisation;
+    // 60 and 100 m at rise/span 0.08 (measured 0.95 and 0.98 of span/100): the movement limit sets it; a lower prestress tried moved the roof too far
+    for (const spanM of [60, 100]) {
+      const x = design({ ...DEFAULT_BRIEF, spanM, riseM: 0.08 * spanM }, analysed);
+      const words = say(x)!;
+      expect(words).toMatch(new RegExp(`^prestress ${x.analysis!.prestressKN!.toFixed(0)} kN, set by how far the roof may move: at (\\d+) kN it moves more than span/100`));
+      expect(Number(/at (\d+) kN/.exec(words)![1])).toBeLessThan(x.analysis!.prestressKN!);
+      expect(displacement(x)).toBeGreaterThan(0.8);
+      expect(displacement(x)).toBeLessThanOrEqual(1);
+    }
+    // light snow at 60 m: nothing lower than the first prestress tried failed, and the roof stays well within its limit
+    const light = design({ ...DEFAULT_BRIEF, spanM: 60, riseM: 4.8, snowGroundKPa: 0.2 }, analysed);
+    expect(say(light)).toMatch(/^prestress \d+ kN: the lowest the analysis tried/);
+    expect(displacement(light)).toBeLessThan(0.8);
+    // the closed form says nothing of it
+    expect(say(design(DEFAULT_BRIEF, { ...cableDome.defaults, analysis: "closed-form" }))).toBeUndefined();
+  });
   it("the closed form alone stays available as the cross-check, without an analysis", () => {
     const closed = design(DEFAULT_BRIEF, { ...cableDome.defaults, analysis: "closed-form" });
     expect(closed.analysis).toBeUndefined();
