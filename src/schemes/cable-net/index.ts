@@ -7,7 +7,8 @@ import { roofActions } from "../../loads/roof-actions";
 import { capHeightAt } from "../../mechanics/spherical-cap";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
-import { sizeCableNet, sizeNetFromAnalysis, type NetSizing, type NetSizingInput } from "./sizing";
+import { sizeCableNet, sizeNetFromAnalysis, MAST_SPLICE_TUBE_LENGTH_M, type NetSizing, type NetSizingInput } from "./sizing";
+import { MAST_SEGMENT_MAX_M } from "./laced-mast";
 import { analyseNet, type NetAnalysis, type NetAnalysisInput } from "./analysis";
 import { designBasis } from "../../loads";
 import { strandResistanceN } from "../../catalogue/pick-strand";
@@ -48,6 +49,7 @@ function netTakeoff(sized: NetSizing, fabric: Fabric): TakeoffRow[] {
     cables("backstays", "backstay"),
     ...tieDownRows(sized),
     tonnesRow("masts", mast?.fabricated ? "steel-plate" : "steel-hot-finished-hollow", "steel-mast", massOfKinds(sized.groups, ["mast"])),
+    ...(mast?.spliceKg ? [tonnesRow(`mast splices (${mast.splices} site joints, segments ≤ ${MAST_SEGMENT_MAX_M} m for road transport; allowance: each weighs ${MAST_SPLICE_TUBE_LENGTH_M} m of the tubes it joins)`, mast.fabricated ? "steel-plate" : "steel-hot-finished-hollow", "steel-mast", mast.spliceKg)] : []),
     { ...tonnesRow("central tension ring", "steel-plate", "steel-ring", massOfKinds(sized.groups, ["central ring"])), group: "structure" },
     { element: "fabric", material: fabric.material, costItem: fabricCostItem(fabric), quantity: sized.fabricAreaM2, unit: "m2", massKg: sized.fabricMassKg, group: "envelope" },
     { element: "anchors", material: "concrete-c30-37", costItem: "anchor", quantity: sized.anchorConcreteM3, unit: "m3", massKg: sized.anchorConcreteM3 * PLAIN_CONCRETE_DENSITY_KG_PER_M3, group: "substructure" },

@@ -110,7 +110,7 @@ function diagonalCheck(diagonal: ChsSection, pairs: readonly { forceN: number; l
  * chords come lightest first, so the search stops at the first chord whose four alone weigh as much
  * as the best mast so far.
  */
-function lacedMastAt(sections: readonly ChsSection[], axialN: number, lengthM: number, yieldPa: number, faceM: number, endFaceM: number, belowKgPerM: number): LacedMast | null {
+function lacedMastAt(sections: readonly ChsSection[], axialN: number, lengthM: number, yieldPa: number, faceM: number, endFaceM: number, belowKgPerM: number, mastLengthM = lengthM): LacedMast | null {
   const panels = Math.max(1, Math.ceil(lengthM / (2 * faceM)));
   const panelM = lengthM / panels;
   const leastChordN = axialN / 4 + (axialN * lengthM) / 500 / (2 * faceM);
@@ -134,7 +134,7 @@ function lacedMastAt(sections: readonly ChsSection[], axialN: number, lengthM: n
       if (!d) continue;
       const massKgPerM = 4 * chord.massKgPerM + (4 * 2 * pair.meanDiagonalM * diagonal.massKgPerM) / panelM;
       if (massKgPerM >= belowKgPerM) return null;
-      const segments = Math.ceil(lengthM / MAST_SEGMENT_MAX_M - 1e-9);
+      const segments = Math.ceil(mastLengthM / MAST_SEGMENT_MAX_M - 1e-9);
       const shape = endFaceM < faceM ? `${faceM.toFixed(2)} m square at mid-height, ${endFaceM.toFixed(2)} m at the ends` : `${faceM.toFixed(2)} m square`;
       return {
         chord, diagonal, faceM, endFaceM, panelM, segments, massKgPerM, forces: pair.forces,
@@ -150,11 +150,12 @@ function lacedMastAt(sections: readonly ChsSection[], axialN: number, lengthM: n
  * The lightest laced mast (sections sorted by mass) for a pin-ended compression N over L lighter
  * than `belowKgPerM` (default: any), or null. With `tapered`, masts narrowing to
  * MAST_TAPER_END_RATIO of their mid-height face at the ends are tried after the uniform ones.
+ * `mastLengthM`: the whole mast, when L is a part of it (braced at mid-height), for its segments.
  */
-export function designLacedMast(sections: readonly ChsSection[], axialN: number, lengthM: number, yieldPa: number, belowKgPerM = Infinity, options: { tapered?: boolean } = {}): LacedMast | null {
+export function designLacedMast(sections: readonly ChsSection[], axialN: number, lengthM: number, yieldPa: number, belowKgPerM = Infinity, options: { tapered?: boolean; mastLengthM?: number } = {}): LacedMast | null {
   let best: LacedMast | null = null;
   for (const faceM of FACES_M) {
-    const m = lacedMastAt(sections, axialN, lengthM, yieldPa, faceM, faceM, best?.massKgPerM ?? belowKgPerM);
+    const m = lacedMastAt(sections, axialN, lengthM, yieldPa, faceM, faceM, best?.massKgPerM ?? belowKgPerM, options.mastLengthM);
     if (m) best = m;
   }
   if (!options.tapered || !best) return best;
@@ -162,7 +163,7 @@ export function designLacedMast(sections: readonly ChsSection[], axialN: number,
   // and the three wider ones (the checks at eleven stations make a tapered candidate dearer to try).
   const from = best.faceM;
   for (const faceM of FACES_M.filter((f) => f >= from - 1e-9 && f <= from + 0.75 + 1e-9)) {
-    const m = lacedMastAt(sections, axialN, lengthM, yieldPa, faceM, Math.max(FACES_M[0] ?? 0.5, faceM * MAST_TAPER_END_RATIO), best.massKgPerM);
+    const m = lacedMastAt(sections, axialN, lengthM, yieldPa, faceM, Math.max(FACES_M[0] ?? 0.5, faceM * MAST_TAPER_END_RATIO), best.massKgPerM, options.mastLengthM);
     if (m) best = m;
   }
   return best;

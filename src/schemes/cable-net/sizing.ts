@@ -8,14 +8,14 @@ import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { GRAVITY_M_PER_S2, kPaOfMass } from "../../mechanics/gravity";
 import { chsFromDimensions, STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
 import { fabricCover, pickChs, pickStrandGroup, SizingError, steelTensionRing, uniformPressurePa, type SizedGroup, type PlanCombination } from "../kit";
-import { designLacedMast, MAST_FACE_MAX_M } from "./laced-mast";
+import { designLacedMast, MAST_FACE_MAX_M, MAST_SEGMENT_MAX_M } from "./laced-mast";
 import { BACKSTAY_SLOPE_RAD, circumferentialSpanM, type CableNetLayout, type NetBay } from "./geometry";
 
 export type NetMemberKind = "suspension" | "valley" | "circumferential" | "edge" | "backstay" | "mast" | "central ring" | "tie-down";
 
 /** A member group of the net; a mast may be fabricated from plate (not a catalogue section). */
 /** A member group of the net; `eaN` its axial stiffness (cables and ring), N. */
-export type NetMemberGroup = SizedGroup<NetMemberKind, { fabricated?: boolean; caseName: string; eaN?: number }>;
+export type NetMemberGroup = SizedGroup<NetMemberKind, { fabricated?: boolean; caseName: string; eaN?: number; spliceKg?: number; splices?: number }>;
 
 export interface NetSizing {
   /** The design combinations' uniform equivalents, Pa on plan (down positive), in the order of `caseNames`. */
@@ -242,25 +242,38 @@ function radialFamilies(input: NetSizingInput, cases: readonly number[], strands
 function sizeMast(input: NetSizingInput, cableMastN: number): Omit<NetMemberGroup, "caseName"> {
   const { layout, brief } = input;
   const effective = input.braced ? layout.mastLengthM / 2 : layout.mastLengthM;
-  const withWeight = (massKgPerM: number) => cableMastN + brief.factors.gammaGSup * massKgPerM * layout.mastLengthM * GRAVITY_M_PER_S2;
+  // segments no longer than road transport takes, spliced on site: the splices' weight is the mast's too
+  const splices = Math.ceil(layout.mastLengthM / MAST_SEGMENT_MAX_M - 1e-9) - 1;
+  const kgOf = (c: MastChoice) => c.massKgPerM * layout.mastLengthM + splices * c.spliceKgPerJoint;
+  const withWeight = (c: MastChoice) => cableMastN + brief.factors.gammaGSup * kgOf(c) * GRAVITY_M_PER_S2;
   const tube = selfWeighing(cableMastN, withWeight, (mastN) => singleTube(input, mastN, effective));
   // A laced mast weighs at least its chords' N/f_y of steel a metre: where the tube is lighter than that, it wins.
   const lacedFloorKgPerM = (cableMastN / input.yieldPa) * STEEL_DENSITY_KG_PER_M3;
   const laced = tube && tube.choice.massKgPerM <= lacedFloorKgPerM ? null : selfWeighing(cableMastN, withWeight, (mastN) => {
-    const m = designLacedMast(input.catalogue.chs, mastN, effective, input.yieldPa, tube ? 1.5 * tube.choice.massKgPerM : Infinity, { tapered: input.taperedMasts === true });
-    return m && { massKgPerM: m.massKgPerM, resistanceN: mastN / m.utilisation, governing: "laced built-up column, EN 1993-1-1 §6.4", designation: m.designation, fabricated: false };
+    const m = designLacedMast(input.catalogue.chs, mastN, effective, input.yieldPa, tube ? 1.5 * tube.choice.massKgPerM : Infinity, { tapered: input.taperedMasts === true, mastLengthM: layout.mastLengthM });
+    // the four chords are spliced; the diagonals end at the joint
+    return m && { massKgPerM: m.massKgPerM, spliceKgPerJoint: 4 * m.chord.massKgPerM * MAST_SPLICE_TUBE_LENGTH_M, resistanceN: mastN / m.utilisation, governing: "laced built-up column, EN 1993-1-1 §6.4", designation: m.designation, fabricated: false };
   });
-  const mast = tube && (!laced || tube.choice.massKgPerM <= laced.choice.massKgPerM) ? tube : laced;
+  const mast = tube && (!laced || kgOf(tube.choice) <= kgOf(laced.choice)) ? tube : laced;
   if (!mast) throw new SizingError(`no mast (a tube up to 4 m or a laced column up to ${MAST_FACE_MAX_M} m square) carries ${(cableMastN / 1e6).toFixed(1)} MN over ${effective.toFixed(0)} m: use braced masts, more masts or shorter masts`);
   const { choice, mastN } = mast;
   return {
     kind: "mast", element: "masts", material: choice.fabricated ? "steel-plate" : "steel-hot-finished-hollow", count: layout.masts, lengthM: layout.mastLengthM, section: choice.designation, designForceN: -mastN,
     resistanceN: choice.resistanceN, utilisation: mastN / choice.resistanceN, governing: choice.governing, massKg: choice.massKgPerM * layout.mastLengthM * layout.masts, fabricated: choice.fabricated,
+    splices: splices * layout.masts, spliceKg: splices * layout.masts * choice.spliceKgPerJoint,
   };
 }
 
+/**
+ * A site splice of a tube (two bolted flanges with stiffeners, and the bolts) weighs about as much as
+ * this length of the tube it joins (common practice, no source): an allowance, not a design.
+ */
+export const MAST_SPLICE_TUBE_LENGTH_M = 1;
+
 interface MastChoice {
   massKgPerM: number;
+  /** Mass of the splices at one joint of the mast (every tube crossing it), kg. */
+  spliceKgPerJoint: number;
   resistanceN: number;
   governing: string;
   designation: string;
@@ -268,12 +281,12 @@ interface MastChoice {
 }
 
 /** Sizes for the cable force, adds the mast's weight and resizes until it carries both (or null). */
-function selfWeighing(cableMastN: number, withWeight: (massKgPerM: number) => number, size: (mastN: number) => MastChoice | null): { choice: MastChoice; mastN: number } | null {
+function selfWeighing(cableMastN: number, withWeight: (choice: MastChoice) => number, size: (mastN: number) => MastChoice | null): { choice: MastChoice; mastN: number } | null {
   let mastN = cableMastN;
   for (let pass = 0; pass < 6; pass++) {
     const choice = size(mastN);
     if (!choice) return null;
-    const next = withWeight(choice.massKgPerM);
+    const next = withWeight(choice);
     if (next <= mastN) return choice.resistanceN >= mastN ? { choice, mastN } : null;
     mastN = next;
   }
@@ -288,7 +301,7 @@ function singleTube(input: NetSizingInput, mastN: number, effectiveM: number): M
   const fabricatedTube = pickChs(FABRICATED_TUBES, demand, { yieldPa: input.yieldPa, curve: "b" });
   const catalogueMast = fromCatalogue && (!fabricatedTube || fromCatalogue.section.massKgPerM <= fabricatedTube.section.massKgPerM) ? fromCatalogue : null;
   const mast = catalogueMast ?? fabricatedTube;
-  return mast && { massKgPerM: mast.section.massKgPerM, resistanceN: mast.resistanceN, governing: mast.governing, designation: mast.section.designation, fabricated: catalogueMast === null };
+  return mast && { massKgPerM: mast.section.massKgPerM, spliceKgPerJoint: mast.section.massKgPerM * MAST_SPLICE_TUBE_LENGTH_M, resistanceN: mast.resistanceN, governing: mast.governing, designation: mast.section.designation, fabricated: catalogueMast === null };
 }
 
 /** The net's forces from the 3D analysis, for sizing (see analysis.ts). */
