@@ -29,6 +29,22 @@ describe("every page", () => {
   }
 });
 
+describe("every page on a phone (390 × 844)", () => {
+  for (const page of [{ file: "index.html", id: "index" }, ...PAGES]) {
+    it(`${page.file} does not scroll sideways: wide tables and figures scroll inside their cell`, async () => {
+      const { page: p } = await openPage(browser, `${inject("baseUrl")}/${page.file}`);
+      await p.setViewportSize({ width: 390, height: 844 });
+      await p.waitForLoadState("networkidle");
+      // the results arrive from the design workers: wait for the cells that show them
+      await expect.poll(() => p.locator("[aria-busy=true]").count()).toBe(0);
+      await p.waitForTimeout(300);
+      const { scrollWidth, clientWidth } = await p.evaluate(() => ({ scrollWidth: document.documentElement.scrollWidth, clientWidth: document.documentElement.clientWidth }));
+      expect(scrollWidth).toBeLessThanOrEqual(clientWidth);
+      await p.close();
+    });
+  }
+});
+
 describe("span study", () => {
   it("draws a line for every scheme that is feasible somewhere in the range", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/span-study.html`);
