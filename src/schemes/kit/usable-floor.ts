@@ -68,6 +68,50 @@ function soffitHeightOutwards(soffit: FloorEnvelope["soffit"]): (rM: number) => 
   };
 }
 
+/**
+ * usableFloorAreaM2 on FLOOR_RINGS rings for an ascending soffit, the same rings counted (a ring is
+ * usable when the soffit at its mid-radius leaves the clear height) without asking each ring: where
+ * the soffit is clear (or not) at both ends of one of its straight pieces it is so all along it, and
+ * every ring whose middle lies on that piece is counted (or left) without asking its height. Only the
+ * rings on a piece that crosses the clear height are asked one by one. The per-ring scan was a sixth
+ * of the cable net's proportion search (its soffit has 201 points, the floor 2,000 rings).
+ */
+function ringsUnderSoffitM2(a: number, soffit: FloorEnvelope["soffit"], minClearM: number): number {
+  const dr = a / FLOOR_RINGS;
+  const last = soffit.length - 1;
+  const radius = (j: number) => (soffit[j] as readonly [number, number])[0];
+  const height = (j: number) => (soffit[j] as readonly [number, number])[1];
+  let area = 0;
+  let j = 1; // the piece (j − 1, j) holding the ring's middle; j = 0 before the first point, soffit.length beyond the last
+  // a ring's middle as usableFloorAreaM2 takes it, to the last bit
+  const middleOf = (k: number) => k * dr + dr / 2;
+  const ring = (k: number) => {
+    const r0 = k * dr;
+    const r1 = r0 + dr;
+    return Math.PI * (r1 * r1 - r0 * r0);
+  };
+  for (let i = 0; i < FLOOR_RINGS; ) {
+    const middle = middleOf(i);
+    if (middle <= radius(0)) j = 0;
+    else while (j < soffit.length && !(j >= 1 && middle <= radius(j))) j++;
+    // the heights at the ends of the piece, and the last ring whose middle is on it
+    const [from, to, end] = j === 0 ? [height(0), height(0), radius(0)] : j > last ? [height(last), height(last), Infinity] : [height(j - 1), height(j), radius(j)];
+    let lastRing = Math.min(FLOOR_RINGS - 1, Math.max(i, Math.floor(end / dr - 0.5)));
+    while (lastRing > i && middleOf(lastRing) > end) lastRing--;
+    while (lastRing + 1 < FLOOR_RINGS && middleOf(lastRing + 1) <= end) lastRing++;
+    if (from >= minClearM && to >= minClearM) {
+      // each ring's annulus added as usableFloorAreaM2 adds it, so the sum is the same to the last bit
+      for (; i <= lastRing; i++) area += ring(i);
+    } else if (from < minClearM && to < minClearM) {
+      i = lastRing + 1;
+    } else {
+      if (heightBefore(soffit, Math.max(1, j), middle) >= minClearM) area += ring(i);
+      i += 1;
+    }
+  }
+  return area;
+}
+
 /** Whether the soffit at radius r leaves the brief's clear height. */
 function clearAt(brief: Brief, floor: FloorEnvelope, rM: number): boolean {
   return soffitHeightAtM(floor.soffit, rM) >= brief.minClearHeightM;
@@ -107,7 +151,7 @@ function supportLossM2(brief: Brief, floor: FloorEnvelope, s: FloorEnvelope["sup
  */
 export function usableFloorM2(brief: Brief, floor: FloorEnvelope): number {
   const a = brief.spanM / 2;
-  const underSoffit = usableFloorAreaM2(a, soffitHeightOutwards(floor.soffit), brief.minClearHeightM, FLOOR_RINGS);
+  const underSoffit = isAscending(floor.soffit) && floor.soffit.length > 0 ? ringsUnderSoffitM2(a, floor.soffit, brief.minClearHeightM) : usableFloorAreaM2(a, soffitHeightOutwards(floor.soffit), brief.minClearHeightM, FLOOR_RINGS);
   let supportsM2 = 0;
   for (const s of floor.supports) {
     if (!(s.radiusM >= 0 && s.clearRadiusM >= 0 && Number.isInteger(s.count) && s.count >= 0)) {

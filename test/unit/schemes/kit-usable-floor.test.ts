@@ -56,3 +56,18 @@ describe("one accounting and status (kit)", () => {
     expect(designStatus("", false)).toBe("feasible");
   });
 });
+
+describe("usable floor: the rings counted piece by piece (an ascending soffit) are the rings counted one by one", () => {
+  it("random ascending soffits, with steps, flat ends, points beyond the plan: exactly the area of usableFloorAreaM2 on 2,000 rings", async () => {
+    const fc = await import("fast-check");
+    const soffit = fc.array(fc.tuple(fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: 0, max: 25, noNaN: true })), { minLength: 1, maxLength: 12 }).map((points) => [...points].sort((p, q) => p[0] - q[0]));
+    fc.assert(
+      fc.property(soffit, fc.double({ min: 0, max: 25, noNaN: true }), (points, minClearHeightM) => {
+        const b = { ...brief, minClearHeightM };
+        const oneByOne = usableFloorAreaM2(50, (r) => soffitHeightAtM(points, r), minClearHeightM, 2000);
+        expect(usableFloorM2(b, { soffit: points, supports: [] })).toBe(oneByOne);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
