@@ -4,6 +4,8 @@ import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { SCHEMES } from "../../src/schemes";
 import type { SchemeId } from "../../src/schemes/types";
 import { runSpanStudy, type SpanPoint } from "../../src/comparison";
+import { readFileSync } from "node:fs";
+import { studyFromJson, type Study } from "../../src/study";
 
 // Issue 12 item 5: along 40–400 m in 5 m steps no metric of a feasible, in-range scheme changes by
 // more than 15 % between neighbouring spans, unless the scheme names a regime change there.
@@ -67,5 +69,31 @@ describe("smooth across span (40–400 m, 5 m steps)", () => {
       expect(jumps(points)).toEqual([]);
       expect(flips(points)).toEqual([]);
     }, 400_000); // each scheme: 73 spans, each with its proportion search (about 3–170 s here)
+  }
+});
+
+// The same property on the demo study's brief (the Quillbridge arena: another eaves height, clear
+// height and height limit), not only on the default one. Found at 18:00 on 3 Dec (lead, CLI sweep):
+// the geodesic dome jumps 19.4 % in mass ÷ air (self-weight +13.9 %) at 220 → 225 m with no regime
+// change, where its trend-chosen rise drops from 40.7 to 37.9 m and its struts go from 12.5 to
+// 13.5 m; the same at the start of that stop (75b9e13). Expected to fail until it is fixed.
+const KNOWN_FAILING_DEMO: readonly SchemeId[] = ["geodesic-dome"];
+
+function demoStudy(): Study {
+  const loaded = studyFromJson(readFileSync("data/demo-study.json", "utf8"));
+  if (!loaded.ok) throw new Error("the demo study does not load");
+  return loaded.study;
+}
+
+describe("smooth across span on the demo study's brief (40–400 m, 5 m steps)", () => {
+  const study = demoStudy();
+  const catalogue = defaultCatalogue();
+  for (const model of SCHEMES) {
+    const run = KNOWN_FAILING_DEMO.includes(model.id) ? it.fails : it;
+    run(`${model.id}: no metric jumps more than 15 % between neighbours without a named regime change, and the regime does not flip back`, () => {
+      const points = runSpanStudy(study, catalogue, { fromM: 40, toM: 400, stepM: 5 }, { schemeIds: [model.id] });
+      expect(jumps(points)).toEqual([]);
+      expect(flips(points)).toEqual([]);
+    }, 400_000);
   }
 });
