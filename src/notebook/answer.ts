@@ -69,7 +69,7 @@ export function marginText(value: number, next: number, nextText: string): strin
 function reasonText(result: SchemeResult): string {
   const d = result.design;
   const bits: string[] = [];
-  if (d.governing) bits.push(`its sizes are governed by ${fmt.plain(d.governing)} (utilisation ${fmt.two(d.maxUtilisation)})`);
+  if (d.governing) bits.push(`its governing check is “${fmt.plain(d.governing)}” (utilisation ${fmt.two(d.maxUtilisation)})`);
   const driver = carbonDriver(result);
   if (driver) bits.push(`${driver.kind} carries ${fmt.pct(driver.share)} of its carbon`);
   return bits.length > 0 ? `${capitalised(bits.join("; "))}.` : "";

@@ -109,7 +109,7 @@ export function schemeStatusLine(result: SchemeResult): HTMLElement {
   const lead =
     status === "infeasible"
       ? `Not feasible: ${fmt.plain(design.reason)}`
-      : `${status === "feasible" ? "Feasible" : "Passes its checks, but the span is outside its method's valid range"}; governed by ${fmt.plain(design.governing)} (utilisation ${fmt.two(design.maxUtilisation)})`;
+      : `${status === "feasible" ? "Feasible" : "Passes its checks, but the span is outside its method's valid range"}; governing check “${fmt.plain(design.governing)}” (utilisation ${fmt.two(design.maxUtilisation)})`;
   p.textContent = figures.length > 0 ? `${lead}. ${figures.join(" · ")}.` : `${lead}.`;
   return p;
 }

@@ -79,6 +79,29 @@ describe("compare page: the answer first (issue 14)", () => {
     expect(errors).toEqual([]);
     await page.close();
   });
+
+  it("the table's caption wraps within its scroll box and stays in view while the table scrolls sideways", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-comparison table caption");
+    const box = () =>
+      page.evaluate(() => {
+        const wrap = document.querySelector<HTMLElement>("#cell-comparison .table-scroll")!;
+        const caption = document.querySelector("#cell-comparison caption")!.getBoundingClientRect();
+        const view = wrap.getBoundingClientRect();
+        return { wider: wrap.scrollWidth > wrap.clientWidth, left: caption.left - view.left, right: view.right - caption.right };
+      });
+    const before = await box();
+    // the table is wider than its column at 1280 px (else this test would not test the caption's wrap)
+    expect(before.wider).toBe(true);
+    expect(before.left).toBeGreaterThanOrEqual(-0.5);
+    expect(before.right).toBeGreaterThanOrEqual(-0.5);
+    await page.evaluate(() => document.querySelector("#cell-comparison .table-scroll")!.scrollBy(200, 0));
+    const scrolled = await box();
+    expect(scrolled.left).toBeGreaterThanOrEqual(-0.5);
+    expect(scrolled.right).toBeGreaterThanOrEqual(-0.5);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
 });
 
 describe("short links (issue 14)", () => {
