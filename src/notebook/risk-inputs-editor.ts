@@ -186,7 +186,7 @@ export function riskInputsEditor(store: StudyStore, pending: PendingEntries = si
   });
   const count = computed(() => `${rows.value.filter(visible.value).length} of ${rows.value.length} inputs shown`);
   const holder = document.createElement("div");
-  holder.className = "risk-inputs";
+  holder.className = "risk-inputs table-scroll";
   mountEditableTable<UncertainInput>(holder, {
     tableId: "risk-inputs-table",
     caption:
