@@ -46,7 +46,7 @@ import {
   type FactorRow,
   type TransportMode,
 } from "../src/carbon";
-import { carbonChartOptions, carbonApartChartOptions, carbonByElementChartOptions, chartCaption, CARBON_METRICS, targetApplies, type CarbonMetric, type SchemeCarbon } from "../src/charts";
+import { carbonChartOptions, carbonApartChartOptions, carbonByElementChartOptions, chartCaption, CARBON_METRICS, type CarbonMetric, type SchemeCarbon } from "../src/charts";
 import * as v from "valibot";
 
 const { store, main } = startPage({
@@ -84,20 +84,6 @@ const modeBinding = (mode: TransportMode["mode"]): Binding<number> => ({
     store.study.value = setIn(store.study.value, [...path, "transportModes"], modes);
   },
 });
-let lastTarget = 300;
-const targetOn: Binding<boolean> = {
-  value: computed(() => settings.value.targetKgCO2ePerM2 !== null),
-  set(on) {
-    store.study.value = setIn(store.study.value, [...path, "targetKgCO2ePerM2"], on ? lastTarget : null);
-  },
-};
-const targetValue: Binding<number> = {
-  value: computed(() => settings.value.targetKgCO2ePerM2 ?? lastTarget),
-  set(next) {
-    lastTarget = next;
-    store.study.value = setIn(store.study.value, [...path, "targetKgCO2ePerM2"], next);
-  },
-};
 
 staticCell(
   main,
@@ -122,7 +108,7 @@ staticCell(
           hint: "Added to every mass, never to a factor (10 %: common practice, no source).",
         }),
         selectControl(store.bind<string>([...path, "areaBasis"]), {
-          label: "Per-m² basis for the target",
+          label: "Per-m² basis of the results",
           id: "areaBasis",
           choices: [
             { value: "usable-floor", label: "Usable floor" },
@@ -130,8 +116,6 @@ staticCell(
             { value: "roof-surface", label: "Roof surface" },
           ],
         }),
-        toggleControl(targetOn, { label: "Compare with a target", id: "targetOn" }),
-        numberControl(targetValue, { label: "Target", unit: "kgCO2e/m²", min: 0, max: 100000, step: 10, id: "targetKgCO2ePerM2", hint: "On the basis above; typing a value switches the target on." }),
       ]),
       controlGroup("Transport (A4) mode factors", [
         numberControl(modeBinding("road"), { label: "Road, HGV average laden", unit: "kgCO2e/t·km", min: 0, max: 5, step: 0.001, id: "modeRoad", hint: DEFAULT_CARBON_SETTINGS.transportModes[0]?.source ?? "" }),
@@ -272,7 +256,6 @@ reactiveCell(main, { id: "carbon-table", title: "Embodied carbon per scheme" }, 
   notes.className = "warnings";
   const lines: string[] = bandLines(results, s);
   for (const r of results) {
-    if (r.carbon?.target) lines.push(`${r.label}: ${r.carbon.target.met ? "meets" : "exceeds"} the target of ${r.carbon.target.kgCO2ePerM2} kgCO2e/m² of ${s.areaBasis.replace("-", " ")} (${fmt.int(r.carbon.perM2.perM2?.counted ?? NaN)}).`);
     for (const w of r.carbon?.warnings ?? []) lines.push(`${r.label}: ${w}`);
   }
   notes.textContent = lines.join("\n");
@@ -330,17 +313,14 @@ staticCell(main, { id: "chart-controls", title: "Charts" }, selectControl(metric
 function chartInput(by: "module" | "material") {
   const schemes: SchemeCarbon[] = carbonBySchemes.value.flatMap((r) => (r.carbon ? [{ id: r.id, label: r.label, carbon: r.carbon }] : []));
   const s = assessedCarbon.value.settings;
-  const targetNote = s.targetKgCO2ePerM2 !== null && !targetApplies(metric.value, s.areaBasis) ? ` · target (${s.areaBasis.replace("-", " ")} basis) not drawn on this measure` : "";
   const bandNote = (s.benchmarks ?? []).length > 0 ? " · shaded: benchmark bands of this basis" : "";
   return {
     schemes,
     by,
     metric: metric.value,
-    target: s.targetKgCO2ePerM2,
-    targetBasis: s.areaBasis,
     bands: s.benchmarks ?? [],
     title: by === "module" ? "Embodied carbon of each scheme by life-cycle module" : "Embodied carbon of each scheme by material",
-    caption: chartCaption(shown.value, `counted ${schemes[0]?.carbon.modulesCounted.join(" + ") ?? "A1–A3"}, ${s.quantityAllowancePct} % quantity allowance${targetNote}${bandNote}`),
+    caption: chartCaption(shown.value, `counted ${schemes[0]?.carbon.modulesCounted.join(" + ") ?? "A1–A3"}, ${s.quantityAllowancePct} % quantity allowance${bandNote}`),
   };
 }
 

@@ -42,8 +42,6 @@ export type CarbonAssessment = {
   perM2: CarbonPerM2;
   perM2UsableFloor: CarbonPerM2;
   perM2Plan: CarbonPerM2;
-  /** Counted carbon per m² on the basis against the target; null without a target or an area. */
-  target: { kgCO2ePerM2: number; met: boolean } | null;
   /** Which modules were counted, for captions. */
   modulesCounted: string[];
   factorSetName: string;
@@ -137,10 +135,6 @@ export function assessCarbon(
   const basisArea = areaForBasis(areas, settings.areaBasis);
   const perM2 = divide(totals, settings.areaBasis, basisArea);
   if (basisArea === 0) warnings.push(`${settings.areaBasis} area is 0 m²: no per-m² figure`);
-  const target =
-    settings.targetKgCO2ePerM2 === null || perM2.perM2 === null
-      ? null
-      : { kgCO2ePerM2: settings.targetKgCO2ePerM2, met: perM2.perM2.counted <= settings.targetKgCO2ePerM2 };
   const modulesCounted = ["A1–A3", ...(settings.countA4 ? ["A4"] : []), ...(settings.countA5 ? ["A5"] : []), ...(settings.countC ? ["C1–C4"] : [])];
 
   return {
@@ -151,7 +145,6 @@ export function assessCarbon(
     perM2,
     perM2UsableFloor: divide(totals, "usable-floor", areas.usableFloorM2),
     perM2Plan: divide(totals, "covered-plan", areas.planAreaM2),
-    target,
     modulesCounted,
     factorSetName: settings.factorSetName,
     quantityAllowancePct: settings.quantityAllowancePct,

@@ -45,13 +45,12 @@ export type CarbonSettings = {
   quantityAllowancePct: number;
   /** A4 mode factors; every mode a factor row uses (road, sea) must be listed once. */
   transportModes: TransportMode[];
-  /** Target, kgCO2e per m² on the area basis (null for none). */
-  targetKgCO2ePerM2: number | null;
   /** Name of the factor set, for captions. */
   factorSetName: string;
   /**
-   * Benchmark bands (kgCO2e/m² on their own area basis). Optional, default none: a study saved
-   * before bands existed reads unchanged (no schema version step needed, nothing to migrate).
+   * Benchmark bands (kgCO2e/m² on their own area basis; issue 14: bands the consultant enters, not
+   * one target). Optional, default none. A study saved before bands existed reads unchanged; one
+   * saved with the single target of that time reads it as a band (see CarbonSettingsSchema).
    */
   benchmarks?: BenchmarkBand[];
 };
@@ -79,7 +78,19 @@ export const BenchmarkBandSchema = v.pipe(
   ),
 );
 
-export const CarbonSettingsSchema = v.object({
+/**
+ * The one target of studies saved before the benchmark bands, read as the band "Target" from 0 to
+ * it on the study's own area basis, put first; nothing else changes, and nothing is lost.
+ */
+function targetAsBand<T extends { targetKgCO2ePerM2?: number | null | undefined; benchmarks: BenchmarkBand[]; areaBasis: AreaBasis }>(settings: T): Omit<T, "targetKgCO2ePerM2"> {
+  const { targetKgCO2ePerM2: target, ...rest } = settings;
+  if (target === undefined || target === null) return rest;
+  return { ...rest, benchmarks: [{ label: "Target", fromKgCO2ePerM2: 0, toKgCO2ePerM2: target, basis: settings.areaBasis }, ...settings.benchmarks] };
+}
+
+const tooManyBands = () => `more than ${MAX_BENCHMARK_BANDS} bands (expected at most ${MAX_BENCHMARK_BANDS})`;
+
+export const CarbonSettingsSchema = v.pipe(v.object({
   countA4: flag(),
   countA5: flag(),
   countC: flag(),
@@ -90,10 +101,11 @@ export const CarbonSettingsSchema = v.object({
     v.check((modes) => new Set(modes.map((m) => m.mode)).size === modes.length, () => `a transport mode is listed twice (expected each mode once)`),
     v.check((modes) => modes.some((m) => m.mode === "road") && modes.some((m) => m.mode === "sea"), () => `road and sea factors are required (the factor table gives road and sea distances)`),
   ),
-  targetKgCO2ePerM2: v.nullable(numberIn(0, 100000, "kgCO2e/m²")),
+  /** Read from studies saved before the bands, and turned into one (targetAsBand); never written. */
+  targetKgCO2ePerM2: v.optional(v.nullable(numberIn(0, 100000, "kgCO2e/m²"))),
   factorSetName: textUpTo(120),
-  benchmarks: v.optional(v.pipe(v.array(BenchmarkBandSchema, () => "expected a list of benchmark bands"), v.maxLength(MAX_BENCHMARK_BANDS, () => `more than ${MAX_BENCHMARK_BANDS} bands (expected at most ${MAX_BENCHMARK_BANDS})`)), () => []),
-});
+  benchmarks: v.optional(v.pipe(v.array(BenchmarkBandSchema, () => "expected a list of benchmark bands"), v.maxLength(MAX_BENCHMARK_BANDS, tooManyBands)), () => []),
+}), v.transform(targetAsBand), v.forward(v.check((s) => s.benchmarks.length <= MAX_BENCHMARK_BANDS, tooManyBands), ["benchmarks"]));
 
 /**
  * Defaults. Mode factors: UK Government GHG conversion factors for company reporting, freighting
@@ -122,7 +134,6 @@ export const DEFAULT_CARBON_SETTINGS: CarbonSettings = {
       source: "UK Government GHG conversion factors, freighting goods, cargo ship average, as quoted by IStructE 2nd ed. 2022 (values from the brief; the conversion-factor edition year is not recorded: from memory)",
     },
   ],
-  targetKgCO2ePerM2: null,
   factorSetName: DEFAULT_FACTOR_SET_NAME,
   benchmarks: [],
 };

@@ -9,9 +9,6 @@ export type CarbonChartInput = {
   /** Stack by life-cycle module or by material. */
   by: "module" | "material";
   metric: CarbonMetric;
-  /** Target on the settings' area basis, kgCO2e/m² (drawn when the metric is per m² of that basis). */
-  target: number | null;
-  targetBasis: AreaBasis;
   /** Benchmark bands (each drawn when the metric is per m² of its basis). */
   bands?: readonly BenchmarkBand[];
   /** Draw module D (reported apart) as a dashed tick beside each bar. */
@@ -21,8 +18,8 @@ export type CarbonChartInput = {
   width?: number;
 };
 
-/** Whether a target on `basis` can be drawn on a chart of `metric`. */
-export function targetApplies(metric: CarbonMetric, basis: AreaBasis): boolean {
+/** Whether a figure per m² of `basis` can be drawn on a chart of `metric`. */
+export function basisApplies(metric: CarbonMetric, basis: AreaBasis): boolean {
   return (metric === "per-m2-floor" && basis === "usable-floor") || (metric === "per-m2-plan" && basis === "covered-plan");
 }
 
@@ -38,7 +35,7 @@ function stackColour(by: CarbonChartInput["by"], data: readonly CarbonBarDatum[]
 }
 
 function bandMarks(input: CarbonChartInput): Plot.Markish[] {
-  const bands = (input.bands ?? []).filter((b) => targetApplies(input.metric, b.basis));
+  const bands = (input.bands ?? []).filter((b) => basisApplies(input.metric, b.basis));
   if (bands.length === 0) return [];
   return [
     Plot.rectY(bands, { y1: "fromKgCO2ePerM2", y2: "toKgCO2ePerM2", fill: "#5f5f5f", fillOpacity: 0.08, stroke: "#5f5f5f", strokeOpacity: 0.5, strokeDasharray: "2 3" }),
@@ -57,14 +54,13 @@ function moduleDMarks(input: CarbonChartInput): Plot.Markish[] {
 
 /**
  * Plot options for stacked bars of counted embodied carbon per scheme, by module, material or
- * structural element, in tCO2e or kgCO2e per m² of usable floor or of plan, with an optional
- * target line, benchmark bands and module D ticks. The one builder of "carbon by module" on every
+ * structural element, in tCO2e or kgCO2e per m² of usable floor or of plan, with the
+ * benchmark bands of its basis and module D ticks. The one builder of "carbon by module" on every
  * page. Pure: no DOM.
  */
 export function carbonChartOptions(input: CarbonChartInput): Plot.PlotOptions {
   const data = stackData(input);
   const axis = CARBON_METRICS.find((m) => m.value === input.metric)?.axis ?? "";
-  const showTarget = input.target !== null && targetApplies(input.metric, input.targetBasis);
   return {
     title: input.title,
     caption: input.caption,
@@ -80,12 +76,6 @@ export function carbonChartOptions(input: CarbonChartInput): Plot.PlotOptions {
       Plot.barY(data, { x: "scheme", y: "value", fill: "part", title: (d: { part: string; value: number }) => `${d.part}: ${d.value.toFixed(1)}`, order: null }),
       Plot.ruleY([0]),
       ...moduleDMarks(input),
-      ...(showTarget && input.target !== null
-        ? [
-            Plot.ruleY([input.target], { stroke: "#a11d1d", strokeDasharray: "6 4", strokeWidth: 1.5 }),
-            Plot.text([input.target], { y: (d: number) => d, frameAnchor: "right", textAnchor: "end", text: () => `target ${input.target} kgCO2e/m²`, dy: -7, fill: "#a11d1d", stroke: "white", strokeWidth: 3, paintOrder: "stroke" }),
-          ]
-        : []),
     ],
   };
 }

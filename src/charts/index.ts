@@ -5,7 +5,7 @@ export { sectionChartOptions, type SectionChartInput } from "./section-chart";
 export { sectionOutline, type SectionOutline, type OutlineMark } from "./section-outline";
 export { chartCaption } from "./caption";
 export { massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart, type ComparisonChartCommon, type DescribedChart } from "./comparison-charts";
-export { carbonChartOptions, carbonApartChartOptions, carbonByElementChartOptions, targetApplies, type CarbonChartInput } from "./carbon-chart";
+export { carbonChartOptions, carbonApartChartOptions, carbonByElementChartOptions, type CarbonChartInput } from "./carbon-chart";
 export { carbonByModuleData, carbonByMaterialData, carbonByElementData, carbonApartData, CARBON_METRICS, COUNTED_MODULES, APART_MODULES, type CarbonMetric, type SchemeCarbon, type CarbonBarDatum } from "./carbon-chart-data";
 export { costChartOptions, costByElementData, ON_COSTS_PART, type SchemeCost, type CostBarDatum, type CostChartInput } from "./cost-chart";
 export { planChartOptions, type PlanChartInput } from "./plan-chart";

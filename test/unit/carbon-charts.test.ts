@@ -33,11 +33,13 @@ describe("carbon chart data", () => {
     const none = assessCarbon(rows, defaultFactorRows(), DEFAULT_CARBON_SETTINGS, { ...areas, usableFloorM2: 0 });
     expect(carbonByModuleData([{ id: "x", label: "X", carbon: none }], "per-m2-floor")).toEqual([]);
   });
-  it("draws the target only on the per-m² chart of the target's basis", () => {
-    const base = { schemes, by: "module" as const, target: 250, targetBasis: "usable-floor" as const, title: "t", caption: "c" };
-    expect(carbonChartOptions({ ...base, metric: "per-m2-floor" }).marks).toHaveLength(4);
-    expect(carbonChartOptions({ ...base, metric: "per-m2-plan" }).marks).toHaveLength(2);
-    expect(carbonChartOptions({ ...base, metric: "total-t" }).marks).toHaveLength(2);
+  it("draws a benchmark band only on the per-m² chart of the band's basis", () => {
+    const band = { label: "Target", fromKgCO2ePerM2: 0, toKgCO2ePerM2: 250, basis: "usable-floor" as const };
+    const base = { schemes, by: "module" as const, bands: [band], title: "t", caption: "c" };
+    const none = carbonChartOptions({ ...base, bands: [], metric: "per-m2-floor" }).marks?.length ?? 0;
+    expect(carbonChartOptions({ ...base, metric: "per-m2-floor" }).marks?.length).toBeGreaterThan(none);
+    expect(carbonChartOptions({ ...base, metric: "per-m2-plan" }).marks).toHaveLength(none);
+    expect(carbonChartOptions({ ...base, metric: "total-t" }).marks).toHaveLength(none);
   });
 });
 

@@ -31,4 +31,27 @@ describe("benchmark bands in the carbon settings", () => {
     expect(result.success).toBe(false);
     expect(result.issues?.[0]?.message).toBe("from 200 is not below to 150 (expected from < to)");
   });
+  it("the single target of an older study reads as the band \"Target\" from 0 on its basis, first, and is never written back", () => {
+    const study = setIn(defaultStudy(), ["carbon", "settings", "benchmarks"], bands);
+    const old = JSON.parse(studyToJson(study));
+    old.carbon.settings.targetKgCO2ePerM2 = 250;
+    old.carbon.settings.areaBasis = "covered-plan";
+    const loaded = studyFromJson(JSON.stringify(old));
+    if (!loaded.ok) throw new Error(JSON.stringify(loaded.problems));
+    expect(loaded.study.carbon.settings.benchmarks).toEqual([{ label: "Target", fromKgCO2ePerM2: 0, toKgCO2ePerM2: 250, basis: "covered-plan" }, ...bands]);
+    expect(JSON.parse(studyToJson(loaded.study)).carbon.settings).not.toHaveProperty("targetKgCO2ePerM2");
+  });
+  it("an older study whose target was off (null) reads with its bands unchanged", () => {
+    const old = JSON.parse(studyToJson(setIn(defaultStudy(), ["carbon", "settings", "benchmarks"], bands)));
+    old.carbon.settings.targetKgCO2ePerM2 = null;
+    const loaded = studyFromJson(JSON.stringify(old));
+    expect(loaded.ok && loaded.study.carbon.settings.benchmarks).toEqual(bands);
+  });
+  it("a target with a full set of bands is refused, naming the bands, rather than dropped", () => {
+    const full = Array.from({ length: 8 }, (_, i) => ({ ...bands[0]!, label: `band ${i}` }));
+    const result = v.safeParse(CarbonSettingsSchema, { ...DEFAULT_CARBON_SETTINGS, benchmarks: full, targetKgCO2ePerM2: 100 });
+    expect(result.success).toBe(false);
+    expect(result.issues?.[0]?.path?.map((p) => p.key)).toEqual(["benchmarks"]);
+    expect(result.issues?.[0]?.message).toBe("more than 8 bands (expected at most 8)");
+  });
 });
