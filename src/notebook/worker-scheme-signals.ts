@@ -49,10 +49,15 @@ type Request = { brief: Brief; setting: SchemeSetting | undefined; tables: Table
 /** Designs one scheme at its best proportions (in a worker on the pages; in-process in tests). */
 export type Designer = (schemeId: SchemeId, brief: Brief, setting: SchemeSetting | undefined, tables: Tables) => Promise<SearchedDesign>;
 
-/** A designer per worker: one or two module workers running src/comparison/design-worker.ts. */
+/**
+ * A designer per worker: module workers running src/comparison/design-worker.ts, one core left to
+ * the page — two workers on three cores or more, one on two. With two on a 2-core machine the
+ * designs that follow a span drag took both cores and the page's own drawing fell behind (issue 14:
+ * frames per slider step median 3, p95 6–9, against 1–2 and 4 with one worker, same load).
+ */
 function workerDesigners(): Designer[] {
   const cores = typeof navigator !== "undefined" && navigator.hardwareConcurrency ? navigator.hardwareConcurrency : 2;
-  return Array.from({ length: Math.max(1, Math.min(2, cores)) }, () => {
+  return Array.from({ length: Math.max(1, Math.min(2, cores - 1)) }, () => {
     const { api } = workerApi<DesignWorkerApi>(new Worker(new URL("../comparison/design-worker.ts", import.meta.url), { type: "module" }));
     return (schemeId, brief, setting, tables) => api.design(schemeId, brief, setting, tables);
   });
