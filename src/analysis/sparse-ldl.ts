@@ -326,15 +326,24 @@ function rowInsideSupernode(sn: Supernodes, K: number, k: number, inner: Float64
 
 function solveSupernodal(sn: Supernodes, inner: Float64Array, block: Float64Array, d: Float64Array, b: Float64Array): Float64Array {
   const x = Float64Array.from(b);
+  const rows = sn.rows;
   for (let J = 0; J < sn.count; J++) {
     const c0 = sn.first[J]!;
     const size = sn.first[J + 1]! - c0;
     const w = sn.innerStart[J]!;
     for (let t = 0; t < size; t++) for (let t2 = t + 1; t2 < size; t2++) x[c0 + t2]! -= inner[w + (t2 * (t2 - 1)) / 2 + t]! * x[c0 + t]!;
-    for (let p = sn.rowStart[J]!, q = sn.blockStart[J]!; p < sn.rowStart[J + 1]!; p++, q += size) {
+    const end = sn.rowStart[J + 1]!;
+    if (size === 3) {
+      const x0 = x[c0]!;
+      const x1 = x[c0 + 1]!;
+      const x2 = x[c0 + 2]!;
+      for (let p = sn.rowStart[J]!, q = sn.blockStart[J]!; p < end; p++, q += 3) x[rows[p]!]! -= block[q]! * x0 + block[q + 1]! * x1 + block[q + 2]! * x2;
+      continue;
+    }
+    for (let p = sn.rowStart[J]!, q = sn.blockStart[J]!; p < end; p++, q += size) {
       let sum = 0;
       for (let t = 0; t < size; t++) sum += block[q + t]! * x[c0 + t]!;
-      x[sn.rows[p]!]! -= sum;
+      x[rows[p]!]! -= sum;
     }
   }
   for (let j = 0; j < x.length; j++) x[j]! /= d[j]!;
@@ -342,9 +351,25 @@ function solveSupernodal(sn: Supernodes, inner: Float64Array, block: Float64Arra
     const c0 = sn.first[J]!;
     const size = sn.first[J + 1]! - c0;
     const w = sn.innerStart[J]!;
-    for (let p = sn.rowStart[J]!, q = sn.blockStart[J]!; p < sn.rowStart[J + 1]!; p++, q += size) {
-      const xr = x[sn.rows[p]!]!;
-      for (let t = 0; t < size; t++) x[c0 + t]! -= block[q + t]! * xr;
+    const end = sn.rowStart[J + 1]!;
+    if (size === 3) {
+      let x0 = 0;
+      let x1 = 0;
+      let x2 = 0;
+      for (let p = sn.rowStart[J]!, q = sn.blockStart[J]!; p < end; p++, q += 3) {
+        const xr = x[rows[p]!]!;
+        x0 += block[q]! * xr;
+        x1 += block[q + 1]! * xr;
+        x2 += block[q + 2]! * xr;
+      }
+      x[c0]! -= x0;
+      x[c0 + 1]! -= x1;
+      x[c0 + 2]! -= x2;
+    } else {
+      for (let p = sn.rowStart[J]!, q = sn.blockStart[J]!; p < end; p++, q += size) {
+        const xr = x[rows[p]!]!;
+        for (let t = 0; t < size; t++) x[c0 + t]! -= block[q + t]! * xr;
+      }
     }
     for (let t = size - 1; t >= 0; t--) for (let t2 = t + 1; t2 < size; t2++) x[c0 + t]! -= inner[w + (t2 * (t2 - 1)) / 2 + t]! * x[c0 + t2]!;
   }
