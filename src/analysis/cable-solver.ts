@@ -36,6 +36,14 @@ export interface CableSolverOptions {
   allowUnstable?: boolean;
   /** Extra loads that depend on the current coordinates (e.g. pressure on the deformed surface), flat N. */
   loadAt?: (coordinates: Float64Array) => Float64Array;
+  /**
+   * Candidate starting states (flat displacements from the model's nodes, m; e.g. a similar load
+   * case's answer): Newton starts at the full load from the candidate, or the unloaded state, with
+   * the least out-of-balance force. Should that attempt fail, the load is stepped from the unloaded
+   * state as without candidates. Under dead loads on cables only, the total potential is convex, so
+   * every start reaches the same equilibrium (within the tolerance).
+   */
+  starts?: readonly Float64Array[];
 }
 
 export interface CableSolution {
@@ -324,13 +332,15 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
 /** Solves the model under its loads (and prescribed support displacements), stepping the load. */
 export function solveCableModel(model: CableModel, options: CableSolverOptions = {}): CableSolution {
   const p = prepare(model);
+  const warm = warmStart(p, options);
+  if (warm?.ok) return solution(p, warm, 1, 0, [warm.iterations], warm.iterations);
   const steps = Math.max(1, Math.round(options.steps ?? 1));
   const maxHalvings = options.maxStepHalvings ?? 8;
   let u: Float64Array = new Float64Array(p.x0.length);
   let lambda = 0;
   let increment = 1 / steps;
   let halvings = 0;
-  let iterations = 0;
+  let iterations = warm?.iterations ?? 0;
   const perStep: number[] = [];
   let last: NewtonOutcome | undefined;
   while (lambda < 1 - 1e-12) {
@@ -347,7 +357,22 @@ export function solveCableModel(model: CableModel, options: CableSolverOptions =
     if (++halvings > maxHalvings) break;
     increment /= 2;
   }
-  const final = last!;
+  return solution(p, last!, lambda, increment, perStep, iterations);
+}
+
+/** Newton at the full load from the best of the candidate starts (none when there are none, or the unloaded state is best). */
+function warmStart(p: Prepared, options: CableSolverOptions): NewtonOutcome | undefined {
+  let best: { u: Float64Array; r: number } | undefined;
+  for (const u of options.starts ?? []) {
+    if (u.length !== p.x0.length) throw new RangeError(`invalid options.starts: ${u.length} displacements (expected ${p.x0.length}, three a node)`);
+    const r = evaluate(p, withPrescribed(p, u, 1), 1, options).residualN;
+    if (r < (best?.r ?? Infinity)) best = { u, r };
+  }
+  if (!best || !(best.r < evaluate(p, withPrescribed(p, new Float64Array(p.x0.length), 1), 1, options).residualN)) return undefined;
+  return newton(p, best.u, 1, options);
+}
+
+function solution(p: Prepared, final: NewtonOutcome, lambda: number, increment: number, perStep: number[], iterations: number): CableSolution {
   const state = final.state;
   return {
     converged: final.ok && lambda >= 1 - 1e-12,

@@ -63,6 +63,38 @@ describe("nonlinear cable solver: properties", () => {
       { numRuns: 40 },
     );
   });
+  it("a start from another load's answer (options.starts) reaches the same equilibrium as the unloaded start, within the tolerance", () => {
+    fc.assert(
+      fc.property(netArb, fc.double({ min: 0.05, max: 1, noNaN: true }), fc.double({ min: 0.3, max: 3, noNaN: true }), (p, ratio, other) => {
+        // the same net under a drifted-like load and, as the start, under a uniform one of another size
+        const model = loaded(p, ratio, (u) => [0, 0, u > 0 ? -0.5 : -1]);
+        const near = solveCableModel(loaded(p, ratio * other, () => [0, 0, -1]), { steps: 2 });
+        const cold = solveCableModel(model, { steps: 2 });
+        const warm = solveCableModel(model, { steps: 2, starts: [near.displacementsM] });
+        expect(warm.converged).toBe(cold.converged);
+        if (!cold.converged) return;
+        // each within 1e-6 of the load of equilibrium: one equilibrium (convex potential), so the two answers agree to the solver's tolerance over the stiffness
+        let scale = 0;
+        for (const x of cold.displacementsM) scale = Math.max(scale, Math.abs(x));
+        cold.displacementsM.forEach((x, k) => expect(Math.abs(warm.displacementsM[k]! - x)).toBeLessThanOrEqual(1e-3 * scale + 1e-12));
+        const largest = Math.max(...cold.forcesN);
+        cold.forcesN.forEach((f, k) => expect(Math.abs(warm.forcesN[k]! - f)).toBeLessThanOrEqual(1e-5 * largest));
+      }),
+      { numRuns: 30 },
+    );
+  });
+  it("a start at the answer itself takes no iteration; a start worse than the unloaded state is not taken", () => {
+    const model = loaded({ cells: 4, spacingM: 2, riseRatio: 0.1, prestressN: 1e4, stiffnessRatio: 200 }, 0.5, (u) => [0, 0, u > 0 ? -0.5 : -1]);
+    const cold = solveCableModel(model);
+    expect(cold.converged && cold.iterations).toBeGreaterThan(1);
+    expect(solveCableModel(model, { starts: [cold.displacementsM] }).iterations).toBe(0);
+    const away = solveCableModel(model, { starts: [cold.displacementsM.map((x) => -20 * x)] });
+    expect([away.iterations, away.displacementsM]).toEqual([cold.iterations, cold.displacementsM]);
+  });
+  it("a start of the wrong size is refused, naming the option", () => {
+    const model = loaded({ cells: 2, spacingM: 1, riseRatio: 0.1, prestressN: 1e3, stiffnessRatio: 100 }, 0.1, () => [0, 0, -1]);
+    expect(() => solveCableModel(model, { starts: [new Float64Array(3)] })).toThrow(/options\.starts: 3 displacements \(expected \d+, three a node\)/);
+  });
   it("at a small load the nonlinear answer is the linear one, and doubling the load doubles it", () => {
     fc.assert(
       fc.property(netArb, (p) => {
