@@ -195,7 +195,9 @@ const includeExcluded = signal(false);
 // The option charts wait for the hand to stop (issue 13/14: no task over 50 ms while the span slider
 // moves): they follow the results once these have been still for a moment, and the four are drawn
 // one per frame into their own slots (the previous drawing stays until its successor is ready).
-const calm = settled(arrived);
+// Quiet time measured on the study, not on the results: results that follow a single edit are drawn
+// at once, those that arrive while the hand still moves wait for it to stop.
+const calm = settled(arrived, undefined, store.study);
 const charts = chartTurns(4);
 const chartCell = reactiveCell(outputs, { id: "comparison-charts", title: "Option charts — every figure per m² of usable floor" }, () => {
   const { list, caption: resultsCaption } = calm.value;

@@ -16,26 +16,50 @@ export function nextFrame(run: () => void): void {
 }
 
 /**
- * A signal equal to `source` once `source` has not changed for `quietMs`; the new value is taken
- * in the next frame after the quiet time. It starts equal to `source`. `dispose` stops following.
+ * A signal equal to `source` once the hand has stopped: once `source` has not changed for
+ * `quietMs`, or — given `still`, the inputs the source follows — once those have not changed for
+ * `quietMs`. With the inputs as the measure, a source that changes after a single edit is taken in
+ * the next frame (the edit is already older than the quiet time when its results arrive), while
+ * through a drag it waits until the inputs rest. The new value is taken in the next frame after the
+ * quiet time. It starts equal to `source`. `dispose` stops following.
  */
-export function settled<T>(source: ReadonlySignal<T>, quietMs = SETTLE_MS): ReadonlySignal<T> & { dispose: () => void } {
+export function settled<T>(source: ReadonlySignal<T>, quietMs = SETTLE_MS, still?: ReadonlySignal<unknown>): ReadonlySignal<T> & { dispose: () => void } {
   const out = signal(source.peek());
   let timer: ReturnType<typeof setTimeout> | undefined;
-  const dispose = effect(() => {
-    const value = source.value;
+  let lastChange = Date.now();
+  const take = () => {
+    timer = undefined;
+    nextFrame(() => {
+      out.value = source.peek();
+    });
+  };
+  const arm = () => {
     if (timer !== undefined) clearTimeout(timer);
-    if (Object.is(value, out.peek())) return;
-    timer = setTimeout(() => {
-      timer = undefined;
-      nextFrame(() => {
-        out.value = source.peek();
-      });
-    }, quietMs);
-  });
+    timer = undefined;
+    if (Object.is(source.peek(), out.peek())) return;
+    const wait = lastChange + quietMs - Date.now();
+    if (wait <= 0) take();
+    else timer = setTimeout(take, wait);
+  };
+  const stops = [
+    effect(() => {
+      void source.value;
+      if (!still) lastChange = Date.now();
+      arm();
+    }),
+    ...(still
+      ? [
+          effect(() => {
+            void still.value;
+            lastChange = Date.now();
+            arm();
+          }),
+        ]
+      : []),
+  ];
   return Object.assign(out, { dispose: () => {
     if (timer !== undefined) clearTimeout(timer);
-    dispose();
+    stops.forEach((stop) => stop());
   } });
 }
 

@@ -30,6 +30,42 @@ describe("settled", () => {
   });
 });
 
+describe("settled on the inputs", () => {
+  it("takes results that arrive after a single edit in the next frame, without the quiet time", () => {
+    vi.useFakeTimers();
+    const input = signal(160);
+    const results = signal("for 160");
+    const calm = settled(results, 150, input);
+    input.value = 161;
+    vi.advanceTimersByTime(300); // the designs take longer than the quiet time
+    results.value = "for 161";
+    vi.advanceTimersToNextTimer(); // the next frame
+    expect(calm.value).toBe("for 161");
+    calm.dispose();
+  });
+
+  it("through a drag holds results back until the inputs rest for the quiet time", () => {
+    vi.useFakeTimers();
+    const input = signal(100);
+    const results = signal("for 100");
+    const calm = settled(results, 150, input);
+    for (let span = 101; span <= 110; span++) {
+      input.value = span;
+      vi.advanceTimersByTime(16);
+      if (span % 3 === 0) results.value = `for ${span - 1}`; // results come in behind the hand
+    }
+    vi.advanceTimersByTime(100);
+    expect(calm.value).toBe("for 100");
+    vi.advanceTimersByTime(60);
+    vi.runOnlyPendingTimers();
+    expect(calm.value).toBe("for 107");
+    results.value = "for 110";
+    vi.advanceTimersToNextTimer();
+    expect(calm.value).toBe("for 110");
+    calm.dispose();
+  });
+});
+
 describe("inTurns", () => {
   it("runs one job per turn, in order, then done", () => {
     vi.useFakeTimers();
