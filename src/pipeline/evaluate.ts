@@ -6,6 +6,7 @@ import { messageOf } from "../kernel/errors";
 import { assessDesign, schemeResult, type SchemeResult } from "./scheme-result";
 import { commonRiseM, dimensionsOf, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice } from "./proportions";
 import type { SchemeSetting, StudyInputs } from "./study-inputs";
+import { refineInFull } from "./refine-in-full";
 
 export interface Evaluation {
   brief: Brief;
@@ -108,11 +109,11 @@ export function designAtBestProportions(model: SchemeModel, brief: Brief, settin
     (design) => objectiveValue(design, study, objective),
     brief.spanM,
   );
-  const chosenBrief = { ...brief, riseM: chosen.riseM };
-  if (screening === options) return { design: chosen.design, brief: chosenBrief, proportions: choice };
-  const design = designScheme(model, chosenBrief, { ...chosen.options, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, catalogue);
-  const value = design.status === "infeasible" ? Number.POSITIVE_INFINITY : objectiveValue(design, study, objective);
-  return { design, brief: chosenBrief, proportions: { ...choice, value } };
+  if (screening === options) return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice };
+  const start = { options: { ...chosen.options, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, riseM: chosen.riseM };
+  const { full, refinements } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue), (design) => objectiveValue(design, study, objective));
+  const refined = Object.fromEntries(refinements.map((r) => [r.key, r.value]));
+  return { design: full.design, brief: { ...brief, riseM: full.riseM }, proportions: { ...choice, proportions: { ...choice.proportions, ...refined }, riseM: full.riseM, value: full.objective } };
 }
 
 function pick(options: SchemeOptions, keys: readonly string[]): SchemeOptions {

@@ -54,13 +54,13 @@ interface Dimension {
 }
 
 /** Values of a number option on its step grid within [min, max]. */
-function gridOf(min: number, max: number, step: number, integer: boolean): number[] {
+export function gridOf(min: number, max: number, step: number, integer: boolean): number[] {
   const s = integer ? Math.max(1, Math.round(step)) : step;
   const count = Math.floor((max - min) / s + 1e-9) + 1;
   return Array.from({ length: count }, (_, i) => Number((min + i * s).toFixed(9)));
 }
 
-function nearestIndex(values: readonly OptionValue[], value: OptionValue): number {
+export function nearestIndex(values: readonly OptionValue[], value: OptionValue): number {
   let best = 0;
   values.forEach((v, i) => {
     if (typeof v === "number" && typeof value === "number" ? Math.abs(v - value) < Math.abs((values[best] as number) - value) : v === value) best = i;

@@ -210,6 +210,15 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
    * An option the user pinned is never overridden.
    */
   screeningOptions?: Partial<O>;
+  /**
+   * Free proportions the screening options judge badly (the cable dome's post depth and rise: the
+   * closed form prefers deeper posts and a higher rise than the 3D analysis does): after the screened
+   * search each, in this order, is chosen again on designs with the full options, on the trend of the
+   * objective through these values of it (the same at every span; the rise, "riseM", as rise ÷ span),
+   * the other proportions kept; of the values within the tie band of the fitted least, the nearest
+   * `reference` (default: the option's search reference or default, the preferred rise).
+   */
+  refinedInFull?: readonly { key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number }[];
 }
 
 /** A scheme: its declaration and its designer (the design registry, ./index.ts: the pipeline, the workers and the command line). */

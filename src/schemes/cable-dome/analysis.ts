@@ -127,7 +127,41 @@ const PRESTRESS_FLOOR_OF_LOAD = 0.02;
 /** Bisection steps between a failing and a passing prestress. */
 const BISECTIONS = 3;
 
-type Round = { alpha: number; model: ReturnType<typeof cableDomeModel>; solved: { c: PlanCombination; s: CableSolution }[]; pass: boolean; estimate: number; failure: PrestressLimit | null };
+type Solved = { c: PlanCombination; s: CableSolution };
+type Round = { alpha: number; model: ReturnType<typeof cableDomeModel>; solved: Solved[]; complete: boolean; pass: boolean; estimate: number; failure: PrestressLimit | null };
+
+/** What one prestress round is judged on: the cables that must stay taut, their unit prestress forces, the residual share kept and the displacement limit. */
+interface Judge {
+  mustStayTaut: readonly boolean[];
+  unitForces: readonly number[];
+  margin: number;
+  displacementLimitM: number;
+}
+
+/**
+ * The first failure of the solved cases at prestress α, in the order a lead would name it (no
+ * equilibrium, a cable losing its prestress, too much movement; among equals the first case), and
+ * the linear estimate of the passing α from the cables' forces.
+ */
+function judged(j: Judge, alpha: number, solved: readonly Solved[]): { estimate: number; failure: PrestressLimit | null } {
+  let estimate = 0;
+  const failures: PrestressLimit[] = [];
+  for (const { c, s: sol } of solved) {
+    if (!sol.converged) {
+      failures.push({ kind: "no equilibrium", caseName: c.name, prestressN: alpha });
+      continue;
+    }
+    if (maxDisplacement(sol) > j.displacementLimitM) failures.push({ kind: "displacement", caseName: c.name, prestressN: alpha });
+    sol.forcesN.forEach((f, m) => {
+      if (!j.mustStayTaut[m]) return;
+      const sm = j.unitForces[m] as number;
+      if ((sol.slack[m] || f < j.margin * alpha * sm) && !failures.some((x) => x.kind === "taut cables" && x.caseName === c.name)) failures.push({ kind: "taut cables", caseName: c.name, prestressN: alpha });
+      estimate = Math.max(estimate, -(f - alpha * sm) / ((1 - j.margin) * sm));
+    });
+  }
+  const order = ["no equilibrium", "taut cables", "displacement"];
+  return { estimate, failure: failures.sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind))[0] ?? null };
+}
 
 /**
  * The 3D analysis of the dome (Newton–Raphson, tension-only cables, src/analysis) under the
@@ -136,7 +170,10 @@ type Round = { alpha: number; model: ReturnType<typeof cableDomeModel>; solved: 
  * but the diagonals when the designer lets them slacken — keeps at least `residualPrestress` × its
  * prestress force, and no node moves more than the displacement limit. A passing α is bracketed
  * (from the linear estimate N_j = α s_j + l_j ⇒ α = max −l_j/((1 − m) s_j), or by raising α by
- * half) and then bisected against the highest failing one; the passing end is kept.
+ * half) and then bisected against the highest failing one; the passing end is kept. A round whose
+ * linear estimate is not needed (the trial below the seed, the bisections) stops at its first
+ * failing case, the case that failed last solved first; the failing end kept is completed, so the
+ * answer and the failure reported are those of solving every case each round.
  */
 export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
   const g = input.layout.truss;
@@ -144,53 +181,49 @@ export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
   const unit = cableDomeSelfStress(g, 1);
   const stiffness = stiffnessOf(input.groups);
   const unitModel = cableDomeModel(g, unit, stiffness);
-  const s = unitModel.model.members.map((m) => m.initialForceN ?? 0);
   const mustStayTaut = unitModel.tags.map((t, m) => unitModel.model.members[m]?.kind === "cable" && !(input.slack === "diagonals" && t.family === "diagonal"));
+  const judge: Judge = { mustStayTaut, unitForces: unitModel.model.members.map((m) => m.initialForceN ?? 0), margin: input.residualPrestress, displacementLimitM: input.displacementLimitM };
   const combos = analysedCombinations(input.combinations);
-  const margin = input.residualPrestress;
-  const run = (alpha: number): Round => {
-    const model = cableDomeModel(g, scaleForces(unit, alpha), stiffness);
-    const solved = combos.map((c) => ({ c, s: solveCableModel({ ...model.model, loads: headLoads(input, model, c) }, { steps: 1, maxIterations: DOME_MAX_ITERATIONS }) }));
-    let estimate = 0;
-    // the first failure found, in the order a lead would name it: no equilibrium, a cable losing its prestress, too much movement
-    const failures: PrestressLimit[] = [];
-    for (const { c, s: sol } of solved) {
-      if (!sol.converged) {
-        failures.push({ kind: "no equilibrium", caseName: c.name, prestressN: alpha });
-        continue;
-      }
-      if (maxDisplacement(sol) > input.displacementLimitM) failures.push({ kind: "displacement", caseName: c.name, prestressN: alpha });
-      sol.forcesN.forEach((f, j) => {
-        if (!mustStayTaut[j]) return;
-        const sj = s[j] as number;
-        if ((sol.slack[j] || f < margin * alpha * sj) && !failures.some((x) => x.kind === "taut cables" && x.caseName === c.name)) failures.push({ kind: "taut cables", caseName: c.name, prestressN: alpha });
-        estimate = Math.max(estimate, -(f - alpha * sj) / ((1 - margin) * sj));
-      });
-    }
-    const order = ["no equilibrium", "taut cables", "displacement"];
-    const failure = failures.sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind))[0] ?? null;
-    return { alpha, model, solved, pass: failure === null, estimate, failure };
+  const caseOrder = combos.map((_, i) => i);
+  const solveIn = (model: Round["model"], c: PlanCombination): Solved => ({ c, s: solveCableModel({ ...model.model, loads: headLoads(input, model, c) }, { steps: 1, maxIterations: DOME_MAX_ITERATIONS }) });
+  const finish = (alpha: number, model: Round["model"], byCase: (Solved | undefined)[]): Round => {
+    const solved = byCase.filter((x): x is Solved => x !== undefined);
+    const { estimate, failure } = judged(judge, alpha, solved);
+    return { alpha, model, solved, complete: solved.length === combos.length, pass: failure === null && solved.length === combos.length, estimate, failure };
   };
+  const run = (alpha: number, complete: boolean): Round => {
+    const model = cableDomeModel(g, scaleForces(unit, alpha), stiffness);
+    const byCase: (Solved | undefined)[] = combos.map(() => undefined);
+    for (const [k, i] of caseOrder.entries()) {
+      const one = (byCase[i] = solveIn(model, combos[i] as PlanCombination));
+      if (complete || judged(judge, alpha, [one]).failure === null) continue;
+      caseOrder.splice(k, 1);
+      caseOrder.unshift(i);
+      break;
+    }
+    return finish(alpha, model, byCase);
+  };
+  const completed = (r: Round): Round => (r.complete ? r : finish(r.alpha, r.model, combos.map((c) => r.solved.find((x) => x.c === c) ?? solveIn(r.model, c))));
   const planAreaM2 = Math.PI * g.ringRadiusM ** 2;
   const heaviestN = Math.max(0, ...combos.map((c) => uniformPressurePa(c, input.selfWeightKPa))) * planAreaM2;
-  let hi = run(Math.max(input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestN));
+  let hi = run(Math.max(input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestN), true);
   let lo: Round | null = null;
   if (hi.pass) {
-    const trial = run(Math.min(hi.alpha, Math.max(0.3 * hi.alpha, 1.02 * hi.estimate)));
+    const trial = run(Math.min(hi.alpha, Math.max(0.3 * hi.alpha, 1.02 * hi.estimate)), false);
     if (trial.pass) hi = trial;
     else lo = trial;
   }
   for (let k = 0; k < RAISES && !hi.pass; k++) {
     lo = hi;
     const allConverged = hi.solved.every(({ s: sol }) => sol.converged);
-    hi = run(allConverged ? Math.max(1.5 * hi.alpha, Math.min(4 * hi.alpha, 1.02 * hi.estimate)) : 4 * hi.alpha);
+    hi = run(allConverged ? Math.max(1.5 * hi.alpha, Math.min(4 * hi.alpha, 1.02 * hi.estimate)) : 4 * hi.alpha, true);
   }
   for (let k = 0; k < BISECTIONS && lo !== null && hi.pass; k++) {
-    const mid = run((lo.alpha + hi.alpha) / 2);
+    const mid = run((lo.alpha + hi.alpha) / 2, false);
     if (mid.pass) hi = mid;
     else lo = mid;
   }
-  return { ...summarise(input, hi, n, mustStayTaut), governedBy: lo?.failure ?? null };
+  return { ...summarise(input, hi, n, mustStayTaut), governedBy: lo ? completed(lo).failure : null };
 }
 
 function scaleForces(f: CableDomeTrussForces, a: number): CableDomeTrussForces {

@@ -1,0 +1,78 @@
+import type { Design, OptionValue, SchemeModel, SchemeOptions } from "../schemes/types";
+import { gridOf, nearestIndex, PROPORTION_TIE_FRACTION, RISE_KEY, type RiseSetting } from "./proportions";
+import { trendChoice } from "./rise-trend";
+
+/** A design with the full options at some proportions, and its objective (+∞ when infeasible). */
+export interface FullDesign {
+  options: SchemeOptions;
+  riseM: number;
+  design: Design;
+  objective: number;
+}
+
+/** One refined proportion: where it was sampled and what was chosen. */
+export interface Refinement {
+  key: string;
+  value: number;
+  samples: { value: number; objective: number }[];
+}
+
+type Refined = NonNullable<SchemeModel["refinedInFull"]>[number];
+
+/** The grid a refined proportion moves on, its samples (indices) and its reference (an index); null when it is not searched here. */
+function axisOf(model: SchemeModel, refined: Refined, rise: RiseSetting, spanM: number, pinned: readonly string[]): { values: number[]; samples: number[]; reference: number } | null {
+  const { key, samples, reference } = refined;
+  if (key === RISE_KEY) {
+    if (rise.kind !== "search") return null;
+    const values = gridOf(rise.minM, rise.maxM, rise.stepM, false);
+    return { values, samples: [...new Set(samples.map((r) => nearestIndex(values, r * spanM)))], reference: nearestIndex(values, reference === undefined ? rise.startM : reference * spanM) };
+  }
+  const spec = model.options.find((o) => o.key === key);
+  if (spec?.kind !== "number" || pinned.includes(key)) return null;
+  const values = gridOf(spec.min, spec.max, spec.step, spec.integer === true);
+  return { values, samples: [...new Set(samples.map((v) => nearestIndex(values, v)))], reference: nearestIndex(values, reference ?? spec.searchReference ?? (model.defaults[key] as number)) };
+}
+
+/**
+ * The scheme's `refinedInFull` proportions chosen again, one after the other, on designs with the
+ * full options (the screened search chose them on cheaper ones), from the screened choice `start`:
+ * the objective at each declared sample (the same values at every span), a least-squares quadratic
+ * through the finite ones, and of the grid values between the samples whose fitted objective is
+ * within PROPORTION_TIE_FRACTION of the fitted least, the nearest the reference (the declared one,
+ * else an option's search reference or default, the preferred rise) — the rise's trend rule (./rise-trend.ts). Where the
+ * value so chosen is infeasible, the best feasible sample; where no sample is feasible, the
+ * proportion stays. Returns the final design (designed once, samples reused) and what was refined.
+ */
+export function refineInFull(
+  model: SchemeModel,
+  start: { options: SchemeOptions; riseM: number },
+  setting: { rise: RiseSetting; spanM: number; pinned: readonly string[] },
+  design: (options: SchemeOptions, riseM: number) => Design,
+  assess: (design: Design) => number,
+): { full: FullDesign; refinements: Refinement[] } {
+  const designed = new Map<string, FullDesign>();
+  const at = (options: SchemeOptions, riseM: number): FullDesign => {
+    const key = JSON.stringify([options, riseM]);
+    const known = designed.get(key);
+    if (known) return known;
+    const d = design(options, riseM);
+    const full = { options, riseM, design: d, objective: d.status === "infeasible" ? Number.POSITIVE_INFINITY : assess(d) };
+    designed.set(key, full);
+    return full;
+  };
+  let current = { ...start };
+  const refinements: Refinement[] = [];
+  for (const refined of model.refinedInFull ?? []) {
+    const { key } = refined;
+    const axis = axisOf(model, refined, setting.rise, setting.spanM, setting.pinned);
+    if (!axis) continue;
+    const moved = (index: number) => (key === RISE_KEY ? { options: current.options, riseM: axis.values[index] as number } : { options: { ...current.options, [key]: axis.values[index] as OptionValue }, riseM: current.riseM });
+    const sampled = axis.samples.map((index) => ({ index, value: at(moved(index).options, moved(index).riseM).objective }));
+    const feasible = sampled.filter((s) => Number.isFinite(s.value)).sort((a, b) => a.value - b.value);
+    if (feasible.length === 0) continue;
+    const chosen = moved(trendChoice(axis.values, sampled, axis.reference, PROPORTION_TIE_FRACTION));
+    current = Number.isFinite(at(chosen.options, chosen.riseM).objective) ? chosen : moved(feasible[0]?.index as number);
+    refinements.push({ key, value: key === RISE_KEY ? current.riseM : (current.options[key] as number), samples: sampled.map((s) => ({ value: axis.values[s.index] as number, objective: s.value })) });
+  }
+  return { full: at(current.options, current.riseM), refinements };
+}

@@ -1,0 +1,81 @@
+import { describe, expect, it } from "vitest";
+import { refineInFull } from "../../../src/pipeline/refine-in-full";
+import { PROPORTION_TIE_FRACTION, type RiseSetting } from "../../../src/pipeline/proportions";
+import { fitQuadratic } from "../../../src/pipeline/rise-trend";
+import { infeasibleDesign } from "../../../src/schemes/kit";
+import { DEFAULT_BRIEF } from "../../../src/brief";
+import type { Design, OptionSpec, SchemeModel, SchemeOptions } from "../../../src/schemes/types";
+
+// The refinement on made-up objectives (no scheme involved): what it samples, what it chooses, what it designs.
+const depth: OptionSpec = { key: "depth", label: "depth", kind: "number", unit: "", min: 0.05, max: 1, step: 0.01, source: "test", free: true };
+const model = (refinedInFull: SchemeModel["refinedInFull"]): SchemeModel =>
+  ({ id: "cable-dome", label: "Test", colour: "#000", description: "", validSpanM: { min: 0, max: 1000 }, options: [depth], defaults: { depth: 0.6 }, riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 }, refinedInFull, design: () => { throw new Error("not used"); } }) as SchemeModel;
+const designed = (o: SchemeOptions, riseM: number, mass: number): Design => ({ ...infeasibleDesign("cable-dome", DEFAULT_BRIEF, ""), status: "feasible", feasible: true, totalMassKg: mass, summary: [{ key: "depth", label: "", value: o.depth as number, unit: "" }, { key: "rise", label: "", value: riseM, unit: "" }] });
+const rise: RiseSetting = { kind: "search", minM: 8, maxM: 25, stepM: 0.5, startM: 12.5 };
+const at = { rise, spanM: 100, pinned: [] as string[] };
+const grid = Array.from({ length: 96 }, (_, i) => Number((0.05 + i * 0.01).toFixed(9)));
+
+describe("refineInFull: proportions chosen again on the full designs, on the trend through fixed samples", () => {
+  it("samples the declared values, and keeps the grid value nearest the reference whose fitted objective is within the band of the fitted least", () => {
+    const bowl = (x: number) => 40 + 60 * (x - 0.35) ** 2 + (Math.round(x * 100) % 3 === 0 ? 0.6 : 0); // a bowl with catalogue-like steps
+    const asked: number[] = [];
+    const { full, refinements } = refineInFull(model([{ key: "depth", samples: [0.2, 0.3, 0.4, 0.5, 0.6], reference: 0.2 }]), { options: { depth: 0.5 }, riseM: 10 }, at, (o, riseM) => {
+      asked.push(o.depth as number);
+      return designed(o, riseM, bowl(o.depth as number));
+    }, (d) => d.totalMassKg);
+    const fit = fitQuadratic([0.2, 0.3, 0.4, 0.5, 0.6].map((x) => ({ x, y: bowl(x) })))!;
+    const inRange = grid.filter((x) => x >= 0.2 - 1e-9 && x <= 0.6 + 1e-9);
+    const least = Math.min(...inRange.map(fit));
+    const expected = inRange.filter((x) => fit(x) <= least + PROPORTION_TIE_FRACTION * least).reduce((a, b) => (Math.abs(b - 0.2) < Math.abs(a - 0.2) ? b : a));
+    expect(asked.slice(0, 5)).toEqual([0.2, 0.3, 0.4, 0.5, 0.6]);
+    expect(asked).toHaveLength(6); // the chosen value is no sample: designed once more
+    expect(refinements).toEqual([{ key: "depth", value: expected, samples: [0.2, 0.3, 0.4, 0.5, 0.6].map((value) => ({ value, objective: bowl(value) })) }]);
+    expect(expected).toBeLessThan(0.35); // the shallow edge of the band, not the least
+    expect(full.options.depth).toBe(expected);
+    expect(full.design.summary[0]?.value).toBe(expected);
+    expect(full.objective).toBe(bowl(expected));
+    expect(full.riseM).toBe(10);
+  });
+
+  it("refines the rise (samples as rise ÷ span, on the rise search's grid) and then the next proportion at the chosen rise", () => {
+    const asked: [number, number][] = [];
+    const { full, refinements } = refineInFull(model([{ key: "riseM", samples: [0.08, 0.1, 0.12], reference: 0.08 }, { key: "depth", samples: [0.2, 0.4, 0.6] }]), { options: { depth: 0.5 }, riseM: 11 }, at, (o, riseM) => {
+      asked.push([riseM, o.depth as number]);
+      return designed(o, riseM, 30 + riseM + 20 * ((o.depth as number) - 0.4) ** 2); // lightest at the least rise
+    }, (d) => d.totalMassKg);
+    expect(asked.slice(0, 3)).toEqual([[8, 0.5], [10, 0.5], [12, 0.5]]);
+    expect(refinements[0]?.value).toBe(8); // the least rise: the reference, inside the band
+    expect(asked.slice(3, 6)).toEqual([[8, 0.2], [8, 0.4], [8, 0.6]]);
+    expect(full.riseM).toBe(8);
+    // the depth: of the grid within the band of the fitted least (an exact quadratic here), the nearest the option's default 0.6
+    expect(full.options.depth).toBeCloseTo(0.4 + Math.sqrt((PROPORTION_TIE_FRACTION * 38) / 20) - 0.005, 2);
+  });
+
+  it("leaves a pinned proportion, and a rise that is not searched, as they are: the start designed once", () => {
+    let calls = 0;
+    const refine = model([{ key: "riseM", samples: [0.08, 0.1] }, { key: "depth", samples: [0.2, 0.4, 0.6] }]);
+    const { full, refinements } = refineInFull(refine, { options: { depth: 0.5 }, riseM: 11 }, { rise: { kind: "fixed", riseM: 11, source: "common" }, spanM: 100, pinned: ["depth"] }, (o, riseM) => {
+      calls++;
+      return designed(o, riseM, 1);
+    }, (d) => d.totalMassKg);
+    expect(refinements).toEqual([]);
+    expect(calls).toBe(1);
+    expect(full.options.depth).toBe(0.5);
+    expect(full.riseM).toBe(11);
+  });
+
+  it("takes the best feasible sample where the value chosen on the trend is infeasible, and keeps the start where no sample is feasible", () => {
+    const refine = model([{ key: "depth", samples: [0.2, 0.4, 0.6] }]);
+    const bowl = (x: number) => 10 + 100 * (x - 0.45) ** 2; // the band of the fitted least is 0.41–0.49: the value chosen (0.49, nearest the default 0.6) is infeasible
+    const gap = refineInFull(refine, { options: { depth: 0.5 }, riseM: 10 }, at, (o, riseM) => {
+      const x = o.depth as number;
+      return [0.2, 0.4, 0.6].includes(x) ? designed(o, riseM, bowl(x)) : infeasibleDesign("cable-dome", DEFAULT_BRIEF, "between the samples");
+    }, (d) => d.totalMassKg);
+    expect(gap.full.options.depth).toBe(0.4);
+    expect(gap.full.objective).toBe(bowl(0.4));
+    const none = refineInFull(refine, { options: { depth: 0.5 }, riseM: 10 }, at, () => infeasibleDesign("cable-dome", DEFAULT_BRIEF, "nothing works"), (d) => d.totalMassKg);
+    expect(none.refinements).toEqual([]);
+    expect(none.full.options.depth).toBe(0.5);
+    expect(none.full.objective).toBe(Number.POSITIVE_INFINITY);
+  });
+});
