@@ -36,6 +36,20 @@ function attempt<T>(run: () => T): { value: T | null; error: string } {
   }
 }
 
+function areasOf(design: Design) {
+  return { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
+}
+
+/** The carbon of a design with the study's factor table; null with the reason when it cannot be assessed. */
+export function designCarbon(design: Design, study: Pick<StudyInputs, "carbon">): { value: CarbonAssessment | null; error: string } {
+  return attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areasOf(design)));
+}
+
+/** The cost of a design with the study's rate table; null with the reason when it cannot be assessed. */
+export function designCost(design: Design, study: Pick<StudyInputs, "cost">): { value: CostAssessment | null; error: string } {
+  return attempt(() => assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areasOf(design)));
+}
+
 /**
  * Carbon and cost of a design, with the study's tables, each assessed on its own: a gap in the
  * factor table blanks the carbon but not the cost, and the other way round. `error` says why
@@ -43,9 +57,8 @@ function attempt<T>(run: () => T): { value: T | null; error: string } {
  */
 export function assessDesign(design: Design, study: Pick<StudyInputs, "carbon" | "cost">): Pick<SchemeResult, "carbon" | "cost" | "error"> {
   if (design.takeoff.length === 0) return { carbon: null, cost: null, error: design.feasible ? "no take-off" : "" };
-  const areas = { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
-  const carbon = attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areas));
-  const cost = attempt(() => assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areas));
+  const carbon = designCarbon(design, study);
+  const cost = designCost(design, study);
   return { carbon: carbon.value, cost: cost.value, error: [carbon.error, cost.error].filter((e) => e !== "").join("; ") };
 }
 
