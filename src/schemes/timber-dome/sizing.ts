@@ -3,7 +3,7 @@ import { membraneLoadCases, type UniformCombination } from "../kit";
 import { edgeRingTensionN, sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";
 import { threeWayGridBarForces, threeWayGridStiffness } from "../../mechanics/three-way-grid";
 import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
-import { simplySupportedUdl } from "../../mechanics/beam";
+import { simplySupportedMomentNm } from "../../mechanics/beam";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
 import type { LatticeBand } from "../../mechanics/lattice-bands";
@@ -128,7 +128,7 @@ function bandDemands(input: TimberLatticeInputs, band: LatticeBand, c: LoadCase)
     tensionN = Math.max(tensionN, bars.tensionN);
   }
   const lineLoad = Math.abs(c.surfacePa + c.planPa) * TRIBUTARY_WIDTH_PER_LENGTH * band.maxLengthM;
-  const momentNm = simplySupportedUdl(lineLoad, band.maxLengthM, 1).momentNm;
+  const momentNm = simplySupportedMomentNm(lineLoad, band.maxLengthM);
   return [
     { forceN: compressionN, momentNm, kMod: c.kMod, label: c.label },
     { forceN: tensionN, momentNm, kMod: c.kMod, label: c.label },
