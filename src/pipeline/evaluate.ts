@@ -3,7 +3,7 @@ import type { Catalogue } from "../catalogue/types";
 import type { Design, OptionValue, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
 import { SCHEMES, infeasibleDesign, isDesignAnswer } from "../schemes";
 import { messageOf } from "../kernel/errors";
-import { designCarbon, designCost, schemeResult, type SchemeResult } from "./scheme-result";
+import { designCarbonPerM2Floor, designCost, schemeResult, type SchemeResult } from "./scheme-result";
 import { commonRiseM, dimensionsOf, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice } from "./proportions";
 import type { SchemeSetting, StudyInputs } from "./study-inputs";
 
@@ -62,7 +62,7 @@ export function objectiveValue(design: Design, study: Pick<StudyInputs, "carbon"
   if (objective === "mass") return design.totalMassKg / design.usableFloorM2;
   if (design.takeoff.length === 0) return Number.POSITIVE_INFINITY;
   // only the table the objective reads: the search assesses every candidate, and the other half was thrown away
-  const value = objective === "carbon" ? designCarbon(design, study).value?.perM2UsableFloor.perM2?.counted : designCost(design, study).value?.perM2UsableFloor?.total;
+  const value = objective === "carbon" ? designCarbonPerM2Floor(design, study) : designCost(design, study).value?.perM2UsableFloor?.total;
   return value ?? Number.POSITIVE_INFINITY;
 }
 

@@ -3,7 +3,7 @@
 // compare page) does not load the designs: the bundler groups modules by the pages that reach them.
 import type { Brief } from "../brief";
 import type { Design, SchemeId } from "../schemes/types";
-import { assessCarbon, type CarbonAssessment } from "../carbon";
+import { assessCarbon, countedCarbonPerM2UsableFloor, type CarbonAssessment } from "../carbon";
 import { assessCost, type CostAssessment } from "../cost";
 import { messageOf } from "../kernel/errors";
 import { schemeFigures, type SchemeFigures } from "./figures";
@@ -43,6 +43,11 @@ function areasOf(design: Design) {
 /** The carbon of a design with the study's factor table; null with the reason when it cannot be assessed. */
 export function designCarbon(design: Design, study: Pick<StudyInputs, "carbon">): { value: CarbonAssessment | null; error: string } {
   return attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areasOf(design)));
+}
+
+/** The counted carbon per m² of usable floor alone (the carbon assessment's figure, to the last bit); null when it cannot be assessed. */
+export function designCarbonPerM2Floor(design: Design, study: Pick<StudyInputs, "carbon">): number | null {
+  return attempt(() => countedCarbonPerM2UsableFloor(design.takeoff, study.carbon.factors, study.carbon.settings, areasOf(design))).value;
 }
 
 /** The cost of a design with the study's rate table; null with the reason when it cannot be assessed. */
