@@ -84,22 +84,8 @@ function fail(what: string, problems: { path: string; message: string }[]): neve
   throw new Error(`invalid ${what}: ${problems.map((p) => `${p.path}: ${p.message}`).join("; ")}`);
 }
 
-/**
- * Embodied carbon of a take-off by EN 15978 module, per row, per material, per element and per m²,
- * following IStructE, How to calculate embodied carbon, 2nd ed. (2022) (from memory). A1–A3 are
- * always counted; A4, A5 and C as the settings say; module D and biogenic storage are reported
- * apart and never netted. The design-stage quantity allowance multiplies every mass, never a
- * factor. The A5 wastage term carries the wasted mass's A4 and C only when those modules are
- * counted. Rows with no material carry no carbon. Knows materials and masses, not schemes.
- * @throws Error naming the field for invalid factors, settings, areas or row masses;
- * MissingRowsError naming every material that has no factor row (with its first take-off row)
- */
-export function assessCarbon(
-  rows: readonly TakeoffRow[],
-  factors: readonly FactorRow[],
-  settings: CarbonSettings,
-  areas: AssessmentAreas,
-): CarbonAssessment {
+/** The inputs checked and each row's carbon by module (assessCarbon's rows), with the rows' warnings. @throws as assessCarbon */
+function carbonOfRows(rows: readonly TakeoffRow[], factors: readonly FactorRow[], settings: CarbonSettings, areas: AssessmentAreas): { results: CarbonRowResult[]; warnings: string[] } {
   const checkedFactors = validateOnce(FactorTableSchema, factors);
   if (!checkedFactors.ok) fail("carbon factors", checkedFactors.problems.map((p) => ({ ...p, path: `factors${p.path === "(study)" ? "" : p.path}` })));
   const checkedSettings = validateOnce(CarbonSettingsSchema, settings);
@@ -131,6 +117,39 @@ export function assessCarbon(
     return { element: row.element, material: factor.material, massKg, ...m, countedKgCO2e: counted };
   });
 
+  return { results, warnings };
+}
+
+/**
+ * The counted carbon per m² of usable floor alone, kgCO2e/m² — assessCarbon's
+ * perM2UsableFloor.perM2.counted to the last bit (the same rows summed in the same order), without
+ * the groupings and the other bases: the proportion search asks it of every candidate and reads
+ * nothing else. Null when the usable floor is 0.
+ * @throws as assessCarbon
+ */
+export function countedCarbonPerM2UsableFloor(rows: readonly TakeoffRow[], factors: readonly FactorRow[], settings: CarbonSettings, areas: AssessmentAreas): number | null {
+  const { results } = carbonOfRows(rows, factors, settings, areas);
+  const counted = results.reduce((sum, r) => sum + r.countedKgCO2e, ZERO.counted);
+  return areas.usableFloorM2 === 0 ? null : counted / areas.usableFloorM2;
+}
+
+/**
+ * Embodied carbon of a take-off by EN 15978 module, per row, per material, per element and per m²,
+ * following IStructE, How to calculate embodied carbon, 2nd ed. (2022) (from memory). A1–A3 are
+ * always counted; A4, A5 and C as the settings say; module D and biogenic storage are reported
+ * apart and never netted. The design-stage quantity allowance multiplies every mass, never a
+ * factor. The A5 wastage term carries the wasted mass's A4 and C only when those modules are
+ * counted. Rows with no material carry no carbon. Knows materials and masses, not schemes.
+ * @throws Error naming the field for invalid factors, settings, areas or row masses;
+ * MissingRowsError naming every material that has no factor row (with its first take-off row)
+ */
+export function assessCarbon(
+  rows: readonly TakeoffRow[],
+  factors: readonly FactorRow[],
+  settings: CarbonSettings,
+  areas: AssessmentAreas,
+): CarbonAssessment {
+  const { results, warnings } = carbonOfRows(rows, factors, settings, areas);
   const totals = results.reduce(add, ZERO);
   const basisArea = areaForBasis(areas, settings.areaBasis);
   const perM2 = divide(totals, settings.areaBasis, basisArea);

@@ -41,6 +41,7 @@ export { materialCarbon, type ModuleCarbon, type WastageScope } from "./material
 export { type AssessmentAreas, checkAreas, areaForBasis } from "../takeoff/assessment-areas";
 export {
   assessCarbon,
+  countedCarbonPerM2UsableFloor,
   type CarbonAssessment,
   type CarbonRowResult,
   type CarbonTotals,

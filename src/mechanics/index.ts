@@ -67,7 +67,7 @@ export { threeWayGridStiffness, doubleLayerGridStiffness, threeWayGridBarForces,
 export { geodesicCap, strutLengths, geodesicFrequencyFor, MEAN_CHORD_FACTOR, type GeodesicCap, type StrutLengths, type Vec3 } from "./geodesic";
 export { cachedGeodesicCap } from "./geodesic-cache";
 export { latticeBands, bandOfEachEdge, edgeMidpointAngleRad, type LatticeBand } from "./lattice-bands";
-export { simplySupportedUdl, type BeamResponse } from "./beam";
+export { simplySupportedUdl, simplySupportedMomentNm, type BeamResponse } from "./beam";
 
 // units
 export { GRAVITY_M_PER_S2, kPaOfMass, kPaFromKgPerM2 } from "./gravity";

@@ -3,7 +3,7 @@ import type { Catalogue } from "../catalogue/types";
 import type { Design, OptionValue, SchemeId, SchemeModel, SchemeOptions } from "../schemes/types";
 import { SCHEMES, infeasibleDesign, isDesignAnswer } from "../schemes";
 import { messageOf } from "../kernel/errors";
-import { assessDesign, schemeResult, type SchemeResult } from "./scheme-result";
+import { designCarbonPerM2Floor, designCost, schemeResult, type SchemeResult } from "./scheme-result";
 import { commonRiseM, dimensionsOf, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice } from "./proportions";
 import type { SchemeSetting, StudyInputs } from "./study-inputs";
 import { refineInFull } from "./refine-in-full";
@@ -61,8 +61,9 @@ export function evaluateStudy(study: StudyInputs, catalogue: Catalogue, options:
 export function objectiveValue(design: Design, study: Pick<StudyInputs, "carbon" | "cost">, objective: Objective): number {
   if (!(design.usableFloorM2 > 0)) return Number.POSITIVE_INFINITY;
   if (objective === "mass") return design.totalMassKg / design.usableFloorM2;
-  const assessed = assessDesign(design, study);
-  const value = objective === "carbon" ? assessed.carbon?.perM2UsableFloor.perM2?.counted : assessed.cost?.perM2UsableFloor?.total;
+  if (design.takeoff.length === 0) return Number.POSITIVE_INFINITY;
+  // only the table the objective reads: the search assesses every candidate, and the other half was thrown away
+  const value = objective === "carbon" ? designCarbonPerM2Floor(design, study) : designCost(design, study).value?.perM2UsableFloor?.total;
   return value ?? Number.POSITIVE_INFINITY;
 }
 

@@ -3,7 +3,7 @@
 // compare page) does not load the designs: the bundler groups modules by the pages that reach them.
 import type { Brief } from "../brief";
 import type { Design, SchemeId } from "../schemes/types";
-import { assessCarbon, type CarbonAssessment } from "../carbon";
+import { assessCarbon, countedCarbonPerM2UsableFloor, type CarbonAssessment } from "../carbon";
 import { assessCost, type CostAssessment } from "../cost";
 import { messageOf } from "../kernel/errors";
 import { schemeFigures, type SchemeFigures } from "./figures";
@@ -36,6 +36,25 @@ function attempt<T>(run: () => T): { value: T | null; error: string } {
   }
 }
 
+function areasOf(design: Design) {
+  return { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
+}
+
+/** The carbon of a design with the study's factor table; null with the reason when it cannot be assessed. */
+export function designCarbon(design: Design, study: Pick<StudyInputs, "carbon">): { value: CarbonAssessment | null; error: string } {
+  return attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areasOf(design)));
+}
+
+/** The counted carbon per m² of usable floor alone (the carbon assessment's figure, to the last bit); null when it cannot be assessed. */
+export function designCarbonPerM2Floor(design: Design, study: Pick<StudyInputs, "carbon">): number | null {
+  return attempt(() => countedCarbonPerM2UsableFloor(design.takeoff, study.carbon.factors, study.carbon.settings, areasOf(design))).value;
+}
+
+/** The cost of a design with the study's rate table; null with the reason when it cannot be assessed. */
+export function designCost(design: Design, study: Pick<StudyInputs, "cost">): { value: CostAssessment | null; error: string } {
+  return attempt(() => assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areasOf(design)));
+}
+
 /**
  * Carbon and cost of a design, with the study's tables, each assessed on its own: a gap in the
  * factor table blanks the carbon but not the cost, and the other way round. `error` says why
@@ -43,9 +62,8 @@ function attempt<T>(run: () => T): { value: T | null; error: string } {
  */
 export function assessDesign(design: Design, study: Pick<StudyInputs, "carbon" | "cost">): Pick<SchemeResult, "carbon" | "cost" | "error"> {
   if (design.takeoff.length === 0) return { carbon: null, cost: null, error: design.feasible ? "no take-off" : "" };
-  const areas = { usableFloorM2: design.usableFloorM2, planAreaM2: design.planAreaM2, roofSurfaceM2: design.roofSurfaceM2 };
-  const carbon = attempt(() => assessCarbon(design.takeoff, study.carbon.factors, study.carbon.settings, areas));
-  const cost = attempt(() => assessCost(design.takeoff, study.cost.rates, study.cost.onCosts, areas));
+  const carbon = designCarbon(design, study);
+  const cost = designCost(design, study);
   return { carbon: carbon.value, cost: cost.value, error: [carbon.error, cost.error].filter((e) => e !== "").join("; ") };
 }
 

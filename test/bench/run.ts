@@ -6,6 +6,7 @@ import { execFileSync } from "node:child_process";
 import { readFileSync, readdirSync, existsSync, statSync } from "node:fs";
 import { gzipSync } from "node:zlib";
 import { join } from "node:path";
+import { loadavg } from "node:os";
 import { preview } from "vite";
 import { chromium, type Page } from "playwright-core";
 import { defaultStudy } from "../../src/study";
@@ -51,27 +52,34 @@ function benchDesigns(): void {
   }
 }
 
+/** Timed searches per scheme and span (COMMON.md: medians of 7 or more runs on this noisy machine). */
+const SEARCH_RUNS = 7;
+
 /** One full design of each scheme including the proportion search (issue 12 budget: 50 ms per scheme at 160 m), and the ranking by the objective. */
 function benchSearch(): void {
-  console.log("\n## proportion search per scheme (one full design including the search, median, node)");
+  console.log(`\n## proportion search per scheme (one full design including the search: median of ${SEARCH_RUNS} runs (fastest–slowest; median CPU time of the process), node; load average ${loadavg().map((x) => x.toFixed(2)).join(" ")})`);
   const study = defaultStudy();
   const catalogue = defaultCatalogue();
   for (const spanM of [60, 160, 300]) {
     const brief = briefAtSpan(study.brief, spanM);
     for (const model of SCHEMES) {
       const times: number[] = [];
+      const cpu: number[] = [];
       let searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue);
-      for (let i = 0; i < 5; i++) {
+      for (let i = 0; i < SEARCH_RUNS; i++) {
         const t = performance.now();
+        const c = process.cpuUsage();
         // a copy of the catalogue each time: a scheme's answers remembered per catalogue (the timber dome's sized meshes) would make a repeated search look cheaper than a first one
         searched = designAtBestProportions(model, brief, study.schemes[model.id], study, { ...catalogue });
         times.push(performance.now() - t);
+        const used = process.cpuUsage(c);
+        cpu.push((used.user + used.system) / 1000);
       }
       const p = searched.proportions;
       const g = searched.design.massByGroupKg;
       const plan = searched.design.planAreaM2;
       console.log(
-        `${model.id.padEnd(15)} ${String(spanM).padStart(3)} m  ${ms(stats(times).median)}  ${p.evaluations} designs  rise ${searched.brief.riseM.toFixed(1)} m (${p.riseSource})  ${JSON.stringify(p.proportions)}  runner-up ${p.runnerUp ? `+${p.runnerUp.differencePct.toFixed(1)} %` : "none"}  ${searched.design.status}  kg/m² plan: structure ${(g.structure / plan).toFixed(1)}, perimeter ${(g.perimeter / plan).toFixed(1)}, substructure ${(g.substructure / plan).toFixed(1)}, envelope ${(g.envelope / plan).toFixed(1)}  floor/plan ${(searched.design.usableFloorM2 / plan).toFixed(2)}  load case "${searched.design.governingLoadCase}"`,
+        `${model.id.padEnd(15)} ${String(spanM).padStart(3)} m  ${ms(stats(times).median)} (${ms(Math.min(...times))}–${ms(stats(times).max)}; CPU ${ms(stats(cpu).median)})  ${p.evaluations} designs  rise ${searched.brief.riseM.toFixed(1)} m (${p.riseSource})  ${JSON.stringify(p.proportions)}  runner-up ${p.runnerUp ? `+${p.runnerUp.differencePct.toFixed(1)} %` : "none"}  ${searched.design.status}  kg/m² plan: structure ${(g.structure / plan).toFixed(1)}, perimeter ${(g.perimeter / plan).toFixed(1)}, substructure ${(g.substructure / plan).toFixed(1)}, envelope ${(g.envelope / plan).toFixed(1)}  floor/plan ${(searched.design.usableFloorM2 / plan).toFixed(2)}  load case "${searched.design.governingLoadCase}"`,
       );
     }
   }

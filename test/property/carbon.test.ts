@@ -1,6 +1,6 @@
-import { describe, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { assessCarbon, DEFAULT_CARBON_SETTINGS, defaultFactorRows, type CarbonTotals, type FactorRow } from "../../src/carbon";
+import { assessCarbon, countedCarbonPerM2UsableFloor, DEFAULT_CARBON_SETTINGS, defaultFactorRows, type CarbonTotals, type FactorRow } from "../../src/carbon";
 import { MATERIALS, type MaterialId } from "../../src/materials";
 import type { TakeoffRow } from "../../src/takeoff/takeoff-row";
 import { expectRelClose, expectAbsClose } from "../helpers/close";
@@ -116,5 +116,25 @@ describe("assessCarbon invariants", () => {
         expectAbsClose(withD, base, 0);
       }),
     );
+  });
+});
+
+describe("countedCarbonPerM2UsableFloor (the proportion search's objective)", () => {
+  const factors = defaultFactorRows();
+  it("is assessCarbon's counted carbon per m² of usable floor to the last bit, and null where that is", () => {
+    fc.assert(
+      fc.property(rowsArb, settingsArb, fc.oneof(fc.constant(0), fc.double({ min: 1, max: 1e5, noNaN: true })), (rows, s, floor) => {
+        const settings = { ...DEFAULT_CARBON_SETTINGS, ...s };
+        const areas = { ...AREAS, usableFloorM2: floor };
+        const full = assessCarbon(rows, factors, settings, areas).perM2UsableFloor.perM2?.counted ?? null;
+        return Object.is(countedCarbonPerM2UsableFloor(rows, factors, settings, areas), full);
+      }),
+      { numRuns: 300 },
+    );
+  });
+  it("refuses what assessCarbon refuses (a material with no factor)", () => {
+    const row: TakeoffRow = { element: "ring", material: "steel-plate", costItem: "steel-ring", quantity: 1, unit: "nr", massKg: 10 };
+    const without = factors.filter((f) => f.material !== "steel-plate");
+    expect(() => countedCarbonPerM2UsableFloor([row], without, DEFAULT_CARBON_SETTINGS, AREAS)).toThrow(/no carbon factor for material "steel-plate"/);
   });
 });

@@ -1,8 +1,8 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
-import type { DesignParts, FloorEnvelope } from "../kit";
-import { capEnvelope, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, planCombinations, SchemeError, SizingError, CABLE_ROOF_DEFLECTION_RATIO } from "../kit";
+import type { DesignParts, DrawingLine, FloorEnvelope } from "../kit";
+import { capEnvelope, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, once, fabricAllowableNPerM, fabricCostItem, fabricPanelChecks, findFabric, massOfKinds, memberOf, tonnesRow, planCombinations, SchemeError, SizingError, CABLE_ROOF_DEFLECTION_RATIO } from "../kit";
 import { roofActions } from "../../loads/roof-actions";
 import { capHeightAt } from "../../mechanics/spherical-cap";
 import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
@@ -18,7 +18,7 @@ import { cableNetDeclaration, type CableNetOptions } from "./declaration";
 const MAX_PARALLEL_STRANDS = 8;
 
 /** The radial cables must hang between 3 % and half their span below their chord. */
-function checkSags(layout: CableNetLayout, section: ReturnType<typeof cableNetSection>): void {
+function checkSags(layout: CableNetLayout, section: () => DrawingLine[]): void {
   for (const [name, bay] of [["outer", layout.outer], ["inner", layout.inner]] as const) {
     if (!(bay.sagM > 0.03 * bay.spanM)) {
       throw new SchemeError(`the ${name} radial cables would hang less than 3 % of their span below their chord (${bay.sagM.toFixed(1)} m over ${bay.spanM.toFixed(0)} m): raise the mast height ratio`, { section });
@@ -150,7 +150,8 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
 function closedNet(brief: Brief, opts: CableNetOptions, catalogue: Catalogue) {
   const fabric = findFabric(catalogue, opts.fabric);
   const layout = cableNetLayout(brief, opts.masts, opts.mastRingRatio, opts.mastHeightRatio, opts.radialCablesPerMast, opts.hangerSpacingM);
-  const section = cableNetSection(layout, brief.eavesHeightM);
+  // drawn only when asked for (the design kept, or a failure's reason): the search designs dozens of candidates
+  const section = once(() => cableNetSection(layout, brief.eavesHeightM));
   checkSags(layout, section);
   const input = {
     brief, actions: roofActions(brief), combinations: planCombinations(brief), layout, catalogue, fabric,

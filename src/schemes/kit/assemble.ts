@@ -77,6 +77,7 @@ export function designStatus(reason: string, outsideValidRange: boolean): Design
  */
 export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "label">, brief: Brief, parts: DesignParts): Design {
   const planAreaM2 = Math.PI * (brief.spanM / 2) ** 2;
+  const floor = parts.floor;
   const takeoff = parts.takeoff.map((row) => ({ ...row, group: takeoffGroupOf(row) }));
   const byGroup = massByGroupKg(takeoff);
   const totalMassKg = takeoff.reduce((sum, row) => sum + row.massKg, 0);
@@ -111,14 +112,14 @@ export function assembleDesign(model: Pick<SchemeModel, "id" | "validSpanM" | "l
     totalMassKg,
     roofMassKg,
     selfWeightKgPerM2: roofMassKg / planAreaM2,
-    usableFloorM2: parts.floor ? usableFloorM2(brief, parts.floor) : (parts.usableFloorM2 ?? 0),
+    usableFloorM2: floor ? usableFloorM2(brief, floor) : (parts.usableFloorM2 ?? 0),
     planAreaM2,
     roofSurfaceM2: parts.roofSurfaceM2,
     enclosedAirKg: enclosedAirMassKg(parts.enclosedVolumeM3),
     governing: governingCheck ? governingCheck.name : "",
     maxUtilisation: governingCheck ? governingCheck.utilisation : 0,
     // The section carries the usable floor exactly as counted (role "usable floor").
-    drawing: parts.floor ? withSection(parts.drawing, [...parts.drawing.section, ...usableFloorLines(brief, parts.floor)]) : parts.drawing,
+    drawing: floor ? withSection(parts.drawing, () => [...parts.drawing.section, ...usableFloorLines(brief, floor)]) : parts.drawing,
     ...(parts.analysis ? { analysis: parts.analysis } : {}),
     ...(parts.regime ? { regime: parts.regime } : {}),
   };

@@ -1,8 +1,9 @@
 import type { DrawingLine } from "../types";
+import { once, type Lines } from "./lazy-drawing";
 
-/** What an infeasible design keeps besides its reason: the drawing so far and any warnings. */
+/** What an infeasible design keeps besides its reason: the drawing so far (or how to draw it, when asked) and any warnings. */
 export interface FailureContext {
-  section?: DrawingLine[];
+  section?: Lines;
   warnings?: string[];
 }
 
@@ -13,13 +14,18 @@ export interface FailureContext {
  * The error that led to it, if any, is kept as `cause`.
  */
 export class SchemeError extends Error {
-  readonly section: DrawingLine[];
   readonly warnings: string[];
+  readonly #section: () => DrawingLine[];
   constructor(message: string, options: FailureContext & { cause?: unknown } = {}) {
     super(message, options.cause === undefined ? undefined : { cause: options.cause });
     this.name = "SchemeError";
-    this.section = options.section ?? [];
+    this.#section = once(options.section ?? []);
     this.warnings = options.warnings ?? [];
+  }
+
+  /** The drawing so far, built when first read. */
+  get section(): DrawingLine[] {
+    return this.#section();
   }
 }
 
@@ -47,7 +53,7 @@ export function failWith(error: unknown, reason: (message: string) => string, co
   if (!(error instanceof SchemeError)) throw error;
   throw new SchemeError(reason(error.message), {
     cause: error,
-    section: context.section ?? error.section,
+    section: context.section ?? (() => error.section),
     warnings: context.warnings ?? error.warnings,
   });
 }

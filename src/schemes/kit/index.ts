@@ -17,5 +17,5 @@ export { ANALYSIS_OPTION, FABRIC_CHOICES, FABRIC_OPTION, TENSION_COMMON_OPTIONS,
 export { CABLE_ROOF_DEFLECTION_RATIO, findFabric, fabricCostItem, fabricAllowableNPerM, fabricCover, fabricPanelChecks } from "./fabric";
 export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction, heaviestByUniformEquivalent } from "./load-combinations";
 export { capFloor } from "./cap-floor";
-export { drawingWithLazyPlan } from "./lazy-drawing";
+export { drawingWithLazyPlan, once, type Lines } from "./lazy-drawing";
 export { analysedCombinations, unboundedCombinations, planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";

@@ -1,11 +1,12 @@
 import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
-import type { Design, DrawingLine, SchemeDeclaration, SchemeId, SchemeModel, SchemeOptions } from "../types";
+import type { Design, SchemeDeclaration, SchemeId, SchemeModel, SchemeOptions } from "../types";
 import type { DesignParts } from "./assemble";
 import { checkSchemeOptions } from "./check-options";
 import { assembleDesign, infeasibleDesign } from "./assemble";
 import { failWith, SchemeError } from "./errors";
 import { iterateSelfWeight, type Converged } from "./converge";
+import type { Lines } from "./lazy-drawing";
 
 /**
  * A scheme's own steps: geometry → loads → self-weight iterated around sizing
@@ -57,7 +58,7 @@ export function defineScheme<O extends SchemeOptions, Id extends SchemeId>(decla
 export function convergeSelfWeight<T>(
   size: (selfWeightKPa: number) => { value: T; selfWeightKPa: number },
   initialKPa: number,
-  failure: { section: DrawingLine[]; reason?: (message: string) => string },
+  failure: { section: Lines; reason?: (message: string) => string },
 ): Converged<T> {
   try {
     return iterateSelfWeight(size, initialKPa);

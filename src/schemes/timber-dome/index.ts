@@ -1,7 +1,7 @@
 import type { Brief } from "../../brief";
 import type { Catalogue, GlulamClass } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
-import type { Check, DesignParts, DrawingLine, MemberGroup } from "../kit";
+import type { Check, DesignParts, Lines, MemberGroup } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { CapTooSmallError, geodesicFrequencyFor, type GeodesicCap } from "../../mechanics/geodesic";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
@@ -11,7 +11,7 @@ import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-cree
 import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "../../mechanics/timber-charring";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { designBasis } from "../../loads/design-basis";
-import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
+import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, once, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
 import { geodesicCapBands } from "../../mechanics/geodesic-bands";
 import type { LatticeBand } from "../../mechanics/lattice-bands";
 import { GLULAM_SECTIONS } from "./sections";
@@ -142,13 +142,13 @@ function timberSummary(r: TimberLatticeResult, frequency: number, cap: Spherical
 }
 
 /** A SchemeError for a mesh of this frequency that cannot be made; rethrows anything else. */
-function meshFailure(e: unknown, failure: { warnings: string[]; section: DrawingLine[] }): SchemeError {
+function meshFailure(e: unknown, failure: { warnings: string[]; section: Lines }): SchemeError {
   if (e instanceof CapTooSmallError) return new SchemeError("the mesh is too coarse for so small a cap: shorten the members", { ...failure, cause: e });
   throw e;
 }
 
 /** The geodesic mesh of one frequency; a SchemeError when it cannot be made. */
-function latticeMesh(cap: SphericalCap, frequency: number, failure: { warnings: string[]; section: DrawingLine[] }): GeodesicCap {
+function latticeMesh(cap: SphericalCap, frequency: number, failure: { warnings: string[]; section: Lines }): GeodesicCap {
   if (frequency > 200) throw new SchemeError(`the mesh would need frequency ${frequency} (over 200): lengthen the members`, failure);
   try {
     return cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad);
@@ -162,7 +162,7 @@ function latticeMesh(cap: SphericalCap, frequency: number, failure: { warnings: 
  * mesh (the sizing reads only the bands; the mesh is built for the design kept); a SchemeError when
  * the mesh cannot be made.
  */
-function latticeMeshBands(cap: SphericalCap, frequency: number, bandCount: number, failure: { warnings: string[]; section: DrawingLine[] }): LatticeBand[] {
+function latticeMeshBands(cap: SphericalCap, frequency: number, bandCount: number, failure: { warnings: string[]; section: Lines }): LatticeBand[] {
   if (frequency > 200) throw new SchemeError(`the mesh would need frequency ${frequency} (over 200): lengthen the members`, failure);
   try {
     return geodesicCapBands(frequency, cap.radiusM, cap.edgeAngleRad, bandCount);
@@ -184,7 +184,9 @@ interface MeshDesign {
 
 /** The lattice sized on the mesh of one frequency; a SchemeError when it cannot be built. */
 function sizeOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): MeshDesign {
-  const failure = { warnings, section: timberSection(brief, 0) };
+  // drawn only when asked for (a failure's reason): the search sizes dozens of meshes
+  const bare = once(() => timberSection(brief, 0));
+  const failure = { warnings, section: bare };
   const inputs = latticeInputs(brief, opts, catalogue, cap, latticeMeshBands(cap, frequency, opts.bands, failure));
   const converged = convergeSelfWeight<TimberLatticeResult>(
     (g) => {
@@ -192,10 +194,10 @@ function sizeOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue,
       return { value: r, selfWeightKPa: r.failure ? g : timberSelfWeightKPa(r, cap.surfaceM2) };
     },
     kPaFromKgPerM2(60),
-    { section: timberSection(brief, 0) },
+    { section: bare },
   );
   const r = converged.value;
-  if (r.failure) throw new SchemeError(r.failure, { warnings, section: timberSection(brief, memberDepthM(r)) });
+  if (r.failure) throw new SchemeError(r.failure, { warnings, section: () => timberSection(brief, memberDepthM(r)) });
   const massKg = timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3).reduce((sum, row) => sum + row.massKg, 0);
   return { massKg, mesh: () => latticeMesh(cap, frequency, failure), frequency, result: r, inputs, iterations: converged.iterations };
 }
@@ -250,7 +252,7 @@ function partsOf(brief: Brief, cap: SphericalCap, d: MeshDesign, warnings: strin
     iterations: d.iterations,
     floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: drawingWithLazyPlan(timberSection(brief, depthM), () => timberPlan(d.mesh())),
+    drawing: drawingWithLazyPlan(() => timberSection(brief, depthM), () => timberPlan(d.mesh())),
   };
 }
 
@@ -290,7 +292,7 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
       if (frequency === nominal) nominalFailure = e;
     }
   }
-  if (best === null) throw nominalFailure ?? new SchemeError("no mesh near the target member length can be built: change the member length", { warnings, section: timberSection(brief, 0) });
+  if (best === null) throw nominalFailure ?? new SchemeError("no mesh near the target member length can be built: change the member length", { warnings, section: () => timberSection(brief, 0) });
   const parts = partsOf(brief, cap, best, warnings);
   return opts.bucklingAnalysis ? withNetAnalysis(brief, cap, best, parts, opts.knockDown) : parts;
 }

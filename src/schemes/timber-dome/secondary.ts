@@ -1,5 +1,5 @@
 import type { GlulamClass } from "../../catalogue/types";
-import { simplySupportedUdl } from "../../mechanics/beam";
+import { simplySupportedMomentNm, simplySupportedUdl } from "../../mechanics/beam";
 import { timberDesignStrengthPa } from "../../mechanics/timber-gamma-m";
 import { pickGlulam, type MemberCheck, type MemberDemand } from "./member-design";
 import type { GlulamSection } from "./sections";
@@ -33,7 +33,7 @@ export function sizePurlins(
   creepModulusPa: number,
   gammaM: number,
 ): PurlinResult | null {
-  const demands: MemberDemand[] = casesPa.map((c) => ({ forceN: 0, momentNm: simplySupportedUdl(c.pressurePa * spacingM, spanM, 1).momentNm, kMod: c.kMod, label: c.label }));
+  const demands: MemberDemand[] = casesPa.map((c) => ({ forceN: 0, momentNm: simplySupportedMomentNm(c.pressurePa * spacingM, spanM), kMod: c.kMod, label: c.label }));
   const limitM = spanM / DEFLECTION_LIMIT_RATIO;
   const deflection = (s: GlulamSection) => simplySupportedUdl(serviceLoadPa * spacingM, spanM, creepModulusPa * s.secondMomentYM4).deflectionM;
   const pick = pickGlulam(sections, glulam, { strongM: spanM, weakM: spacingM }, demands, gammaM, (s) => deflection(s) <= limitM);
@@ -54,8 +54,10 @@ export function deckThicknessM(
   creepModulusPa: number,
   gammaM: number,
 ): number | null {
+  // the moments and strengths do not depend on the thickness: worked out once, not at each step
+  const cases = casesPa.map((c) => ({ momentNm: simplySupportedMomentNm(c.pressurePa, spacingM), strengthPa: timberDesignStrengthPa(board.bendingPa, c.kMod, gammaM) }));
   for (let t = MIN_DECK_THICKNESS_M; t <= 0.3 + 1e-9; t += 0.005) {
-    const strong = casesPa.every((c) => simplySupportedUdl(c.pressurePa, spacingM, 1).momentNm <= (timberDesignStrengthPa(board.bendingPa, c.kMod, gammaM) * t * t) / 6);
+    const strong = cases.every((c) => c.momentNm <= (c.strengthPa * t * t) / 6);
     const stiff = simplySupportedUdl(serviceLoadPa, spacingM, (creepModulusPa * t ** 3) / 12).deflectionM <= spacingM / DEFLECTION_LIMIT_RATIO;
     if (strong && stiff) return t;
   }

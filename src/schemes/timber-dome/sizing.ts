@@ -3,7 +3,7 @@ import { membraneLoadCases, type UniformCombination } from "../kit";
 import { edgeRingTensionN, sphericalMembraneForces, sphericalMembraneSurfaceLoad } from "../../mechanics/spherical-membrane";
 import { threeWayGridBarForces, threeWayGridStiffness } from "../../mechanics/three-way-grid";
 import { continuumShellPressurePa } from "../../mechanics/shell-buckling";
-import { simplySupportedUdl } from "../../mechanics/beam";
+import { simplySupportedMomentNm } from "../../mechanics/beam";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
 import type { LatticeBand } from "../../mechanics/lattice-bands";
@@ -128,7 +128,7 @@ function bandDemands(input: TimberLatticeInputs, band: LatticeBand, c: LoadCase)
     tensionN = Math.max(tensionN, bars.tensionN);
   }
   const lineLoad = Math.abs(c.surfacePa + c.planPa) * TRIBUTARY_WIDTH_PER_LENGTH * band.maxLengthM;
-  const momentNm = simplySupportedUdl(lineLoad, band.maxLengthM, 1).momentNm;
+  const momentNm = simplySupportedMomentNm(lineLoad, band.maxLengthM);
   return [
     { forceN: compressionN, momentNm, kMod: c.kMod, label: c.label },
     { forceN: tensionN, momentNm, kMod: c.kMod, label: c.label },
@@ -140,15 +140,37 @@ export function withCharLayer(section: GlulamSection, charDepthM: number): Glula
   return charDepthM > 0 ? rectangularSection(section.widthM + 2 * charDepthM, section.depthM + charDepthM) : section;
 }
 
+/** Each band's sections' general-buckling pressures, remembered per lattice input (they do not change with the self-weight). */
+const bucklingTables = new WeakMap<TimberLatticeInputs, Map<LatticeBand, Map<GlulamSection, number>>>();
+
+/**
+ * The knocked-down general-buckling pressure of the lattice with a band's members of a section, Pa
+ * (equivalent continuum 4√(DB)/R², the creep-reduced modulus): it depends on the section and the
+ * mesh, not on the self-weight, so each is worked out once per lattice input and band and read again
+ * at every step of the self-weight iteration (the section search asks it of a hundred sections and more).
+ */
+function bucklingPressureOf(input: TimberLatticeInputs, band: LatticeBand): (s: GlulamSection) => number {
+  const byBand = bucklingTables.get(input) ?? new Map<LatticeBand, Map<GlulamSection, number>>();
+  bucklingTables.set(input, byBand);
+  const known = byBand.get(band) ?? new Map<GlulamSection, number>();
+  byBand.set(band, known);
+  return (s) => {
+    let pressurePa = known.get(s);
+    if (pressurePa === undefined) {
+      const grid = threeWayGridStiffness(input.creepModulusPa * s.areaM2, input.creepModulusPa * s.secondMomentYM4, band.meanLengthM);
+      pressurePa = input.knockDown * continuumShellPressurePa(grid.bendingNm, grid.membraneNPerM, input.radiusM);
+      known.set(s, pressurePa);
+    }
+    return pressurePa;
+  };
+}
+
 /** Sizes the lattice members band by band for every case and for general buckling. */
 function sizeBands(input: TimberLatticeInputs, cases: LoadCase[], pressurePa: number): { bands: BandResult[]; failure: string } {
   const bands: BandResult[] = [];
   for (const band of input.bands) {
     const demands = cases.flatMap((c) => bandDemands(input, band, c));
-    const bucklingOf = (s: GlulamSection) => {
-      const grid = threeWayGridStiffness(input.creepModulusPa * s.areaM2, input.creepModulusPa * s.secondMomentYM4, band.meanLengthM);
-      return input.knockDown * continuumShellPressurePa(grid.bendingNm, grid.membraneNPerM, input.radiusM);
-    };
+    const bucklingOf = bucklingPressureOf(input, band);
     const lengths = { strongM: band.maxLengthM, weakM: Math.min(band.maxLengthM, input.purlinSpacingM) };
     const pick = pickGlulam(input.sections, input.glulam, lengths, demands, input.gammaM, (s) => bucklingOf(s) >= pressurePa);
     if (pick === null) {
