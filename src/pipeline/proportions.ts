@@ -1,6 +1,6 @@
 import type { Brief, SearchObjective } from "../brief";
-import type { Design, OptionSpec, OptionValue, SchemeModel, SchemeOptions } from "../schemes/types";
-import { RISE_TREND_SAMPLES, trendChoice } from "./rise-trend";
+import type { Design, OptionSpec, OptionValue, RiseTrend, SchemeModel, SchemeOptions } from "../schemes/types";
+import { trendChoice } from "./rise-trend";
 
 /** What the proportion search minimises, per m² of usable floor: total mass, counted embodied carbon, or cost. */
 export type Objective = SearchObjective;
@@ -49,8 +49,8 @@ interface Dimension {
   stride?: number;
   /** Searched (and reported) only while another option has this value. */
   when?: { key: string; value: OptionValue };
-  /** The rise of a scheme that asks for it chosen on the trend of the objective (see ./rise-trend.ts). */
-  trend?: boolean;
+  /** The rise of a scheme that asks for it chosen on the trend of the objective, sampled as its declaration says (see ./rise-trend.ts). */
+  trend?: RiseTrend;
 }
 
 /** Values of a number option on its step grid within [min, max]. */
@@ -83,7 +83,7 @@ export function dimensionsOf(model: SchemeModel, options: SchemeOptions, pinned:
   const dims = model.options.filter((spec) => spec.free === true && !pinned.includes(spec.key)).map((spec) => optionDimension(spec, options[spec.key] ?? model.defaults[spec.key] ?? 0, spanM));
   if (rise.kind === "search") {
     const values = gridOf(rise.minM, rise.maxM, rise.stepM, false);
-    dims.push({ key: RISE_KEY, values, start: nearestIndex(values, rise.startM), form: false, ...(model.riseSpanRatio?.byTrend ? { trend: true } : {}) });
+    dims.push({ key: RISE_KEY, values, start: nearestIndex(values, rise.startM), form: false, ...(model.riseSpanRatio?.byTrend ? { trend: model.riseSpanRatio.byTrend } : {}) });
   }
   return coarsenForms(dims);
 }
@@ -290,7 +290,7 @@ function differInWholeForm(dims: readonly Dimension[], a: Scanned | undefined, b
 function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Evaluator): number[] {
   const moving = (at: readonly number[]) => dims.flatMap((d, k) => (!d.form && activeAt(dims, d, at, options) ? [k] : []));
   const start = dims.map((d) => d.start);
-  const r = dims.findIndex((d) => d.trend === true);
+  const r = dims.findIndex((d) => d.trend !== undefined);
   if (r >= 0 && !dims.some((d) => d.form)) return trendIndex(dims, r, (at) => moving(at).filter((k) => k !== r), ev);
   ev.allow(WARM_BUDGET);
   const warm = descend(dims, moving(start), start, ev);
@@ -311,23 +311,29 @@ function searchIndex(dims: readonly Dimension[], options: SchemeOptions, ev: Eva
   return nearestStart(dims, simplest?.at ?? warm, ev, moving);
 }
 
-/** Designs of the trend search: the descent over the other proportions at the reference rise, and again at the chosen rise. */
+/** Designs of the trend search: the descent over the other proportions at the reference rise (when the samples are taken there), and again at the chosen rise. */
 const TREND_WARM_BUDGET = 12;
 const TREND_FINISH_BUDGET = 10;
 
 /**
- * The rise on the trend (a scheme without forms whose declaration asks for it): the other proportions
- * searched at the reference rise; the rise sampled at RISE_TREND_SAMPLES equal steps across its
- * range with those proportions; of the rises whose fitted objective is within PROPORTION_TIE_FRACTION
- * of the fitted least, the nearest the reference; the other proportions searched again there and
- * pulled toward their references within the band (the rise stays).
+ * The rise on the trend (a scheme without forms whose declaration asks for it): the rise sampled at
+ * the declared number of equal steps across its range, with the other proportions at their
+ * references ("reference") or at the best a descent finds at the reference rise ("searched"); of the
+ * rises whose fitted objective is within PROPORTION_TIE_FRACTION of the fitted least, the nearest the
+ * reference; the other proportions searched again there and pulled toward their references within
+ * the band (the rise stays).
  */
 function trendIndex(dims: readonly Dimension[], r: number, others: (at: readonly number[]) => number[], ev: Evaluator): number[] {
   const start = dims.map((d) => d.start);
-  ev.allow(TREND_WARM_BUDGET);
-  const warm = descend(dims, others(start), start, ev);
+  const trend = dims[r]!.trend!;
+  let warm = start;
+  if (trend.sampledAt === "searched") {
+    ev.allow(TREND_WARM_BUDGET);
+    warm = descend(dims, others(start), start, ev);
+  }
   const n = dims[r]!.values.length;
-  const indices = [...new Set(Array.from({ length: RISE_TREND_SAMPLES }, (_, i) => Math.round((i * (n - 1)) / (RISE_TREND_SAMPLES - 1))))];
+  const count = Math.max(3, Math.round(trend.samples));
+  const indices = [...new Set(Array.from({ length: count }, (_, i) => Math.round((i * (n - 1)) / (count - 1))))];
   const at = (i: number) => warm.map((x, k) => (k === r ? i : x));
   ev.allow(indices.length);
   const samples = indices.map((index) => ({ index, value: ev.value(at(index)) }));

@@ -7,8 +7,8 @@
  * follows the steps from span to span.
  */
 
-/** Rises sampled across the range (equal steps of rise ÷ span, so the same ratios at every span). */
-export const RISE_TREND_SAMPLES = 6;
+// The rises are sampled at equal steps of rise ÷ span across the range (the same ratios at every
+// span); how many, and at which other proportions, each scheme declares (RiseTrend in ../schemes/types.ts).
 
 /** The quadratic a + b·u + c·u² with u = (x − centre) / scale, by least squares; null with fewer than three points. */
 export function fitQuadratic(points: readonly { x: number; y: number }[]): ((x: number) => number) | null {

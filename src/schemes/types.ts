@@ -180,6 +180,20 @@ export interface Design {
   regime?: string;
 }
 
+/** How the search samples the trend of the objective across the rise range (see ../pipeline/rise-trend.ts). */
+export interface RiseTrend {
+  /** Rises sampled at equal steps of rise ÷ span across the range (at least 3: a quadratic is fitted through them). */
+  samples: number;
+  /**
+   * The other free proportions (a lattice's member length) the rises are sampled at: "searched", the
+   * best a descent finds at the preferred rise (a noisy local optimum that can step from one span to
+   * the next); "reference", their reference values at every span (no descent: the same proportions
+   * at every span, so the samples move smoothly with span; right only when the reference is not far
+   * from the optimum).
+   */
+  sampledAt: "searched" | "reference";
+}
+
 /**
  * What a scheme is, without its designer: who it is, its valid range, its options. The pages, the
  * study schema, the defaults, the palette and the risk defaults read only this (the declarations
@@ -200,7 +214,7 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
     max: number;
     preferred: number;
     /** The search chooses the rise on the trend of the objective across the range, not among single samples (a lattice: each rise gives another mesh and other sections). */
-    byTrend?: boolean;
+    byTrend?: RiseTrend;
   };
   options: readonly OptionSpec[];
   defaults: O;

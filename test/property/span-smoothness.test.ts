@@ -80,8 +80,13 @@ smoothnessSuite("smooth across span (40–400 m, 5 m steps)", defaultStudy, KNOW
 // height and height limit), not only on the default one. Found at 18:00 on 3 Dec (lead, CLI sweep):
 // the geodesic dome jumps 19.4 % in mass ÷ air (self-weight +13.9 %) at 220 → 225 m with no regime
 // change, where its trend-chosen rise drops from 40.7 to 37.9 m and its struts go from 12.5 to
-// 13.5 m; the same at the start of that stop (75b9e13). Expected to fail until it is fixed.
-const KNOWN_FAILING_DEMO: readonly SchemeId[] = ["geodesic-dome"];
+// 13.5 m; the same at the start of that stop (75b9e13). Cause (search7): the rise trend was sampled
+// at the strut length a descent found at the reference rise, a noisy local optimum that stepped
+// between spans. Since search8 (20:10) the geodesic declares its trend sampled at its reference
+// proportions (7 rises at the 5 m reference strut, no descent first) and holds on both studies:
+// largest jump 12.9 % (demo, mass ÷ air, 225→230 m), 10.6 % (default, 170→175 m). The timber dome
+// keeps its samples at the searched member length (at its reference they jumped 32–42 %).
+const KNOWN_FAILING_DEMO: readonly SchemeId[] = [];
 
 function demoStudy(): Study {
   const loaded = studyFromJson(readFileSync("data/demo-study.json", "utf8"));

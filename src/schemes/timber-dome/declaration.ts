@@ -53,6 +53,6 @@ export const timberDomeDeclaration = declareScheme({
   // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (completed 1983) and 163.4 m (completed 1991), published figures.
   validSpanM: { min: 40, max: 165 },
   // rise ÷ span 0.1–0.3, preferring 0.15 (the built glulam domes are near it; common practice, no source)
-  riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15, byTrend: true },
+  riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15, byTrend: { samples: 6, sampledAt: "searched" } },
   options: defineOptions(declarations),
 });

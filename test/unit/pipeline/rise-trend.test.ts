@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { fitQuadratic, trendChoice, RISE_TREND_SAMPLES } from "../../../src/pipeline/rise-trend";
+import { fitQuadratic, trendChoice } from "../../../src/pipeline/rise-trend";
 import { searchProportions, riseSettingFor, MAX_EVALUATIONS, PROPORTION_TIE_FRACTION, type RiseSetting } from "../../../src/pipeline/proportions";
 import { infeasibleDesign } from "../../../src/schemes/kit";
 import { DEFAULT_BRIEF } from "../../../src/brief";
-import type { Design, SchemeModel, SchemeOptions } from "../../../src/schemes/types";
+import type { Design, RiseTrend, SchemeModel, SchemeOptions } from "../../../src/schemes/types";
 import { expectAbsClose, expectRelClose } from "../../helpers/close";
 
 // Made-up objectives whose trend is known (no scheme involved): a parabola in the rise, with and
@@ -42,7 +42,8 @@ describe("rise on the trend", () => {
     expect(trendChoice(rises, falling, 0, PROPORTION_TIE_FRACTION)).toBeLessThanOrEqual(24);
   });
 
-  it("a scheme that asks for it gets its rise on the trend of a sawn objective, its other proportion searched at that rise", () => {
+  /** A one-option lattice-like scheme whose rise is on the declared trend, searched on the sawn objective at 100 m; every design asked for, in order. */
+  function searchSawn(byTrend: RiseTrend) {
     const m = {
       id: "geodesic-dome",
       label: "Test",
@@ -51,7 +52,7 @@ describe("rise on the trend", () => {
       validSpanM: { min: 0, max: 1000 },
       options: [{ key: "length", label: "length", kind: "number", unit: "m", min: 2, max: 16, step: 0.5, source: "test", free: true }],
       defaults: { length: 5 },
-      riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15, byTrend: true },
+      riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15, byTrend },
       design: () => {
         throw new Error("not used");
       },
@@ -59,17 +60,35 @@ describe("rise on the trend", () => {
     const brief = { ...DEFAULT_BRIEF, spanM: 100, riseM: 15, eavesHeightM: 10, heightLimitM: 60, riseRule: "own" as const };
     const rise = riseSettingFor(m, brief, 100, undefined) as RiseSetting;
     const objective = (o: SchemeOptions, riseM: number) => saw(riseM) + ((o.length as number) - 9) ** 2;
-    let calls = 0;
+    const calls: { length: number; riseM: number }[] = [];
     const { choice } = searchProportions(m, m.defaults, [], rise, "mass", (o, riseM): Design => {
-      calls++;
+      calls.push({ length: o.length as number, riseM });
       return { ...infeasibleDesign("geodesic-dome", DEFAULT_BRIEF, ""), status: "feasible", feasible: true, totalMassKg: objective(o, riseM) };
     }, (d) => d.totalMassKg, 100);
-    expect(RISE_TREND_SAMPLES).toBeGreaterThanOrEqual(3);
+    return { choice, calls };
+  }
+
+  /** The chosen rise on the trend, and the length at its least (9 m) or pulled toward its reference (5 m) as far as the objective stays within the band. */
+  function expectTrendChoice(choice: ReturnType<typeof searchSawn>["choice"]): void {
     expectAbsClose(choice.riseM, BAND_EDGE_M, 1.5);
-    // the length at its least (9 m), or pulled toward its reference (5 m) as far as the objective stays within the band
     const length = choice.proportions.length as number;
     expect(length).toBeLessThanOrEqual(9);
     expect((length - 9) ** 2).toBeLessThanOrEqual(PROPORTION_TIE_FRACTION * saw(choice.riseM));
-    expect(calls).toBeLessThanOrEqual(MAX_EVALUATIONS);
+  }
+
+  it("a scheme that asks for it gets its rise on the trend of a sawn objective, its other proportion searched at that rise", () => {
+    const { choice, calls } = searchSawn({ samples: 6, sampledAt: "searched" });
+    expectTrendChoice(choice);
+    expect(calls.length).toBeLessThanOrEqual(MAX_EVALUATIONS);
+  });
+
+  it("sampled at the reference proportions: the declared number of rises, equal steps across the range, all at the reference length, no descent before them", () => {
+    const { choice, calls } = searchSawn({ samples: 7, sampledAt: "reference" });
+    // the first designs are the 7 samples from 10 to 30 m (0.1–0.3 × 100 m), on the 0.5 m rise grid
+    const samples = calls.slice(0, 7);
+    expect(samples.map((c) => c.length)).toEqual(Array(7).fill(5));
+    expect(samples.map((c) => c.riseM)).toEqual([10, 13.5, 16.5, 20, 23.5, 26.5, 30]);
+    expectTrendChoice(choice);
+    expect(calls.length).toBeLessThanOrEqual(MAX_EVALUATIONS);
   });
 });
