@@ -73,11 +73,17 @@ export interface NumberControlOptions {
   id?: string;
 }
 
+/** For text such as "12,5": that it is not a number and the point to write instead; else null. */
+export function decimalCommaProblem(raw: string): string | null {
+  return /^\s*-?\d+,\d+\s*$/.test(raw) ? `"${raw}" is not a number: write the decimal with a point (${raw.trim().replace(",", ".")})` : null;
+}
+
 /** Why a typed number is not allowed, or null. */
 function numberProblem(raw: string, o: NumberControlOptions): string | null {
   if (raw.trim() === "") return `${o.label}: a value is required`;
   const x = Number(raw);
-  if (/^\s*-?\d+,\d+\s*$/.test(raw)) return `${o.label}: "${raw}" is not a number: write the decimal with a point (${raw.trim().replace(",", ".")})`;
+  const comma = decimalCommaProblem(raw);
+  if (comma !== null) return `${o.label}: ${comma}`;
   if (!Number.isFinite(x)) return `${o.label}: "${raw}" is not a number (allowed ${o.min} to ${o.max}${o.unit && o.unit !== "–" ? ` ${o.unit}` : ""})`;
   if (x < o.min || x > o.max) return `${o.label}: ${x} ${o.unit} is out of range (allowed ${o.min} to ${o.max} ${o.unit})`;
   if (o.integer && !Number.isInteger(x)) return `${o.label}: ${x} is not a whole number`;

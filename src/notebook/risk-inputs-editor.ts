@@ -8,8 +8,9 @@ import { h } from "preact";
 import { computed, signal, effect, type ReadonlySignal, type Signal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { setIn } from "../study";
-import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, type UncertainInput } from "../risk";
+import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, SCALE_RULES, type UncertainInput } from "../risk";
 import { mountEditableTable, type EditOutcome, type TableColumn } from "./editable-table";
+import { decimalCommaProblem } from "./controls";
 
 const STYLE_ID = "risk-editor-style";
 const CSS = `
@@ -83,6 +84,25 @@ function changeScale(store: StudyStore, index: number, stored: UncertainInput, s
   return applyInput(store, index, { ...stored, scale: factor ? "factor" : "offset", low: Math.min(...ends), high: Math.max(...ends) }, scale);
 }
 
+/**
+ * Why a typed least or most is not allowed, in the table's own words (the row's name, "least" and
+ * "most", "× study value" and "+ study value"), or null; the file's words (low, high, factor,
+ * offset) stay in the study file's checks.
+ */
+function endProblem(stored: UncertainInput, field: "low" | "high", text: string, x: number): string | null {
+  const name = `${stored.label}, ${field === "low" ? "least" : "most"}`;
+  const rule = SCALE_RULES[stored.scale];
+  const factor = stored.scale === "factor";
+  const allowed =
+    field === "low" ? (factor ? `from ${rule.lowMin} to ${rule.lowMax} (× study value)` : `0 or less (+ study value)`) : `${rule.highMin} or more (${factor ? "×" : "+"} study value)`;
+  if (text.trim() === "") return `${name}: a value is required (allowed ${allowed})`;
+  const comma = decimalCommaProblem(text);
+  if (comma !== null) return `${name}: ${comma}`;
+  if (!Number.isFinite(x)) return `${name}: "${text}" is not a number (allowed ${allowed})`;
+  const inside = field === "low" ? x >= rule.lowMin && x <= rule.lowMax : x >= rule.highMin;
+  return inside ? null : `${name}: ${x} is not allowed (allowed ${allowed})`;
+}
+
 function editInput(store: StudyStore, id: string, field: string, text: string): EditOutcome {
   const inputs = store.study.value.risk.inputs;
   const index = inputs.findIndex((i) => i.id === id);
@@ -91,7 +111,8 @@ function editInput(store: StudyStore, id: string, field: string, text: string): 
   if (field === "scale") return changeScale(store, index, stored, text);
   if (field === "low" || field === "high") {
     const x = Number(text);
-    if (text.trim() === "" || !Number.isFinite(x)) return { ok: false, message: `input "${id}": ${field} "${text}" is not a number` };
+    const problem = endProblem(stored, field, text, x);
+    if (problem !== null) return { ok: false, message: problem };
     return applyInput(store, index, { ...stored, [field]: x }, x);
   }
   if (field === "group") {

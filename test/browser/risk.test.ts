@@ -35,7 +35,13 @@ describe("risk page", () => {
     const before = await page.inputValue("#risk-low-0");
     await page.fill("#risk-low-0", "999");
     await page.press("#risk-low-0", "Enter");
-    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toMatch(/input "snow": low 999 is outside its factor range/);
+    // In the table's own words: the row's name and "least", not the file's id and "low" (audit8)
+    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe("Ground snow load s_k (kPa), least: 999 is not allowed (allowed from 0 to 1 (× study value))");
+    for (const [typed, said] of [["12,5", 'Ground snow load s_k (kPa), least: "12,5" is not a number: write the decimal with a point (12.5)'], ["", "Ground snow load s_k (kPa), least: a value is required (allowed from 0 to 1 (× study value))"]] as const) {
+      await page.fill("#risk-low-0", typed);
+      await page.press("#risk-low-0", "Enter");
+      await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe(said);
+    }
     await page.reload();
     await page.waitForSelector("#risk-inputs-table tbody tr");
     expect(await page.inputValue("#risk-low-0")).toBe(before);
@@ -81,7 +87,7 @@ describe("risk page in our own words (issue 14)", () => {
     const before = await page.inputValue("#risk-low-0");
     await page.fill("#risk-low-0", "999");
     await page.press("#risk-low-0", "Enter");
-    await expect.poll(() => page.locator("#risk-blocked").textContent()).toMatch(/^Run is refused until this input is valid: input "snow": low 999 is outside its factor range/);
+    await expect.poll(() => page.locator("#risk-blocked").textContent()).toMatch(/^Run is refused until this input is valid: Ground snow load s_k \(kPa\), least: 999 is not allowed/);
     expect(await page.locator("#risk-run").isDisabled()).toBe(true);
     await page.fill("#risk-low-0", before);
     await page.press("#risk-low-0", "Enter");
