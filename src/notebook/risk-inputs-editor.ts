@@ -11,6 +11,7 @@ import { setIn } from "../study";
 import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, SCALE_RULES, type UncertainInput } from "../risk";
 import { mountEditableTable, type EditOutcome, type TableColumn } from "./editable-table";
 import { decimalCommaProblem } from "./controls";
+import { fmt } from "./format";
 
 const STYLE_ID = "risk-editor-style";
 const CSS = `
@@ -125,7 +126,7 @@ function editInput(store: StudyStore, id: string, field: string, text: string): 
 function columns(store: StudyStore): TableColumn<UncertainInput>[] {
   const number = (x: unknown) => (typeof x === "number" ? String(Number(x.toPrecision(6))) : "");
   return [
-    { field: "label", label: "input", kind: "computed", content: (i) => [i.label, h("div", { class: "kind" }, inputKind(i)), h("div", { class: "path" }, formatPath(i.path))] },
+    { field: "label", label: "input", kind: "computed", content: (i) => [fmt.unit(i.label), h("div", { class: "kind" }, inputKind(i)), h("div", { class: "path" }, formatPath(i.path))] },
     { field: "scale", label: "ends given as", kind: "select", choices: RANGE_SCALES.map((k) => ({ value: k, label: k === "factor" ? "× study value" : "+ study value" })) },
     { field: "low", label: "least", kind: "number", commit: "change", show: (i) => number(i.low), hint: "The lowest plausible value, on the scale at the left" },
     { field: "high", label: "most", kind: "number", commit: "change", show: (i) => number(i.high), hint: "The highest plausible value, on the scale at the left" },
