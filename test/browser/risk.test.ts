@@ -110,6 +110,17 @@ describe("risk page in our own words (issue 14)", () => {
     const best = rows.map((r) => ({ label: r[0] ?? "", p: Number((r[2] ?? "").split(" %")[0]) })).sort((a, b) => b.p - a.p)[0];
     expect(verdict.toLowerCase()).toContain(`the ${best?.label.toLowerCase()} is cheapest in ${best?.p} % of draws`);
     expect(await page.locator("#risk-stale").isHidden()).toBe(true);
+    // audit8: the cost rows read "Cost (per m² usable floor)" with no currency, at four figures (1,269)
+    const perScheme = await page.locator("#cell-risk-results table").first().locator("tbody tr").evaluateAll((trs) => trs.map((tr) => [...tr.children].map((c) => c.textContent ?? "")));
+    const costRows = perScheme.filter((r) => (r[1] ?? "").startsWith("Cost"));
+    expect(costRows.length).toBeGreaterThan(0);
+    for (const r of costRows) {
+      expect(r[1]).toBe("Cost (EUR/m² usable floor)");
+      for (const cell of r.slice(2, 6)) {
+        const x = Number(cell.replace(/,/g, ""));
+        expect(Number(x.toPrecision(3)), `${r[0]}: ${cell}`).toBe(x);
+      }
+    }
     // The chosen scheme's charts list none of another scheme's options.
     const scheme = await page.inputValue("#risk-scheme");
     const others = await page.locator("#risk-inputs-table tbody tr").evaluateAll((trs, id) => trs.filter((tr) => { const path = tr.querySelector(".path")?.textContent ?? ""; return path.startsWith("schemes.") && !path.startsWith(`schemes.${id}.`); }).map((tr) => tr.querySelector("th")?.firstChild?.textContent ?? ""), scheme);
