@@ -8,7 +8,7 @@ import { h } from "preact";
 import { computed, signal, effect, type ReadonlySignal, type Signal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { setIn } from "../study";
-import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, SCALE_RULES, type UncertainInput } from "../risk";
+import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, SCALE_RULES, SHAPE_WORDS, type UncertainInput } from "../risk";
 import { mountEditableTable, type EditOutcome, type TableColumn } from "./editable-table";
 import { decimalCommaProblem } from "./controls";
 import { fmt } from "./format";
@@ -57,12 +57,7 @@ export function inputKind(input: UncertainInput): InputKind {
   return "Other";
 }
 
-/** How likely values between the ends are, in words (the sampling shapes keep their ids in the study). */
-export const SHAPE_WORDS: Readonly<Record<(typeof DISTRIBUTION_KINDS)[number], string>> = {
-  pert: "peak at study value, smooth",
-  triangular: "peak at study value, straight",
-  uniform: "flat: all equally likely",
-};
+export { SHAPE_WORDS };
 
 const show = (x: number) => String(Number(x.toPrecision(4)));
 
@@ -212,7 +207,7 @@ export function riskInputsEditor(store: StudyStore, pending: PendingEntries = si
   mountEditableTable<UncertainInput>(holder, {
     tableId: "risk-inputs-table",
     caption:
-      "Uncertain inputs. Each range is stored around the study's own value, which is the mode (the most likely value): as factors on it (× 0.75 to × 1.5) or as amounts added to it (in the field's unit), so it moves with the study and always holds the study's value; the ends are kept inside the field's allowed range (a rate inside its row's low–high). Table rows are found by material or cost item id, not by position. Inputs with the same group move together (drawn as one); an empty group moves on its own.",
+      "Uncertain inputs. Each range is stored around the study's own value, taken as the most likely value: as factors on it (× 0.75 to × 1.5) or as amounts added to it (in the field's unit), so it moves with the study and always holds the study's value; the ends are kept inside the field's allowed range (a rate inside its row's low–high). Table rows are found by material or cost item id, not by position. Inputs with the same group move together (drawn as one); an empty group moves on its own.",
     rows,
     keyOf: (i) => i.id,
     columns: columns(store),

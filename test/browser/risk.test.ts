@@ -61,7 +61,7 @@ describe("risk page", () => {
     await page.goto(`${inject("baseUrl")}/risk.html`);
     await page.waitForSelector("#risk-inputs-table tbody tr");
     expect(await page.locator('#risk-inputs-table tr[data-input="snow"] td[id^="risk-range-"]').textContent()).toBe("1.125 – 1.5 – 2.25");
-    expect(await page.locator("#risk-inputs-table caption").textContent()).toMatch(/stored around the study's own value, which is the mode/);
+    expect(await page.locator("#risk-inputs-table caption").textContent()).toMatch(/stored around the study's own value, taken as the most likely value/);
     await context.close();
   });
 
