@@ -133,7 +133,7 @@ reactiveCell(recordCell, { id: "record-table" }, () => {
   });
   const table = tableElement(
     ["", "Group", "Input", "Value", "Unit", "Default", "Source"],
-    shown.map((r) => [r.changed ? "●" : "", r.group, r.label, r.value, fmt.unit(r.unit), r.default, r.source]),
+    shown.map((r) => [r.changed ? "●" : "", r.group, fmt.unit(r.label), r.value, fmt.unit(r.unit), r.default, r.source]),
   );
   table.id = "record-rows";
   const scroll = document.createElement("div");

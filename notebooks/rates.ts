@@ -104,7 +104,7 @@ staticCell(
 const columns: EditorColumn<RateRow>[] = [
   { field: "item", label: "Item", kind: "text", readOnly: true },
   { field: "label", label: "Label", kind: "text", wide: true },
-  { field: "unit", label: "Unit", kind: "text", readOnly: true },
+  { field: "unit", label: "Unit", kind: "text", readOnly: true, show: (r) => fmt.unit(r.unit) },
   { field: "rate", label: "Rate", kind: "number", unit: "per unit" },
   { field: "low", label: "Low", kind: "number", unit: "per unit" },
   { field: "high", label: "High", kind: "number", unit: "per unit" },

@@ -157,7 +157,8 @@ reactiveCell(main, { id: "risk-status-cell" }, () => {
 const schemeLabel = (r: RiskResult, id: SchemeId) => r.schemes.find((s) => s.id === id)?.label ?? id;
 /** True as soon as any input of the study changes after the run. */
 const outOfDate = computed(() => run.value !== null && run.value.study !== store.study.value);
-const money = (x: number) => fmt.int(x);
+/** A result's name with its unit, the cost's in the run's currency (issue 14: a currency on every cost). */
+const metricLabel = (metric: RiskMetric, currency: string) => (metric === "costPerM2Floor" ? `Cost (${currency}/m² usable floor)` : RISK_METRIC_LABELS[metric]);
 const pct = (p: number) => `${Math.round(100 * p)} %`;
 
 /** The result in one sentence: which scheme is cheapest and which lowest in carbon, in how many draws, and the runner-up. */
@@ -166,7 +167,7 @@ function riskVerdict(res: RiskResult): string {
     const ranked = [...res.schemes].sort((a, b) => b[key] - a[key]);
     const [first, second] = ranked;
     if (!first || first[key] === 0) return null;
-    const next = second && second[key] > 0 ? ` (next: ${second.label}, ${pct(second[key])})` : "";
+    const next = second && second[key] > 0 ? ` (next: the ${second.label.toLowerCase()}, ${pct(second[key])})` : "";
     return `the ${first.label.toLowerCase()} is ${what} in ${pct(first[key])} of draws${next}`;
   };
   const parts = [part("pLowestCost", "cheapest"), part("pLowestCarbon", "lowest in carbon")].filter((p): p is string => p !== null);
@@ -201,8 +202,8 @@ resultsCells.push(reactiveCell(main, { id: "risk-results", title: "Results" }, (
   const rows = res.schemes.flatMap((s) =>
     RISK_METRICS.map((metric) => {
       const m = s.metrics[metric];
-      const f = metric === "costPerM2Floor" ? money : fmt.sig3;
-      return [s.label, RISK_METRIC_LABELS[metric], m?.deterministic == null ? "–" : f(m.deterministic), m ? f(m.p10) : "–", m ? f(m.p50) : "–", m ? f(m.p90) : "–", m ? `${f(m.mean)} ± ${fmt.sig3(m.seMean)}` : "–", fmt.pct(s.pFeasible)];
+      const f = fmt.sig3;
+      return [s.label, metricLabel(metric, res.currency), m?.deterministic == null ? "–" : f(m.deterministic), m ? f(m.p10) : "–", m ? f(m.p50) : "–", m ? f(m.p90) : "–", m ? `${f(m.mean)} ± ${fmt.sig3(m.seMean)}` : "–", fmt.pct(s.pFeasible)];
     }),
   );
   const table = tableElement(["scheme", "result", "with the study's values", "1 in 10 below (P10)", "middle (P50)", "9 in 10 below (P90)", "average ± its sampling error", "feasible in"], rows, { caption: "Per scheme: the result with the study's own values beside the likely range over the draws in which the scheme is feasible", numeric: [false, false, true, true, true, true, true, true] });
@@ -227,7 +228,7 @@ resultsCells.push(reactiveCell(main, { id: "risk-ranges", title: "Likely range, 
   if (!r) return null;
   const wrap = document.createElement("div");
   for (const metric of RISK_METRICS) {
-    wrap.append(chartFigure(riskRangeChart(r.result, metric, { title: `${RISK_METRIC_LABELS[metric]}: likely range of ${r.result.samples} draws, the middle and the study's value`, caption: chartCaption(r.study, `risk: ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-range-${metric}`));
+    wrap.append(chartFigure(riskRangeChart(r.result, metric, { title: `${metricLabel(metric, r.result.currency)}: likely range of ${r.result.samples} draws, the middle and the study's value`, caption: chartCaption(r.study, `risk: ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-range-${metric}`));
   }
   return wrap;
 }).element);
@@ -246,7 +247,7 @@ resultsCells.push(reactiveCell(main, { id: "risk-pairwise", title: "Head to head
   for (const metric of ["carbonKgCO2ePerM2Floor", "costPerM2Floor"] as const) {
     const ids = res.schemes.map((s) => s.id);
     const rows = ids.map((a) => [schemeLabel(res, a), ...ids.map((b) => (a === b ? "–" : pct(res.pairwise.find((p) => p.metric === metric && p.a === a && p.b === b)?.pABeatsB ?? Number.NaN)))]);
-    wrap.append(tableElement(["", ...ids.map((id) => schemeLabel(res, id))], rows, { caption: `${RISK_METRIC_LABELS[metric]}: share of draws in which the row's scheme is lower than the column's (draws where both are feasible)` }));
+    wrap.append(tableElement(["", ...ids.map((id) => schemeLabel(res, id))], rows, { caption: `${metricLabel(metric, res.currency)}: share of draws in which the row's scheme is lower than the column's (draws where both are feasible)` }));
   }
   return wrap;
 }).element);
@@ -279,10 +280,10 @@ resultsCells.push(reactiveCell(main, { id: "risk-sensitivity", title: "Which inp
   const caption = (extra: string) => chartCaption(r.study, `${extra}; only the ${only.size} inputs the result of the ${name} depends on are listed`);
   for (const metric of ["carbonKgCO2ePerM2Floor", "costPerM2Floor"] as const) {
     const tornado = r.tornado.find((t) => t.scheme === chosen && t.metric === metric);
-    if (tornado) wrap.append(chartFigure(riskTornadoChart(tornado, r.result.currency, { only, title: `${name}: ${RISK_METRIC_LABELS[metric]} with one input at a time at its least and its most`, caption: caption("the other inputs at the study's values; dashed: the result with the study's values") }), `risk-one-at-a-time-${chosen}-${metric}`));
+    if (tornado) wrap.append(chartFigure(riskTornadoChart(tornado, r.result.currency, { only, title: `${name}: ${metricLabel(metric, r.result.currency)} with one input at a time at its least and its most`, caption: caption("the other inputs at the study's values; dashed: the result with the study's values") }), `risk-one-at-a-time-${chosen}-${metric}`));
   }
   for (const metric of RISK_METRICS as readonly RiskMetric[]) {
-    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { only, title: `${name}: how closely the result follows each input — ${RISK_METRIC_LABELS[metric]} when all vary together`, caption: caption(`rank correlation over ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-follows-${chosen}-${metric}`));
+    wrap.append(chartFigure(riskRankChart(r.result.rankCorrelations, r.study.risk.inputs, chosen, metric, { only, title: `${name}: how closely the result follows each input — ${metricLabel(metric, r.result.currency)} when all vary together`, caption: caption(`rank correlation over ${r.result.samples} draws, seed ${r.result.seed}`) }), `risk-follows-${chosen}-${metric}`));
   }
   return wrap;
 }).element);

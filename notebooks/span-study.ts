@@ -104,7 +104,7 @@ reactiveCell(main, { id: "crossovers", title: "Where the best scheme changes" },
     ["selfWeightKgPerM2", "the lightest"],
   ] as const) {
     const li = document.createElement("li");
-    li.textContent = describeCrossovers(valuesBySpan(ranked, metric), quality, labelOf);
+    li.textContent = describeCrossovers(valuesBySpan(ranked, metric), quality, (id) => `the ${labelOf(id).toLowerCase()}`);
     ul.append(li);
   }
   const note = document.createElement("p");

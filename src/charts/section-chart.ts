@@ -51,8 +51,10 @@ export function sectionParts(brief: Brief, lines: readonly DrawingLine[]) {
     : [{ x1: -env.usableRadiusM, x2: env.usableRadiusM, y1: 0, y2: brief.minClearHeightM }];
   const supportZones = floorLines.filter((l) => l.role === "support zone").map(spanOf);
   const usableLabel = floorLines.length > 0 ? `usable floor (as counted) at ≥ ${brief.minClearHeightM} m clear` : `usable floor ⌀ ${(2 * env.usableRadiusM).toFixed(0)} m at ≥ ${brief.minClearHeightM} m clear`;
-  const top = brief.eavesHeightM + brief.riseM;
-  // the axes' extents: a little beyond the walls, a fifth above the roof top
+  // the top of the drawing: the brief's roof, or a design's members where they rise above it (a
+  // scheme at its own searched rise, masts), so nothing drawn is cut off
+  const top = members.reduce((most, p) => (Number.isFinite(p.y) && p.y > most ? p.y : most), brief.eavesHeightM + brief.riseM);
+  // the axes' extents: a little beyond the walls, a fifth above the top
   const xDomain: [number, number] = [-a * 1.05, a * 1.05];
   const yDomain: [number, number] = [0, top * 1.2];
   return { roof, walls, usableSpans, supportZones, usableLabel, top, members, xDomain, yDomain };

@@ -83,8 +83,9 @@ export function describeCrossovers(rows: readonly SpanValues[], quality: string,
   const changes = crossovers(sorted);
   const name = (id: string | null) => (id === null ? "no scheme" : label(id));
   const start = steadyBest(sorted)[0]?.best ?? null;
-  if (changes.length === 0) return `${name(start)} is ${quality} across the whole range (${first.spanM}–${last.spanM} m).`;
+  const sentence = (text: string) => `${text.charAt(0).toUpperCase()}${text.slice(1)}`;
+  if (changes.length === 0) return sentence(`${name(start)} is ${quality} across the whole range (${first.spanM}–${last.spanM} m).`);
   const parts = [`${name(start)} is ${quality} from ${first.spanM} m`];
   for (const c of changes) parts.push(`${name(c.to)} from ${c.toSpanM} m (the change lies between ${c.fromSpanM} and ${c.toSpanM} m)`);
-  return `${parts.join("; then ")}, up to ${last.spanM} m.`;
+  return sentence(`${parts.join("; then ")}, up to ${last.spanM} m.`);
 }

@@ -216,19 +216,43 @@ type CarbonOfScheme = { id: string; label: string; carbon: CarbonAssessment | nu
 
 const show = (x: unknown) => (typeof x === "string" ? JSON.stringify(x.length > 40 ? `${x.slice(0, 39)}…` : x) : Array.isArray(x) ? `${x.length} item${x.length === 1 ? "" : "s"}` : String(x));
 
+/** A factor row's fields and the settings in the page's words, with their units (audit8: the last edit read "steel-plate a1a3KgCO2ePerKg"). */
+const EDIT_WORDS: Record<string, string> = {
+  label: "label",
+  a1a3KgCO2ePerKg: `A1–A3 (${L.a1a3KgCO2ePerKg.unit})`,
+  densityKgPerM3: `density (${L.densityKgPerM3.unit})`,
+  transportKmRoad: "road leg (km)",
+  transportKmSea: "sea leg (km)",
+  wasteRatePct: "waste rate (%)",
+  endOfLifeKgCO2ePerKg: `C1–C4 (${L.endOfLifeKgCO2ePerKg.unit})`,
+  moduleDKgCO2ePerKg: `module D (${L.moduleDKgCO2ePerKg.unit})`,
+  biogenicKgCO2ePerKg: `biogenic stored (${L.biogenicKgCO2ePerKg.unit})`,
+  source: "source",
+  notes: "notes",
+  countA4: "count A4 (transport to site)",
+  countA5: "count A5 (site wastage)",
+  countC: "count C1–C4 (end of life)",
+  areaBasis: "per-m² basis of the results",
+  quantityAllowancePct: "quantity allowance (%)",
+  transportModes: "transport modes",
+  factorSetName: "factor set name",
+  benchmarks: "benchmark bands",
+};
+const words = (field: string) => EDIT_WORDS[field] ?? field;
+
 /** The last edit of the carbon tables in words: which rows and fields changed, old → new (at most three, then a count). */
 export function describeCarbonEdit(before: Study["carbon"], after: Study["carbon"]): string {
   const lines: string[] = [];
   const old = new Map(before.factors.map((r) => [r.material, r]));
   for (const row of after.factors) {
     const was = old.get(row.material);
-    if (!was) lines.push(`${row.material} added`);
-    else for (const [field, value] of Object.entries(row)) if (!Object.is(value, (was as Record<string, unknown>)[field])) lines.push(`${row.material} ${field} ${show((was as Record<string, unknown>)[field])} → ${show(value)}`);
+    if (!was) lines.push(`${row.label} added`);
+    else for (const [field, value] of Object.entries(row)) if (!Object.is(value, (was as Record<string, unknown>)[field])) lines.push(`${was.label}: ${words(field)} ${show((was as Record<string, unknown>)[field])} → ${show(value)}`);
   }
-  for (const key of old.keys()) if (!after.factors.some((r) => r.material === key)) lines.push(`${key} removed`);
+  for (const [key, row] of old) if (!after.factors.some((r) => r.material === key)) lines.push(`${row.label} removed`);
   for (const [field, value] of Object.entries(after.settings)) {
     const was = (before.settings as Record<string, unknown>)[field];
-    if (JSON.stringify(was) !== JSON.stringify(value)) lines.push(`setting ${field} ${show(was)} → ${show(value)}`);
+    if (JSON.stringify(was) !== JSON.stringify(value)) lines.push(`${words(field)} ${show(was)} → ${show(value)}`);
   }
   if (lines.length === 0) return "no change";
   return lines.length > 3 ? `${lines.slice(0, 3).join("; ")}; and ${lines.length - 3} more` : lines.join("; ");

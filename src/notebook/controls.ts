@@ -73,11 +73,18 @@ export interface NumberControlOptions {
   id?: string;
 }
 
+/** For text such as "12,5": that it is not a number and the point to write instead; else null. */
+export function decimalCommaProblem(raw: string): string | null {
+  return /^\s*-?\d+,\d+\s*$/.test(raw) ? `"${raw}" is not a number: write the decimal with a point (${raw.trim().replace(",", ".")})` : null;
+}
+
 /** Why a typed number is not allowed, or null. */
 function numberProblem(raw: string, o: NumberControlOptions): string | null {
   if (raw.trim() === "") return `${o.label}: a value is required`;
   const x = Number(raw);
-  if (!Number.isFinite(x)) return `${o.label}: "${raw}" is not a number`;
+  const comma = decimalCommaProblem(raw);
+  if (comma !== null) return `${o.label}: ${comma}`;
+  if (!Number.isFinite(x)) return `${o.label}: "${raw}" is not a number (allowed ${o.min} to ${o.max}${o.unit && o.unit !== "–" ? ` ${o.unit}` : ""})`;
   if (x < o.min || x > o.max) return `${o.label}: ${x} ${o.unit} is out of range (allowed ${o.min} to ${o.max} ${o.unit})`;
   if (o.integer && !Number.isInteger(x)) return `${o.label}: ${x} is not a whole number`;
   return null;
@@ -119,7 +126,9 @@ export function NumberControl(props: NumberControlOptions & { binding: Binding<n
   return h("div", { className: "control control-number", ref: wrap }, [
     h("label", { htmlFor: id }, o.label),
     h("div", { className: "control-row" }, [
-      h("input", { type: "number", id, ...range, inputMode: "decimal", "aria-describedby": `${id}-message` }),
+      // text, not number: Chromium reads a typed "12,5" as 125 and drops a stray letter, so the
+      // field's own check never saw what was typed (audit8); inputMode still brings the number pad
+      h("input", { type: "text", id, inputMode: "decimal", autocomplete: "off", spellcheck: false, "aria-describedby": `${id}-message` }),
       h("span", { className: "unit" }, o.unit),
       o.slider ? h("input", { type: "range", ...range, "aria-label": `${o.label} (slider)` }) : null,
     ]),

@@ -1,4 +1,5 @@
 import { format } from "d3";
+import { readableUnit } from "../kernel/units";
 
 // One formatting module for every page (issue 14, "words a project lead uses"): three significant
 // figures, a currency on every cost, forces in kN or MN, m² and m³ rather than m2 and m3, and
@@ -33,9 +34,7 @@ function mass(kg: number): string {
 }
 
 /** Units as a reader writes them: m2 → m², m3 → m³, kgCO2e → kgCO₂e is left as is (a common spelling). */
-function unit(text: string): string {
-  return text.replace(/\bm2\b/g, "m²").replace(/\bm3\b/g, "m³");
-}
+const unit = readableUnit;
 
 /** A value with its unit, ready for a table: forces (N) in kN or MN, areas in m². */
 function quantity(value: number, unitText: string): string {

@@ -8,8 +8,10 @@ import { h } from "preact";
 import { computed, signal, effect, type ReadonlySignal, type Signal } from "@preact/signals-core";
 import type { StudyStore } from "./study-store";
 import { setIn } from "../study";
-import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, type UncertainInput } from "../risk";
+import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, SCALE_RULES, SHAPE_WORDS, type UncertainInput } from "../risk";
 import { mountEditableTable, type EditOutcome, type TableColumn } from "./editable-table";
+import { decimalCommaProblem } from "./controls";
+import { fmt } from "./format";
 
 const STYLE_ID = "risk-editor-style";
 const CSS = `
@@ -55,12 +57,7 @@ export function inputKind(input: UncertainInput): InputKind {
   return "Other";
 }
 
-/** How likely values between the ends are, in words (the sampling shapes keep their ids in the study). */
-export const SHAPE_WORDS: Readonly<Record<(typeof DISTRIBUTION_KINDS)[number], string>> = {
-  pert: "peak at study value, smooth",
-  triangular: "peak at study value, straight",
-  uniform: "flat: all equally likely",
-};
+export { SHAPE_WORDS };
 
 const show = (x: number) => String(Number(x.toPrecision(4)));
 
@@ -83,6 +80,25 @@ function changeScale(store: StudyStore, index: number, stored: UncertainInput, s
   return applyInput(store, index, { ...stored, scale: factor ? "factor" : "offset", low: Math.min(...ends), high: Math.max(...ends) }, scale);
 }
 
+/**
+ * Why a typed least or most is not allowed, in the table's own words (the row's name, "least" and
+ * "most", "× study value" and "+ study value"), or null; the file's words (low, high, factor,
+ * offset) stay in the study file's checks.
+ */
+function endProblem(stored: UncertainInput, field: "low" | "high", text: string, x: number): string | null {
+  const name = `${stored.label}, ${field === "low" ? "least" : "most"}`;
+  const rule = SCALE_RULES[stored.scale];
+  const factor = stored.scale === "factor";
+  const allowed =
+    field === "low" ? (factor ? `from ${rule.lowMin} to ${rule.lowMax} (× study value)` : `0 or less (+ study value)`) : `${rule.highMin} or more (${factor ? "×" : "+"} study value)`;
+  if (text.trim() === "") return `${name}: a value is required (allowed ${allowed})`;
+  const comma = decimalCommaProblem(text);
+  if (comma !== null) return `${name}: ${comma}`;
+  if (!Number.isFinite(x)) return `${name}: "${text}" is not a number (allowed ${allowed})`;
+  const inside = field === "low" ? x >= rule.lowMin && x <= rule.lowMax : x >= rule.highMin;
+  return inside ? null : `${name}: ${x} is not allowed (allowed ${allowed})`;
+}
+
 function editInput(store: StudyStore, id: string, field: string, text: string): EditOutcome {
   const inputs = store.study.value.risk.inputs;
   const index = inputs.findIndex((i) => i.id === id);
@@ -91,7 +107,8 @@ function editInput(store: StudyStore, id: string, field: string, text: string): 
   if (field === "scale") return changeScale(store, index, stored, text);
   if (field === "low" || field === "high") {
     const x = Number(text);
-    if (text.trim() === "" || !Number.isFinite(x)) return { ok: false, message: `input "${id}": ${field} "${text}" is not a number` };
+    const problem = endProblem(stored, field, text, x);
+    if (problem !== null) return { ok: false, message: problem };
     return applyInput(store, index, { ...stored, [field]: x }, x);
   }
   if (field === "group") {
@@ -104,7 +121,7 @@ function editInput(store: StudyStore, id: string, field: string, text: string): 
 function columns(store: StudyStore): TableColumn<UncertainInput>[] {
   const number = (x: unknown) => (typeof x === "number" ? String(Number(x.toPrecision(6))) : "");
   return [
-    { field: "label", label: "input", kind: "computed", content: (i) => [i.label, h("div", { class: "kind" }, inputKind(i)), h("div", { class: "path" }, formatPath(i.path))] },
+    { field: "label", label: "input", kind: "computed", content: (i) => [fmt.unit(i.label), h("div", { class: "kind" }, inputKind(i)), h("div", { class: "path" }, formatPath(i.path))] },
     { field: "scale", label: "ends given as", kind: "select", choices: RANGE_SCALES.map((k) => ({ value: k, label: k === "factor" ? "× study value" : "+ study value" })) },
     { field: "low", label: "least", kind: "number", commit: "change", show: (i) => number(i.low), hint: "The lowest plausible value, on the scale at the left" },
     { field: "high", label: "most", kind: "number", commit: "change", show: (i) => number(i.high), hint: "The highest plausible value, on the scale at the left" },
@@ -190,7 +207,7 @@ export function riskInputsEditor(store: StudyStore, pending: PendingEntries = si
   mountEditableTable<UncertainInput>(holder, {
     tableId: "risk-inputs-table",
     caption:
-      "Uncertain inputs. Each range is stored around the study's own value, which is the mode (the most likely value): as factors on it (× 0.75 to × 1.5) or as amounts added to it (in the field's unit), so it moves with the study and always holds the study's value; the ends are kept inside the field's allowed range (a rate inside its row's low–high). Table rows are found by material or cost item id, not by position. Inputs with the same group move together (drawn as one); an empty group moves on its own.",
+      "Uncertain inputs. Each range is stored around the study's own value, taken as the most likely value: as factors on it (× 0.75 to × 1.5) or as amounts added to it (in the field's unit), so it moves with the study and always holds the study's value; the ends are kept inside the field's allowed range (a rate inside its row's low–high). Table rows are found by material or cost item id, not by position. Inputs with the same group move together (drawn as one); an empty group moves on its own.",
     rows,
     keyOf: (i) => i.id,
     columns: columns(store),

@@ -6,6 +6,7 @@ import { FACTOR_LIMITS } from "../carbon";
 import { MAX_RATE } from "../cost";
 import { RISK_LIMITS, type RiskSettings, type UncertainInput, type PathStep } from "./risk-settings";
 import { tidy } from "./resolve-inputs";
+import { readableUnit } from "../kernel/units";
 
 /** A default range as multiples of the study's value, with where it comes from. */
 type Spread = { low: number; high: number; source: string };
@@ -130,7 +131,7 @@ export function defaultRiskSettings(study: StudyInputs): RiskSettings {
     // The row's own low–high, as factors on the rate (offsets for a zero rate); a run keeps the ends inside the row's range.
     const high = Math.min(row.high, MAX_RATE);
     const range = row.rate > 0 ? { scale: "factor" as const, low: tidy(row.low / row.rate), high: tidy(high / row.rate) } : { scale: "offset" as const, low: row.low - row.rate, high: high - row.rate };
-    inputs.push({ id: `rate-${row.item}`, label: `Rate: ${row.label} (${currency}/${row.unit})`, path: ["cost", "rates", { item: row.item }, "rate"], ...range, distribution: "pert", group });
+    inputs.push({ id: `rate-${row.item}`, label: `Rate: ${row.label} (${currency}/${readableUnit(row.unit)})`, path: ["cost", "rates", { item: row.item }, "rate"], ...range, distribution: "pert", group });
   });
   const oc = study.cost.onCosts;
   const onCost = (field: "preliminariesPct" | "overheadsProfitPct" | "designFeesPct" | "riskPct", label: string, max: number) =>

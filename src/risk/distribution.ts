@@ -2,6 +2,13 @@
 export type DistributionKind = "pert" | "triangular" | "uniform";
 export const DISTRIBUTION_KINDS = ["pert", "triangular", "uniform"] as const;
 
+/** How likely values between the ends are, in words (the sampling shapes keep their ids in the study). */
+export const SHAPE_WORDS: Readonly<Record<(typeof DISTRIBUTION_KINDS)[number], string>> = {
+  pert: "peak at study value, smooth",
+  triangular: "peak at study value, straight",
+  uniform: "flat: all equally likely",
+};
+
 /**
  * A continuous distribution on [low, high] with its most likely value, exact moments and exact
  * quantile (inverse CDF). Sampling is by inverse transform: quantile(u) with u uniform on [0, 1).

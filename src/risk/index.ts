@@ -2,7 +2,7 @@
 
 // Random numbers and distributions
 export { createPrng, xoshiro128ssFromState, splitMix64, type Prng } from "./prng";
-export { type Distribution, type DistributionKind, DISTRIBUTION_KINDS, checkRange } from "./distribution";
+export { type Distribution, type DistributionKind, DISTRIBUTION_KINDS, SHAPE_WORDS, checkRange } from "./distribution";
 export { uniformDistribution } from "./uniform-distribution";
 export { triangularDistribution } from "./triangular-distribution";
 export { pertDistribution, pertShapes } from "./pert-distribution";

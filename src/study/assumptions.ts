@@ -5,6 +5,7 @@ import { BRIEF_FIELDS } from "../brief";
 import { getIn } from "../kernel/patch";
 import { studyToJson } from "./load-study";
 import { defaultRiskSettings } from "../risk/default-risk-settings";
+import { SHAPE_WORDS } from "../risk/distribution";
 
 /** One input of a study, as the assumptions record lists it. */
 export interface Assumption {
@@ -59,7 +60,7 @@ function dotted(path: readonly (string | number)[]): string {
   return path.map((p, i) => (typeof p === "number" ? `[${p}]` : i === 0 ? p : `.${p}`)).join("");
 }
 
-function row(group: string, path: (string | number)[], info: FieldInfo, study: Study, defaults: Study, defaultPath = path, key = dotted(path)): Assumption {
+function row(group: string, path: (string | number)[], info: FieldInfo, study: Study, defaults: Study, defaultPath = path, key = dotted(path), shown: (value: unknown) => string = show): Assumption {
   const value = getIn(study, path);
   const dflt = getIn(defaults, defaultPath);
   return {
@@ -68,11 +69,24 @@ function row(group: string, path: (string | number)[], info: FieldInfo, study: S
     group,
     path: dotted(path),
     label: info.label,
-    value: show(value),
+    value: shown(value),
     unit: info.unit,
-    default: show(dflt),
+    default: shown(dflt),
     source: info.source,
     changed: dflt === undefined ? true : show(value) !== show(dflt),
+  };
+}
+
+/** A risk range's parts in the risk page's words, not the file's keys (issue 14: our own vocabulary; audit8). */
+const RISK_PART_WORDS = { scale: "ends given as", low: "least", high: "most", distribution: "how likely in between", group: "moves with (group)" } as const;
+
+function riskPartValue(key: keyof typeof RISK_PART_WORDS): (value: unknown) => string {
+  return (value) => {
+    if (value === undefined) return "";
+    if (key === "scale") return value === "factor" ? "× study value" : "+ study value";
+    if (key === "distribution") return SHAPE_WORDS[value as keyof typeof SHAPE_WORDS] ?? String(value);
+    if (key === "group") return value === null ? "none (moves on its own)" : String(value);
+    return show(value);
   };
 }
 
@@ -122,13 +136,12 @@ export function assumptionsRecord(study: Study, defaults: Study = defaultStudy()
   out.push(row("risk", ["risk", "samples"], { label: "Monte Carlo samples", unit: "", source: "study" }, study, riskDefaults));
   risk.inputs.forEach((input, index) => {
     const d = riskDefaults.risk.inputs.findIndex((i) => i.id === input.id);
-    // Ranges are stored around the study's value (the mode): factors on it, or offsets added to it.
-    const around = input.scale === "factor" ? "× the study's value, which is the mode" : "added to the study's value, which is the mode";
+    // Ranges are stored around the study's value (the most likely): factors on it, or amounts added to it.
+    const around = input.scale === "factor" ? "× the study's value, the most likely" : "added to the study's value, the most likely";
     for (const key of ["scale", "low", "high", "distribution", "group"] as const) {
-      const label = key === "low" || key === "high" ? `${input.label}: ${key} (${around})` : `${input.label}: ${key}`;
-      out.push(
-        row("risk", ["risk", "inputs", index, key], { label, unit: "", source: "risk range (common practice, no source)" }, study, riskDefaults, ["risk", "inputs", d < 0 ? -1 : d, key], `risk.inputs[${input.id}].${key}`),
-      );
+      const label = key === "low" || key === "high" ? `${input.label}: ${RISK_PART_WORDS[key]} (${around})` : `${input.label}: ${RISK_PART_WORDS[key]}`;
+      const info = { label, unit: "", source: "risk range (common practice, no source)" };
+      out.push(row("risk", ["risk", "inputs", index, key], info, study, riskDefaults, ["risk", "inputs", d < 0 ? -1 : d, key], `risk.inputs[${input.id}].${key}`, riskPartValue(key)));
     }
   });
   return out;

@@ -37,7 +37,7 @@ describe("carbon page for the consultant", () => {
     expect(await page.inputValue("#factors-steel-plate-wasteRatePct")).toBe("3");
     expect(await page.inputValue("#factors-steel-plate-label")).toBe("Steel plate (rings and nodes)");
     expect(await page.locator("#factors-table tbody tr").count()).toBe(16);
-    await expect.poll(() => page.locator("#last-edit-what").textContent()).toMatch(/steel-plate a1a3KgCO2ePerKg 2\.46 → 2\.1/);
+    await expect.poll(() => page.locator("#last-edit-what").textContent()).toMatch(/^Last edit: Steel plate \(rings and nodes\): A1–A3 \(kgCO2e\/kg\) 2\.46 → 2\.1; Steel plate \(rings and nodes\): waste rate \(%\) 5 → 3;/);
     expect(await page.locator("#last-edit-table tbody tr").count()).toBeGreaterThan(1);
     expect(errors).toEqual([]);
     await page.close();

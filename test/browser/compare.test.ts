@@ -57,6 +57,23 @@ describe("compare page", () => {
     await page.close();
   });
 
+  it("a decimal comma or a stray letter typed into the span is refused naming the field, never read as another number (audit8: '12,5' became 125 m)", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-geometry dd");
+    const before = await page.locator("#cell-geometry").innerText();
+    for (const [typed, said] of [["12,5", /Clear span \(plan diameter\): "12,5" is not a number: write the decimal with a point \(12\.5\)/], ["16o", /Clear span \(plan diameter\): "16o" is not a number \(allowed 30 to 500 m\)/]] as const) {
+      await page.locator("#spanM").fill("");
+      await page.locator("#spanM").pressSequentially(typed);
+      await expect.poll(() => page.locator("#spanM-message").textContent()).toMatch(said);
+      expect(await page.locator("#spanM-message").textContent()).toMatch(/not applied; in force: 160 m/);
+      await page.locator("#spanM").press("Enter");
+      expect(await page.inputValue("#spanM")).toBe("160");
+    }
+    expect(await page.locator("#cell-geometry").innerText()).toBe(before);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("a rise above half the span is refused at the field and no cell fails (issue 10: it used to fail every result cell)", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
     await page.waitForSelector("#cell-geometry dd");

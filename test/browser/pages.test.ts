@@ -29,6 +29,22 @@ describe("every page", () => {
   }
 });
 
+describe("units as a reader writes them", () => {
+  // audit8: the rates table's unit column, the risk inputs "Rate: … (EUR/m2)" and the method record showed m2
+  for (const [file, ready] of [["rates.html", "#cell-rates tbody tr"], ["risk.html", "#risk-inputs-table tbody tr"], ["method.html", "#cell-record tbody tr"]] as const) {
+    it(`${file} writes m² and m³, never m2 or m3`, async () => {
+      const { page: p, errors } = await openPage(browser, `${inject("baseUrl")}/${file}`);
+      await p.waitForSelector(ready);
+      await expect.poll(() => p.locator("[aria-busy=true]").count()).toBe(0);
+      const text = await p.locator("main").innerText();
+      expect(text).toMatch(/m²/);
+      expect(text.match(/.{0,40}\bm[23]\b.{0,20}/g) ?? []).toEqual([]);
+      expect(errors).toEqual([]);
+      await p.close();
+    });
+  }
+});
+
 describe("every page on a phone (390 × 844)", () => {
   for (const page of [{ file: "index.html", id: "index" }, ...PAGES]) {
     it(`${page.file} does not scroll sideways: wide tables and figures scroll inside their cell`, async () => {

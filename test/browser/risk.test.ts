@@ -35,7 +35,13 @@ describe("risk page", () => {
     const before = await page.inputValue("#risk-low-0");
     await page.fill("#risk-low-0", "999");
     await page.press("#risk-low-0", "Enter");
-    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toMatch(/input "snow": low 999 is outside its factor range/);
+    // In the table's own words: the row's name and "least", not the file's id and "low" (audit8)
+    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe("Ground snow load s_k (kPa), least: 999 is not allowed (allowed from 0 to 1 (× study value))");
+    for (const [typed, said] of [["12,5", 'Ground snow load s_k (kPa), least: "12,5" is not a number: write the decimal with a point (12.5)'], ["", "Ground snow load s_k (kPa), least: a value is required (allowed from 0 to 1 (× study value))"]] as const) {
+      await page.fill("#risk-low-0", typed);
+      await page.press("#risk-low-0", "Enter");
+      await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe(said);
+    }
     await page.reload();
     await page.waitForSelector("#risk-inputs-table tbody tr");
     expect(await page.inputValue("#risk-low-0")).toBe(before);
@@ -55,7 +61,7 @@ describe("risk page", () => {
     await page.goto(`${inject("baseUrl")}/risk.html`);
     await page.waitForSelector("#risk-inputs-table tbody tr");
     expect(await page.locator('#risk-inputs-table tr[data-input="snow"] td[id^="risk-range-"]').textContent()).toBe("1.125 – 1.5 – 2.25");
-    expect(await page.locator("#risk-inputs-table caption").textContent()).toMatch(/stored around the study's own value, which is the mode/);
+    expect(await page.locator("#risk-inputs-table caption").textContent()).toMatch(/stored around the study's own value, taken as the most likely value/);
     await context.close();
   });
 
@@ -81,7 +87,7 @@ describe("risk page in our own words (issue 14)", () => {
     const before = await page.inputValue("#risk-low-0");
     await page.fill("#risk-low-0", "999");
     await page.press("#risk-low-0", "Enter");
-    await expect.poll(() => page.locator("#risk-blocked").textContent()).toMatch(/^Run is refused until this input is valid: input "snow": low 999 is outside its factor range/);
+    await expect.poll(() => page.locator("#risk-blocked").textContent()).toMatch(/^Run is refused until this input is valid: Ground snow load s_k \(kPa\), least: 999 is not allowed/);
     expect(await page.locator("#risk-run").isDisabled()).toBe(true);
     await page.fill("#risk-low-0", before);
     await page.press("#risk-low-0", "Enter");
@@ -104,6 +110,17 @@ describe("risk page in our own words (issue 14)", () => {
     const best = rows.map((r) => ({ label: r[0] ?? "", p: Number((r[2] ?? "").split(" %")[0]) })).sort((a, b) => b.p - a.p)[0];
     expect(verdict.toLowerCase()).toContain(`the ${best?.label.toLowerCase()} is cheapest in ${best?.p} % of draws`);
     expect(await page.locator("#risk-stale").isHidden()).toBe(true);
+    // audit8: the cost rows read "Cost (per m² usable floor)" with no currency, at four figures (1,269)
+    const perScheme = await page.locator("#cell-risk-results table").first().locator("tbody tr").evaluateAll((trs) => trs.map((tr) => [...tr.children].map((c) => c.textContent ?? "")));
+    const costRows = perScheme.filter((r) => (r[1] ?? "").startsWith("Cost"));
+    expect(costRows.length).toBeGreaterThan(0);
+    for (const r of costRows) {
+      expect(r[1]).toBe("Cost (EUR/m² usable floor)");
+      for (const cell of r.slice(2, 6)) {
+        const x = Number(cell.replace(/,/g, ""));
+        expect(Number(x.toPrecision(3)), `${r[0]}: ${cell}`).toBe(x);
+      }
+    }
     // The chosen scheme's charts list none of another scheme's options.
     const scheme = await page.inputValue("#risk-scheme");
     const others = await page.locator("#risk-inputs-table tbody tr").evaluateAll((trs, id) => trs.filter((tr) => { const path = tr.querySelector(".path")?.textContent ?? ""; return path.startsWith("schemes.") && !path.startsWith(`schemes.${id}.`); }).map((tr) => tr.querySelector("th")?.firstChild?.textContent ?? ""), scheme);

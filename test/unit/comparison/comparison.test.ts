@@ -26,6 +26,12 @@ describe("crossovers", () => {
       { fromSpanM: 50, toSpanM: 60, from: "b", to: "a" },
     ]);
   });
+  it("starts the sentence with a capital when the name is written in running text (audit8: 'then Mast-supported cable net')", () => {
+    expect(describeCrossovers(rows, "the lightest", (id) => `the ${id} roof`)).toBe(
+      "The a roof is the lightest from 40 m; then the b roof from 50 m (the change lies between 40 and 50 m); then the a roof from 60 m (the change lies between 50 and 60 m), up to 60 m.",
+    );
+    expect(describeCrossovers(rows.slice(0, 1), "the lightest", (id) => `the ${id} roof`)).toBe("The a roof is the lightest across the whole range (40–40 m).");
+  });
   it("says it in words", () => {
     expect(describeCrossovers(rows, "the lightest", (id) => id.toUpperCase())).toBe(
       "A is the lightest from 40 m; then B from 50 m (the change lies between 40 and 50 m); then A from 60 m (the change lies between 50 and 60 m), up to 60 m.",

@@ -81,8 +81,12 @@ describe("risk ranges follow the study", () => {
 
   it("the assumptions record says the range is around the study's value", () => {
     const rows = assumptionsRecord(demo()).filter((r) => r.key.startsWith("risk.inputs[snow]"));
-    expect(rows.map((r) => r.label).join("\n")).toMatch(/low \(× the study's value, which is the mode\)/);
-    expect(rows.find((r) => r.key === "risk.inputs[snow].scale")?.value).toBe("factor");
+    expect(rows.map((r) => r.label).join("\n")).toMatch(/least \(× the study's value, the most likely\)/);
+    // in the risk page's words, not the file's keys or the add-in vocabulary (audit8: "low", "mode", "pert", "null")
+    expect(rows.find((r) => r.key === "risk.inputs[snow].scale")?.value).toBe("× study value");
+    expect(rows.find((r) => r.key === "risk.inputs[snow].distribution")?.value).toBe("peak at study value, smooth");
+    expect(rows.find((r) => r.key === "risk.inputs[snow].group")?.value).toBe("none (moves on its own)");
+    expect(rows.map((r) => `${r.label} ${r.value}`).join("\n")).not.toMatch(/\b(low|high|mode|pert|null)\b/);
   });
 });
 
