@@ -7,6 +7,7 @@ import type { Study } from "../study";
 import { statusOf, metricValue } from "../comparison/verdict";
 import { sectionChartOptions, SCHEME_COLOURS } from "../charts";
 import { fmt } from "./format";
+import { SCHEME_DECLARATIONS } from "../schemes/declarations";
 
 /** The glossary line every summary carries. */
 export function glossary(study: Study): string {
@@ -34,19 +35,15 @@ function figures(result: SchemeResult): [string, string][] {
   return out;
 }
 
-/** A caution cut to its first clause (about one line), for a reader who is not an engineer. */
-function shortCaution(text: string): string {
-  const first = text.split(/(?<=[.;])\s|\s\(/)[0] ?? text;
-  const cut = first.length > 110 ? `${first.slice(0, 107).replace(/\s+\S*$/, "")}…` : first;
-  return `${cut.charAt(0).toUpperCase()}${cut.slice(1)}`.replace(/[.;:,]*$/, ".").replace(/….$/, "…");
-}
-
-/** The option's cautions in plain words: the scheme's own warnings, cleaned and shortened, at most two, and a note when more exist. */
+/**
+ * The option's cautions in plain words: what its scheme declares a client should know of that kind
+ * of roof (the design's own warnings are the engineers' notes, in method words: a first clause of
+ * them read "Axisymmetric first-order closed form: …"), and where the design has notes, that they
+ * are in the appendix.
+ */
 function cautions(result: SchemeResult): string[] {
-  const plain = [...new Set(result.design.warnings.map(fmt.plain))];
-  const shown = plain.slice(0, 2).map(shortCaution);
-  if (plain.length > 2) shown.push("More points for the engineers are in the appendix.");
-  return shown;
+  const declared = SCHEME_DECLARATIONS.find((d) => d.id === result.id)?.clientNotes ?? [];
+  return [...declared, ...(result.design.warnings.length > 0 ? ["The engineers' notes on this option are in the appendix."] : [])];
 }
 
 /** A small section drawing of the option: its members over the roof line, no axes. */

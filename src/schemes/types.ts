@@ -206,6 +206,12 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
   colour: string;
   /** One plain paragraph on the structural system. */
   description: string;
+  /**
+   * What a client should know of this kind of roof, in words a non-engineer reads (issue 14: the
+   * client page's cautions in plain words, not the engineers' notes): at most two short sentences,
+   * no codes, symbols or method names. The design's own warnings stay in the appendix.
+   */
+  clientNotes: readonly [string] | readonly [string, string];
   /** Span range in which the method is valid, m. */
   validSpanM: { min: number; max: number };
   /** The rise ÷ span the scheme may take when each scheme chooses its own rise. */

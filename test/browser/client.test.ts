@@ -179,6 +179,21 @@ async function expectWholeTableOnPaper(page: Page, table: string, text: string):
   for (const model of SCHEMES) for (const word of model.label.split(/[\s-]+/)) expect(text).toContain(word);
 }
 
+describe("the client's cautions are in plain words (issue 14)", () => {
+  it("each option's cautions are what its scheme declares a client should know, with no method words, and point to the engineers' notes", async () => {
+    const context = await browser.newContext();
+    const client = await openClient(context);
+    await client.waitForSelector(".option-card");
+    for (const model of SCHEMES) {
+      const items = await client.locator(`.option-card[data-id="${model.id}"] ul.cautions li`).allInnerTexts();
+      expect(items.slice(0, model.clientNotes.length)).toEqual([...model.clientNotes]);
+      for (const text of items) expect(text, `${model.id}: ${text}`).not.toMatch(/closed form|axisymmetric|first-order|EN \d|§|kN|kPa|utilisation|γ|combination|equivalent/i);
+    }
+    expect(await client.locator(".option-card ul.cautions li", { hasText: "engineers' notes on this option are in the appendix" }).count()).toBeGreaterThan(0);
+    await context.close();
+  });
+});
+
 describe("the client file fits A4 (issue 10, item 12)", () => {
   it("the client page prints every heading and every scheme row on a few A4 pages, the table on the first", async () => {
     const context = await browser.newContext();

@@ -53,6 +53,10 @@ export const cableDomeDeclaration = declareScheme({
   refinedInFull: [{ key: "riseM", samples: [0.08, 0.1, 0.12], reference: 0.08 }, { key: "postHeightRatio", samples: [0.2, 0.3, 0.4, 0.5, 0.6], reference: 0.2 }],
   label: "Cable dome",
   colour: "#0072B2",
+  clientNotes: [
+    "A light roof of cables, posts and fabric, held taut against a heavy ring at its edge: it needs a specialist designer and builder from the start.",
+    "Uneven snow and wind on one side are allowed for in a simplified, cautious way at this stage; a full analysis may change the cable sizes.",
+  ],
   description:
     "Radial cable trusses span from a perimeter compression ring to a central tension ring: ridge cables over the top, vertical posts standing on hoops, and diagonals from the foot of each post to the head of the next. Prestress in the cables holds the posts up; coated fabric spans between the ridges. The roof is very light; the compression ring carries the whole horizontal thrust.",
   validSpanM: { min: 40, max: 250 },

@@ -43,6 +43,10 @@ export const cableNetDeclaration = declareScheme({
   id: "cable-net",
   label: "Mast-supported cable net",
   colour: "#009E73",
+  clientNotes: [
+    "The fabric hangs from masts that stand inside the hall, so the floor around each mast cannot be used.",
+    "Its roof weight leaves out the large concrete blocks that anchor the cables in the ground; their carbon and cost are in the totals.",
+  ],
   description:
     "Masts on a ring inside the plan carry radial cables that hang the fabric: half run out to anchors at the edge, half in to a central tension ring. Circumferential cables between the radial cables carry the fabric panels. A second family of valley cables, prestressed against the radial ones, holds the roof down in wind uplift. Backstays take the difference of pull at each mast head down to ground anchors.",
   validSpanM: { min: 60, max: 400 },

@@ -52,6 +52,10 @@ export const concreteShellDeclaration = declareScheme({
   id: "concrete-shell",
   label: "Thin concrete shell",
   colour: "#7f7f7f",
+  clientNotes: [
+    "A thin concrete dome: durable and needing little upkeep, but heavy, and cast on large temporary supports.",
+    "Most of its carbon is in the concrete; a ribbed shell saves material at the larger spans.",
+  ],
   description:
     "A thin reinforced concrete spherical cap on an edge ring, cast on falsework, smooth or stiffened by a three-way grid of ribs. The shell carries the roof by membrane compression; a smooth shell's thickness is set by buckling, allowing for creep, or by the smallest thickness that can be built; a ribbed shell keeps a thin panel between ribs whose depth gives the general-buckling resistance; the ring ties the outward thrust.",
   // 20 m to the ribbed form's credible span (the smooth form is infeasible beyond 200 m)

@@ -34,6 +34,10 @@ export const geodesicDomeDeclaration = declareScheme({
   id: "geodesic-dome",
   label: "Geodesic steel dome",
   colour: "#E69F00",
+  clientNotes: [
+    "A steel lattice of short straight bars, familiar to build, but heavier in steel than the cable roofs.",
+    "Its stability under uneven snow is estimated by a simplified rule at this stage; a full analysis follows in design.",
+  ],
   description:
     "A single- or double-layer lattice of steel tubes on a geodesic (icosahedral) net, cut to a spherical cap on a steel tension ring. The dome carries the roof as a shell in compression; the bars are sized for their membrane forces and the whole lattice for general buckling.",
   validSpanM: { min: 40, max: 250 },

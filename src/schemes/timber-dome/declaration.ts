@@ -48,6 +48,10 @@ export const timberDomeDeclaration = declareScheme({
   id: "timber-dome",
   label: "Glulam timber dome",
   colour: "#D55E00",
+  clientNotes: [
+    "A lattice of glued-laminated timber: less carbon in its materials than steel or concrete.",
+    "The carbon stored in the wood is reported apart and not subtracted; the timber must be kept dry and its joints are the main design task.",
+  ],
   description:
     "A single-layer lattice of glued-laminated timber members on a three-way geodesic grid, with purlins, a board deck and a roofing membrane, cut to a spherical cap on a steel tension ring. The triangulated grid is chosen over ribs and rings because it carries unbalanced load by in-plane action with straight members of nearly one length, as in the two largest built timber domes (161.5 m and 163.4 m spans). Members are designed to EN 1995-1-1 for axial force with the bending of the panel load, the lattice for general buckling with creep-reduced stiffness; fire resistance adds charring to each member.",
   // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (completed 1983) and 163.4 m (completed 1991), published figures.

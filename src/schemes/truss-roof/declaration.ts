@@ -34,6 +34,10 @@ export const trussRoofDeclaration = declareScheme({
   id: "truss-roof",
   label: "Steel truss roof",
   colour: "#CC79A7",
+  clientNotes: [
+    "A flat roof on long steel trusses: simple to build, but deep and heavy at long spans.",
+    "A flat roof must drain: it needs a fall to its gutters so that rainwater cannot pond.",
+  ],
   description:
     "A flat roof of parallel steel trusses at a regular spacing, each spanning its own chord of the circular plan onto perimeter columns, with cold-formed purlins, roof bracing and a metal deck. The trusses carry the roof in bending; their depth sets their weight and their stiffness.",
   validSpanM: { min: 20, max: 200 },

@@ -7,7 +7,7 @@ import type { Design, OptionSpec, SchemeModel, SchemeOptions } from "../../../sr
 // The search on made-up objective functions whose minimum is known (no scheme involved).
 const spec = (key: string, min: number, max: number, step: number, integer = false): OptionSpec => ({ key, label: key, kind: "number", unit: "", min, max, step, integer, source: "test", free: true });
 const model = (options: OptionSpec[], defaults: SchemeOptions, riseSpanRatio?: SchemeModel["riseSpanRatio"]): SchemeModel =>
-  ({ id: "cable-dome", label: "Test", colour: "#000", description: "", validSpanM: { min: 0, max: 1000 }, options, defaults, ...(riseSpanRatio ? { riseSpanRatio } : {}), design: () => { throw new Error("not used"); } }) as SchemeModel;
+  ({ id: "cable-dome", label: "Test", colour: "#000", description: "", clientNotes: ["test"], validSpanM: { min: 0, max: 1000 }, options, defaults, ...(riseSpanRatio ? { riseSpanRatio } : {}), design: () => { throw new Error("not used"); } }) as SchemeModel;
 const feasible = (): Design => ({ ...infeasibleDesign("cable-dome", DEFAULT_BRIEF, ""), status: "feasible", feasible: true });
 const fixed: RiseSetting = { kind: "fixed", riseM: 20, source: "common" };
 /** Of a grid, the value nearest `reference` whose objective is within PROPORTION_TIE_FRACTION of the least (the search's rule on a proportion). */

@@ -9,7 +9,7 @@ import type { Design, OptionSpec, SchemeModel, SchemeOptions } from "../../../sr
 // The refinement on made-up objectives (no scheme involved): what it samples, what it chooses, what it designs.
 const depth: OptionSpec = { key: "depth", label: "depth", kind: "number", unit: "", min: 0.05, max: 1, step: 0.01, source: "test", free: true };
 const model = (refinedInFull: SchemeModel["refinedInFull"]): SchemeModel =>
-  ({ id: "cable-dome", label: "Test", colour: "#000", description: "", validSpanM: { min: 0, max: 1000 }, options: [depth], defaults: { depth: 0.6 }, riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 }, refinedInFull, design: () => { throw new Error("not used"); } }) as SchemeModel;
+  ({ id: "cable-dome", label: "Test", colour: "#000", description: "", clientNotes: ["test"], validSpanM: { min: 0, max: 1000 }, options: [depth], defaults: { depth: 0.6 }, riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 }, refinedInFull, design: () => { throw new Error("not used"); } }) as SchemeModel;
 const designed = (o: SchemeOptions, riseM: number, mass: number): Design => ({ ...infeasibleDesign("cable-dome", DEFAULT_BRIEF, ""), status: "feasible", feasible: true, totalMassKg: mass, summary: [{ key: "depth", label: "", value: o.depth as number, unit: "" }, { key: "rise", label: "", value: riseM, unit: "" }] });
 const rise: RiseSetting = { kind: "search", minM: 8, maxM: 25, stepM: 0.5, startM: 12.5 };
 const at = { rise, spanM: 100, pinned: [] as string[] };

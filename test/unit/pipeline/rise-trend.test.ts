@@ -49,6 +49,7 @@ describe("rise on the trend", () => {
       label: "Test",
       colour: "#000",
       description: "",
+      clientNotes: ["test"],
       validSpanM: { min: 0, max: 1000 },
       options: [{ key: "length", label: "length", kind: "number", unit: "m", min: 2, max: 16, step: 0.5, source: "test", free: true }],
       defaults: { length: 5 },

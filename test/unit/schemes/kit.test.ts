@@ -21,7 +21,7 @@ describe("defineOptions", () => {
 });
 
 describe("the design template (defineScheme)", () => {
-  const identity = { id: "truss-roof" as const, label: "Test", colour: "#000000", description: "a test scheme", validSpanM: { min: 1, max: 1000 } };
+  const identity = { id: "truss-roof" as const, label: "Test", colour: "#000000", description: "a test scheme", clientNotes: ["test"] as const, validSpanM: { min: 1, max: 1000 } };
   const withDesign = (design: () => never) => defineScheme(declareScheme({ ...identity, options: declared }), design);
 
   it("checks the options before designing", () => {
