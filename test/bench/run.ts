@@ -79,7 +79,7 @@ function benchSearch(): void {
       const g = searched.design.massByGroupKg;
       const plan = searched.design.planAreaM2;
       console.log(
-        `${model.id.padEnd(15)} ${String(spanM).padStart(3)} m  ${ms(stats(times).median)} (${ms(Math.min(...times))}–${ms(stats(times).max)}; CPU ${ms(stats(cpu).median)})  ${p.evaluations} designs  rise ${searched.brief.riseM.toFixed(1)} m (${p.riseSource})  ${JSON.stringify(p.proportions)}  runner-up ${p.runnerUp ? `+${p.runnerUp.differencePct.toFixed(1)} %` : "none"}  ${searched.design.status}  kg/m² plan: structure ${(g.structure / plan).toFixed(1)}, perimeter ${(g.perimeter / plan).toFixed(1)}, substructure ${(g.substructure / plan).toFixed(1)}, envelope ${(g.envelope / plan).toFixed(1)}  floor/plan ${(searched.design.usableFloorM2 / plan).toFixed(2)}  load case "${searched.design.governingLoadCase}"`,
+        `${model.id.padEnd(15)} ${String(spanM).padStart(3)} m  ${ms(stats(times).median)} (${ms(Math.min(...times))}–${ms(stats(times).max)}; CPU ${ms(stats(cpu).median)})  ${p.evaluations} designs  rise ${searched.brief.riseM.toFixed(1)} m (${p.riseSource})  ${JSON.stringify(p.proportions)}  runner-up ${p.runnerUp ? `${p.runnerUp.differencePct >= 0 ? "+" : ""}${p.runnerUp.differencePct.toFixed(1)} % (negative: it is lower, within the 2 % band the proportions nearest their references are kept)` : "none"}  ${searched.design.status}  kg/m² plan: structure ${(g.structure / plan).toFixed(1)}, perimeter ${(g.perimeter / plan).toFixed(1)}, substructure ${(g.substructure / plan).toFixed(1)}, envelope ${(g.envelope / plan).toFixed(1)}  floor/plan ${(searched.design.usableFloorM2 / plan).toFixed(2)}  load case "${searched.design.governingLoadCase}"`,
       );
     }
   }
