@@ -277,7 +277,7 @@ reactiveCell(main, { id: "last-edit", title: "What the last edit did" }, () => {
   what.textContent = `Last edit: ${edit.what}.`;
   const table = tableElement(
     ["Scheme", "Before (kgCO2e/m² usable floor)", "After", "Change", "Before (tCO2e)", "After (tCO2e)"],
-    edit.schemes.map((e) => [e.label, perM2(e.beforePerM2 ?? undefined), perM2(e.afterPerM2 ?? undefined), e.beforePerM2 && e.afterPerM2 !== null ? `${e.afterPerM2 >= e.beforePerM2 ? "+" : "−"}${fmt.one(Math.abs((100 * (e.afterPerM2 - e.beforePerM2)) / e.beforePerM2))} %` : "–", e.beforeT === null ? "–" : fmt.one(e.beforeT), e.afterT === null ? "–" : fmt.one(e.afterT)]),
+    edit.schemes.map((e) => [e.label, perM2(e.beforePerM2 ?? undefined), perM2(e.afterPerM2 ?? undefined), e.beforePerM2 && e.afterPerM2 !== null ? `${e.afterPerM2 >= e.beforePerM2 ? "+" : "−"}${fmt.one(Math.abs((100 * (e.afterPerM2 - e.beforePerM2)) / e.beforePerM2))} %` : "–", e.beforeT === null ? "–" : fmt.sig3(e.beforeT), e.afterT === null ? "–" : fmt.sig3(e.afterT)]),
     { caption: "Counted embodied carbon of every scheme just before and just after the last edit on this page", numeric: [false, true, true, true, true, true] },
   );
   table.id = "last-edit-table";
