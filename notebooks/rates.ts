@@ -105,9 +105,10 @@ const columns: EditorColumn<RateRow>[] = [
   { field: "item", label: "Item", kind: "text", readOnly: true },
   { field: "label", label: "Label", kind: "text", wide: true },
   { field: "unit", label: "Unit", kind: "text", readOnly: true, show: (r) => fmt.unit(r.unit) },
-  { field: "rate", label: "Rate", kind: "number", unit: "per unit" },
-  { field: "low", label: "Low", kind: "number", unit: "per unit" },
-  { field: "high", label: "High", kind: "number", unit: "per unit" },
+  // the study's currency in the heading, read as the table draws (a signal), so it follows an edit of the currency
+  { field: "rate", label: "Rate", kind: "number", get unit() { return `${onCosts.value.currency} per unit`; } },
+  { field: "low", label: "Low", kind: "number", get unit() { return `${onCosts.value.currency} per unit`; } },
+  { field: "high", label: "High", kind: "number", get unit() { return `${onCosts.value.currency} per unit`; } },
   { field: "basis", label: "Includes", kind: "text", wide: true },
   { field: "source", label: "Source", kind: "text", wide: true },
   { field: "notes", label: "Notes", kind: "text", wide: true },

@@ -83,6 +83,18 @@ describe("carbon page: imports and gaps", () => {
 });
 
 describe("rates page: imports, gaps and rebase", () => {
+  it("the rate columns name the study's currency, and follow an edit of it (issue 14: a currency on every cost)", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/rates.html`);
+    await page.waitForSelector("#rates-table thead th");
+    const heads = async () => (await page.locator("#rates-table thead th").allInnerTexts()).filter((t) => /^(Rate|Low|High) /.test(t));
+    expect(await heads()).toEqual(["Rate (EUR per unit)", "Low (EUR per unit)", "High (EUR per unit)"]);
+    await page.fill("#currency", "GBP");
+    await page.locator("#currency").dispatchEvent("change");
+    await expect.poll(heads).toEqual(["Rate (GBP per unit)", "Low (GBP per unit)", "High (GBP per unit)"]);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("refuses a rate CSV without the cable item, naming it; the rates table of a study lacking it names the gap and keeps carbon on compare", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/rates.html`);
     await page.waitForSelector("#cell-cost-table tbody tr");
