@@ -15,6 +15,8 @@ export interface SectionChartInput {
   roles?: readonly string[];
   /** A fixed height (px) instead of one that follows the section's proportions (see sectionChartOptions). */
   height?: number;
+  /** Draw the brief's roof profile (default true); a scheme's own members alone when false (a flat truss under a domed line misleads). */
+  briefRoof?: boolean;
 }
 
 /** A rectangle of floor from x1 to x2 (m from the centre), y1 to y2 high (m). */
@@ -96,7 +98,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
       Plot.ruleY([brief.minClearHeightM], { stroke: SECTION_STYLE.clearStroke, strokeDasharray: SECTION_STYLE.clearDash }),
       Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => usableLabel, dy: -6, fill: SECTION_STYLE.clearStroke }),
       Plot.line(walls, { x: "x", y: "y", z: "side", stroke: SECTION_STYLE.wallStroke, strokeWidth: SECTION_STYLE.lineWidth }),
-      Plot.line(roof, { x: "x", y: "y", stroke: SECTION_STYLE.roofStroke, strokeWidth: SECTION_STYLE.lineWidth }),
+      ...(input.briefRoof === false && members.length > 0 ? [] : [Plot.line(roof, { x: "x", y: "y", stroke: SECTION_STYLE.roofStroke, strokeWidth: SECTION_STYLE.lineWidth })]),
       ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 1.2 })] : []),
     ],
   };

@@ -46,9 +46,9 @@ function cautions(result: SchemeResult): string[] {
   return [...declared, ...(result.design.warnings.length > 0 ? ["The engineers' notes on this option are in the appendix."] : [])];
 }
 
-/** A small section drawing of the option: its members over the roof line, no axes. */
+/** A small section drawing of the option: its own members (not the brief's roof line, which drew a dome over the flat truss), no axes. */
 function thumbnail(result: SchemeResult, study: Study): Element {
-  const options = sectionChartOptions({ brief: study.brief, lines: result.design.drawing.section, title: "", caption: "", width: 240 });
+  const options = sectionChartOptions({ brief: study.brief, lines: result.design.drawing.section, title: "", caption: "", width: 240, briefRoof: false });
   const svg = Plot.plot({ ...options, title: undefined, caption: undefined, height: 110, marginLeft: 4, marginRight: 4, marginTop: 4, marginBottom: 4, x: { ...(options.x as object), axis: null }, y: { ...(options.y as object), axis: null }, color: { ...(options.color as object), legend: false }, ariaLabel: `${result.label}: section`, ariaDescription: `A small section through the centre of the ${result.label.toLowerCase()}.` });
   svg.setAttribute("role", "img");
   return svg;

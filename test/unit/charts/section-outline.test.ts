@@ -54,3 +54,16 @@ describe("the brief's roof section outline", () => {
     }
   });
 });
+
+describe("a scheme's section without the brief's roof", () => {
+  const brief = defaultStudy().brief;
+  const flat = [{ role: "top chord", points: [[-80, 20], [80, 20]] as const }];
+  it("leaves out the brief's roof line only when the scheme's own members are drawn", () => {
+    const lines = (o: Plot.PlotOptions) => (o.marks ?? []).length;
+    const withRoof = sectionChartOptions({ brief, lines: flat, title: "t", caption: "c" });
+    const without = sectionChartOptions({ brief, lines: flat, title: "t", caption: "c", briefRoof: false });
+    expect(lines(without)).toBe(lines(withRoof) - 1);
+    // with nothing of the scheme's to draw, the brief's roof stays: the drawing is never empty
+    expect(lines(sectionChartOptions({ brief, lines: [], title: "t", caption: "c", briefRoof: false }))).toBe(lines(sectionChartOptions({ brief, lines: [], title: "t", caption: "c" })));
+  });
+});
