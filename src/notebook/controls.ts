@@ -91,6 +91,20 @@ function numberProblem(raw: string, o: NumberControlOptions): string | null {
 }
 
 /**
+ * The text of a number field's value one step up (+1) or down (−1) on its step grid from min, on
+ * the step's own decimals and kept within min and max; null when the field holds no number (the arrow key then does nothing).
+ */
+export function steppedValue(raw: string, direction: 1 | -1, o: Pick<NumberControlOptions, "min" | "max" | "step">): string | null {
+  const x = Number(raw);
+  if (raw.trim() === "" || !Number.isFinite(x)) return null;
+  // onto the step grid from min, as a number field does: 12.5 with step 1 from 0 goes up to 13
+  const steps = (x - o.min) / o.step;
+  const n = direction > 0 ? Math.floor(steps + 1e-9) + 1 : Math.ceil(steps - 1e-9) - 1;
+  const decimals = Math.max(...[o.step, o.min].map((v) => (String(v).split(".")[1] ?? "").length));
+  return (Math.min(o.max, Math.max(o.min, o.min + n * o.step)) + 0).toFixed(decimals).replace(/^-0$/, "0");
+}
+
+/**
  * A number field with its unit, min/max/step, an inline message when the typed value is not
  * allowed (the value is then not applied, and the one in force named: see editField), and
  * optionally a slider bound to the same value.
@@ -117,8 +131,19 @@ export function NumberControl(props: NumberControlOptions & { binding: Binding<n
     });
     const step = () => slider && field.applyOnce(slider.value);
     slider?.addEventListener("input", step);
+    // the arrow keys step the value as a number field's do (the field is a text field: see below)
+    const arrows = (event: KeyboardEvent) => {
+      if (event.key !== "ArrowUp" && event.key !== "ArrowDown") return;
+      const next = steppedValue(input.value, event.key === "ArrowUp" ? 1 : -1, o);
+      if (next === null) return;
+      event.preventDefault();
+      input.value = next;
+      field.applyOnce(next);
+    };
+    input.addEventListener("keydown", arrows);
     return () => {
       slider?.removeEventListener("input", step);
+      input.removeEventListener("keydown", arrows);
       field.dispose();
     };
   }, [binding]);

@@ -74,6 +74,19 @@ describe("compare page", () => {
     await page.close();
   });
 
+  it("the arrow keys step the span by its step, as a number field's do (it is a text field since audit8)", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-geometry dd");
+    await page.locator("#spanM").press("ArrowUp");
+    await page.locator("#spanM").press("ArrowUp");
+    expect(await page.inputValue("#spanM")).toBe("162");
+    await expect.poll(() => page.locator("#cell-section figcaption").textContent()).toContain("Span 162 m");
+    await page.locator("#spanM").press("ArrowDown");
+    expect(await page.inputValue("#spanM")).toBe("161");
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("a rise above half the span is refused at the field and no cell fails (issue 10: it used to fail every result cell)", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
     await page.waitForSelector("#cell-geometry dd");
