@@ -101,7 +101,7 @@ export function steppedValue(raw: string, direction: 1 | -1, o: Pick<NumberContr
   const steps = (x - o.min) / o.step;
   const n = direction > 0 ? Math.floor(steps + 1e-9) + 1 : Math.ceil(steps - 1e-9) - 1;
   const decimals = Math.max(...[o.step, o.min].map((v) => (String(v).split(".")[1] ?? "").length));
-  return (Math.min(o.max, Math.max(o.min, o.min + n * o.step)) + 0).toFixed(decimals).replace(/^-0$/, "0");
+  return (Math.min(o.max, Math.max(o.min, o.min + n * o.step)) + 0).toFixed(decimals); // + 0: no "-0"
 }
 
 /**

@@ -18,6 +18,7 @@ describe("steppedValue", () => {
   it("keeps a decimal step's decimals, without float noise", () => {
     expect(steppedValue("0.3", 1, { min: 0, max: 1, step: 0.1 })).toBe("0.4");
     expect(steppedValue("0.7", -1, { min: 0.05, max: 0.9, step: 0.05 })).toBe("0.65");
+    expect(steppedValue("0.5", -1, { min: -1, max: 1, step: 0.5 })).toBe("0.0");
   });
   it("does nothing on a field that holds no number", () => {
     expect(steppedValue("", 1, span)).toBeNull();
