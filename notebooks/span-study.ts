@@ -39,6 +39,9 @@ const points = computed(() => (state.value.status === "failed" ? null : state.va
 const labelOf = (id: string) => SCHEME_DECLARATIONS.find((m) => m.id === id)?.label ?? id;
 const studySpanM = computed(() => store.study.value.brief.spanM);
 
+/** "the cable net and the cable dome" from their ids. */
+const namesOf = (ids: readonly string[]) => new Intl.ListFormat("en", { type: "conjunction" }).format(ids.map((id) => `the ${labelOf(id).toLowerCase()}`));
+
 reactiveCell(main, { id: "status" }, () => {
   const s = state.value;
   if (s.status === "failed") throw new Error(s.error);
@@ -46,7 +49,10 @@ reactiveCell(main, { id: "status" }, () => {
     const bar = document.createElement("div");
     const label = document.createElement("label");
     label.htmlFor = "span-progress";
-    label.textContent = `Computing the span study… ${s.done} of ${s.total} spans`;
+    label.textContent =
+      s.pass === "screening"
+        ? `Computing the span study… ${s.done} of ${s.total} spans`
+        : `Designing ${namesOf(s.again)} by the 3D analysis… ${s.done} of ${s.total} spans (until this ends their lines show the closed form, the fast first estimate${s.screeningMs === undefined ? "" : `, done in ${fmt.int(s.screeningMs)} ms`})`;
     const progress = document.createElement("progress");
     progress.id = "span-progress";
     progress.max = Math.max(1, s.total);
@@ -55,7 +61,9 @@ reactiveCell(main, { id: "status" }, () => {
     return bar;
   }
   const spans = new Set(s.points.map((p) => p.spanM)).size;
-  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (in ${s.workers} background worker${s.workers > 1 ? "s" : ""}).`;
+  const workers = `in ${s.workers} background worker${s.workers > 1 ? "s" : ""}`;
+  const passes = s.again.length === 0 ? "" : `: every scheme in ${fmt.int(s.screeningMs)} ms with ${namesOf(s.again)} by the closed form, then those by the 3D analysis, as on the compare page`;
+  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (${workers}${passes}).`;
 });
 
 reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {

@@ -1,7 +1,7 @@
 import type { Catalogue } from "../catalogue/types";
 import type { DesignStatus, SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { evaluateStudy, type SchemeResult, type StudyInputs } from "../pipeline";
+import { evaluateStudy, screensDifferently, type Depth, type SchemeResult, type StudyInputs } from "../pipeline";
 
 /** One scheme at one span: the figures the span-study charts draw. */
 export interface SpanPoint {
@@ -49,6 +49,17 @@ export interface SpanStudyOptions {
   maxSpans?: number;
   /** Sees every scheme's whole result at each span (the command line prints and checks them). */
   onResult?: (spanM: number, result: SchemeResult) => void;
+  /** "full" (default: every scheme as the compare page designs it) or "screening" (the tension roofs by their closed form: the page's fast first pass). */
+  depth?: Depth;
+}
+
+/**
+ * The enabled schemes (or `schemeIds`) whose full design differs from the one their proportion
+ * search screens with (the tension roofs with the 3D analysis): after a "screening" pass only these
+ * need designing again.
+ */
+export function schemesDesignedAgain(study: StudyInputs, schemeIds?: readonly SchemeId[]): SchemeId[] {
+  return SCHEMES.filter((m) => (schemeIds ? schemeIds.includes(m.id) : study.schemes[m.id]?.enabled !== false) && screensDifferently(m, study.schemes[m.id])).map((m) => m.id);
 }
 
 /** One scheme's result at one span as the charts draw it: infeasible points keep NaN metrics. */
@@ -82,7 +93,7 @@ export function runSpanStudy(study: StudyInputs, catalogue: Catalogue, range: Sp
   const points: SpanPoint[] = [];
   const spans = Array.isArray(range) ? range : spansOf(range as SpanRange, options.maxSpans);
   for (const spanM of spans) {
-    const evaluation = evaluateStudy(study, catalogue, { spanM, ...(options.schemeIds ? { schemeIds: options.schemeIds } : {}) });
+    const evaluation = evaluateStudy(study, catalogue, { spanM, ...(options.schemeIds ? { schemeIds: options.schemeIds } : {}), ...(options.depth ? { depth: options.depth } : {}) });
     for (const result of evaluation.results) {
       options.onResult?.(spanM, result);
       points.push(spanPoint(spanM, result));

@@ -1,15 +1,25 @@
 // Module worker: runs span-study points off the main thread (its calls through the one typed worker interface).
 import { exposeWorker } from "../kernel/worker-call";
-import { runSpanStudy, type SpanPoint } from "./span-study";
+import { runSpanStudy, schemesDesignedAgain, type SpanPoint } from "./span-study";
 import { defaultCatalogue } from "../catalogue/default-catalogue";
 import type { Study } from "../study/study";
 
 const catalogue = defaultCatalogue();
 
 export const spanWorkerApi = {
-  /** The study's enabled schemes at each of these spans. */
-  run(study: Study, spans: number[]): SpanPoint[] {
-    return runSpanStudy(study, catalogue, spans);
+  /**
+   * The study's enabled schemes at each of these spans: "screening", every scheme as its proportion
+   * search screens it (the tension roofs by their closed form, the fast first pass); "again", only the
+   * schemes whose full design differs (the tension roofs by the 3D analysis), fully.
+   */
+  run(study: Study, spans: number[], pass: "screening" | "again"): SpanPoint[] {
+    if (pass === "screening") return runSpanStudy(study, catalogue, spans, { depth: "screening" });
+    const again = schemesDesignedAgain(study);
+    return again.length === 0 ? [] : runSpanStudy(study, catalogue, spans, { schemeIds: again });
+  },
+  /** The enabled schemes the second pass designs again (their labels are on the page). */
+  designedAgain(study: Study): string[] {
+    return schemesDesignedAgain(study);
   },
 };
 export type SpanWorkerApi = typeof spanWorkerApi;

@@ -6,8 +6,18 @@ import { workerApi } from "../kernel/worker-call";
 import { messageOf } from "../kernel/errors";
 
 export type SpanStudyState =
-  | { status: "running"; points: SpanPoint[] | null; done: number; total: number }
-  | { status: "done"; points: SpanPoint[]; ms: number; workers: number }
+  | {
+      status: "running";
+      points: SpanPoint[] | null;
+      done: number;
+      total: number;
+      /** "screening": every scheme's fast pass; "again": the schemes designed again in full (`again`), the points shown have their screening design until the pass ends. */
+      pass: "screening" | "again";
+      again: string[];
+      /** Time of the screening pass, ms, once it is done. */
+      screeningMs?: number;
+    }
+  | { status: "done"; points: SpanPoint[]; ms: number; workers: number; again: string[]; screeningMs: number }
   | { status: "failed"; error: string };
 
 /** How many workers: one per core the browser reports, between 1 and 4 (the page itself waits while they run). */
@@ -16,17 +26,31 @@ function workerCount(): number {
   return Math.max(1, Math.min(4, cores));
 }
 
-/** Spans per call: small enough for a progress bar that moves, large enough that messages cost little. */
-const SPANS_PER_CALL = 2;
+/** Spans per call: small enough for a progress bar that moves, large enough that messages cost little (a design in full takes longer: one span a call). */
+const SPANS_PER_CALL = { screening: 2, again: 1 } as const;
+
+function chunks(spans: readonly number[], size: number): number[][] {
+  return Array.from({ length: Math.ceil(spans.length / size) }, (_, i) => spans.slice(i * size, (i + 1) * size));
+}
+
+/** Each scheme's point at each span from `later` where it has one, else from `earlier`. */
+function replaced(earlier: readonly SpanPoint[], later: readonly SpanPoint[]): SpanPoint[] {
+  const key = (p: SpanPoint) => `${p.id}@${p.spanM}`;
+  const again = new Map(later.map((p) => [key(p), p]));
+  return earlier.map((p) => again.get(key(p)) ?? p).sort((a, b) => a.spanM - b.spanM);
+}
 
 /**
  * Runs the span study in Web Workers (through the one typed worker interface) whenever the study
- * or the range changes. The spans are dealt out a few at a time to whichever worker is free, so the
- * progress bar moves and a newer request stops the older one after the calls already running;
- * while one runs the previous points stay on screen.
+ * or the range changes, in two passes: every scheme as its proportion search screens it (the
+ * tension roofs by their closed form: the whole picture within seconds), then the schemes whose
+ * full design differs (the tension roofs by the 3D analysis, as on the compare page), whose points
+ * replace their screening ones when that pass ends. The spans are dealt out a few at a time to
+ * whichever worker is free, so the progress bar moves and a newer request stops the older one after
+ * the calls already running; while one runs the previous points stay on screen.
  */
 export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySignal<SpanRange>): ReadonlySignal<SpanStudyState> {
-  const state = signal<SpanStudyState>({ status: "running", points: null, done: 0, total: 0 });
+  const state = signal<SpanStudyState>({ status: "running", points: null, done: 0, total: 0, pass: "screening", again: [] });
   const pool = Array.from({ length: workerCount() }, () => workerApi<SpanWorkerApi>(new Worker(new URL("../comparison/span-worker.ts", import.meta.url), { type: "module" })));
   let latest = 0;
   effect(() => {
@@ -39,29 +63,39 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
       return;
     }
     const current = study.value;
-    const queue = Array.from({ length: Math.ceil(spans.length / SPANS_PER_CALL) }, (_, i) => spans.slice(i * SPANS_PER_CALL, (i + 1) * SPANS_PER_CALL));
     const previous = state.peek();
-    const shown = previous.status === "failed" ? null : previous.points;
-    const parts: SpanPoint[][] = [];
-    let done = 0;
-    state.value = { status: "running", points: shown, done, total: spans.length };
     const started = performance.now();
-    const work = async (worker: (typeof pool)[number]) => {
-      for (let chunk = queue.shift(); chunk !== undefined && id === latest; chunk = queue.shift()) {
-        parts.push(await worker.api.run(current, chunk));
-        done += chunk.length;
-        if (id === latest) state.value = { status: "running", points: shown, done, total: spans.length };
-      }
+    /** One pass: its chunks dealt to the free workers; the points, or null when a newer request took over. */
+    const pass = async (name: "screening" | "again", shown: SpanPoint[] | null, again: string[], screeningMs?: number): Promise<SpanPoint[] | null> => {
+      const queue = chunks(spans, SPANS_PER_CALL[name]);
+      const parts: SpanPoint[][] = [];
+      let done = 0;
+      const report = () => {
+        state.value = { status: "running", points: shown, done, total: spans.length, pass: name, again, ...(screeningMs === undefined ? {} : { screeningMs }) };
+      };
+      report();
+      await Promise.all(pool.map(async (worker) => {
+        for (let chunk = queue.shift(); chunk !== undefined && id === latest; chunk = queue.shift()) {
+          parts.push(await worker.api.run(current, chunk, name));
+          done += chunk.length;
+          if (id === latest) report();
+        }
+      }));
+      return id === latest ? parts.flat().sort((a, b) => a.spanM - b.spanM) : null;
     };
-    Promise.all(pool.map(work)).then(
-      () => {
-        if (id !== latest) return;
-        state.value = { status: "done", points: parts.flat().sort((a, b) => a.spanM - b.spanM), ms: performance.now() - started, workers: pool.length };
-      },
-      (error: unknown) => {
-        if (id === latest) state.value = { status: "failed", error: messageOf(error) };
-      },
-    );
+    const run = async () => {
+      const again = await (pool[0] as (typeof pool)[number]).api.designedAgain(current);
+      if (id !== latest) return;
+      const screened = await pass("screening", previous.status === "failed" ? null : previous.points, again);
+      if (screened === null) return;
+      const screeningMs = performance.now() - started;
+      const full = again.length === 0 ? [] : await pass("again", screened, again, screeningMs);
+      if (full === null) return;
+      state.value = { status: "done", points: replaced(screened, full), ms: performance.now() - started, workers: pool.length, again, screeningMs };
+    };
+    run().catch((error: unknown) => {
+      if (id === latest) state.value = { status: "failed", error: messageOf(error) };
+    });
   });
   return state;
 }

@@ -18,7 +18,16 @@ export interface EvaluateOptions {
   spanM?: number;
   /** Only these schemes (default: the study's enabled schemes). */
   schemeIds?: readonly SchemeId[];
+  /**
+   * "full" (default): each scheme designed with its full options at the proportions its search chose
+   * (the tension roofs by the 3D analysis); "screening": the search's own design, with the scheme's
+   * screening options (the tension roofs by the closed form) — the span study's fast first pass.
+   */
+  depth?: Depth;
 }
+
+/** How far a scheme is designed: with its full options, or only as the proportion search screens it. */
+export type Depth = "full" | "screening";
 
 /** The brief at another span: the common rise there (the rise-to-span ratio kept, within the height limit). */
 export function briefAtSpan(brief: Brief, spanM: number): Brief {
@@ -47,7 +56,7 @@ export function evaluateStudy(study: StudyInputs, catalogue: Catalogue, options:
   const brief = options.spanM === undefined ? study.brief : briefAtSpan(study.brief, options.spanM);
   const chosen = options.schemeIds ? SCHEMES.filter((m) => options.schemeIds?.includes(m.id)) : SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
   const results = chosen.map((model) => {
-    const searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue);
+    const searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue, options.depth);
     return { ...schemeResult(model.id, model.label, searched.design, study), brief: searched.brief, proportions: searched.proportions };
   });
   return { brief, results };
@@ -90,7 +99,7 @@ function screened(model: SchemeModel, options: SchemeOptions, pinned: readonly s
  * options when it declares any; the chosen proportions are then designed with the full options and
  * that design's value reported (the runner-up's difference stays the screening one).
  */
-export function designAtBestProportions(model: SchemeModel, brief: Brief, setting: SchemeSetting | undefined, study: Pick<StudyInputs, "carbon" | "cost">, catalogue: Catalogue): SearchedDesign {
+export function designAtBestProportions(model: SchemeModel, brief: Brief, setting: SchemeSetting | undefined, study: Pick<StudyInputs, "carbon" | "cost">, catalogue: Catalogue, depth: Depth = "full"): SearchedDesign {
   const objective = brief.objective;
   const options = { ...model.defaults, ...(setting?.options ?? {}) };
   const pinned = setting?.pinned ?? [];
@@ -99,7 +108,8 @@ export function designAtBestProportions(model: SchemeModel, brief: Brief, settin
     const design = infeasibleDesign(model.id, brief, rise.reason);
     return { design, brief, proportions: { objective, searched: [], pinned: [...pinned], proportions: { [RISE_KEY]: brief.riseM }, riseM: brief.riseM, riseSource: "searched", value: Number.POSITIVE_INFINITY, evaluations: 0, runnerUp: null } };
   }
-  const screening = dimensionsOf(model, options, pinned, rise).length > 0 ? screened(model, options, pinned) : options;
+  // with nothing to search the full options are designed at once, unless only the screening design is asked for
+  const screening = depth === "screening" || dimensionsOf(model, options, pinned, rise).length > 0 ? screened(model, options, pinned) : options;
   const { chosen, choice } = searchProportions(
     model,
     screening,
@@ -110,11 +120,26 @@ export function designAtBestProportions(model: SchemeModel, brief: Brief, settin
     (design) => objectiveValue(design, study, objective),
     brief.spanM,
   );
-  if (screening === options) return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice };
+  if (screening === options || depth === "screening") return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice };
   const start = { options: { ...chosen.options, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, riseM: chosen.riseM };
   const { full, refinements } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue), (design) => objectiveValue(design, study, objective));
   const refined = Object.fromEntries(refinements.map((r) => [r.key, r.value]));
   return { design: full.design, brief: { ...brief, riseM: full.riseM }, proportions: { ...choice, proportions: { ...choice.proportions, ...refined }, riseM: full.riseM, value: full.objective } };
+}
+
+/**
+ * Whether a scheme's full design differs from its screening one for this setting (it declares
+ * screening options the study neither sets to the same values nor pins): the tension roofs with the
+ * 3D analysis. The span study designs these again after its fast pass.
+ */
+export function screensDifferently(model: SchemeModel, setting: SchemeSetting | undefined): boolean {
+  const options = { ...model.defaults, ...(setting?.options ?? {}) };
+  return screened(model, options, setting?.pinned ?? []) !== options;
+}
+
+/** A setting's options as the proportion search designs its candidates: with the scheme's screening options (the tension roofs by the closed form), except those pinned. */
+export function screenedOptions(model: SchemeModel, setting: SchemeSetting | undefined): SchemeOptions {
+  return screened(model, { ...model.defaults, ...(setting?.options ?? {}) }, setting?.pinned ?? []);
 }
 
 function pick(options: SchemeOptions, keys: readonly string[]): SchemeOptions {
