@@ -2,7 +2,7 @@ import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId, SchemeModel } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { evaluateStudy, designWithChoice, assessDesign, type SchemeFigures, type SchemeResult } from "../pipeline";
+import { evaluateStudy, designWithChoice, assessDesign, screensDifferently, screenedOptions, type SchemeFigures, type SchemeResult } from "../pipeline";
 import { CONCEPT_SCREENING } from "../cost";
 import { getIn } from "../kernel/patch";
 import { createPrng } from "./prng";
@@ -97,7 +97,10 @@ export function runRisk(study: RiskStudy, catalogue: Catalogue, options: RunRisk
   const lowestCarbon = lowestProbabilities(carbonOutputs, drawn.clusters);
   const lowestCost = lowestProbabilities(costOutputs, drawn.clusters);
   const ids = plan.models.map((m) => m.id);
-  const warnings = [...check.warnings];
+  const warnings = [
+    ...check.warnings,
+    ...plan.models.filter((_, s) => designs.corrections[s]).map((m) => `${m.label}: each draw is designed by its fast first estimate (the closed form) and scaled by the ratio of the compare page's design (the 3D analysis) to that estimate at the study's own values; a 3D analysis per draw would take minutes`),
+  ];
   const schemes: SchemeRisk[] = plan.models.map((model, s) => ({
     ...schemeSummary(plan, model, s, designs, drawn, deterministic.get(model.id), warnings),
     pLowestCarbon: lowestCarbon.p[s] as number,
@@ -140,7 +143,14 @@ type Plan = {
   options: RunRiskOptions;
 };
 
-type Designs = { entries: DesignEntry[][]; entryOf: Int32Array[] };
+/**
+ * A scheme whose draws are designed as its proportion search screens it (the tension roofs by the
+ * closed form: a 3D analysis per draw would take the risk run from seconds to minutes): each draw's
+ * outputs are scaled by the ratio of its full design to its screening design at the study's own
+ * values, each under the sample's own factors and rates.
+ */
+type Correction = { full: DesignEntry; screening: DesignEntry };
+type Designs = { entries: DesignEntry[][]; entryOf: Int32Array[]; corrections: (Correction | null)[] };
 type Drawn = { inputValues: Float64Array[]; outputs: Float64Array[][]; clusters: Clusters };
 
 const every = (total: number) => Math.max(1, Math.floor(total / 100));
@@ -195,8 +205,10 @@ function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: 
   const designTotal = models.length * designSamples;
   const entries = models.map(() => [] as DesignEntry[]);
   const entryOf = models.map(() => new Int32Array(designSamples));
+  const corrections = models.map((model) => correctionOf(study, model, evaluated.get(model.id), catalogue));
   let done = 0;
   models.forEach((model, s) => {
+    const correction = corrections[s] ?? null;
     const relevant = inputs.map((input, k) => (affectsScheme(input, model.id) ? k : -1)).filter((k) => k >= 0);
     const paths = relevant.map((k) => (inputs[k] as ResolvedInput).path);
     const seen = new Map<string, number>();
@@ -206,7 +218,9 @@ function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: 
       let index = seen.get(key);
       if (index === undefined) {
         const drawn = applyValues(study, paths, values);
-        const design = designWithChoice(model, drawn.brief, drawn.schemes[model.id]?.options, choiceOf(evaluated.get(model.id)), catalogue);
+        const options = correction ? screenedOptions(model, drawn.schemes[model.id]) : drawn.schemes[model.id]?.options;
+        // a full design that fails at the study's own values fails in every draw, for its reason
+        const design = correction && !correction.full.design.feasible ? correction.full.design : designWithChoice(model, drawn.brief, options, choiceOf(evaluated.get(model.id)), catalogue);
         index = (entries[s] as DesignEntry[]).push({ design, quantities: designQuantities(design) }) - 1;
         seen.set(key, index);
       }
@@ -218,7 +232,14 @@ function drawDesigns(study: RiskStudy, catalogue: Catalogue, plan: Plan, poolU: 
       }
     }
   });
-  return { entries, entryOf };
+  return { entries, entryOf, corrections };
+}
+
+/** The full and screening designs at the study's own values of a scheme whose full design is not the screening one (else null). */
+function correctionOf(study: RiskStudy, model: SchemeModel, result: SchemeResult | undefined, catalogue: Catalogue): Correction | null {
+  if (!result || !screensDifferently(model, study.schemes[model.id])) return null;
+  const screening = designWithChoice(model, study.brief, screenedOptions(model, study.schemes[model.id]), choiceOf(result), catalogue);
+  return { full: { design: result.design, quantities: designQuantities(result.design) }, screening: { design: screening, quantities: designQuantities(screening) } };
 }
 
 /** The proportions the pipeline chose for a scheme, with the span it chose them at. */
@@ -257,12 +278,21 @@ function assessEntry(study: RiskStudy, entry: DesignEntry, intensities: ReturnTy
   return [entry.design.selfWeightKgPerM2, entry.direct.carbon, entry.direct.cost];
 }
 
+/** assessEntry, scaled by the correction's full ÷ screening outputs under the same intensities when the scheme has one. */
+function assessCorrected(study: RiskStudy, entry: DesignEntry, correction: Correction | null, intensities: ReturnType<typeof assessmentIntensities> | null): [number, number, number] {
+  const drawn = assessEntry(study, entry, intensities);
+  if (!correction || entry === correction.full) return drawn;
+  const full = assessEntry(study, correction.full, intensities);
+  const screening = assessEntry(study, correction.screening, intensities);
+  return drawn.map((x, m) => (x * (full[m] as number)) / (screening[m] as number)) as [number, number, number];
+}
+
 /** The samples: each with its design draw and its own draw of the assessment-only inputs. */
 function drawSamples(study: RiskStudy, plan: Plan, poolU: readonly (Float64Array | null)[], designs: Designs, rng: ReturnType<typeof createPrng>): Drawn {
   const { inputs, models, samples, designSamples, options } = plan;
   const materials = new Set<string>();
   const items = new Set<string>();
-  for (const list of designs.entries) {
+  for (const list of [...designs.entries, ...designs.corrections.flatMap((c) => (c ? [[c.full, c.screening]] : []))]) {
     for (const e of list) {
       for (const [m] of e.quantities.massKgByMaterial) materials.add(m);
       for (const [c] of e.quantities.quantityByItem) items.add(c);
@@ -287,7 +317,7 @@ function drawSamples(study: RiskStudy, plan: Plan, poolU: readonly (Float64Array
     const intensities = atBase ? null : assessmentIntensities(applyValues(study, assessPaths, values), materials, items);
     models.forEach((_, s) => {
       const entry = (designs.entries[s] as DesignEntry[])[(designs.entryOf[s] as Int32Array)[j] as number] as DesignEntry;
-      const metrics = assessEntry(study, entry, intensities);
+      const metrics = assessCorrected(study, entry, designs.corrections[s] ?? null, intensities);
       (outputs[s] as Float64Array[]).forEach((out, m) => (out[i] = metrics[m] as number));
     });
     if ((i + 1) % every(samples) === 0) {

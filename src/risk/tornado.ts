@@ -2,7 +2,7 @@ import type { RiskStudy } from "./risk-study";
 import type { Catalogue } from "../catalogue/types";
 import type { Design, SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { designAtBestProportions, designWithChoice, schemeResult } from "../pipeline";
+import { designAtBestProportions, designWithChoice, schemeResult, screensDifferently, screenedOptions } from "../pipeline";
 import { setIn } from "../kernel/patch";
 import { checkRiskInputs } from "./check-risk-inputs";
 import type { ResolvedInput } from "./resolve-inputs";
@@ -45,11 +45,19 @@ export function riskTornado(study: RiskStudy, catalogue: Catalogue): Tornado[] {
     const choice = { proportions: searched.proportions, spanM: searched.brief.spanM };
     const baseDesign = searched.design;
     const base = metricsOf(baseDesign, study);
+    // the tension roofs with the 3D analysis: each end designed by the closed form and scaled by the
+    // 3D design's ratio to it at the study's values (as the Monte Carlo's draws, run-risk.ts)
+    const screening = screensDifferently(model, study.schemes[model.id]);
+    const screenBase = screening ? designWithChoice(model, study.brief, screenedOptions(model, study.schemes[model.id]), choice, catalogue) : baseDesign;
     const ends = (input: ResolvedInput, value: number) => {
       const moved = setIn(study, input.path, value);
       const changesDesign = input.path[0] === "brief" || (input.path[0] === "schemes" && input.path[1] === model.id);
-      const design = changesDesign ? designWithChoice(model, moved.brief, moved.schemes[model.id]?.options, choice, catalogue) : baseDesign;
-      return metricsOf(design, moved);
+      const options = screening ? screenedOptions(model, moved.schemes[model.id]) : moved.schemes[model.id]?.options;
+      const at = metricsOf(changesDesign ? designWithChoice(model, moved.brief, options, choice, catalogue) : screenBase, moved);
+      if (!screening) return at;
+      const full = metricsOf(baseDesign, moved);
+      const closed = metricsOf(screenBase, moved);
+      return { carbon: (at.carbon * full.carbon) / closed.carbon, cost: (at.cost * full.cost) / closed.cost };
     };
     const bars = inputs.map((input) => ({ input, low: ends(input, input.low), high: ends(input, input.high) }));
     for (const metric of ["carbonKgCO2ePerM2Floor", "costPerM2Floor"] as const) {
