@@ -38,7 +38,7 @@ export type CableDomeOptions = OptionValues<typeof declarations>;
 export const cableDomeDeclaration = declareScheme({
   id: "cable-dome",
   riseSpanRatio: { min: 0.08, max: 0.25, preferred: 0.125 },
-  // the proportion search designs its candidates by the closed form; the chosen ones are analysed in 3D when asked
+  // the proportion search designs its candidates by the closed form; the chosen ones are designed by the 3D analysis (the default option)
   screeningOptions: { analysis: "closed-form" },
   // the closed form is least near 0.5 of a bay in post depth and flat in rise (within 2 % from 0.08 to 0.095 × span
   // at 80 m), the 3D analysis near 0.35–0.4 and at the least rise, steeply (+12 % from post depth 0.35 to 0.6 at
@@ -55,7 +55,7 @@ export const cableDomeDeclaration = declareScheme({
   colour: "#0072B2",
   clientNotes: [
     "A light roof of cables, posts and fabric, held taut against a heavy ring at its edge: it needs a specialist designer and builder from the start.",
-    "Uneven snow and wind on one side are allowed for in a simplified, cautious way at this stage; a full analysis may change the cable sizes.",
+    "Its cables are sized from a 3D computer model under uneven snow and wind on one side; a specialist's detailed analysis will refine them.",
   ],
   description:
     "Radial cable trusses span from a perimeter compression ring to a central tension ring: ridge cables over the top, vertical posts standing on hoops, and diagonals from the foot of each post to the head of the next. Prestress in the cables holds the posts up; coated fabric spans between the ridges. The roof is very light; the compression ring carries the whole horizontal thrust.",

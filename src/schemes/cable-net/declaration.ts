@@ -51,7 +51,7 @@ export const cableNetDeclaration = declareScheme({
     "Masts on a ring inside the plan carry radial cables that hang the fabric: half run out to anchors at the edge, half in to a central tension ring. Circumferential cables between the radial cables carry the fabric panels. A second family of valley cables, prestressed against the radial ones, holds the roof down in wind uplift. Backstays take the difference of pull at each mast head down to ground anchors.",
   validSpanM: { min: 60, max: 400 },
   riseSpanRatio: { min: 0.05, max: 0.2, preferred: 0.1 },
-  // the proportion search designs its candidates by the closed form; the chosen ones are analysed in 3D when asked
+  // the proportion search designs its candidates by the closed form; the chosen ones are designed by the 3D analysis (the default option)
   screeningOptions: { analysis: "closed-form" },
   options: defineOptions(declarations),
 });

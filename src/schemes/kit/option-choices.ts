@@ -31,12 +31,12 @@ export const TENSION_COMMON_OPTIONS = {
 
 /**
  * The tension roofs' choice of analysis: the 3D analysis designs, the closed form seeds and
- * cross-checks it (issue 13). The closed form is the default: with the 3D analysis on by default the
- * risk page (one design per draw) and the span study took over a minute on this machine; the 3D
- * analysis is asked for per study, and shown on the compare page when it ran.
+ * cross-checks it (issue 13). The 3D analysis is the default: the proportion search screens its
+ * candidates by the closed form (the schemes' screeningOptions) and only the chosen proportions are
+ * designed in 3D; the closed form alone stays a choice (the fast first estimate).
  */
 export const ANALYSIS_OPTION = {
-  analysis: { kind: "select", label: "Analysis", choices: [{ value: "3d", label: "3D nonlinear (sizes from the analysed forces)" }, { value: "closed-form", label: "Closed form only" }], default: "closed-form", source: "issue 13: the 3D analysis designs, the closed form seeds and cross-checks it" },
+  analysis: { kind: "select", label: "Analysis", choices: [{ value: "3d", label: "3D nonlinear (sizes from the analysed forces)" }, { value: "closed-form", label: "Closed form only" }], default: "3d", source: "issue 13: the 3D analysis designs, the closed form seeds and cross-checks it" },
 } as const satisfies Record<string, OptionDeclaration>;
 
 /** Roof coverings of data/claddings.csv offered to the rigid schemes. */
