@@ -41,11 +41,21 @@ export function proportionsSentences(model: SchemeDeclaration, choice: Proportio
     const chosen = searched.map((k) => proportionText(model, k, choice.proportions[k]));
     out.push(`Proportions chosen for ${GOAL[choice.objective]} per m² of usable floor (${choice.evaluations} designs tried): ${[...chosen, ...riseWord].join("; ")}.`);
   }
+  if (choice.full && Number.isFinite(choice.value)) out.push(fullSentence(model, choice.full));
   if (choice.pinned.length > 0) out.push(`Pinned by you: ${choice.pinned.map((k) => proportionText(model, k, choice.proportions[k])).join("; ")}.`);
   if (choice.searched.length > 0 && Number.isFinite(choice.value)) {
-    out.push(runnerUpSentence(model, choice));
+    out.push(choice.full ? `On the first estimate: ${lowerFirst(runnerUpSentence(model, choice))}` : runnerUpSentence(model, choice));
   }
   return out;
+}
+
+const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
+
+/** How the candidates were compared (the screening options) and the chosen ones designed (the full options, some proportions chosen again). */
+function fullSentence(model: SchemeDeclaration, full: NonNullable<ProportionChoice["full"]>): string {
+  const words = (options: Record<string, OptionValue>) => Object.entries(options).map(([k, v]) => proportionText(model, k, v)).join("; ");
+  const again = full.refined.length === 0 ? "" : `, where ${full.refined.map((k) => (k === RISE_KEY ? "the rise" : (model.options.find((o) => o.key === k)?.label ?? k))).join(" and ")} ${full.refined.length > 1 ? "were" : "was"} chosen again on ${full.evaluations} such designs (the same rule)`;
+  return `The candidates were compared with ${words(full.screening)} (the fast first estimate); the chosen ones are designed with ${words(full.options)}${again}.`;
 }
 
 /** The runner-up: higher; as good; or lower, where the chosen proportions are within the search's band of it and nearer the reference. */

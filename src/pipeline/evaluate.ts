@@ -122,9 +122,11 @@ export function designAtBestProportions(model: SchemeModel, brief: Brief, settin
   );
   if (screening === options || depth === "screening") return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice };
   const start = { options: { ...chosen.options, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, riseM: chosen.riseM };
-  const { full, refinements } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue), (design) => objectiveValue(design, study, objective));
+  const { full, refinements, evaluations } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue), (design) => objectiveValue(design, study, objective));
   const refined = Object.fromEntries(refinements.map((r) => [r.key, r.value]));
-  return { design: full.design, brief: { ...brief, riseM: full.riseM }, proportions: { ...choice, proportions: { ...choice.proportions, ...refined }, riseM: full.riseM, value: full.objective } };
+  const differing = Object.keys(model.screeningOptions ?? {}).filter((k) => screening[k] !== options[k]);
+  const fullChoice = { screening: pick(screening, differing), options: pick(options, differing), refined: refinements.map((r) => r.key), evaluations };
+  return { design: full.design, brief: { ...brief, riseM: full.riseM }, proportions: { ...choice, proportions: { ...choice.proportions, ...refined }, riseM: full.riseM, value: full.objective, full: fullChoice } };
 }
 
 /**

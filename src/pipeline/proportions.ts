@@ -36,6 +36,13 @@ export interface ProportionChoice {
   evaluations: number;
   /** The best other candidate, and how much worse it is, % of the chosen value. */
   runnerUp: { proportions: Record<string, OptionValue>; riseM: number; value: number; differencePct: number } | null;
+  /**
+   * When the candidates were designed with the scheme's screening options (the tension roofs by the
+   * closed form) and the chosen proportions then with the full ones: the options that differ, each
+   * way (the runner-up is a screening one), the proportions chosen again on full designs, and how
+   * many full designs that took.
+   */
+  full?: { screening: Record<string, OptionValue>; options: Record<string, OptionValue>; refined: string[]; evaluations: number };
 }
 
 /** One searchable dimension: its values in order, and the index to start from. */

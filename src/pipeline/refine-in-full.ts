@@ -41,7 +41,7 @@ function axisOf(model: SchemeModel, refined: Refined, rise: RiseSetting, spanM: 
  * within PROPORTION_TIE_FRACTION of the fitted least, the nearest the reference (the declared one,
  * else an option's search reference or default, the preferred rise) — the rise's trend rule (./rise-trend.ts). Where the
  * value so chosen is infeasible, the best feasible sample; where no sample is feasible, the
- * proportion stays. Returns the final design (designed once, samples reused) and what was refined.
+ * proportion stays. Returns the final design (designed once, samples reused), what was refined and how many full designs it took.
  */
 export function refineInFull(
   model: SchemeModel,
@@ -49,7 +49,7 @@ export function refineInFull(
   setting: { rise: RiseSetting; spanM: number; pinned: readonly string[] },
   design: (options: SchemeOptions, riseM: number) => Design,
   assess: (design: Design) => number,
-): { full: FullDesign; refinements: Refinement[] } {
+): { full: FullDesign; refinements: Refinement[]; evaluations: number } {
   const designed = new Map<string, FullDesign>();
   const at = (options: SchemeOptions, riseM: number): FullDesign => {
     const key = JSON.stringify([options, riseM]);
@@ -74,5 +74,6 @@ export function refineInFull(
     current = Number.isFinite(at(chosen.options, chosen.riseM).objective) ? chosen : moved(feasible[0]?.index as number);
     refinements.push({ key, value: key === RISE_KEY ? current.riseM : (current.options[key] as number), samples: sampled.map((s) => ({ value: axis.values[s.index] as number, objective: s.value })) });
   }
-  return { full: at(current.options, current.riseM), refinements };
+  const full = at(current.options, current.riseM);
+  return { full, refinements, evaluations: designed.size };
 }

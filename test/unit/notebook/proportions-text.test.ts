@@ -2,6 +2,7 @@
 // unit, the goal, the pins, where the rise came from, and the runner-up's difference.
 import { describe, it, expect } from "vitest";
 import { geodesicDome } from "../../../src/schemes/geodesic-dome";
+import { cableDome } from "../../../src/schemes/cable-dome";
 import type { SchemeModel } from "../../../src/schemes/types";
 import type { ProportionChoice } from "../../../src/pipeline/proportions";
 import { proportionsSentences, proportionText } from "../../../src/notebook/proportions-text";
@@ -54,5 +55,16 @@ describe("proportions in words", () => {
     const text = proportionsSentences(model, lower).join(" ");
     expect(text).toContain("The least found (Target strut length 7 m) is 1.5 % lower: within 2 % of it the proportions nearest their reference are kept");
     expect(text).not.toContain("as good");
+  });
+
+  it("says when the candidates were compared on the fast first estimate and the chosen ones designed in full, with what was chosen again", () => {
+    const dome = cableDome as unknown as SchemeModel;
+    const full = { ...choice, searched: ["postHeightRatio", "riseM"], pinned: [], proportions: { postHeightRatio: 0.35, riseM: 12.8 }, riseM: 12.8, full: { screening: { analysis: "closed-form" }, options: { analysis: "3d" }, refined: ["riseM", "postHeightRatio"], evaluations: 8 } };
+    const text = proportionsSentences(dome, full).join(" ");
+    expect(text).toContain("The candidates were compared with Analysis: Closed form only (the fast first estimate); the chosen ones are designed with Analysis: 3D nonlinear (sizes from the analysed forces), where the rise and Diagonal rise per bay");
+    expect(text).toContain("were chosen again on 8 such designs");
+    expect(text).toContain("On the first estimate: the runner-up");
+    // without refinements only the two analyses are named
+    expect(proportionsSentences(dome, { ...full, full: { ...full.full, refined: [] } }).join(" ")).toContain("designed with Analysis: 3D nonlinear (sizes from the analysed forces).");
   });
 });
