@@ -156,7 +156,8 @@ const GROWTH = 4;
  * below the answer costs the most of any round (200+ Newton iterations, half the analysis at
  * 250–400 m) and tells little but "more"; one above it passes in a few iterations and predicts the
  * answer well. From 3×: 92 rounds over ten designs (160–400 m held down and free, 60 m, 200 m with
- * tall masts), from 6×: 76, the held-down 250–400 m analyses 2.1–4.5× faster (net9, tmp bench).
+ * tall masts), from 6×: 76, the held-down 250–400 m analyses 2.1–4.5× faster (net9, measured;
+ * `npm run bench -- net` prints the rounds per design).
  */
 const START_OF_SEED = 6;
 /** Least radial prestress tried, as a share of the heaviest combination's load per radial cable (a floor for the search, not a design value). */
