@@ -2,6 +2,7 @@
 //   npm run bench               everything
 //   npm run bench -- designs    only the design() timings (no build, no browser)
 //   npm run bench -- dome       the cable dome's 3D prestress against the closed form's, 60–300 m
+//   npm run bench -- net        the cable net's full 3D design across the spans (CPU, model size, prestress rounds)
 import { execFileSync } from "node:child_process";
 import { readFileSync, readdirSync, existsSync, statSync } from "node:fs";
 import { gzipSync } from "node:zlib";
@@ -256,4 +257,6 @@ const analysisBench = "./analysis.ts";
 if (!only || only === "analysis") await import(analysisBench);
 const domeBench = "./dome.ts";
 if (!only || only === "dome") await import(domeBench);
+const netBench = "./net-spans.ts";
+if (!only || only === "net") await import(netBench);
 if (existsSync("test/bench/risk.ts") && (!only || only === "risk")) await import(riskBench);
