@@ -28,3 +28,12 @@ export async function openPage(browser: Browser, url: string): Promise<{ page: P
   await page.goto(url);
   return { page, errors };
 }
+
+/**
+ * Waits until a page's results have all arrived: no cell busy (the design workers' results) and,
+ * on the span study, both passes done (the tension roofs' 3D pass ends some seconds after the charts
+ * first appear, and redraws them).
+ */
+export async function resultsSettled(page: Page, timeoutMs = 180_000): Promise<void> {
+  await page.waitForFunction(() => document.querySelectorAll("[aria-busy=true]").length === 0 && !document.querySelector("#span-progress"), undefined, { timeout: timeoutMs, polling: 200 });
+}

@@ -5,7 +5,7 @@
 import { describe, it, expect, beforeAll, afterAll, inject } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { readFileSync } from "node:fs";
-import { launchChromium } from "./browser";
+import { launchChromium, resultsSettled } from "./browser";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -148,6 +148,7 @@ describe("every chart saves as the whole figure", () => {
     it(file, async () => {
       const { page, errors, close } = await open(`${inject("baseUrl")}/${file}`);
       await page.waitForSelector(".figure svg", { timeout: 60_000 });
+      await resultsSettled(page);
       // Open every lazily drawn section (the compare page's drawings) so its charts are saved too.
       for (const summary of await page.locator("details > summary").all()) await summary.click();
       await page.waitForTimeout(500);
@@ -160,6 +161,8 @@ describe("every chart saves as the whole figure", () => {
   it("span-study.html", async () => {
     const { page, errors, close } = await open(`${inject("baseUrl")}/span-study.html`);
     await page.waitForSelector("#cell-span-charts svg", { timeout: 60_000 });
+    await resultsSettled(page);
+    await page.waitForTimeout(500);
     total["span-study.html"] = await checkEveryFigure(page, 2);
     expect(errors).toEqual([]);
     await close();
