@@ -12,7 +12,7 @@ const declarations = {
   /** Radial cables from each mast head (half out to the edge, half in to the central ring). */
   radialCablesPerMast: { kind: "number", label: "Radial cables per mast", unit: "", min: 2, max: 40, step: 2, integer: true, default: 8, source: "common practice, no source" },
   // default: fabric panels 5–8 m (common practice, no source)
-  hangerSpacingM: { kind: "number", label: "Hanger (circumferential cable) spacing", unit: "m", min: 2, max: 15, step: 0.5, default: 6, source: "common practice, no source" },
+  hangerSpacingM: { kind: "number", label: "Hanger (circumferential cable) spacing, at most", unit: "m", min: 2, max: 15, step: 0.5, default: 6, source: "common practice, no source; the cables are spaced evenly in each bay (central ring to masts, masts to edge), as few as keep them this far apart at most" },
   ...FABRIC_OPTION,
   /** Plain masts buckle over their full length; braced masts over half (guyed at mid-height). */
   mastType: { kind: "select", label: "Mast type", choices: [{ value: "plain", label: "Plain tube (buckles over full length)" }, { value: "braced", label: "Braced at mid-height (half length)" }], default: "braced", source: "assumption: braced L_cr = L/2" },
