@@ -8,7 +8,8 @@ import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { cableNet } from "../../src/schemes/cable-net";
 import { cableDome } from "../../src/schemes/cable-dome";
 import type { Design, SchemeModel } from "../../src/schemes/types";
-import { defaultStudy } from "../../src/study";
+import { readFileSync } from "node:fs";
+import { defaultStudy, studyFromJson, type Study } from "../../src/study";
 import { briefAtSpan, designAtBestProportions } from "../../src/pipeline";
 
 const catalogue = defaultCatalogue();
@@ -36,9 +37,8 @@ function jumpsOf(at: readonly number[], designs: readonly Design[]): string[] {
   return found;
 }
 
-/** The scheme at its searched proportions on the default study (the pipeline's one rule), with options set, at each span. */
-function searchedJumps(model: SchemeModel, at: readonly number[], options: Record<string, string>): string[] {
-  const study = defaultStudy();
+/** The scheme at its searched proportions on a study (the pipeline's one rule), with options set, at each span. */
+function searchedJumps(model: SchemeModel, at: readonly number[], options: Record<string, string>, study: Study = defaultStudy()): string[] {
   const setting = study.schemes[model.id];
   return jumpsOf(at, at.map((spanM) => designAtBestProportions(model, briefAtSpan(study.brief, spanM), { ...setting, options: { ...setting?.options, ...options } }, study, catalogue).design));
 }
@@ -58,4 +58,12 @@ describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
   // where the 3D net is heaviest); after the layout alone, +19.1 % at 65 → 70 m and +18.6 % at 95 → 100 m.
   // Measured after both: largest step 11.6 % (self-weight, 65 → 70 m).
   it("cable net with the 3D analysis at its searched proportions, 60–105 m", () => expect(searchedJumps(cableNet as unknown as SchemeModel, spans.filter((s) => s >= 60 && s <= 105), { analysis: "3d" })).toEqual([]), 600_000);
+  // Still failing on the demo study (expected to fail, so that the day it holds this says so): self-weight +15.5 %
+  // at 100 → 105 m (carbon, the objective, +2.9 %): the refined mast height moves 0.11 → 0.14, on the edge of the
+  // 2 % band around a quadratic through three samples, where the self-weight is steeper than the carbon.
+  it.fails("cable net with the 3D analysis at its searched proportions on the demo study, 95–105 m (known to fail)", () => {
+    const loaded = studyFromJson(readFileSync("data/demo-study.json", "utf8"));
+    if (!loaded.ok) throw new Error("the demo study does not load");
+    expect(searchedJumps(cableNet as unknown as SchemeModel, [95, 100, 105], { analysis: "3d" }, loaded.study)).toEqual([]);
+  }, 600_000);
 });
