@@ -8,6 +8,9 @@ import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { cableNet } from "../../src/schemes/cable-net";
 import { cableDome } from "../../src/schemes/cable-dome";
 import type { Design, SchemeModel } from "../../src/schemes/types";
+import { readFileSync } from "node:fs";
+import { defaultStudy, studyFromJson, type Study } from "../../src/study";
+import { briefAtSpan, designAtBestProportions } from "../../src/pipeline";
 
 const catalogue = defaultCatalogue();
 const spans = Array.from({ length: 73 }, (_, i) => 40 + 5 * i);
@@ -18,17 +21,26 @@ const metrics: [string, (d: Design) => number][] = [
 ];
 
 function jumps(model: SchemeModel, options: Record<string, string> = {}): string[] {
-  const designs = spans.map((spanM) => model.design({ ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM }, { ...model.defaults, ...options }, catalogue));
+  return jumpsOf(spans, spans.map((spanM) => model.design({ ...DEFAULT_BRIEF, spanM, riseM: (spanM * DEFAULT_BRIEF.riseM) / DEFAULT_BRIEF.spanM }, { ...model.defaults, ...options }, catalogue)));
+}
+
+function jumpsOf(at: readonly number[], designs: readonly Design[]): string[] {
   const found: string[] = [];
   designs.forEach((d, i) => {
     const prev = designs[i - 1];
     if (!prev || prev.status !== "feasible" || d.status !== "feasible") return;
     for (const [name, metric] of metrics) {
       const [a, b] = [metric(prev), metric(d)];
-      if (Math.abs(b - a) > 0.15 * Math.abs(a)) found.push(`${name} ${a.toFixed(3)} → ${b.toFixed(3)} between ${spans[i - 1]} and ${spans[i]} m`);
+      if (Math.abs(b - a) > 0.15 * Math.abs(a)) found.push(`${name} ${a.toFixed(3)} → ${b.toFixed(3)} between ${at[i - 1]} and ${at[i]} m`);
     }
   });
   return found;
+}
+
+/** The scheme at its searched proportions on a study (the pipeline's one rule), with options set, at each span. */
+function searchedJumps(model: SchemeModel, at: readonly number[], options: Record<string, string>, study: Study = defaultStudy()): string[] {
+  const setting = study.schemes[model.id];
+  return jumpsOf(at, at.map((spanM) => designAtBestProportions(model, briefAtSpan(study.brief, spanM), { ...setting, options: { ...setting?.options, ...options } }, study, catalogue).design));
 }
 
 describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
@@ -39,4 +51,19 @@ describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
   it("cable dome with the 3D analysis", () => expect(jumps(cableDome as unknown as SchemeModel, { analysis: "3d" })).toEqual([]), 600_000);
   it("cable dome, closed form (the default)", () => expect(jumps(cableDome as unknown as SchemeModel)).toEqual([]), 600_000);
   it("cable net", () => expect(jumps(cableNet as unknown as SchemeModel)).toEqual([]), 600_000);
+  // The net designed in 3D at the proportions the search chose (screened by the closed form, then its rise and mast
+  // height refined on 3D designs: declaration.ts), 60–105 m, where it keeps 3 masts (4 from 110 m, a named regime).
+  // Before smooth9: self-weight −29.2 % at 60 → 65 m (a circumferential cable passing 0.3 m beside the mast heads:
+  // geometry.ts evenlyBetween) and +16.5 % at 95 → 100 m (the closed form's mast height 0.19 and rise 0.055 × span,
+  // where the 3D net is heaviest); after the layout alone, +19.1 % at 65 → 70 m and +18.6 % at 95 → 100 m.
+  // Measured after both: largest step 11.6 % (self-weight, 65 → 70 m).
+  it("cable net with the 3D analysis at its searched proportions, 60–105 m", () => expect(searchedJumps(cableNet as unknown as SchemeModel, spans.filter((s) => s >= 60 && s <= 105), { analysis: "3d" })).toEqual([]), 600_000);
+  // Still failing on the demo study (expected to fail, so that the day it holds this says so): self-weight +15.5 %
+  // at 100 → 105 m (carbon, the objective, +2.9 %): the refined mast height moves 0.11 → 0.14, on the edge of the
+  // 2 % band around a quadratic through three samples, where the self-weight is steeper than the carbon.
+  it.fails("cable net with the 3D analysis at its searched proportions on the demo study, 95–105 m (known to fail)", () => {
+    const loaded = studyFromJson(readFileSync("data/demo-study.json", "utf8"));
+    if (!loaded.ok) throw new Error("the demo study does not load");
+    expect(searchedJumps(cableNet as unknown as SchemeModel, [95, 100, 105], { analysis: "3d" }, loaded.study)).toEqual([]);
+  }, 600_000);
 });

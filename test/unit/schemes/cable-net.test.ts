@@ -111,6 +111,32 @@ describe("circumferentialSpanM", () => {
   });
 });
 
+describe("cableNetLayout: circumferential cables", () => {
+  // our rule (geometry.ts evenlyBetween): evenly within each bay, at most the hanger spacing apart, none at the mast ring
+  const bays = (l: ReturnType<typeof cableNetLayout>) => [
+    [l.centralRingRadiusM, ...l.hoopRadiiM.filter((r) => r < l.mastRadiusM), l.mastRadiusM],
+    [l.mastRadiusM, ...l.hoopRadiiM.filter((r) => r > l.mastRadiusM), l.cap.baseRadiusM],
+  ];
+  it.each([
+    [60, 3, 0.65, 6],
+    [65, 3, 0.65, 6],
+    [160, 12, 0.6, 6],
+    [300, 10, 0.45, 7.5],
+  ])("%d m, %d masts at %f of the radius, %f m: evenly spaced in each bay, as few as keep them ≤ the spacing apart", (spanM, masts, ring, spacing) => {
+    const layout = cableNetLayout({ ...DEFAULT_BRIEF, spanM, riseM: 0.1 * spanM }, masts, ring, 0.15, 8, spacing);
+    for (const radii of bays(layout)) {
+      const gaps = radii.slice(1).map((r, i) => r - (radii[i] as number));
+      for (const g of gaps) expectRelClose(g, (gaps[0] as number), 1e-9);
+      expect(gaps[0]).toBeLessThanOrEqual(spacing + 1e-9);
+      expect(((radii.length - 1) * (gaps[0] as number)) / (radii.length - 2)).toBeGreaterThan(spacing); // one cable fewer would leave a gap wider than the spacing
+    }
+  });
+  it("at 60 m (3 masts at 0.65 × the radius) none passes within half a spacing of the mast heads (laid out every 6 m from the ring, one passed 0.3 m outside)", () => {
+    const layout = cableNetLayout({ ...DEFAULT_BRIEF, spanM: 60, riseM: 3 }, 3, 0.65, 0.15, 8, 6);
+    for (const r of layout.hoopRadiiM) expect(Math.abs(r - layout.mastRadiusM)).toBeGreaterThan(3);
+  });
+});
+
 describe("cableNet on the shared design basis (issue 12)", () => {
   const d = design();
   it("the masts inside the plan take their clear zones out of the usable floor", () => {
