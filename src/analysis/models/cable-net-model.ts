@@ -69,7 +69,7 @@ export interface CableNetModel {
   mastHeads: number[];
   anchors: number[];
   ringNodes: number[];
-  /** Plan tributary area of each node (0 at held nodes: their load goes straight to the support), m². */
+  /** Plan tributary area of each node (0 at the mast heads; at the held edge anchors the outer half-strip, whose load goes straight into their reactions), m². */
   areaM2: number[];
   /** The real circumferential cables (indices into hoopRadiiM) each analysed one stands for, by its index − 1. */
   hoopGroups: number[][];
@@ -176,8 +176,14 @@ function tributaryAreas(input: CableNetModelInput, t: Topology, groups: readonly
       area[c.node] = bandM2 * (ring.length === 1 ? 2 * Math.PI : span);
     });
   };
-  share(t.ringNodes.map((node) => ({ node, angle: Math.atan2(t.nodes[node]![1], t.nodes[node]![0]) })), band(0, 0));
+  const around = (nodes: readonly number[]) => nodes.map((node) => ({ node, angle: Math.atan2(t.nodes[node]![1], t.nodes[node]![0]) }));
+  share(around(t.ringNodes), band(0, 0));
   t.onHoop.forEach((ring, g) => share(ring, band(groups[g]![0]! + 1, groups[g]![groups[g]!.length - 1]! + 1)));
+  // the outer half-strip, from half-way to the last circumferential cable out to the edge, to the edge anchors: held, so
+  // its load goes straight into their reactions (it was carried by no node: the anchors' uplift missed it)
+  const a = input.edgeRadiusM;
+  const lastMid = mid(radii.length - 2);
+  share(around([...t.anchors].sort((x, y) => Math.atan2(t.nodes[x]![1], t.nodes[x]![0]) - Math.atan2(t.nodes[y]![1], t.nodes[y]![0]))), (a * a - lastMid * lastMid) / 2);
   return area;
 }
 
