@@ -19,9 +19,11 @@ describe("cableNetModel (force density form finding of a mast-supported net)", (
     expect(net.model.supports.map((s) => s.node).sort((a, b) => a - b)).toEqual([...net.mastHeads, ...net.anchors].sort((a, b) => a - b));
   });
 
-  it("the tributary areas cover the plan inside the band the edge anchors take: π((r_last + a)/2)²", () => {
+  it("the tributary areas cover the whole plan πa², the edge anchors the band outside π((r_last + a)/2)²", () => {
     const total = net.areaM2.reduce((s, a) => s + a, 0);
-    expect(Math.abs(total / (Math.PI * ((25 + 30) / 2) ** 2) - 1)).toBeLessThan(1e-9);
+    expect(Math.abs(total / (Math.PI * 30 ** 2) - 1)).toBeLessThan(1e-9);
+    const anchors = net.anchors.reduce((s, k) => s + (net.areaM2[k] as number), 0);
+    expect(Math.abs(anchors / (Math.PI * (30 ** 2 - ((25 + 30) / 2) ** 2)) - 1)).toBeLessThan(1e-9);
   });
 
   it("is in equilibrium under the permanent load it was found for: Newton–Raphson moves it by nothing", () => {
