@@ -62,7 +62,7 @@ reactiveCell(main, { id: "status" }, () => {
   }
   const spans = new Set(s.points.map((p) => p.spanM)).size;
   const workers = `in ${s.workers} background worker${s.workers > 1 ? "s" : ""}`;
-  const passes = s.again.length === 0 ? "" : `: every scheme in ${fmt.int(s.screeningMs)} ms with ${namesOf(s.again)} by the closed form, then those by the 3D analysis, as on the compare page`;
+  const passes = s.again.length === 0 ? "" : `: every scheme in ${fmt.int(s.screeningMs)} ms with ${namesOf(s.again)} by the closed form, then again by the 3D analysis, as on the compare page`;
   return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (${workers}${passes}).`;
 });
 
