@@ -1,7 +1,7 @@
 import type { Catalogue } from "../catalogue/types";
 import type { DesignStatus, SchemeId } from "../schemes/types";
 import { SCHEMES } from "../schemes";
-import { evaluateStudy, screensDifferently, type Depth, type SchemeResult, type StudyInputs } from "../pipeline";
+import { evaluateStudy, screensDifferently, type Depth, type SchemeResult, type ScreenedChoice, type StudyInputs } from "../pipeline";
 
 /** One scheme at one span: the figures the span-study charts draw. */
 export interface SpanPoint {
@@ -22,6 +22,8 @@ export interface SpanPoint {
   carbonKgCO2ePerM2Floor: number;
   costPerM2Floor: number;
   massToAir: number;
+  /** From a "screening" pass, for a scheme designed again: what its search chose (the second pass starts from it). */
+  screened?: ScreenedChoice;
 }
 
 export interface SpanRange {
@@ -51,6 +53,8 @@ export interface SpanStudyOptions {
   onResult?: (spanM: number, result: SchemeResult) => void;
   /** "full" (default: every scheme as the compare page designs it) or "screening" (the tension roofs by their closed form: the page's fast first pass). */
   depth?: Depth;
+  /** With depth "full": the screening pass's points of the same study; the schemes that have `screened` there are designed in full from it without searching again. */
+  screenedPoints?: readonly SpanPoint[];
 }
 
 /**
@@ -81,6 +85,7 @@ function spanPoint(spanM: number, result: SchemeResult): SpanPoint {
     carbonKgCO2ePerM2Floor: ok && f.carbonKgCO2ePerM2Floor !== null ? f.carbonKgCO2ePerM2Floor : Number.NaN,
     costPerM2Floor: ok && f.costPerM2Floor !== null ? f.costPerM2Floor : Number.NaN,
     massToAir: ok ? f.massToAir : Number.NaN,
+    ...(result.screened ? { screened: result.screened } : {}),
   };
 }
 
@@ -93,7 +98,8 @@ export function runSpanStudy(study: StudyInputs, catalogue: Catalogue, range: Sp
   const points: SpanPoint[] = [];
   const spans = Array.isArray(range) ? range : spansOf(range as SpanRange, options.maxSpans);
   for (const spanM of spans) {
-    const evaluation = evaluateStudy(study, catalogue, { spanM, ...(options.schemeIds ? { schemeIds: options.schemeIds } : {}), ...(options.depth ? { depth: options.depth } : {}) });
+    const screened = Object.fromEntries((options.screenedPoints ?? []).filter((p) => p.spanM === spanM && p.screened).map((p) => [p.id, p.screened]));
+    const evaluation = evaluateStudy(study, catalogue, { spanM, screened, ...(options.schemeIds ? { schemeIds: options.schemeIds } : {}), ...(options.depth ? { depth: options.depth } : {}) });
     for (const result of evaluation.results) {
       options.onResult?.(spanM, result);
       points.push(spanPoint(spanM, result));

@@ -10,12 +10,13 @@ export const spanWorkerApi = {
   /**
    * The study's enabled schemes at each of these spans: "screening", every scheme as its proportion
    * search screens it (the tension roofs by their closed form, the fast first pass); "again", only the
-   * schemes whose full design differs (the tension roofs by the 3D analysis), fully.
+   * schemes whose full design differs (the tension roofs by the 3D analysis), fully, each from its
+   * screening point's search (`screened`: the first pass's points at these spans) without searching again.
    */
-  run(study: Study, spans: number[], pass: "screening" | "again"): SpanPoint[] {
+  run(study: Study, spans: number[], pass: "screening" | "again", screened: SpanPoint[] = []): SpanPoint[] {
     if (pass === "screening") return runSpanStudy(study, catalogue, spans, { depth: "screening" });
     const again = schemesDesignedAgain(study);
-    return again.length === 0 ? [] : runSpanStudy(study, catalogue, spans, { schemeIds: again });
+    return again.length === 0 ? [] : runSpanStudy(study, catalogue, spans, { schemeIds: again, screenedPoints: screened });
   },
   /** The enabled schemes the second pass designs again (their labels are on the page). */
   designedAgain(study: Study): string[] {

@@ -76,7 +76,8 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
       report();
       await Promise.all(pool.map(async (worker) => {
         for (let chunk = queue.shift(); chunk !== undefined && id === latest; chunk = queue.shift()) {
-          parts.push(await worker.api.run(current, chunk, name));
+          // the second pass sends each span's screening points of the schemes it designs again: their searches are not repeated
+          parts.push(await worker.api.run(current, chunk, name, name === "again" ? (shown ?? []).filter((p) => p.screened && chunk.includes(p.spanM)) : []));
           done += chunk.length;
           if (id === latest) report();
         }

@@ -4,7 +4,7 @@ import type { Design, OptionValue, SchemeId, SchemeModel, SchemeOptions } from "
 import { SCHEMES, infeasibleDesign, isDesignAnswer } from "../schemes";
 import { messageOf } from "../kernel/errors";
 import { designCarbonPerM2Floor, designCost, schemeResult, type SchemeResult } from "./scheme-result";
-import { commonRiseM, dimensionsOf, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice } from "./proportions";
+import { commonRiseM, dimensionsOf, riseSettingFor, searchProportions, RISE_KEY, type Objective, type ProportionChoice, type ScreenedChoice } from "./proportions";
 import type { SchemeSetting, StudyInputs } from "./study-inputs";
 import { refineInFull } from "./refine-in-full";
 
@@ -24,6 +24,12 @@ export interface EvaluateOptions {
    * screening options (the tension roofs by the closed form) — the span study's fast first pass.
    */
   depth?: Depth;
+  /**
+   * With depth "full": the screening choices an earlier "screening" evaluation of the same study at
+   * the same span returned (`SchemeResult.screened`), by scheme; those schemes skip their search and
+   * are designed in full from it (the span study's second pass).
+   */
+  screened?: Partial<Record<SchemeId, ScreenedChoice>>;
 }
 
 /** How far a scheme is designed: with its full options, or only as the proportion search screens it. */
@@ -56,8 +62,8 @@ export function evaluateStudy(study: StudyInputs, catalogue: Catalogue, options:
   const brief = options.spanM === undefined ? study.brief : briefAtSpan(study.brief, options.spanM);
   const chosen = options.schemeIds ? SCHEMES.filter((m) => options.schemeIds?.includes(m.id)) : SCHEMES.filter((m) => study.schemes[m.id]?.enabled !== false);
   const results = chosen.map((model) => {
-    const searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue, options.depth);
-    return { ...schemeResult(model.id, model.label, searched.design, study), brief: searched.brief, proportions: searched.proportions };
+    const searched = designAtBestProportions(model, brief, study.schemes[model.id], study, catalogue, options.depth, options.screened?.[model.id]);
+    return { ...schemeResult(model.id, model.label, searched.design, study), brief: searched.brief, proportions: searched.proportions, ...(searched.screened ? { screened: searched.screened } : {}) };
   });
   return { brief, results };
 }
@@ -82,6 +88,8 @@ export interface SearchedDesign {
   /** The brief this scheme was designed for: the evaluated brief with the scheme's own rise. */
   brief: Brief;
   proportions: ProportionChoice;
+  /** At depth "screening", for a scheme whose full design differs: the search's choice, from which `designAtBestProportions` can design it in full later without searching again. */
+  screened?: ScreenedChoice;
 }
 
 /** The options a search candidate is designed with: the scheme's screening options, except those the user pinned. */
@@ -97,9 +105,19 @@ function screened(model: SchemeModel, options: SchemeOptions, pinned: readonly s
  * rise within the scheme's rise ÷ span range and the height limit. The brief is at its span, its
  * rise the common rise there (briefAtSpan). Candidates are designed with the scheme's screening
  * options when it declares any; the chosen proportions are then designed with the full options and
- * that design's value reported (the runner-up's difference stays the screening one).
+ * that design's value reported (the runner-up's difference stays the screening one). Given
+ * `screenedBefore` (the `screened` a "screening" call for the same brief and setting returned), a
+ * full design starts from it without searching again.
  */
-export function designAtBestProportions(model: SchemeModel, brief: Brief, setting: SchemeSetting | undefined, study: Pick<StudyInputs, "carbon" | "cost">, catalogue: Catalogue, depth: Depth = "full"): SearchedDesign {
+export function designAtBestProportions(
+  model: SchemeModel,
+  brief: Brief,
+  setting: SchemeSetting | undefined,
+  study: Pick<StudyInputs, "carbon" | "cost">,
+  catalogue: Catalogue,
+  depth: Depth = "full",
+  screenedBefore?: ScreenedChoice,
+): SearchedDesign {
   const objective = brief.objective;
   const options = { ...model.defaults, ...(setting?.options ?? {}) };
   const pinned = setting?.pinned ?? [];
@@ -110,23 +128,25 @@ export function designAtBestProportions(model: SchemeModel, brief: Brief, settin
   }
   // with nothing to search the full options are designed at once, unless only the screening design is asked for
   const screening = depth === "screening" || dimensionsOf(model, options, pinned, rise).length > 0 ? screened(model, options, pinned) : options;
-  const { chosen, choice } = searchProportions(
-    model,
-    screening,
-    pinned,
-    rise,
-    objective,
-    (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue),
-    (design) => objectiveValue(design, study, objective),
-    brief.spanM,
-  );
-  if (screening === options || depth === "screening") return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice };
-  const start = { options: { ...chosen.options, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, riseM: chosen.riseM };
-  const { full, refinements, evaluations } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, (opts, riseM) => designScheme(model, { ...brief, riseM }, opts, catalogue), (design) => objectiveValue(design, study, objective));
+  const designAt = (opts: SchemeOptions, riseM: number) => designScheme(model, { ...brief, riseM }, opts, catalogue);
+  const assess = (design: Design) => objectiveValue(design, study, objective);
+  const search = () => searchProportions(model, screening, pinned, rise, objective, designAt, assess, brief.spanM);
+  if (screening === options || depth === "screening") {
+    const { chosen, choice } = search();
+    const kept = screening === options ? {} : { screened: { options: chosen.options, riseM: chosen.riseM, choice } };
+    return { design: chosen.design, brief: { ...brief, riseM: chosen.riseM }, proportions: choice, ...kept };
+  }
+  const { options: chosenOptions, riseM: chosenRiseM, choice } = screenedBefore ?? screenedChoiceOf(search());
+  const start = { options: { ...chosenOptions, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, riseM: chosenRiseM };
+  const { full, refinements, evaluations } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, designAt, assess);
   const refined = Object.fromEntries(refinements.map((r) => [r.key, r.value]));
   const differing = Object.keys(model.screeningOptions ?? {}).filter((k) => screening[k] !== options[k]);
   const fullChoice = { screening: pick(screening, differing), options: pick(options, differing), refined: refinements.map((r) => r.key), evaluations };
   return { design: full.design, brief: { ...brief, riseM: full.riseM }, proportions: { ...choice, proportions: { ...choice.proportions, ...refined }, riseM: full.riseM, value: full.objective, full: fullChoice } };
+}
+
+function screenedChoiceOf({ chosen, choice }: ReturnType<typeof searchProportions>): ScreenedChoice {
+  return { options: chosen.options, riseM: chosen.riseM, choice };
 }
 
 /**

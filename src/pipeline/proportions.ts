@@ -45,6 +45,13 @@ export interface ProportionChoice {
   full?: { screening: Record<string, OptionValue>; options: Record<string, OptionValue>; refined: string[]; evaluations: number };
 }
 
+/** What a screening search chose: the candidate's options and rise, and the choice as reported. Plain data (it crosses to and from the span study's workers). */
+export interface ScreenedChoice {
+  options: SchemeOptions;
+  riseM: number;
+  choice: ProportionChoice;
+}
+
 /** One searchable dimension: its values in order, and the index to start from. */
 interface Dimension {
   key: string;

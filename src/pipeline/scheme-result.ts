@@ -7,7 +7,7 @@ import { assessCarbon, countedCarbonPerM2UsableFloor, type CarbonAssessment } fr
 import { assessCost, type CostAssessment } from "../cost";
 import { messageOf } from "../kernel/errors";
 import { schemeFigures, type SchemeFigures } from "./figures";
-import type { ProportionChoice } from "./proportions";
+import type { ProportionChoice, ScreenedChoice } from "./proportions";
 import type { StudyInputs } from "./study-inputs";
 
 /** One scheme's design with its carbon and cost, and the figures read from them. */
@@ -26,6 +26,8 @@ export interface SchemeResult {
   brief?: Brief;
   /** The proportions the search chose (and the rise used), with the runner-up. */
   proportions?: ProportionChoice;
+  /** From a "screening" evaluation, for a scheme whose full design differs: what its search chose (a later full evaluation starts from it). */
+  screened?: ScreenedChoice;
 }
 
 function attempt<T>(run: () => T): { value: T | null; error: string } {

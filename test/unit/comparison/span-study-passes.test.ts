@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { defaultStudy } from "../../../src/study";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { runSpanStudy, schemesDesignedAgain } from "../../../src/comparison";
-import { evaluateStudy } from "../../../src/pipeline";
+import { briefAtSpan, designAtBestProportions, evaluateStudy } from "../../../src/pipeline";
+import { SCHEMES } from "../../../src/schemes";
 
 // The span study's two passes (issue 13: the tension roofs designed by the 3D analysis by default;
 // the span study shows every scheme by its screening design first, then designs again those whose
@@ -35,5 +36,38 @@ describe("span study passes", () => {
       expect(s?.carbonKgCO2ePerM2Floor).not.toBe(f?.carbonKgCO2ePerM2Floor);
       expect(c?.design.analysis).toBeDefined();
     }
+  });
+
+  it("the second pass starts from the first pass's search: the same designs, without searching again", () => {
+    const ids = ["cable-dome", "truss-roof"] as const;
+    const spans = [90, 160];
+    const screening = runSpanStudy(study, catalogue, spans, { schemeIds: ids, depth: "screening" });
+    // only the scheme designed again keeps its search's choice
+    expect(screening.filter((p) => p.screened).map((p) => `${p.id}@${p.spanM}`)).toEqual(["cable-dome@90", "cable-dome@160"]);
+    const again = runSpanStudy(study, catalogue, spans, { schemeIds: ["cable-dome"], screenedPoints: screening });
+    const searchedAgain = runSpanStudy(study, catalogue, spans, { schemeIds: ["cable-dome"] });
+    expect(again).toEqual(searchedAgain);
+    // it is the screening points that set the start: another hoop count there gives another design
+    const otherHoops = screening.map((p) => (p.screened ? { ...p, screened: { ...p.screened, options: { ...p.screened.options, hoops: (p.screened.options.hoops as number) + 1 } } } : p));
+    const fromOther = runSpanStudy(study, catalogue, spans, { schemeIds: ["cable-dome"], screenedPoints: otherHoops });
+    expect(fromOther.map((p) => p.selfWeightKgPerM2)).not.toEqual(again.map((p) => p.selfWeightKgPerM2));
+
+    // and the search is skipped: counted on the scheme's designs at 160 m
+    const dome = SCHEMES.find((m) => m.id === "cable-dome");
+    if (!dome) throw new Error("no cable dome");
+    let designs = 0;
+    const counted = { ...dome, design: (...args: Parameters<typeof dome.design>) => (designs++, dome.design(...args)) };
+    const brief = briefAtSpan(study.brief, 160);
+    const first = designAtBestProportions(counted, brief, study.schemes["cable-dome"], study, catalogue, "screening");
+    const searchedDesigns = designs;
+    designs = 0;
+    const fromScreened = designAtBestProportions(counted, brief, study.schemes["cable-dome"], study, catalogue, "full", first.screened);
+    const fullDesigns = designs;
+    designs = 0;
+    const whole = designAtBestProportions(counted, brief, study.schemes["cable-dome"], study, catalogue, "full");
+    expect(designs).toBe(searchedDesigns + fullDesigns);
+    expect(fullDesigns).toBeLessThan(searchedDesigns);
+    expect(fromScreened.proportions).toEqual(whole.proportions);
+    expect(fromScreened.design.totalMassKg).toBe(whole.design.totalMassKg);
   });
 });
