@@ -45,8 +45,8 @@ function replaced(earlier: readonly SpanPoint[], later: readonly SpanPoint[]): S
  * or the range changes, in two passes: every scheme as its proportion search screens it (the
  * tension roofs by their closed form: the whole picture within seconds), then the schemes whose
  * full design differs (the tension roofs by the 3D analysis, as on the compare page), whose points
- * replace their screening ones when that pass ends. The spans are dealt out a few at a time to
- * whichever worker is free, so the progress bar moves and a newer request stops the older one after
+ * replace their screening ones when that pass ends. The spans are dealt out a few at a time, largest
+ * first, to whichever worker is free, so the progress bar moves and a newer request stops the older one after
  * the calls already running; while one runs the previous points stay on screen.
  */
 export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySignal<SpanRange>): ReadonlySignal<SpanStudyState> {
@@ -67,7 +67,8 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
     const started = performance.now();
     /** One pass: its chunks dealt to the free workers; the points, or null when a newer request took over. */
     const pass = async (name: "screening" | "again", shown: SpanPoint[] | null, again: string[], screeningMs?: number): Promise<SpanPoint[] | null> => {
-      const queue = chunks(spans, SPANS_PER_CALL[name]);
+      // the largest spans first: they take longest, so the workers finish together rather than one waiting on the last large chunk
+      const queue = chunks([...spans].reverse(), SPANS_PER_CALL[name]);
       const parts: SpanPoint[][] = [];
       let done = 0;
       const report = () => {
