@@ -114,8 +114,10 @@ interface Scratch {
   /** Per node: the generation in which it was found in the cap, and on the ring. */
   nodeSeen: Int32Array;
   ringSeen: Int32Array;
+  /** The cut's edges in the order geodesicCap numbers them (a typed array: pushing onto an array was a fifth of a cut). */
+  order: Int32Array;
 }
-const scratch: Scratch = { generation: 0, edgeSeen: new Int32Array(0), faceUse: new Int32Array(0), nodeSeen: new Int32Array(0), ringSeen: new Int32Array(0) };
+const scratch: Scratch = { generation: 0, edgeSeen: new Int32Array(0), faceUse: new Int32Array(0), nodeSeen: new Int32Array(0), ringSeen: new Int32Array(0), order: new Int32Array(0) };
 
 function nextGeneration(nodeCount: number, edgeCount: number): number {
   if (scratch.ringSeen.length < nodeCount || scratch.edgeSeen.length < edgeCount) {
@@ -123,6 +125,7 @@ function nextGeneration(nodeCount: number, edgeCount: number): number {
     scratch.nodeSeen = new Int32Array(scratch.ringSeen.length);
     scratch.edgeSeen = new Int32Array(Math.max(edgeCount, scratch.edgeSeen.length));
     scratch.faceUse = new Int32Array(scratch.edgeSeen.length);
+    scratch.order = new Int32Array(scratch.edgeSeen.length);
     scratch.generation = 0;
   }
   return ++scratch.generation;
@@ -130,10 +133,11 @@ function nextGeneration(nodeCount: number, edgeCount: number): number {
 
 /**
  * The sphere edges of the kept triangles in the order geodesicCap numbers them (first use, face by
- * face), and how many triangles were kept; scratch.faceUse holds how many kept faces use each edge.
+ * face) into scratch.order, and how many edges and triangles were kept; scratch.faceUse holds how
+ * many kept faces use each edge.
  */
-function cutEdges(s: GeodesicSphere, table: EdgeTable, zCut: number, capAngleRad: number, generation: number): { order: number[]; faceCount: number } {
-  const order: number[] = [];
+function cutEdges(s: GeodesicSphere, table: EdgeTable, zCut: number, capAngleRad: number, generation: number): { edgeCount: number; faceCount: number } {
+  let edgeCount = 0;
   let faceCount = 0;
   const lowest = zCut - CUT_TOLERANCE;
   for (let f = 0; f < 20; f++) {
@@ -146,23 +150,24 @@ function cutEdges(s: GeodesicSphere, table: EdgeTable, zCut: number, capAngleRad
         if (scratch.edgeSeen[e] !== generation) {
           scratch.edgeSeen[e] = generation;
           scratch.faceUse[e] = 1;
-          order.push(e);
+          scratch.order[edgeCount++] = e;
         } else scratch.faceUse[e] = scratch.faceUse[e]! + 1;
       }
     }
   }
-  return { order, faceCount };
+  return { edgeCount, faceCount };
 }
 
 /** Marks the nodes of the cap and those on its ring (the ends of edges used by one kept face); how many nodes the cap has. */
-function markNodes(table: EdgeTable, order: readonly number[], generation: number): number {
+function markNodes(table: EdgeTable, edgeCount: number, generation: number): number {
   let nodeCount = 0;
   const mark = (n: number): void => {
     if (scratch.nodeSeen[n] === generation) return;
     scratch.nodeSeen[n] = generation;
     nodeCount++;
   };
-  for (const e of order) {
+  for (let i = 0; i < edgeCount; i++) {
+    const e = scratch.order[i]!;
     mark(table.p[e]!);
     mark(table.q[e]!);
     if (scratch.faceUse[e] === 1) scratch.ringSeen[table.p[e]!] = scratch.ringSeen[table.q[e]!] = generation;
@@ -200,9 +205,9 @@ export function geodesicCapCut(frequency: number, radiusM: number, capAngleRad: 
   const table = edgeTableOf(s);
   const zCut = Math.cos(capAngleRad);
   const generation = nextGeneration(unit.length / 3, table.p.length);
-  const { order, faceCount } = cutEdges(s, table, zCut, capAngleRad, generation);
-  if (order.length === 0) throw new CapTooSmallError(`invalid cap: no whole triangle of frequency ${frequency} fits within φ0 = ${capAngleRad.toFixed(4)} rad (expected a larger cap or a higher frequency)`);
-  const nodeCount = markNodes(table, order, generation);
+  const { edgeCount, faceCount } = cutEdges(s, table, zCut, capAngleRad, generation);
+  if (edgeCount === 0) throw new CapTooSmallError(`invalid cap: no whole triangle of frequency ${frequency} fits within φ0 = ${capAngleRad.toFixed(4)} rad (expected a larger cap or a higher frequency)`);
+  const nodeCount = markNodes(table, edgeCount, generation);
   const onRing = (n: number) => scratch.ringSeen[n] === generation;
   const ringRadius = Math.sqrt(Math.max(0, 1 - zCut * zCut));
   // a node on the unit sphere, ring nodes moved along their meridian onto the cut circle (ringOntoCut)
@@ -218,12 +223,14 @@ export function geodesicCapCut(frequency: number, radiusM: number, capAngleRad: 
   const bands = emptyBands(capAngleRad, bandCount);
   let ringEdgeCount = 0;
   let ringLengthM = 0;
-  order.forEach((e, index) => {
-    const [a, b] = [table.p[e]!, table.q[e]!];
+  for (let index = 0; index < edgeCount; index++) {
+    const e = scratch.order[index]!;
+    const a = table.p[e]!;
+    const b = table.q[e]!;
     if (!(onRing(a) || onRing(b))) {
       // the midpoint's angle from the crown: the same on the unit sphere as on the nodes in metres
       addToBand(bands[Math.min(bandCount - 1, Math.floor((table.midAngleRad[e]! / capAngleRad) * bandCount))]!, index, table.unitLength[e]! * radiusM);
-      return;
+      continue;
     }
     place(a, 0);
     place(b, 3);
@@ -234,7 +241,7 @@ export function geodesicCapCut(frequency: number, radiusM: number, capAngleRad: 
       ringEdgeCount++;
       ringLengthM += lengthM;
     }
-  });
+  }
   return { bands: finishedBands(bands), nodeCount, faceCount, ringEdgeCount, ringLengthM };
 }
 
