@@ -114,7 +114,7 @@ interface Scratch {
   /** Per node: the generation in which it was found in the cap, and on the ring. */
   nodeSeen: Int32Array;
   ringSeen: Int32Array;
-  /** The cut's edges in the order geodesicCap numbers them (a typed array: pushing onto an array was a fifth of a cut). */
+  /** The cut's edges in the order geodesicCap numbers them (reused: no array grown per cut). */
   order: Int32Array;
 }
 const scratch: Scratch = { generation: 0, edgeSeen: new Int32Array(0), faceUse: new Int32Array(0), nodeSeen: new Int32Array(0), ringSeen: new Int32Array(0), order: new Int32Array(0) };
