@@ -1,4 +1,4 @@
-import type { GeodesicCap } from "./geodesic";
+import type { GeodesicCap, StrutLengths } from "./geodesic";
 
 /** Members of one band of a lattice cap, crown to edge (the ring edges are left out: the ring is sized apart). */
 export interface LatticeBand {
@@ -12,6 +12,7 @@ export interface LatticeBand {
   count: number;
   totalLengthM: number;
   meanLengthM: number;
+  minLengthM: number;
   maxLengthM: number;
   /** Indices of the cap's edges in the band. */
   edges: number[];
@@ -56,6 +57,7 @@ export function emptyBands(capAngleRad: number, bandCount: number): LatticeBand[
     count: 0,
     totalLengthM: 0,
     meanLengthM: 0,
+    minLengthM: Number.POSITIVE_INFINITY,
     maxLengthM: 0,
     edges: [],
   }));
@@ -65,6 +67,7 @@ export function emptyBands(capAngleRad: number, bandCount: number): LatticeBand[
 export function addToBand(band: LatticeBand, e: number, lengthM: number): void {
   band.count += 1;
   band.totalLengthM += lengthM;
+  band.minLengthM = Math.min(band.minLengthM, lengthM);
   band.maxLengthM = Math.max(band.maxLengthM, lengthM);
   band.edges.push(e);
 }
@@ -73,6 +76,14 @@ export function addToBand(band: LatticeBand, e: number, lengthM: number): void {
 export function finishedBands(bands: LatticeBand[]): LatticeBand[] {
   for (const b of bands) b.meanLengthM = b.count > 0 ? b.totalLengthM / b.count : 0;
   return bands.filter((b) => b.count > 0);
+}
+
+/** Length statistics of the members in the bands (each member not on the ring once), as strutLengths gives them over the cap's inner edges. */
+export function bandStrutLengths(bands: readonly LatticeBand[]): StrutLengths {
+  const count = bands.reduce((n, b) => n + b.count, 0);
+  if (count === 0) throw new RangeError("strut lengths require at least one strut");
+  const totalM = bands.reduce((sum, b) => sum + b.totalLengthM, 0);
+  return { minM: Math.min(...bands.map((b) => b.minLengthM)), meanM: totalM / count, maxM: Math.max(...bands.map((b) => b.maxLengthM)), totalM, count };
 }
 
 /**

@@ -5,10 +5,11 @@ import type { Check, DesignParts, MemberGroup } from "../kit";
 import { briefCombinations, capEnvelope, capFloor, check, convergeSelfWeight, drawingWithLazyPlan, UNIFORM_EQUIVALENT_WARNING, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, SchemeError } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
-import { CapTooSmallError, geodesicFrequencyFor, strutLengths, type GeodesicCap } from "../../mechanics/geodesic";
+import { CapTooSmallError, geodesicFrequencyFor } from "../../mechanics/geodesic";
+import { geodesicCapCut, type GeodesicCapCut } from "../../mechanics/geodesic-bands";
 import { hoopSignChangeAngleRad } from "../../mechanics/spherical-membrane";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
-import { latticeBands } from "../../mechanics/lattice-bands";
+import { bandStrutLengths } from "../../mechanics/lattice-bands";
 import { latticeSelfWeightKPa, sizeLattice, type LatticeInputs, type LatticeResult } from "./sizing";
 import { latticePlan, latticeSection } from "./drawing";
 import { analyseNet } from "./analysis";
@@ -18,12 +19,17 @@ import { geodesicDomeDeclaration, type GeodesicDomeOptions } from "./declaration
 /** Usual upper span of a single-layer lattice dome, m (from memory: single-layer braced domes to ≈ 100 m, double-layer beyond). */
 const SINGLE_LAYER_USUAL_MAX_SPAN_M = 100;
 
-/** The geodesic mesh at the frequency whose mean strut meets the target length; a SchemeError when none can be made. */
-function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, section: ReturnType<typeof latticeSection>): { frequency: number; mesh: GeodesicCap } {
+/**
+ * The geodesic mesh at the frequency whose mean strut meets the target length, cut into its bands
+ * (at most `bands`, and half the frequency) from the remembered sphere without building it: the
+ * sizing and the summary read only the bands and counts, the mesh is built for the drawing and the
+ * 3D analysis of the design kept. A SchemeError when the mesh cannot be made.
+ */
+function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, bands: number, section: ReturnType<typeof latticeSection>): { frequency: number; cut: GeodesicCapCut } {
   const frequency = geodesicFrequencyFor(cap.radiusM, targetStrutLengthM);
   if (frequency > 400) throw new SchemeError(`the mesh would need frequency ${frequency} (over 400): increase the target strut length`, { section });
   try {
-    return { frequency, mesh: cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad) };
+    return { frequency, cut: geodesicCapCut(frequency, cap.radiusM, cap.edgeAngleRad, Math.min(bands, Math.max(1, Math.floor(frequency / 2)))) };
   } catch (e) {
     if (e instanceof CapTooSmallError) throw new SchemeError("the mesh is too coarse for so small a cap: reduce the target strut length", { cause: e, section });
     throw e;
@@ -80,13 +86,14 @@ function latticeTakeoff(r: LatticeResult, cladding: ReturnType<typeof findCladdi
   ];
 }
 
-function latticeSummary(r: LatticeResult, mesh: GeodesicCap, frequency: number, cap: SphericalCap, double: boolean) {
-  const innerStruts = strutLengths(mesh.edgeLengthsM, (e) => !mesh.edgeOnRing[e]);
+function latticeSummary(r: LatticeResult, cut: GeodesicCapCut, frequency: number, cap: SphericalCap, double: boolean) {
+  // the bands hold every strut not on the ring once
+  const innerStruts = bandStrutLengths(cut.bands);
   return [
     { key: "frequency", label: "Geodesic frequency v", value: frequency, unit: "" },
-    { key: "nodes", label: "Nodes", value: mesh.nodes.length * (double ? 2 : 1), unit: "nr" },
+    { key: "nodes", label: "Nodes", value: cut.nodeCount * (double ? 2 : 1), unit: "nr" },
     { key: "struts", label: "Struts (lattice, without ring)", value: innerStruts.count * (double ? 2 : 1), unit: "nr" },
-    { key: "faces", label: "Triangular faces", value: mesh.faces.length, unit: "nr" },
+    { key: "faces", label: "Triangular faces", value: cut.faceCount, unit: "nr" },
     { key: "strutMinM", label: "Strut length, shortest", value: innerStruts.minM, unit: "m" },
     { key: "strutMeanM", label: "Strut length, mean", value: innerStruts.meanM, unit: "m" },
     { key: "strutMaxM", label: "Strut length, longest", value: innerStruts.maxM, unit: "m" },
@@ -110,10 +117,13 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
   const depthM = double ? (opts.doubleLayerDepthPct / 100) * brief.spanM : 0;
   const cladding = findCladding(catalogue, opts.cladding);
   const section = latticeSection(brief, depthM);
-  const { frequency, mesh } = latticeMesh(cap, opts.targetStrutLengthM, section);
-  const bands = latticeBands(mesh, Math.min(opts.bands, Math.max(1, Math.floor(frequency / 2))));
-  const lengths = strutLengths(mesh.edgeLengthsM);
-  const webLengthM = double ? Math.hypot(depthM, lengths.meanM / Math.sqrt(3)) : 0;
+  const { frequency, cut } = latticeMesh(cap, opts.targetStrutLengthM, opts.bands, section);
+  // built only for the drawing and the 3D analysis (remembered: both ask for the same cap)
+  const mesh = () => cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad);
+  const inner = bandStrutLengths(cut.bands);
+  // the mean of every strut, ring included
+  const meanStrutM = (inner.totalM + cut.ringLengthM) / (inner.count + cut.ringEdgeCount);
+  const webLengthM = double ? Math.hypot(depthM, meanStrutM / Math.sqrt(3)) : 0;
   const inputs: LatticeInputs = {
     combinations: briefCombinations(brief),
     servicesKPa: brief.servicesKPa,
@@ -121,12 +131,12 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
     capAngleRad: cap.edgeAngleRad,
     baseRadiusM: cap.baseRadiusM,
     surfaceM2: cap.surfaceM2,
-    bands,
+    bands: cut.bands,
     sections: catalogue.chs,
     steel: steelGrade(opts.steelGrade),
     knockDown: opts.knockDown,
     doubleLayerDepthM: depthM,
-    webCount: double ? 3 * mesh.nodes.length : 0,
+    webCount: double ? 3 * cut.nodeCount : 0,
     webLengthM,
     nodeAllowance: opts.nodeAllowancePct / 100,
     claddingKgPerM2: cladding.massKgPerM2,
@@ -148,10 +158,10 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
   const governingBand = r.bands.reduce((worst, b) => (b.choice.utilisation > worst.choice.utilisation ? b : worst));
   const membraneCase = governingBand.bucklingPa > 0 && governingBand.pressurePa / governingBand.bucklingPa >= governingBand.choice.utilisation ? r.heaviestCase : governingBand.governingCase;
   const members = latticeMembers(r, inputs, double);
-  const tooLargeWarning = !double && opts.bucklingAnalysis ? frameTooLarge(mesh.nodes.length, "bar forces from membrane theory; lengthen the target strut") : null;
+  const tooLargeWarning = !double && opts.bucklingAnalysis ? frameTooLarge(cut.nodeCount, "bar forces from membrane theory; lengthen the target strut") : null;
   const tooLarge = tooLargeWarning !== null;
   if (tooLargeWarning) warnings.push(tooLargeWarning);
-  const net = double || !opts.bucklingAnalysis || tooLarge ? null : analyseNet({ brief, cap, mesh, bands: r.bands, selfWeightPlanKPa: latticeSelfWeightKPa(r, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2), steel: inputs.steel, knockDown: opts.knockDown, buckling: opts.bucklingAnalysis });
+  const net = double || !opts.bucklingAnalysis || tooLarge ? null : analyseNet({ brief, cap, mesh: mesh(), bands: r.bands, selfWeightPlanKPa: latticeSelfWeightKPa(r, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2), steel: inputs.steel, knockDown: opts.knockDown, buckling: opts.bucklingAnalysis });
   if (double && opts.bucklingAnalysis) warnings.push("double layer: no 3D analysis of the net (the frame model is single-layer); bar forces from membrane theory only");
   if (!net && !tooLarge) warnings.push("bar forces from membrane theory; the 3D analysis of the net (member forces under drifted snow, buckling factor) runs on demand");
   const maxMembrane = Math.max(...members.checks.map((c) => c.utilisation));
@@ -162,13 +172,13 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
     ...(net ? { analysis: net.analysis } : {}),
     governingLoadCase: net && maxNet > maxMembrane ? net.governingCase : membraneCase,
     regime: double ? "double layer" : "single layer",
-    summary: latticeSummary(r, mesh, frequency, cap, double),
+    summary: latticeSummary(r, cut, frequency, cap, double),
     takeoff: latticeTakeoff(r, cladding, cap),
     warnings,
     iterations: converged.iterations,
     floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: drawingWithLazyPlan(section, () => latticePlan(mesh)),
+    drawing: drawingWithLazyPlan(section, () => latticePlan(mesh())),
   };
 }
 

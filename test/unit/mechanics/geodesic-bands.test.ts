@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
-import { geodesicCap, CapTooSmallError } from "../../../src/mechanics/geodesic";
-import { latticeBands } from "../../../src/mechanics/lattice-bands";
-import { geodesicCapBands } from "../../../src/mechanics/geodesic-bands";
+import { geodesicCap, strutLengths, CapTooSmallError } from "../../../src/mechanics/geodesic";
+import { bandStrutLengths, latticeBands } from "../../../src/mechanics/lattice-bands";
+import { geodesicCapBands, geodesicCapCut } from "../../../src/mechanics/geodesic-bands";
 import { sphericalCap } from "../../../src/mechanics/spherical-cap";
 import { expectRelClose } from "../../helpers/close";
 
@@ -34,6 +34,31 @@ describe("geodesicCapBands: the bands of a cap cut from the remembered sphere", 
       });
     });
   }
+
+  for (const c of CASES) {
+    it(`${c.spanM} m span, ${c.riseM} m rise, frequency ${c.frequency}: node, face and ring counts and strut lengths as on the built cap`, () => {
+      const cap = sphericalCap(c.spanM, c.riseM);
+      const built = geodesicCap(c.frequency, cap.radiusM, cap.edgeAngleRad);
+      const cut = geodesicCapCut(c.frequency, cap.radiusM, cap.edgeAngleRad, c.bandCount);
+      const ringEdges = built.edges.filter((_, e) => built.edgeOnRing[e]);
+      expect([cut.nodeCount, cut.faceCount, cut.ringEdgeCount]).toEqual([built.nodes.length, built.faces.length, ringEdges.length]);
+      expectRelClose(cut.ringLengthM, strutLengths(built.edgeLengthsM, (e) => built.edgeOnRing[e]!).totalM, 1e-12);
+      const inner = strutLengths(built.edgeLengthsM, (e) => !built.edgeOnRing[e]);
+      const fromBands = bandStrutLengths(cut.bands);
+      expect(fromBands.count).toBe(inner.count);
+      for (const key of ["minM", "meanM", "maxM", "totalM"] as const) expectRelClose(fromBands[key], inner[key], 1e-12);
+      // Euler's relation for a triangulated disc: V − E + F = 1 (E counts the ring edges too)
+      expect(cut.nodeCount - (fromBands.count + cut.ringEdgeCount) + cut.faceCount).toBe(1);
+    });
+  }
+
+  it("the whole sphere: no ring, and V − E + F = 2 (Euler)", () => {
+    const cut = geodesicCapCut(6, 10, Math.PI, 3);
+    expect(cut.ringEdgeCount).toBe(0);
+    expect(cut.nodeCount).toBe(10 * 6 * 6 + 2);
+    expect(cut.faceCount).toBe(20 * 6 * 6);
+    expect(cut.nodeCount - bandStrutLengths(cut.bands).count + cut.faceCount).toBe(2);
+  });
 
   it("the same bands when asked again after other caps (scratch arrays reused)", () => {
     const cap = sphericalCap(160, 33.6);

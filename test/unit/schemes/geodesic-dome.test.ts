@@ -3,6 +3,9 @@ import { geodesicDome } from "../../../src/schemes/geodesic-dome";
 import { DEFAULT_BRIEF } from "../../../src/brief";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
+import { sphericalCap } from "../../../src/mechanics/spherical-cap";
+import { geodesicCap, geodesicFrequencyFor, strutLengths } from "../../../src/mechanics/geodesic";
+import { latticeBands } from "../../../src/mechanics/lattice-bands";
 
 const catalogue = defaultCatalogue();
 
@@ -50,4 +53,44 @@ describe("geodesicDome.design", () => {
   it("rejects an out-of-range option, naming it", () => {
     expect(() => geodesicDome.design(DEFAULT_BRIEF, { ...geodesicDome.defaults, knockDown: 2 }, catalogue)).toThrow(/invalid knockDown: 2/);
   });
+});
+
+// The design sizes on the bands cut from the remembered sphere (geodesicCapCut) and builds the mesh
+// only for the drawing and the 3D analysis: its summary, bands and web members must be those of the
+// mesh built (geodesicCap) to the last digits.
+describe("geodesicDome.design without building the mesh: the mesh's own figures", () => {
+  const CASES = [
+    { spanM: 40, riseM: 6, targetStrutLengthM: 3, layers: "single" },
+    { spanM: 100, riseM: 25, targetStrutLengthM: 5, layers: "single" },
+    { spanM: 160, riseM: 24, targetStrutLengthM: 5, layers: "single" },
+    { spanM: 160, riseM: 40, targetStrutLengthM: 8, layers: "double" },
+    { spanM: 250, riseM: 50, targetStrutLengthM: 10, layers: "double" },
+  ] as const;
+  for (const c of CASES) {
+    it(`${c.spanM} m span, ${c.riseM} m rise, ${c.targetStrutLengthM} m struts, ${c.layers} layer`, () => {
+      const opts = { ...geodesicDome.defaults, targetStrutLengthM: c.targetStrutLengthM, layers: c.layers };
+      const d = geodesicDome.design({ ...DEFAULT_BRIEF, spanM: c.spanM, riseM: c.riseM }, opts, catalogue);
+      const cap = sphericalCap(c.spanM, c.riseM);
+      const frequency = geodesicFrequencyFor(cap.radiusM, c.targetStrutLengthM);
+      const mesh = geodesicCap(frequency, cap.radiusM, cap.edgeAngleRad);
+      const layers = c.layers === "double" ? 2 : 1;
+      const value = (key: string) => d.summary.find((s) => s.key === key)?.value ?? Number.NaN;
+      const inner = strutLengths(mesh.edgeLengthsM, (e) => !mesh.edgeOnRing[e]);
+      expect([value("frequency"), value("nodes"), value("struts"), value("faces")]).toEqual([frequency, mesh.nodes.length * layers, inner.count * layers, mesh.faces.length]);
+      expectRelClose(value("strutMinM"), inner.minM, 1e-12);
+      expectRelClose(value("strutMeanM"), inner.meanM, 1e-12);
+      expectRelClose(value("strutMaxM"), inner.maxM, 1e-12);
+      expectRelClose(value("strutTotalM"), inner.totalM, 1e-12);
+      const bands = latticeBands(mesh, Math.min(opts.bands, Math.max(1, Math.floor(frequency / 2))));
+      const bars = d.members.filter((m) => m.element.startsWith("lattice "));
+      expect(bars.map((m) => m.count)).toEqual(bands.map((b) => b.count * layers));
+      bars.forEach((m, i) => expectRelClose(m.lengthM, bands[i]!.meanLengthM, 1e-12));
+      const web = d.members.find((m) => m.element === "web members");
+      if (layers === 1) expect(web).toBeUndefined();
+      else {
+        expect(web?.count).toBe(3 * mesh.nodes.length);
+        expectRelClose(web?.lengthM ?? 0, Math.hypot((opts.doubleLayerDepthPct / 100) * c.spanM, strutLengths(mesh.edgeLengthsM).meanM / Math.sqrt(3)), 1e-12);
+      }
+    });
+  }
 });
