@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { refineInFull } from "../../../src/pipeline/refine-in-full";
+import { descended, refineInFull } from "../../../src/pipeline/refine-in-full";
 import { PROPORTION_TIE_FRACTION, type RiseSetting } from "../../../src/pipeline/proportions";
 import { fitQuadratic } from "../../../src/pipeline/rise-trend";
 import { infeasibleDesign } from "../../../src/schemes/kit";
@@ -77,5 +77,31 @@ describe("refineInFull: proportions chosen again on the full designs, on the tre
     expect(none.refinements).toEqual([]);
     expect(none.full.options.depth).toBe(0.5);
     expect(none.full.objective).toBe(Number.POSITIVE_INFINITY);
+  });
+});
+
+describe("descended: the refined choice steps to a better neighbour on the full designs (made-up objectives)", () => {
+  // indices 0…6; a dip at 2 the trend missed, then flat within the tie band
+  const values = [150, 144.8, 142.9, 144.8, 151.4, 156.5, 161];
+  it("steps while a neighbour is better by more than the tie band, and stops where none is", () => {
+    // from 4 (151.4): 3 (144.8) is 4.4 % better; from 3, 2 (142.9) is only 1.3 % better: it stays at 3
+    expect(descended(4, values.length, (i) => values[i]!)).toBe(3);
+    expect(descended(6, values.length, (i) => values[i]!)).toBe(3);
+    expect(descended(2, values.length, (i) => values[i]!)).toBe(2);
+  });
+  it("leaves an infeasible choice for a feasible neighbour, keeps within the grid, and takes the better of two better neighbours", () => {
+    expect(descended(0, 3, (i) => [Infinity, 10, 20][i]!)).toBe(1);
+    expect(descended(0, 1, () => 5)).toBe(0);
+    expect(descended(1, 3, (i) => [8, 10, 5][i]!)).toBe(2);
+  });
+  it("with descend declared, refineInFull ends at the better neighbour of the trend's choice, and designs it", () => {
+    // the samples 0.1 / 0.15 / 0.2 fit a bowl least at 0.15 (the reference); the full designs dip at its neighbour 0.14
+    const objective = (x: number) => (Math.abs(x - 0.14) < 1e-9 ? 35 : 40 + 400 * (x - 0.15) ** 2);
+    const run = (descend: boolean) => refineInFull(model([{ key: "depth", samples: [0.1, 0.15, 0.2], reference: 0.15, descend }]), { options: { depth: 0.15 }, riseM: 10 }, at, (o, riseM) => designed(o, riseM, objective(o.depth as number)), (d) => d.totalMassKg);
+    expect(run(false).refinements[0]!.value).toBe(0.15);
+    const descending = run(true);
+    expect(descending.refinements[0]!.value).toBe(0.14);
+    expect(descending.full.objective).toBe(35);
+    expect(descending.full.options.depth).toBe(0.14);
   });
 });
