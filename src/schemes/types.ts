@@ -237,8 +237,8 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
    * objective through these values of it (the same at every span; the rise, "riseM", as rise ÷ span),
    * the other proportions kept; of the values within the tie band of the fitted least, the nearest
    * `reference` (default: the option's search reference or default, the preferred rise). With
-   * `descend`, the value so chosen then steps to a neighbouring grid value while that one's full
-   * design is better by more than the tie band (the trend misjudged a steep, uneven objective).
+   * `descend`, the value so chosen then steps towards the best sample while each step's full design
+   * is better by more than the tie band (the trend misjudged a steep, uneven objective).
    */
   refinedInFull?: readonly { key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number; descend?: boolean }[];
 }

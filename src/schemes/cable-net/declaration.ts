@@ -70,9 +70,9 @@ export const cableNetDeclaration = declareScheme({
   // step within a mast count 11.6 % (65 → 70 m), at 3.5 × the CPU of the screened search with one 3D design (40–400 m:
   // 93 → 328 s). Refining the rise too (0.05, 0.075, 0.1 × span) chose the least rise at every span and cost 5.3 ×
   // (measured by smooth9). The 3D objective is uneven in mast height (demo study, 105 m: 0.1 needs 11 % more prestress
-  // than 0.11), so the quadratic through the three samples can miss a better value nearby: the choice then steps to a
-  // neighbouring mast height while its 3D design is better by more than the 2 % band (`descend`; 105 m: 0.14 → 0.13,
-  // carbon −4.4 %, the self-weight step from 100 m +15.5 → +9.1 %; 1–3 more 3D designs a span, net10).
+  // than 0.11), so the quadratic through the three samples can miss a better value nearby: the choice then steps
+  // towards the best sample while each step's 3D design is better by more than the 2 % band (`descend`; 105 m:
+  // 0.14 → 0.13, carbon −4.4 %, the self-weight step from 100 m +15.5 → +9.1 %; one more 3D design a step, net10).
   refinedInFull: [{ key: "mastHeightRatio", samples: [0.1, 0.15, 0.2], reference: 0.15, descend: true }],
   options: defineOptions(declarations),
 });
