@@ -78,7 +78,9 @@ describe("span study", () => {
     expect(await page.locator("#cell-crossovers li").count()).toBe(3);
     expect(errors).toEqual([]);
     await page.close();
-  });
+    // its own time limit, not a check of speed: with the cable net designed again in 3D too (its default since net10),
+    // both passes took 95 s at load 5.5–7 (first pass 9.5 s), past the suite's 60 s; the 5 s budget is issue 13's, open
+  }, 240_000);
 });
 
 describe("client export", () => {
