@@ -38,7 +38,7 @@ const declarations = {
 } as const;
 export type CableNetOptions = OptionValues<typeof declarations>;
 
-/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against valley cables, masts stayed by backstays. */
+/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against circumferential cables (valley cables in the closed form), masts stayed by backstays. */
 export const cableNetDeclaration = declareScheme({
   id: "cable-net",
   label: "Mast-supported cable net",
@@ -48,7 +48,7 @@ export const cableNetDeclaration = declareScheme({
     "Its cables, masts and ground anchors are sized from a 3D computer model under uneven snow and wind on one side (a specialist's detailed analysis will refine them); its roof weight leaves out the large concrete anchor blocks, whose carbon and cost are in the totals.",
   ],
   description:
-    "Masts on a ring inside the plan carry radial cables that hang the fabric: half run out to anchors at the edge, half in to a central tension ring. Circumferential cables between the radial cables carry the fabric panels. A second family of valley cables, prestressed against the radial ones, holds the roof down in wind uplift. Backstays take the difference of pull at each mast head down to ground anchors.",
+    "Masts on a ring inside the plan carry radial cables that hang the fabric: half run out to anchors at the edge, half in to a central tension ring. Circumferential cables between the radial cables carry the fabric panels and, prestressed against the radial ones, hold the roof down in wind uplift (the closed-form estimate gives that to a second family of valley cables instead). Backstays take the difference of pull at each mast head down to ground anchors.",
   validSpanM: { min: 60, max: 400 },
   // preferred (the search's reference for the rise) at the least rise: the net is least there in the closed form and
   // in 3D at every span measured (70, 160, 300 m; 3D +20–35 % per 0.025 × span). At 0.1 the search's pull toward it let

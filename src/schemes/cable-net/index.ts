@@ -226,5 +226,5 @@ function netFloor(layout: CableNetLayout, eavesM: number, held: boolean): FloorE
   return { soffit, supports: [{ radiusM: layout.mastRadiusM, clearRadiusM: MAST_CLEAR_RADIUS_M, count: layout.masts }, ...tieDown] };
 }
 
-/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against valley cables, masts stayed by backstays. */
+/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against circumferential cables (valley cables in the closed form), masts stayed by backstays. */
 export const cableNet = defineScheme(cableNetDeclaration, design);
