@@ -34,6 +34,18 @@ function axisOf(model: SchemeModel, refined: Refined, rise: RiseSetting, spanM: 
 }
 
 /**
+ * From the grid index `start`, one grid step at a time towards `toward` (the best sample), while the
+ * next value's full design is better than the current one's by more than PROPORTION_TIE_FRACTION; the
+ * index it ends at. One full design a step: it stops at the first step that does not pay, and at `toward`.
+ */
+export function descended(start: number, toward: number, objectiveAt: (index: number) => number): number {
+  const step = Math.sign(toward - start);
+  let index = start;
+  while (index !== toward && objectiveAt(index + step) < objectiveAt(index) * (1 - PROPORTION_TIE_FRACTION)) index += step;
+  return index;
+}
+
+/**
  * The scheme's `refinedInFull` proportions chosen again, one after the other, on designs with the
  * full options (the screened search chose them on cheaper ones), from the screened choice `start`:
  * the objective at each declared sample (the same values at every span), a least-squares quadratic
@@ -41,7 +53,8 @@ function axisOf(model: SchemeModel, refined: Refined, rise: RiseSetting, spanM: 
  * within PROPORTION_TIE_FRACTION of the fitted least, the nearest the reference (the declared one,
  * else an option's search reference or default, the preferred rise) — the rise's trend rule (./rise-trend.ts). Where the
  * value so chosen is infeasible, the best feasible sample; where no sample is feasible, the
- * proportion stays. Returns the final design (designed once, samples reused), what was refined and how many full designs it took.
+ * proportion stays. With `descend` the choice then steps towards the best sample while each step's
+ * full design is better by more than the tie band (descended). Returns the final design (designed once, samples reused), what was refined and how many full designs it took.
  */
 export function refineInFull(
   model: SchemeModel,
@@ -70,7 +83,9 @@ export function refineInFull(
     const sampled = axis.samples.map((index) => ({ index, value: at(moved(index).options, moved(index).riseM).objective }));
     const feasible = sampled.filter((s) => Number.isFinite(s.value)).sort((a, b) => a.value - b.value);
     if (feasible.length === 0) continue;
-    const chosen = moved(trendChoice(axis.values, sampled, axis.reference, PROPORTION_TIE_FRACTION));
+    const trend = trendChoice(axis.values, sampled, axis.reference, PROPORTION_TIE_FRACTION);
+    const objectiveAt = (index: number) => at(moved(index).options, moved(index).riseM).objective;
+    const chosen = moved(refined.descend ? descended(trend, feasible[0]!.index, objectiveAt) : trend);
     current = Number.isFinite(at(chosen.options, chosen.riseM).objective) ? chosen : moved(feasible[0]?.index as number);
     refinements.push({ key, value: key === RISE_KEY ? current.riseM : (current.options[key] as number), samples: sampled.map((s) => ({ value: axis.values[s.index] as number, objective: s.value })) });
   }

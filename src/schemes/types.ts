@@ -236,9 +236,11 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
    * search each, in this order, is chosen again on designs with the full options, on the trend of the
    * objective through these values of it (the same at every span; the rise, "riseM", as rise ÷ span),
    * the other proportions kept; of the values within the tie band of the fitted least, the nearest
-   * `reference` (default: the option's search reference or default, the preferred rise).
+   * `reference` (default: the option's search reference or default, the preferred rise). With
+   * `descend`, the value so chosen then steps towards the best sample while each step's full design
+   * is better by more than the tie band (the trend misjudged a steep, uneven objective).
    */
-  refinedInFull?: readonly { key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number }[];
+  refinedInFull?: readonly { key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number; descend?: boolean }[];
 }
 
 /** A scheme: its declaration and its designer (the design registry, ./index.ts: the pipeline, the workers and the command line). */

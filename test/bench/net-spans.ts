@@ -1,6 +1,6 @@
 // `npm run bench -- net`: the cable net's full 3D design (proportion search, then the 3D analysis of
 // the chosen proportions) across the spans, default study with analysis "3d": CPU (median of
-// NET_REPS runs, default 7) at 60–400 m with the analysed net's size, the
+// NET_REPS runs, default 7) at 60–400 m with the analysed net's size (lumped / real nodes), the
 // prestress search's rounds, prestress and self-weight; then the CPU over the 37 spans 40–400 m (one
 // run each). Nothing asserted; the load is printed beside the figures.
 import { loadavg } from "node:os";
@@ -9,7 +9,8 @@ import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
 import { SCHEMES } from "../../src/schemes";
 import { briefAtSpan, designAtBestProportions } from "../../src/pipeline";
 import { cableNetAnalysisInput } from "../../src/schemes/cable-net";
-import { analyseNet } from "../../src/schemes/cable-net/analysis";
+import { analyseNet, netLumping } from "../../src/schemes/cable-net/analysis";
+import { cableNetNodeCount } from "../../src/analysis/models/cable-net-model";
 import type { CableNetOptions } from "../../src/schemes/cable-net/declaration";
 
 const study = defaultStudy();
@@ -40,8 +41,11 @@ for (const spanM of [60, 160, 250, 300, 350, 400]) {
   const input = cableNetAnalysisInput(searched.brief, options, catalogue);
   let rounds = 0;
   analyseNet(input, () => rounds++);
+  const layout = { ...input.layout, edgeRadiusM: input.layout.cap.baseRadiusM };
+  const k = netLumping(input.layout);
+  const nodes = (hoopsPerCable: number) => cableNetNodeCount({ ...layout, hoopsPerCable });
   console.log(
-    `${spanM} m: median ${median.toFixed(0)} ms CPU [${times.map((x) => x.toFixed(0)).join(" ")}]; ${d.regime}; model ${d.analysis?.view?.nodes.length ?? "–"} nodes; ` +
+    `${spanM} m: median ${median.toFixed(0)} ms CPU [${times.map((x) => x.toFixed(0)).join(" ")}]; ${d.regime}; model ${nodes(k)} nodes (real net ${nodes(1)}, ${k} circumferential cable${k > 1 ? "s" : ""} per analysed one); ` +
       `${rounds} prestress rounds; ${d.status}; prestress ${d.analysis?.prestressKN?.toFixed(1) ?? "–"} kN; self-weight ${d.feasible ? d.selfWeightKgPerM2.toFixed(2) : "–"} kg/m²`,
   );
 }

@@ -50,7 +50,7 @@ describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
   // Measured after the change (dome6): largest step 10.7 % at 215 → 220 m (1 → 2 hoops, named in Design.regime).
   it("cable dome with the 3D analysis", () => expect(jumps(cableDome as unknown as SchemeModel, { analysis: "3d" })).toEqual([]), 600_000);
   it("cable dome, closed form", () => expect(jumps(cableDome as unknown as SchemeModel, { analysis: "closed-form" })).toEqual([]), 600_000);
-  it("cable net, closed form (its default)", () => expect(jumps(cableNet as unknown as SchemeModel, { analysis: "closed-form" })).toEqual([]), 600_000);
+  it("cable net, closed form", () => expect(jumps(cableNet as unknown as SchemeModel, { analysis: "closed-form" })).toEqual([]), 600_000);
   // The net designed in 3D at the proportions the search chose (screened by the closed form, then its rise and mast
   // height refined on 3D designs: declaration.ts), 60–105 m, where it keeps 3 masts (4 from 110 m, a named regime).
   // Before smooth9: self-weight −29.2 % at 60 → 65 m (a circumferential cable passing 0.3 m beside the mast heads:
@@ -58,10 +58,12 @@ describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
   // where the 3D net is heaviest); after the layout alone, +19.1 % at 65 → 70 m and +18.6 % at 95 → 100 m.
   // Measured after both: largest step 11.6 % (self-weight, 65 → 70 m).
   it("cable net with the 3D analysis at its searched proportions, 60–105 m", () => expect(searchedJumps(cableNet as unknown as SchemeModel, spans.filter((s) => s >= 60 && s <= 105), { analysis: "3d" })).toEqual([]), 600_000);
-  // Still failing on the demo study (expected to fail, so that the day it holds this says so): self-weight +15.5 %
-  // at 100 → 105 m (carbon, the objective, +2.9 %): the refined mast height moves 0.11 → 0.14, on the edge of the
-  // 2 % band around a quadratic through three samples, where the self-weight is steeper than the carbon.
-  it.fails("cable net with the 3D analysis at its searched proportions on the demo study, 95–105 m (known to fail)", () => {
+  // The demo study, 95–105 m. Before net10 the self-weight stepped +15.5 % at 100 → 105 m (carbon, the objective,
+  // +2.9 %): the mast height was chosen at 0.14 on the quadratic through the samples 0.1 / 0.15 / 0.2 (the 3D net
+  // at 0.1 needs 11 % more prestress than at 0.11: the trend misjudged it) while its 3D design at 0.12 was 5.7 %
+  // lower in carbon. The refinement now steps to a better neighbouring mast height while there is one by more than
+  // the tie band (declaration.ts, refine-in-full.ts descended): 0.13, +9.1 %.
+  it("cable net with the 3D analysis at its searched proportions on the demo study, 95–105 m", () => {
     const loaded = studyFromJson(readFileSync("data/demo-study.json", "utf8"));
     if (!loaded.ok) throw new Error("the demo study does not load");
     expect(searchedJumps(cableNet as unknown as SchemeModel, [95, 100, 105], { analysis: "3d" }, loaded.study)).toEqual([]);

@@ -1,7 +1,7 @@
 import type { Brief } from "../../brief";
 import { analysedCombinations, unboundedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
-import { cableNetModel, type CableNetModel, type NetMemberFamily } from "../../analysis/models/cable-net-model";
+import { cableNetModel, cableNetNodeCount, type CableNetModel, type NetMemberFamily } from "../../analysis/models/cable-net-model";
 import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
 import { lengthOf, restLengths, type NodalLoad, type Vec3 } from "../../analysis/model";
 import { capHeightAt } from "../../mechanics/spherical-cap";
@@ -23,6 +23,8 @@ export interface NetAnalysisInput {
   eaN: { outer: number; inner: number; hoop: number; ring: number };
   /** The central ring held by a tie-down at the roof's crown (option centre = held-down); else free. */
   heldCentre?: boolean;
+  /** Real circumferential cables each analysed one stands for (cable-net-model.ts); absent: netLumping's choice for the layout. */
+  hoopsPerCable?: number;
 }
 
 /** The largest analysed force of each family (each circumferential cable apart) and the combination giving it. */
@@ -58,6 +60,40 @@ export interface NetAnalysis {
   summary: DesignAnalysis;
   /** Uniform combinations left out of the last check as bounded by the heaviest uniform one (kit unboundedCombinations). */
   screened: string[];
+}
+
+/**
+ * Nodes the analysed net may have: the net's model grows as the span² (a circumferential cable every
+ * hanger spacing, crossed by more radial cables as the masts grow in number), and a design's 3D
+ * analysis with it (4 s at 400 m, net9); beyond this many nodes (the 12-mast default net at 160 m
+ * has 684) the model lumps cables into an equivalent net (netLumping). Our choice, no source.
+ */
+export const NET_MODEL_NODE_CAP = 700;
+/**
+ * Most real circumferential cables an analysed one stands for, whatever the node count. Two (the
+ * cable beside the mast heads alone, hoopGroups) keeps the forces, backstay and displacement within
+ * 3.6 % of the full net's at its prestress and the prestress found within 4.8 % (default brief,
+ * 120–300 m, net10; the search alone stops within SEARCH_TOLERANCE); three moved the prestress by up
+ * to 8 % and the backstay force by 14 % (200 m, net9, with the cable beside the mast heads paired).
+ */
+const MOST_HOOPS_PER_CABLE = 2;
+
+/**
+ * The real circumferential cables each analysed one stands for: the least number (up to
+ * MOST_HOOPS_PER_CABLE) that keeps the analysed net within NET_MODEL_NODE_CAP nodes.
+ * Equivalent-net lumping is common practice for cable nets (no source).
+ */
+export function netLumping(layout: CableNetLayout, cap = NET_MODEL_NODE_CAP): number {
+  let k = 1;
+  while (k < MOST_HOOPS_PER_CABLE && cableNetNodeCount({ ...netModelLayout(layout), hoopsPerCable: k }) > cap) k++;
+  return k;
+}
+
+/** What the analysed net lumped, in words for the design's warnings; null when it is the real net. */
+export function lumpingNote(layout: CableNetLayout, net: CableNetModel): string | null {
+  const k = Math.max(1, ...net.hoopGroups.map((g) => g.length));
+  if (k === 1) return null;
+  return `the 3D analysis ran on an equivalent net of ${net.model.nodes.length} nodes (the real net has ${cableNetNodeCount(netModelLayout(layout))}): each analysed circumferential cable stands for up to ${k} consecutive real ones (${net.hoopGroups.length} for ${layout.hoopRadiiM.length}; the one beside the mast heads on each side alone) at their mean radius, with their stiffness and prestress together, loaded by their plan band, its force shared equally among them for sizing; the take-off and the drawings are of the real net (equivalent-net lumping: common practice for cable nets, no source)`;
 }
 
 /** Circumferential prestress ÷ radial (common practice for anticlastic nets of similar spacing, no source). */
@@ -227,13 +263,21 @@ function searchedCombinations(combinations: readonly PlanCombination[]): PlanCom
   return [...new Set([...analysedCombinations(combinations), ...(most ? [most] : [])])];
 }
 
-/** The net form-found at a radial prestress α (N) under the permanent load. */
+/** The layout's part of the net's model input (the real net: masts, cables, circumferential radii). */
+function netModelLayout(layout: CableNetLayout) {
+  return {
+    masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
+    centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM,
+  };
+}
+
+/** The net form-found at a radial prestress α (N) under the permanent load, lumped as the input says (else as netLumping chooses). */
 function netAt(input: NetAnalysisInput, alpha: number): CableNetModel {
   const { layout } = input;
   return cableNetModel({
-    masts: layout.masts, cablesPerSide: layout.cablesPerSide, mastRadiusM: layout.mastRadiusM, mastHeadM: layout.mastHeadM, edgeRadiusM: layout.cap.baseRadiusM,
-    centralRingRadiusM: layout.centralRingRadiusM, hoopRadiiM: layout.hoopRadiiM, prestressN: alpha, hoopShare: NET_HOOP_PRESTRESS_SHARE,
+    ...netModelLayout(layout), prestressN: alpha, hoopShare: NET_HOOP_PRESTRESS_SHARE,
     permanentPa: (input.selfWeightKPa + input.brief.servicesKPa) * 1000, eaN: input.eaN,
+    hoopsPerCable: input.hoopsPerCable ?? netLumping(layout),
     ...(input.heldCentre ? { centreHeldAtM: capHeightAt(layout.cap, layout.centralRingRadiusM) } : {}),
   });
 }
@@ -269,6 +313,11 @@ function judge(input: NetAnalysisInput, alpha: number, net: CableNetModel, solve
 export function netRoundAt(input: NetAnalysisInput, alphaN: number, combinations: readonly PlanCombination[] = unboundedCombinations(input.combinations, input.selfWeightKPa)): NetRound {
   const net = netAt(input, alphaN);
   return judge(input, alphaN, net, solveNet(input, net, combinations));
+}
+
+/** The analysis at a given radial prestress α (N), every combination the final check runs: what analyseNet reports when its search ends at α. */
+export function netAnalysisAt(input: NetAnalysisInput, alphaN: number): NetAnalysis {
+  return { ...summarise(input, netRoundAt(input, alphaN)), screened: [] };
 }
 
 /**
@@ -314,22 +363,32 @@ export function analyseNet(input: NetAnalysisInput, onRound?: (round: NetSearchR
   }
 }
 
+/** The largest analysed force of each family and its combination, shared back to the real cables: a lumped cable's force equally over the cables it stands for. */
 function envelopeOf(net: CableNetModel, solved: Round["solved"], hoops: number): NetForceEnvelope {
-  const e: NetForceEnvelope = { outerN: 0, innerN: 0, hoopN: Array(hoops).fill(0), ringN: 0, caseOf: {} };
+  const analysed = { outer: 0, inner: 0, ring: 0, hoop: net.hoopGroups.map(() => 0) };
+  const caseOf: Record<string, string> = {};
   const keyOf = (family: NetMemberFamily, index: number) => (family === "circumferential" ? `circumferential ${index}` : family);
   for (const { c, s } of solved) {
     net.tags.forEach((t, j) => {
       const f = s.forcesN[j] as number;
-      const key = keyOf(t.family, t.index);
-      const before = t.family === "outer radial" ? e.outerN : t.family === "inner radial" ? e.innerN : t.family === "central ring" ? e.ringN : (e.hoopN[t.index - 1] as number);
+      const before = t.family === "outer radial" ? analysed.outer : t.family === "inner radial" ? analysed.inner : t.family === "central ring" ? analysed.ring : (analysed.hoop[t.index - 1] as number);
       if (f <= before) return;
-      if (t.family === "outer radial") e.outerN = f;
-      else if (t.family === "inner radial") e.innerN = f;
-      else if (t.family === "central ring") e.ringN = f;
-      else e.hoopN[t.index - 1] = f;
-      e.caseOf[key] = c.name;
+      if (t.family === "outer radial") analysed.outer = f;
+      else if (t.family === "inner radial") analysed.inner = f;
+      else if (t.family === "central ring") analysed.ring = f;
+      else analysed.hoop[t.index - 1] = f;
+      caseOf[keyOf(t.family, t.index)] = c.name;
     });
   }
+  const e: NetForceEnvelope = { outerN: analysed.outer, innerN: analysed.inner, hoopN: Array(hoops).fill(0), ringN: analysed.ring, caseOf: {} };
+  for (const family of ["outer radial", "inner radial", "central ring"] as const) if (caseOf[family] !== undefined) e.caseOf[family] = caseOf[family];
+  net.hoopGroups.forEach((group, g) => {
+    const name = caseOf[keyOf("circumferential", g + 1)];
+    for (const i of group) {
+      e.hoopN[i] = (analysed.hoop[g] as number) / group.length;
+      if (name !== undefined) e.caseOf[keyOf("circumferential", i + 1)] = name;
+    }
+  });
   return e;
 }
 

@@ -9,7 +9,7 @@ import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
 import { sizeCableNet, sizeNetFromAnalysis, MAST_SPLICE_TUBE_LENGTH_M, type NetSizing, type NetSizingInput } from "./sizing";
 import { MAST_SEGMENT_MAX_M } from "./laced-mast";
-import { analyseNet, type NetAnalysis, type NetAnalysisInput } from "./analysis";
+import { analyseNet, lumpingNote, type NetAnalysis, type NetAnalysisInput } from "./analysis";
 import { designBasis } from "../../loads";
 import { strandResistanceN } from "../../catalogue/pick-strand";
 import { cableNetDeclaration, type CableNetOptions } from "./declaration";
@@ -139,6 +139,8 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
   if (held) warnings.push(`the central ring is held at the roof's crown by a tie-down to the floor (${kN(analysis?.ringUpliftN ?? sized.ringUpliftN)} pull); the tie-down stands in the floor with a clear zone of ${MAST_CLEAR_RADIUS_M} m radius and its anchor is a dead-weight allowance (substructure, not designed)`);
   else if (!analysis && sized.ringUpliftN > 0) warnings.push(`the closed form's valley cables pull the free central ring up by ${kN(sized.ringUpliftN)}, which nothing balances: the closed form's net is in fact held down at its centre (choose a held-down centre to cost the tie-down, or the 3D analysis, which finds the free net's prestress)`);
   if (analysis && analysis.ringLeastUpliftN < 0) warnings.push(`under some combination the net presses the held ring down by ${kN(-analysis.ringLeastUpliftN)}: the tie-down must also take compression there (a strut, or enough prestress)`);
+  const lumped = analysis ? lumpingNote(layout, analysis.model) : null;
+  if (lumped) warnings.push(lumped);
   if (analysis && analysis.screened.length > 0) warnings.push(`not analysed, bounded by the heaviest uniform combination (a lighter uniform map is that one scaled down): ${analysis.screened.join(", ")}`);
   if (analysis?.outwardPull) warnings.push("the net pulls some mast heads outwards under some combination: the backstay there would have to be a stay to the inside (its force is taken the same)");
   if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);
@@ -224,5 +226,5 @@ function netFloor(layout: CableNetLayout, eavesM: number, held: boolean): FloorE
   return { soffit, supports: [{ radiusM: layout.mastRadiusM, clearRadiusM: MAST_CLEAR_RADIUS_M, count: layout.masts }, ...tieDown] };
 }
 
-/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against valley cables, masts stayed by backstays. */
+/** Mast-supported cable net: fabric hung from radial cables off mast heads, prestressed against circumferential cables (valley cables in the closed form), masts stayed by backstays. */
 export const cableNet = defineScheme(cableNetDeclaration, design);

@@ -31,7 +31,7 @@ export const TENSION_COMMON_OPTIONS = {
 
 /**
  * The tension roofs' choice of analysis: the 3D analysis designs, the closed form seeds and
- * cross-checks it (issue 13). The 3D analysis is the default (the cable net keeps the closed form: see its declaration): the proportion search screens its
+ * cross-checks it (issue 13). The 3D analysis is the default: the proportion search screens its
  * candidates by the closed form (the schemes' screeningOptions) and only the chosen proportions are
  * designed in 3D; the closed form alone stays a choice (the fast first estimate).
  */

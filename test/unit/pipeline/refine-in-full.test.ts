@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { refineInFull } from "../../../src/pipeline/refine-in-full";
+import { descended, refineInFull } from "../../../src/pipeline/refine-in-full";
 import { PROPORTION_TIE_FRACTION, type RiseSetting } from "../../../src/pipeline/proportions";
 import { fitQuadratic } from "../../../src/pipeline/rise-trend";
 import { infeasibleDesign } from "../../../src/schemes/kit";
@@ -77,5 +77,35 @@ describe("refineInFull: proportions chosen again on the full designs, on the tre
     expect(none.refinements).toEqual([]);
     expect(none.full.options.depth).toBe(0.5);
     expect(none.full.objective).toBe(Number.POSITIVE_INFINITY);
+  });
+});
+
+describe("descended: the refined choice steps towards the best sample on the full designs (made-up objectives)", () => {
+  // indices 0…6; a dip at 2 the trend missed, then flat within the tie band
+  const values = [150, 144.8, 142.9, 144.8, 151.4, 156.5, 161];
+  const on = (i: number) => values[i]!;
+  it("steps while the next value is better by more than the tie band, and stops at the first that is not", () => {
+    // from 4 (151.4) towards 0: 3 (144.8) is 4.4 % better; 2 (142.9) only 1.3 % better than 3: it stays at 3
+    expect(descended(4, 0, on)).toBe(3);
+    expect(descended(6, 0, on)).toBe(3);
+    expect(descended(2, 0, on)).toBe(2);
+    // towards a worse side it does not move, nor when it starts at the best sample
+    expect(descended(3, 6, on)).toBe(3);
+    expect(descended(4, 4, on)).toBe(4);
+  });
+  it("leaves an infeasible choice, and stops at the best sample", () => {
+    expect(descended(0, 2, (i) => [Infinity, 10, 20][i]!)).toBe(1);
+    expect(descended(0, 2, (i) => [30, 20, 10][i]!)).toBe(2);
+  });
+  it("with descend declared, refineInFull ends at the better neighbour of the trend's choice, and designs it", () => {
+    // the samples 0.1 / 0.15 / 0.2 at 40 / 40.5 / 44: the fitted least 39.8 near 0.12, 0.15 within its band, so the
+    // trend keeps the reference 0.15; the best sample is 0.1, and the full designs dip at 0.14 (35; 39 elsewhere)
+    const objective = (x: number) => ({ 10: 40, 15: 40.5, 20: 44, 14: 35 } as Record<number, number>)[Math.round(100 * x)] ?? 39;
+    const run = (descend: boolean) => refineInFull(model([{ key: "depth", samples: [0.1, 0.15, 0.2], reference: 0.15, descend }]), { options: { depth: 0.15 }, riseM: 10 }, at, (o, riseM) => designed(o, riseM, objective(o.depth as number)), (d) => d.totalMassKg);
+    expect(run(false).refinements[0]!.value).toBe(0.15);
+    const descending = run(true);
+    expect(descending.refinements[0]!.value).toBe(0.14);
+    expect(descending.full.objective).toBe(35);
+    expect(descending.full.options.depth).toBe(0.14);
   });
 });
