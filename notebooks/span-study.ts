@@ -52,7 +52,7 @@ reactiveCell(main, { id: "status" }, () => {
     label.textContent =
       s.pass === "screening"
         ? `Computing the span study… ${s.done} of ${s.total} spans`
-        : `${s.screeningMs === undefined ? "Designing" : `Every scheme drawn in ${fmt.int(s.screeningMs)} ms; now designing`} ${namesOf(s.again)} by the 3D analysis… ${s.done} of ${s.total} spans (until this ends, their lines show the closed form, the fast first estimate)`;
+        : `${s.screeningMs === undefined ? "Designing" : `Every scheme drawn in ${fmt.int(s.screeningMs)} ms; now designing`} ${namesOf(s.again)} by the 3D analysis… ${s.done} of ${s.total} spans, the largest (slowest) first (until this ends, their lines show the closed form, the fast first estimate)`;
     const progress = document.createElement("progress");
     progress.id = "span-progress";
     progress.max = Math.max(1, s.total);
