@@ -1,3 +1,4 @@
+import { availableParallelism } from "node:os";
 import { defineConfig } from "vitest/config";
 
 // Two projects: "node" (unit, reference, property; fast, no browser) and "browser" (the built
@@ -10,6 +11,9 @@ export default defineConfig({
           name: "node",
           include: ["test/unit/**/*.test.ts", "test/reference/**/*.test.ts", "test/property/**/*.test.ts"],
           environment: "node",
+          // Every core (vitest's default leaves one for itself, which on a 2-core machine ran the files
+          // one at a time: 363 s); the main process only gathers results.
+          maxWorkers: availableParallelism(),
           // Property tests that run the risk pipeline take seconds; on a loaded 2-core machine the
           // 5 s default was seen to cut one off. Wall time is never asserted, so allow plenty.
           testTimeout: 60_000,

@@ -1,0 +1,94 @@
+// The span-smoothness property (test/property/span-smoothness*.test.ts), shared so its slowest
+// schemes run in files of their own, side by side in the node project's workers.
+import { describe, expect, it } from "vitest";
+import { defaultCatalogue } from "../../src/catalogue/default-catalogue";
+import { SCHEMES } from "../../src/schemes";
+import type { SchemeId } from "../../src/schemes/types";
+import { runSpanStudy, type SpanPoint } from "../../src/comparison";
+import { readFileSync } from "node:fs";
+import { studyFromJson, type Study } from "../../src/study";
+
+// Issue 12 item 5: along 40–400 m in 5 m steps no metric of a feasible, in-range scheme changes by
+// more than 15 % between neighbouring spans, unless the scheme names a regime change there.
+const METRICS = ["selfWeightKgPerM2", "carbonKgCO2ePerM2Floor", "costPerM2Floor", "massToAir"] as const;
+const LIMIT = 0.15;
+
+/**
+ * Schemes that still jump at the time of writing (issue 12 item 5 open for them): the test runs
+ * them and expects the failure, so the day one becomes smooth this test says so and it must be
+ * moved back to the list that holds. A jump is allowed only where the scheme's named regime
+ * (Design.regime) changes, and the regime must not flip back within 3 steps.
+ */
+// Measured at 11:40 on 3 Dec (smooth4: within 2 % of the least the proportions nearest their
+// reference are kept; the net's mast count scanned every 3rd value with its reference growing with
+// span): cable net holds (3 → 13 masts rising monotonically, largest jump 7.1 %); the cable dome
+// jumped 15.9–16 % in mass ÷ air (100 m, 180 m) while its ring-height reference (0.06) sat below the
+// flat part of its objective — with the reference at 0.11 × span (12:10, lead) it holds, largest jump
+// 12.2 % (0.10 would not: 15.1 % at 40→45 m; see its declaration). Truss (4 %) and shell (smooth to
+// 115 m, ribbed from 120 m; 13.5 %) hold. Geodesic dome (9 jumps, largest 38 %) and timber dome (11,
+// 25 %) jumped in mass ÷ air while their rise wandered between about 0.15 and 0.3 × span, following
+// the ±5 % steps of the objective from one mesh frequency to the next; since search5 (13:20) their
+// rise is chosen on the trend of the objective (a least-squares quadratic through six rises,
+// src/pipeline/rise-trend.ts) and both hold: geodesic largest jump 12.5 %, timber 7.8 %.
+export const KNOWN_FAILING: readonly SchemeId[] = [];
+
+/** Every neighbour-to-neighbour change over the limit, where both ends are feasible and in range and the regime is the same. */
+function jumps(points: readonly SpanPoint[]): { from: number; to: number; metric: string; change: number }[] {
+  const sorted = [...points].sort((a, b) => a.spanM - b.spanM);
+  const out: { from: number; to: number; metric: string; change: number }[] = [];
+  sorted.forEach((p, i) => {
+    const q = sorted[i - 1];
+    if (!q || q.status !== "feasible" || p.status !== "feasible" || q.regime !== p.regime) return;
+    for (const m of METRICS) {
+      const change = Math.abs(p[m] - q[m]) / Math.abs(q[m]);
+      if (Number.isFinite(change) && change > LIMIT) out.push({ from: q.spanM, to: p.spanM, metric: m, change });
+    }
+  });
+  return out;
+}
+
+/** Where the named regime flips back within 3 steps (A at one span, B at the next, A again at most 3 steps on), among feasible points. */
+function flips(points: readonly SpanPoint[]): { from: number; to: number; regimes: string }[] {
+  const sorted = [...points].filter((p) => p.status === "feasible").sort((a, b) => a.spanM - b.spanM);
+  const out: { from: number; to: number; regimes: string }[] = [];
+  sorted.forEach((p, i) => {
+    const q = sorted[i + 1];
+    if (!q || q.regime === p.regime) return;
+    const back = sorted.slice(i + 2, i + 4).find((r) => r.regime === p.regime);
+    if (back) out.push({ from: p.spanM, to: back.spanM, regimes: `${p.regime} → ${q.regime} → ${back.regime}` });
+  });
+  return out;
+}
+
+/** The property for the given schemes on one study's brief; the schemes in `knownFailing` are expected to fail (it.fails). */
+export function smoothnessSuite(title: string, study: () => Study, knownFailing: readonly SchemeId[], schemeIds: (id: SchemeId) => boolean): void {
+  describe(title, () => {
+    const catalogue = defaultCatalogue();
+    for (const model of SCHEMES.filter((m) => schemeIds(m.id))) {
+      const run = knownFailing.includes(model.id) ? it.fails : it;
+      run(`${model.id}: no metric jumps more than 15 % between neighbours without a named regime change, and the regime does not flip back`, () => {
+        const points = runSpanStudy(study(), catalogue, { fromM: 40, toM: 400, stepM: 5 }, { schemeIds: [model.id] });
+        expect(jumps(points)).toEqual([]);
+        expect(flips(points)).toEqual([]);
+      }, 400_000); // each scheme: 73 spans, each with its proportion search (about 3–170 s here)
+    }
+  });
+}
+
+// The same property on the demo study's brief (the Quillbridge arena: another eaves height, clear
+// height and height limit), not only on the default one. Found at 18:00 on 3 Dec (lead, CLI sweep):
+// the geodesic dome jumps 19.4 % in mass ÷ air (self-weight +13.9 %) at 220 → 225 m with no regime
+// change, where its trend-chosen rise drops from 40.7 to 37.9 m and its struts go from 12.5 to
+// 13.5 m; the same at the start of that stop (75b9e13). Cause (search7): the rise trend was sampled
+// at the strut length a descent found at the reference rise, a noisy local optimum that stepped
+// between spans. Since search8 (20:10) the geodesic declares its trend sampled at its reference
+// proportions (7 rises at the 5 m reference strut, no descent first) and holds on both studies:
+// largest jump 12.9 % (demo, mass ÷ air, 225→230 m), 10.6 % (default, 170→175 m). The timber dome
+// keeps its samples at the searched member length (at its reference they jumped 32–42 %).
+export const KNOWN_FAILING_DEMO: readonly SchemeId[] = [];
+
+export function demoStudy(): Study {
+  const loaded = studyFromJson(readFileSync("data/demo-study.json", "utf8"));
+  if (!loaded.ok) throw new Error("the demo study does not load");
+  return loaded.study;
+}
