@@ -67,9 +67,14 @@ describe("span study", () => {
     await page.waitForSelector("#cell-span-charts svg", { timeout: 60_000 });
     // the first pass draws every scheme, the tension roofs by their closed form; the second designs those again by the 3D analysis
     expect(await page.locator("#cell-status").innerText()).toMatch(/Every scheme drawn in [\d,]+ ms; now designing the cable dome and the mast-supported cable net by the 3D analysis… \d+ of 37 spans/);
+    // the second pass is waited for on a short range (the whole range's 3D pass takes a minute on this machine, past the 5 s budget of issue 13, still open):
+    // a range change mid-pass starts both passes again on the new range, and their end is what is checked
+    await page.fill("#toM", "100");
+    await page.locator("#toM").press("Enter");
+    await page.waitForFunction(() => /^7 spans .* computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), undefined, { timeout: 120_000 });
     await resultsSettled(page);
     const status = await page.locator("#cell-status").innerText();
-    expect(status).toMatch(/37 spans × \d schemes computed in [\d,]+ ms \(in \d background workers?: every scheme in [\d,]+ ms with the cable dome and the mast-supported cable net by the closed form, then again by the 3D analysis, as on the compare page\)/);
+    expect(status).toMatch(/^7 spans × \d schemes computed in [\d,]+ ms \(in \d background workers?: every scheme in [\d,]+ ms with the cable dome and the mast-supported cable net by the closed form, then again by the 3D analysis, as on the compare page\)/);
     const legend = await page.locator("#cell-span-charts").first().innerText();
     for (const model of SCHEMES) expect(legend).toContain(model.label);
     // Each scheme has at least one drawn (non-empty) line path in the self-weight chart.
@@ -78,8 +83,6 @@ describe("span study", () => {
     expect(await page.locator("#cell-crossovers li").count()).toBe(3);
     expect(errors).toEqual([]);
     await page.close();
-    // its own time limit, not a check of speed: with the cable net designed again in 3D too (its default since net10),
-    // both passes took 95 s at load 5.5–7 (first pass 9.5 s), past the suite's 60 s; the 5 s budget is issue 13's, open
   }, 240_000);
 });
 
