@@ -329,7 +329,8 @@ export interface NetAnalysedForces {
  * The net re-sized from the 3D analysis: radial cables, circumferential cables (the larger of the
  * analysed force and the closed form's local sag between radial cables under the fabric), the
  * central ring, masts, backstays and anchors from the analysed forces and reactions. The
- * circumferential cables of the form-found net are its stabilising family, so the closed form's
+ * form-found net's own two families carry and hold it (inside the mast ring its level circumferential
+ * cables carry the roof and its arched radial cables hold it down: 160 m demo study, measured), so the closed form's
  * idealised valley cables are not added. Edge cables and the fabric stay as the closed form sized them.
  * @throws SizingError when a member cannot be sized
  */
