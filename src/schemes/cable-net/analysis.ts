@@ -39,6 +39,8 @@ export interface NetForceEnvelope {
 export interface NetAnalysis {
   prestressN: number;
   reason: string;
+  /** What sets the prestress (the criterion nearest its limit at it), in words; "" when some combination did not converge. */
+  governs: string;
   envelope: NetForceEnvelope;
   /** The largest cable force down a mast and horizontal pull on a mast head (N) over the combinations, the mast's combination; the edge anchors' largest total uplift, N. */
   mastForceN: number;
@@ -164,20 +166,27 @@ const START_OF_SEED = 6;
 /** Least radial prestress tried, as a share of the heaviest combination's load per radial cable (a floor for the search, not a design value). */
 const PRESTRESS_FLOOR_OF_LOAD = 0.05;
 
+/** The criterion with the least margin in a round (marginOf): a cable's share of its prestress, a node's movement, or a free crown's height. */
+export type NetCriterion =
+  | { kind: "cable"; member: number; combination: string; forceN: number; prestressN: number }
+  | { kind: "displacement"; combination: string; displacementM: number }
+  | { kind: "crown" };
+
 /**
  * A round's worst margin over the criteria, each normalised so that it reads g = 1 − c/α when the
  * loads' effect does not grow with the prestress α (so a root is predicted from one round, α* = α(1 − g),
  * and from two by a secant in 1/α): a cable's (f/f0 − m)/(1 − m) (a slack one at its would-be force
  * EA(ℓ − ℓ_u)/ℓ_u, negative), the displacement's 1 − d/limit, and a free crown's
- * 1 − (head − crown)/(head − roof crown) (when given). Null when some combination did not converge.
+ * 1 − (head − crown)/(head − roof crown) (when given); with the criterion that gives it. Null when some combination did not converge.
  */
-function marginOf(net: CableNetModel, solved: Solved, m: number, limitM: number, crown?: { crownM: number; roofM: number; headM: number }): number | null {
+function worstOf(net: CableNetModel, solved: Solved, m: number, limitM: number, crown?: { crownM: number; roofM: number; headM: number }): { margin: number; criterion: NetCriterion } | null {
   if (solved.some(({ s }) => !s.converged)) return null;
   const rest = restLengths(net.model);
   const members = net.model.members;
-  let g = crown ? 1 - (crown.headM - crown.crownM) / (crown.headM - crown.roofM) : Infinity;
-  for (const { s } of solved) {
-    g = Math.min(g, 1 - maxDisplacement(s) / limitM);
+  let worst: { margin: number; criterion: NetCriterion } = { margin: crown ? 1 - (crown.headM - crown.crownM) / (crown.headM - crown.roofM) : Infinity, criterion: { kind: "crown" } };
+  for (const { c, s } of solved) {
+    const moved = maxDisplacement(s);
+    if (1 - moved / limitM < worst.margin) worst = { margin: 1 - moved / limitM, criterion: { kind: "displacement", combination: c.name, displacementM: moved } };
     const x = s.coordinatesM;
     members.forEach((mem, j) => {
       const f0 = mem.initialForceN ?? 0;
@@ -187,10 +196,33 @@ function marginOf(net: CableNetModel, solved: Solved, m: number, limitM: number,
         const L = rest[j] as number;
         f = (mem.eaN * (Math.hypot(x[3 * mem.j]! - x[3 * mem.i]!, x[3 * mem.j + 1]! - x[3 * mem.i + 1]!, x[3 * mem.j + 2]! - x[3 * mem.i + 2]!) - L)) / L;
       }
-      g = Math.min(g, (f / f0 - m) / (1 - m));
+      const g = (f / f0 - m) / (1 - m);
+      if (g < worst.margin) worst = { margin: g, criterion: { kind: "cable", member: j, combination: c.name, forceN: f, prestressN: f0 } };
     });
   }
-  return g;
+  return worst;
+}
+
+/** A round's worst margin (worstOf), null when some combination did not converge. */
+function marginOf(net: CableNetModel, solved: Solved, m: number, limitM: number, crown?: { crownM: number; roofM: number; headM: number }): number | null {
+  return worstOf(net, solved, m, limitM, crown)?.margin ?? null;
+}
+
+/** What sets the prestress found, in words for a project lead: the criterion with the least margin at it (worstOf). */
+function governingText(input: NetAnalysisInput, round: NetRound): string {
+  const crown = input.heldCentre ? undefined : { crownM: round.crownM, roofM: capHeightAt(input.layout.cap, input.layout.centralRingRadiusM), headM: input.layout.mastHeadM };
+  const worst = worstOf(round.net, round.solved, input.residualPrestress, input.displacementLimitM, crown);
+  if (!worst) return "";
+  const w = worst.criterion;
+  if (w.kind === "crown") return "the free central ring hanging no lower than the roof's crown";
+  if (w.kind === "displacement") return `the net's movement under ${w.combination}: ${w.displacementM.toFixed(2)} m, against a limit of ${input.displacementLimitM.toFixed(2)} m`;
+  const mem = round.net.model.members[w.member]!;
+  const [a, b] = [round.net.model.nodes[mem.i]!, round.net.model.nodes[mem.j]!];
+  // the mean of its ends' plan radii (a circumferential cable's straight segment passes nearer the centre between them)
+  const radius = (Math.hypot(a[0], a[1]) + Math.hypot(b[0], b[1])) / 2;
+  const family = round.net.tags[w.member]!.family;
+  const share = (100 * w.forceN) / w.prestressN;
+  return `${family === "central ring" ? "the central ring" : `a${family === "outer radial" || family === "inner radial" ? "n" : ""} ${family} cable ${radius.toFixed(0)} m from the centre (the masts stand ${input.layout.mastRadiusM.toFixed(0)} m out)`} under ${w.combination}: it keeps ${share.toFixed(1)} % of its ${(w.prestressN / 1000).toFixed(0)} kN prestress, against ${(100 * input.residualPrestress).toFixed(0)} % required`;
 }
 
 /**
@@ -451,6 +483,7 @@ function summarise(input: NetAnalysisInput, last: Round): Omit<NetAnalysis, "scr
   return {
     prestressN: alpha,
     reason,
+    governs: governingText(input, last),
     envelope: envelopeOf(net, solved, input.layout.hoopRadiiM.length),
     ...supportsOf(net, solved),
     outerLengthM: familyLength("outer radial"),

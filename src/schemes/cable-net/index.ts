@@ -141,6 +141,7 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
   if (analysis && analysis.ringLeastUpliftN < 0) warnings.push(`under some combination the net presses the held ring down by ${kN(-analysis.ringLeastUpliftN)}: the tie-down must also take compression there (a strut, or enough prestress)`);
   const lumped = analysis ? lumpingNote(layout, analysis.model) : null;
   if (lumped) warnings.push(lumped);
+  if (analysis && analysis.reason === "" && analysis.governs !== "") warnings.push(`prestress ${kN(analysis.prestressN)} a radial cable: the least the search found that keeps every cable at its required share of prestress and the net within its movement limit under every combination analysed; what sets it: ${analysis.governs}`);
   if (analysis && analysis.screened.length > 0) warnings.push(`not analysed, bounded by the heaviest uniform combination (a lighter uniform map is that one scaled down): ${analysis.screened.join(", ")}`);
   if (analysis?.outwardPull) warnings.push("the net pulls some mast heads outwards under some combination: the backstay there would have to be a stay to the inside (its force is taken the same)");
   if (mast?.fabricated) warnings.push(`masts exceed the hollow-section catalogue: a fabricated ${mast.section} tube is assumed`);

@@ -51,3 +51,32 @@ describe("the net's prestress search at 60 m", () => {
     });
   }
 });
+
+describe("what sets the net's prestress (analyseNet governs)", () => {
+  it("names the cable, the combination and the share of prestress that the least margin of every combination gives (60 m, held centre)", () => {
+    const input = inputAt(60, true);
+    const a = analyseNet(input);
+    expect(a.reason).toBe("");
+    // recomputed here from the forces of every checked combination at the prestress found: the least f/f0 of any prestressed cable
+    const every = netRoundAt(input, a.prestressN, unboundedCombinations(input.combinations, input.selfWeightKPa));
+    let least = { share: Infinity, combination: "" };
+    for (const { c, s } of every.solved) {
+      every.net.model.members.forEach((m, j) => {
+        const f0 = m.initialForceN ?? 0;
+        const share = (s.forcesN[j] as number) / f0;
+        if (f0 > 0 && share < least.share) least = { share, combination: c.name };
+      });
+    }
+    const moved = Math.max(...every.solved.map(({ s }) => Math.max(...Array.from({ length: s.displacementsM.length / 3 }, (_, k) => Math.hypot(s.displacementsM[3 * k]!, s.displacementsM[3 * k + 1]!, s.displacementsM[3 * k + 2]!)))));
+    // whichever criterion is nearer its limit is the one named (each as the search normalises it: worstOf)
+    const cableMargin = (least.share - input.residualPrestress) / (1 - input.residualPrestress);
+    const moveMargin = 1 - moved / input.displacementLimitM;
+    if (cableMargin <= moveMargin) {
+      expect(a.governs).toContain(`under ${least.combination}: it keeps ${(100 * least.share).toFixed(1)} % of its`);
+      expect(a.governs).toMatch(/against 10 % required$/);
+      expect(least.share).toBeGreaterThanOrEqual(input.residualPrestress);
+    } else {
+      expect(a.governs).toContain(`${moved.toFixed(2)} m, against a limit of ${input.displacementLimitM.toFixed(2)} m`);
+    }
+  });
+});
