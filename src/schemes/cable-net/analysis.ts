@@ -160,9 +160,16 @@ const GROWTH = 4;
  * 250–400 m) and tells little but "more"; one above it passes in a few iterations and predicts the
  * answer well. From 3×: 92 rounds over ten designs (160–400 m held down and free, 60 m, 200 m with
  * tall masts), from 6×: 76, the held-down 250–400 m analyses 2.1–4.5× faster (net9, measured;
- * `npm run bench -- net` prints the rounds per design).
+ * `npm run bench -- net` prints the rounds per design). The demo study's nets need 6–10× (300 and 380 m,
+ * each mast height the search samples): from 6× the first round failed at 38–187 Newton iterations,
+ * from 10× 28–41. CPU of the span study's 3D pass over 37 spans (node): demo study 42.3 s from 6×,
+ * 26.3 from 8×, 22.4 from 9×, 23.8 from 10×, 23.1 from 12×; default study 31.6 (6×), 25.0 (9×), 27.1
+ * (10×), 31.3 (12×); the designs moved within the search's tolerance (self-weight within 4 %). From 8×
+ * and 10× the demo net's self-weight stepped 15.4 % from 65 to 70 m, past the span-smoothness limit
+ * (from 6× and 9×: 14.2 %): its 70 m prestress moved 0.2 % and a strand size with it, on a step
+ * made by the mast height the search chooses (0.15, 0.1, 0.15 × span at 60, 65, 70 m).
  */
-const START_OF_SEED = 6;
+const START_OF_SEED = 9;
 /** Least radial prestress tried, as a share of the heaviest combination's load per radial cable (a floor for the search, not a design value). */
 const PRESTRESS_FLOOR_OF_LOAD = 0.05;
 
