@@ -505,6 +505,36 @@ function summarise(input: NetAnalysisInput, last: Round): Omit<NetAnalysis, "scr
   };
 }
 
+/**
+ * The radial cables of the first mast as form-found (under the permanent load, before any
+ * combination): each cable from the mast head to its end (the edge anchor or the central ring), as
+ * (plan radius, height above the eaves) points, for the section drawing.
+ */
+export function mastRadialCables(net: CableNetModel): [number, number][][] {
+  const head = net.mastHeads[0];
+  if (head === undefined) return [];
+  const { nodes, members } = net.model;
+  const radial = (j: number) => net.tags[j]!.family === "outer radial" || net.tags[j]!.family === "inner radial";
+  const at = (k: number): [number, number] => [Math.hypot(nodes[k]![0], nodes[k]![1]), nodes[k]![2]];
+  const cables: [number, number][][] = [];
+  members.forEach((m, j) => {
+    if (!radial(j) || (m.i !== head && m.j !== head)) return;
+    // follow the cable from the head: at each node, the other radial member of the same family
+    const family = net.tags[j]!.family;
+    const ends = new Set([...net.mastHeads, ...net.anchors, ...net.ringNodes]);
+    const points = [at(head)];
+    let [member, node] = [j, m.i === head ? m.j : m.i];
+    for (;;) {
+      points.push(at(node));
+      const next = ends.has(node) ? -1 : members.findIndex((n, k) => k !== member && net.tags[k]!.family === family && (n.i === node || n.j === node));
+      if (next < 0) break;
+      [member, node] = [next, members[next]!.i === node ? members[next]!.j : members[next]!.i];
+    }
+    cables.push(points);
+  });
+  return cables;
+}
+
 /** The net drawn for the combination that moves it most: heights above the floor, forces, displacements, slack cables; the masts drawn as struts to the floor. */
 function netView(input: NetAnalysisInput, net: CableNetModel, caseName: string, s: CableSolution): AnalysisView {
   const base = input.brief.eavesHeightM;

@@ -136,15 +136,22 @@ function parabola(from: readonly [number, number], to: readonly [number, number]
   });
 }
 
-/** The section through two masts, mirrored, heights above the floor. */
-export function cableNetSection(layout: CableNetLayout, eavesM: number): DrawingLine[] {
+/**
+ * The section through two masts, mirrored, heights above the floor. Without `radialCables` the
+ * closed form's net: each bay's radial cable a parabola of the layout's sag, and the valley cable
+ * that holds it down along the roof. With them (the form-found 3D net's radial cables of one mast,
+ * each as (plan radius, height above the eaves) points), those instead, the circumferential cables
+ * marked where they cross them, and no valley cables: the 3D net has none.
+ */
+export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCables?: readonly (readonly (readonly [number, number])[])[]): DrawingLine[] {
   const lines: DrawingLine[] = [];
   const both = (role: string, pts: [number, number][]) => {
     lines.push({ role, points: pts });
     lines.push({ role, points: pts.map(([x, y]) => [-x, y] as const) });
   };
   const headPt: [number, number] = [layout.mastRadiusM, layout.mastHeadM + eavesM];
-  for (const bay of [layout.outer, layout.inner]) {
+  for (const cable of radialCables ?? []) both("radial cable", cable.map(([r, z]) => [r, z + eavesM]));
+  for (const bay of radialCables ? [] : [layout.outer, layout.inner]) {
     const end: [number, number] = [bay.endRadiusM, bay.endHeightM + eavesM];
     both("radial cable", parabola(headPt, end, bay.sagM));
     const valley: [number, number][] = [];
@@ -168,10 +175,9 @@ export function cableNetSection(layout: CableNetLayout, eavesM: number): Drawing
   const rc = layout.centralRingRadiusM;
   lines.push({ role: "ring", points: [[-rc, layout.inner.endHeightM + eavesM], [rc, layout.inner.endHeightM + eavesM]] });
   const tick = a * 0.005;
-  for (const r of layout.hoopRadiiM) {
-    const y = capHeightAt(layout.cap, r) + eavesM;
-    both("circumferential cable", [[r - tick, y], [r + tick, y]]);
-  }
+  // the circumferential cables where they cross the radial ones: on the roof in the closed form, at the form-found net's crossings in 3D
+  const crossings = radialCables ? radialCables.flatMap((cable) => cable.slice(1, -1).map(([r, z]) => [r, z + eavesM] as const)) : layout.hoopRadiiM.map((r) => [r, capHeightAt(layout.cap, r) + eavesM] as const);
+  for (const [r, y] of crossings) both("circumferential cable", [[r - tick, y], [r + tick, y]]);
   return lines;
 }
 

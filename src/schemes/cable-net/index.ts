@@ -9,7 +9,7 @@ import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
 import { sizeCableNet, sizeNetFromAnalysis, MAST_SPLICE_TUBE_LENGTH_M, type NetSizing, type NetSizingInput } from "./sizing";
 import { MAST_SEGMENT_MAX_M } from "./laced-mast";
-import { analyseNet, lumpingNote, type NetAnalysis, type NetAnalysisInput } from "./analysis";
+import { analyseNet, mastRadialCables, lumpingNote, type NetAnalysis, type NetAnalysisInput } from "./analysis";
 import { designBasis } from "../../loads";
 import { strandResistanceN } from "../../catalogue/pick-strand";
 import { cableNetDeclaration, type CableNetOptions } from "./declaration";
@@ -141,6 +141,11 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
   if (analysis && analysis.ringLeastUpliftN < 0) warnings.push(`under some combination the net presses the held ring down by ${kN(-analysis.ringLeastUpliftN)}: the tie-down must also take compression there (a strut, or enough prestress)`);
   const lumped = analysis ? lumpingNote(layout, analysis.model) : null;
   if (lumped) warnings.push(lumped);
+  if (analysis && analysis.reason === "") {
+    // the form-found radial cables against the roof surface the fabric follows (the closed form's touch it)
+    const gapM = Math.max(0, ...mastRadialCables(analysis.model).flatMap((cable) => cable.map(([r, z]) => z - capHeightAt(layout.cap, Math.min(r, layout.cap.baseRadiusM)))));
+    if (gapM > 0.05 * layout.cap.baseRadiusM) warnings.push(`the form-found radial cables run up to ${gapM.toFixed(1)} m above the roof surface the fabric follows (the closed form's cables hang down onto it): the fabric would hang from them on hangers that long, which are neither designed nor taken off; a net form-found to the roof's shape would need valley cables (not built)`);
+  }
   if (analysis && analysis.reason === "" && analysis.governs !== "") warnings.push(`prestress ${kN(analysis.prestressN)} a radial cable: the least the search found that keeps every cable at its required share of prestress and the net within its movement limit under every combination analysed; what sets it: ${analysis.governs}`);
   if (analysis && analysis.screened.length > 0) warnings.push(`not analysed, bounded by the heaviest uniform combination (a lighter uniform map is that one scaled down): ${analysis.screened.join(", ")}`);
   if (analysis?.outwardPull) warnings.push("the net pulls some mast heads outwards under some combination: the backstay there would have to be a stay to the inside (its force is taken the same)");
@@ -198,7 +203,8 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     // the central ring's pull is the same in every combination of the closed form (ridge and valley share the load): the most utilised of the others names the case
     governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
     ...capEnvelope(layout.cap, brief.eavesHeightM),
-    drawing: drawingWithLazyPlan(section, () => cableNetPlan(layout)),
+    // the 3D net's section: its form-found radial cables, no valley cables (the closed form's are not built)
+    drawing: drawingWithLazyPlan(analysis && analysis.reason === "" ? () => cableNetSection(layout, brief.eavesHeightM, mastRadialCables(analysis.model)) : section, () => cableNetPlan(layout)),
     ...(analysis ? { analysis: analysis.summary } : {}),
     reason: analysis?.reason ?? "",
   };

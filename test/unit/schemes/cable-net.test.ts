@@ -84,9 +84,12 @@ describe("cableNet.design", () => {
     expect(() => design(DEFAULT_BRIEF, { ...cableNet.defaults, masts: 2.5 })).toThrow(/invalid masts: 2.5/);
   });
 
-  it("draws masts, cables and fabric", () => {
+  it("draws masts, cables and fabric (valley cables only in the closed form: the 3D net, the default, has none)", () => {
     const roles = new Set(d.drawing.section.map((l) => l.role));
-    for (const role of ["radial cable", "valley cable", "mast", "backstay", "fabric", "ring"]) expect(roles.has(role)).toBe(true);
+    for (const role of ["radial cable", "circumferential cable", "mast", "backstay", "fabric", "ring"]) expect(roles.has(role)).toBe(true);
+    expect(roles.has("valley cable")).toBe(cableNet.defaults.analysis === "closed-form");
+    const closed = new Set(design(DEFAULT_BRIEF, { ...cableNet.defaults, analysis: "closed-form" }).drawing.section.map((l) => l.role));
+    expect(closed.has("valley cable")).toBe(true);
   });
 });
 
@@ -184,5 +187,24 @@ describe("cableNet through the 3D analysis (issue 13, option analysis = 3d)", ()
     const closed = design({ ...DEFAULT_BRIEF, spanM: 60, riseM: 6 }, { ...cableNet.defaults, analysis: "closed-form" });
     expect(closed.analysis).toBeUndefined();
     expect(closed.members.some((m) => m.element.includes("valley"))).toBe(true);
+  });
+  it("draws the form-found net in section: its radial cables from the mast head to the edge and to the central ring, no valley cables", () => {
+    const lines = d.drawing.section;
+    expect(lines.some((l) => l.role === "valley cable")).toBe(false);
+    const layout = cableNetLayout({ ...DEFAULT_BRIEF, spanM: 60, riseM: 6 }, cableNet.defaults.masts, cableNet.defaults.mastRingRatio, cableNet.defaults.mastHeightRatio, cableNet.defaults.radialCablesPerMast, cableNet.defaults.hangerSpacingM);
+    const radial = lines.filter((l) => l.role === "radial cable" && l.points[0]![0] > 0);
+    // every radial cable of the first mast (both sides of the section mirror it)
+    expect(radial).toHaveLength(cableNet.defaults.radialCablesPerMast);
+    const head = [layout.mastRadiusM, layout.mastHeadM + DEFAULT_BRIEF.eavesHeightM];
+    for (const l of radial) {
+      expect(l.points[0]![0]).toBeCloseTo(head[0]!, 6);
+      expect(l.points[0]![1]).toBeCloseTo(head[1]!, 6);
+      const end = l.points.at(-1)!;
+      const atEdge = Math.abs(end[0] - layout.cap.baseRadiusM) < 1e-6;
+      const atRing = Math.abs(end[0] - layout.centralRingRadiusM) < 1e-6;
+      expect(atEdge || atRing).toBe(true);
+    }
+    const closedLines = design({ ...DEFAULT_BRIEF, spanM: 60, riseM: 6 }, { ...cableNet.defaults, analysis: "closed-form" }).drawing.section;
+    expect(closedLines.some((l) => l.role === "valley cable")).toBe(true);
   });
 });
