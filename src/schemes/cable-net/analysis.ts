@@ -508,7 +508,8 @@ function summarise(input: NetAnalysisInput, last: Round): Omit<NetAnalysis, "scr
 /**
  * The radial cables of the first mast as form-found (under the permanent load, before any
  * combination): each cable from the mast head to its end (the edge anchor or the central ring), as
- * (plan radius, height above the eaves) points, for the section drawing.
+ * (plan radius, height above the eaves) points, for the section drawing; those nearest the mast's
+ * own radial plane (by the plan angle of their end) first.
  */
 export function mastRadialCables(net: CableNetModel): [number, number][][] {
   const head = net.mastHeads[0];
@@ -516,7 +517,8 @@ export function mastRadialCables(net: CableNetModel): [number, number][][] {
   const { nodes, members } = net.model;
   const radial = (j: number) => net.tags[j]!.family === "outer radial" || net.tags[j]!.family === "inner radial";
   const at = (k: number): [number, number] => [Math.hypot(nodes[k]![0], nodes[k]![1]), nodes[k]![2]];
-  const cables: [number, number][][] = [];
+  const cables: { points: [number, number][]; offAxis: number }[] = [];
+  const headAngle = Math.atan2(nodes[head]![1], nodes[head]![0]);
   members.forEach((m, j) => {
     if (!radial(j) || (m.i !== head && m.j !== head)) return;
     // follow the cable from the head: at each node, the other radial member of the same family
@@ -530,9 +532,10 @@ export function mastRadialCables(net: CableNetModel): [number, number][][] {
       if (next < 0) break;
       [member, node] = [next, members[next]!.i === node ? members[next]!.j : members[next]!.i];
     }
-    cables.push(points);
+    const turn = Math.atan2(nodes[node]![1], nodes[node]![0]) - headAngle;
+    cables.push({ points, offAxis: Math.abs(Math.atan2(Math.sin(turn), Math.cos(turn))) });
   });
-  return cables;
+  return cables.sort((a, b) => a.offAxis - b.offAxis).map((c) => c.points);
 }
 
 /** The net drawn for the combination that moves it most: heights above the floor, forces, displacements, slack cables; the masts drawn as struts to the floor. */

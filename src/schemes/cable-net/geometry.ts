@@ -140,8 +140,9 @@ function parabola(from: readonly [number, number], to: readonly [number, number]
  * The section through two masts, mirrored, heights above the floor. Without `radialCables` the
  * closed form's net: each bay's radial cable a parabola of the layout's sag, and the valley cable
  * that holds it down along the roof. With them (the form-found 3D net's radial cables of one mast,
- * each as (plan radius, height above the eaves) points), those instead, the circumferential cables
- * marked where they cross them, and no valley cables: the 3D net has none.
+ * each as (plan radius, height above the eaves) points, those nearest the section's plane first),
+ * those instead, each circumferential cable marked at its radius on the first of its side, and no
+ * valley cables: the 3D net has none.
  */
 export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCables?: readonly (readonly (readonly [number, number])[])[]): DrawingLine[] {
   const lines: DrawingLine[] = [];
@@ -175,9 +176,19 @@ export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCa
   const rc = layout.centralRingRadiusM;
   lines.push({ role: "ring", points: [[-rc, layout.inner.endHeightM + eavesM], [rc, layout.inner.endHeightM + eavesM]] });
   const tick = a * 0.005;
-  // the circumferential cables where they cross the radial ones: on the roof in the closed form, at the form-found net's crossings in 3D
-  const crossings = radialCables ? radialCables.flatMap((cable) => cable.slice(1, -1).map(([r, z]) => [r, z + eavesM] as const)) : layout.hoopRadiiM.map((r) => [r, capHeightAt(layout.cap, r) + eavesM] as const);
-  for (const [r, y] of crossings) both("circumferential cable", [[r - tick, y], [r + tick, y]]);
+  // each circumferential cable at its radius: on the roof in the closed form; in 3D on the radial cable of its side nearest the section's plane (the first given)
+  const onCable = (r: number): number => {
+    const cable = radialCables?.find((c) => (c.at(-1)![0] < layout.mastRadiusM) === (r < layout.mastRadiusM));
+    if (!cable) return capHeightAt(layout.cap, r);
+    const k = cable.findIndex((p, i) => i > 0 && (p[0] - r) * (cable[i - 1]![0] - r) <= 0);
+    if (k < 0) return capHeightAt(layout.cap, r);
+    const [[r0, z0], [r1, z1]] = [cable[k - 1]!, cable[k]!];
+    return r1 === r0 ? z1 : z0 + ((z1 - z0) * (r - r0)) / (r1 - r0);
+  };
+  for (const r of layout.hoopRadiiM) {
+    const y = onCable(r) + eavesM;
+    both("circumferential cable", [[r - tick, y], [r + tick, y]]);
+  }
   return lines;
 }
 
