@@ -279,7 +279,8 @@ for (const s of schemes) {
     wrap.className = "grid charts";
     wrap.append(
       chartFigure(
-        sectionChartOptions({ brief: brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: caption.value, width: 620 }),
+        // the roof line at the scheme's own rise (the brief's rise is another roof when each scheme takes its own)
+        sectionChartOptions({ brief: s.result.value?.brief ?? brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: caption.value, width: 620 }),
         `${id}-section`,
       ),
     );
