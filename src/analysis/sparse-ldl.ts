@@ -63,6 +63,13 @@ export class SparsePattern {
     return (this.blocks ??= supernodesOf(this));
   }
 
+  private plan?: RowPlan;
+
+  /** The supernodes each row of the factor meets (computed on first use, then shared by every factorisation of the pattern). */
+  get rowPlan(): RowPlan {
+    return (this.plan ??= rowPlanOf(this, this.supernodes));
+  }
+
   /** Position of entry (i, j) in a matrix's values, −1 when it is not in the pattern. */
   slot(i: number, j: number): number {
     if (i > j) [i, j] = [j, i];
@@ -225,6 +232,42 @@ function supernodesOf(pattern: SparsePattern): Supernodes {
 }
 
 /**
+ * For each row k of the factor, the supernodes below which it lies (other than its own), in the
+ * order the up-looking factorisation must apply them (topological: each before its ancestors):
+ * supernodes[start[k] … start[k+1]−1]. The tree paths from the entries of A's column k, as each
+ * factorisation walked them until the walk was kept once per pattern (the symbolic part of every
+ * factorisation: 9.5 % of the 160 m cable net's solves, profiled).
+ */
+export interface RowPlan {
+  start: Int32Array;
+  supernodes: Int32Array;
+}
+
+function rowPlanOf(pattern: SparsePattern, sn: Supernodes): RowPlan {
+  const { n, colStart, rowIndex } = pattern;
+  const start = new Int32Array(n + 1);
+  const list: number[] = [];
+  const stack = new Int32Array(sn.count);
+  const path = new Int32Array(sn.count);
+  const flag = new Int32Array(sn.count).fill(-1);
+  for (let k = 0; k < n; k++) {
+    let top = sn.count;
+    flag[sn.of[k]!] = k;
+    for (let p = colStart[k]!; p < colStart[k + 1]!; p++) {
+      let len = 0;
+      for (let J = sn.of[rowIndex[p]!]!; flag[J] !== k; J = sn.parent[J]!) {
+        path[len++] = J;
+        flag[J] = k;
+      }
+      while (len > 0) stack[--top] = path[--len]!;
+    }
+    for (; top < sn.count; top++) list.push(stack[top]!);
+    start[k + 1] = list.length;
+  }
+  return { start, supernodes: Int32Array.from(list) };
+}
+
+/**
  * A = L·D·Lᵀ by rows (up-looking, by supernode), A left unchanged. A pivot smaller than
  * relativeTolerance × |a_ii| counts as zero: the matrix is singular at that equation.
  */
@@ -236,30 +279,22 @@ export function factorSparseLDL(a: SparseSymmetricMatrix, relativeTolerance = 1e
   const block = new Float64Array(sn.blockStart[sn.count]!);
   const d = new Float64Array(n);
   const y = new Float64Array(n);
-  const stack = new Int32Array(sn.count);
-  const path = new Int32Array(sn.count);
-  const flag = new Int32Array(sn.count).fill(-1);
   const filled = new Int32Array(sn.count);
+  const { start, supernodes: meets } = a.pattern.rowPlan;
   for (let k = 0; k < n; k++) {
     const K = sn.of[k]!;
-    // the supernodes row k meets (other than its own): the tree paths from A's column k, in topological order
-    let top = sn.count;
-    flag[K] = k;
     let diagonal = 0;
     for (let p = colStart[k]!; p < colStart[k + 1]!; p++) {
       const i = rowIndex[p]!;
       y[i]! += values[p]!;
       if (i === k) diagonal = values[p]!;
-      let len = 0;
-      for (let J = sn.of[i]!; flag[J] !== k; J = sn.parent[J]!) {
-        path[len++] = J;
-        flag[J] = k;
-      }
-      while (len > 0) stack[--top] = path[--len]!;
     }
     let pivot = y[k]!;
     y[k] = 0;
-    for (; top < sn.count; top++) pivot -= rowOfSupernode(sn, stack[top]!, filled[stack[top]!]!++, inner, block, d, y);
+    for (let t = start[k]!; t < start[k + 1]!; t++) {
+      const J = meets[t]!;
+      pivot -= rowOfSupernode(sn, J, filled[J]!++, inner, block, d, y);
+    }
     pivot -= rowInsideSupernode(sn, K, k, inner, d, y);
     if (!(Math.abs(pivot) > relativeTolerance * Math.abs(diagonal)) || !Number.isFinite(pivot)) return { ok: false, equation: k };
     d[k] = pivot;
