@@ -519,11 +519,11 @@ export function mastRadialCables(net: CableNetModel): [number, number][][] {
   const at = (k: number): [number, number] => [Math.hypot(nodes[k]![0], nodes[k]![1]), nodes[k]![2]];
   const cables: { points: [number, number][]; offAxis: number }[] = [];
   const headAngle = Math.atan2(nodes[head]![1], nodes[head]![0]);
+  const ends = new Set([...net.mastHeads, ...net.anchors, ...net.ringNodes]);
   members.forEach((m, j) => {
     if (!radial(j) || (m.i !== head && m.j !== head)) return;
-    // follow the cable from the head: at each node, the other radial member of the same family
+    // follow the cable from the head to an end (an anchor, the ring): at each node, the other radial member of the same family
     const family = net.tags[j]!.family;
-    const ends = new Set([...net.mastHeads, ...net.anchors, ...net.ringNodes]);
     const points = [at(head)];
     let [member, node] = [j, m.i === head ? m.j : m.i];
     for (;;) {
