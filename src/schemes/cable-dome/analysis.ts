@@ -174,10 +174,11 @@ function judged(j: Judge, alpha: number, solved: readonly Solved[]): { estimate:
  * analysed combinations, with the least prestress (a multiple α of the axisymmetric self-stress
  * state, seeded by the closed form) under which every case converges, every cable — or every cable
  * but the diagonals when the designer lets them slacken — keeps at least `residualPrestress` × its
- * prestress force, and no node moves more than the displacement limit. A passing α is bracketed
- * (from the linear estimate N_j = α s_j + l_j ⇒ α = max −l_j/((1 − m) s_j), or by raising α by
- * half) and then bisected against the highest failing one; the passing end is kept. A round whose
- * linear estimate is not needed (the trial below the seed, the bisections) stops at its first
+ * prestress force, and no node moves more than the displacement limit. The least passing α is
+ * bracketed — from a passing seed by lowering it (to the linear estimate N_j = α s_j + l_j ⇒
+ * α = max −l_j/((1 − m) s_j), or 10 % lower) until one fails, from a failing seed by raising it (to
+ * the estimate, or by half) until one passes — and then bisected to 1 %; the passing end is kept.
+ * A round whose linear estimate is not needed (the trials below the seed, the bisections) stops at its first
  * failing case, the case that failed last solved first; the failing end kept is completed, so the
  * answer and the failure reported are those of solving every case each round.
  */
