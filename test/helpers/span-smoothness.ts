@@ -60,15 +60,38 @@ function flips(points: readonly SpanPoint[]): { from: number; to: number; regime
   return out;
 }
 
-/** The property for the given schemes on one study's brief; the schemes in `knownFailing` are expected to fail (it.fails). */
-export function smoothnessSuite(title: string, study: () => Study, knownFailing: readonly SchemeId[], schemeIds: (id: SchemeId) => boolean): void {
+/** A jump over the limit that is known and explained: the test expects exactly these (no other, and not fewer: the day one goes, the record must). */
+export interface KnownJump {
+  id: SchemeId;
+  from: number;
+  to: number;
+  metric: (typeof METRICS)[number];
+}
+
+/**
+ * The cable net's known jump, on both studies (measured 4 Dec, lead, after the fabric was laid on the
+ * form-found net instead of the brief's cap): self-weight +18.9 % (default study) and +15.1 % (demo)
+ * at 65 → 70 m, with carbon per m² of floor, the objective, +5.9 % and +3.7 %. Cause: at 65 m the
+ * inner bay gains its third circumferential cable (geometry.ts evenlyBetween: 2 at 60 m, 3 at 65 m),
+ * and its prestress is then set by a circumferential cable under wind uplift rather than by the
+ * inner radial cables beside the ring under snow (3 masts, mast height 0.12 × span: 1,238, 1,303 and
+ * 1,788 kN at 60, 65 and 70 m); that 65 m net is 6 % better in carbon than its neighbours and its
+ * best mast height drops to 0.12 × span (demo 0.10; 0.15–0.17 at 60 and 70 m): the fabric on the
+ * net is 13 % (10 %) more than the plan at the lower mast, 18 % at 0.15, so the lower mast wins. Before the fabric change the same step was 11.6 % (default) and 14.2 %
+ * (demo). Open on issue 13.
+ */
+export const KNOWN_JUMPS: readonly KnownJump[] = [{ id: "cable-net", from: 65, to: 70, metric: "selfWeightKgPerM2" }];
+
+/** The property for the given schemes on one study's brief; the schemes in `knownFailing` are expected to fail (it.fails); `knownJumps` are expected exactly. */
+export function smoothnessSuite(title: string, study: () => Study, knownFailing: readonly SchemeId[], schemeIds: (id: SchemeId) => boolean, knownJumps: readonly KnownJump[] = []): void {
   describe(title, () => {
     const catalogue = defaultCatalogue();
     for (const model of SCHEMES.filter((m) => schemeIds(m.id))) {
       const run = knownFailing.includes(model.id) ? it.fails : it;
-      run(`${model.id}: no metric jumps more than 15 % between neighbours without a named regime change, and the regime does not flip back`, () => {
+      run(`${model.id}: no metric jumps more than 15 % between neighbours without a named regime change (but the known ones), and the regime does not flip back`, () => {
         const points = runSpanStudy(study(), catalogue, { fromM: 40, toM: 400, stepM: 5 }, { schemeIds: [model.id] });
-        expect(jumps(points)).toEqual([]);
+        const known = knownJumps.filter((j) => j.id === model.id).map(({ from, to, metric }) => ({ from, to, metric }));
+        expect(jumps(points).map(({ from, to, metric }) => ({ from, to, metric }))).toEqual(known);
         expect(flips(points)).toEqual([]);
       }, 400_000); // each scheme: 73 spans, each with its proportion search (about 3–170 s here)
     }

@@ -141,8 +141,9 @@ function parabola(from: readonly [number, number], to: readonly [number, number]
  * closed form's net: each bay's radial cable a parabola of the layout's sag, and the valley cable
  * that holds it down along the roof. With them (the form-found 3D net's radial cables of one mast,
  * each as (plan radius, height above the eaves) points, those nearest the section's plane first),
- * those instead, each circumferential cable marked at its radius on the first of its side, and no
- * valley cables: the 3D net has none.
+ * those instead, each circumferential cable marked at its radius on the first of its side, the fabric along
+ * the first of each side (it spans from node to node of the net), and no valley cables: the 3D net
+ * has none.
  */
 export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCables?: readonly (readonly (readonly [number, number])[])[]): DrawingLine[] {
   const lines: DrawingLine[] = [];
@@ -168,9 +169,17 @@ export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCa
   both("anchor", [[a, 0], [a, eavesM]]);
   const steps = 40;
   const fabric: [number, number][] = [];
-  for (let s = -steps; s <= steps; s++) {
-    const x = (s / steps) * a;
-    fabric.push([x, capHeightAt(layout.cap, x) + eavesM]);
+  const inner = radialCables?.find((c) => c.at(-1)![0] < layout.mastRadiusM);
+  const outer = radialCables?.find((c) => c.at(-1)![0] > layout.mastRadiusM);
+  if (inner && outer) {
+    // the fabric spans from node to node of the 3D net: along the mast's own radial cables, flat over the ring
+    const half = [...inner].reverse().concat(outer.slice(1)).map(([r, z]) => [r, z + eavesM] as [number, number]);
+    fabric.push(...[...half].reverse().map(([r, z]) => [-r, z] as [number, number]), ...half);
+  } else {
+    for (let s = -steps; s <= steps; s++) {
+      const x = (s / steps) * a;
+      fabric.push([x, capHeightAt(layout.cap, x) + eavesM]);
+    }
   }
   lines.push({ role: "fabric", points: fabric });
   const rc = layout.centralRingRadiusM;

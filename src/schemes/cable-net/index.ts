@@ -10,6 +10,7 @@ import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } fr
 import { sizeCableNet, sizeNetFromAnalysis, MAST_SPLICE_TUBE_LENGTH_M, type NetSizing, type NetSizingInput } from "./sizing";
 import { MAST_SEGMENT_MAX_M } from "./laced-mast";
 import { analyseNet, mastRadialCables, lumpingNote, type NetAnalysis, type NetAnalysisInput } from "./analysis";
+import { heightFieldMeasure } from "../../analysis/height-field";
 import { designBasis } from "../../loads";
 import { strandResistanceN } from "../../catalogue/pick-strand";
 import { cableNetDeclaration, type CableNetOptions } from "./declaration";
@@ -105,7 +106,7 @@ function netAnalysisInput(input: NetSizingInput, closed: NetSizing, selfWeightKP
  * form's prestress (the radial cable's horizontal tension H = w_p L²/(8f)) and stiffnesses; when it
  * fails, the closed form's sizes with the analysis's reason.
  */
-function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: number): { sized: NetSizing; analysis: NetAnalysis } {
+function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: number): { sized: NetSizing; analysis: NetAnalysis; surface?: NetSurface } {
   let analysis: NetAnalysis;
   try {
     analysis = analyseNet(netAnalysisInput(input, closed, selfWeightKPa));
@@ -116,15 +117,40 @@ function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: nu
   }
   if (analysis.reason !== "") return { sized: closed, analysis };
   const e = analysis.envelope;
+  const surface = netSurface(input.layout, analysis);
   const sized = sizeNetFromAnalysis(input, closed, {
+    fabricSurfaceM2: surface.roofSurfaceM2,
     outerN: e.outerN, innerN: e.innerN, hoopN: e.hoopN, ringN: e.ringN, caseOf: e.caseOf, outerLengthM: analysis.outerLengthM, innerLengthM: analysis.innerLengthM,
     mastForceN: analysis.mastForceN, mastCase: analysis.mastCase, backstayHorizontalN: analysis.backstayHorizontalN, anchorUpliftN: analysis.anchorUpliftN,
     ringUpliftN: analysis.ringUpliftN, ringUpliftCase: analysis.ringUpliftCase,
   });
-  return { sized, analysis };
+  return { sized, analysis, surface };
 }
 
-function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnalysis | undefined, held: boolean): string[] {
+/** The form-found net's surface (the fabric's) and the volume it encloses, and how high above the brief's cap it stands (its lowest and highest node, at most 0: it dips below). */
+interface NetSurface {
+  roofSurfaceM2: number;
+  enclosedVolumeM3: number;
+  aboveCapM: { least: number; most: number };
+}
+
+/**
+ * The fabric on the form-found net (under the permanent load): the flat triangles between the net's
+ * nodes (heightFieldMeasure), their surface scaled from the polygon of edge anchors to the full
+ * plan (the strip between them lies at the eaves, so its volume is left at 0).
+ */
+function netSurface(layout: CableNetLayout, analysis: NetAnalysis): NetSurface {
+  const nodes = analysis.model.model.nodes;
+  const m = heightFieldMeasure(nodes);
+  const above = nodes.map(([x, y, z]) => z - capHeightAt(layout.cap, Math.min(Math.hypot(x, y), layout.cap.baseRadiusM)));
+  return {
+    roofSurfaceM2: (m.surfaceM2 / m.planM2) * layout.cap.planAreaM2,
+    enclosedVolumeM3: m.volumeM3,
+    aboveCapM: { least: Math.min(...above), most: Math.max(...above) },
+  };
+}
+
+function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnalysis | undefined, surface: NetSurface | undefined, held: boolean): string[] {
   const mast = sized.groups.find((g) => g.kind === "mast");
   const warnings = [
     analysis
@@ -141,10 +167,9 @@ function netWarnings(layout: CableNetLayout, sized: NetSizing, analysis: NetAnal
   if (analysis && analysis.ringLeastUpliftN < 0) warnings.push(`under some combination the net presses the held ring down by ${kN(-analysis.ringLeastUpliftN)}: the tie-down must also take compression there (a strut, or enough prestress)`);
   const lumped = analysis ? lumpingNote(layout, analysis.model) : null;
   if (lumped) warnings.push(lumped);
-  if (analysis && analysis.reason === "") {
-    // the form-found radial cables against the roof surface the fabric follows (the closed form's touch it)
-    const gapM = Math.max(0, ...mastRadialCables(analysis.model).flatMap((cable) => cable.map(([r, z]) => z - capHeightAt(layout.cap, Math.min(r, layout.cap.baseRadiusM)))));
-    if (gapM > 0.05 * layout.cap.baseRadiusM) warnings.push(`the form-found radial cables run up to ${gapM.toFixed(1)} m above the roof surface the fabric follows (the closed form's cables hang down onto it): the fabric would hang from them on hangers that long, which are neither designed nor taken off; a net form-found to the roof's shape would need valley cables (not built)`);
+  if (surface) {
+    const capM2 = layout.cap.surfaceM2;
+    warnings.push(`the fabric spans from node to node of the form-found net, so its surface is the net's: ${surface.roofSurfaceM2.toFixed(0)} m², ${((surface.roofSurfaceM2 / capM2 - 1) * 100).toFixed(0)} % more than the brief's cap at this rise (${capM2.toFixed(0)} m²), taken off so; the net stands up to ${surface.aboveCapM.most.toFixed(1)} m above the cap (at the mast heads); the wind's pressure maps are the cap's (the net's steeper faces near the mast heads are not mapped) and the permanent load the closed form's (its fabric on the cap's surface)${surface.aboveCapM.least < -0.05 ? `; the net dips up to ${(-surface.aboveCapM.least).toFixed(1)} m below the cap, where the usable floor, taken under the cap, is overstated` : "; the usable floor is taken under the cap, on or below every node of the net (on the safe side)"}`);
   }
   if (analysis && analysis.reason === "" && analysis.governs !== "") warnings.push(`prestress ${kN(analysis.prestressN)} a radial cable: the least the search found that keeps every cable at its required share of prestress and the net within its movement limit under every combination analysed; what sets it: ${analysis.governs}`);
   if (analysis && analysis.screened.length > 0) warnings.push(`not analysed, bounded by the heaviest uniform combination (a lighter uniform map is that one scaled down): ${analysis.screened.join(", ")}`);
@@ -185,6 +210,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
   const analysed = opts.analysis === "3d" ? analysedNet(input, converged.value, converged.selfWeightKPa) : null;
   const sized = analysed?.sized ?? converged.value;
   const analysis = analysed?.analysis;
+  const surface = analysed?.surface;
   const checks = sized.groups.map((g) => check(g.element, g.governing, g.designForceN, g.resistanceN, "N"));
   if (analysis && analysis.reason === "") {
     const largest = Math.max(...analysis.summary.loadCases.map((c) => c.maxDisplacementM));
@@ -196,13 +222,13 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     members: sized.groups.map(memberOf),
     takeoff: netTakeoff(sized, fabric),
     checks,
-    warnings: netWarnings(layout, sized, analysis, opts.centre === "held-down"),
+    warnings: netWarnings(layout, sized, analysis, surface, opts.centre === "held-down"),
     iterations: converged.iterations,
     floor: netFloor(layout, brief.eavesHeightM, opts.centre === "held-down"),
     regime: `${layout.masts} masts`,
     // the central ring's pull is the same in every combination of the closed form (ridge and valley share the load): the most utilised of the others names the case
     governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
-    ...capEnvelope(layout.cap, brief.eavesHeightM),
+    ...(surface ? { roofSurfaceM2: surface.roofSurfaceM2, enclosedVolumeM3: layout.cap.planAreaM2 * brief.eavesHeightM + surface.enclosedVolumeM3 } : capEnvelope(layout.cap, brief.eavesHeightM)),
     // the 3D net's section: its form-found radial cables, no valley cables (the closed form's are not built)
     drawing: drawingWithLazyPlan(analysis && analysis.reason === "" ? () => cableNetSection(layout, brief.eavesHeightM, mastRadialCables(analysis.model)) : section, () => cableNetPlan(layout)),
     ...(analysis ? { analysis: analysis.summary } : {}),
@@ -214,8 +240,9 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
 export const MAST_CLEAR_RADIUS_M = 3;
 
 /**
- * The net over the floor: the fabric on the cap (hung from the radial cables, the lowest member
- * along a radius), and under it any backstay that lands inside the plan; the masts (and a held
+ * The net over the floor: the cap (the closed form's fabric; the 3D net's fabric, on the form-found
+ * net, stands on or above it at every node: the warning says where not), and under it any backstay
+ * that lands inside the plan; the masts (and a held
  * centre's tie-down) stand on the floor with their clear zones.
  */
 function netFloor(layout: CableNetLayout, eavesM: number, held: boolean): FloorEnvelope {

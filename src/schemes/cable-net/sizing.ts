@@ -313,6 +313,8 @@ export interface NetAnalysedForces {
   ringN: number;
   /** The combination giving each: keys "outer radial", "inner radial", "central ring", "circumferential i". */
   caseOf: Readonly<Record<string, string>>;
+  /** The fabric's surface on the form-found net (it spans from node to node of the net), m². */
+  fabricSurfaceM2: number;
   /** Length of one outer and one inner radial cable as found, m. */
   outerLengthM: number;
   innerLengthM: number;
@@ -331,7 +333,9 @@ export interface NetAnalysedForces {
  * central ring, masts, backstays and anchors from the analysed forces and reactions. The
  * form-found net's own two families carry and hold it (inside the mast ring its level circumferential
  * cables carry the roof and its arched radial cables hold it down: 160 m demo study, measured), so the closed form's
- * idealised valley cables are not added. Edge cables and the fabric stay as the closed form sized them.
+ * idealised valley cables are not added. The fabric covers the form-found net's surface (it spans
+ * from node to node of the net, not over the brief's cap); the edge cables stay as the closed form
+ * sized them.
  * @throws SizingError when a member cannot be sized
  */
 export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f: NetAnalysedForces): NetSizing {
@@ -357,10 +361,13 @@ export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f:
   const anchorUpliftN = f.anchorUpliftN + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
   const tie = tieDown(input, f.ringUpliftN, f.ringUpliftCase);
   groups.push(...tie.groups);
-  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay" && g.kind !== "tie-down").reduce((s, g) => s + g.massKg, 0) + closed.fabricMassKg;
+  const fabricCut = fabricCover(f.fabricSurfaceM2, input.fabricAllowancePct, input.fabric);
+  const roofKg = groups.filter((g) => g.kind !== "mast" && g.kind !== "backstay" && g.kind !== "tie-down").reduce((s, g) => s + g.massKg, 0) + fabricCut.massKg;
   return {
     ...closed,
     groups,
+    fabricAreaM2: fabricCut.areaM2,
+    fabricMassKg: fabricCut.massKg,
     ringUpliftN: f.ringUpliftN,
     tieDownConcreteM3: tie.concreteM3,
     mastForceN: f.mastForceN,

@@ -207,4 +207,24 @@ describe("cableNet through the 3D analysis (issue 13, option analysis = 3d)", ()
     const closedLines = design({ ...DEFAULT_BRIEF, spanM: 60, riseM: 6 }, { ...cableNet.defaults, analysis: "closed-form" }).drawing.section;
     expect(closedLines.some((l) => l.role === "valley cable")).toBe(true);
   });
+  it("covers the form-found net with fabric: its surface lies between the plan's and the plan's × the steepest facet's secant, above the cap's; the take-off and the section follow it", () => {
+    const brief = { ...DEFAULT_BRIEF, spanM: 60, riseM: 6 };
+    const closed = design(brief, { ...cableNet.defaults, analysis: "closed-form" });
+    const layout = cableNetLayout(brief, cableNet.defaults.masts, cableNet.defaults.mastRingRatio, cableNet.defaults.mastHeightRatio, cableNet.defaults.radialCablesPerMast, cableNet.defaults.hangerSpacingM);
+    // the closed form's fabric is on the cap; the 3D net stands on or above it, up to the mast heads, so its surface is larger
+    expect(closed.roofSurfaceM2).toBeCloseTo(layout.cap.surfaceM2, 6);
+    expect(d.roofSurfaceM2).toBeGreaterThan(layout.cap.surfaceM2);
+    // no facet is steeper than the line from a mast head straight down to the nearest edge anchor or the ring
+    const steepest = Math.max(layout.mastHeadM / (layout.cap.baseRadiusM - layout.mastRadiusM), (layout.mastHeadM - layout.inner.endHeightM) / (layout.mastRadiusM - layout.centralRingRadiusM));
+    expect(d.roofSurfaceM2).toBeLessThan(layout.cap.planAreaM2 * Math.hypot(1, steepest));
+    const fabric = (x: typeof d) => x.takeoff.find((r) => r.element === "fabric")!;
+    expectRelClose(fabric(d).quantity, d.roofSurfaceM2 * (1 + cableNet.defaults.fabricAllowancePct / 100), 1e-12);
+    expectRelClose(fabric(closed).quantity, closed.roofSurfaceM2 * (1 + cableNet.defaults.fabricAllowancePct / 100), 1e-12);
+    expect(d.warnings.some((w) => w.includes("node to node of the form-found net") && w.includes(`${d.roofSurfaceM2.toFixed(0)} m²`))).toBe(true);
+    // the section's fabric runs through the mast head (it lies on the net) and down to the edge at the eaves
+    const line = d.drawing.section.find((l) => l.role === "fabric")!;
+    const top = Math.max(...line.points.map((p) => p[1]));
+    expect(top).toBeCloseTo(layout.mastHeadM + DEFAULT_BRIEF.eavesHeightM, 6);
+    expect(line.points.at(-1)![1]).toBeCloseTo(DEFAULT_BRIEF.eavesHeightM, 6);
+  });
 });
