@@ -34,7 +34,7 @@ import {
   setAttr,
   patchChildren,
 } from "../src/notebook";
-import { tableGaps } from "../src/pipeline";
+import { RISE_KEY, tableGaps } from "../src/pipeline";
 import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
 import {
@@ -217,6 +217,11 @@ chartCell.element.querySelector("h2")?.after(
 );
 
 /** A <details> block whose open state is a signal, so the cells inside compute only while it is open. */
+/** Whether a scheme's design has a rise (the flat truss has none: its proportions carry no rise); unknown before its search reports. */
+function usesRise(result: { proportions?: { proportions: Record<string, unknown> } } | null): boolean {
+  return !result?.proportions || RISE_KEY in result.proportions.proportions;
+}
+
 function lazyDetails(parent: HTMLElement, id: string, summaryText: string): { body: HTMLElement; open: ReadonlySignal<boolean> } {
   const details = document.createElement("details");
   details.id = id;
@@ -279,8 +284,10 @@ for (const s of schemes) {
     wrap.className = "grid charts";
     wrap.append(
       chartFigure(
-        // the roof line at the scheme's own rise (the brief's rise is another roof when each scheme takes its own)
-        sectionChartOptions({ brief: s.result.value?.brief ?? brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: caption.value, width: 620 }),
+        // the roof line at the scheme's own rise (the brief's rise is another roof when each scheme takes its own); left
+        // out where the scheme draws its own fabric (a cable dome's springs from its raised ring, a cable net's is a
+        // tent) or uses no rise (a flat truss under a domed line misleads)
+        sectionChartOptions({ brief: s.result.value?.brief ?? brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: caption.value, width: 620, briefRoof: usesRise(s.result.value) && !design.drawing.section.some((l) => l.role === "fabric") }),
         `${id}-section`,
       ),
     );

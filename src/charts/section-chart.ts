@@ -76,6 +76,17 @@ export const SECTION_STYLE = {
 } as const;
 
 /**
+ * The roof line named under it, half-way out on the right: with a scheme's members over it, the line
+ * is the brief's cap at the drawn rise (what the loads are mapped on and the usable floor is taken
+ * under), which a scheme's own surface (a cable net's tent) may stand well above.
+ */
+function roofLabel(roof: readonly { x: number; y: number }[], brief: Brief): Plot.Markish[] {
+  const at = roof.reduce((best, p) => (Math.abs(p.x - brief.spanM / 4) < Math.abs(best.x - brief.spanM / 4) ? p : best), roof[0]!);
+  if (!at || brief.riseM <= 0) return [];
+  return [Plot.text([at], { x: "x", y: "y", text: () => `roof cap, rise ${brief.riseM.toFixed(1)} m`, dy: 10, textAnchor: "start", fill: SECTION_STYLE.roofStroke })];
+}
+
+/**
  * Plot options for the roof section: roof profile, walls, the floor with its usable part, and the
  * minimum clear height; optionally a scheme's members. Pure: no DOM access.
  */
@@ -98,7 +109,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
       Plot.ruleY([brief.minClearHeightM], { stroke: SECTION_STYLE.clearStroke, strokeDasharray: SECTION_STYLE.clearDash }),
       Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => usableLabel, dy: -6, fill: SECTION_STYLE.clearStroke }),
       Plot.line(walls, { x: "x", y: "y", z: "side", stroke: SECTION_STYLE.wallStroke, strokeWidth: SECTION_STYLE.lineWidth }),
-      ...(input.briefRoof === false && members.length > 0 ? [] : [Plot.line(roof, { x: "x", y: "y", stroke: SECTION_STYLE.roofStroke, strokeWidth: SECTION_STYLE.lineWidth })]),
+      ...(input.briefRoof === false && members.length > 0 ? [] : [Plot.line(roof, { x: "x", y: "y", stroke: SECTION_STYLE.roofStroke, strokeWidth: SECTION_STYLE.lineWidth }), ...roofLabel(roof, brief)]),
       ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 1.2 })] : []),
     ],
   };

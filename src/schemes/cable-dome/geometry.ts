@@ -129,6 +129,8 @@ export function cableDomeSection(layout: CableDomeLayout, eavesM: number): Drawi
   }
   const ringDepth = Math.max(1, ringRadiusM * 0.02);
   both("ring", [[ringRadiusM, eavesM + ringHeightM], [ringRadiusM, eavesM + ringHeightM - ringDepth]]);
+  // the wall or stand the raised ring sits on (substructure, an allowance): without it the ring floats above the eaves
+  if (ringHeightM - ringDepth > 0) both("perimeter wall", [[ringRadiusM, eavesM], [ringRadiusM, eavesM + ringHeightM - ringDepth]]);
   lines.push({ role: "ring", points: [head(0), [-(radiiM[0] as number), (topM[0] as number) + eavesM]] });
   lines.push({ role: "ring", points: [foot(0), [-(radiiM[0] as number), (bottomM[0] as number) + eavesM]] });
   const steps = 40;

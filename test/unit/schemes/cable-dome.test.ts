@@ -79,6 +79,21 @@ describe("cableDome.design", () => {
     for (const role of ["ridge cable", "diagonal", "hoop", "post", "ring", "fabric"]) expect(roles.has(role)).toBe(true);
   });
 
+  it("draws the wall the raised ring sits on, from the eaves up to the ring's underside; none with the ring at the eaves", () => {
+    const raise = cableDome.defaults.ringHeightRatio * DEFAULT_BRIEF.spanM;
+    expect(raise).toBeGreaterThan(0);
+    const walls = d.drawing.section.filter((l) => l.role === "perimeter wall");
+    expect(walls).toHaveLength(2);
+    for (const w of walls) {
+      expect(Math.abs(w.points[0]![0])).toBeCloseTo(DEFAULT_BRIEF.spanM / 2, 6);
+      expect(w.points[0]![1]).toBeCloseTo(DEFAULT_BRIEF.eavesHeightM, 6);
+      expect(w.points[1]![1]).toBeGreaterThan(DEFAULT_BRIEF.eavesHeightM);
+      expect(w.points[1]![1]).toBeLessThan(DEFAULT_BRIEF.eavesHeightM + raise);
+    }
+    const atEaves = design(DEFAULT_BRIEF, { ...cableDome.defaults, ringHeightRatio: 0 });
+    expect(atEaves.drawing.section.some((l) => l.role === "perimeter wall")).toBe(false);
+  });
+
   it("counts floor as usable only where the clear height suffices", () => {
     // a clear height above the compression ring: the outer feet cannot keep it
     const low = design({ ...DEFAULT_BRIEF, minClearHeightM: DEFAULT_BRIEF.eavesHeightM + 2 }, { ...cableDome.defaults, ringHeightRatio: 0 });
