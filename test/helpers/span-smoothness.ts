@@ -69,18 +69,21 @@ export interface KnownJump {
 }
 
 /**
- * The cable net's known jump, on both studies (measured 4 Dec, lead, after the fabric was laid on the
- * form-found net instead of the brief's cap): self-weight +18.9 % (default study) and +15.1 % (demo)
- * at 65 → 70 m, with carbon per m² of floor, the objective, +5.9 % and +3.7 %. Cause: at 65 m the
- * inner bay gains its third circumferential cable (geometry.ts evenlyBetween: 2 at 60 m, 3 at 65 m),
- * and its prestress is then set by a circumferential cable under wind uplift rather than by the
- * inner radial cables beside the ring under snow (3 masts, mast height 0.12 × span: 1,238, 1,303 and
- * 1,788 kN at 60, 65 and 70 m); that 65 m net is 6 % better in carbon than its neighbours and its
- * best mast height drops to 0.12 × span (demo 0.10; 0.15–0.17 at 60 and 70 m): the fabric on the
- * net is 13 % (10 %) more than the plan at the lower mast, 18 % at 0.15, so the lower mast wins. Before the fabric change the same step was 11.6 % (default) and 14.2 %
- * (demo). Open on issue 13.
+ * The cable net's known jump on the default study (measured 4 Dec, lead, after the fabric was laid
+ * on the form-found net instead of the brief's cap): self-weight +18.9 % at 65 → 70 m, with carbon
+ * per m² of floor, the objective, +5.9 % (the demo study: +15.0 % and +3.7 %, just under the limit).
+ * Cause: at 65 m the inner bay gains its third circumferential cable (geometry.ts evenlyBetween: 2 at
+ * 60 m, 3 at 65 m), and its prestress is then set by a circumferential cable under wind uplift rather
+ * than by the inner radial cables beside the ring under snow (3 masts, mast height 0.12 × span:
+ * 1,238, 1,303 and 1,788 kN at 60, 65 and 70 m); that 65 m net is 6 % better in carbon than its
+ * neighbours and its best mast height drops to 0.12 × span (demo 0.10; 0.15–0.17 at 60 and 70 m):
+ * the fabric on the net is 13 % (10 %) more than the plan at the lower mast, 18 % at 0.15, so the
+ * lower mast wins. Before the fabric change the same step was 11.6 % (default) and 14.2 % (demo).
+ * Open on issue 13.
  */
 export const KNOWN_JUMPS: readonly KnownJump[] = [{ id: "cable-net", from: 65, to: 70, metric: "selfWeightKgPerM2" }];
+/** The demo study's: none (its step at 65 → 70 m is 15.0 %, just under the limit: see KNOWN_JUMPS). */
+export const KNOWN_JUMPS_DEMO: readonly KnownJump[] = [];
 
 /** The property for the given schemes on one study's brief; the schemes in `knownFailing` are expected to fail (it.fails); `knownJumps` are expected exactly. */
 export function smoothnessSuite(title: string, study: () => Study, knownFailing: readonly SchemeId[], schemeIds: (id: SchemeId) => boolean, knownJumps: readonly KnownJump[] = []): void {

@@ -120,6 +120,7 @@ function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: nu
   const surface = netSurface(input.layout, analysis);
   const sized = sizeNetFromAnalysis(input, closed, {
     fabricSurfaceM2: surface.roofSurfaceM2,
+    fabricPanelSpanM: surface.panelSpanM,
     outerN: e.outerN, innerN: e.innerN, hoopN: e.hoopN, ringN: e.ringN, caseOf: e.caseOf, outerLengthM: analysis.outerLengthM, innerLengthM: analysis.innerLengthM,
     mastForceN: analysis.mastForceN, mastCase: analysis.mastCase, backstayHorizontalN: analysis.backstayHorizontalN, anchorUpliftN: analysis.anchorUpliftN,
     ringUpliftN: analysis.ringUpliftN, ringUpliftCase: analysis.ringUpliftCase,
@@ -130,6 +131,8 @@ function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: nu
 /** The form-found net's surface (the fabric's) and the volume it encloses, and how high above the brief's cap it stands (its lowest and highest node, at most 0: it dips below). */
 interface NetSurface {
   roofSurfaceM2: number;
+  /** The fabric's longest span between circumferential cables (or a cable and the mast head, the edge, the ring) along the net: over the radial segments, the widest real gap a segment spans in plan × its length ÷ its plan length (a lumped net's segment spans several real gaps), m. */
+  panelSpanM: number;
   enclosedVolumeM3: number;
   aboveCapM: { least: number; most: number };
 }
@@ -143,8 +146,25 @@ function netSurface(layout: CableNetLayout, analysis: NetAnalysis): NetSurface {
   const nodes = analysis.model.model.nodes;
   const m = heightFieldMeasure(nodes);
   const above = nodes.map(([x, y, z]) => z - capHeightAt(layout.cap, Math.min(Math.hypot(x, y), layout.cap.baseRadiusM)));
+  const { members } = analysis.model.model;
+  // each radial segment: its slope (length ÷ plan length) times the widest real gap it spans in plan (a lumped net's segment spans several)
+  const radii = [layout.centralRingRadiusM, layout.mastRadiusM, ...layout.hoopRadiiM, layout.cap.baseRadiusM].sort((x, y) => x - y);
+  const gaps = radii.slice(1).map((r, i) => ({ from: radii[i]!, to: r }));
+  const panelSpanM = Math.max(
+    0,
+    ...members.map((member, k) => {
+      const family = analysis.model.tags[k]!.family;
+      if (family !== "outer radial" && family !== "inner radial") return 0;
+      const [p, q] = [nodes[member.i]!, nodes[member.j]!];
+      const [rp, rq] = [Math.hypot(p[0], p[1]), Math.hypot(q[0], q[1])];
+      const [lo, hi] = [Math.min(rp, rq), Math.max(rp, rq)];
+      const widest = Math.max(0, ...gaps.filter((g) => g.to > lo + 1e-6 && g.from < hi - 1e-6).map((g) => g.to - g.from));
+      return (Math.hypot(q[0] - p[0], q[1] - p[1], q[2] - p[2]) / Math.hypot(q[0] - p[0], q[1] - p[1])) * widest;
+    }),
+  );
   return {
     roofSurfaceM2: (m.surfaceM2 / m.planM2) * layout.cap.planAreaM2,
+    panelSpanM,
     enclosedVolumeM3: m.volumeM3,
     aboveCapM: { least: Math.min(...above), most: Math.max(...above) },
   };

@@ -315,6 +315,8 @@ export interface NetAnalysedForces {
   caseOf: Readonly<Record<string, string>>;
   /** The fabric's surface on the form-found net (it spans from node to node of the net), m². */
   fabricSurfaceM2: number;
+  /** The longest span of the fabric between circumferential cables along the form-found net (its longest radial segment), m. */
+  fabricPanelSpanM: number;
   /** Length of one outer and one inner radial cable as found, m. */
   outerLengthM: number;
   innerLengthM: number;
@@ -334,8 +336,9 @@ export interface NetAnalysedForces {
  * form-found net's own two families carry and hold it (inside the mast ring its level circumferential
  * cables carry the roof and its arched radial cables hold it down: 160 m demo study, measured), so the closed form's
  * idealised valley cables are not added. The fabric covers the form-found net's surface (it spans
- * from node to node of the net, not over the brief's cap); the edge cables stay as the closed form
- * sized them.
+ * from node to node of the net, not over the brief's cap), and its panels and the edge cables are
+ * checked under uplift for the longest span between circumferential cables along the net's slope
+ * (the closed form: their plan spacing; under gravity that stays the safe side, see below).
  * @throws SizingError when a member cannot be sized
  */
 export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f: NetAnalysedForces): NetSizing {
@@ -352,7 +355,19 @@ export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f:
     const governs = local !== undefined && local.designForceN > analysed;
     strands("circumferential", element, 1, 2 * Math.PI * r, governs ? local.designForceN : analysed, governs ? local.caseName : (f.caseOf[`circumferential ${i + 1}`] ?? ""));
   });
-  groups.push(...closed.groups.filter((g) => g.kind === "edge"));
+  // The fabric spans from circumferential cable to circumferential cable along the net's slope, not
+  // across their plan spacing. Uplift (wind, normal to the fabric) acts on that span; gravity (per m²
+  // of plan) keeps the plan spacing's value: on a strip sloping at θ its normal part p cos²θ over the
+  // span s/cos θ gives n = p s cos θ/(8 r), less than p s/(8 r) on the plan spacing s (f = r × span).
+  const panelM = Math.max(f.fabricPanelSpanM, input.hangerSpacingM);
+  const gravity = worstOf(closed.casesPa);
+  const uplift = worstOf(closed.casesPa.map((p) => -p));
+  const strip = (p: number, spanM: number) => (p > 0 ? membraneStripForceNPerM(p, spanM, input.fabricSagRatio * spanM) : 0);
+  const edgeLoads: Worst[] = [[strip(gravity[0], input.hangerSpacingM), gravity[1]], [strip(uplift[0], panelM), uplift[1]]];
+  const edgeLoad = edgeLoads[0]![0] >= edgeLoads[1]![0] ? edgeLoads[0]! : edgeLoads[1]!;
+  const edgeSpan = (2 * Math.PI * layout.cap.baseRadiusM) / lines;
+  const edgeCable = parabolicCable(edgeLoad[0], edgeSpan, NET_SECONDARY_SAG_RATIO * edgeSpan);
+  strands("edge", "edge cables", lines, edgeCable.lengthM, edgeCable.maxTensionN, closed.caseNames[edgeLoad[1]] ?? "");
   const backstayN = f.backstayHorizontalN / Math.cos(BACKSTAY_SLOPE_RAD);
   strands("backstay", "backstays", layout.masts, layout.backstayLengthM, Math.max(backstayN, 1), f.mastCase);
   groups.push({ ...sizeMast(input, f.mastForceN), caseName: f.mastCase });
@@ -368,6 +383,8 @@ export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f:
     groups,
     fabricAreaM2: fabricCut.areaM2,
     fabricMassKg: fabricCut.massKg,
+    // n = p s²/(8 f) with f = ratio × s: linear in the span
+    fabricUpliftNPerM: (closed.fabricUpliftNPerM * panelM) / input.hangerSpacingM,
     ringUpliftN: f.ringUpliftN,
     tieDownConcreteM3: tie.concreteM3,
     mastForceN: f.mastForceN,

@@ -227,4 +227,22 @@ describe("cableNet through the 3D analysis (issue 13, option analysis = 3d)", ()
     expect(top).toBeCloseTo(layout.mastHeadM + DEFAULT_BRIEF.eavesHeightM, 6);
     expect(line.points.at(-1)![1]).toBeCloseTo(DEFAULT_BRIEF.eavesHeightM, 6);
   });
+  it("checks the fabric panels under uplift and the edge cables for the span between circumferential cables along the net's slope; under gravity for their plan spacing (the safe side on a slope)", () => {
+    const brief = { ...DEFAULT_BRIEF, spanM: 60, riseM: 6 };
+    const closed = design(brief, { ...cableNet.defaults, analysis: "closed-form" });
+    const demand = (x: typeof d, name: string) => x.checks.find((c) => c.name === name)!.demand;
+    // n = p s²/(8 f), f ∝ s: the ratio is the span's, at least the widest plan gap's over the spacing
+    const ratio = demand(d, "fabric panel, uplift") / demand(closed, "fabric panel, uplift");
+    const layout = cableNetLayout(brief, cableNet.defaults.masts, cableNet.defaults.mastRingRatio, cableNet.defaults.mastHeightRatio, cableNet.defaults.radialCablesPerMast, cableNet.defaults.hangerSpacingM);
+    const radii = [layout.centralRingRadiusM, layout.mastRadiusM, ...layout.hoopRadiiM, layout.cap.baseRadiusM].sort((x, y) => x - y);
+    const widest = Math.max(...radii.slice(1).map((r, i) => r - radii[i]!));
+    expect(ratio).toBeGreaterThan(1);
+    expect(ratio * cableNet.defaults.hangerSpacingM).toBeGreaterThanOrEqual(widest * (1 - 1e-9));
+    // no segment is steeper than the mast head straight down to the central ring or the edge over the widest gap
+    const steepest = Math.max(Math.hypot(1, layout.mastHeadM / (layout.cap.baseRadiusM - layout.mastRadiusM)), Math.hypot(1, layout.mastHeadM / widest));
+    expect(ratio * cableNet.defaults.hangerSpacingM).toBeLessThanOrEqual(steepest * widest);
+    expectRelClose(demand(d, "fabric panel, gravity"), demand(closed, "fabric panel, gravity"), 1e-12);
+    const edge = (x: typeof d) => x.members.find((m) => m.element === "edge cables")!.designForceN;
+    expect(edge(d)).toBeGreaterThanOrEqual(edge(closed) * (1 - 1e-12));
+  });
 });
