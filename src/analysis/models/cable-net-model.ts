@@ -158,7 +158,7 @@ function topology(input: NetTopologyInput, hoopRadiiM: readonly number[]): Topol
 }
 
 /** Plan tributary areas: radially half-way to the neighbouring real circumferential cables (or ring, or edge; a lumped cable carries the band of the real ones it stands for), around half-way to the neighbours on the same one. */
-function tributaryAreas(input: CableNetModelInput, t: Topology, groups: readonly (readonly number[])[]): number[] {
+function tributaryAreas(input: Pick<CableNetModelInput, "centralRingRadiusM" | "hoopRadiiM" | "edgeRadiusM">, t: Topology, groups: readonly (readonly number[])[]): number[] {
   const area = t.nodes.map(() => 0);
   const radii = [input.centralRingRadiusM, ...input.hoopRadiiM, input.edgeRadiusM];
   const mid = (i: number) => ((radii[i] as number) + (radii[i + 1] as number)) / 2;
@@ -280,6 +280,16 @@ export function circumferentialPrestressN(input: Pick<CableNetModelInput, "masts
  * @throws RangeError when the force density network is singular
  */
 export function cableNetModel(input: CableNetModelInput): CableNetModel {
+  return cableNetFormFinding(input)(input.prestressN);
+}
+
+/**
+ * cableNetModel at any radial prestress for one layout: the topology, tributary areas and nodal
+ * loads (which the prestress does not change) built once, the net form-found anew at each prestress
+ * asked for (the same numbers as cableNetModel's). A prestress search form-finds a dozen nets of one layout.
+ * @throws RangeError (from the returned function) when the force density network is singular
+ */
+export function cableNetFormFinding(input: Omit<CableNetModelInput, "prestressN">): (prestressN: number) => CableNetModel {
   const { groups, t } = lumpedTopology(input);
   const areaM2 = tributaryAreas(input, t, groups);
   const lines = input.masts * input.cablesPerSide;
@@ -289,18 +299,28 @@ export function cableNetModel(input: CableNetModelInput): CableNetModel {
   const loadsN = areaM2.map((A) => [0, 0, -input.permanentPa * A] as const);
   // an analysed circumferential cable stands for this many real ones: its prestress and EA are theirs together
   const many = (tag: NetMemberTag) => (tag.family === "circumferential" ? groups[tag.index - 1]!.length : 1);
-  const hoopN = circumferentialPrestressN(input);
-  let innerScale = 1;
-  let found = formFind({ nodes: t.nodes, branches: t.branches, forceDensityNPerM: 1, fixed: t.fixed });
-  for (let pass = 0; pass < BALANCE_PASSES; pass++) {
-    const inner = innerScale * input.prestressN;
-    // the ring's tension balances the inner cables' horizontal pull at each node: 2 T sin(π/N) = T_inner
-    const forceOf = (tag: NetMemberTag) => (tag.family === "circumferential" ? many(tag) * hoopN : tag.family === "central ring" ? inner / chord : tag.family === "inner radial" ? inner : input.prestressN);
+  return (prestressN) => formFoundNet(input, prestressN, { groups, t, areaM2, chord, planM, loadsN, many });
+}
+
+function formFoundNet(
+  input: Omit<CableNetModelInput, "prestressN">,
+  prestressN: number,
+  { groups, t, areaM2, chord, planM, loadsN, many }: { groups: number[][]; t: Topology; areaM2: number[]; chord: number; planM: number[]; loadsN: (readonly [0, 0, number])[]; many: (tag: NetMemberTag) => number },
+): CableNetModel {
+  const hoopN = circumferentialPrestressN({ ...input, prestressN });
+  // the ring's tension balances the inner cables' horizontal pull at each node: 2 T sin(π/N) = T_inner
+  const formFound = (inner: number) => {
+    const forceOf = (tag: NetMemberTag) => (tag.family === "circumferential" ? many(tag) * hoopN : tag.family === "central ring" ? inner / chord : tag.family === "inner radial" ? inner : prestressN);
     const q = t.tags.map((tag, k) => forceOf(tag) / (planM[k] as number));
-    found = formFind({ nodes: t.nodes, branches: t.branches, forceDensityNPerM: q, fixed: t.fixed, loadsN });
+    return formFind({ nodes: t.nodes, branches: t.branches, forceDensityNPerM: q, fixed: t.fixed, loadsN });
+  };
+  let innerScale = 1;
+  let found = formFound(prestressN);
+  for (let pass = 1; pass < BALANCE_PASSES; pass++) {
     const pull = headPulls(t, found.nodes, found.forcesN);
     if (!(pull.inner > 0 && pull.outer > 0) || Math.abs(pull.outer / pull.inner - 1) < 1e-3) break;
     innerScale *= pull.outer / pull.inner;
+    found = formFound(innerScale * prestressN);
   }
   const ea = (tag: NetMemberTag) => many(tag) * (tag.family === "outer radial" ? input.eaN.outer : tag.family === "inner radial" ? input.eaN.inner : tag.family === "circumferential" ? input.eaN.hoop : input.eaN.ring);
   // a cable is at least as stiff as a strand group sized for its prestress at PRESTRESS_STRAIN (the given EA is the closed form's, for its lower prestress)

@@ -1,7 +1,7 @@
 import type { Brief } from "../../brief";
 import { analysedCombinations, unboundedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
-import { cableNetModel, cableNetNodeCount, type CableNetModel, type NetMemberFamily } from "../../analysis/models/cable-net-model";
+import { cableNetFormFinding, cableNetNodeCount, type CableNetModel, type NetMemberFamily } from "../../analysis/models/cable-net-model";
 import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
 import { lengthOf, restLengths, type NodalLoad, type Vec3 } from "../../analysis/model";
 import { capHeightAt } from "../../mechanics/spherical-cap";
@@ -310,11 +310,11 @@ function netModelLayout(layout: CableNetLayout) {
   };
 }
 
-/** The net form-found at a radial prestress α (N) under the permanent load, lumped as the input says (else as netLumping chooses). */
-function netAt(input: NetAnalysisInput, alpha: number): CableNetModel {
+/** The net form-found at any radial prestress α (N) under the permanent load, lumped as the input says (else as netLumping chooses): the layout's topology and loads built once (cableNetFormFinding). */
+function netFormFinding(input: NetAnalysisInput): (alpha: number) => CableNetModel {
   const { layout } = input;
-  return cableNetModel({
-    ...netModelLayout(layout), prestressN: alpha, hoopShare: NET_HOOP_PRESTRESS_SHARE,
+  return cableNetFormFinding({
+    ...netModelLayout(layout), hoopShare: NET_HOOP_PRESTRESS_SHARE,
     permanentPa: (input.selfWeightKPa + input.brief.servicesKPa) * 1000, eaN: input.eaN,
     hoopsPerCable: input.hoopsPerCable ?? netLumping(layout),
     ...(input.heldCentre ? { centreHeldAtM: capHeightAt(layout.cap, layout.centralRingRadiusM) } : {}),
@@ -350,7 +350,7 @@ function judge(input: NetAnalysisInput, alpha: number, net: CableNetModel, solve
 
 /** One round at a radial prestress α (N) under the given combinations (by default every one the final check runs): the net form-found, solved and judged as the search does. */
 export function netRoundAt(input: NetAnalysisInput, alphaN: number, combinations: readonly PlanCombination[] = unboundedCombinations(input.combinations, input.selfWeightKPa)): NetRound {
-  const net = netAt(input, alphaN);
+  const net = netFormFinding(input)(alphaN);
   return judge(input, alphaN, net, solveNet(input, net, combinations));
 }
 
@@ -380,10 +380,11 @@ export function analyseNet(input: NetAnalysisInput, onRound?: (round: NetSearchR
   const checked = unboundedCombinations(input.combinations, input.selfWeightKPa);
   let searched = searchedCombinations(input.combinations);
   let rounds: NetRound[] = [];
+  const netAt = netFormFinding(input);
   let alpha: number | null = Math.min(input.maxPrestressN, Math.max(START_OF_SEED * input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestPerLine));
   for (let verification = 0, total = 0; ; verification++) {
     for (; alpha !== null && total < MAX_ROUNDS; total++) {
-      const net = netAt(input, alpha);
+      const net = netAt(alpha);
       rounds.push(seen(judge(input, alpha, net, solveNet(input, net, searched, alpha, rounds))));
       alpha = nextAlpha(rounds, input.maxPrestressN);
     }

@@ -1,5 +1,5 @@
 import { describe, it, expect } from "vitest";
-import { cableNetModel, type CableNetModelInput } from "../../../src/analysis/models/cable-net-model";
+import { cableNetFormFinding, cableNetModel, type CableNetModelInput } from "../../../src/analysis/models/cable-net-model";
 import { solveCableModel } from "../../../src/analysis/cable-solver";
 import { lengthOf, type Vec3 } from "../../../src/analysis/model";
 
@@ -13,6 +13,19 @@ const net = cableNetModel(input);
 const loads = net.areaM2.map((A, node) => ({ node, forceN: [0, 0, -input.permanentPa * A] as const })).filter((l) => l.forceN[2] !== 0);
 
 describe("cableNetModel (force density form finding of a mast-supported net)", () => {
+  it("one layout's form finding, asked at several prestresses in turn, gives at each what cableNetModel builds anew", () => {
+    const at = cableNetFormFinding(input);
+    for (const prestressN of [400e3, 100e3, 200e3]) {
+      const again = at(prestressN);
+      const fresh = cableNetModel({ ...input, prestressN });
+      expect(again.model.nodes).toEqual(fresh.model.nodes);
+      expect(again.model.members).toEqual(fresh.model.members);
+      expect(again.areaM2).toEqual(fresh.areaM2);
+    }
+    // and the prestress matters: the nets at two prestresses differ
+    expect(at(400e3).model.nodes).not.toEqual(at(100e3).model.nodes);
+  });
+
   it("holds the mast heads and edge anchors, and frees every other node", () => {
     expect(net.mastHeads).toHaveLength(6);
     expect(net.anchors).toHaveLength(12);
