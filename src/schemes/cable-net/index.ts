@@ -128,7 +128,7 @@ function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: nu
   return { sized, analysis, surface };
 }
 
-/** The form-found net's surface (the fabric's) and the volume it encloses, and how high above the brief's cap it stands (its lowest and highest node, at most 0: it dips below). */
+/** The form-found net's surface (the fabric's), the volume under it above the eaves, and how far its nodes stand above the brief's cap (the least negative where the net dips below it). */
 interface NetSurface {
   roofSurfaceM2: number;
   /** The fabric's longest span between circumferential cables (or a cable and the mast head, the edge, the ring) along the net: over the radial segments, the widest real gap a segment spans in plan × its length ÷ its plan length (a lumped net's segment spans several real gaps), m. */
@@ -262,8 +262,8 @@ export const MAST_CLEAR_RADIUS_M = 3;
 /**
  * The net over the floor: the cap (the closed form's fabric; the 3D net's fabric, on the form-found
  * net, stands on or above it at every node: the warning says where not), and under it any backstay
- * that lands inside the plan; the masts (and a held
- * centre's tie-down) stand on the floor with their clear zones.
+ * that lands inside the plan; the masts (and a held centre's tie-down) stand on the floor with their
+ * clear zones.
  */
 function netFloor(layout: CableNetLayout, eavesM: number, held: boolean): FloorEnvelope {
   const a = layout.cap.baseRadiusM;
