@@ -233,11 +233,12 @@ export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
   const heaviestN = Math.max(0, ...combos.map((c) => uniformPressurePa(c, input.selfWeightKPa))) * planAreaM2;
   let hi = run(Math.max(input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestN), true);
   let lo: Round | null = null;
-  // below a passing α until one fails (at most LOWERINGS trials): first at its linear estimate (+2 %), then at
-  // that or 10 % lower, whichever is lower (the estimate, taking the loads' effect as fixed, was seen to stay above the least)
+  // below a passing α until one fails (at most LOWERINGS trials): first at its linear estimate (+2 %) where that is
+  // at least 1 % lower, then (or else) at that or 10 % lower, whichever is lower (the estimate, taking the loads' effect
+  // as fixed, was seen to stay above the least; an estimate at the passing α itself would only solve it again)
   for (let k = 0; k < LOWERINGS && hi.pass && lo === null; k++) {
     const byEstimate = Math.max(0.3 * hi.alpha, 1.02 * hi.estimate);
-    const trial = run(k === 0 ? Math.min(hi.alpha, byEstimate) : Math.min(byEstimate, hi.alpha / 1.1), false);
+    const trial = run(k === 0 && byEstimate <= hi.alpha / 1.01 ? byEstimate : Math.min(byEstimate, hi.alpha / 1.1), false);
     if (trial.pass) hi = trial;
     else lo = trial;
   }
