@@ -1,11 +1,14 @@
 // Home: what spanbook is, and the pages with who each is for.
 import "../src/notebook/style.css";
 import { PAGES, CAUTION } from "../src/notebook/pages";
+import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
 
 const main = document.createElement("main");
 main.className = "notebook";
+// the schemes named from their declarations, so a new one is listed here too (the timber dome was missing)
+const names = SCHEME_DECLARATIONS.map((d) => d.label.toLowerCase());
 main.innerHTML = `<h1>spanbook</h1>
-<p class="intro">Feasibility-stage comparison of long-span roof schemes — cable dome, mast-supported cable net, geodesic steel dome, long-span steel trusses and thin concrete shell — on weight, embodied carbon and cost per m² of usable floor.</p>`;
+<p class="intro">Feasibility-stage comparison of long-span roof schemes — ${names.slice(0, -1).join(", ")} and ${names.at(-1)} — on weight, embodied carbon and cost per m² of usable floor.</p>`;
 const caution = document.createElement("p");
 caution.className = "caution";
 caution.textContent = CAUTION;
