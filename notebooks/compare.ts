@@ -216,12 +216,12 @@ chartCell.element.querySelector("h2")?.after(
   toggleControl({ value: includeExcluded, set: (x: boolean) => { includeExcluded.value = x; } }, { id: "include-excluded", label: "Bring schemes outside their method's valid range into the scales (faded, named so)" }),
 );
 
-/** A <details> block whose open state is a signal, so the cells inside compute only while it is open. */
 /** Whether a scheme's design has a rise (the flat truss has none: its proportions carry no rise); unknown before its search reports. */
 function usesRise(result: { proportions?: { proportions: Record<string, unknown> } } | null): boolean {
   return !result?.proportions || RISE_KEY in result.proportions.proportions;
 }
 
+/** A <details> block whose open state is a signal, so the cells inside compute only while it is open. */
 function lazyDetails(parent: HTMLElement, id: string, summaryText: string): { body: HTMLElement; open: ReadonlySignal<boolean> } {
   const details = document.createElement("details");
   details.id = id;
