@@ -59,6 +59,10 @@ describe("3D analysis figures on the compare page", () => {
     await page.selectOption("#cable-dome-analysis", "3d");
     await page.click("#cable-dome-details summary");
     checkFigures(await modelFigures(page, "cable-dome"), /deformed shape under .+ magnified/);
+    // its section draws its own fabric from its raised ring, on the wall the ring sits on, and not the brief's cap from the eaves
+    const section = page.locator("#cell-cable-dome-drawing .figure").first();
+    await expect.poll(() => section.textContent(), { timeout: 45_000 }).toContain("perimeter wall");
+    expect(await section.textContent()).not.toContain("roof cap");
     expect(errors).toEqual([]);
     await page.close();
   });
@@ -70,6 +74,8 @@ describe("3D analysis figures on the compare page", () => {
     await page.check("#geodesic-dome-bucklingAnalysis");
     await page.click("#geodesic-dome-details summary");
     checkFigures(await modelFigures(page, "geodesic-dome"), /deformed shape under .+ magnified/);
+    // its lattice follows the cap, which the section names
+    await expect.poll(() => page.locator("#cell-geodesic-dome-drawing .figure").first().textContent(), { timeout: 45_000 }).toMatch(/roof cap, rise [\d.]+ m/);
     expect(errors).toEqual([]);
     await page.close();
   });
