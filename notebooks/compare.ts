@@ -34,7 +34,7 @@ import {
   setAttr,
   patchChildren,
 } from "../src/notebook";
-import { RISE_KEY, tableGaps } from "../src/pipeline";
+import { tableGaps, usesRise } from "../src/pipeline";
 import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
 import {
@@ -216,11 +216,6 @@ chartCell.element.querySelector("h2")?.after(
   toggleControl({ value: includeExcluded, set: (x: boolean) => { includeExcluded.value = x; } }, { id: "include-excluded", label: "Bring schemes outside their method's valid range into the scales (faded, named so)" }),
 );
 
-/** Whether a scheme's design has a rise (the flat truss has none: its proportions carry no rise); unknown before its search reports. */
-function usesRise(result: { proportions?: { proportions: Record<string, unknown> } } | null): boolean {
-  return !result?.proportions || RISE_KEY in result.proportions.proportions;
-}
-
 /** A <details> block whose open state is a signal, so the cells inside compute only while it is open. */
 function lazyDetails(parent: HTMLElement, id: string, summaryText: string): { body: HTMLElement; open: ReadonlySignal<boolean> } {
   const details = document.createElement("details");
@@ -287,7 +282,7 @@ for (const s of schemes) {
         // the roof line at the scheme's own rise (the brief's rise is another roof when each scheme takes its own); left
         // out where the scheme draws its own fabric (a cable dome's springs from its raised ring, a cable net's is a
         // tent) or uses no rise (a flat truss under a domed line misleads)
-        sectionChartOptions({ brief: s.result.value?.brief ?? brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: caption.value, width: 620, briefRoof: usesRise(s.result.value) && !design.drawing.section.some((l) => l.role === "fabric") }),
+        sectionChartOptions({ brief: s.result.value?.brief ?? brief.value, lines: design.drawing.section, roles, title: `${s.model.label}: section`, caption: caption.value, width: 620, briefRoof: (s.result.value?.proportions ? usesRise(s.result.value.proportions) : true) && !design.drawing.section.some((l) => l.role === "fabric") }),
         `${id}-section`,
       ),
     );

@@ -9,7 +9,7 @@ import { defaultCatalogue } from "./catalogue/default-catalogue";
 import { formatCsv, parseDecimal, shown } from "./kernel/csv-table";
 import { parseFactorCsv } from "./carbon";
 import { parseRateCsv } from "./cost";
-import { evaluateStudy, tableGaps, describeGaps, OBJECTIVES, RISE_KEY, type Objective, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
+import { evaluateStudy, tableGaps, describeGaps, OBJECTIVES, usesRise, type Objective, type SchemeFigures, type SchemeResult, type TableGap } from "./pipeline";
 import { runSpanStudy } from "./comparison/span-study";
 import { CAUTION } from "./kernel/caution";
 import { failure, messageOf } from "./kernel/errors";
@@ -314,7 +314,7 @@ export function jsonResult(result: SchemeResult) {
 function riseLine(study: Study, results: readonly SchemeResult[]): string {
   const rises = results.map((r) => {
     // a scheme that uses no rise (the flat truss) reports none, as its panel does
-    if (r.proportions && !(RISE_KEY in r.proportions.proportions)) return `${r.id} uses no rise`;
+    if (r.proportions && !usesRise(r.proportions)) return `${r.id} uses no rise`;
     return `${r.id} ${r.brief ? r.brief.riseM.toFixed(1) : "–"} m${r.proportions?.riseSource === "searched" ? " (own)" : r.proportions?.riseSource === "pinned" ? " (pinned)" : ""}`;
   });
   const rule = study.brief.riseRule === "own" ? "each scheme's own rise within the height limit" : "one common rise";

@@ -1,6 +1,6 @@
 // The proportions the search chose for a scheme, in words (issue 12 item 4: "the page shows the
 // chosen proportions and how much the runner-up differs"). Pure text: no DOM.
-import { PROPORTION_TIE_FRACTION, RISE_KEY, type ProportionChoice } from "../pipeline";
+import { PROPORTION_TIE_FRACTION, RISE_KEY, usesRise, type ProportionChoice } from "../pipeline";
 import type { OptionValue, SchemeDeclaration } from "../schemes/types";
 import { fmt } from "./format";
 
@@ -32,7 +32,7 @@ function differences(model: SchemeDeclaration, chosen: ProportionChoice, other: 
 export function proportionsSentences(model: SchemeDeclaration, choice: ProportionChoice): string[] {
   const searched = choice.searched.filter((k) => k !== RISE_KEY);
   // a scheme that uses no rise (the flat truss) reports none
-  const riseWord = !(RISE_KEY in choice.proportions) ? [] : [
+  const riseWord = !usesRise(choice) ? [] : [
     choice.riseSource === "searched" ? `${proportionText(model, RISE_KEY, choice.riseM)} (searched)` : choice.riseSource === "pinned" ? `${proportionText(model, RISE_KEY, choice.riseM)} (pinned)` : `${proportionText(model, RISE_KEY, choice.riseM)} (the brief's common rise)`];
   const out: string[] = [];
   if (!Number.isFinite(choice.value)) out.push(`No feasible proportions were found among the ${choice.evaluations} designs tried.`);

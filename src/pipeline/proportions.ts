@@ -45,6 +45,11 @@ export interface ProportionChoice {
   full?: { screening: Record<string, OptionValue>; options: Record<string, OptionValue>; refined: string[]; evaluations: number };
 }
 
+/** Whether the chosen design has a rise: a scheme that uses none (the flat truss) carries no rise among its proportions. */
+export function usesRise(choice: Pick<ProportionChoice, "proportions">): boolean {
+  return RISE_KEY in choice.proportions;
+}
+
 /** What a screening search chose: the candidate's options and rise, and the choice as reported. Plain data (it crosses to and from the span study's workers). */
 export interface ScreenedChoice {
   options: SchemeOptions;
