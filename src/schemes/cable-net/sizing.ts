@@ -117,7 +117,6 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   const groups: NetMemberGroup[] = [];
   const strands = (kind: NetMemberKind, element: string, count: number, lengthM: number, [forceN, k]: Worst) => groups.push(strandGroup(input, kind, element, count, lengthM, forceN, names[k] ?? ""));
   const radial = radialFamilies(input, cases, strands);
-  const a = layout.cap.baseRadiusM;
   const worstP = worstOf(cases.map(Math.abs));
   for (const [i, r] of layout.hoopRadiiM.entries()) {
     const span = circumferentialSpanM(layout, r);
@@ -125,8 +124,7 @@ export function sizeCableNet(input: NetSizingInput, selfWeightKPa: number): NetS
   }
   const fabricSag = input.fabricSagRatio * input.hangerSpacingM;
   const fabricUlsNPerM = membraneStripForceNPerM(worstP[0], input.hangerSpacingM, fabricSag);
-  const edgeSpan = (2 * Math.PI * a) / lines;
-  const edgeCable = parabolicCable(fabricUlsNPerM, edgeSpan, NET_SECONDARY_SAG_RATIO * edgeSpan);
+  const edgeCable = edgeCableOf(layout, lines, fabricUlsNPerM);
   strands("edge", "edge cables", lines, edgeCable.lengthM, [edgeCable.maxTensionN, worstP[1]]);
   const horizontal = worstOf(radial.horizontal);
   const backstayN = Math.max(0, horizontal[0]) / Math.cos(BACKSTAY_SLOPE_RAD);
@@ -178,6 +176,12 @@ function strandGroup(input: NetSizingInput, kind: NetMemberKind, element: string
 
 /** A largest value and the index of the combination giving it. */
 type Worst = [number, number];
+/** An edge cable between neighbouring anchors, sagging NET_SECONDARY_SAG_RATIO of its span under the fabric's pull (N/m). */
+function edgeCableOf(layout: CableNetLayout, lines: number, fabricPullNPerM: number) {
+  const spanM = (2 * Math.PI * layout.cap.baseRadiusM) / lines;
+  return parabolicCable(fabricPullNPerM, spanM, NET_SECONDARY_SAG_RATIO * spanM);
+}
+
 const worstOf = (values: readonly number[]): Worst => values.reduce<Worst>((w, v, k) => (v > w[0] ? [v, k] : w), [-Infinity, 0]);
 
 /**
@@ -315,7 +319,7 @@ export interface NetAnalysedForces {
   caseOf: Readonly<Record<string, string>>;
   /** The fabric's surface on the form-found net (it spans from node to node of the net), m². */
   fabricSurfaceM2: number;
-  /** The longest span of the fabric between circumferential cables along the form-found net (its longest radial segment), m. */
+  /** The longest span of the fabric between circumferential cables along the form-found net (a radial segment's slope × the widest plan gap it spans), m. */
   fabricPanelSpanM: number;
   /** Length of one outer and one inner radial cable as found, m. */
   outerLengthM: number;
@@ -365,8 +369,7 @@ export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f:
   const strip = (p: number, spanM: number) => (p > 0 ? membraneStripForceNPerM(p, spanM, input.fabricSagRatio * spanM) : 0);
   const edgeLoads: Worst[] = [[strip(gravity[0], input.hangerSpacingM), gravity[1]], [strip(uplift[0], panelM), uplift[1]]];
   const edgeLoad = edgeLoads[0]![0] >= edgeLoads[1]![0] ? edgeLoads[0]! : edgeLoads[1]!;
-  const edgeSpan = (2 * Math.PI * layout.cap.baseRadiusM) / lines;
-  const edgeCable = parabolicCable(edgeLoad[0], edgeSpan, NET_SECONDARY_SAG_RATIO * edgeSpan);
+  const edgeCable = edgeCableOf(layout, lines, edgeLoad[0]);
   strands("edge", "edge cables", lines, edgeCable.lengthM, edgeCable.maxTensionN, closed.caseNames[edgeLoad[1]] ?? "");
   const backstayN = f.backstayHorizontalN / Math.cos(BACKSTAY_SLOPE_RAD);
   strands("backstay", "backstays", layout.masts, layout.backstayLengthM, Math.max(backstayN, 1), f.mastCase);
