@@ -76,6 +76,12 @@ interface Prepared {
   matrix: () => SparseSymmetricMatrix;
   /** Per member, the 21 positions in the matrix's values of its 6×6 tangent's upper triangle (−1: restrained). */
   slots: Int32Array;
+  /** The members flat (first freedom of each end, EA, cable or not), for the loops run every iteration. */
+  ends: Int32Array;
+  eaN: Float64Array;
+  cable: Uint8Array;
+  /** Free freedoms (equations). */
+  free: number;
 }
 
 /** Member tangent slots by pattern (one pattern ⇔ one topology, members in one order: see numberEquations). */
@@ -108,41 +114,55 @@ function prepare(model: CableModel): Prepared {
   }
   const { equationOf, matrix, pattern } = numberEquations(n, 3, model.members.map((m) => [m.i, m.j]), (node, d) => fixed[3 * node + d] === 1);
   const slots = memberSlots(pattern, equationOf, model.members);
-  return { model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix, slots };
+  const ends = new Int32Array(2 * model.members.length);
+  model.members.forEach((m, k) => {
+    ends[2 * k] = 3 * m.i;
+    ends[2 * k + 1] = 3 * m.j;
+  });
+  return {
+    model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix, slots, ends,
+    eaN: Float64Array.from(model.members, (m) => m.eaN), cable: Uint8Array.from(model.members, (m) => (m.kind === "cable" ? 1 : 0)), free: pattern.n,
+  };
 }
 
 /** Member forces and the internal force vector at displacements u; optionally the tangent. */
 function internal(p: Prepared, u: Float64Array, tangent?: SparseSymmetricMatrix): { forces: Float64Array; fint: Float64Array; slack: boolean[] } {
-  const { model, x0, restM } = p;
-  const forces = new Float64Array(model.members.length);
+  const { x0, restM, ends, eaN, cable } = p;
+  const count = restM.length;
+  const forces = new Float64Array(count);
   const fint = new Float64Array(x0.length);
-  const slack: boolean[] = new Array<boolean>(model.members.length).fill(false);
+  const slack: boolean[] = new Array<boolean>(count).fill(false);
   const e = [0, 0, 0];
-  model.members.forEach((m, k) => {
-    const a = 3 * m.i;
-    const b = 3 * m.j;
-    let l = 0;
-    for (let d = 0; d < 3; d++) {
-      e[d] = x0[b + d]! + u[b + d]! - x0[a + d]! - u[a + d]!;
-      l += e[d]! * e[d]!;
-    }
-    l = Math.sqrt(l);
-    for (let d = 0; d < 3; d++) e[d]! /= l;
+  for (let k = 0; k < count; k++) {
+    const a = ends[2 * k]!;
+    const b = ends[2 * k + 1]!;
+    const ex = x0[b]! + u[b]! - x0[a]! - u[a]!;
+    const ey = x0[b + 1]! + u[b + 1]! - x0[a + 1]! - u[a + 1]!;
+    const ez = x0[b + 2]! + u[b + 2]! - x0[a + 2]! - u[a + 2]!;
+    const l = Math.sqrt(ex * ex + ey * ey + ez * ez);
     const lu = restM[k]!;
-    let force = (m.eaN * (l - lu)) / lu;
-    let axial = m.eaN / lu;
-    if (m.kind === "cable" && force < 0) {
+    let force = (eaN[k]! * (l - lu)) / lu;
+    let axial = eaN[k]! / lu;
+    if (cable[k] === 1 && force < 0) {
       force = 0;
       axial *= 1e-9;
       slack[k] = true;
     }
     forces[k] = force;
-    for (let d = 0; d < 3; d++) {
-      fint[a + d]! -= force * e[d]!;
-      fint[b + d]! += force * e[d]!;
+    const fl = force / l;
+    fint[a]! -= fl * ex;
+    fint[a + 1]! -= fl * ey;
+    fint[a + 2]! -= fl * ez;
+    fint[b]! += fl * ex;
+    fint[b + 1]! += fl * ey;
+    fint[b + 2]! += fl * ez;
+    if (tangent) {
+      e[0] = ex / l;
+      e[1] = ey / l;
+      e[2] = ez / l;
+      addBarTangent(tangent.values, p.slots, k, e, axial, fl);
     }
-    if (tangent) addBarTangent(tangent.values, p.slots, k, e, axial, force / l);
-  });
+  }
   return { forces, fint, slack };
 }
 
@@ -174,8 +194,8 @@ interface State {
 /** Residual (free freedoms) and reactions at load factor λ. */
 function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSolverOptions, tangent?: SparseSymmetricMatrix): State {
   const { forces, fint, slack } = internal(p, u, tangent);
-  const extra = options.loadAt ? options.loadAt(Float64Array.from(p.x0, (x, k) => x + u[k]!)) : undefined;
-  const residual = new Float64Array(tangent ? tangent.n : countFree(p));
+  const extra = options.loadAt ? options.loadAt(sum(p.x0, u, 1)) : undefined;
+  const residual = new Float64Array(p.free);
   const reactions = new Float64Array(u.length);
   let free2 = 0;
   let react2 = 0;
@@ -195,10 +215,11 @@ function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSo
   return { u, forces, slack, residual, residualN: Math.sqrt(r2), appliedN: Math.max(Math.sqrt(free2), Math.sqrt(react2)), reactions };
 }
 
-function countFree(p: Prepared): number {
-  let n = 0;
-  for (const e of p.equationOf) if (e >= 0) n++;
-  return n;
+/** a + s·b, elementwise (a loop: Float64Array.from with a mapping function is several times slower in V8). */
+function sum(a: Float64Array, b: Float64Array, s: number): Float64Array {
+  const c = new Float64Array(a.length);
+  for (let k = 0; k < a.length; k++) c[k] = a[k]! + s * b[k]!;
+  return c;
 }
 
 function withPrescribed(p: Prepared, u: Float64Array, lambda: number): Float64Array {
@@ -216,7 +237,7 @@ type NewtonOutcome = { ok: true; state: State; iterations: number } | { ok: fals
 
 /** v − u over the free freedoms, by equation. */
 function freeDifference(p: Prepared, v: Float64Array, u: Float64Array): Float64Array {
-  const d = new Float64Array(countFree(p));
+  const d = new Float64Array(p.free);
   for (let k = 0; k < u.length; k++) {
     const eq = p.equationOf[k]!;
     if (eq >= 0) d[eq] = v[k]! - u[k]!;
@@ -323,7 +344,7 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
     const du = updates.direction(state.residual, solve);
     const before = state;
     state = lineSearch(p, u, du, state, lambda, options);
-    updates.push(freeDifference(p, state.u, u), Float64Array.from(before.residual, (r, k) => r - state.residual[k]!));
+    updates.push(freeDifference(p, state.u, u), sum(before.residual, state.residual, -1));
     u = state.u;
     if (!(state.residualN <= CHORD_RATE * before.residualN)) solve = undefined;
   }
@@ -378,7 +399,7 @@ function solution(p: Prepared, final: NewtonOutcome, lambda: number, increment: 
     converged: final.ok && lambda >= 1 - 1e-12,
     ...(final.ok ? {} : { reason: `${final.reason} at load factor ${(lambda + increment).toFixed(4)}` }),
     displacementsM: state.u,
-    coordinatesM: Float64Array.from(p.x0, (x, k) => x + state.u[k]!),
+    coordinatesM: sum(p.x0, state.u, 1),
     forcesN: state.forces,
     slack: state.slack,
     reactionsN: state.reactions,
@@ -435,7 +456,7 @@ export function solveCableModelLinear(model: CableModel): CableSolution {
     converged: ok,
     ...(f.ok ? {} : { reason: `the stiffness is singular at ${describeEquation(p, f.equation)}: a mechanism (too few supports or members)` }),
     displacementsM: u,
-    coordinatesM: Float64Array.from(p.x0, (x, k) => x + u[k]!),
+    coordinatesM: sum(p.x0, u, 1),
     forcesN: forces,
     slack: model.members.map(() => false),
     reactionsN: reactions,
