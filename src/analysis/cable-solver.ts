@@ -74,6 +74,7 @@ interface Prepared {
   prescribed: Float64Array;
   equationOf: Int32Array;
   matrix: () => SparseSymmetricMatrix;
+  pattern: SparsePattern;
   /** Per member, the 21 positions in the matrix's values of its 6×6 tangent's upper triangle (−1: restrained). */
   slots: Int32Array;
   /** The members flat (first freedom of each end, EA, cable or not), for the loops run every iteration. */
@@ -82,6 +83,16 @@ interface Prepared {
   cable: Uint8Array;
   /** Free freedoms (equations). */
   free: number;
+  /**
+   * The internal force vector's buffer, reused by every evaluation (read before the next): in a
+   * browser's worker a fresh typed array of a few thousand entries costs some 40 µs (page faults in
+   * the allocator; measured in headless Chromium, against about 5 µs for a plain array), and the
+   * solver made several an iteration.
+   */
+  fint: Float64Array;
+  /** The member forces and slack flags of the iterations (reused likewise; the final state's are made afresh). */
+  forces: Float64Array;
+  slack: boolean[];
 }
 
 /** Member tangent slots by pattern (one pattern ⇔ one topology, members in one order: see numberEquations). */
@@ -120,18 +131,23 @@ function prepare(model: CableModel): Prepared {
     ends[2 * k + 1] = 3 * m.j;
   });
   return {
-    model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix, slots, ends,
+    model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix, pattern, slots, ends,
     eaN: Float64Array.from(model.members, (m) => m.eaN), cable: Uint8Array.from(model.members, (m) => (m.kind === "cable" ? 1 : 0)), free: pattern.n,
+    fint: new Float64Array(3 * n), forces: new Float64Array(model.members.length), slack: new Array<boolean>(model.members.length).fill(false),
   };
 }
 
-/** Member forces and the internal force vector at displacements u; optionally the tangent. */
-function internal(p: Prepared, u: Float64Array, tangent?: SparseSymmetricMatrix): { forces: Float64Array; fint: Float64Array; slack: boolean[] } {
-  const { x0, restM, ends, eaN, cable } = p;
+/**
+ * Member forces, which cables are slack and the internal force vector at displacements u; optionally
+ * the tangent. The internal forces are in p.fint until the next call; the member forces and slack
+ * flags are fresh arrays only when `kept` (the iterations need only the internal forces).
+ */
+function internal(p: Prepared, u: Float64Array, tangent?: SparseSymmetricMatrix, kept = false): { forces: Float64Array; fint: Float64Array; slack: boolean[] } {
+  const { x0, restM, ends, eaN, cable, fint } = p;
   const count = restM.length;
-  const forces = new Float64Array(count);
-  const fint = new Float64Array(x0.length);
-  const slack: boolean[] = new Array<boolean>(count).fill(false);
+  const forces = kept ? new Float64Array(count) : p.forces;
+  fint.fill(0);
+  const slack: boolean[] = kept ? new Array<boolean>(count).fill(false) : p.slack;
   const e = [0, 0, 0];
   for (let k = 0; k < count; k++) {
     const a = ends[2 * k]!;
@@ -143,11 +159,12 @@ function internal(p: Prepared, u: Float64Array, tangent?: SparseSymmetricMatrix)
     const lu = restM[k]!;
     let force = (eaN[k]! * (l - lu)) / lu;
     let axial = eaN[k]! / lu;
-    if (cable[k] === 1 && force < 0) {
+    const isSlack = cable[k] === 1 && force < 0;
+    if (isSlack) {
       force = 0;
       axial *= 1e-9;
-      slack[k] = true;
     }
+    slack[k] = isSlack;
     forces[k] = force;
     const fl = force / l;
     fint[a]! -= fl * ex;
@@ -183,20 +200,18 @@ function addBarTangent(values: Float64Array, slots: Int32Array, member: number, 
 
 interface State {
   u: Float64Array;
-  forces: Float64Array;
-  slack: boolean[];
   residual: Float64Array;
   residualN: number;
   appliedN: number;
-  reactions: Float64Array;
+  /** The load factor it was evaluated at. */
+  lambda: number;
 }
 
-/** Residual (free freedoms) and reactions at load factor λ. */
-function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSolverOptions, tangent?: SparseSymmetricMatrix): State {
-  const { forces, fint, slack } = internal(p, u, tangent);
+/** Residual (free freedoms) at load factor λ, and the reactions into `reactions` when given (zero at free freedoms). */
+function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSolverOptions, tangent?: SparseSymmetricMatrix, reactions?: Float64Array): State {
+  const { fint } = internal(p, u, tangent);
   const extra = options.loadAt ? options.loadAt(sum(p.x0, u, 1)) : undefined;
   const residual = new Float64Array(p.free);
-  const reactions = new Float64Array(u.length);
   let free2 = 0;
   let react2 = 0;
   let r2 = 0;
@@ -208,11 +223,12 @@ function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSo
       r2 += residual[eq]! ** 2;
       free2 += applied * applied;
     } else {
-      reactions[k] = fint[k]! - applied;
-      react2 += reactions[k]! ** 2;
+      const reaction = fint[k]! - applied;
+      if (reactions) reactions[k] = reaction;
+      react2 += reaction * reaction;
     }
   }
-  return { u, forces, slack, residual, residualN: Math.sqrt(r2), appliedN: Math.max(Math.sqrt(free2), Math.sqrt(react2)), reactions };
+  return { u, residual, residualN: Math.sqrt(r2), appliedN: Math.max(Math.sqrt(free2), Math.sqrt(react2)), lambda };
 }
 
 /** a + s·b, elementwise (a loop: Float64Array.from with a mapping function is several times slower in V8). */
@@ -302,15 +318,21 @@ const CHORD_RATE = 0.25;
 /** The factorised tangent at the unloaded state, by model (same members and nodes ⇒ same tangent). */
 const initialTangents = new WeakMap<CableModel["members"], { nodes: CableModel["nodes"]; factor: Factorisation }>();
 
-function tangentAt(p: Prepared, u: Float64Array, K: SparseSymmetricMatrix): Factorisation {
+/** The matrix each pattern's tangents are assembled in (a factorisation copies what it needs, so one serves every solve of the pattern). */
+const tangentMatrices = new WeakMap<SparsePattern, SparseSymmetricMatrix>();
+
+/** The factorised tangent at u, and whether it is the shared one at rest (which must not be released). */
+function tangentAt(p: Prepared, u: Float64Array): { factor: Factorisation; shared: boolean } {
   const atRest = u.every((v) => v === 0);
   const known = atRest ? initialTangents.get(p.model.members) : undefined;
-  if (known && known.nodes === p.model.nodes) return known.factor;
+  if (known && known.nodes === p.model.nodes) return { factor: known.factor, shared: true };
+  const K = tangentMatrices.get(p.pattern) ?? p.matrix();
+  tangentMatrices.set(p.pattern, K);
   K.values.fill(0);
   internal(p, u, K);
   const factor = factorLDL(K);
   if (atRest) initialTangents.set(p.model.members, { nodes: p.model.nodes, factor });
-  return factor;
+  return { factor, shared: atRest };
 }
 
 /**
@@ -324,29 +346,41 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
   const tolerance = options.tolerance ?? 1e-6;
   const maxIterations = options.maxIterations ?? 40;
   let u = withPrescribed(p, start, lambda);
-  const K = p.matrix();
   let state = evaluate(p, u, lambda, options);
-  let solve: ((b: Float64Array) => Float64Array) | undefined;
+  let tangent: { factor: Factorisation & { ok: true }; shared: boolean } | undefined;
+  // a factor no longer used gives its arrays to the next factorisation (none is kept but the shared one at rest)
+  const drop = () => {
+    if (tangent && !tangent.shared) tangent.factor.release?.();
+    tangent = undefined;
+  };
   let updates = new SecantUpdates();
   for (let iteration = 0; ; iteration++) {
-    if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
-    if (state.residualN <= tolerance * state.appliedN || state.appliedN === 0) return { ok: true, state, iterations: iteration };
-    if (iteration >= maxIterations) return { ok: false, reason: `no equilibrium after ${iteration} Newton iterations (residual ${state.residualN.toExponential(2)} N against ${state.appliedN.toExponential(2)} N applied)`, iterations: iteration, state };
-    if (!solve) {
-      const f = tangentAt(p, u, K);
+    const outcome = ((): NewtonOutcome | undefined => {
+      if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
+      if (state.residualN <= tolerance * state.appliedN || state.appliedN === 0) return { ok: true, state, iterations: iteration };
+      if (iteration >= maxIterations) return { ok: false, reason: `no equilibrium after ${iteration} Newton iterations (residual ${state.residualN.toExponential(2)} N against ${state.appliedN.toExponential(2)} N applied)`, iterations: iteration, state };
+      return undefined;
+    })();
+    if (outcome) {
+      drop();
+      return outcome;
+    }
+    if (!tangent) {
+      const { factor: f, shared } = tangentAt(p, u);
       if (!f.ok) return { ok: false, reason: `the stiffness is singular at ${describeEquation(p, f.equation)}: a mechanism (a node held only by slack cables, or too few supports)`, iterations: iteration, state };
       if (f.negativePivots > 0 && !options.allowUnstable) {
+        if (!shared) f.release?.();
         return { ok: false, reason: `the tangent stiffness lost positive definiteness (${f.negativePivots} negative pivots): a limit point or bifurcation, the structure is unstable under this load`, iterations: iteration, state };
       }
-      solve = f.solve;
+      tangent = { factor: f, shared };
       updates = new SecantUpdates();
     }
-    const du = updates.direction(state.residual, solve);
+    const du = updates.direction(state.residual, tangent.factor.solve);
     const before = state;
     state = lineSearch(p, u, du, state, lambda, options);
     updates.push(freeDifference(p, state.u, u), sum(before.residual, state.residual, -1));
     u = state.u;
-    if (!(state.residualN <= CHORD_RATE * before.residualN)) solve = undefined;
+    if (!(state.residualN <= CHORD_RATE * before.residualN)) drop();
   }
 }
 
@@ -354,7 +388,7 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
 export function solveCableModel(model: CableModel, options: CableSolverOptions = {}): CableSolution {
   const p = prepare(model);
   const warm = warmStart(p, options);
-  if (warm?.ok) return solution(p, warm, 1, 0, [warm.iterations], warm.iterations);
+  if (warm?.ok) return solution(p, options, warm, 1, 0, [warm.iterations], warm.iterations);
   const steps = Math.max(1, Math.round(options.steps ?? 1));
   const maxHalvings = options.maxStepHalvings ?? 8;
   let u: Float64Array = new Float64Array(p.x0.length);
@@ -378,7 +412,7 @@ export function solveCableModel(model: CableModel, options: CableSolverOptions =
     if (++halvings > maxHalvings) break;
     increment /= 2;
   }
-  return solution(p, last!, lambda, increment, perStep, iterations);
+  return solution(p, options, last!, lambda, increment, perStep, iterations);
 }
 
 /** Newton at the full load from the best of the candidate starts (none when there are none, or the unloaded state is best). */
@@ -393,16 +427,20 @@ function warmStart(p: Prepared, options: CableSolverOptions): NewtonOutcome | un
   return newton(p, best.u, 1, options);
 }
 
-function solution(p: Prepared, final: NewtonOutcome, lambda: number, increment: number, perStep: number[], iterations: number): CableSolution {
+function solution(p: Prepared, options: CableSolverOptions, final: NewtonOutcome, lambda: number, increment: number, perStep: number[], iterations: number): CableSolution {
   const state = final.state;
+  // the reactions, member forces and slack cables of the final state only (evaluated again: the iterations need only the residual)
+  const reactions = new Float64Array(state.u.length);
+  evaluate(p, state.u, state.lambda, options, undefined, reactions);
+  const { forces, slack } = internal(p, state.u, undefined, true);
   return {
     converged: final.ok && lambda >= 1 - 1e-12,
     ...(final.ok ? {} : { reason: `${final.reason} at load factor ${(lambda + increment).toFixed(4)}` }),
     displacementsM: state.u,
     coordinatesM: sum(p.x0, state.u, 1),
-    forcesN: state.forces,
-    slack: state.slack,
-    reactionsN: state.reactions,
+    forcesN: forces,
+    slack,
+    reactionsN: reactions,
     iterations,
     iterationsPerStep: perStep,
     residualN: state.residualN,
@@ -421,7 +459,7 @@ export function solveCableModelLinear(model: CableModel): CableSolution {
   if (p.prescribed.some((v) => v !== 0)) throw new RangeError("invalid model.supports: prescribed displacements need the nonlinear solver (expected none in a linear analysis)");
   const zero = new Float64Array(p.x0.length);
   const K = p.matrix();
-  const initial = internal(p, zero, K);
+  const initial = internal(p, zero, K, true);
   const u = new Float64Array(p.x0.length);
   const f = factorLDL(K);
   const rhs = new Float64Array(K.n);

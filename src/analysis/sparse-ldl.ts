@@ -70,6 +70,21 @@ export class SparsePattern {
     return (this.plan ??= rowPlanOf(this, this.supernodes));
   }
 
+  private work?: { y: Float64Array; filled: Int32Array };
+
+  /**
+   * A factorisation's working arrays (a row being eliminated, rows filled per supernode), shared by
+   * every factorisation of the pattern: each clears them first and none calls another. In a
+   * browser's worker a fresh typed array of a few thousand entries costs some 40 µs (page faults in
+   * its allocator; measured in headless Chromium), as much as a small factorisation's arithmetic.
+   */
+  get scratch(): { y: Float64Array; filled: Int32Array } {
+    return (this.work ??= { y: new Float64Array(this.n), filled: new Int32Array(this.supernodes.count) });
+  }
+
+  /** A released factorisation's arrays, taken by the next factorisation of the pattern (see `release`). */
+  spare?: FactorArrays;
+
   /** Position of entry (i, j) in a matrix's values, −1 when it is not in the pattern. */
   slot(i: number, j: number): number {
     if (i > j) [i, j] = [j, i];
@@ -153,8 +168,21 @@ export class SparseSymmetricMatrix {
 }
 
 export type SparseFactorisation =
-  | { ok: true; solve: (b: Float64Array) => Float64Array; negativePivots: number }
+  | {
+      ok: true;
+      solve: (b: Float64Array) => Float64Array;
+      negativePivots: number;
+      /** Gives the factor's arrays to the pattern's next factorisation; `solve` may not be called after it. */
+      release: () => void;
+    }
   | { ok: false; equation: number };
+
+/** The numbers of a factor: L inside and below the supernodes, and D. */
+interface FactorArrays {
+  inner: Float64Array;
+  block: Float64Array;
+  d: Float64Array;
+}
 
 /**
  * The factor's supernodes: runs of consecutive columns c, c+1, … (up to SUPERNODE_COLUMNS) where
@@ -275,11 +303,13 @@ export function factorSparseLDL(a: SparseSymmetricMatrix, relativeTolerance = 1e
   const { n, colStart, rowIndex } = a.pattern;
   const sn = a.pattern.supernodes;
   const values = a.values;
-  const inner = new Float64Array(sn.innerStart[sn.count]!);
-  const block = new Float64Array(sn.blockStart[sn.count]!);
-  const d = new Float64Array(n);
-  const y = new Float64Array(n);
-  const filled = new Int32Array(sn.count);
+  // every entry of these is written before it is read, so a released factor's arrays serve as they are
+  const arrays = a.pattern.spare ?? { inner: new Float64Array(sn.innerStart[sn.count]!), block: new Float64Array(sn.blockStart[sn.count]!), d: new Float64Array(n) };
+  a.pattern.spare = undefined;
+  const { inner, block, d } = arrays;
+  const { y, filled } = a.pattern.scratch;
+  y.fill(0);
+  filled.fill(0);
   const { start, supernodes: meets } = a.pattern.rowPlan;
   for (let k = 0; k < n; k++) {
     const K = sn.of[k]!;
@@ -296,12 +326,28 @@ export function factorSparseLDL(a: SparseSymmetricMatrix, relativeTolerance = 1e
       pivot -= rowOfSupernode(sn, J, filled[J]!++, inner, block, d, y);
     }
     pivot -= rowInsideSupernode(sn, K, k, inner, d, y);
-    if (!(Math.abs(pivot) > relativeTolerance * Math.abs(diagonal)) || !Number.isFinite(pivot)) return { ok: false, equation: k };
+    if (!(Math.abs(pivot) > relativeTolerance * Math.abs(diagonal)) || !Number.isFinite(pivot)) {
+      a.pattern.spare = arrays;
+      return { ok: false, equation: k };
+    }
     d[k] = pivot;
   }
   let negativePivots = 0;
   for (let k = 0; k < n; k++) if (d[k]! < 0) negativePivots++;
-  return { ok: true, negativePivots, solve: (b) => solveSupernodal(sn, inner, block, d, b) };
+  let released = false;
+  return {
+    ok: true,
+    negativePivots,
+    solve: (b) => {
+      if (released) throw new Error("a released factorisation was used to solve");
+      return solveSupernodal(sn, inner, block, d, b);
+    },
+    release: () => {
+      if (released) return;
+      released = true;
+      a.pattern.spare ??= arrays;
+    },
+  };
 }
 
 /**

@@ -81,7 +81,13 @@ export type SymmetricMatrix = EnvelopeMatrix | SparseSymmetricMatrix;
 
 /** The outcome of an LDLᵀ factorisation. */
 export type Factorisation =
-  | { ok: true; solve: (b: Float64Array) => Float64Array; negativePivots: number }
+  | {
+      ok: true;
+      solve: (b: Float64Array) => Float64Array;
+      negativePivots: number;
+      /** Frees the factor's arrays for the next factorisation of the same pattern (sparse matrices); `solve` may not be called after it. */
+      release?: () => void;
+    }
   | { ok: false; /** the equation whose pivot vanished */ equation: number };
 
 /**
