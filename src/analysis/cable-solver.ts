@@ -251,9 +251,8 @@ function describeEquation(p: Prepared, equation: number): string {
 
 type NewtonOutcome = { ok: true; state: State; iterations: number } | { ok: false; reason: string; iterations: number; state: State };
 
-/** v − u over the free freedoms, by equation. */
-function freeDifference(p: Prepared, v: Float64Array, u: Float64Array): Float64Array {
-  const d = new Float64Array(p.free);
+/** v − u over the free freedoms, by equation, into d. */
+function freeDifference(p: Prepared, v: Float64Array, u: Float64Array, d: Float64Array): Float64Array {
   for (let k = 0; k < u.length; k++) {
     const eq = p.equationOf[k]!;
     if (eq >= 0) d[eq] = v[k]! - u[k]!;
@@ -353,7 +352,7 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
     if (tangent && !tangent.shared) tangent.factor.release?.();
     tangent = undefined;
   };
-  let updates = new SecantUpdates();
+  const updates = new SecantUpdates();
   for (let iteration = 0; ; iteration++) {
     const outcome = ((): NewtonOutcome | undefined => {
       if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
@@ -373,12 +372,14 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
         return { ok: false, reason: `the tangent stiffness lost positive definiteness (${f.negativePivots} negative pivots): a limit point or bifurcation, the structure is unstable under this load`, iterations: iteration, state };
       }
       tangent = { factor: f, shared };
-      updates = new SecantUpdates();
+      updates.clear();
     }
-    const du = updates.direction(state.residual, tangent.factor.solve);
+    const du = updates.direction(state.residual, tangent.factor.solveInPlace ?? tangent.factor.solve);
     const before = state;
     state = lineSearch(p, u, du, state, lambda, options);
-    updates.push(freeDifference(p, state.u, u), sum(before.residual, state.residual, -1));
+    const change = updates.vector(p.free);
+    for (let k = 0; k < change.length; k++) change[k] = before.residual[k]! - state.residual[k]!;
+    updates.push(freeDifference(p, state.u, u, updates.vector(p.free)), change);
     u = state.u;
     if (!(state.residualN <= CHORD_RATE * before.residualN)) drop();
   }

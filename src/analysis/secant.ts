@@ -11,10 +11,12 @@ export class SecantUpdates {
   private readonly steps: Float64Array[] = [];
   private readonly changes: Float64Array[] = [];
   private readonly rho: number[] = [];
+  /** Arrays of pairs dropped or cleared, handed out again by `vector` (fresh typed arrays are dear in a browser's worker). */
+  private readonly free: Float64Array[] = [];
 
   constructor(private readonly capacity = 24) {}
 
-  /** Records a step s and the fall of the residual over it, y = R_before − R_after (= K·s for a linear system). */
+  /** Records a step s and the fall of the residual over it, y = R_before − R_after (= K·s for a linear system); takes both arrays over. */
   push(s: Float64Array, y: Float64Array): void {
     let ys = 0;
     let yy = 0;
@@ -22,10 +24,12 @@ export class SecantUpdates {
       ys += y[k]! * s[k]!;
       yy += y[k]! * y[k]!;
     }
-    if (!(ys > 1e-12 * Math.sqrt(yy) * norm(s))) return;
+    if (!(ys > 1e-12 * Math.sqrt(yy) * norm(s))) {
+      this.free.push(s, y);
+      return;
+    }
     if (this.steps.length >= this.capacity) {
-      this.steps.shift();
-      this.changes.shift();
+      this.free.push(this.steps.shift()!, this.changes.shift()!);
       this.rho.shift();
     }
     this.steps.push(s);
@@ -33,11 +37,23 @@ export class SecantUpdates {
     this.rho.push(1 / ys);
   }
 
+  /** Forgets every pair (for a new K0), keeping their arrays for `vector`. */
+  clear(): void {
+    this.free.push(...this.steps.splice(0), ...this.changes.splice(0));
+    this.rho.length = 0;
+  }
+
+  /** An array of n entries to fill and push: one the updates no longer hold, else a new one (its contents are not cleared). */
+  vector(n: number): Float64Array {
+    const v = this.free.pop();
+    return v?.length === n ? v : new Float64Array(n);
+  }
+
   get size(): number {
     return this.steps.length;
   }
 
-  /** The corrected Newton step for residual R: H·R with H the updated inverse of K0 (solve0 = K0⁻¹). */
+  /** The corrected Newton step for residual R: H·R with H the updated inverse of K0 (solve0 = K0⁻¹, which may overwrite its argument: it is given a copy). */
   direction(residual: Float64Array, solve0: (b: Float64Array) => Float64Array): Float64Array {
     const q = Float64Array.from(residual);
     const m = this.steps.length;

@@ -171,6 +171,8 @@ export type SparseFactorisation =
   | {
       ok: true;
       solve: (b: Float64Array) => Float64Array;
+      /** solve, overwriting b with the answer (and returning it): no new array. */
+      solveInPlace: (b: Float64Array) => Float64Array;
       negativePivots: number;
       /** Gives the factor's arrays to the pattern's next factorisation; `solve` may not be called after it. */
       release: () => void;
@@ -340,6 +342,10 @@ export function factorSparseLDL(a: SparseSymmetricMatrix, relativeTolerance = 1e
     negativePivots,
     solve: (b) => {
       if (released) throw new Error("a released factorisation was used to solve");
+      return solveSupernodal(sn, inner, block, d, Float64Array.from(b));
+    },
+    solveInPlace: (b) => {
+      if (released) throw new Error("a released factorisation was used to solve");
       return solveSupernodal(sn, inner, block, d, b);
     },
     release: () => {
@@ -405,8 +411,8 @@ function rowInsideSupernode(sn: Supernodes, K: number, k: number, inner: Float64
   return fall;
 }
 
-function solveSupernodal(sn: Supernodes, inner: Float64Array, block: Float64Array, d: Float64Array, b: Float64Array): Float64Array {
-  const x = Float64Array.from(b);
+/** Solves L·D·Lᵀ x = b in place: b becomes x (and is returned). */
+function solveSupernodal(sn: Supernodes, inner: Float64Array, block: Float64Array, d: Float64Array, x: Float64Array): Float64Array {
   const rows = sn.rows;
   for (let J = 0; J < sn.count; J++) {
     const c0 = sn.first[J]!;

@@ -84,6 +84,8 @@ export type Factorisation =
   | {
       ok: true;
       solve: (b: Float64Array) => Float64Array;
+      /** solve, overwriting b with the answer (sparse matrices). */
+      solveInPlace?: (b: Float64Array) => Float64Array;
       negativePivots: number;
       /** Frees the factor's arrays for the next factorisation of the same pattern (sparse matrices); `solve` may not be called after it. */
       release?: () => void;
