@@ -93,6 +93,9 @@ interface Prepared {
   /** The member forces and slack flags of the iterations (reused likewise; the final state's are made afresh). */
   forces: Float64Array;
   slack: boolean[];
+  /** Arrays of states no longer read (trials the line search passed over, the state before each step), for the next states. */
+  spareU: Float64Array[];
+  spareResidual: Float64Array[];
 }
 
 /** Member tangent slots by pattern (one pattern ⇔ one topology, members in one order: see numberEquations). */
@@ -134,6 +137,7 @@ function prepare(model: CableModel): Prepared {
     model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix, pattern, slots, ends,
     eaN: Float64Array.from(model.members, (m) => m.eaN), cable: Uint8Array.from(model.members, (m) => (m.kind === "cable" ? 1 : 0)), free: pattern.n,
     fint: new Float64Array(3 * n), forces: new Float64Array(model.members.length), slack: new Array<boolean>(model.members.length).fill(false),
+    spareU: [], spareResidual: [],
   };
 }
 
@@ -211,7 +215,7 @@ interface State {
 function evaluate(p: Prepared, u: Float64Array, lambda: number, options: CableSolverOptions, tangent?: SparseSymmetricMatrix, reactions?: Float64Array): State {
   const { fint } = internal(p, u, tangent);
   const extra = options.loadAt ? options.loadAt(sum(p.x0, u, 1)) : undefined;
-  const residual = new Float64Array(p.free);
+  const residual = p.spareResidual.pop() ?? new Float64Array(p.free);
   let free2 = 0;
   let react2 = 0;
   let r2 = 0;
@@ -262,12 +266,19 @@ function freeDifference(p: Prepared, v: Float64Array, u: Float64Array, d: Float6
 
 /** u + s·Δu over the free freedoms. */
 function stepped(p: Prepared, u: Float64Array, du: Float64Array, s: number): Float64Array {
-  const trial = Float64Array.from(u);
+  const trial = p.spareU.pop() ?? new Float64Array(u.length);
+  trial.set(u);
   for (let k = 0; k < trial.length; k++) {
     const eq = p.equationOf[k]!;
     if (eq >= 0) trial[k]! += s * du[eq]!;
   }
   return trial;
+}
+
+/** Gives a state's arrays back for later states (the state must not be read again). */
+function release(p: Prepared, state: State): void {
+  p.spareU.push(state.u);
+  p.spareResidual.push(state.residual);
 }
 
 /**
@@ -298,10 +309,18 @@ function lineSearch(p: Prepared, u: Float64Array, du: Float64Array, state: State
       [sPrev, gPrev] = [s, gs];
       s = Math.min(4, Math.max(0.05, Number.isFinite(next) ? next : s / 2));
     }
+    const previous = trial;
     trial = evaluate(p, stepped(p, u, du, s), lambda, options);
-    if (trial.residualN < best.residualN || !Number.isFinite(best.residualN)) best = trial;
+    if (trial.residualN < best.residualN || !Number.isFinite(best.residualN)) {
+      if (best !== previous) release(p, best);
+      best = trial;
+    }
+    if (previous !== best) release(p, previous);
   }
-  return Number.isFinite(trial.residualN) && Math.abs(g(trial)) <= 0.5 * Math.abs(g0) ? trial : best;
+  const chosen = Number.isFinite(trial.residualN) && Math.abs(g(trial)) <= 0.5 * Math.abs(g0) ? trial : best;
+  if (trial !== chosen) release(p, trial);
+  if (best !== chosen && best !== trial) release(p, best);
+  return chosen;
 }
 
 /**
@@ -381,6 +400,7 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
     for (let k = 0; k < change.length; k++) change[k] = before.residual[k]! - state.residual[k]!;
     updates.push(freeDifference(p, state.u, u, updates.vector(p.free)), change);
     u = state.u;
+    release(p, before);
     if (!(state.residualN <= CHORD_RATE * before.residualN)) drop();
   }
 }
