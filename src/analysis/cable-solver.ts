@@ -96,6 +96,8 @@ interface Prepared {
   /** Arrays of states no longer read (trials the line search passed over, the state before each step), for the next states. */
   spareU: Float64Array[];
   spareResidual: Float64Array[];
+  /** The BFGS pairs, cleared at each Newton start (one object, so its arrays serve every start). */
+  updates: SecantUpdates;
 }
 
 /** Member tangent slots by pattern (one pattern ⇔ one topology, members in one order: see numberEquations). */
@@ -137,7 +139,7 @@ function prepare(model: CableModel): Prepared {
     model, x0: flatCoordinates(model.nodes), restM: restLengths(model), load: flatLoads(n, model.loads), prescribed, equationOf, matrix, pattern, slots, ends,
     eaN: Float64Array.from(model.members, (m) => m.eaN), cable: Uint8Array.from(model.members, (m) => (m.kind === "cable" ? 1 : 0)), free: pattern.n,
     fint: new Float64Array(3 * n), forces: new Float64Array(model.members.length), slack: new Array<boolean>(model.members.length).fill(false),
-    spareU: [], spareResidual: [],
+    spareU: [], spareResidual: [], updates: new SecantUpdates(),
   };
 }
 
@@ -243,7 +245,8 @@ function sum(a: Float64Array, b: Float64Array, s: number): Float64Array {
 }
 
 function withPrescribed(p: Prepared, u: Float64Array, lambda: number): Float64Array {
-  const v = Float64Array.from(u);
+  const v = p.spareU.pop() ?? new Float64Array(u.length);
+  v.set(u);
   for (let k = 0; k < v.length; k++) if (p.equationOf[k]! < 0) v[k] = lambda * p.prescribed[k]!;
   return v;
 }
@@ -371,7 +374,8 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
     if (tangent && !tangent.shared) tangent.factor.release?.();
     tangent = undefined;
   };
-  const updates = new SecantUpdates();
+  const updates = p.updates;
+  updates.clear();
   for (let iteration = 0; ; iteration++) {
     const outcome = ((): NewtonOutcome | undefined => {
       if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
@@ -399,6 +403,7 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
     const change = updates.vector(p.free);
     for (let k = 0; k < change.length; k++) change[k] = before.residual[k]! - state.residual[k]!;
     updates.push(freeDifference(p, state.u, u, updates.vector(p.free)), change);
+    updates.recycle(du);
     u = state.u;
     release(p, before);
     if (!(state.residualN <= CHORD_RATE * before.residualN)) drop();
@@ -441,10 +446,16 @@ function warmStart(p: Prepared, options: CableSolverOptions): NewtonOutcome | un
   let best: { u: Float64Array; r: number } | undefined;
   for (const u of options.starts ?? []) {
     if (u.length !== p.x0.length) throw new RangeError(`invalid options.starts: ${u.length} displacements (expected ${p.x0.length}, three a node)`);
-    const r = evaluate(p, withPrescribed(p, u, 1), 1, options).residualN;
+    const candidate = evaluate(p, withPrescribed(p, u, 1), 1, options);
+    const r = candidate.residualN;
+    release(p, candidate);
     if (r < (best?.r ?? Infinity)) best = { u, r };
   }
-  if (!best || !(best.r < evaluate(p, withPrescribed(p, new Float64Array(p.x0.length), 1), 1, options).residualN)) return undefined;
+  if (!best) return undefined;
+  const unloaded = evaluate(p, withPrescribed(p, new Float64Array(p.x0.length), 1), 1, options);
+  const restBetter = !(best.r < unloaded.residualN);
+  release(p, unloaded);
+  if (restBetter) return undefined;
   return newton(p, best.u, 1, options);
 }
 

@@ -43,6 +43,11 @@ export class SecantUpdates {
     this.rho.length = 0;
   }
 
+  /** Takes back an array the caller no longer reads (a direction once stepped along), for `vector`. */
+  recycle(v: Float64Array): void {
+    this.free.push(v);
+  }
+
   /** An array of n entries to fill and push: one the updates no longer hold, else a new one (its contents are not cleared). */
   vector(n: number): Float64Array {
     const v = this.free.pop();
@@ -55,7 +60,8 @@ export class SecantUpdates {
 
   /** The corrected Newton step for residual R: H·R with H the updated inverse of K0 (solve0 = K0⁻¹, which may overwrite its argument: it is given a copy). */
   direction(residual: Float64Array, solve0: (b: Float64Array) => Float64Array): Float64Array {
-    const q = Float64Array.from(residual);
+    const q = this.vector(residual.length);
+    q.set(residual);
     const m = this.steps.length;
     const alpha = new Float64Array(m);
     for (let i = m - 1; i >= 0; i--) {
