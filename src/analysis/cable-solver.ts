@@ -84,10 +84,8 @@ interface Prepared {
   /** Free freedoms (equations). */
   free: number;
   /**
-   * The internal force vector's buffer, reused by every evaluation (read before the next): in a
-   * browser's worker a fresh typed array of a few thousand entries costs some 40 µs (page faults in
-   * the allocator; measured in headless Chromium, against about 5 µs for a plain array), and the
-   * solver made several an iteration.
+   * The internal force vector's buffer, reused by every evaluation (read before the next): fresh
+   * typed arrays are dear in a browser's worker (DEVELOPERS.md, "Where the work runs").
    */
   fint: Float64Array;
   /** The member forces and slack flags of the iterations (reused likewise; the final state's are made afresh). */
@@ -377,12 +375,7 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
   const updates = p.updates;
   updates.clear();
   for (let iteration = 0; ; iteration++) {
-    const outcome = ((): NewtonOutcome | undefined => {
-      if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
-      if (state.residualN <= tolerance * state.appliedN || state.appliedN === 0) return { ok: true, state, iterations: iteration };
-      if (iteration >= maxIterations) return { ok: false, reason: `no equilibrium after ${iteration} Newton iterations (residual ${state.residualN.toExponential(2)} N against ${state.appliedN.toExponential(2)} N applied)`, iterations: iteration, state };
-      return undefined;
-    })();
+    const outcome = finished(state, iteration, tolerance, maxIterations);
     if (outcome) {
       drop();
       return outcome;
@@ -408,6 +401,14 @@ function newton(p: Prepared, start: Float64Array, lambda: number, options: Cable
     release(p, before);
     if (!(state.residualN <= CHORD_RATE * before.residualN)) drop();
   }
+}
+
+/** Newton's outcome when it stops at this state: converged, non-finite or out of iterations; undefined while it goes on. */
+function finished(state: State, iteration: number, tolerance: number, maxIterations: number): NewtonOutcome | undefined {
+  if (!Number.isFinite(state.residualN)) return { ok: false, reason: "the residual became non-finite", iterations: iteration, state };
+  if (state.residualN <= tolerance * state.appliedN || state.appliedN === 0) return { ok: true, state, iterations: iteration };
+  if (iteration >= maxIterations) return { ok: false, reason: `no equilibrium after ${iteration} Newton iterations (residual ${state.residualN.toExponential(2)} N against ${state.appliedN.toExponential(2)} N applied)`, iterations: iteration, state };
+  return undefined;
 }
 
 /** Solves the model under its loads (and prescribed support displacements), stepping the load. */

@@ -74,9 +74,8 @@ export class SparsePattern {
 
   /**
    * A factorisation's working arrays (a row being eliminated, rows filled per supernode), shared by
-   * every factorisation of the pattern: each clears them first and none calls another. In a
-   * browser's worker a fresh typed array of a few thousand entries costs some 40 µs (page faults in
-   * its allocator; measured in headless Chromium), as much as a small factorisation's arithmetic.
+   * every factorisation of the pattern: each clears them first and none calls another (fresh typed
+   * arrays are dear in a browser's worker: DEVELOPERS.md, "Where the work runs").
    */
   get scratch(): { y: Float64Array; filled: Int32Array } {
     return (this.work ??= { y: new Float64Array(this.n), filled: new Int32Array(this.supernodes.count) });

@@ -79,6 +79,38 @@ describe("sparse LDLᵀ with a minimum-degree ordering", () => {
     expect(factorSparseLDL(A)).toEqual({ ok: false, equation: 1 });
     expect(() => A.add(2, 0, 1)).toThrow(/outside the matrix's pattern/);
   });
+  it("a released factor's arrays serve the next factorisation of the pattern: its answers are those of a fresh one, the released one refuses to solve", () => {
+    const m = 12;
+    const edges = grid(m);
+    const n = m * m;
+    const { matrix, count } = numberEquations(n, 3, edges, (node) => node < 3);
+    const filled = (seed: number) => {
+      const rand = stream(seed);
+      const A = matrix();
+      const { colStart, rowIndex } = A.pattern;
+      for (let k = 0; k < count; k++) for (let p = colStart[k]!; p < colStart[k + 1]!; p++) A.values[p] = rowIndex[p] === k ? 30 : -rand();
+      return A;
+    };
+    const b = Float64Array.from({ length: count }, (_, k) => Math.sin(k));
+    const A = filled(1);
+    const B = filled(2);
+    const fresh = factorSparseLDL(B);
+    if (!fresh.ok) throw new Error("B is positive definite");
+    const expected = fresh.solve(b);
+    fresh.release();
+    const first = factorSparseLDL(A);
+    if (!first.ok) throw new Error("A is positive definite");
+    first.release();
+    expect(() => first.solve(b)).toThrow(/released/);
+    // B again, in the arrays A's factor gave back: the same numbers to the last bit
+    const again = factorSparseLDL(B);
+    if (!again.ok) throw new Error("B is positive definite");
+    expect([...again.solve(b)]).toEqual([...expected]);
+    // and solving in place overwrites its argument with the same answer
+    const x = Float64Array.from(b);
+    expect(again.solveInPlace(x)).toBe(x);
+    expect([...x]).toEqual([...expected]);
+  });
   it("minimum degree takes a leaf of a star before its hub", () => {
     const order = minimumDegreeOrder(5, [[0, 1], [0, 2], [0, 3], [0, 4]]);
     expect([...order].sort()).toEqual([0, 1, 2, 3, 4]);
