@@ -51,7 +51,7 @@ reactiveCell(main, { id: "status" }, () => {
     label.htmlFor = "span-progress";
     label.textContent =
       s.pass === "screening"
-        ? `Computing the span study… ${s.done} of ${s.total} spans`
+        ? `Computing the span study… ${s.done} of ${s.total} spans${s.reused > 0 ? ` (${s.reused} kept from the last run)` : ""}`
         : `${s.screeningMs === undefined ? "Designing" : `Every scheme drawn in ${fmt.int(s.screeningMs)} ms; now designing`} ${namesOf(s.again)} by the 3D analysis… ${s.done} of ${s.total} spans, the largest (slowest) first (until this ends, their lines show the closed form, the fast first estimate)`;
     const progress = document.createElement("progress");
     progress.id = "span-progress";
@@ -63,7 +63,8 @@ reactiveCell(main, { id: "status" }, () => {
   const spans = new Set(s.points.map((p) => p.spanM)).size;
   const workers = `in ${s.workers} background worker${s.workers > 1 ? "s" : ""}`;
   const passes = s.again.length === 0 ? "" : `: every scheme in ${fmt.int(s.screeningMs)} ms with ${namesOf(s.again)} by the closed form, then again by the 3D analysis, as on the compare page`;
-  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (${workers}${passes}).`;
+  const kept = s.reused === 0 ? "" : ` ${s.reused === spans ? "Every span" : `${s.reused} of the ${spans} spans`} kept from an earlier run of the same study: only new spans are designed.`;
+  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (${workers}${passes}).${kept}`;
 });
 
 reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {

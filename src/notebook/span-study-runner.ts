@@ -14,10 +14,12 @@ export type SpanStudyState =
       /** "screening": every scheme's fast pass; "again": the schemes designed again in full (`again`), the points shown have their screening design until the pass ends. */
       pass: "screening" | "again";
       again: string[];
+      /** Spans of this pass taken from earlier runs of the same study (SpanMemory). */
+      reused: number;
       /** Time of the screening pass, ms, once it is done. */
       screeningMs?: number;
     }
-  | { status: "done"; points: SpanPoint[]; ms: number; workers: number; again: string[]; screeningMs: number }
+  | { status: "done"; points: SpanPoint[]; ms: number; workers: number; again: string[]; screeningMs: number; /** Spans whose points (both passes) came from earlier runs of the same study. */ reused: number }
   | { status: "failed"; error: string };
 
 /** How many workers: one per core the browser reports, between 1 and 4 (the page itself waits while they run). */
@@ -41,17 +43,45 @@ function replaced(earlier: readonly SpanPoint[], later: readonly SpanPoint[]): S
 }
 
 /**
+ * Each pass's points by span, for one study (its JSON): a span's points depend only on the study and
+ * the span, so a range that overlaps the last one (narrowed, extended, a finer step through the same
+ * spans) designs only its new spans. Any change to the study starts afresh.
+ */
+export class SpanMemory {
+  private key = "";
+  private readonly passes = { screening: new Map<number, SpanPoint[]>(), again: new Map<number, SpanPoint[]>() };
+  /** Forgets everything unless `key` is the study the points were computed for. */
+  keep(key: string): void {
+    if (key === this.key) return;
+    this.key = key;
+    this.passes.screening.clear();
+    this.passes.again.clear();
+  }
+  get(pass: "screening" | "again", spanM: number): SpanPoint[] | undefined {
+    return this.passes[pass].get(spanM);
+  }
+  /** Records a call's points for its spans, when they were computed for the study kept now. */
+  put(key: string, pass: "screening" | "again", spans: readonly number[], points: readonly SpanPoint[]): void {
+    if (key !== this.key) return;
+    for (const spanM of spans) this.passes[pass].set(spanM, points.filter((p) => p.spanM === spanM));
+  }
+}
+
+/**
  * Runs the span study in Web Workers (through the one typed worker interface) whenever the study
  * or the range changes, in two passes: every scheme as its proportion search screens it (the
  * tension roofs by their closed form: the whole picture within seconds), then the schemes whose
  * full design differs (the tension roofs by the 3D analysis, as on the compare page), whose points
  * replace their screening ones when that pass ends. The spans are dealt out a few at a time, largest
  * first, to whichever worker is free, so the progress bar moves and a newer request stops the older one after
- * the calls already running; while one runs the previous points stay on screen.
+ * the calls already running; while one runs the previous points stay on screen. Spans already
+ * computed for the same study are taken from memory (SpanMemory), those of calls a newer request
+ * overtook included.
  */
 export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySignal<SpanRange>): ReadonlySignal<SpanStudyState> {
-  const state = signal<SpanStudyState>({ status: "running", points: null, done: 0, total: 0, pass: "screening", again: [] });
+  const state = signal<SpanStudyState>({ status: "running", points: null, done: 0, total: 0, pass: "screening", again: [], reused: 0 });
   const pool = Array.from({ length: workerCount() }, () => workerApi<SpanWorkerApi>(new Worker(new URL("../comparison/span-worker.ts", import.meta.url), { type: "module" })));
+  const memory = new SpanMemory();
   let latest = 0;
   effect(() => {
     const id = ++latest;
@@ -63,22 +93,28 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
       return;
     }
     const current = study.value;
+    const key = JSON.stringify(current);
+    memory.keep(key);
     const previous = state.peek();
     const started = performance.now();
     /** One pass: its chunks dealt to the free workers; the points, or null when a newer request took over. */
     const pass = async (name: "screening" | "again", shown: SpanPoint[] | null, again: string[], screeningMs?: number): Promise<SpanPoint[] | null> => {
+      const parts: SpanPoint[][] = spans.map((spanM) => memory.get(name, spanM) ?? []);
+      const fresh = spans.filter((spanM) => memory.get(name, spanM) === undefined);
+      const reused = spans.length - fresh.length;
       // the largest spans first: they take longest, so the workers finish together rather than one waiting on the last large chunk
-      const queue = chunks([...spans].reverse(), SPANS_PER_CALL[name]);
-      const parts: SpanPoint[][] = [];
-      let done = 0;
+      const queue = chunks([...fresh].reverse(), SPANS_PER_CALL[name]);
+      let done = reused;
       const report = () => {
-        state.value = { status: "running", points: shown, done, total: spans.length, pass: name, again, ...(screeningMs === undefined ? {} : { screeningMs }) };
+        state.value = { status: "running", points: shown, done, total: spans.length, pass: name, again, reused, ...(screeningMs === undefined ? {} : { screeningMs }) };
       };
       report();
       await Promise.all(pool.map(async (worker) => {
         for (let chunk = queue.shift(); chunk !== undefined && id === latest; chunk = queue.shift()) {
           // the second pass sends each span's screening points of the schemes it designs again: their searches are not repeated
-          parts.push(await worker.api.run(current, chunk, name, name === "again" ? (shown ?? []).filter((p) => p.screened && chunk.includes(p.spanM)) : []));
+          const points = await worker.api.run(current, chunk, name, name === "again" ? (shown ?? []).filter((p) => p.screened && chunk.includes(p.spanM)) : []);
+          memory.put(key, name, chunk, points);
+          parts.push(points);
           done += chunk.length;
           if (id === latest) report();
         }
@@ -88,12 +124,13 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
     const run = async () => {
       const again = await (pool[0] as (typeof pool)[number]).api.designedAgain(current);
       if (id !== latest) return;
+      const reusedAtStart = spans.filter((spanM) => memory.get("screening", spanM) !== undefined && (again.length === 0 || memory.get("again", spanM) !== undefined)).length;
       const screened = await pass("screening", previous.status === "failed" ? null : previous.points, again);
       if (screened === null) return;
       const screeningMs = performance.now() - started;
       const full = again.length === 0 ? [] : await pass("again", screened, again, screeningMs);
       if (full === null) return;
-      state.value = { status: "done", points: replaced(screened, full), ms: performance.now() - started, workers: pool.length, again, screeningMs };
+      state.value = { status: "done", points: replaced(screened, full), ms: performance.now() - started, workers: pool.length, again, screeningMs, reused: reusedAtStart };
     };
     run().catch((error: unknown) => {
       if (id === latest) state.value = { status: "failed", error: messageOf(error) };

@@ -75,6 +75,15 @@ describe("span study", () => {
     await resultsSettled(page);
     const status = await page.locator("#cell-status").innerText();
     expect(status).toMatch(/^7 spans × \d schemes computed in [\d,]+ ms \(in \d background workers?: every scheme in [\d,]+ ms with the cable dome and the mast-supported cable net by the closed form, then again by the 3D analysis, as on the compare page\)/);
+    // a span's points depend only on the study and the span: a range over the same spans designs nothing again, a wider one only its new spans
+    await page.fill("#toM", "90");
+    await page.locator("#toM").press("Enter");
+    await page.waitForFunction(() => /^6 spans .* computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), undefined, { timeout: 60_000 });
+    expect(await page.locator("#cell-status").innerText()).toMatch(/Every span kept from an earlier run of the same study: only new spans are designed\.$/);
+    await page.fill("#toM", "110");
+    await page.locator("#toM").press("Enter");
+    await page.waitForFunction(() => /^8 spans .* computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), undefined, { timeout: 120_000 });
+    expect(await page.locator("#cell-status").innerText()).toMatch(/ 7 of the 8 spans kept from an earlier run/);
     const legend = await page.locator("#cell-span-charts").first().innerText();
     for (const model of SCHEMES) expect(legend).toContain(model.label);
     // Each scheme has at least one drawn (non-empty) line path in the self-weight chart.
