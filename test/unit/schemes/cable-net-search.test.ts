@@ -3,7 +3,7 @@
 // prestress that passes, to within the tolerance the bisection it replaced had (about 6 %: three
 // halvings of a bracket that grew by 1.5× a round).
 import { describe, it, expect } from "vitest";
-import { analyseNet, netRoundAt, type NetAnalysisInput, type NetSearchRound } from "../../../src/schemes/cable-net/analysis";
+import { analyseNet, learnStart, netRoundAt, type NetAnalysisInput, type NetSearchRound } from "../../../src/schemes/cable-net/analysis";
 import { cableNetLayout } from "../../../src/schemes/cable-net/geometry";
 import { cableNet } from "../../../src/schemes/cable-net";
 import { planCombinations, unboundedCombinations } from "../../../src/schemes/kit";
@@ -50,6 +50,25 @@ describe("the net's prestress search at 60 m", () => {
       expect(rounds.at(-1)).toMatchObject({ alphaN: found, pass: true, combinations: every.solved.length });
     });
   }
+});
+
+describe("where the net's prestress search starts (learned from the last design of its kind)", () => {
+  it("changes the rounds it runs, not the prestress it finds (80 m, held centre)", () => {
+    const input = inputAt(80, true);
+    const found = analyseNet(input).prestressN;
+    const searched = (start: number | null) => {
+      if (start !== null) learnStart(input, start);
+      const rounds: NetSearchRound[] = [];
+      return { prestressN: analyseNet(input, (r) => rounds.push(r)).prestressN, rounds: rounds.length };
+    };
+    // from well below and well above the answer: the same grid point, to the last bit
+    expect(searched(0.6 * found).prestressN).toBe(found);
+    expect(searched(1.7 * found).prestressN).toBe(found);
+    // learned from that search: the next one starts at its answer and needs the round there, the one a grid step below and the check of every combination
+    const again = searched(null);
+    expect(again.prestressN).toBe(found);
+    expect(again.rounds).toBeLessThanOrEqual(3);
+  });
 });
 
 describe("what sets the net's prestress (analyseNet governs)", () => {
