@@ -70,3 +70,18 @@ export function trendChoice(values: readonly number[], samples: readonly { index
   const inBand = fitted.flatMap((v, i) => (v <= limit ? [i] : []));
   return inBand.reduce((a, b) => (Math.abs(b - reference) < Math.abs(a - reference) ? b : a), inBand[0] ?? best.index);
 }
+
+/**
+ * The index of `values` where the quadratic through the finite samples (fitQuadratic) is least,
+ * between the least and the greatest sampled index; null with fewer than three finite samples.
+ */
+export function fittedLeast(values: readonly number[], samples: readonly { index: number; value: number }[]): number | null {
+  const finite = samples.filter((s) => Number.isFinite(s.value));
+  const fit = fitQuadratic(finite.map((s) => ({ x: values[s.index]!, y: s.value })));
+  if (!fit) return null;
+  const from = Math.min(...finite.map((s) => s.index));
+  const to = Math.max(...finite.map((s) => s.index));
+  let least = from;
+  for (let i = from + 1; i <= to; i++) if (fit(values[i]!) < fit(values[least]!)) least = i;
+  return least;
+}
