@@ -376,6 +376,11 @@ export function learnStart(input: NetAnalysisInput, prestressN: number, searched
   learnedStarts.set(kindOf(input), { multiple: prestressN / input.seedPrestressN, searched: [...searched] });
 }
 
+/** Forgets every learned start: the next search of each kind starts at START_OF_SEED (benches time both). */
+export function forgetLearnedStarts(): void {
+  learnedStarts.clear();
+}
+
 /** Earlier rounds whose answers a round may start from: the two nearest in prestress. */
 const WARM_ROUNDS = 2;
 
