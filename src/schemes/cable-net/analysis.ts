@@ -426,9 +426,10 @@ export function netAnalysisAt(input: NetAnalysisInput, alphaN: number): NetAnaly
  * `residualPrestress` × its prestress force, no node moves more than the limit, and a free ring
  * hangs no lower than the roof's crown (the fabric hangs below the net). It is searched on the
  * governing few combinations (kit analysedCombinations) by a secant on the worst margin in 1/α
- * (marginOf, nextAlpha), from START_OF_SEED × the closed form's prestress; the other combinations
- * are then checked at the α found, and any that fails joins the searched ones and the search goes
- * on from there.
+ * (marginOf, nextAlpha) over the points of a fixed grid (onGrid), from where the last design of its
+ * kind ended (learnStart) or else START_OF_SEED × the closed form's prestress; the other combinations
+ * are then checked at the α found (every one solved from the unloaded state), and any that fails joins
+ * the searched ones and the search goes on from there.
  */
 export function analyseNet(input: NetAnalysisInput, onRound?: (round: NetSearchRound) => void): NetAnalysis {
   const { layout } = input;
