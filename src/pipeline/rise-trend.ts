@@ -54,34 +54,34 @@ function solve3(m: number[][]): [number, number, number] | null {
 }
 
 /**
- * The index of `values` (rises in order) to design at: of the values between the least and the
- * greatest finite sample, those whose fitted objective is within `band` of the fitted least, the
- * nearest `reference` (an index). With fewer than three finite samples, the best sample.
+ * The quadratic through the finite samples (fitQuadratic) at each of `values` between the least and
+ * the greatest finite sample's index (+∞ outside); null with fewer than three finite samples.
  */
-export function trendChoice(values: readonly number[], samples: readonly { index: number; value: number }[], reference: number, band: number): number {
-  const finite = samples.filter((s) => Number.isFinite(s.value));
-  const best = [...finite].sort((a, b) => a.value - b.value)[0];
-  const fit = fitQuadratic(finite.map((s) => ({ x: values[s.index]!, y: s.value })));
-  if (!fit || !best) return best?.index ?? reference;
-  const from = Math.min(...finite.map((s) => s.index));
-  const to = Math.max(...finite.map((s) => s.index));
-  const fitted = values.map((x, i) => (i >= from && i <= to ? fit(x) : Number.POSITIVE_INFINITY));
-  const limit = Math.min(...fitted) + band * Math.abs(Math.min(...fitted));
-  const inBand = fitted.flatMap((v, i) => (v <= limit ? [i] : []));
-  return inBand.reduce((a, b) => (Math.abs(b - reference) < Math.abs(a - reference) ? b : a), inBand[0] ?? best.index);
-}
-
-/**
- * The index of `values` where the quadratic through the finite samples (fitQuadratic) is least,
- * between the least and the greatest sampled index; null with fewer than three finite samples.
- */
-export function fittedLeast(values: readonly number[], samples: readonly { index: number; value: number }[]): number | null {
+function fittedOverSamples(values: readonly number[], samples: readonly { index: number; value: number }[]): number[] | null {
   const finite = samples.filter((s) => Number.isFinite(s.value));
   const fit = fitQuadratic(finite.map((s) => ({ x: values[s.index]!, y: s.value })));
   if (!fit) return null;
   const from = Math.min(...finite.map((s) => s.index));
   const to = Math.max(...finite.map((s) => s.index));
-  let least = from;
-  for (let i = from + 1; i <= to; i++) if (fit(values[i]!) < fit(values[least]!)) least = i;
-  return least;
+  return values.map((x, i) => (i >= from && i <= to ? fit(x) : Number.POSITIVE_INFINITY));
+}
+
+/**
+ * The index of `values` (rises in order) to design at: of the values between the least and the
+ * greatest finite sample, those whose fitted objective is within `band` of the fitted least, the
+ * nearest `reference` (an index). With fewer than three finite samples, the best sample.
+ */
+export function trendChoice(values: readonly number[], samples: readonly { index: number; value: number }[], reference: number, band: number): number {
+  const best = samples.filter((s) => Number.isFinite(s.value)).sort((a, b) => a.value - b.value)[0];
+  const fitted = fittedOverSamples(values, samples);
+  if (!fitted || !best) return best?.index ?? reference;
+  const limit = Math.min(...fitted) + band * Math.abs(Math.min(...fitted));
+  const inBand = fitted.flatMap((v, i) => (v <= limit ? [i] : []));
+  return inBand.reduce((a, b) => (Math.abs(b - reference) < Math.abs(a - reference) ? b : a), inBand[0] ?? best.index);
+}
+
+/** The index of `values` where the quadratic through the finite samples is least, between the least and the greatest sampled index; null with fewer than three finite samples. */
+export function fittedLeast(values: readonly number[], samples: readonly { index: number; value: number }[]): number | null {
+  const fitted = fittedOverSamples(values, samples);
+  return fitted ? fitted.indexOf(Math.min(...fitted)) : null;
 }
