@@ -284,7 +284,8 @@ function assessCorrected(study: RiskStudy, entry: DesignEntry, correction: Corre
   if (!correction || entry === correction.full) return drawn;
   const full = assessEntry(study, correction.full, intensities);
   const screening = assessEntry(study, correction.screening, intensities);
-  return drawn.map((x, m) => (x * (full[m] as number)) / (screening[m] as number)) as [number, number, number];
+  // a draw at the screening design's own outputs is the full design's exactly ((s · f) / s need not round to f)
+  return drawn.map((x, m) => (x === screening[m] ? (full[m] as number) : (x * (full[m] as number)) / (screening[m] as number))) as [number, number, number];
 }
 
 /** The samples: each with its design draw and its own draw of the assessment-only inputs. */

@@ -69,24 +69,45 @@ export interface KnownJump {
 }
 
 /**
- * The cable net's known jump on the default study (measured 4 Dec, lead, after the fabric was laid
- * on the form-found net instead of the brief's cap): self-weight +18.9 % at 65 → 70 m, with carbon
- * per m² of floor, the objective, +5.9 % (the demo study: +15.0 % and +3.7 %, just under the limit).
- * Cause: at 65 m the inner bay gains its third circumferential cable (geometry.ts evenlyBetween: 2 at
- * 60 m, 3 at 65 m), and its prestress is then set by a circumferential cable under wind uplift rather
- * than by the inner radial cables beside the ring under snow (3 masts, mast height 0.12 × span:
- * 1,238, 1,303 and 1,788 kN at 60, 65 and 70 m); that 65 m net is 6 % better in carbon than its
- * neighbours and its best mast height drops to 0.12 × span (demo 0.10; 0.15–0.17 at 60 and 70 m):
- * the fabric on the net is 13 % (10 %) more than the plan at the lower mast, 18 % at 0.15, so the
- * lower mast wins. Before the fabric change the same step was 11.6 % (default) and 14.2 % (demo).
- * Open on issue 13.
+ * The cable net's known jumps on the default study: none since its mast count is refined on 3D designs
+ * (5 Dec, lead). Before, self-weight stepped +18.9 % at 65 → 70 m (carbon per m² of floor, the
+ * objective, +5.9 %): at 65 m the inner bay gained its third circumferential cable (geometry.ts
+ * evenlyBetween) and with 3 masts its prestress was then set by a circumferential cable under wind
+ * uplift; the 3D designs choose 4–5 masts there, where the step is gone.
  */
-export const KNOWN_JUMPS: readonly KnownJump[] = [{ id: "cable-net", from: 65, to: 70, metric: "selfWeightKgPerM2" }];
+export const KNOWN_JUMPS: readonly KnownJump[] = [];
 /** The demo study's: none (its step at 65 → 70 m is 15.0 %, just under the limit: see KNOWN_JUMPS). */
 export const KNOWN_JUMPS_DEMO: readonly KnownJump[] = [];
 
-/** The property for the given schemes on one study's brief; the schemes in `knownFailing` are expected to fail (it.fails); `knownJumps` are expected exactly. */
-export function smoothnessSuite(title: string, study: () => Study, knownFailing: readonly SchemeId[], schemeIds: (id: SchemeId) => boolean, knownJumps: readonly KnownJump[] = []): void {
+/** A regime that flips back and is known and explained (flips): expected exactly, like the known jumps. */
+export interface KnownFlip {
+  id: SchemeId;
+  from: number;
+  to: number;
+  regimes: string;
+}
+
+/**
+ * The cable net's mast count is chosen on 3D designs (5 Dec, lead: src/pipeline/refine-in-full.ts,
+ * chosenCount): the least of the counts designed. Over 100–400 m the 3D objective is flat across 5–7
+ * masts, the neighbours within 1–2 % of each other (demo study, at the screened mast height: 125 m,
+ * 5 masts 118.6, 6 masts 114.8 kgCO2e/m² of floor; 255 m, 132.1 and 129.7), so where two counts cross
+ * the count flips to the other for a span and back; no metric moves more than the limit there. Other
+ * rules flipped as often or more on the demo study (the screened count kept unless a sample was better
+ * by 2 %: 3 flips; the fewest within 3 % of the least: 16; the quadratic trend's choice: 6), so these
+ * few are recorded. Measured.
+ */
+export const KNOWN_FLIPS: readonly KnownFlip[] = [
+  { id: "cable-net", from: 350, to: 360, regimes: "6 masts → 7 masts → 6 masts" },
+  { id: "cable-net", from: 375, to: 385, regimes: "6 masts → 7 masts → 6 masts" },
+];
+export const KNOWN_FLIPS_DEMO: readonly KnownFlip[] = [
+  { id: "cable-net", from: 300, to: 315, regimes: "6 masts → 7 masts → 6 masts" },
+  { id: "cable-net", from: 370, to: 380, regimes: "6 masts → 5 masts → 6 masts" },
+];
+
+/** The property for the given schemes on one study's brief; the schemes in `knownFailing` are expected to fail (it.fails); `knownJumps` and `knownFlips` are expected exactly. */
+export function smoothnessSuite(title: string, study: () => Study, knownFailing: readonly SchemeId[], schemeIds: (id: SchemeId) => boolean, knownJumps: readonly KnownJump[] = [], knownFlips: readonly KnownFlip[] = []): void {
   describe(title, () => {
     const catalogue = defaultCatalogue();
     for (const model of SCHEMES.filter((m) => schemeIds(m.id))) {
@@ -95,7 +116,7 @@ export function smoothnessSuite(title: string, study: () => Study, knownFailing:
         const points = runSpanStudy(study(), catalogue, { fromM: 40, toM: 400, stepM: 5 }, { schemeIds: [model.id] });
         const known = knownJumps.filter((j) => j.id === model.id).map(({ from, to, metric }) => ({ from, to, metric }));
         expect(jumps(points).map(({ from, to, metric }) => ({ from, to, metric }))).toEqual(known);
-        expect(flips(points)).toEqual([]);
+        expect(flips(points)).toEqual(knownFlips.filter((f) => f.id === model.id).map(({ from, to, regimes }) => ({ from, to, regimes })));
       }, 400_000); // each scheme: 73 spans, each with its proportion search (about 3–170 s here)
     }
   });

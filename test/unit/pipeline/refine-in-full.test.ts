@@ -119,3 +119,49 @@ describe("descended: the refined choice steps towards the fitted least on the fu
     expect(run.full.objective).toBe(121.66);
   });
 });
+
+describe("refineInFull: a count refined on its neighbours (made-up objectives)", () => {
+  const count: OptionSpec = { key: "count", label: "count", kind: "number", unit: "", min: 3, max: 12, step: 1, integer: true, source: "test", free: true };
+  const counted = (refinedInFull: SchemeModel["refinedInFull"]): SchemeModel => ({ ...model(refinedInFull), options: [count, depth], defaults: { count: 6, depth: 0.6 } }) as SchemeModel;
+  const run = (objective: (n: number, depth: number) => number, start: number, refined: SchemeModel["refinedInFull"] = [{ key: "count", neighbours: 1 }]) => {
+    const asked: number[] = [];
+    const out = refineInFull(counted(refined), { options: { count: start, depth: 0.5 }, riseM: 10 }, at, (o, riseM) => {
+      asked.push(o.count as number);
+      const value = objective(o.count as number, o.depth as number);
+      return Number.isFinite(value) ? designed(o, riseM, value) : infeasibleDesign("cable-dome", DEFAULT_BRIEF, "test");
+    }, (d) => d.totalMassKg);
+    return { ...out, asked };
+  };
+  it("designs the screened count and one either side, steps on from the best to its better neighbour while that is better by more than the tie band, and takes the least designed", () => {
+    // 100 at the screened 5; 90, 80, 79 at 6, 7, 8: 6 sampled, 7 is 11 % better, 8 only 1.3 % better than 7 (so 9 is not designed), and the least
+    const values: Record<number, number> = { 4: 105, 5: 100, 6: 90, 7: 80, 8: 79, 9: 70 };
+    const { full, asked, refinements } = run((n) => values[n] ?? 200, 5);
+    expect(asked).toEqual([4, 5, 6, 7, 8]);
+    expect(full.options.count).toBe(8);
+    expect(refinements[0]?.samples).toEqual([{ value: 4, objective: 105 }, { value: 5, objective: 100 }, { value: 6, objective: 90 }]);
+  });
+  it("samples multiples of the screened count too, and a plateau next to the screened count does not stop it (the demo's net at 270 m, measured)", () => {
+    // kgCO2e/m² of floor, masts pinned, 3D designs: 9 → 149.7, 8 → 150.5, 10 → 150.0, 7 → 140.2, 6 → 133.1; 4 and 5 made up
+    const values: Record<number, number> = { 4: 150, 5: 140, 6: 133.1, 7: 140.2, 8: 150.5, 9: 149.7, 10: 150.0 };
+    const { full, refinements } = run((n) => values[n] ?? 200, 9, [{ key: "count", neighbours: 1, ratios: [1 / 2, 2 / 3] }]);
+    expect(refinements[0]?.samples.map((s) => s.value)).toEqual([4, 6, 8, 9, 10]); // 9 ÷ 2 = 4.5: the lower of two as near
+    expect(full.options.count).toBe(6); // 5 and 7 tried next to it: neither better by the band
+    expect(full.objective).toBe(133.1);
+  });
+  it("takes the fewer of two counts as good, and the grid's end bounds the neighbours", () => {
+    // from 6: 5, 6, 7 sampled, the first best 5, whose neighbour 4 is designed too: all equal, the fewest
+    expect(run(() => 100, 6).full.options.count).toBe(4);
+    const edge = run((n) => ({ 3: 100, 4: 90, 5: 95 })[n] ?? 200, 3);
+    expect(edge.refinements[0]?.samples.map((s) => s.value)).toEqual([3, 4]);
+    expect(edge.full.options.count).toBe(4);
+  });
+  it("leaves an infeasible screened count for a feasible neighbour, and refines the next proportion at the count chosen", () => {
+    const { full, asked } = run((n, d) => (n === 6 ? Infinity : 50 + n + 40 * (d - 0.4) ** 2), 6, [{ key: "count", neighbours: 1 }, { key: "depth", samples: [0.2, 0.4, 0.6] }]);
+    // 5, 6, 7 sampled; 4 designed as the next step (54.4: not better than 5's 55.4 by the band, but the least designed)
+    expect(asked.slice(0, 4)).toEqual([5, 6, 7, 4]);
+    expect(full.options.count).toBe(4);
+    // then the depth's samples, all at 4
+    expect(asked.length).toBeGreaterThanOrEqual(7);
+    expect(asked.slice(4).every((n) => n === 4)).toBe(true);
+  });
+});
