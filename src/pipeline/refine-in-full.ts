@@ -81,10 +81,9 @@ function descentEnd(trend: number, values: readonly number[], sampled: readonly 
   return least < trend ? Math.min(...feasible) : Math.max(...feasible);
 }
 
-/** A sampled proportion's choice on the trend through its samples (trendChoice), stepped on with `descend` (descentEnd, descended). */
-function chosenOnTrend(refined: { descend?: boolean }, axis: Axis, sampled: readonly { index: number; value: number }[], objectiveAt: (index: number) => number): number {
+/** A sampled proportion's choice on the trend through its samples (trendChoice), stepped on with `descend` (descentEnd, descended); `best` is the best feasible sample. */
+function chosenOnTrend(refined: { descend?: boolean }, axis: Axis, sampled: readonly { index: number; value: number }[], best: number, objectiveAt: (index: number) => number): number {
   const trend = trendChoice(axis.values, sampled, axis.reference, PROPORTION_TIE_FRACTION);
-  const best = sampled.filter((s) => Number.isFinite(s.value)).sort((a, b) => a.value - b.value)[0]!.index;
   return refined.descend ? descended(trend, descentEnd(trend, axis.values, sampled, best), objectiveAt) : trend;
 }
 
@@ -97,13 +96,13 @@ function chosenOnTrend(refined: { descend?: boolean }, axis: Axis, sampled: read
  * (5 m steps) the least flipped twice, the screened count kept unless a sample was better by 2 % three
  * times, the fewest within 3 % of the least 16 times, the quadratic trend's choice 6 (measured).
  */
-function chosenCount(axis: Axis, sampled: readonly { index: number; value: number }[], objectiveAt: (index: number) => number): number {
+function chosenCount(axis: Axis, sampled: readonly { index: number; value: number }[], bestSample: number, objectiveAt: (index: number) => number): number {
   const designed = new Set(sampled.map((s) => s.index));
   const value = (index: number) => {
     designed.add(index);
     return objectiveAt(index);
   };
-  let best = sampled.reduce((a, b) => (b.value < a.value ? b : a)).index;
+  let best = bestSample;
   for (;;) {
     const next = [best - 1, best + 1].filter((i) => i >= 0 && i < axis.values.length).sort((a, b) => value(a) - value(b))[0];
     if (next === undefined || !(value(next) < value(best) * (1 - PROPORTION_TIE_FRACTION))) break;
@@ -152,8 +151,9 @@ export function refineInFull(
     const feasible = sampled.filter((s) => Number.isFinite(s.value)).sort((a, b) => a.value - b.value);
     if (feasible.length === 0) continue;
     const objectiveAt = (index: number) => at(moved(index).options, moved(index).riseM).objective;
-    const chosen = moved("neighbours" in refined ? chosenCount(axis, sampled, objectiveAt) : chosenOnTrend(refined, axis, sampled, objectiveAt));
-    current = Number.isFinite(at(chosen.options, chosen.riseM).objective) ? chosen : moved(feasible[0]?.index as number);
+    const best = feasible[0]!.index;
+    const chosen = moved("neighbours" in refined ? chosenCount(axis, sampled, best, objectiveAt) : chosenOnTrend(refined, axis, sampled, best, objectiveAt));
+    current = Number.isFinite(at(chosen.options, chosen.riseM).objective) ? chosen : moved(best);
     refinements.push({ key, value: key === RISE_KEY ? current.riseM : (current.options[key] as number), samples: sampled.map((s) => ({ value: axis.values[s.index] as number, objective: s.value })) });
   }
   const full = at(current.options, current.riseM);
