@@ -445,13 +445,13 @@ export function analyseNet(input: NetAnalysisInput, onRound?: (round: NetSearchR
   let rounds: NetRound[] = [];
   const netAt = netFormFinding(input);
   let alpha: number | null = onGrid(Math.min(input.maxPrestressN, Math.max((learned?.multiple ?? START_OF_SEED) * input.seedPrestressN, PRESTRESS_FLOOR_OF_LOAD * heaviestPerLine)), [], input.maxPrestressN);
-  /** Rounds solved from the unloaded state (the search's first): the answers every path to their prestress gives, to the last digit. */
-  const fromRest = new Set<NetRound>();
+  /** The search's first round, solved from the unloaded state: the answers every path to its prestress gives, to the last digit. */
+  let fromRest: NetRound | undefined;
   for (let verification = 0, total = 0; ; verification++) {
     for (; alpha !== null && total < MAX_ROUNDS; total++) {
       const net = netAt(alpha);
       const round = seen(judge(input, alpha, net, solveNet(input, net, searched, alpha, rounds)));
-      if (rounds.length === 0) fromRest.add(round);
+      fromRest ??= round;
       rounds.push(round);
       alpha = onGrid(nextAlpha(rounds, input.maxPrestressN), rounds, input.maxPrestressN);
     }
@@ -460,7 +460,7 @@ export function analyseNet(input: NetAnalysisInput, onRound?: (round: NetSearchR
     // the search ran the governing few; the prestress found must hold under every combination (less the uniform ones the heaviest uniform one bounds),
     // each solved from the unloaded state: a round started from earlier rounds' answers converges to the same equilibrium but not the same last digits,
     // and the design must not depend on the way the search came (the page, the span study and the command line give the same figures)
-    const own = fromRest.has(hi) ? hi.solved : [];
+    const own = fromRest === hi ? hi.solved : [];
     const rest = solveNet(input, hi.net, checked.filter((c) => !own.some((x) => x.c === c)));
     const all = seen(judge(input, hi.alpha, hi.net, checked.map((c) => own.find((x) => x.c === c) ?? rest.find((x) => x.c === c)!)));
     if (all.pass) learnStart(input, all.alpha, searched.map((c) => c.name));
