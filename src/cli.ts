@@ -301,13 +301,26 @@ export function jsonResult(result: SchemeResult) {
     rise_m: result.brief?.riseM ?? null,
     rise_source: p?.riseSource ?? null,
     proportions: p ? p.proportions : {},
-    runner_up: p?.runnerUp ? { proportions: p.runnerUp.proportions, difference_pct: round(p.runnerUp.differencePct) } : null,
+    runner_up: runnerUpJson(p),
     structure_t: f.massByGroupKg.structure / 1000,
     perimeter_t: f.massByGroupKg.perimeter / 1000,
     substructure_t: f.massByGroupKg.substructure / 1000,
     envelope_t: f.massByGroupKg.envelope / 1000,
     ...(result.design.analysis ? { analysis: analysisJson(result) } : {}),
   };
+}
+
+/**
+ * The best other proportions and how much worse (negative: lower), % of the chosen design's objective:
+ * among the full designs where proportions were chosen again on them (`designs: "full"`), else among
+ * the search's candidates (`"screening"` where they were designed by the fast first estimate).
+ */
+function runnerUpJson(p: SchemeResult["proportions"]) {
+  const full = p?.full;
+  const refined = full !== undefined && full.refined.length > 0;
+  const r = refined ? full.runnerUp : p?.runnerUp;
+  if (!r) return null;
+  return { proportions: r.proportions, difference_pct: round(r.differencePct), designs: refined || full === undefined ? "full" : "screening" };
 }
 
 /** Which rise each scheme was designed with, and for what objective its proportions were chosen. */

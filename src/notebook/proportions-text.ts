@@ -1,6 +1,6 @@
 // The proportions the search chose for a scheme, in words (issue 12 item 4: "the page shows the
 // chosen proportions and how much the runner-up differs"). Pure text: no DOM.
-import { PROPORTION_TIE_FRACTION, RISE_KEY, usesRise, type ProportionChoice } from "../pipeline";
+import { PROPORTION_TIE_FRACTION, RISE_KEY, usesRise, type ProportionChoice, type RunnerUp } from "../pipeline";
 import type { OptionValue, SchemeDeclaration } from "../schemes/types";
 import { fmt } from "./format";
 
@@ -17,7 +17,7 @@ export function proportionText(model: SchemeDeclaration, key: string, value: Opt
 }
 
 /** The proportions that differ between two sets, as words (the runner-up against the chosen). */
-function differences(model: SchemeDeclaration, chosen: ProportionChoice, other: NonNullable<ProportionChoice["runnerUp"]>): string[] {
+function differences(model: SchemeDeclaration, chosen: Pick<RunnerUp, "proportions" | "riseM">, other: Pick<RunnerUp, "proportions" | "riseM">): string[] {
   const out = Object.keys(other.proportions)
     .filter((k) => k !== RISE_KEY && other.proportions[k] !== chosen.proportions[k])
     .map((k) => proportionText(model, k, other.proportions[k]));
@@ -41,10 +41,20 @@ export function proportionsSentences(model: SchemeDeclaration, choice: Proportio
     const chosen = searched.map((k) => proportionText(model, k, choice.proportions[k]));
     out.push(`Proportions chosen for ${GOAL[choice.objective]} per m² of usable floor (${choice.evaluations} designs tried): ${[...chosen, ...riseWord].join("; ")}.`);
   }
-  if (choice.full && Number.isFinite(choice.value)) out.push(fullSentence(model, choice.full));
+  const { full } = choice;
+  if (full && Number.isFinite(choice.value)) {
+    out.push(fullSentence(model, full));
+    if (full.refined.length > 0) out.push(`Of those designs: ${lowerFirst(runnerUpSentence(model, choice, full.runnerUp))}`);
+  }
   if (choice.pinned.length > 0) out.push(`Pinned by you: ${choice.pinned.map((k) => proportionText(model, k, choice.proportions[k])).join("; ")}.`);
   if (choice.searched.length > 0 && Number.isFinite(choice.value)) {
-    out.push(choice.full ? `On the first estimate: ${lowerFirst(runnerUpSentence(model, choice))}` : runnerUpSentence(model, choice));
+    if (!full) out.push(runnerUpSentence(model, choice, choice.runnerUp));
+    else {
+      // the first estimate's runner-up is against what the first estimate chose, which the full designs may have moved
+      const moved = differences(model, choice, full.first);
+      const first = moved.length === 0 ? "On the first estimate" : `On the first estimate, which chose ${moved.join("; ")}`;
+      out.push(`${first}: ${lowerFirst(runnerUpSentence(model, full.first, choice.runnerUp))}`);
+    }
   }
   return out;
 }
@@ -58,12 +68,15 @@ function fullSentence(model: SchemeDeclaration, full: NonNullable<ProportionChoi
   return `The candidates were compared with ${words(full.screening)} (the fast first estimate); the chosen ones are designed with ${words(full.options)}${again}.`;
 }
 
-/** The runner-up: higher; as good; or lower, where the chosen proportions are within the search's band of it and nearer the reference. */
-function runnerUpSentence(model: SchemeDeclaration, choice: ProportionChoice): string {
-  const r = choice.runnerUp;
+/**
+ * The runner-up against the chosen proportions: higher; as good; or lower, where the chosen ones are
+ * nearer the reference within the band. The band is measured from the least the search's descent or
+ * trend reached, which need not be the least of all it tried: a lower one may be more than the band lower.
+ */
+function runnerUpSentence(model: SchemeDeclaration, chosen: Pick<RunnerUp, "proportions" | "riseM">, r: RunnerUp | null): string {
   if (r === null || !Number.isFinite(r.value)) return "No other proportions tried were feasible.";
-  const which = differences(model, choice, r).join("; ") || "same proportions";
-  if (r.differencePct <= -0.05) return `The least found (${which}) is ${fmt.one(-r.differencePct)} % lower: within ${Math.round(1000 * PROPORTION_TIE_FRACTION) / 10} % of it the proportions nearest their reference are kept, so that they do not wander from span to span.`;
+  const which = differences(model, chosen, r).join("; ") || "same proportions";
+  if (r.differencePct <= -0.05) return `The least found (${which}) is ${fmt.one(-r.differencePct)} % lower: the search keeps the proportions nearest their reference among those within ${Math.round(1000 * PROPORTION_TIE_FRACTION) / 10} % of the best it settles on (a local least, or the least of a trend through samples, not always the lowest design tried), so that they do not wander from span to span.`;
   if (r.differencePct < 0.05) return `The runner-up (${which}) is as good (within 0.05 %): the choice between them does not matter here.`;
   return `The runner-up (${which}) is ${fmt.one(r.differencePct)} % higher.`;
 }

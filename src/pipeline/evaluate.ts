@@ -138,11 +138,20 @@ export function designAtBestProportions(
   }
   const { options: chosenOptions, riseM: chosenRiseM, choice } = screenedBefore ?? screenedChoiceOf(search());
   const start = { options: { ...chosenOptions, ...pick(options, Object.keys(model.screeningOptions ?? {})) }, riseM: chosenRiseM };
-  const { full, refinements, evaluations } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, designAt, assess);
-  const refined = Object.fromEntries(refinements.map((r) => [r.key, r.value]));
+  const { full, runnerUp, refinements, evaluations } = refineInFull(model, start, { rise, spanM: brief.spanM, pinned }, designAt, assess);
+  const keys = refinements.map((r) => r.key);
+  const refinedIn = (d: { options: SchemeOptions; riseM: number }) => Object.fromEntries(keys.map((k) => [k, k === RISE_KEY ? d.riseM : (d.options[k] as OptionValue)]));
+  const proportions = { ...choice.proportions, ...refinedIn(full) };
   const differing = Object.keys(model.screeningOptions ?? {}).filter((k) => screening[k] !== options[k]);
-  const fullChoice = { screening: pick(screening, differing), options: pick(options, differing), refined: refinements.map((r) => r.key), evaluations };
-  return { design: full.design, brief: { ...brief, riseM: full.riseM }, proportions: { ...choice, proportions: { ...choice.proportions, ...refined }, riseM: full.riseM, value: full.objective, full: fullChoice } };
+  const fullChoice = {
+    screening: pick(screening, differing),
+    options: pick(options, differing),
+    refined: keys,
+    evaluations,
+    first: { proportions: choice.proportions, riseM: choice.riseM },
+    runnerUp: runnerUp && Number.isFinite(full.objective) ? { proportions: { ...proportions, ...refinedIn(runnerUp) }, riseM: runnerUp.riseM, value: runnerUp.objective, differencePct: (100 * (runnerUp.objective - full.objective)) / full.objective } : null,
+  };
+  return { design: full.design, brief: { ...brief, riseM: full.riseM }, proportions: { ...choice, proportions, riseM: full.riseM, value: full.objective, full: fullChoice } };
 }
 
 function screenedChoiceOf({ chosen, choice }: ReturnType<typeof searchProportions>): ScreenedChoice {

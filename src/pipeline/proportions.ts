@@ -35,14 +35,23 @@ export interface ProportionChoice {
   /** Designs assessed. */
   evaluations: number;
   /** The best other candidate, and how much worse it is, % of the chosen value. */
-  runnerUp: { proportions: Record<string, OptionValue>; riseM: number; value: number; differencePct: number } | null;
+  runnerUp: RunnerUp | null;
   /**
    * When the candidates were designed with the scheme's screening options (the tension roofs by the
    * closed form) and the chosen proportions then with the full ones: the options that differ, each
-   * way (the runner-up is a screening one), the proportions chosen again on full designs, and how
-   * many full designs that took.
+   * way (`runnerUp` above is a screening one, against the screening choice), the proportions chosen
+   * again on full designs, how many full designs that took, what the screening search chose (`first`)
+   * and the best other full design against the chosen one (null when no other was feasible).
    */
-  full?: { screening: Record<string, OptionValue>; options: Record<string, OptionValue>; refined: string[]; evaluations: number };
+  full?: { screening: Record<string, OptionValue>; options: Record<string, OptionValue>; refined: string[]; evaluations: number; first: { proportions: Record<string, OptionValue>; riseM: number }; runnerUp: RunnerUp | null };
+}
+
+/** Another candidate's proportions, its objective and how much worse it is, % of the chosen value (negative: lower). */
+export interface RunnerUp {
+  proportions: Record<string, OptionValue>;
+  riseM: number;
+  value: number;
+  differencePct: number;
 }
 
 /** Whether the chosen design has a rise: a scheme that uses none (the flat truss) carries no rise among its proportions. */

@@ -121,7 +121,8 @@ function chosenCount(axis: Axis, sampled: readonly { index: number; value: numbe
  * value so chosen is infeasible, the best feasible sample; where no sample is feasible, the
  * proportion stays. With `descend` the choice then steps towards the fitted least (descentEnd) while each step's
  * full design is better by more than the tie band (descended). A count with `neighbours` is designed at its
- * screened value and its neighbours (chosenCount). Returns the final design (designed once, samples reused), what was refined and how many full designs it took.
+ * screened value and its neighbours (chosenCount). Returns the final design (designed once, samples reused), the
+ * least of the other feasible full designs (its runner-up, null when there is none), what was refined and how many full designs it took.
  */
 export function refineInFull(
   model: SchemeModel,
@@ -129,7 +130,7 @@ export function refineInFull(
   setting: { rise: RiseSetting; spanM: number; pinned: readonly string[] },
   design: (options: SchemeOptions, riseM: number) => Design,
   assess: (design: Design) => number,
-): { full: FullDesign; refinements: Refinement[]; evaluations: number } {
+): { full: FullDesign; runnerUp: FullDesign | null; refinements: Refinement[]; evaluations: number } {
   const designed = new Map<string, FullDesign>();
   const at = (options: SchemeOptions, riseM: number): FullDesign => {
     const key = JSON.stringify([options, riseM]);
@@ -157,5 +158,7 @@ export function refineInFull(
     refinements.push({ key, value: key === RISE_KEY ? current.riseM : (current.options[key] as number), samples: sampled.map((s) => ({ value: axis.values[s.index] as number, objective: s.value })) });
   }
   const full = at(current.options, current.riseM);
-  return { full, refinements, evaluations: designed.size };
+  const others = [...designed.values()].filter((d) => d !== full && Number.isFinite(d.objective));
+  const runnerUp = others.reduce<FullDesign | null>((a, b) => (a === null || b.objective < a.objective ? b : a), null);
+  return { full, runnerUp, refinements, evaluations: designed.size };
 }

@@ -60,6 +60,10 @@ describe("the equal-footing keys (issue 12, issue 13 command-line sections)", ()
       expect(["feasible", "out-of-range", "infeasible"]).toContain(s.status);
       expect(typeof s.governing_load_case).toBe("string");
       expect(typeof s.proportions).toBe("object");
+      // the runner-up is on the chosen design's own footing: the tension roofs' proportions are chosen again on 3D designs
+      const runnerUp = s.runner_up as { proportions: Record<string, unknown>; difference_pct: number; designs: string } | null;
+      if (runnerUp) expect(runnerUp.designs).toBe("full");
+      if (runnerUp && (s.id === "cable-net" || s.id === "cable-dome")) expect(Object.keys(runnerUp.proportions).sort()).toEqual(Object.keys(s.proportions as object).sort());
       const groups = ["structure_t", "perimeter_t", "substructure_t", "envelope_t"].map((k) => s[k] as number);
       expect(groups.reduce((a, b) => a + b, 0)).toBeCloseTo(s.total_mass_t as number, 6);
       if (s.status === "infeasible") continue;

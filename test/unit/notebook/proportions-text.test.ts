@@ -53,18 +53,37 @@ describe("proportions in words", () => {
   it("says when the least found is lower and the proportions nearer their reference were kept within the band", () => {
     const lower = { ...choice, runnerUp: { ...choice.runnerUp!, value: 118.2, differencePct: -1.5 } };
     const text = proportionsSentences(model, lower).join(" ");
-    expect(text).toContain("The least found (Target strut length 7 m) is 1.5 % lower: within 2 % of it the proportions nearest their reference are kept");
+    expect(text).toContain("The least found (Target strut length 7 m) is 1.5 % lower: the search keeps the proportions nearest their reference among those within 2 % of the best it settles on");
     expect(text).not.toContain("as good");
   });
 
   it("says when the candidates were compared on the fast first estimate and the chosen ones designed in full, with what was chosen again", () => {
     const dome = cableDome as unknown as SchemeModel;
-    const full = { ...choice, searched: ["postHeightRatio", "riseM"], pinned: [], proportions: { postHeightRatio: 0.35, riseM: 12.8 }, riseM: 12.8, full: { screening: { analysis: "closed-form" }, options: { analysis: "3d" }, refined: ["riseM", "postHeightRatio"], evaluations: 8 } };
+    // the first estimate chose 0.53 (its runner-up, 0.45, 1 % lower); the full designs moved it to 0.35, 0.4 being 3 % higher
+    const first = { proportions: { postHeightRatio: 0.53, riseM: 12.8 }, riseM: 12.8 };
+    const full = {
+      ...choice,
+      searched: ["postHeightRatio", "riseM"],
+      pinned: [],
+      proportions: { postHeightRatio: 0.35, riseM: 12.8 },
+      riseM: 12.8,
+      runnerUp: { proportions: { postHeightRatio: 0.45, riseM: 12.8 }, riseM: 12.8, value: 118.8, differencePct: -1 },
+      full: { screening: { analysis: "closed-form" }, options: { analysis: "3d" }, refined: ["riseM", "postHeightRatio"], evaluations: 8, first, runnerUp: { proportions: { postHeightRatio: 0.4, riseM: 12.8 }, riseM: 12.8, value: 123.6, differencePct: 3 } },
+    };
     const text = proportionsSentences(dome, full).join(" ");
     expect(text).toContain("The candidates were compared with Analysis: Closed form only (the fast first estimate); the chosen ones are designed with Analysis: 3D nonlinear (sizes from the analysed forces), where the rise and Diagonal rise per bay");
     expect(text).toContain("were chosen again on 8 such designs");
-    expect(text).toContain("On the first estimate: the runner-up");
+    const post = "Diagonal rise per bay (post depth; feet kept above the clear height)";
+    expect(text).toContain(`Of those designs: the runner-up (${post} 0.4) is 3.0 % higher.`);
+    // the first estimate's runner-up is named against what the first estimate chose, not against the final choice
+    expect(text).toContain(`On the first estimate, which chose ${post} 0.53: the least found (${post} 0.45) is 1.0 % lower`);
+    // where the full designs kept the first estimate's choice, it is not repeated; where none of the others was feasible, that is said
+    const kept = proportionsSentences(dome, { ...full, proportions: first.proportions, full: { ...full.full, runnerUp: null } }).join(" ");
+    expect(kept).toContain(`On the first estimate: the least found (${post} 0.45)`);
+    expect(kept).toContain("Of those designs: no other proportions tried were feasible.");
     // without refinements only the two analyses are named
-    expect(proportionsSentences(dome, { ...full, full: { ...full.full, refined: [] } }).join(" ")).toContain("designed with Analysis: 3D nonlinear (sizes from the analysed forces).");
+    const unrefined = proportionsSentences(dome, { ...full, full: { ...full.full, refined: [] } }).join(" ");
+    expect(unrefined).toContain("designed with Analysis: 3D nonlinear (sizes from the analysed forces).");
+    expect(unrefined).not.toContain("Of those designs");
   });
 });

@@ -77,6 +77,17 @@ describe("refineInFull: proportions chosen again on the full designs, on the tre
     expect(none.refinements).toEqual([]);
     expect(none.full.options.depth).toBe(0.5);
     expect(none.full.objective).toBe(Number.POSITIVE_INFINITY);
+    expect(none.runnerUp).toBeNull();
+  });
+
+  it("reports as runner-up the least of the other feasible full designs, lower than the choice where the band kept a value nearer the reference", () => {
+    const refine = model([{ key: "depth", samples: [0.2, 0.4, 0.6], reference: 0.6 }]);
+    const bowl = (x: number) => 10 + 10 * (x - 0.4) ** 2; // within 2 % of the least (10.2) up to 0.54: the choice, nearest 0.6
+    const r = refineInFull(refine, { options: { depth: 0.5 }, riseM: 10 }, at, (o, riseM) => designed(o, riseM, bowl(o.depth as number)), (d) => d.totalMassKg);
+    expect(r.full.options.depth).toBeCloseTo(0.54, 9);
+    expect(r.runnerUp?.options.depth).toBe(0.4); // the least sample (0.2 and 0.6: 10.4)
+    expect(r.runnerUp?.objective).toBe(10);
+    expect(r.runnerUp!.objective).toBeLessThan(r.full.objective);
   });
 });
 
