@@ -34,7 +34,17 @@ staticCell(
   ]),
 );
 
-const state = spanStudyRunner(store.study, range);
+const METRICS: { metric: SpanMetric; title: string; y: string; file: string }[] = [
+  { metric: "carbonKgCO2ePerM2Floor", title: "Embodied carbon per m² of usable floor against span", y: "Embodied carbon (kgCO2e/m² of usable floor)", file: "span-carbon" },
+  { metric: "costPerM2Floor", title: "Cost per m² of usable floor against span", y: "Cost per m² of usable floor", file: "span-cost" },
+  { metric: "selfWeightKgPerM2", title: "Self-weight per m² of plan against span", y: "Self-weight (kg/m² of plan)", file: "span-self-weight" },
+  { metric: "massToAir", title: "Structure mass ÷ mass of the enclosed air against span", y: "Structure mass ÷ enclosed air mass (–)", file: "span-mass-to-air" },
+];
+
+// The charts are drawn one per frame (chartTurns); the study's second pass waits until they are (`drawn`).
+const validityTurns = chartTurns(1);
+const charts = chartTurns(METRICS.length);
+const state = spanStudyRunner(store.study, range, { drawn: () => Promise.all([validityTurns.idle(), charts.idle()]).then(() => undefined) });
 const points = computed(() => (state.value.status === "failed" ? null : state.value.points));
 const labelOf = (id: string) => SCHEME_DECLARATIONS.find((m) => m.id === id)?.label ?? id;
 const studySpanM = computed(() => store.study.value.brief.spanM);
@@ -67,27 +77,19 @@ reactiveCell(main, { id: "status" }, () => {
   return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (${workers}${passes}).${kept}`;
 });
 
-reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {
+const validityCell = reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {
   const list = points.value;
   if (!list) return null;
   const ranges = SCHEME_DECLARATIONS.filter((m) => list.some((p) => p.id === m.id)).map((m) => ({ id: m.id, label: m.label, min: m.validSpanM.min, max: m.validSpanM.max }));
-  return chartFigure(
-    spanValidityChart(list, ranges, { title: "Valid span range of each method (shaded) and spans where the scheme is infeasible (×)", caption: chartCaption(store.study.value, "hover a cross for the reason"), studySpanM: studySpanM.value }),
-    "span-validity",
-  );
+  const options = { title: "Valid span range of each method (shaded) and spans where the scheme is infeasible (×)", caption: chartCaption(store.study.value, "hover a cross for the reason"), studySpanM: studySpanM.value };
+  validityTurns.draw([() => chartFigure(spanValidityChart(list, ranges, options), "span-validity")], () => validityCell.element);
+  return validityTurns.grid;
 });
 
-const METRICS: { metric: SpanMetric; title: string; y: string; file: string }[] = [
-  { metric: "carbonKgCO2ePerM2Floor", title: "Embodied carbon per m² of usable floor against span", y: "Embodied carbon (kgCO2e/m² of usable floor)", file: "span-carbon" },
-  { metric: "costPerM2Floor", title: "Cost per m² of usable floor against span", y: "Cost per m² of usable floor", file: "span-cost" },
-  { metric: "selfWeightKgPerM2", title: "Self-weight per m² of plan against span", y: "Self-weight (kg/m² of plan)", file: "span-self-weight" },
-  { metric: "massToAir", title: "Structure mass ÷ mass of the enclosed air against span", y: "Structure mass ÷ enclosed air mass (–)", file: "span-mass-to-air" },
-];
 
 // The four charts are drawn one per frame into their own slots (the previous drawing stays until
 // its successor is ready): drawn together they made one task of ~180 ms when the study finished
 // (issue 13: the main thread never blocked over 50 ms). `data-drawn` counts finished sets.
-const charts = chartTurns(METRICS.length);
 const chartCell = reactiveCell(main, { id: "span-charts", title: "Across the span range" }, () => {
   const list = points.value;
   if (!list) return null;

@@ -13,6 +13,8 @@ export interface ChartTurns {
    * `data-drawn` on `counter()` (the cell) goes up by one, so tests and benches see a finished set.
    */
   draw(charts: readonly (() => HTMLElement)[], counter: () => HTMLElement): void;
+  /** Resolves once no set is being drawn (at once when none is): the span study holds its heavy pass until then. */
+  idle(): Promise<void>;
 }
 
 export function chartTurns(count: number): ChartTurns {
@@ -20,9 +22,15 @@ export function chartTurns(count: number): ChartTurns {
   const grid = document.createElement("div");
   grid.className = "grid charts";
   const slots = Array.from({ length: count }, () => grid.appendChild(document.createElement("div")));
+  let drawing = false;
+  let waiting: (() => void)[] = [];
   return {
     grid,
+    idle() {
+      return drawing ? new Promise((resolve) => waiting.push(resolve)) : Promise.resolve();
+    },
     draw(charts, counter) {
+      drawing = true;
       const jobs = charts.map((chart, k) => () => {
         let figure: HTMLElement;
         try {
@@ -32,9 +40,14 @@ export function chartTurns(count: number): ChartTurns {
         }
         slots[k]?.replaceChildren(figure);
       });
+      // a newer set drops this one's remaining jobs, and only the newest set's end is waited for
       inTurns(turns, jobs, () => {
         const cell = counter();
         cell.dataset.drawn = String(Number(cell.dataset.drawn ?? 0) + 1);
+        drawing = false;
+        const resolve = waiting;
+        waiting = [];
+        resolve.forEach((r) => r());
       });
     },
   };

@@ -63,24 +63,45 @@ export function settled<T>(source: ReadonlySignal<T>, quietMs = SETTLE_MS, still
   } });
 }
 
+/** Every page's turns in one line, one job a frame: two sets started together (two cells' charts) take turns rather than share frames. A job returns false when it is stale (its set was overtaken) and takes no frame. */
+const line: (() => boolean)[] = [];
+let pumping = false;
+
+function pump(): void {
+  try {
+    for (let task = line.shift(); task !== undefined; task = line.shift()) if (task()) break;
+  } finally {
+    // a job that throws still leaves the line moving
+    if (line.length > 0) nextFrame(pump);
+    else pumping = false;
+  }
+}
+
 /**
- * Runs `jobs` one per frame, in order. Calling the returned `cancel` (or starting a newer run on
- * the same `turns` object) drops the jobs not yet run; `done` runs after the last job.
+ * Runs `jobs` one per frame, in order, in turn with any other set running (of this page's: one
+ * line for all). Starting a newer run on the same `turns` object drops the jobs not yet run; `done`
+ * runs after the last job.
  */
 export function inTurns(turns: { generation: number }, jobs: readonly (() => void)[], done?: () => void): void {
   turns.generation += 1;
   const mine = turns.generation;
-  const step = (k: number) => {
-    if (turns.generation !== mine) return;
-    const job = jobs[k];
-    if (job === undefined) {
-      done?.();
-      return;
-    }
-    job();
-    nextFrame(() => step(k + 1));
-  };
-  nextFrame(() => step(0));
+  const live = () => turns.generation === mine;
+  jobs.forEach((job, k) =>
+    line.push(() => {
+      if (!live()) return false;
+      job();
+      if (k === jobs.length - 1) done?.();
+      return true;
+    }),
+  );
+  if (jobs.length === 0) line.push(() => {
+    if (live()) done?.();
+    return false;
+  });
+  if (!pumping) {
+    pumping = true;
+    nextFrame(pump);
+  }
 }
 
 /** Work put off until the hand stops, that can also be done at once (see `whenQuiet`). */

@@ -88,6 +88,20 @@ describe("inTurns", () => {
     vi.runAllTimers();
     expect(seen).toEqual(["old1", "new1", "new2", "new done"]);
   });
+
+  it("two sets started together take turns, one job a turn, and a job that throws does not stop the line", () => {
+    vi.useFakeTimers();
+    const seen: string[] = [];
+    inTurns({ generation: 0 }, [() => seen.push("validity")], () => seen.push("validity done"));
+    inTurns({ generation: 0 }, [() => seen.push("carbon"), () => { throw new Error("a chart failed"); }, () => seen.push("mass")], () => seen.push("charts done"));
+    vi.advanceTimersToNextTimer();
+    expect(seen).toEqual(["validity", "validity done"]);
+    vi.advanceTimersToNextTimer();
+    expect(seen).toEqual(["validity", "validity done", "carbon"]);
+    expect(() => vi.advanceTimersToNextTimer()).toThrow("a chart failed");
+    vi.runAllTimers();
+    expect(seen).toEqual(["validity", "validity done", "carbon", "mass", "charts done"]);
+  });
 });
 
 describe("whenQuiet", () => {
