@@ -86,7 +86,6 @@ const validityCell = reactiveCell(main, { id: "validity", title: "Where each sch
   return validityTurns.grid;
 });
 
-
 // The four charts are drawn one per frame into their own slots (the previous drawing stays until
 // its successor is ready): drawn together they made one task of ~180 ms when the study finished
 // (issue 13: the main thread never blocked over 50 ms). `data-drawn` counts finished sets.

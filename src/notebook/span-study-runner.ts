@@ -74,7 +74,7 @@ export interface SpanRunnerOptions {
   /**
    * Resolves once the page has drawn the points it was last given: the second pass starts only then,
    * so the first pass's charts are drawn while the workers are idle (on two cores, drawn beside two
-   * busy workers, each chart's frame took 55–96 ms; measured, demo study).
+   * busy workers, four or five of the charts' frames took 57–118 ms; measured, demo study).
    */
   drawn?: () => Promise<void>;
 }
