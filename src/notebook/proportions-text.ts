@@ -42,9 +42,14 @@ export function proportionsSentences(model: SchemeDeclaration, choice: Proportio
     out.push(`Proportions chosen for ${GOAL[choice.objective]} per m² of usable floor (${choice.evaluations} designs tried): ${[...chosen, ...riseWord].join("; ")}.`);
   }
   const { full } = choice;
+  // the band is explained once: where the 3D designs' runner-up is lower too, the first estimate's sentence refers to it
+  let explained = false;
   if (full && Number.isFinite(choice.value)) {
     out.push(fullSentence(model, full));
-    if (full.refined.length > 0) out.push(`Of those designs: ${lowerFirst(runnerUpSentence(model, choice, full.runnerUp))}`);
+    if (full.refined.length > 0) {
+      out.push(`Of those designs: ${lowerFirst(runnerUpSentence(model, choice, full.runnerUp))}`);
+      explained = full.runnerUp !== null && full.runnerUp.differencePct <= -0.05;
+    }
   }
   if (choice.pinned.length > 0) out.push(`Pinned by you: ${choice.pinned.map((k) => proportionText(model, k, choice.proportions[k])).join("; ")}.`);
   if (choice.searched.length > 0 && Number.isFinite(choice.value)) {
@@ -53,7 +58,7 @@ export function proportionsSentences(model: SchemeDeclaration, choice: Proportio
       // the first estimate's runner-up is against what the first estimate chose, which the full designs may have moved
       const moved = differences(model, choice, full.first);
       const first = moved.length === 0 ? "On the first estimate" : `On the first estimate, which chose ${moved.join("; ")}`;
-      out.push(`${first}: ${lowerFirst(runnerUpSentence(model, full.first, choice.runnerUp))}`);
+      out.push(`${first}: ${lowerFirst(runnerUpSentence(model, full.first, choice.runnerUp, explained))}`);
     }
   }
   return out;
@@ -73,9 +78,10 @@ function fullSentence(model: SchemeDeclaration, full: NonNullable<ProportionChoi
  * nearer the reference within the band. The band is measured from the least the search's descent or
  * trend reached, which need not be the least of all it tried: a lower one may be more than the band lower.
  */
-function runnerUpSentence(model: SchemeDeclaration, chosen: Pick<RunnerUp, "proportions" | "riseM">, r: RunnerUp | null): string {
+function runnerUpSentence(model: SchemeDeclaration, chosen: Pick<RunnerUp, "proportions" | "riseM">, r: RunnerUp | null, explained = false): string {
   if (r === null || !Number.isFinite(r.value)) return "No other proportions tried were feasible.";
   const which = differences(model, chosen, r).join("; ") || "same proportions";
+  if (r.differencePct <= -0.05 && explained) return `The least found (${which}) is ${fmt.one(-r.differencePct)} % lower (the same rule as above).`;
   if (r.differencePct <= -0.05) return `The least found (${which}) is ${fmt.one(-r.differencePct)} % lower: the search keeps the proportions nearest their reference among those within ${Math.round(1000 * PROPORTION_TIE_FRACTION) / 10} % of the best it settles on (a local least, or the least of a trend through samples, not always the lowest design tried), so that they do not wander from span to span.`;
   if (r.differencePct < 0.05) return `The runner-up (${which}) is as good (within 0.05 %): the choice between them does not matter here.`;
   return `The runner-up (${which}) is ${fmt.one(r.differencePct)} % higher.`;

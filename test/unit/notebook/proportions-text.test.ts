@@ -81,6 +81,11 @@ describe("proportions in words", () => {
     const kept = proportionsSentences(dome, { ...full, proportions: first.proportions, full: { ...full.full, runnerUp: null } }).join(" ");
     expect(kept).toContain(`On the first estimate: the least found (${post} 0.45)`);
     expect(kept).toContain("Of those designs: no other proportions tried were feasible.");
+    // where both runner-ups are lower, the band is explained once
+    const both = proportionsSentences(dome, { ...full, full: { ...full.full, runnerUp: { ...full.full.runnerUp, value: 117.6, differencePct: -2 } } }).join(" ");
+    expect(both).toContain(`Of those designs: the least found (${post} 0.4) is 2.0 % lower: the search keeps the proportions nearest their reference`);
+    expect(both).toContain(`the least found (${post} 0.45) is 1.0 % lower (the same rule as above).`);
+    expect(both.match(/the search keeps/g)).toHaveLength(1);
     // without refinements only the two analyses are named
     const unrefined = proportionsSentences(dome, { ...full, full: { ...full.full, refined: [] } }).join(" ");
     expect(unrefined).toContain("designed with Analysis: 3D nonlinear (sizes from the analysed forces).");
