@@ -1,9 +1,9 @@
 // Span study: every enabled scheme across a range of spans, with the spans where the best one changes.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, numberControl, toggleControl, controlGroup, spanStudyRunner, fmt, chartTurns } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, effect, numberControl, toggleControl, controlGroup, spanStudyRunner, fmt, chartTurns } from "../src/notebook";
 import { spanMetricChart, spanValidityChart, chartCaption, type SpanMetric } from "../src/charts";
-import { describeCrossovers, valuesBySpan, type SpanRange, type SpanPoint } from "../src/comparison";
+import { describeCrossovers, valuesBySpan, spansOf, type SpanRange, type SpanPoint } from "../src/comparison";
 import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
 
 const { store, main } = startPage({
@@ -13,7 +13,36 @@ const { store, main } = startPage({
     "Each enabled scheme redesigned at every span of the range at its best proportions, as on the compare page: its own rise within the height limit, or, when the study sets one common rise, that rise kept in proportion to the span. Lines are solid where a scheme is feasible and inside its method's valid span range, dashed outside it (and left out of the scale unless brought in), broken where it is not feasible. Carbon and cost are per m² of usable floor; self-weight per m² of plan.",
 });
 
-const range = signal<SpanRange>({ fromM: 40, toM: 400, stepM: 10 });
+// The range and the spans computed are kept for the tab's session (a reload, or a visit to another
+// page and back, finds them as they were); a stored range that is not a valid one is not used.
+const RANGE_KEY = "spanbook.span-range";
+const session = (() => {
+  try {
+    return window.sessionStorage;
+  } catch {
+    return undefined; // storage off: nothing is kept between loads
+  }
+})();
+const range = signal<SpanRange>(storedRange() ?? { fromM: 40, toM: 400, stepM: 10 });
+effect(() => {
+  try {
+    session?.setItem(RANGE_KEY, JSON.stringify(range.value));
+  } catch {
+    // a store that refuses only loses the range on the next load
+  }
+});
+
+function storedRange(): SpanRange | null {
+  try {
+    const r = JSON.parse(session?.getItem(RANGE_KEY) ?? "null") as Partial<SpanRange> | null;
+    if (!r || typeof r.fromM !== "number" || typeof r.toM !== "number" || typeof r.stepM !== "number") return null;
+    const kept = { fromM: r.fromM, toM: r.toM, stepM: r.stepM };
+    spansOf(kept);
+    return kept;
+  } catch {
+    return null;
+  }
+}
 const part = (key: keyof SpanRange) => ({
   value: computed(() => range.value[key]),
   set: (x: number) => {
@@ -44,7 +73,7 @@ const METRICS: { metric: SpanMetric; title: string; y: string; file: string }[] 
 // The charts are drawn one per frame (chartTurns); the study's second pass waits until they are (`drawn`).
 const validityTurns = chartTurns(1);
 const charts = chartTurns(METRICS.length);
-const state = spanStudyRunner(store.study, range, { drawn: () => Promise.all([validityTurns.idle(), charts.idle()]).then(() => undefined) });
+const state = spanStudyRunner(store.study, range, { drawn: () => Promise.all([validityTurns.idle(), charts.idle()]).then(() => undefined), ...(session ? { store: session } : {}) });
 const points = computed(() => (state.value.status === "failed" ? null : state.value.points));
 const labelOf = (id: string) => SCHEME_DECLARATIONS.find((m) => m.id === id)?.label ?? id;
 const studySpanM = computed(() => store.study.value.brief.spanM);

@@ -34,3 +34,14 @@ export function memoOnObject<O extends object, R>(fn: (o: O) => R): (o: O) => R 
     return value;
   };
 }
+
+/**
+ * JSON of plain data with every object's keys in sorted order (arrays keep theirs): the same text for
+ * the same content however it was built, for keys of memories that outlive the page (a study read
+ * back from storage or a link may list its fields in another order).
+ */
+export function canonicalJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) =>
+    v !== null && typeof v === "object" && !Array.isArray(v) ? Object.fromEntries(Object.entries(v as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) : v,
+  );
+}

@@ -4,6 +4,7 @@ import { spansOf, type SpanPoint, type SpanRange } from "../comparison/span-stud
 import type { SpanWorkerApi } from "../comparison/span-worker";
 import { workerApi } from "../kernel/worker-call";
 import { messageOf } from "../kernel/errors";
+import { canonicalJson } from "../kernel/memo";
 
 export type SpanStudyState =
   | {
@@ -43,13 +44,17 @@ function replaced(earlier: readonly SpanPoint[], later: readonly SpanPoint[]): S
 }
 
 /**
- * Each pass's points by span, for one study (its JSON): a span's points depend only on the study and
+ * Each pass's points by span, for one study (what its designs read of it): a span's points depend only on the study and
  * the span, so a range that overlaps the last one (narrowed, extended, a finer step through the same
  * spans) designs only its new spans. Any change to the study starts afresh.
  */
 export class SpanMemory {
   private key = "";
   private readonly passes = { screening: new Map<number, SpanPoint[]>(), again: new Map<number, SpanPoint[]>() };
+  /** The study whose points are held. */
+  get study(): string {
+    return this.key;
+  }
   /** Forgets everything unless `key` is the study the points were computed for. */
   keep(key: string): void {
     if (key === this.key) return;
@@ -70,7 +75,19 @@ export class SpanMemory {
 /** The longest the second pass waits for the page's drawing: a hidden tab draws no frames, and the work must go on. */
 const MOST_DRAW_WAIT_MS = 1000;
 
+/** Where the page keeps its span memory between loads (session storage: its own quota, apart from the stored study's): the build and study under this key, each span's points of each pass under it + "/pass/span". */
+export const SPAN_MEMORY_KEY = "spanbook.span-memory";
+
+export type SpanStore = Pick<Storage, "getItem" | "setItem" | "removeItem" | "key" | "length">;
+
 export interface SpanRunnerOptions {
+  /**
+   * Keeps the memory of computed spans here between page loads (the tab's session storage), under
+   * this module's address, which changes with the design code in every build (not on the dev server):
+   * a reload, or a return from another page, shows the spans of the same study at once. A store that
+   * refuses (full, or off) only loses that.
+   */
+  store?: SpanStore;
   /**
    * Resolves once the page has drawn the points it was last given: the second pass starts only then,
    * so the first pass's charts are drawn while the workers are idle (on two cores, drawn beside two
@@ -92,8 +109,14 @@ export interface SpanRunnerOptions {
  */
 export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySignal<SpanRange>, options: SpanRunnerOptions = {}): ReadonlySignal<SpanStudyState> {
   const state = signal<SpanStudyState>({ status: "running", points: null, done: 0, total: 0, pass: "screening", again: [], reused: 0 });
+  // the bundler needs the worker's address written out in place to bundle it (a variable made it a data URL)
   const pool = Array.from({ length: workerCount() }, () => workerApi<SpanWorkerApi>(new Worker(new URL("../comparison/span-worker.ts", import.meta.url), { type: "module" })));
-  const memory = new SpanMemory();
+  // this module's own address: in a build, its file's name carries a hash of its content, which holds the worker's hashed name;
+  // the dev server's names carry none, so there (code edited between reloads) nothing is kept
+  const build = import.meta.url;
+  const store = import.meta.env.DEV ? undefined : options.store;
+  const memory = restoredMemory(store, build);
+  const remember = (pass: "screening" | "again", spans: readonly number[]) => storeSpans(store, build, memory, pass, spans);
   let latest = 0;
   effect(() => {
     const id = ++latest;
@@ -105,7 +128,8 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
       return;
     }
     const current = study.value;
-    const key = JSON.stringify(current);
+    // what the designs read of the study (its title, notes and risk settings change no point), in one order
+    const key = canonicalJson({ brief: current.brief, schemes: current.schemes, carbon: current.carbon, cost: current.cost });
     memory.keep(key);
     const previous = state.peek();
     const started = performance.now();
@@ -127,6 +151,7 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
           // the second pass sends each span's screening points of the schemes it designs again: their searches are not repeated
           const points = await worker.api.run(current, chunk, name, name === "again" ? (shown ?? []).filter((p) => p.screened && chunk.includes(p.spanM)) : []);
           memory.put(key, name, chunk, points);
+          remember(name, chunk);
           parts.push(points);
           done += chunk.length;
           if (id === latest) report();
@@ -150,4 +175,62 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
     });
   });
   return state;
+}
+
+/** The keys of every span's points kept in `store`. */
+function spanKeys(store: SpanStore): string[] {
+  return Array.from({ length: store.length }, (_, i) => store.key(i)).filter((k): k is string => k !== null && k.startsWith(`${SPAN_MEMORY_KEY}/`));
+}
+
+function parsedOrNull(text: string | null): unknown {
+  try {
+    return JSON.parse(text ?? "null");
+  } catch {
+    return null;
+  }
+}
+
+/** The memory kept in `store` for this build, else an empty one (a span whose text is not a list of points is left out). */
+export function restoredMemory(store: SpanStore | undefined, build: string): SpanMemory {
+  const memory = new SpanMemory();
+  try {
+    const head = JSON.parse(store?.getItem(SPAN_MEMORY_KEY) ?? "null") as { build?: unknown; study?: unknown } | null;
+    if (!store || head?.build !== build || typeof head.study !== "string") return memory;
+    memory.keep(head.study);
+    for (const k of spanKeys(store)) {
+      const [pass, span] = k.slice(SPAN_MEMORY_KEY.length + 1).split("/");
+      const points = parsedOrNull(store.getItem(k));
+      if ((pass === "screening" || pass === "again") && Number.isFinite(Number(span)) && Array.isArray(points)) memory.put(head.study, pass, [Number(span)], points as SpanPoint[]);
+    }
+  } catch {
+    return new SpanMemory();
+  }
+  return memory;
+}
+
+/**
+ * Keeps one call's spans of a pass in `store`, each under its own key (a few kB: writing the whole
+ * memory after each call took 35–72 ms of the page's thread late in a span study, measured); a new
+ * study or build first clears what was kept. A store that refuses is cleared rather than left half-written.
+ */
+export function storeSpans(store: SpanStore | undefined, build: string, memory: SpanMemory, pass: "screening" | "again", spans: readonly number[]): void {
+  if (!store) return;
+  const head = JSON.stringify({ build, study: memory.study });
+  try {
+    if (store.getItem(SPAN_MEMORY_KEY) !== head) {
+      for (const k of spanKeys(store)) store.removeItem(k);
+      store.setItem(SPAN_MEMORY_KEY, head);
+    }
+    for (const spanM of spans) {
+      const points = memory.get(pass, spanM);
+      if (points) store.setItem(`${SPAN_MEMORY_KEY}/${pass}/${spanM}`, JSON.stringify(points));
+    }
+  } catch {
+    try {
+      for (const k of spanKeys(store)) store.removeItem(k);
+      store.removeItem(SPAN_MEMORY_KEY);
+    } catch {
+      // the store is off: the memory lasts as long as the page
+    }
+  }
 }

@@ -84,6 +84,12 @@ describe("span study", () => {
     await page.locator("#toM").press("Enter");
     await page.waitForFunction(() => /^8 spans .* computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), undefined, { timeout: 120_000 });
     expect(await page.locator("#cell-status").innerText()).toMatch(/ 7 of the 8 spans kept from an earlier run/);
+    // the range and the spans computed are kept for the tab's session: a reload shows them again without designing
+    await page.reload();
+    await page.waitForFunction(() => /^8 spans .* computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), undefined, { timeout: 60_000 });
+    expect(await page.inputValue("#toM")).toBe("110");
+    expect(await page.locator("#cell-status").innerText()).toMatch(/Every span kept from an earlier run of the same study: only new spans are designed\.$/);
+    await page.waitForSelector("#cell-span-charts svg");
     const legend = await page.locator("#cell-span-charts").first().innerText();
     for (const model of SCHEMES) expect(legend).toContain(model.label);
     // Each scheme has at least one drawn (non-empty) line path in the self-weight chart.
