@@ -1,9 +1,9 @@
 // Span study: every enabled scheme across a range of spans, with the spans where the best one changes.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, effect, numberControl, toggleControl, controlGroup, spanStudyRunner, fmt, chartTurns } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, effect, numberControl, toggleControl, controlGroup, spanStudyRunner, keptRange, keepRange, fmt, chartTurns } from "../src/notebook";
 import { spanMetricChart, spanValidityChart, chartCaption, type SpanMetric } from "../src/charts";
-import { describeCrossovers, valuesBySpan, spansOf, type SpanRange, type SpanPoint } from "../src/comparison";
+import { describeCrossovers, valuesBySpan, type SpanRange, type SpanPoint } from "../src/comparison";
 import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
 
 const { store, main } = startPage({
@@ -14,8 +14,7 @@ const { store, main } = startPage({
 });
 
 // The range and the spans computed are kept for the tab's session (a reload, or a visit to another
-// page and back, finds them as they were); a stored range that is not a valid one is not used.
-const RANGE_KEY = "spanbook.span-range";
+// page and back, finds them as they were).
 const session = (() => {
   try {
     return window.sessionStorage;
@@ -23,26 +22,8 @@ const session = (() => {
     return undefined; // storage off: nothing is kept between loads
   }
 })();
-const range = signal<SpanRange>(storedRange() ?? { fromM: 40, toM: 400, stepM: 10 });
-effect(() => {
-  try {
-    session?.setItem(RANGE_KEY, JSON.stringify(range.value));
-  } catch {
-    // a store that refuses only loses the range on the next load
-  }
-});
-
-function storedRange(): SpanRange | null {
-  try {
-    const r = JSON.parse(session?.getItem(RANGE_KEY) ?? "null") as Partial<SpanRange> | null;
-    if (!r || typeof r.fromM !== "number" || typeof r.toM !== "number" || typeof r.stepM !== "number") return null;
-    const kept = { fromM: r.fromM, toM: r.toM, stepM: r.stepM };
-    spansOf(kept);
-    return kept;
-  } catch {
-    return null;
-  }
-}
+const range = signal<SpanRange>(keptRange(session) ?? { fromM: 40, toM: 400, stepM: 10 });
+effect(() => keepRange(session, range.value));
 const part = (key: keyof SpanRange) => ({
   value: computed(() => range.value[key]),
   set: (x: number) => {

@@ -21,7 +21,7 @@ export { sortableTable, liveSortableTable, type SortColumn, type SortableOptions
 export { resultsTable, liveResultsTable, resultColumns } from "./results-table";
 export { workerStudySignals, type AsyncSchemeSignals, type AsyncStudySignals, type Designer } from "./worker-scheme-signals";
 export { designStateMarks, resultsStudy } from "./design-state";
-export { spanStudyRunner, type SpanStudyState, type SpanRunnerOptions } from "./span-study-runner";
+export { spanStudyRunner, keptRange, keepRange, type SpanStudyState, type SpanRunnerOptions } from "./span-study-runner";
 export { clientExportHtml, escapeHtml, type ClientExportInput } from "./client-export";
 export { tableEditor, type EditorColumn } from "./table-editor";
 export { gapNotice, missingFactorRows, missingRateRows } from "./gap-notice";

@@ -190,11 +190,36 @@ function parsedOrNull(text: string | null): unknown {
   }
 }
 
+/** Where the page keeps its range for the tab's session. */
+const SPAN_RANGE_KEY = "spanbook.span-range";
+
+/** The range kept in `store`, null when there is none or it is not a valid range (spansOf). */
+export function keptRange(store: Pick<Storage, "getItem"> | undefined): SpanRange | null {
+  const r = parsedOrNull(store?.getItem(SPAN_RANGE_KEY) ?? null) as Partial<SpanRange> | null;
+  if (!r || typeof r.fromM !== "number" || typeof r.toM !== "number" || typeof r.stepM !== "number") return null;
+  const range = { fromM: r.fromM, toM: r.toM, stepM: r.stepM };
+  try {
+    spansOf(range);
+    return range;
+  } catch {
+    return null;
+  }
+}
+
+/** Keeps the range in `store`; a store that refuses only loses it on the next load. */
+export function keepRange(store: Pick<Storage, "setItem"> | undefined, range: SpanRange): void {
+  try {
+    store?.setItem(SPAN_RANGE_KEY, JSON.stringify(range));
+  } catch {
+    // nothing kept
+  }
+}
+
 /** The memory kept in `store` for this build, else an empty one (a span whose text is not a list of points is left out). */
 export function restoredMemory(store: SpanStore | undefined, build: string): SpanMemory {
   const memory = new SpanMemory();
   try {
-    const head = JSON.parse(store?.getItem(SPAN_MEMORY_KEY) ?? "null") as { build?: unknown; study?: unknown } | null;
+    const head = parsedOrNull(store?.getItem(SPAN_MEMORY_KEY) ?? null) as { build?: unknown; study?: unknown } | null;
     if (!store || head?.build !== build || typeof head.study !== "string") return memory;
     memory.keep(head.study);
     for (const k of spanKeys(store)) {

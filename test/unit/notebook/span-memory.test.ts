@@ -2,7 +2,7 @@
 // so they are reused for the same study and forgotten on any change to it; points that arrive for a
 // study no longer kept (a call the user's edit overtook) are not recorded.
 import { describe, it, expect } from "vitest";
-import { SpanMemory, restoredMemory, storeSpans } from "../../../src/notebook/span-study-runner";
+import { SpanMemory, restoredMemory, storeSpans, keptRange, keepRange } from "../../../src/notebook/span-study-runner";
 import { canonicalJson } from "../../../src/kernel/memo";
 import type { SpanPoint } from "../../../src/comparison/span-study";
 
@@ -98,6 +98,20 @@ function memoryStore() {
     },
   };
 }
+
+describe("the span range kept for the session", () => {
+  it("gives back a kept range, and none for a missing, unreadable or invalid one", () => {
+    const store = memoryStore();
+    expect(keptRange(store)).toBeNull();
+    keepRange(store, { fromM: 40, toM: 110, stepM: 10 });
+    expect(keptRange(store)).toEqual({ fromM: 40, toM: 110, stepM: 10 });
+    for (const text of ["not json", '{"fromM": 40, "toM": 110}', '{"fromM": 200, "toM": 100, "stepM": 10}', '{"fromM": 40, "toM": 400, "stepM": 0}', '{"fromM": "40", "toM": 400, "stepM": 10}']) {
+      store.setItem("spanbook.span-range", text);
+      expect(keptRange(store)).toBeNull();
+    }
+    expect(keptRange(undefined)).toBeNull();
+  });
+});
 
 describe("canonicalJson", () => {
   it("writes the same text for the same content in any key order, at every depth, arrays in their order", () => {
