@@ -79,6 +79,22 @@ describe("sparse LDLᵀ with a minimum-degree ordering", () => {
     expect(factorSparseLDL(A)).toEqual({ ok: false, equation: 1 });
     expect(() => A.add(2, 0, 1)).toThrow(/outside the matrix's pattern/);
   });
+  it("a node's three rows eliminated together report the row whose pivot vanishes (here the node's second)", () => {
+    // two nodes of three freedoms, fully coupled; row and column 4 are copies of row and column 3,
+    // so the pivot of equation 4 vanishes (to rounding) once row 3 is eliminated
+    const { matrix, count } = numberEquations(2, 3, [[0, 1]], () => false);
+    expect(count).toBe(6);
+    const A = matrix();
+    expect(A.pattern.rowPlan.triple[A.pattern.supernodes.of[3]!]).toBe(1);
+    const M = Array.from({ length: 6 }, (_, i) => Array.from({ length: 6 }, (_, j) => (i === j ? 20 : 1 + ((i + j) % 4))));
+    for (let j = 0; j < 6; j++) M[4]![j] = M[j]![4] = M[3]![j === 4 ? 3 : j]!;
+    for (let j = 0; j < 6; j++) for (let i = 0; i <= j; i++) A.add(i, j, M[i]![j]!);
+    expect(factorSparseLDL(A)).toEqual({ ok: false, equation: 4 });
+    // and with row 4 made independent, the factor solves
+    A.add(4, 4, 1);
+    const f = factorSparseLDL(A);
+    expect(f.ok).toBe(true);
+  });
   it("a released factor's arrays serve the next factorisation of the pattern: its answers are those of a fresh one, the released one refuses to solve", () => {
     const m = 12;
     const edges = grid(m);
