@@ -352,8 +352,8 @@ function onGrid(alphaN: number | null, rounds: readonly Round[], maxN: number): 
 
 /**
  * Where the search starts, learned: the prestress found ÷ the closed form's seed (the multiple) of
- * the latest design of the same kind (masts, mast height ÷ span to 0.01, radial cables per mast,
- * held or free centre, lumping) in this thread, else START_OF_SEED. The multiple follows a kind
+ * the latest design of the same kind (masts, mast height ÷ span and mast ring radius ÷ plan radius
+ * to 0.01, radial cables per mast, held or free centre, lumping) in this thread, else START_OF_SEED. The multiple follows a kind
  * smoothly from span to span (demo study, 170–400 m: 6.0–6.6, 8.1–9.0 and 10.0–10.8 at mast heights
  * 0.13, 0.18 and 0.23 × span; it jumps where the mast count changes, measured), so a span study's
  * next span or a slider's next step starts a grid step or two from its answer. The grid (onGrid)
@@ -366,7 +366,7 @@ const MOST_LEARNED = 256;
 
 function kindOf(input: NetAnalysisInput): string {
   const { layout } = input;
-  return [layout.masts, Math.round((100 * layout.mastHeadM) / (2 * layout.cap.baseRadiusM)), layout.cablesPerSide, input.heldCentre === true, input.hoopsPerCable ?? 0].join("|");
+  return [layout.masts, Math.round((100 * layout.mastHeadM) / (2 * layout.cap.baseRadiusM)), Math.round((100 * layout.mastRadiusM) / layout.cap.baseRadiusM), layout.cablesPerSide, input.heldCentre === true, input.hoopsPerCable ?? 0].join("|");
 }
 
 /** Records where a design's search ended (a passing prestress) and the combinations it searched on (by name), for the next design of its kind. */

@@ -5,6 +5,7 @@ import { fitQuadratic } from "../../../src/pipeline/rise-trend";
 import { infeasibleDesign } from "../../../src/schemes/kit";
 import { DEFAULT_BRIEF } from "../../../src/brief";
 import type { Design, OptionSpec, SchemeModel, SchemeOptions } from "../../../src/schemes/types";
+import { cableNet } from "../../../src/schemes/cable-net";
 
 // The refinement on made-up objectives (no scheme involved): what it samples, what it chooses, what it designs.
 const depth: OptionSpec = { key: "depth", label: "depth", kind: "number", unit: "", min: 0.05, max: 1, step: 0.01, source: "test", free: true };
@@ -174,5 +175,33 @@ describe("refineInFull: a count refined on its neighbours (made-up objectives)",
     // then the depth's samples, all at 4
     expect(asked.length).toBeGreaterThanOrEqual(7);
     expect(asked.slice(4).every((n) => n === 4)).toBe(true);
+  });
+});
+
+describe("refineInFull with the cable net's declared refinements (made-up objectives, the ring's measured)", () => {
+  const designNet = (o: SchemeOptions, riseM: number, value: number): Design => ({ ...infeasibleDesign("cable-net", DEFAULT_BRIEF, ""), status: "feasible", feasible: true, totalMassKg: value, summary: [{ key: "rise", label: "", value: riseM, unit: "" }] });
+  // demo study, 3D designs at the chosen count and mast height, kgCO2e/m² of floor (measured 5 Dec): 120 m 6 masts at
+  // 0.13, 0.6 → 119.78, 0.65 → 110.18; 160 m 6 masts at 0.15, 0.6 → 114.25, 0.65 → 117.93. Count and height made up, least at 6 and the given height.
+  const run = (height: number, ring: Record<string, number>) => {
+    const asked: SchemeOptions[] = [];
+    const out = refineInFull(cableNet as unknown as SchemeModel, { options: { ...cableNet.defaults, masts: 8, mastHeightRatio: 0.15, mastRingRatio: 0.65 }, riseM: 10 }, { rise: { kind: "fixed" } as RiseSetting, spanM: 120, pinned: [] }, (o, riseM) => {
+      asked.push(o);
+      const r = ring[String(o.mastRingRatio)] ?? 200;
+      return designNet(o, riseM, r + 5 * Math.abs((o.masts as number) - 6) + 2000 * ((o.mastHeightRatio as number) - height) ** 2);
+    }, (d) => d.totalMassKg);
+    return { ...out, asked };
+  };
+  it("refines the mast ring radius last, at the count and mast height chosen, on 0.6 and 0.65, and keeps the better", () => {
+    const at120 = run(0.13, { "0.6": 119.78, "0.65": 110.18 });
+    expect(at120.refinements.map((r) => r.key)).toEqual(["masts", "mastHeightRatio", "mastRingRatio"]);
+    const last = at120.refinements[2]!;
+    expect(last.samples.map((s) => s.value)).toEqual([0.6, 0.65]);
+    const ringDesigns = at120.asked.filter((o) => o.mastRingRatio === 0.6);
+    expect(ringDesigns.length).toBe(1);
+    expect([ringDesigns[0]!.masts, ringDesigns[0]!.mastHeightRatio]).toEqual([at120.full.options.masts, at120.full.options.mastHeightRatio]);
+    expect(at120.full.options.mastRingRatio).toBe(0.65);
+    const at160 = run(0.15, { "0.6": 114.25, "0.65": 117.93 });
+    expect(at160.full.options.mastRingRatio).toBe(0.6);
+    expect(at160.full.objective).toBeCloseTo(114.25, 6);
   });
 });
