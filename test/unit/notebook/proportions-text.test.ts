@@ -3,6 +3,7 @@
 import { describe, it, expect } from "vitest";
 import { geodesicDome } from "../../../src/schemes/geodesic-dome";
 import { cableDome } from "../../../src/schemes/cable-dome";
+import { cableNet } from "../../../src/schemes/cable-net";
 import type { SchemeModel } from "../../../src/schemes/types";
 import type { ProportionChoice } from "../../../src/pipeline/proportions";
 import { proportionsSentences, proportionText } from "../../../src/notebook/proportions-text";
@@ -90,5 +91,9 @@ describe("proportions in words", () => {
     const unrefined = proportionsSentences(dome, { ...full, full: { ...full.full, refined: [] } }).join(" ");
     expect(unrefined).toContain("designed with Analysis: 3D nonlinear (sizes from the analysed forces).");
     expect(unrefined).not.toContain("Of those designs");
+    // three proportions chosen again are listed with commas and a last "and"
+    const net = cableNet as unknown as SchemeModel;
+    const three = proportionsSentences(net, { ...full, searched: ["masts", "mastRingRatio", "mastHeightRatio"], proportions: { masts: 6, mastRingRatio: 0.6, mastHeightRatio: 0.15 }, runnerUp: null, full: { ...full.full, refined: ["masts", "mastHeightRatio", "mastRingRatio"], runnerUp: null } }).join(" ");
+    expect(three).toContain("where Masts, Mast height above roof / span and Mast ring radius / plan radius were chosen again on 8 such designs");
   });
 });
