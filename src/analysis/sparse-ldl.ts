@@ -71,15 +71,15 @@ export class SparsePattern {
     return (this.plan ??= rowPlanOf(this, this.supernodes));
   }
 
-  private work?: { y: Float64Array; y3: Float64Array; falls: Float64Array; filled: Int32Array };
+  private work?: { y: Float64Array; y3: Float64Array; falls: Float64Array; diagonal: Float64Array; filled: Int32Array };
 
   /**
    * A factorisation's working arrays (a row being eliminated, three rows interleaved, rows filled per supernode), shared by
    * every factorisation of the pattern: each clears them first and none calls another (fresh typed
    * arrays are dear in a browser's worker: DEVELOPERS.md, "Where the work runs").
    */
-  get scratch(): { y: Float64Array; y3: Float64Array; falls: Float64Array; filled: Int32Array } {
-    return (this.work ??= { y: new Float64Array(this.n), y3: new Float64Array(3 * this.n), falls: new Float64Array(3), filled: new Int32Array(this.supernodes.count) });
+  get scratch(): { y: Float64Array; y3: Float64Array; falls: Float64Array; diagonal: Float64Array; filled: Int32Array } {
+    return (this.work ??= { y: new Float64Array(this.n), y3: new Float64Array(3 * this.n), falls: new Float64Array(3), diagonal: new Float64Array(3), filled: new Int32Array(this.supernodes.count) });
   }
 
   /** A released factorisation's arrays, taken by the next factorisation of the pattern (see `release`). */
@@ -466,7 +466,9 @@ function rowsOfNode(a: SparseSymmetricMatrix, K: number, relativeTolerance: numb
   const sn = a.pattern.supernodes;
   const values = a.values;
   const k = sn.first[K]!;
-  const diagonal = [0, 0, 0];
+  const { diagonal, falls } = a.pattern.scratch;
+  diagonal[0] = diagonal[1] = diagonal[2] = 0;
+  falls[0] = falls[1] = falls[2] = 0;
   for (let r = 0; r < 3; r++) {
     for (let p = colStart[k + r]!; p < colStart[k + r + 1]!; p++) {
       const i = rowIndex[p]!;
@@ -474,8 +476,6 @@ function rowsOfNode(a: SparseSymmetricMatrix, K: number, relativeTolerance: numb
       if (i === k + r) diagonal[r] = values[p]!;
     }
   }
-  const falls = a.pattern.scratch.falls;
-  falls.fill(0);
   for (let t = start[k]!; t < start[k + 1]!; t++) {
     const J = meets[t]!;
     const at = filled[J]!;
@@ -486,15 +486,14 @@ function rowsOfNode(a: SparseSymmetricMatrix, K: number, relativeTolerance: numb
   // the node's own triangle: inner[wK] = L(k+1, k), inner[wK+1] = L(k+2, k), inner[wK+2] = L(k+2, k+1)
   const wK = sn.innerStart[K]!;
   const e = 3 * k;
-  const vanished = (pivot: number, r: number) => !(Math.abs(pivot) > relativeTolerance * Math.abs(diagonal[r]!)) || !Number.isFinite(pivot);
   const pivotA = y3[e]! - falls[0]!;
-  if (vanished(pivotA, 0)) return k;
+  if (vanished(pivotA, diagonal[0]!, relativeTolerance)) return k;
   d[k] = pivotA;
   const bk = y3[e + 1]!;
   const l10 = bk / pivotA;
   inner[wK] = l10;
   const pivotB = y3[e + 4]! - falls[1]! - l10 * bk;
-  if (vanished(pivotB, 1)) return k + 1;
+  if (vanished(pivotB, diagonal[1]!, relativeTolerance)) return k + 1;
   d[k + 1] = pivotB;
   const gk = y3[e + 2]!;
   const gk1 = y3[e + 5]! - l10 * gk;
@@ -503,10 +502,15 @@ function rowsOfNode(a: SparseSymmetricMatrix, K: number, relativeTolerance: numb
   inner[wK + 1] = l20;
   inner[wK + 2] = l21;
   const pivotC = y3[e + 8]! - falls[2]! - l20 * gk - l21 * gk1;
-  if (vanished(pivotC, 2)) return k + 2;
+  if (vanished(pivotC, diagonal[2]!, relativeTolerance)) return k + 2;
   d[k + 2] = pivotC;
-  y3.fill(0, e, e + 9);
+  for (let t = e; t < e + 9; t++) y3[t] = 0;
   return -1;
+}
+
+/** A pivot that counts as zero: below relativeTolerance × its diagonal before factoring, or not finite. */
+function vanished(pivot: number, diagonal: number, relativeTolerance: number): boolean {
+  return !(Math.abs(pivot) > relativeTolerance * Math.abs(diagonal)) || !Number.isFinite(pivot);
 }
 
 /**
@@ -569,7 +573,8 @@ function threeRowsOfNodeSupernode(sn: Supernodes, J: number, at: number, k: numb
   block[q + 6] = lg0;
   block[q + 7] = lg1;
   block[q + 8] = lg2;
-  y3.fill(0, e, e + 9);
+  // a loop, not fill: nine entries, and fill's call costs more than the stores (profiled)
+  for (let t = e; t < e + 9; t++) y3[t] = 0;
 }
 
 /** threeRowsOfNodeSupernode for a supernode of one or two columns (a node with restrained freedoms), by loops. */
@@ -608,7 +613,7 @@ function threeRowsOfSupernode(sn: Supernodes, J: number, at: number, k: number, 
       y3[3 * (k + r) + r2]! -= sum;
     }
   }
-  y3.fill(0, 3 * c0, 3 * (c0 + size));
+  for (let t = 3 * c0; t < 3 * (c0 + size); t++) y3[t] = 0;
 }
 
 /** Row k's entries in the columns of its own supernode before k (the run's triangle). Returns Σ l·y. */
