@@ -118,23 +118,25 @@ export interface Deferred {
 
 /**
  * Runs `work` once `schedule` has not been called for `quietMs` (a drag's many steps make one run,
- * after the last), or at once on `flush` (the page is about to be left: nothing may wait).
+ * after the last), or at once on `flush` (the page is about to be left: nothing may wait). `work`
+ * is told which: `atOnce` is true on `flush`, so it may put part of itself off only when false.
  */
-export function whenQuiet(work: () => void, quietMs: number): Deferred {
+export function whenQuiet(work: (atOnce: boolean) => void, quietMs: number): Deferred {
   let timer: ReturnType<typeof setTimeout> | undefined;
   const cancel = () => {
     if (timer !== undefined) clearTimeout(timer);
     timer = undefined;
   };
-  const flush = () => {
+  const run = (atOnce: boolean) => {
     if (timer === undefined) return;
     cancel();
-    work();
+    work(atOnce);
   };
+  const flush = () => run(true);
   return {
     schedule() {
       cancel();
-      timer = setTimeout(flush, quietMs);
+      timer = setTimeout(() => run(false), quietMs);
     },
     flush,
     cancel,

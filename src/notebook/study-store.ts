@@ -215,7 +215,7 @@ export function createStudyStore(options: StoreOptions): StudyStore {
   const link = computed(() => linkOf(study.value, packed.value, defaults));
   let saving: Deferred | null = null;
   const flush = () => saving?.flush();
-  if (options.persist) saving = startSaving(study, { notice, opened, relink: () => relink(study, defaults, packed) }, (fromOtherTab) => followOtherTabs(study, fromOtherTab, show, replace, flush));
+  if (options.persist) saving = startSaving(study, { notice, opened, relink: (atOnce) => relink(study, defaults, packed, atOnce) }, (fromOtherTab) => followOtherTabs(study, fromOtherTab, show, replace, flush));
 
   return {
     study,
@@ -273,28 +273,35 @@ function toAddress(fragment: string): void {
 }
 
 /**
- * Puts the study's plain link in the address at once, then the compressed one when it is ready
- * (if the study has not changed meanwhile), so the address and "Copy link" stay short.
+ * Puts the study's compressed link in the address when it is ready (if the study has not changed
+ * meanwhile), so the address and "Copy link" stay short; the plain link at once too where the page
+ * opens or is being left (`atOnce`: nothing may wait), where the browser cannot compress, or where compressing
+ * fails. Writing the address twice after each settled edit cost the compare page's thread a task of
+ * 51–67 ms with its workers busy (long-animation-frame timing, two runs in five).
  */
-function relink(study: ReadonlySignal<Study>, defaults: Study, packed: Signal<Packed | null>): void {
+function relink(study: ReadonlySignal<Study>, defaults: Study, packed: Signal<Packed | null>, atOnce: boolean): void {
   const current = study.peek();
   const plain = encodeStudyLink(current, defaults);
-  toAddress(`#s=${plain}`);
-  if (typeof CompressionStream === "undefined") return;
+  const compressing = typeof CompressionStream !== "undefined";
+  if (atOnce || !compressing) toAddress(`#s=${plain}`);
+  if (!compressing) return;
   compressStudyLink(plain).then(
     (text) => {
       if (study.peek() !== current) return;
       packed.value = { of: current, text };
       toAddress(`#s=${text}`);
     },
-    () => undefined, // the plain link stays
+    () => {
+      if (study.peek() === current) toAddress(`#s=${plain}`);
+    },
   );
 }
 
 interface PersistParts {
   notice: Signal<string>;
   opened: Opened;
-  relink: () => void;
+  /** Puts the study's link in the address (at once when the page is being left). */
+  relink: (atOnce: boolean) => void;
 }
 
 /** Stamps and saves the page's edits, flushes as the page goes, and follows other tabs (`follow`). */
@@ -316,7 +323,7 @@ function startSaving(study: Signal<Study>, parts: PersistParts, follow: (fromOth
  */
 function persist(study: Signal<Study>, parts: PersistParts, fromOtherTab: { current: Study | null }): Deferred {
   const { notice, opened } = parts;
-  const save = () => {
+  const save = (atOnce: boolean) => {
     const current = study.peek();
     if (current !== fromOtherTab.current) {
       const problems = studyProblems(current);
@@ -326,11 +333,19 @@ function persist(study: Signal<Study>, parts: PersistParts, fromOtherTab: { curr
         if (error) notice.value = error;
       }
     }
-    parts.relink();
+    // The address in a task of its own after a drag has settled: the save and the address together
+    // took 22–55 ms of the compare page's thread with its workers busy (profiled: the address's
+    // replaceState 8 ms, storage 5 ms, the link's compression 5 ms). An edit made meanwhile leaves
+    // the address empty until its own save.
+    if (atOnce) parts.relink(true);
+    else
+      setTimeout(() => {
+        if (!saving.pending) parts.relink(false);
+      }, 0);
   };
   const saving = whenQuiet(save, SAVE_QUIET_MS);
-  if (opened.writeNow) save();
-  else parts.relink();
+  if (opened.writeNow) save(true);
+  else parts.relink(true);
   let first = true;
   effect(() => {
     void study.value; // every change, the page's own or another tab's

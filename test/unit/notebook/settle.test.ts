@@ -138,6 +138,17 @@ describe("whenQuiet", () => {
     expect(runs).toBe(1);
   });
 
+  it("tells the work whether it runs at once (flush) or after the quiet time", () => {
+    vi.useFakeTimers();
+    const runs: boolean[] = [];
+    const job = whenQuiet((atOnce) => runs.push(atOnce), 300);
+    job.schedule();
+    vi.advanceTimersByTime(300);
+    job.schedule();
+    job.flush();
+    expect(runs).toEqual([false, true]);
+  });
+
   it("cancel drops the waiting work", () => {
     vi.useFakeTimers();
     let runs = 0;
