@@ -274,10 +274,11 @@ function toAddress(fragment: string): void {
 
 /**
  * Puts the study's compressed link in the address when it is ready (if the study has not changed
- * meanwhile), so the address and "Copy link" stay short; the plain link at once too where the page
- * opens or is being left (`atOnce`: nothing may wait), where the browser cannot compress, or where compressing
- * fails. Writing the address twice after each settled edit cost the compare page's thread a task of
- * 51–67 ms with its workers busy (long-animation-frame timing, two runs in five).
+ * meanwhile), so the address and "Copy link" stay short. The plain link goes in at once too where
+ * the page opens or is being left (`atOnce`: nothing may wait), and where the browser cannot
+ * compress or compressing fails. Writing the address twice after each settled edit (plain, then
+ * compressed) took a task of 51–67 ms of the compare page's thread with its workers busy
+ * (long-animation-frame timing, two drags in five).
  */
 function relink(study: ReadonlySignal<Study>, defaults: Study, packed: Signal<Packed | null>, atOnce: boolean): void {
   const current = study.peek();
@@ -300,7 +301,7 @@ function relink(study: ReadonlySignal<Study>, defaults: Study, packed: Signal<Pa
 interface PersistParts {
   notice: Signal<string>;
   opened: Opened;
-  /** Puts the study's link in the address (at once when the page is being left). */
+  /** Puts the study's link in the address (the plain one at once too when `atOnce`: the page opens or is being left). */
   relink: (atOnce: boolean) => void;
 }
 
@@ -334,9 +335,9 @@ function persist(study: Signal<Study>, parts: PersistParts, fromOtherTab: { curr
       }
     }
     // The address in a task of its own after a drag has settled: the save and the address together
-    // took 22–55 ms of the compare page's thread with its workers busy (profiled: the address's
-    // replaceState 8 ms, storage 5 ms, the link's compression 5 ms). An edit made meanwhile leaves
-    // the address empty until its own save.
+    // took 53–55 ms of the compare page's thread with its workers busy (long-animation-frame timing;
+    // 22 ms profiled without load: the address's replaceState 8 ms, storage 5 ms, the link's
+    // compression 5 ms). An edit made meanwhile leaves the address empty until its own save.
     if (atOnce) parts.relink(true);
     else
       setTimeout(() => {
