@@ -114,6 +114,34 @@ function memberSlots(pattern: SparsePattern, equationOf: Int32Array, members: Ca
   return slots;
 }
 
+/**
+ * What a solve prepares of a model, kept by its members (with its nodes and supports checked), so
+ * that the load cases of one design, each a model with the same members, nodes and supports and its
+ * own loads, share it: in a browser's worker fresh typed arrays are dear (DEVELOPERS.md), and a
+ * profile of the span study's workers found preparing 4.9 %, the BFGS arrays made afresh per solve
+ * 3.3 % and the numbering's key 0.9 % of their time (3D pass, demo study). The working arrays (fint,
+ * forces, spare states, BFGS pairs) are shared too: every solve is synchronous and overwrites them
+ * before reading; a solve that starts while another of the same model runs (a `loadAt` that solves)
+ * prepares its own.
+ */
+const preparedModels = new WeakMap<CableModel["members"], { nodes: CableModel["nodes"]; supports: CableModel["supports"]; prepared: Prepared; busy: boolean }>();
+
+/** The model prepared (from preparedModels when its members, nodes and supports were prepared before), its loads its own; `done` frees it for the next solve. */
+function prepared(model: CableModel): { p: Prepared; done: () => void } {
+  const known = preparedModels.get(model.members);
+  if (known && !known.busy && known.nodes === model.nodes && known.supports === model.supports) {
+    checkCableModel(model);
+    known.busy = true;
+    known.prepared.model = model;
+    known.prepared.load = flatLoads(model.nodes.length, model.loads);
+    return { p: known.prepared, done: () => (known.busy = false) };
+  }
+  const p = prepare(model);
+  const entry = { nodes: model.nodes, supports: model.supports, prepared: p, busy: true };
+  if (!known?.busy) preparedModels.set(model.members, entry);
+  return { p, done: () => (entry.busy = false) };
+}
+
 function prepare(model: CableModel): Prepared {
   checkCableModel(model);
   const n = model.nodes.length;
@@ -413,7 +441,15 @@ function finished(state: State, iteration: number, tolerance: number, maxIterati
 
 /** Solves the model under its loads (and prescribed support displacements), stepping the load. */
 export function solveCableModel(model: CableModel, options: CableSolverOptions = {}): CableSolution {
-  const p = prepare(model);
+  const { p, done } = prepared(model);
+  try {
+    return solvePrepared(p, options);
+  } finally {
+    done();
+  }
+}
+
+function solvePrepared(p: Prepared, options: CableSolverOptions): CableSolution {
   const warm = warmStart(p, options);
   if (warm?.ok) return solution(p, options, warm, 1, 0, [warm.iterations], warm.iterations);
   const steps = Math.max(1, Math.round(options.steps ?? 1));

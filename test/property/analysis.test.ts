@@ -115,3 +115,29 @@ describe("nonlinear cable solver: properties", () => {
     );
   });
 });
+
+describe("nonlinear cable solver: load cases of one model share what is prepared of it", () => {
+  it("solving cases of one model in any order gives each the answer of a model made afresh, to the last bit; a solve inside another's loadAt works", () => {
+    fc.assert(
+      fc.property(netArb, fc.array(fc.constantFrom(0, 1, 2), { minLength: 2, maxLength: 5 }), (p, order) => {
+        const patterns: ((u: number, v: number) => Vec3)[] = [() => [0, 0, -1], (u) => [0, 0, u > 0 ? 1 : -0.5], (u, v) => [0.2, 0, v > 0 ? -1 : 0.3]];
+        const base = loaded(p, 0.05, patterns[0]!);
+        const cases = patterns.map((f) => ({ ...base, loads: loaded(p, 0.05, f).loads }));
+        // each alone, on its own copy of the model (nothing shared with the others)
+        const alone = cases.map((c) => solveCableModel({ ...c, nodes: [...c.nodes], members: [...c.members], supports: [...c.supports] }));
+        for (const k of order) {
+          const s = solveCableModel(cases[k]!);
+          expect([...s.displacementsM]).toEqual([...alone[k]!.displacementsM]);
+          expect([...s.forcesN]).toEqual([...alone[k]!.forcesN]);
+          expect(s.iterations).toBe(alone[k]!.iterations);
+        }
+        // a solve of the same model while one runs (inside its loadAt) prepares its own, and both answer as alone
+        let inner: ReturnType<typeof solveCableModel> | undefined;
+        const outer = solveCableModel(cases[0]!, { loadAt: (x) => ((inner ??= solveCableModel(cases[1]!)), new Float64Array(x.length)) });
+        expect([...outer.displacementsM]).toEqual([...alone[0]!.displacementsM]);
+        expect([...inner!.displacementsM]).toEqual([...alone[1]!.displacementsM]);
+      }),
+      { numRuns: 40, seed: 20261205 },
+    );
+  });
+});
