@@ -133,7 +133,7 @@ function prepared(model: CableModel): { p: Prepared; done: () => void } {
     checkCableModel(model);
     known.busy = true;
     known.prepared.model = model;
-    known.prepared.load = flatLoads(model.nodes.length, model.loads);
+    flatLoads(model.nodes.length, model.loads, known.prepared.load);
     return { p: known.prepared, done: () => (known.busy = false) };
   }
   const p = prepare(model);

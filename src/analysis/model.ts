@@ -93,9 +93,10 @@ export function flatCoordinates(nodes: readonly Vec3[]): Float64Array {
   return x;
 }
 
-/** Applied nodal loads as a flat array (loads on the same node add up). */
-export function flatLoads(nodeCount: number, loads: readonly NodalLoad[]): Float64Array {
-  const f = new Float64Array(nodeCount * 3);
+/** Applied nodal loads as a flat array (loads on the same node add up), in `into` when given (cleared first). */
+export function flatLoads(nodeCount: number, loads: readonly NodalLoad[], into?: Float64Array): Float64Array {
+  const f = into ?? new Float64Array(nodeCount * 3);
+  if (into) f.fill(0);
   for (const l of loads) for (let d = 0; d < 3; d++) f[3 * l.node + d]! += l.forceN[d]!;
   return f;
 }

@@ -12,9 +12,9 @@
  *   ACM TOMS 31, 2005; Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, ch. 4), taken
  *   a supernode (a node's freedoms) at a time, so a row's update reads each row index of L once for
  *   the node's three columns; and the three rows of a node together (rowsOfNode), so each row
- *   index and entry of L is read once for the node's three rows too. The symbolic part (tree, column counts, supernodes and their rows) is
- *   computed once per pattern and shared by every matrix of that pattern, so Newton iterations and
- *   load combinations only redo the numbers.
+ *   index and entry of L is read once for the node's three rows too. The symbolic part (tree,
+ *   column counts, supernodes and their rows) is computed once per pattern and shared by every
+ *   matrix of that pattern, so Newton iterations and load combinations only redo the numbers.
  *
  * Why not the envelope solver of sparse.ts: on the 160 m cable net (1,872 equations) its profile
  * holds every entry between two rings of nodes; the factor here holds only the fill, and the tree
@@ -74,9 +74,10 @@ export class SparsePattern {
   private work?: { y: Float64Array; y3: Float64Array; falls: Float64Array; diagonal: Float64Array; filled: Int32Array };
 
   /**
-   * A factorisation's working arrays (a row being eliminated, three rows interleaved, rows filled per supernode), shared by
-   * every factorisation of the pattern: each clears them first and none calls another (fresh typed
-   * arrays are dear in a browser's worker: DEVELOPERS.md, "Where the work runs").
+   * A factorisation's working arrays (a row being eliminated, a node's three rows interleaved, rows
+   * filled per supernode), shared by every factorisation of the pattern: each clears them first and
+   * none calls another (fresh typed arrays are dear in a browser's worker: DEVELOPERS.md, "Where
+   * the work runs").
    */
   get scratch(): { y: Float64Array; y3: Float64Array; falls: Float64Array; diagonal: Float64Array; filled: Int32Array } {
     return (this.work ??= { y: new Float64Array(this.n), y3: new Float64Array(3 * this.n), falls: new Float64Array(3), diagonal: new Float64Array(3), filled: new Int32Array(this.supernodes.count) });
