@@ -517,6 +517,14 @@ function solution(p: Prepared, options: CableSolverOptions, final: NewtonOutcome
   };
 }
 
+/** The tangent stiffness at the unloaded state (elastic plus the geometric stiffness of the members' initial forces), as every solve assembles it: for benches of the factorisation. */
+export function tangentAtRest(model: CableModel): SparseSymmetricMatrix {
+  const p = prepare(model);
+  const K = p.matrix();
+  internal(p, new Float64Array(p.x0.length), K);
+  return K;
+}
+
 /**
  * First-order (linear) analysis about the initial geometry: K·u = P with K the tangent there
  * (elastic plus the geometric stiffness of the initial forces), member forces

@@ -204,29 +204,9 @@ const NET_ROUNDS = 10;
  * members' initial forces), the kernel of every Newton iteration: its size and median time.
  */
 async function benchFactorisation(model: NetModel["model"]): Promise<void> {
-  const { numberEquations } = await import("../../src/analysis/sparse");
+  const { tangentAtRest } = await import("../../src/analysis/cable-solver");
   const { factorSparseLDL } = await import("../../src/analysis/sparse-ldl");
-  const fixed = new Set(model.supports.flatMap((s) => s.fixed.flatMap((f, d) => (f ? [3 * s.node + d] : []))));
-  const numbering = numberEquations(model.nodes.length, 3, model.members.map((m) => [m.i, m.j]), (node, d) => fixed.has(3 * node + d));
-  const A = numbering.matrix();
-  const add = (i: number, j: number, v: number) => {
-    const [a, b] = [numbering.equationOf[i]!, numbering.equationOf[j]!];
-    if (a >= 0 && b >= 0) A.add(a, b, v);
-  };
-  for (const m of model.members) {
-    const [p, q] = [model.nodes[m.i]!, model.nodes[m.j]!];
-    const l = Math.hypot(q[0] - p[0], q[1] - p[1], q[2] - p[2]);
-    const e = [0, 1, 2].map((d) => (q[d]! - p[d]!) / l);
-    const n = m.initialForceN ?? 0;
-    for (let a = 0; a < 3; a++)
-      for (let b = 0; b < 3; b++) {
-        const k = (m.eaN / l) * e[a]! * e[b]! + (n / l) * ((a === b ? 1 : 0) - e[a]! * e[b]!);
-        // each unordered pair once: the diagonal blocks' upper triangles, the coupling block whole
-        if (a <= b) add(3 * m.i + a, 3 * m.i + b, k);
-        if (a <= b) add(3 * m.j + a, 3 * m.j + b, k);
-        add(3 * m.i + a, 3 * m.j + b, -k);
-      }
-  }
+  const A = tangentAtRest(model);
   const times: number[] = [];
   for (let r = 0; r < 250; r++) {
     const t = performance.now();
