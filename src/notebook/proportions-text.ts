@@ -66,10 +66,13 @@ export function proportionsSentences(model: SchemeDeclaration, choice: Proportio
 
 const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
 
+/** "A, B and C": the proportions chosen again, listed as the page's text lists things. */
+const listed = new Intl.ListFormat("en-GB", { type: "conjunction" });
+
 /** How the candidates were compared (the screening options) and the chosen ones designed (the full options, some proportions chosen again). */
 function fullSentence(model: SchemeDeclaration, full: NonNullable<ProportionChoice["full"]>): string {
   const words = (options: Record<string, OptionValue>) => Object.entries(options).map(([k, v]) => proportionText(model, k, v)).join("; ");
-  const again = full.refined.length === 0 ? "" : `, where ${full.refined.map((k) => (k === RISE_KEY ? "the rise" : (model.options.find((o) => o.key === k)?.label ?? k))).reduce((list, label, i, all) => (i === 0 ? label : `${list}${i === all.length - 1 ? " and " : ", "}${label}`), "")} ${full.refined.length > 1 ? "were" : "was"} chosen again on ${full.evaluations} such designs (how: Method and assumptions, Best proportions)`;
+  const again = full.refined.length === 0 ? "" : `, where ${listed.format(full.refined.map((k) => (k === RISE_KEY ? "the rise" : (model.options.find((o) => o.key === k)?.label ?? k))))} ${full.refined.length > 1 ? "were" : "was"} chosen again on ${full.evaluations} such designs (how: Method and assumptions, Best proportions)`;
   return `The candidates were compared with ${words(full.screening)} (the fast first estimate); the chosen ones are designed with ${words(full.options)}${again}.`;
 }
 
