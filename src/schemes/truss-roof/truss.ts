@@ -180,9 +180,9 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
         failure = `no catalogue hollow section carries the chord force of ${(b.chordN / 1000).toFixed(0)} kN`;
         break;
       }
-      const minArea = (force: number) => (s: ChsSection) => s.areaM2 >= areaScale.value * force;
-      const top = attempt === 0 ? baseTop : pickChs(sections, b.topForces, steel, (s) => minArea(baseTop.section.areaM2)(s) && b.withBending(s));
-      const bottom = attempt === 0 ? baseBottom : pickChs(sections, b.bottomForces, steel, minArea(baseBottom.section.areaM2));
+      // the deflection's floor on the chords' areas, passed as such: the picker starts its search there
+      const top = attempt === 0 ? baseTop : pickChs(sections, b.topForces, steel, b.withBending, areaScale.value * baseTop.section.areaM2);
+      const bottom = attempt === 0 ? baseBottom : pickChs(sections, b.bottomForces, steel, undefined, areaScale.value * baseBottom.section.areaM2);
       if (top === null || bottom === null || diagonal === null) {
         failure = diagonal === null ? `no catalogue hollow section carries the diagonal force of ${(b.diagonalN / 1000).toFixed(0)} kN over ${diagonalLengthM.toFixed(1)} m` : "no catalogue hollow section gives the chords the stiffness the deflection limit needs";
         break;
