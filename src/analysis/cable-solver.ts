@@ -526,6 +526,25 @@ export function tangentAtRest(model: CableModel): SparseSymmetricMatrix {
 }
 
 /**
+ * The largest movement of any node, m. The node is found on the squares (Math.hypot, called for
+ * every node of every solve, was a tenth of the span study's 3D garbage) and its length taken once.
+ */
+export function largestDisplacementM(s: Pick<CableSolution, "displacementsM">): number {
+  const u = s.displacementsM;
+  let most = -1;
+  let at = 0;
+  for (let k = 0; k < u.length; k += 3) {
+    const squared = u[k]! * u[k]! + u[k + 1]! * u[k + 1]! + u[k + 2]! * u[k + 2]!;
+    if (Number.isNaN(squared)) return Number.NaN; // as Math.max of the lengths gives
+    if (squared > most) {
+      most = squared;
+      at = k;
+    }
+  }
+  return u.length === 0 ? 0 : Math.hypot(u[at]!, u[at + 1]!, u[at + 2]!);
+}
+
+/**
  * First-order (linear) analysis about the initial geometry: K·u = P with K the tangent there
  * (elastic plus the geometric stiffness of the initial forces), member forces
  * N = N0 + (EA/L_u)·e·Δu. Cables are not allowed to slacken (a linear analysis cannot tell);

@@ -44,19 +44,25 @@ export interface CableModel {
   loads: readonly NodalLoad[];
 }
 
-/** Throws a RangeError naming the first bad field of a model; returns the model unchanged. */
+/**
+ * Throws a RangeError naming the first bad field of a model; returns the model unchanged. Every
+ * solve checks its model, so a message is written only for a field that fails (writing each field's
+ * name up front made a fifth of the span study's 3D garbage).
+ */
 export function checkCableModel(model: CableModel): CableModel {
   const n = model.nodes.length;
   if (n === 0) throw new RangeError("invalid model.nodes: empty (expected at least two nodes)");
-  model.nodes.forEach((p, k) => {
-    if (!(p.length === 3 && p.every(Number.isFinite))) throw new RangeError(`invalid model.nodes[${k}]: ${JSON.stringify(p)} (expected three finite coordinates)`);
-  });
-  const node = (field: string, k: unknown) => {
-    if (!(Number.isInteger(k) && (k as number) >= 0 && (k as number) < n)) throw new RangeError(`invalid ${field}: ${String(k)} (expected a node index 0–${n - 1})`);
+  for (let k = 0; k < n; k++) {
+    const p = model.nodes[k]!;
+    if (!(p.length === 3 && Number.isFinite(p[0]) && Number.isFinite(p[1]) && Number.isFinite(p[2]))) throw new RangeError(`invalid model.nodes[${k}]: ${JSON.stringify(p)} (expected three finite coordinates)`);
+  }
+  const node = (field: string, k: number, end: string, value: unknown) => {
+    if (!(Number.isInteger(value) && (value as number) >= 0 && (value as number) < n)) throw new RangeError(`invalid model.${field}[${k}]${end}: ${String(value)} (expected a node index 0–${n - 1})`);
   };
-  model.members.forEach((m, k) => {
-    node(`model.members[${k}].i`, m.i);
-    node(`model.members[${k}].j`, m.j);
+  for (let k = 0; k < model.members.length; k++) {
+    const m = model.members[k]!;
+    node("members", k, ".i", m.i);
+    node("members", k, ".j", m.j);
     if (m.i === m.j) throw new RangeError(`invalid model.members[${k}]: both ends at node ${m.i} (expected two different nodes)`);
     if (!(m.eaN > 0 && Number.isFinite(m.eaN))) throw new RangeError(`invalid model.members[${k}].eaN: ${m.eaN} (expected > 0)`);
     if (m.kind !== "cable" && m.kind !== "strut") throw new RangeError(`invalid model.members[${k}].kind: ${String(m.kind)} (expected "cable" or "strut")`);
@@ -64,16 +70,20 @@ export function checkCableModel(model: CableModel): CableModel {
     if (m.initialForceN !== undefined && !(Number.isFinite(m.initialForceN) && m.initialForceN > -m.eaN)) {
       throw new RangeError(`invalid model.members[${k}].initialForceN: ${m.initialForceN} (expected finite and > −EA)`);
     }
-    if (lengthOf(model.nodes[m.i]!, model.nodes[m.j]!) === 0) throw new RangeError(`invalid model.members[${k}]: nodes ${m.i} and ${m.j} coincide (expected a member of nonzero length)`);
-  });
-  model.supports.forEach((s, k) => {
-    node(`model.supports[${k}].node`, s.node);
+    const a = model.nodes[m.i]!;
+    const b = model.nodes[m.j]!;
+    if (a[0] === b[0] && a[1] === b[1] && a[2] === b[2]) throw new RangeError(`invalid model.members[${k}]: nodes ${m.i} and ${m.j} coincide (expected a member of nonzero length)`);
+  }
+  for (let k = 0; k < model.supports.length; k++) {
+    const s = model.supports[k]!;
+    node("supports", k, ".node", s.node);
     if (s.displacementM && !s.displacementM.every(Number.isFinite)) throw new RangeError(`invalid model.supports[${k}].displacementM (expected three finite numbers)`);
-  });
-  model.loads.forEach((l, k) => {
-    node(`model.loads[${k}].node`, l.node);
-    if (!(l.forceN.length === 3 && l.forceN.every(Number.isFinite))) throw new RangeError(`invalid model.loads[${k}].forceN (expected three finite numbers)`);
-  });
+  }
+  for (let k = 0; k < model.loads.length; k++) {
+    const l = model.loads[k]!;
+    node("loads", k, ".node", l.node);
+    if (!(l.forceN.length === 3 && Number.isFinite(l.forceN[0]) && Number.isFinite(l.forceN[1]) && Number.isFinite(l.forceN[2]))) throw new RangeError(`invalid model.loads[${k}].forceN (expected three finite numbers)`);
+  }
   return model;
 }
 

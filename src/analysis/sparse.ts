@@ -228,11 +228,11 @@ export function numberEquations(
   restrained: (node: number, dof: number) => boolean,
 ): Numbering {
   const key = numberingKey(nodeCount, dofPerNode, elements, restrained);
-  const known = numberings.get(key);
-  if (known) return known;
+  const known = numberings.find((n) => sameKey(n.key, key));
+  if (known) return known.numbering;
   const numbering = numberAnew(nodeCount, dofPerNode, elements, restrained);
-  if (numberings.size >= 16) numberings.delete(numberings.keys().next().value!);
-  numberings.set(key, numbering);
+  if (numberings.length >= 16) numberings.shift();
+  numberings.push({ key, numbering });
   return numbering;
 }
 
@@ -248,12 +248,33 @@ export interface Numbering {
  * model after model of the same members and supports, and the ordering and symbolic factorisation
  * depend only on that. (Equal keys give identical numberings: the key holds every input.)
  */
-const numberings = new Map<string, Numbering>();
+const numberings: { key: Int32Array; numbering: Numbering }[] = [];
 
-function numberingKey(nodeCount: number, dofPerNode: number, elements: readonly (readonly number[])[], restrained: (node: number, dof: number) => boolean): string {
-  const fixed: number[] = [];
-  for (let node = 0; node < nodeCount; node++) for (let d = 0; d < dofPerNode; d++) if (restrained(node, d)) fixed.push(node * dofPerNode + d);
-  return `${nodeCount}/${dofPerNode}/${elements.map((el) => el.join(",")).join(";")}/${fixed.join(",")}`;
+/**
+ * Every input of a numbering in one array: node count, freedoms a node, each element's length and
+ * nodes, then the restrained freedoms. (A string of them was a twentieth of the span study's 3D
+ * garbage.)
+ */
+function numberingKey(nodeCount: number, dofPerNode: number, elements: readonly (readonly number[])[], restrained: (node: number, dof: number) => boolean): Int32Array {
+  let size = 3;
+  for (const el of elements) size += 1 + el.length;
+  const key = new Int32Array(size + nodeCount * dofPerNode);
+  let at = 0;
+  key[at++] = nodeCount;
+  key[at++] = dofPerNode;
+  key[at++] = elements.length;
+  for (const el of elements) {
+    key[at++] = el.length;
+    for (const node of el) key[at++] = node;
+  }
+  for (let node = 0; node < nodeCount; node++) for (let d = 0; d < dofPerNode; d++) if (restrained(node, d)) key[at++] = node * dofPerNode + d;
+  return key.subarray(0, at);
+}
+
+function sameKey(a: Int32Array, b: Int32Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+  return true;
 }
 
 function numberAnew(

@@ -2,7 +2,7 @@ import type { Brief } from "../../brief";
 import { analysedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
 import { cableDomeModel, type DomeMemberTag } from "../../analysis/models/cable-dome-model";
-import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
+import { largestDisplacementM, solveCableModel, type CableSolution } from "../../analysis/cable-solver";
 import { cableDomeSelfStress, type CableDomeTrussForces } from "../../mechanics/cable-dome-truss";
 import type { NodalLoad } from "../../analysis/model";
 import type { CableDomeLayout } from "./geometry";
@@ -108,12 +108,6 @@ function ringCompressionOf(model: ReturnType<typeof cableDomeModel>, s: CableSol
   return pull / (2 * Math.sin(Math.PI / trusses));
 }
 
-function maxDisplacement(s: CableSolution): number {
-  let m = 0;
-  for (let k = 0; k < s.displacementsM.length; k += 3) m = Math.max(m, Math.hypot(s.displacementsM[k] as number, s.displacementsM[k + 1] as number, s.displacementsM[k + 2] as number));
-  return m;
-}
-
 /** Newton–Raphson iterations allowed a case, in one load step: a case that has not converged by then fails the prestress tried. */
 export const DOME_MAX_ITERATIONS = 30;
 /** Times the prestress may be raised while no passing value is found (by half, or fourfold while a case does not converge). */
@@ -165,7 +159,7 @@ function judged(j: Judge, alpha: number, solved: readonly Solved[]): { estimate:
       failures.push({ kind: "no equilibrium", caseName: c.name, prestressN: alpha });
       continue;
     }
-    if (maxDisplacement(sol) > j.displacementLimitM) failures.push({ kind: "displacement", caseName: c.name, prestressN: alpha });
+    if (largestDisplacementM(sol) > j.displacementLimitM) failures.push({ kind: "displacement", caseName: c.name, prestressN: alpha });
     sol.forcesN.forEach((f, m) => {
       if (!j.mustStayTaut[m]) return;
       const sm = j.unitForces[m] as number;
@@ -265,7 +259,7 @@ function scaleForces(f: CableDomeTrussForces, a: number): CableDomeTrussForces {
 
 function summarise(input: DomeAnalysisInput, last: Round, n: number, mustStayTaut: boolean[]): Omit<DomeAnalysis, "governedBy"> {
   const { model, solved, alpha } = last;
-  const cases = solved.map(({ c, s }) => ({ name: c.name, solution: s, envelope: envelopeOf(model, n, s.forcesN), maxDisplacementM: maxDisplacement(s), slackMembers: s.slack.filter(Boolean).length }));
+  const cases = solved.map(({ c, s }) => ({ name: c.name, solution: s, envelope: envelopeOf(model, n, s.forcesN), maxDisplacementM: largestDisplacementM(s), slackMembers: s.slack.filter(Boolean).length }));
   const notConverged = solved.find(({ s }) => !s.converged);
   const slackTaut = solved.find(({ s }) => s.slack.some((sl, j) => sl && mustStayTaut[j]));
   const reason = notConverged

@@ -2,7 +2,7 @@ import type { Brief } from "../../brief";
 import { analysedCombinations, unboundedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
 import { cableNetFormFinding, cableNetNodeCount, type CableNetModel, type NetMemberFamily } from "../../analysis/models/cable-net-model";
-import { solveCableModel, type CableSolution } from "../../analysis/cable-solver";
+import { largestDisplacementM, solveCableModel, type CableSolution } from "../../analysis/cable-solver";
 import { lengthOf, restLengths, type NodalLoad, type Vec3 } from "../../analysis/model";
 import { capHeightAt } from "../../mechanics/spherical-cap";
 import { BACKSTAY_SLOPE_RAD, type CableNetLayout } from "./geometry";
@@ -101,12 +101,6 @@ export function lumpingNote(layout: CableNetLayout, net: CableNetModel): string 
 /** Circumferential prestress ÷ radial (common practice for anticlastic nets of similar spacing, no source). */
 export const NET_HOOP_PRESTRESS_SHARE = 0.5;
 
-function maxDisplacement(s: CableSolution): number {
-  let m = 0;
-  for (let k = 0; k < s.displacementsM.length; k += 3) m = Math.max(m, Math.hypot(s.displacementsM[k] as number, s.displacementsM[k + 1] as number, s.displacementsM[k + 2] as number));
-  return m;
-}
-
 /** Nodal loads of a combination: the map at each node's plan position × its tributary plan area (vertical). */
 export function netNodeLoads(input: Pick<NetAnalysisInput, "basis" | "selfWeightKPa">, net: CableNetModel, c: PlanCombination): NodalLoad[] {
   const at = combinationAtPlanKPa(input.basis, c.combination, input.selfWeightKPa);
@@ -190,7 +184,7 @@ function worstOf(net: CableNetModel, solved: Solved, m: number, limitM: number, 
   const members = net.model.members;
   let worst: { margin: number; criterion: NetCriterion } = { margin: crown ? 1 - (crown.headM - crown.crownM) / (crown.headM - crown.roofM) : Infinity, criterion: { kind: "crown" } };
   for (const { c, s } of solved) {
-    const moved = maxDisplacement(s);
+    const moved = largestDisplacementM(s);
     if (1 - moved / limitM < worst.margin) worst = { margin: 1 - moved / limitM, criterion: { kind: "displacement", combination: c.name, displacementM: moved } };
     const x = s.coordinatesM;
     members.forEach((mem, j) => {
@@ -553,7 +547,7 @@ function failureReason(input: NetAnalysisInput, last: NetRound, cases: readonly 
 
 function summarise(input: NetAnalysisInput, last: Round): Omit<NetAnalysis, "screened"> {
   const { net, solved, alpha } = last;
-  const cases = solved.map(({ c, s }) => ({ name: c.name, s, maxDisplacementM: maxDisplacement(s) }));
+  const cases = solved.map(({ c, s }) => ({ name: c.name, s, maxDisplacementM: largestDisplacementM(s) }));
   const reason = last.pass ? "" : failureReason(input, last, cases);
   const lines = input.layout.masts * input.layout.cablesPerSide;
   const familyLength = (family: NetMemberFamily) =>

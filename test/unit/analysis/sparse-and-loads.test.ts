@@ -95,6 +95,13 @@ describe("bad input and honest failure", () => {
   it("names the field", () => {
     expect(() => checkCableModel({ ...base, members: [{ i: 0, j: 2, eaN: 1, kind: "cable" }] })).toThrow(/model\.members\[0\]\.j: 2 \(expected a node index 0–1\)/);
     expect(() => checkCableModel({ ...base, members: [{ i: 0, j: 1, eaN: -1, kind: "cable" }] })).toThrow(/model\.members\[0\]\.eaN/);
+    const bar = [{ i: 0, j: 1, eaN: 1, kind: "cable" as const }];
+    expect(() => checkCableModel({ ...base, nodes: [[0, 0, 0], [0, 0, 0]], members: bar })).toThrow(/model\.members\[0\]: nodes 0 and 1 coincide/);
+    expect(() => checkCableModel({ ...base, nodes: [[0, 0, 0], [1, Number.NaN, 0]], members: bar })).toThrow(/model\.nodes\[1\]: \[1,null,0\] \(expected three finite coordinates\)/);
+    expect(() => checkCableModel({ ...base, members: bar, supports: [{ node: 1.5, fixed: [true, true, true] }] })).toThrow(/model\.supports\[0\]\.node: 1\.5 \(expected a node index 0–1\)/);
+    expect(() => checkCableModel({ ...base, members: bar, loads: [{ node: 1, forceN: [0, Infinity, 0] }] })).toThrow(/model\.loads\[0\]\.forceN \(expected three finite numbers\)/);
+    expect(() => checkCableModel({ ...base, members: bar, loads: [{ node: -1, forceN: [0, 0, 0] }] })).toThrow(/model\.loads\[0\]\.node: -1/);
+    expect(checkCableModel({ ...base, members: bar })).toEqual({ ...base, members: bar });
     expect(() => formFind({ nodes: base.nodes, branches: [[0, 1]], forceDensityNPerM: 0, fixed: [0] })).toThrow(/forceDensityNPerM\[0\]/);
   });
   it("a mechanism is reported, not returned as a result", () => {
