@@ -2,6 +2,7 @@ import { signal, effect, type ReadonlySignal } from "@preact/signals-core";
 import type { Study } from "../study/study";
 import { spansOf, type SpanPoint, type SpanRange } from "../comparison/span-study";
 import type { SpanWorkerApi } from "../comparison/span-worker";
+import { SCHEME_IDS, type SchemeId } from "../schemes/ids";
 import { workerApi } from "../kernel/worker-call";
 import { messageOf } from "../kernel/errors";
 import { canonicalJson } from "../kernel/memo";
@@ -102,7 +103,8 @@ export interface SpanRunnerOptions {
  * tension roofs by their closed form: the whole picture within seconds), then the schemes whose
  * full design differs (the tension roofs by the 3D analysis, as on the compare page), whose points
  * replace their screening ones when that pass ends. The spans are dealt out a few at a time, largest
- * first, to whichever worker is free, so the progress bar moves and a newer request stops the older one after
+ * first, to whichever worker is free (in the first pass, once per group of schemes that share cached
+ * meshes, each worker keeping to its own group while it has spans left), so the progress bar moves and a newer request stops the older one after
  * the calls already running; while one runs the previous points stay on screen. Spans already
  * computed for the same study are taken from memory (SpanMemory), those of calls a newer request
  * overtook included.
@@ -146,10 +148,23 @@ export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySig
       };
       report();
       if (name === "again" && options.drawn) await Promise.race([options.drawn(), new Promise((resolve) => setTimeout(resolve, MOST_DRAW_WAIT_MS))]);
-      await Promise.all(pool.map(async (worker) => {
-        for (let chunk = queue.shift(); chunk !== undefined && id === latest; chunk = queue.shift()) {
+      // the first pass on several workers: each chunk once per group of schemes (screeningGroups), a worker taking its own group's
+      // chunks first and another's when its own are done; a chunk's points count when every group has given them
+      const split = name === "screening" && pool.length > 1 ? await (pool[0] as (typeof pool)[number]).api.screeningGroups(current) : [];
+      const groups: (SchemeId[] | undefined)[] = split.length > 1 ? split : [undefined];
+      const queues = groups.map((schemeIds) => queue.map((chunk) => ({ chunk, schemeIds })));
+      const given = new Map<number[], SpanPoint[][]>();
+      await Promise.all(pool.map(async (worker, w) => {
+        const next = () => queues.map((_, k) => queues[(w + k) % queues.length]!).find((q) => q.length > 0)?.shift();
+        for (let job = next(); job !== undefined && id === latest; job = next()) {
+          const { chunk, schemeIds } = job;
           // the second pass sends each span's screening points of the schemes it designs again: their searches are not repeated
-          const points = await worker.api.run(current, chunk, name, name === "again" ? (shown ?? []).filter((p) => p.screened && chunk.includes(p.spanM)) : []);
+          const got = await worker.api.run(current, chunk, name, name === "again" ? (shown ?? []).filter((p) => p.screened && chunk.includes(p.spanM)) : [], schemeIds);
+          const so = [...(given.get(chunk) ?? []), got];
+          given.set(chunk, so);
+          if (so.length < groups.length) continue;
+          // in the schemes' own order at each span, whichever group answered first (as one call for every scheme gives them)
+          const points = so.flat().sort((a, b) => a.spanM - b.spanM || SCHEME_IDS.indexOf(a.id) - SCHEME_IDS.indexOf(b.id));
           memory.put(key, name, chunk, points);
           remember(name, chunk);
           parts.push(points);

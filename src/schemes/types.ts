@@ -225,6 +225,12 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
   options: readonly OptionSpec[];
   defaults: O;
   /**
+   * The cached meshes its designs cut (the geodesic spheres, built once per frequency in each
+   * worker): the span study gives the schemes that name the same cache to the same worker in its
+   * first pass, rather than every worker building every sphere.
+   */
+  meshCache?: "geodesic spheres";
+  /**
    * Cheaper options the proportion search designs its candidates with (say, the closed form in
    * place of a 3D analysis); the chosen proportions are then designed once with the full options.
    * An option the user pinned is never overridden.

@@ -40,6 +40,7 @@ export const geodesicDomeDeclaration = declareScheme({
   ],
   description:
     "A single- or double-layer lattice of steel tubes on a geodesic (icosahedral) net, cut to a spherical cap on a steel tension ring. The dome carries the roof as a shell in compression; the bars are sized for their membrane forces and the whole lattice for general buckling.",
+  meshCache: "geodesic spheres",
   validSpanM: { min: 40, max: 250 },
   // rise ÷ span 0.1–0.3, preferring 0.15 (common practice for braced domes, no source)
   riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15, byTrend: { samples: 7, sampledAt: "reference" } },

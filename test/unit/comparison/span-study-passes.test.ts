@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { defaultStudy } from "../../../src/study";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
-import { runSpanStudy, schemesDesignedAgain } from "../../../src/comparison";
+import { runSpanStudy, schemesDesignedAgain, screeningGroups } from "../../../src/comparison";
 import { briefAtSpan, designAtBestProportions, evaluateStudy } from "../../../src/pipeline";
 import { SCHEMES } from "../../../src/schemes";
 
@@ -68,5 +68,20 @@ describe("span study passes", () => {
     expect(fullDesigns).toBeLessThan(searchedDesigns);
     expect(fromScreened.proportions).toEqual(whole.proportions);
     expect(fromScreened.design.totalMassKg).toBe(whole.design.totalMassKg);
+  });
+
+  it("groups the schemes of the first pass by the meshes they share, and the groups' points are the whole pass's", () => {
+    // the two lattice domes cut the same geodesic spheres: one worker takes both
+    expect(screeningGroups(study)).toEqual([["cable-dome", "cable-net", "truss-roof", "concrete-shell"], ["geodesic-dome", "timber-dome"]]);
+    const off = { ...study, schemes: { ...study.schemes, "timber-dome": { ...study.schemes["timber-dome"], enabled: false }, "truss-roof": { ...study.schemes["truss-roof"], enabled: false } } };
+    expect(screeningGroups(off)).toEqual([["cable-dome", "cable-net", "concrete-shell"], ["geodesic-dome"]]);
+    const lattices = { ...study, schemes: Object.fromEntries(Object.entries(study.schemes).map(([id, s]) => [id, { ...s, enabled: id === "timber-dome" }])) as typeof study.schemes };
+    expect(screeningGroups(lattices)).toEqual([["timber-dome"]]);
+    // a scheme's point depends on nothing but the study, the span and the scheme: designed in groups, the same points
+    const spans = [70];
+    const whole = runSpanStudy(study, catalogue, spans, { depth: "screening" });
+    const grouped = screeningGroups(study).flatMap((schemeIds) => runSpanStudy(study, catalogue, spans, { depth: "screening", schemeIds }));
+    expect(grouped.length).toBe(whole.length);
+    for (const p of whole) expect(grouped.find((q) => q.id === p.id)).toEqual(p);
   });
 });
