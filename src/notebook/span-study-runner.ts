@@ -104,10 +104,10 @@ export interface SpanRunnerOptions {
  * full design differs (the tension roofs by the 3D analysis, as on the compare page), whose points
  * replace their screening ones when that pass ends. The spans are dealt out a few at a time, largest
  * first, to whichever worker is free (in the first pass, once per group of schemes that share cached
- * meshes, each worker keeping to its own group while it has spans left), so the progress bar moves and a newer request stops the older one after
- * the calls already running; while one runs the previous points stay on screen. Spans already
- * computed for the same study are taken from memory (SpanMemory), those of calls a newer request
- * overtook included.
+ * meshes, each worker keeping to its own group while it has spans left), so the progress bar moves
+ * and a newer request stops the older one after the calls already running; while one runs the
+ * previous points stay on screen. Spans already computed for the same study are taken from memory
+ * (SpanMemory), those of calls a newer request overtook included.
  */
 export function spanStudyRunner(study: ReadonlySignal<Study>, range: ReadonlySignal<SpanRange>, options: SpanRunnerOptions = {}): ReadonlySignal<SpanStudyState> {
   const state = signal<SpanStudyState>({ status: "running", points: null, done: 0, total: 0, pass: "screening", again: [], reused: 0 });

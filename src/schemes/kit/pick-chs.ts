@@ -10,9 +10,9 @@ export interface AxialDemand {
 
 /**
  * The one CHS picker of the schemes: the lightest section (catalogue sorted by mass) that carries
- * every axial demand (EN 1993-1-1 §6.2.3 tension, §6.3.1 flexural buckling, γ_M = 1.0, L/i ≤ 180)
- * has at least `minAreaM2` (a stiffness floor) and passes an extra test (general buckling…). Returns the governing choice, or null
- * when no section suffices.
+ * every axial demand (EN 1993-1-1 §6.2.3 tension, §6.3.1 flexural buckling, γ_M = 1.0, L/i ≤ 180),
+ * has at least `minAreaM2` (a stiffness floor: the truss chords' deflection) and passes an extra
+ * test (general buckling…). Returns the governing choice, or null when no section suffices.
  */
 export function pickChs(
   sections: readonly ChsSection[],

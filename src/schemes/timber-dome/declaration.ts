@@ -54,8 +54,8 @@ export const timberDomeDeclaration = declareScheme({
   ],
   description:
     "A single-layer lattice of glued-laminated timber members on a three-way geodesic grid, with purlins, a board deck and a roofing membrane, cut to a spherical cap on a steel tension ring. The triangulated grid is chosen over ribs and rings because it carries unbalanced load by in-plane action with straight members of nearly one length, as in the two largest built timber domes (161.5 m and 163.4 m spans). Members are designed to EN 1995-1-1 for axial force with the bending of the panel load, the lattice for general buckling with creep-reduced stiffness; fire resistance adds charring to each member.",
-  // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (completed 1983) and 163.4 m (completed 1991), published figures.
   meshCache: "geodesic spheres",
+  // 40 m (common practice, no source) to 165 m: the largest built glulam domes span 161.5 m (completed 1983) and 163.4 m (completed 1991), published figures.
   validSpanM: { min: 40, max: 165 },
   // rise ÷ span 0.1–0.3, preferring 0.15 (the built glulam domes are near it; common practice, no source)
   riseSpanRatio: { min: 0.1, max: 0.3, preferred: 0.15, byTrend: { samples: 6, sampledAt: "searched" } },
