@@ -204,4 +204,19 @@ describe("refineInFull with the cable net's declared refinements (made-up object
     expect(at160.full.options.mastRingRatio).toBe(0.6);
     expect(at160.full.objective).toBeCloseTo(114.25, 6);
   });
+  it("designs the screened count, its half and two thirds, then the best one's neighbours: not the screened count's own neighbours first", () => {
+    const countsOf = (asked: readonly SchemeOptions[]) => [...new Set(asked.filter((o) => o.mastHeightRatio === 0.15 && o.mastRingRatio === 0.65).map((o) => o.masts as number))].sort((a, b) => a - b);
+    const counted = (start: number, least: number) => {
+      const asked: SchemeOptions[] = [];
+      const out = refineInFull(cableNet as unknown as SchemeModel, { options: { ...cableNet.defaults, masts: start, mastHeightRatio: 0.15, mastRingRatio: 0.65 }, riseM: 10 }, { rise: { kind: "fixed" } as RiseSetting, spanM: 300, pinned: [] }, (o, riseM) => {
+        asked.push(o);
+        return designNet(o, riseM, 100 + 5 * Math.abs((o.masts as number) - least) + 2000 * ((o.mastHeightRatio as number) - 0.15) ** 2 + (o.mastRingRatio === 0.65 ? 0 : 1));
+      }, (d) => d.totalMassKg);
+      return { masts: out.full.options.masts, counts: countsOf(asked) };
+    };
+    // the demo's nets past 160 m: the closed form's 12 masts, the 3D least at 6 (measured: 6 masts from 100 to 400 m)
+    expect(counted(12, 6)).toEqual({ masts: 6, counts: [5, 6, 7, 8, 12] });
+    // a least beside the screened count is still found, by the steps on from the best sample
+    expect(counted(12, 11).masts).toBe(11);
+  });
 });
