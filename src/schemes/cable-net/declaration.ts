@@ -72,12 +72,16 @@ export const cableNetDeclaration = declareScheme({
   // So it is refined first, on 3D designs at the screened mast height: the screened count, a half and two thirds of it
   // (the 3D count is below the closed form's at every span measured but the smallest, where the steps on find it), on to
   // a better neighbour while each step pays more than the 2 % band, and the least of those designed (refine-in-full.ts
-  // chosenCount). The screened count's own neighbours are not designed first: past 160 m they were never chosen (the 3D
-  // choice is 6 masts from 100 to 400 m, the closed form's 7–13), and leaving them out gave the same choice at all 37
-  // spans of the demo and of the default study, 34 and 33 fewer 3D designs, the demo's 3D pass 11–13 % less CPU (5 Dec). Demo study, 40–400 m every 10 m: 31 of 37 spans moved, by −1.2 to −25.5 %,
+  // chosenCount). Refining the count so, demo study, 40–400 m every 10 m: 31 of 37 spans moved, by −1.2 to −25.5 %,
   // the sum over the spans −10.7 %, none worse; default study −11.9 % (33 spans moved, up to −29.1 %). The price: four
   // or five more 3D designs a span, the span study's 3D pass about 2.2–2.8× the CPU (node: demo study 18 → 51 s, default
-  // 24 → 54 s). Each proportion is refined at the others' values, not together: at 60 m 3 masts at 0.15 stay where 4 at
+  // 24 → 54 s). The screened count's own neighbours are not designed first: past 160 m they were never chosen (the 3D
+  // choice is 6 masts from 100 to 400 m, the closed form's 7–13), and leaving them out gave the same choice at all 37
+  // spans of the demo and of the default study, 34 and 33 fewer 3D designs, the demo's 3D pass 11–13 % less CPU (5 Dec).
+  // Two thirds of the screened count is needed: without it the choice was the same at 73 of the 74 spans every 10 m of
+  // both studies (better at one: 310 m, demo, −6.3 %) for 6 and 3 fewer 3D designs, but at 5 m steps the count jumped
+  // to the screened one where the half lost to it (demo: 10 masts at 275 and 285 m, 6 at 270, 280 and 290 m; default:
+  // 8 masts at 285 m), which the smoothness tests caught (5 Dec, measured). Each proportion is refined at the others' values, not together: at 60 m 3 masts at 0.15 stay where 4 at
   // 0.11 are 7 % better (measured, pinned).
   // The mast ring radius is refined last, at the chosen count and height: its default 0.6 and 0.65 (which the closed
   // form chooses at every span of the demo study), the better kept. The 3D objective moves unevenly with it (demo
