@@ -23,8 +23,8 @@ export function callback<F extends (...args: never[]) => unknown>(fn: F): F {
  * Wraps an async call so that at most one runs and at most one waits: `request(args)` while a call
  * runs or is about to start replaces the waiting arguments; `onResult` gets only the answer to the
  * newest arguments sent. An idle call starts in a task of its own (a zero timeout), not in the
- * caller's: a slider step that sent the six schemes' designs to the workers itself took 50–60 ms
- * in about a third of the compare page's drags (issue 13: 50 ms budget; measured).
+ * caller's: the compare page's first span step, which sent the six schemes' designs itself, made
+ * a main-thread task of 51–63 ms in many drags (issue 13: 50 ms budget; measured).
  */
 export function latestOnly<A, R>(call: (args: A) => Promise<R>, onResult: (result: R, args: A) => void, onError: (error: unknown, args: A) => void): (args: A) => void {
   let running = false;

@@ -81,8 +81,8 @@ export const cableNetDeclaration = declareScheme({
   // Two thirds of the screened count is needed: without it the choice was the same at 73 of the 74 spans every 10 m of
   // both studies (better at one: 310 m, demo, −6.3 %) for 6 and 3 fewer 3D designs, but at 5 m steps the count jumped
   // to the screened one where the half lost to it (demo: 10 masts at 275 and 285 m, 6 at 270, 280 and 290 m; default:
-  // 8 masts at 285 m), which the smoothness tests caught (5 Dec, measured). Each proportion is refined at the others' values, not together: at 60 m 3 masts at 0.15 stay where 4 at
-  // 0.11 are 7 % better (measured, pinned).
+  // 8 masts at 285 m), which the smoothness tests caught (5 Dec, measured). Each proportion is refined at the others'
+  // values, not together: at 60 m 3 masts at 0.15 stay where 4 at 0.11 are 7 % better (measured, pinned).
   // The mast ring radius is refined last, at the chosen count and height: its default 0.6 and 0.65 (which the closed
   // form chooses at every span of the demo study), the better kept. The 3D objective moves unevenly with it (demo
   // study: 0.65 better by 8.0 % at 120 m and 11.6 % at 300 m, 0.6 better by 3.1 % at 160 m, measured). This one more
