@@ -99,7 +99,9 @@ export function spanMetricChart(points: readonly SpanPoint[], metric: SpanMetric
     height: 320,
     marginLeft: 60,
     x: { label: "Clear span (m)", grid: true },
-    y: { label, grid: true, type: log ? "log" : "linear", domain },
+    // a log axis labelled in plain numbers: d3's default for base 10 is SI prefixes, which wrote a
+    // ratio of 0.4 as "400m" (read as 400 metres) and 1,000 kg/m² as "1k"
+    y: { label, grid: true, type: log ? "log" : "linear", domain, ...(log ? { tickFormat: ",~g" } : {}) },
     color: colours(points),
     marks: [
       ...(relative ? [Plot.ruleY([1], { stroke: "#888" })] : []),

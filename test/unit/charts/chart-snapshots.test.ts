@@ -52,6 +52,22 @@ describe("chart specifications (snapshots)", () => {
     expect(html).not.toContain("4 masts");
     expect(html.match(/3 masts/g)).toHaveLength(1); // back to 3 masts at 120 m, held to the end of the range
   });
+  it("a log axis reads in plain numbers, not SI prefixes (a mass ratio of 0.4 once read \"400m\", as if metres)", () => {
+    // ratios from 0.3 to 30 and self-weights from 20 to 2,000: a log scale (more than ten times apart) across 1 in both
+    const points = fixtureSpanPoints().map((p) => ({ ...p, massToAir: p.id === "cable-dome" ? 0.3 : 30, selfWeightKgPerM2: p.id === "cable-dome" ? 20 : 2000 }));
+    const ticks = (metric: "massToAir" | "selfWeightKgPerM2") => {
+      const options = spanMetricChart(points, metric, "y", { title: "t", caption });
+      expect((options.y as { type?: string }).type).toBe("log");
+      const figure = Plot.plot({ ...options, document }) as unknown as HTMLElement;
+      return [...figure.querySelectorAll('[aria-label="y-axis tick label"] text')].map((t) => t.textContent ?? "");
+    };
+    const ratio = ticks("massToAir");
+    expect(ratio).toContain("0.4");
+    expect(ratio).toContain("10");
+    const weight = ticks("selfWeightKgPerM2");
+    expect(weight).toContain("1,000");
+    for (const label of [...ratio, ...weight]) expect(label).toMatch(/^(|[\d,.]+)$/);
+  });
   it("captions name the span, the brief and the factor set", () => {
     expect(caption).toMatch(/^Span 160 m, each scheme its own rise, eaves/); // the default study's rise rule is "own"
     expect(chartCaption({ ...study, brief: { ...study.brief, riseRule: "common" } })).toMatch(/^Span 160 m, rise 24 m/);
