@@ -604,6 +604,12 @@ export function mastRadialCables(net: CableNetModel): [number, number][][] {
   return cables.sort((a, b) => a.offAxis - b.offAxis).map((c) => c.points);
 }
 
+/** The central ring as form-found (under the permanent load): the mean plan radius and height above the eaves of its nodes, m. A free ring finds both; a held one stays where it is held. */
+export function formFoundRing(net: CableNetModel): { radiusM: number; heightM: number } {
+  const at = net.ringNodes.map((k) => net.model.nodes[k]!);
+  return { radiusM: at.reduce((sum, [x, y]) => sum + Math.hypot(x, y), 0) / at.length, heightM: at.reduce((sum, p) => sum + p[2], 0) / at.length };
+}
+
 /** The net drawn for the combination that moves it most: heights above the floor, forces, displacements, slack cables; the masts drawn as struts to the floor. */
 function netView(input: NetAnalysisInput, net: CableNetModel, caseName: string, s: CableSolution): AnalysisView {
   const base = input.brief.eavesHeightM;

@@ -143,9 +143,9 @@ function parabola(from: readonly [number, number], to: readonly [number, number]
  * each as (plan radius, height above the eaves) points, those nearest the section's plane first),
  * those instead, each circumferential cable marked at its radius on the first of its side, the fabric along
  * the first of each side (it spans from node to node of the net), and no valley cables: the 3D net
- * has none.
+ * has none. `ring`: the 3D net's central ring (formFoundRing), drawn there instead of the closed form's.
  */
-export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCables?: readonly (readonly (readonly [number, number])[])[]): DrawingLine[] {
+export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCables?: readonly (readonly (readonly [number, number])[])[], ring?: { radiusM: number; heightM: number }): DrawingLine[] {
   const lines: DrawingLine[] = [];
   const both = (role: string, pts: [number, number][]) => {
     lines.push({ role, points: pts });
@@ -182,8 +182,9 @@ export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCa
     }
   }
   lines.push({ role: "fabric", points: fabric });
-  const rc = layout.centralRingRadiusM;
-  lines.push({ role: "ring", points: [[-rc, layout.inner.endHeightM + eavesM], [rc, layout.inner.endHeightM + eavesM]] });
+  // the closed form's ring, or the 3D net's where given (a free ring finds its own radius and height: at 160 m, 16 m above the closed form's)
+  const { radiusM: rc, heightM: zc } = ring ?? { radiusM: layout.centralRingRadiusM, heightM: layout.inner.endHeightM };
+  lines.push({ role: "ring", points: [[-rc, zc + eavesM], [rc, zc + eavesM]] });
   const tick = a * 0.005;
   // each circumferential cable at its radius: on the roof in the closed form; in 3D on the radial cable of its side nearest the section's plane (the first given)
   const onCable = (r: number): number => {
@@ -202,7 +203,7 @@ export function cableNetSection(layout: CableNetLayout, eavesM: number, radialCa
 }
 
 /** The plan: masts (a cross each), their radial cables fanned over each mast's sector, the circumferential cables and the rings (plan x, y, m). */
-export function cableNetPlan(layout: CableNetLayout): DrawingLine[] {
+export function cableNetPlan(layout: CableNetLayout, ringRadiusM = layout.centralRingRadiusM): DrawingLine[] {
   const lines: DrawingLine[] = [];
   const a = layout.cap.baseRadiusM;
   const sector = (2 * Math.PI) / layout.masts;
@@ -218,11 +219,11 @@ export function cableNetPlan(layout: CableNetLayout): DrawingLine[] {
     for (let j = 0; j < n; j++) {
       const phi = theta + sector * ((j + 0.5) / n - 0.5);
       lines.push({ role: "radial cable", points: [[mx, my], [a * Math.cos(phi), a * Math.sin(phi)]] });
-      lines.push({ role: "radial cable", points: [[mx, my], [layout.centralRingRadiusM * Math.cos(phi), layout.centralRingRadiusM * Math.sin(phi)]] });
+      lines.push({ role: "radial cable", points: [[mx, my], [ringRadiusM * Math.cos(phi), ringRadiusM * Math.sin(phi)]] });
     }
   }
   for (const r of layout.hoopRadiiM) lines.push({ role: "circumferential cable", points: circle(r) });
-  lines.push({ role: "ring", points: circle(layout.centralRingRadiusM) });
+  lines.push({ role: "ring", points: circle(ringRadiusM) });
   lines.push({ role: "fabric", points: circle(a) });
   return lines;
 }

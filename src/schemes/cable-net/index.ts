@@ -9,7 +9,7 @@ import { PLAIN_CONCRETE_DENSITY_KG_PER_M3 } from "../../mechanics/concrete";
 import { cableNetLayout, cableNetPlan, cableNetSection, type CableNetLayout } from "./geometry";
 import { sizeCableNet, sizeNetFromAnalysis, MAST_SPLICE_TUBE_LENGTH_M, type NetSizing, type NetSizingInput } from "./sizing";
 import { MAST_SEGMENT_MAX_M } from "./laced-mast";
-import { analyseNet, mastRadialCables, lumpingNote, type NetAnalysis, type NetAnalysisInput } from "./analysis";
+import { analyseNet, formFoundRing, mastRadialCables, lumpingNote, type NetAnalysis, type NetAnalysisInput } from "./analysis";
 import { heightFieldMeasure } from "../../analysis/height-field";
 import { designBasis } from "../../loads";
 import { strandResistanceN } from "../../catalogue/pick-strand";
@@ -121,7 +121,7 @@ function analysedNet(input: NetSizingInput, closed: NetSizing, selfWeightKPa: nu
   const sized = sizeNetFromAnalysis(input, closed, {
     fabricSurfaceM2: surface.roofSurfaceM2,
     fabricPanelSpanM: surface.panelSpanM,
-    outerN: e.outerN, innerN: e.innerN, hoopN: e.hoopN, ringN: e.ringN, caseOf: e.caseOf, outerLengthM: analysis.outerLengthM, innerLengthM: analysis.innerLengthM,
+    outerN: e.outerN, innerN: e.innerN, hoopN: e.hoopN, ringN: e.ringN, caseOf: e.caseOf, outerLengthM: analysis.outerLengthM, innerLengthM: analysis.innerLengthM, ringRadiusM: formFoundRing(analysis.model).radiusM,
     mastForceN: analysis.mastForceN, mastCase: analysis.mastCase, backstayHorizontalN: analysis.backstayHorizontalN, anchorUpliftN: analysis.anchorUpliftN,
     ringUpliftN: analysis.ringUpliftN, ringUpliftCase: analysis.ringUpliftCase,
   });
@@ -231,6 +231,8 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
   const sized = analysed?.sized ?? converged.value;
   const analysis = analysed?.analysis;
   const surface = analysed?.surface;
+  // the 3D net as form-found, when its analysis found a prestress (drawn in the section and plan)
+  const found = analysis && analysis.reason === "" ? analysis.model : null;
   const checks = sized.groups.map((g) => check(g.element, g.governing, g.designForceN, g.resistanceN, "N"));
   if (analysis && analysis.reason === "") {
     const largest = Math.max(...analysis.summary.loadCases.map((c) => c.maxDisplacementM));
@@ -250,7 +252,8 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     governingLoadCase: sized.groups.filter((g) => g.kind !== "central ring").reduce((w, g) => (g.utilisation > w.utilisation ? g : w)).caseName,
     ...(surface ? { roofSurfaceM2: surface.roofSurfaceM2, enclosedVolumeM3: layout.cap.planAreaM2 * brief.eavesHeightM + surface.enclosedVolumeM3 } : capEnvelope(layout.cap, brief.eavesHeightM)),
     // the 3D net's section: its form-found radial cables, no valley cables (the closed form's are not built)
-    drawing: drawingWithLazyPlan(analysis && analysis.reason === "" ? () => cableNetSection(layout, brief.eavesHeightM, mastRadialCables(analysis.model)) : section, () => cableNetPlan(layout)),
+    // and its central ring where the form finding put it (a free ring finds its own radius and height)
+    drawing: drawingWithLazyPlan(found ? () => cableNetSection(layout, brief.eavesHeightM, mastRadialCables(found), formFoundRing(found)) : section, () => cableNetPlan(layout, found ? formFoundRing(found).radiusM : undefined)),
     ...(analysis ? { analysis: analysis.summary } : {}),
     reason: analysis?.reason ?? "",
   };

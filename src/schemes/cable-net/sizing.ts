@@ -324,6 +324,8 @@ export interface NetAnalysedForces {
   /** Length of one outer and one inner radial cable as found, m. */
   outerLengthM: number;
   innerLengthM: number;
+  /** Plan radius of the central ring as found (a free ring finds its own), m. */
+  ringRadiusM: number;
   mastForceN: number;
   mastCase: string;
   backstayHorizontalN: number;
@@ -374,7 +376,7 @@ export function sizeNetFromAnalysis(input: NetSizingInput, closed: NetSizing, f:
   const backstayN = f.backstayHorizontalN / Math.cos(BACKSTAY_SLOPE_RAD);
   strands("backstay", "backstays", layout.masts, layout.backstayLengthM, Math.max(backstayN, 1), f.mastCase);
   groups.push({ ...sizeMast(input, f.mastForceN), caseName: f.mastCase });
-  const ringLength = 2 * Math.PI * layout.centralRingRadiusM;
+  const ringLength = 2 * Math.PI * f.ringRadiusM;
   groups.push({ kind: "central ring", element: "central tension ring", material: "steel-plate", count: 1, lengthM: ringLength, designForceN: f.ringN, ...tensionRing(f.ringN, input.yieldPa, ringLength), caseName: f.caseOf["central ring"] ?? "" });
   const anchorUpliftN = f.anchorUpliftN + layout.masts * backstayN * Math.sin(BACKSTAY_SLOPE_RAD);
   const tie = tieDown(input, f.ringUpliftN, f.ringUpliftCase);

@@ -56,6 +56,25 @@ describe("3D analysis: the held centre makes the inner net anticlastic", () => {
     expect(atRing.length).toBeGreaterThan(0);
     for (const [, , z] of atRing) expect(z).toBeCloseTo(brief.eavesHeightM + layout.inner.endHeightM, 6);
   });
+  it("the section and the plan draw the central ring where the form finding put it: the free one far above the held one, where the inner radial cables end", () => {
+    const ringOf = (d: typeof free) => d.drawing.section.find((l) => l.role === "ring")!.points;
+    for (const d of [free, held]) {
+      const ring = ringOf(d);
+      // the inner radial cables (those ending inside the mast ring) end on the ring's line
+      const innerEnds = d.drawing.section.filter((l) => l.role === "radial cable" && Math.abs(l.points.at(-1)![0]) < Math.abs(l.points[0]![0])).map((l) => l.points.at(-1)!);
+      expect(innerEnds.length).toBeGreaterThan(0);
+      for (const [r, z] of innerEnds) {
+        expect(Math.abs(r)).toBeCloseTo(Math.abs(ring[0]![0]), 1);
+        expect(z).toBeCloseTo(ring[0]![1], 1);
+      }
+      // the plan's ring has the section's radius, and the take-off the ring's length at it
+      const planRing = d.drawing.plan!.find((l) => l.role === "ring")!.points;
+      expect(Math.hypot(...planRing[0]!)).toBeCloseTo(ring[1]![0], 6);
+      expectRelClose(d.members.find((m) => m.element === "central tension ring")!.lengthM, 2 * Math.PI * ring[1]![0], 1e-9);
+    }
+    // a free ring hangs where the net's prestress and loads put it, metres above the held one (at 160 m; measured 16 m)
+    expect(ringOf(free)[0]![1] - ringOf(held)[0]![1]).toBeGreaterThan(5);
+  });
   it("the tie-down is sized from the analysed pull (a strand group carrying it)", () => {
     const tie = held.members.find((m) => m.element === "central tie-down");
     const pullN = pullOf(held.warnings.find((w) => w.startsWith("the central ring is held"))) * 1000;
