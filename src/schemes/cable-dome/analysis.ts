@@ -47,19 +47,25 @@ export interface DomeAnalysis {
   governedBy: PrestressLimit | null;
 }
 
-/** Why a lower prestress failed: a cable kept too little of its prestress (or went slack), the roof moved too far, or a case found no equilibrium; and under which combination. */
-export interface PrestressLimit {
-  kind: "taut cables" | "displacement" | "no equilibrium";
-  caseName: string;
-  prestressN: number;
+/**
+ * Why a lower prestress failed: a cable kept too little of its prestress (or went slack), the roof
+ * moved too far, or a case found no equilibrium; and under which combination. For a cable, which
+ * one (named as in the member table) and the share of its prestress it kept (the least in that combination; 0 when slack).
+ */
+export type PrestressLimit =
+  | { kind: "taut cables"; caseName: string; prestressN: number; cable: { name: string; keptShare: number } }
+  | { kind: "displacement" | "no equilibrium"; caseName: string; prestressN: number };
+
+/** A member's name in the member table (sizing.ts names its groups so). */
+function memberName(family: DomeMemberTag["family"], index: number): string {
+  return family === "post" ? (index === 0 ? "central drum strut" : `post ${index}`) : family === "ridge" ? `ridge cable ${index}` : family === "diagonal" ? `diagonal ${index}` : family === "hoop" ? `hoop ${index}` : family;
 }
 
 function stiffnessOf(groups: readonly DomeMemberGroup[]) {
   const byName = new Map(groups.map((g) => [g.element, g]));
   const STEEL_E = 2.1e11;
   return (family: DomeMemberTag["family"], index: number): number => {
-    const name = family === "post" ? (index === 0 ? "central drum strut" : `post ${index}`) : family === "ridge" ? `ridge cable ${index}` : family === "diagonal" ? `diagonal ${index}` : family === "hoop" ? `hoop ${index}` : family;
-    const g = byName.get(name);
+    const g = byName.get(memberName(family, index));
     if (!g) return 1e9;
     return (g.modulusPa > 0 ? g.modulusPa : STEEL_E) * g.areaM2;
   };
@@ -138,8 +144,9 @@ const WARM_ROUNDS = 2;
 type Solved = { c: PlanCombination; s: CableSolution };
 type Round = { alpha: number; model: ReturnType<typeof cableDomeModel>; solved: Solved[]; complete: boolean; pass: boolean; estimate: number; failure: PrestressLimit | null };
 
-/** What one prestress round is judged on: the cables that must stay taut, their unit prestress forces, the residual share kept and the displacement limit. */
+/** What one prestress round is judged on: the members' tags (to name a failing cable), the cables that must stay taut, their unit prestress forces, the residual share kept and the displacement limit. */
 interface Judge {
+  tags: readonly DomeMemberTag[];
   mustStayTaut: readonly boolean[];
   unitForces: readonly number[];
   margin: number;
@@ -148,8 +155,9 @@ interface Judge {
 
 /**
  * The first failure of the solved cases at prestress α, in the order a lead would name it (no
- * equilibrium, a cable losing its prestress, too much movement; among equals the first case), and
- * the linear estimate of the passing α from the cables' forces.
+ * equilibrium, a cable losing its prestress, too much movement; among equals the first case; for a
+ * cable, the one keeping the least of its prestress in that case), and the linear estimate of the
+ * passing α from the cables' forces.
  */
 function judged(j: Judge, alpha: number, solved: readonly Solved[]): { estimate: number; failure: PrestressLimit | null } {
   let estimate = 0;
@@ -160,12 +168,22 @@ function judged(j: Judge, alpha: number, solved: readonly Solved[]): { estimate:
       continue;
     }
     if (largestDisplacementM(sol) > j.displacementLimitM) failures.push({ kind: "displacement", caseName: c.name, prestressN: alpha });
+    // the cable keeping the least share of its prestress in this combination
+    // (a slack one first, whatever the share required: it keeps nothing, even where none is required)
+    let least = { member: -1, share: Infinity, fails: false };
     sol.forcesN.forEach((f, m) => {
       if (!j.mustStayTaut[m]) return;
       const sm = j.unitForces[m] as number;
-      if ((sol.slack[m] || f < j.margin * alpha * sm) && !failures.some((x) => x.kind === "taut cables" && x.caseName === c.name)) failures.push({ kind: "taut cables", caseName: c.name, prestressN: alpha });
+      const slack = sol.slack[m] === true;
+      const fails = slack || f < j.margin * alpha * sm;
+      const share = slack ? -Infinity : f / (alpha * sm);
+      if (fails && (!least.fails || share < least.share)) least = { member: m, share, fails };
       estimate = Math.max(estimate, -(f - alpha * sm) / ((1 - j.margin) * sm));
     });
+    if (least.fails) {
+      const tag = j.tags[least.member] as DomeMemberTag;
+      failures.push({ kind: "taut cables", caseName: c.name, prestressN: alpha, cable: { name: memberName(tag.family, tag.index), keptShare: Math.max(0, least.share) } });
+    }
   }
   const order = ["no equilibrium", "taut cables", "displacement"];
   return { estimate, failure: failures.sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind))[0] ?? null };
@@ -194,7 +212,7 @@ export function analyseDome(input: DomeAnalysisInput): DomeAnalysis {
   const stiffness = stiffnessOf(input.groups);
   const unitModel = cableDomeModel(g, unit, stiffness);
   const mustStayTaut = unitModel.tags.map((t, m) => unitModel.model.members[m]?.kind === "cable" && !(input.slack === "diagonals" && t.family === "diagonal"));
-  const judge: Judge = { mustStayTaut, unitForces: unitModel.model.members.map((m) => m.initialForceN ?? 0), margin: input.residualPrestress, displacementLimitM: input.displacementLimitM };
+  const judge: Judge = { tags: unitModel.tags, mustStayTaut, unitForces: unitModel.model.members.map((m) => m.initialForceN ?? 0), margin: input.residualPrestress, displacementLimitM: input.displacementLimitM };
   const combos = analysedCombinations(input.combinations);
   const caseOrder = combos.map((_, i) => i);
   const done: Round[] = [];

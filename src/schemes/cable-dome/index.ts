@@ -105,7 +105,11 @@ function prestressWarning(analysis: DomeAnalysis, spanM: number, residualPrestre
   if (limit === null) return `prestress ${kN}: the lowest the analysis tried; with it every cable stays taut and the roof moves less than span/${(1 / DEFLECTION_LIMIT_RATIO).toFixed(0)} (no lower prestress was found to fail)`;
   const lower = `at ${(limit.prestressN / 1000).toFixed(0)} kN`;
   if (limit.kind === "displacement") return `prestress ${kN}, set by how far the roof may move: ${lower} it moves more than span/${(1 / DEFLECTION_LIMIT_RATIO).toFixed(0)} (${(spanM * DEFLECTION_LIMIT_RATIO).toFixed(2)} m) under ${limit.caseName}`;
-  if (limit.kind === "taut cables") return `prestress ${kN}, set by keeping the cables taut: ${lower} a cable keeps less than ${(100 * residualPrestress).toFixed(0)} % of its prestress under ${limit.caseName}`;
+  if (limit.kind === "taut cables") {
+    const { name, keptShare } = limit.cable;
+    const kept = keptShare === 0 ? "goes slack" : `keeps ${(100 * keptShare).toFixed(1)} % of its prestress`;
+    return `prestress ${kN}, set by keeping the cables taut: ${lower} ${name} ${kept} under ${limit.caseName}, against ${(100 * residualPrestress).toFixed(0)} % required`;
+  }
   return `prestress ${kN}, set by the analysis converging: ${lower} it found no balanced shape under ${limit.caseName} within ${DOME_MAX_ITERATIONS} iterations (counted as failing)`;
 }
 
