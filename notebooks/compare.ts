@@ -31,6 +31,8 @@ import {
   perFrame,
   chartTurns,
   proportionsSentences,
+  onDemandAnalysis,
+  onDemandAnalysisOption,
   setAttr,
   patchChildren,
 } from "../src/notebook";
@@ -294,13 +296,22 @@ for (const s of schemes) {
   modelSlot.className = "model-slot";
   modelSlot.id = `${id}-model-slot`;
   detail.body.append(modelSlot);
+  // or, where the scheme runs it on demand (the lattice domes) and it has not run, what it gives and a button that runs it
+  const onDemand = onDemandAnalysisOption(s.model);
   reactiveCell(modelSlot, { id: `${id}-model` }, () => {
-    const view = s.enabled.value && detail.open.value ? s.design.value?.analysis?.view : undefined;
-    if (!view) return null;
+    if (!s.enabled.value || !detail.open.value || s.design.value === null) return null;
+    const analysis = s.design.value.analysis;
+    const view = analysis?.view;
+    if (!view) return onDemand ? onDemandAnalysis(store, s.model, onDemand, s.current.value) : null;
     const wrap = document.createElement("div");
     wrap.className = "grid charts";
     for (const projection of ["plan", "oblique"] as const) {
       wrap.append(chartFigure(model3dChartOptions({ view, projection, title: `${s.model.label}: 3D analysis, ${projection === "plan" ? "plan" : "oblique view"}`, caption: caption.value }), `${id}-model-${projection}`));
+    }
+    // a lattice's lowest buckling mode, beside its deformed shape
+    if (view.modeShape) {
+      const factor = analysis.bucklingFactor === undefined ? "" : `, elastic factor ${fmt.two(analysis.bucklingFactor)}`;
+      wrap.append(chartFigure(model3dChartOptions({ view, projection: "oblique", mode: true, title: `${s.model.label}: 3D analysis, lowest buckling mode${factor} (oblique view)`, caption: caption.value }), `${id}-model-mode`));
     }
     return wrap;
   });

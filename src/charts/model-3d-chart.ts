@@ -37,6 +37,11 @@ function roundMagnification(m: number): number {
   return step * decade;
 }
 
+/** A drawn length in metres, to two significant figures. */
+function fmtLength(m: number): string {
+  return `${Number(m.toPrecision(2))} m`;
+}
+
 /** The shape drawn (displacements or mode shape) and its largest length, m (or mode units). */
 function shapeOf(input: Model3dChartInput): { shape: readonly P3[] | undefined; largest: number; label: string } {
   const shape = input.mode && input.view.modeShape ? input.view.modeShape : input.view.displacementsM;
@@ -80,10 +85,12 @@ export function model3dChartOptions(input: Model3dChartInput): Plot.PlotOptions 
   const built = segment(view.nodes);
   const deformed = segment(moved);
   const slack = view.members.filter((m) => m.slack).length;
-  const description = `${view.members.length} members and ${view.nodes.length} nodes in ${projection === "plan" ? "plan" : "an oblique view (azimuth −35°, elevation 25°)"}; ${label} under ${view.caseName} magnified ${magnification}× (largest ${largest.toFixed(3)}${input.mode ? "" : " m"}); ${slack} slack cables dashed; the most utilised members marked.`;
+  // a mode shape has no size of its own: say how large it is drawn rather than a magnification of arbitrary units
+  const scale = input.mode && view.modeShape ? `its largest movement drawn as ${fmtLength(magnification * largest)} (a buckling mode has no size of its own)` : `magnified ${magnification}×`;
+  const description = `${view.members.length} members and ${view.nodes.length} nodes in ${projection === "plan" ? "plan" : "an oblique view (azimuth −35°, elevation 25°)"}; ${label} under ${view.caseName}, ${input.mode && view.modeShape ? scale : `${scale} (largest ${largest.toFixed(3)} m)`}; ${slack} slack cables dashed; the most utilised members marked.`;
   return {
     title: input.title,
-    caption: `${input.caption} ${label[0]?.toUpperCase()}${label.slice(1)} under ${view.caseName}, magnified ${magnification}×; grey: as built.`,
+    caption: `${input.caption} ${label[0]?.toUpperCase()}${label.slice(1)} under ${view.caseName}, ${scale}; grey: as built.`,
     ariaLabel: input.title,
     ariaDescription: description,
     width: input.width ?? 460,

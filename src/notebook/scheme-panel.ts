@@ -66,6 +66,40 @@ export function schemeOptionControls(store: StudyStore, model: SchemeDeclaration
   return mount(h(SchemeOptions, { store, model, chosen }));
 }
 
+/** The option through which a scheme offers its 3D analysis on demand (issue 13: seconds at 160 m, so not in every design; the command line's --buckling sets it too). */
+export const ON_DEMAND_ANALYSIS_OPTION = "bucklingAnalysis";
+
+/** The scheme's on-demand analysis option, or null when it offers none. */
+export function onDemandAnalysisOption(model: SchemeDeclaration): OptionSpec | null {
+  return model.options.find((o) => o.key === ON_DEMAND_ANALYSIS_OPTION && o.kind === "toggle") ?? null;
+}
+
+/**
+ * Where a scheme's 3D model would be drawn but its analysis runs on demand: what it gives and a
+ * button that switches the option on (as the Options panel's toggle does, kept in the study); once
+ * on, that it is running (`current`: the design shown is for the study as it is), or why a current
+ * design has none (its cautions say).
+ */
+export function onDemandAnalysis(store: StudyStore, model: SchemeDeclaration, spec: OptionSpec, current: boolean): HTMLElement {
+  const binding = store.bind<boolean>(["schemes", model.id, "options", spec.key]);
+  const wrap = document.createElement("div");
+  wrap.className = "on-demand";
+  const p = document.createElement("p");
+  wrap.append(p);
+  if (binding.value.value === true) {
+    p.textContent = current ? "The 3D analysis is switched on but did not run for this design: the cautions above say why." : "The 3D analysis of the lattice is running (it takes seconds)…";
+    return wrap;
+  }
+  p.textContent = `The 3D analysis of this lattice runs only when asked, as it takes seconds: a rigid-jointed frame of the actual net, with its lowest buckling factor, and its deformed shape and buckling mode drawn here. It is the option “${spec.label}” under Options (on the command line, --buckling).`;
+  const button = document.createElement("button");
+  button.type = "button";
+  button.id = `${model.id}-run-analysis`;
+  button.textContent = "Run the 3D analysis";
+  button.addEventListener("click", () => binding.set(true));
+  wrap.append(button);
+  return wrap;
+}
+
 /** The member table of a design: forces (kN or MN), sections, utilisations, governing checks. */
 export function memberTable(design: Design): HTMLElement {
   return tableElement(

@@ -13,12 +13,12 @@ afterAll(async () => {
   await browser?.close();
 });
 
-/** The two model figures of a scheme: each chart's accessible name, description, caption and member titles. */
-async function modelFigures(page: Page, id: string) {
+/** The model figures of a scheme (plan and oblique view, and a lattice's buckling mode): each chart's accessible name, description, caption and member titles. */
+async function modelFigures(page: Page, id: string, count = 2) {
   const charts = page.locator(`#${id}-model-slot svg[role="img"]`);
-  await expect.poll(() => charts.count(), { timeout: 45_000 }).toBe(2);
+  await expect.poll(() => charts.count(), { timeout: 90_000 }).toBe(count);
   return Promise.all(
-    [0, 1].map(async (k) => {
+    Array.from({ length: count }, async (_, k) => {
       const svg = charts.nth(k);
       const figure = page.locator(`#${id}-model-slot .figure`).nth(k);
       return {
@@ -32,12 +32,12 @@ async function modelFigures(page: Page, id: string) {
 }
 
 function checkFigures(figures: Awaited<ReturnType<typeof modelFigures>>, label: RegExp): void {
-  const [plan, oblique] = figures;
+  const [plan, oblique] = figures as [(typeof figures)[number], (typeof figures)[number]];
   expect(plan!.name).toMatch(/3D analysis, plan$/);
   expect(oblique!.name).toMatch(/3D analysis, oblique view$/);
   expect(plan!.description).toMatch(/ nodes in plan; /);
   expect(oblique!.description).toMatch(/ nodes in an oblique view \(azimuth −35°, elevation 25°\); /);
-  for (const f of figures) {
+  for (const f of [plan, oblique]) {
     expect(f.description).toMatch(label);
     const magnified = /magnified ([\d.]+)×/.exec(f.description);
     expect(magnified).not.toBeNull();
@@ -73,9 +73,30 @@ describe("3D analysis figures on the compare page", () => {
     await page.click("#geodesic-dome-options-panel summary");
     await page.check("#geodesic-dome-bucklingAnalysis");
     await page.click("#geodesic-dome-details summary");
-    checkFigures(await modelFigures(page, "geodesic-dome"), /deformed shape under .+ magnified/);
+    const figures = await modelFigures(page, "geodesic-dome", 3);
+    checkFigures(figures, /deformed shape under .+ magnified/);
+    // and its lowest buckling mode, with its elastic factor, drawn at a stated size
+    expect(figures[2]!.name).toMatch(/3D analysis, lowest buckling mode, elastic factor [\d.]+ \(oblique view\)$/);
+    expect(figures[2]!.description).toMatch(/buckling mode under .+, its largest movement drawn as [\d.]+ m/);
     // its lattice follows the cap, which the section names
     await expect.poll(() => page.locator("#cell-geodesic-dome-drawing .figure").first().textContent(), { timeout: 45_000 }).toMatch(/roof cap, rise [\d.]+ m/);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+  it("the timber dome's details offer the on-demand analysis: the button switches the study's option on and the model with its buckling mode is drawn", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-comparison table");
+    await page.click("#timber-dome-details summary");
+    const slot = page.locator("#timber-dome-model-slot");
+    await expect.poll(() => slot.innerText(), { timeout: 45_000 }).toMatch(/runs only when asked/);
+    expect(await slot.innerText()).toContain("“3D analysis of the net (general buckling)”");
+    await page.click("#timber-dome-run-analysis");
+    // the option is the study's own: the Options panel's toggle shows it on
+    expect(await page.isChecked("#timber-dome-bucklingAnalysis")).toBe(true);
+    const figures = await modelFigures(page, "timber-dome", 3);
+    expect(await slot.innerText()).not.toMatch(/runs only when asked/);
+    expect(figures[2]!.name).toMatch(/lowest buckling mode, elastic factor [\d.]+ \(oblique view\)$/);
+    expect(figures[2]!.description).toMatch(/buckling mode/);
     expect(errors).toEqual([]);
     await page.close();
   });

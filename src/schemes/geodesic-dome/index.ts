@@ -163,7 +163,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
   if (tooLargeWarning) warnings.push(tooLargeWarning);
   const net = double || !opts.bucklingAnalysis || tooLarge ? null : analyseNet({ brief, cap, mesh: mesh(), bands: r.bands, selfWeightPlanKPa: latticeSelfWeightKPa(r, cap.surfaceM2) * (cap.surfaceM2 / cap.planAreaM2), steel: inputs.steel, knockDown: opts.knockDown, buckling: opts.bucklingAnalysis });
   if (double && opts.bucklingAnalysis) warnings.push("double layer: no 3D analysis of the net (the frame model is single-layer); bar forces from membrane theory only");
-  if (!net && !tooLarge) warnings.push("bar forces from membrane theory; the 3D analysis of the net (member forces under drifted snow, buckling factor) runs on demand");
+  if (!net && !tooLarge) warnings.push("bar forces from membrane theory; the 3D analysis of the net (member forces under drifted snow, buckling factor) runs on demand: the option “3D analysis of the net”, or --buckling on the command line");
   const maxMembrane = Math.max(...members.checks.map((c) => c.utilisation));
   const maxNet = net ? Math.max(...net.checks.map((c) => c.utilisation)) : 0;
   return {

@@ -33,5 +33,9 @@ describe("model3dChartOptions", () => {
   it("draws the buckling mode when asked and the view has one", () => {
     const o = model3dChartOptions({ view, projection: "plan", mode: true, title: "Lattice", caption: "" });
     expect(o.caption).toMatch(/Buckling mode/);
+    // a mode has no size: its drawn size is stated, not a magnification of its arbitrary units (unit mode × 2 = 2 m)
+    expect(o.caption).toMatch(/its largest movement drawn as 2 m \(a buckling mode has no size of its own\)/);
+    expect(o.caption).not.toMatch(/magnified/);
+    expect(o.ariaDescription).toMatch(/buckling mode under .+, its largest movement drawn as 2 m/);
   });
 });
