@@ -44,7 +44,8 @@ function netTakeoff(sized: NetSizing, fabric: Fabric): TakeoffRow[] {
   const cables = (element: string, kind: NetSizing["groups"][number]["kind"]) => tonnesRow(element, "steel-strand", "cable", massOfKinds(sized.groups, [kind]));
   return [
     cables("radial cables", "suspension"),
-    cables("valley cables", "valley"),
+    // the closed form's valley cables; the 3D net has none (no row for an element not built)
+    ...(sized.groups.some((g) => g.kind === "valley") ? [cables("valley cables", "valley")] : []),
     cables("circumferential cables", "circumferential"),
     cables("edge cables", "edge"),
     cables("backstays", "backstay"),

@@ -28,8 +28,12 @@ describe("cableNet.design", () => {
 
   it("names cables, masts, anchors and fabric in its take-off", () => {
     const elements = d.takeoff.map((r) => r.element);
-    for (const e of ["radial cables", "valley cables", "circumferential cables", "backstays", "masts", "anchors", "fabric"]) expect(elements).toContain(e);
+    for (const e of ["radial cables", "circumferential cables", "backstays", "masts", "anchors", "fabric"]) expect(elements).toContain(e);
     expect(d.takeoff.find((r) => r.element === "anchors")?.costItem).toBe("anchor");
+    // valley cables only where they are built: the closed form's net has them, the form-found 3D net (the default) none, and no empty row for them
+    expect(elements).not.toContain("valley cables");
+    const closed = design(DEFAULT_BRIEF, { ...cableNet.defaults, analysis: "closed-form" });
+    expect(closed.takeoff.find((r) => r.element === "valley cables")?.massKg).toBeGreaterThan(0);
   });
 
   it("more snow needs more cable", () => {
