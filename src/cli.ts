@@ -4,6 +4,7 @@ import { parseArgs as nodeParseArgs, type ParseArgsConfig } from "node:util";
 import { pathToFileURL } from "node:url";
 import { studyFromJson, describeProblems, BRIEF_LIMITS, type Study } from "./study";
 import { SCHEMES } from "./schemes";
+import { ON_DEMAND_ANALYSIS_OPTION } from "./schemes/declarations";
 import type { SchemeId } from "./schemes/types";
 import { defaultCatalogue } from "./catalogue/default-catalogue";
 import { formatCsv, parseDecimal, shown } from "./kernel/csv-table";
@@ -211,8 +212,6 @@ function loadStudy(parsed: Parsed, readText: (p: string) => string): Study {
   return withRunFlags(study, parsed);
 }
 
-/** The option a scheme offers for its on-demand 3D buckling analysis (issue 13). */
-const BUCKLING_OPTION = "bucklingAnalysis";
 
 /** The study as this run asks: --objective replaces the study's; --buckling switches on (and pins) the on-demand buckling analysis wherever a scheme offers it. */
 function withRunFlags(study: Study, parsed: Parsed): Study {
@@ -220,8 +219,8 @@ function withRunFlags(study: Study, parsed: Parsed): Study {
   if (!parsed.buckling) return { ...study, brief };
   const schemes = Object.fromEntries(
     Object.entries(study.schemes).map(([id, setting]) => {
-      const offers = SCHEMES.find((m) => m.id === id)?.options.some((o) => o.key === BUCKLING_OPTION) === true;
-      return [id, offers ? { ...setting, options: { ...setting.options, [BUCKLING_OPTION]: true }, pinned: [...(setting.pinned ?? []), BUCKLING_OPTION] } : setting];
+      const offers = SCHEMES.find((m) => m.id === id)?.options.some((o) => o.key === ON_DEMAND_ANALYSIS_OPTION) === true;
+      return [id, offers ? { ...setting, options: { ...setting.options, [ON_DEMAND_ANALYSIS_OPTION]: true }, pinned: [...(setting.pinned ?? []), ON_DEMAND_ANALYSIS_OPTION] } : setting];
     }),
   ) as Study["schemes"];
   return { ...study, brief, schemes };

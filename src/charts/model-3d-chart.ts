@@ -86,8 +86,9 @@ export function model3dChartOptions(input: Model3dChartInput): Plot.PlotOptions 
   const deformed = segment(moved);
   const slack = view.members.filter((m) => m.slack).length;
   // a mode shape has no size of its own: say how large it is drawn rather than a magnification of arbitrary units
-  const scale = input.mode && view.modeShape ? `its largest movement drawn as ${fmtLength(magnification * largest)} (a buckling mode has no size of its own)` : `magnified ${magnification}×`;
-  const description = `${view.members.length} members and ${view.nodes.length} nodes in ${projection === "plan" ? "plan" : "an oblique view (azimuth −35°, elevation 25°)"}; ${label} under ${view.caseName}, ${input.mode && view.modeShape ? scale : `${scale} (largest ${largest.toFixed(3)} m)`}; ${slack} slack cables dashed; the most utilised members marked.`;
+  const drawsMode = input.mode === true && view.modeShape !== undefined;
+  const scale = drawsMode ? `its largest movement drawn as ${fmtLength(magnification * largest)} (a buckling mode has no size of its own)` : `magnified ${magnification}×`;
+  const description = `${view.members.length} members and ${view.nodes.length} nodes in ${projection === "plan" ? "plan" : "an oblique view (azimuth −35°, elevation 25°)"}; ${label} under ${view.caseName}, ${drawsMode ? scale : `${scale} (largest ${largest.toFixed(3)} m)`}; ${slack} slack cables dashed; the most utilised members marked.`;
   return {
     title: input.title,
     caption: `${input.caption} ${label[0]?.toUpperCase()}${label.slice(1)} under ${view.caseName}, ${scale}; grey: as built.`,

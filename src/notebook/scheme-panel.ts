@@ -1,4 +1,5 @@
 import type { Design, OptionSpec, OptionValue, SchemeDeclaration } from "../schemes/types";
+import { ON_DEMAND_ANALYSIS_OPTION } from "../schemes/declarations";
 import { h, type ComponentChild } from "preact";
 import { useMemo } from "preact/hooks";
 import { computed } from "@preact/signals-core";
@@ -65,9 +66,6 @@ export function SchemeOptions({ store, model, chosen }: { store: StudyStore; mod
 export function schemeOptionControls(store: StudyStore, model: SchemeDeclaration, chosen: (key: string) => OptionValue | undefined = () => undefined): HTMLElement {
   return mount(h(SchemeOptions, { store, model, chosen }));
 }
-
-/** The option through which a scheme offers its 3D analysis on demand (issue 13: seconds at 160 m, so not in every design; the command line's --buckling sets it too). */
-export const ON_DEMAND_ANALYSIS_OPTION = "bucklingAnalysis";
 
 /** The scheme's on-demand analysis option, or null when it offers none. */
 export function onDemandAnalysisOption(model: SchemeDeclaration): OptionSpec | null {

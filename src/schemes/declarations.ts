@@ -31,3 +31,6 @@ const DECLARATIONS: { readonly [Id in SchemeId]: SchemeDeclaration<SchemeOptions
 
 /** Every scheme's declaration, in the order pages list them (the order of SCHEME_IDS). */
 export const SCHEME_DECLARATIONS: readonly SchemeDeclaration[] = SCHEME_IDS.map((id) => DECLARATIONS[id]);
+
+/** The option through which a scheme offers its 3D analysis on demand (issue 13: seconds at 160 m, so not in every design): the lattice domes' toggle, set by the compare page's button and the command line's --buckling. */
+export const ON_DEMAND_ANALYSIS_OPTION = "bucklingAnalysis";

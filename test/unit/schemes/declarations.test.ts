@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import { readFileSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { SCHEMES } from "../../../src/schemes";
-import { SCHEME_DECLARATIONS, SCHEME_IDS } from "../../../src/schemes/declarations";
+import { SCHEME_DECLARATIONS, SCHEME_IDS, ON_DEMAND_ANALYSIS_OPTION } from "../../../src/schemes/declarations";
 
 // The two registries: the declarations (what the main-thread pages read) and the designs (the
 // pipeline, the workers, the command line). It loops over the registries, naming no scheme.
@@ -54,5 +54,13 @@ describe("the declarations registry and the design registry", () => {
     ]);
     const extra = [...reached(resolve(SRC, "schemes/declarations.ts"))].filter((f) => !allowed.has(f));
     expect(extra).toEqual([]);
+  });
+  it("the on-demand 3D analysis (the compare page's button, --buckling) is a toggle, off by default, of the schemes that declare it: the lattice domes", () => {
+    const offering = SCHEME_DECLARATIONS.filter((d) => d.options.some((o) => o.key === ON_DEMAND_ANALYSIS_OPTION));
+    expect(offering.map((d) => d.id).sort()).toEqual(["geodesic-dome", "timber-dome"]);
+    for (const d of offering) {
+      expect(d.options.find((o) => o.key === ON_DEMAND_ANALYSIS_OPTION)?.kind).toBe("toggle");
+      expect(d.defaults[ON_DEMAND_ANALYSIS_OPTION]).toBe(false);
+    }
   });
 });
