@@ -1,4 +1,5 @@
 import { diff, mergeDiff } from "../kernel/patch";
+import { canonicalJson } from "../kernel/memo";
 import { studyFromObject, type LoadResult } from "./load-study";
 import { defaultRiskSettings } from "../risk/default-risk-settings";
 import type { Study } from "./study";
@@ -9,6 +10,9 @@ import type { Study } from "./study";
 // (an edit of a factor moves those defaults and used to put the whole risk table in the link),
 // as JSON in base64url; `compressStudyLink` then deflates it ("deflate-raw", prefix "z").
 // Format 1 links (the whole changed array, risk all or nothing, never compressed) still open.
+// A link also carries a fingerprint of the defaults it was made against ("b"): a link records only
+// what differs from them, so when they have changed since (a factor default set to its read value,
+// say) the values it leaves to the defaults are today's, and the page says so.
 
 const ARRAY_LENGTH = "#";
 
@@ -46,26 +50,47 @@ export function encodeStudyLink(study: Study, defaults: Study): string {
   const { risk: _risk, ...base } = defaults;
   const d = diff(toTree(base), toTree(rest)) ?? {};
   const r = diff(toTree(defaultRiskSettings(rest)), toTree(risk));
-  const payload = r === undefined ? { v: study.schemaVersion, f: 2, d } : { v: study.schemaVersion, f: 2, d, r };
+  const payload = { v: study.schemaVersion, f: 2, b: defaultsFingerprint(defaults), d, ...(r === undefined ? {} : { r }) };
   return toBase64Url(new TextEncoder().encode(JSON.stringify(payload)));
 }
 
+/** A short fingerprint of the default study a link is made against (FNV-1a, 32 bits, of its canonical JSON, risk left out as links derive it), in hex. */
+export function defaultsFingerprint(defaults: Study): string {
+  const { risk: _risk, ...base } = defaults;
+  let h = 0x811c9dc5;
+  for (const ch of canonicalJson(base)) {
+    h ^= ch.codePointAt(0)!;
+    h = Math.imul(h, 0x01000193) >>> 0;
+  }
+  return h.toString(16).padStart(8, "0");
+}
+
+/** A decoded link: the study, and whether it was made against other defaults than today's (then the values it leaves to them have changed). */
+export type LinkResult = LoadResult & { otherDefaults?: boolean };
+
 
 /** Decodes a fragment made by encodeStudyLink (either format, uncompressed); a broken or invalid link changes nothing and says why. */
-export function decodeStudyLink(fragment: string, defaults: Study): LoadResult {
-  let payload: { v?: unknown; f?: unknown; d?: unknown; r?: unknown };
+export function decodeStudyLink(fragment: string, defaults: Study): LinkResult {
+  const opened = decodedStudy(fragment, defaults);
+  if (!opened.result.ok || opened.madeAgainst === undefined || opened.madeAgainst === defaultsFingerprint(defaults)) return opened.result;
+  return { ...opened.result, otherDefaults: true };
+}
+
+/** The study in a link, and the fingerprint of the defaults it was made against (links before it was recorded have none). */
+function decodedStudy(fragment: string, defaults: Study): { result: LoadResult; madeAgainst?: unknown } {
+  let payload: { v?: unknown; f?: unknown; b?: unknown; d?: unknown; r?: unknown };
   try {
     payload = JSON.parse(new TextDecoder("utf-8", { fatal: true }).decode(fromBase64Url(fragment))) as typeof payload;
   } catch {
-    return { ok: false, problems: [{ path: "(link)", message: "the link is damaged (expected a study link made by spanbook)" }] };
+    return { result: { ok: false, problems: [{ path: "(link)", message: "the link is damaged (expected a study link made by spanbook)" }] } };
   }
-  if (typeof payload !== "object" || payload === null) return { ok: false, problems: [{ path: "(link)", message: "the link holds no study" }] };
+  if (typeof payload !== "object" || payload === null) return { result: { ok: false, problems: [{ path: "(link)", message: "the link holds no study" }] } };
   const { risk: _risk, ...base } = defaults;
-  if (payload.f !== 2) return studyFromObject(mergeDiff({ ...base, schemaVersion: payload.v }, payload.d));
+  if (payload.f !== 2) return { result: studyFromObject(mergeDiff({ ...base, schemaVersion: payload.v }, payload.d)) };
   const opened = studyFromObject(fromTree(mergeDiff(toTree({ ...base, schemaVersion: payload.v }), payload.d)));
-  if (!opened.ok || payload.r === undefined) return opened;
+  if (!opened.ok || payload.r === undefined) return { result: opened, madeAgainst: payload.b };
   const { risk: _derived, ...rest } = opened.study;
-  return studyFromObject({ ...opened.study, risk: fromTree(mergeDiff(toTree(defaultRiskSettings(rest)), payload.r)) });
+  return { result: studyFromObject({ ...opened.study, risk: fromTree(mergeDiff(toTree(defaultRiskSettings(rest)), payload.r)) }), madeAgainst: payload.b };
 }
 
 /** Prefix of a compressed fragment (an uncompressed one is base64url of "{", so it starts with "e"). */

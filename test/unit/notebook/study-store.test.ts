@@ -187,6 +187,19 @@ describe("item 7: a shared link keeps the local study as a backup", () => {
   });
 });
 
+describe("a link made against other defaults", () => {
+  it("a link made against other defaults opens with a notice saying its untouched values are today's", () => {
+    const today = defaultStudy();
+    const before = setIn(today, ["brief", "servicesKPa"], today.brief.servicesKPa + 0.1);
+    history.replaceState(null, "", `/compare.html#s=${encodeStudyLink(setIn(before, ["brief", "spanM"], 90), before)}`);
+    const store = open();
+    expect(store.study.value.brief.spanM).toBe(90);
+    expect(store.notice.value).toMatch(/This link was made when spanbook's defaults .* were different/);
+    history.replaceState(null, "", `/compare.html#s=${encodeStudyLink(setIn(today, ["brief", "spanM"], 90), today)}`);
+    expect(open().notice.value).not.toMatch(/defaults .* were different/);
+  });
+});
+
 describe("item 6: another tab's save", () => {
   it("is taken over with a banner offering this tab's version back, and is not written again", () => {
     const store = open();

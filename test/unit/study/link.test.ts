@@ -2,6 +2,7 @@
 import { describe, it, expect } from "vitest";
 import demo from "../../../data/demo-study.json";
 import { defaultStudy, validateStudy, encodeStudyLink, decodeStudyLink, compressStudyLink, inflateStudyLink, type Study } from "../../../src/study";
+import { defaultsFingerprint } from "../../../src/study/link";
 import { diff, setIn } from "../../../src/kernel/patch";
 
 /** A link as format 1 made it (before issue 14): the whole diff with arrays whole, risk left out, no compression. */
@@ -65,5 +66,35 @@ describe("short study links (issue 14)", () => {
     await expect(inflateStudyLink("zAAAA-not-deflate")).rejects.toThrow();
     const plain = encodeStudyLink(base, defaults);
     expect(await inflateStudyLink(plain)).toBe(plain);
+  });
+});
+
+describe("a link made against other defaults (they record only what differs from them)", () => {
+  const today = defaultStudy();
+  const hollow = today.carbon.factors.findIndex((f) => f.material === "steel-hot-finished-hollow");
+  // the defaults as they were before 5 Dec 2026: the hollow-section factor 1.94, since set to its read value 2.13
+  const before = setIn(today, ["carbon", "factors", hollow, "a1a3KgCO2ePerKg"], 1.94);
+  const edited = setIn(before, ["brief", "spanM"], 120);
+  it("opens, says so, and its untouched values are today's defaults", () => {
+    const back = decodeStudyLink(encodeStudyLink(edited, before), today);
+    expect(back.ok && back.otherDefaults).toBe(true);
+    if (!back.ok) return;
+    expect(back.study.brief.spanM).toBe(120);
+    expect(back.study.carbon.factors[hollow]?.a1a3KgCO2ePerKg).toBe(today.carbon.factors[hollow]?.a1a3KgCO2ePerKg);
+  });
+  it("made against today's defaults, or before links recorded them, it opens without a word", () => {
+    const same = decodeStudyLink(encodeStudyLink(edited, today), today);
+    expect(same.ok && same.otherDefaults).toBeFalsy();
+    const payload = JSON.parse(Buffer.from(encodeStudyLink(edited, before), "base64url").toString("utf8")) as Record<string, unknown>;
+    expect(typeof payload.b).toBe("string");
+    delete payload.b;
+    const older = decodeStudyLink(Buffer.from(JSON.stringify(payload)).toString("base64url"), today);
+    expect(older.ok && older.otherDefaults).toBeFalsy();
+  });
+  it("the fingerprint moves with any default and not with the risk settings, which links derive", () => {
+    expect(defaultsFingerprint(before)).not.toBe(defaultsFingerprint(today));
+    expect(defaultsFingerprint(setIn(today, ["brief", "snowGroundKPa"], 0.9))).not.toBe(defaultsFingerprint(today));
+    expect(defaultsFingerprint({ ...today, risk: { ...today.risk, samples: 77 } })).toBe(defaultsFingerprint(today));
+    expect(defaultsFingerprint(today)).toMatch(/^[0-9a-f]{8}$/);
   });
 });
