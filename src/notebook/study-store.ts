@@ -129,7 +129,7 @@ function openStudy(options: StoreOptions, defaults: Study, restore: (key: string
     if (result.ok) {
       out.study = result.study;
       out.origin = "link";
-      if (result.otherDefaults) out.notices.push("This link was made when spanbook's defaults (its factor, rate and brief defaults) were different. A link records only what its sender changed, so everything else now takes today's defaults and its figures can differ from those the sender saw: for the exact study, ask for the study file.");
+      if (result.otherDefaults) out.notices.push("This link was made when spanbook's defaults (factors, rates, brief, scheme options) were different. A link records only what its sender changed, so everything else now takes today's defaults and its figures can differ from those the sender saw: for the exact study, ask for the study file.");
       // Saved at once so every page shows it, unless the stored entry is unreadable: then only
       // after a change, like any page opened over an unreadable entry (item 4).
       out.writeNow = options.persist && !stored?.unreadable;

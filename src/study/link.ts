@@ -68,7 +68,6 @@ export function defaultsFingerprint(defaults: Study): string {
 /** A decoded link: the study, and whether it was made against other defaults than today's (then the values it leaves to them have changed). */
 export type LinkResult = LoadResult & { otherDefaults?: boolean };
 
-
 /** Decodes a fragment made by encodeStudyLink (either format, uncompressed); a broken or invalid link changes nothing and says why. */
 export function decodeStudyLink(fragment: string, defaults: Study): LinkResult {
   const opened = decodedStudy(fragment, defaults);
