@@ -13,6 +13,8 @@ import type { RiskProgress } from "../src/risk/run-risk";
 import { workerApi, callback } from "../src/kernel/worker-call";
 import { messageOf } from "../src/kernel/errors";
 import type { Study } from "../src/study";
+import { onDemandAnalysesOn, withoutOnDemandAnalyses } from "../src/study/on-demand";
+import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
 import type { SchemeId } from "../src/schemes";
 import { riskInputsEditor, ensureRiskStyle } from "../src/notebook";
 
@@ -126,7 +128,8 @@ runButton.addEventListener("click", () => {
     status.value = { state: "failed", text: `The risk worker failed: ${event.message}`, fraction: 0 };
   };
   workerApi<RiskWorkerApi>(started)
-    .api.run(study, study.risk.samples, study.seed, callback(onProgress))
+    // the lattice domes' on-demand 3D analysis (seconds a design) is left out of the draws: it runs where asked, in a scheme's details
+    .api.run(withoutOnDemandAnalyses(study), study.risk.samples, study.seed, callback(onProgress))
     .then(
       (reply) => {
         if (worker !== started) return;
@@ -198,7 +201,9 @@ resultsCells.push(reactiveCell(main, { id: "risk-results", title: "Results" }, (
   verdict.className = "risk-verdict";
   verdict.textContent = riskVerdict(res);
   const note = document.createElement("p");
-  note.textContent = `${res.samples} draws, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost in ${res.currency}, estimate class ${res.estimateClass.label}. ${res.coverage}`;
+  const on = onDemandAnalysesOn(r.study).map((id) => `the ${SCHEME_DECLARATIONS.find((d) => d.id === id)?.label.toLowerCase() ?? id}`);
+  const left = on.length === 0 ? "" : ` The on-demand 3D analysis of ${new Intl.ListFormat("en", { type: "conjunction" }).format(on)}, switched on in this study, is left out of the draws (seconds a design).`;
+  note.textContent = `${res.samples} draws, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost in ${res.currency}, estimate class ${res.estimateClass.label}. ${res.coverage}${left}`;
   const rows = res.schemes.flatMap((s) =>
     RISK_METRICS.map((metric) => {
       const m = s.metrics[metric];

@@ -13,3 +13,4 @@ export { readStoredStudy, writeStoredStudy, backupUnreadable, STORAGE_KEY, UNREA
 export { setIn, getIn, diff, mergeDiff, sameValue } from "../kernel/patch";
 export type { FieldProblem } from "../kernel/validate";
 export { assumptionsRecord, studyFileText, type Assumption } from "./assumptions";
+export { onDemandAnalysesOn, withoutOnDemandAnalyses } from "./on-demand";

@@ -6,6 +6,8 @@ import { join } from "node:path";
 import { launchChromium, openPage, resultsSettled } from "./browser";
 import { PAGES } from "../../src/notebook/pages";
 import { SCHEMES } from "../../src/schemes";
+import { defaultStudy, encodeStudyLink, setIn } from "../../src/study";
+import { ON_DEMAND_ANALYSIS_OPTION } from "../../src/schemes/declarations";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -99,6 +101,23 @@ describe("span study", () => {
     expect(errors).toEqual([]);
     await page.close();
   }, 240_000);
+});
+
+describe("span study with the lattice domes' on-demand analysis switched on", () => {
+  it("designs every span without it, and says so", async () => {
+    // the study as the compare page's "Run the 3D analysis" leaves it: the option on for both lattice domes
+    let study = defaultStudy();
+    for (const id of ["geodesic-dome", "timber-dome"] as const) study = setIn(study, ["schemes", id, "options", ON_DEMAND_ANALYSIS_OPTION], true);
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/span-study.html#s=${encodeStudyLink(study, defaultStudy())}`);
+    await page.fill("#fromM", "150");
+    await page.locator("#fromM").press("Enter");
+    await page.fill("#toM", "160");
+    await page.locator("#toM").press("Enter");
+    await page.waitForFunction(() => /^2 spans .* computed in/.test(document.querySelector("#cell-status")?.textContent ?? ""), undefined, { timeout: 120_000 });
+    expect(await page.locator("#cell-status").innerText()).toMatch(/The on-demand 3D analysis of the geodesic steel dome and the glulam timber dome, switched on in this study, is left out here \(seconds a design, at every span\): their points are designed without it\.$/);
+    expect(errors).toEqual([]);
+    await page.close();
+  }, 180_000);
 });
 
 describe("client export", () => {
