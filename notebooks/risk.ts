@@ -13,10 +13,9 @@ import type { RiskProgress } from "../src/risk/run-risk";
 import { workerApi, callback } from "../src/kernel/worker-call";
 import { messageOf } from "../src/kernel/errors";
 import type { Study } from "../src/study";
-import { onDemandAnalysesOn, withoutOnDemandAnalyses } from "../src/study/on-demand";
-import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
+import { withoutOnDemandAnalyses } from "../src/study/on-demand";
 import type { SchemeId } from "../src/schemes";
-import { riskInputsEditor, ensureRiskStyle } from "../src/notebook";
+import { riskInputsEditor, ensureRiskStyle, onDemandLeftOutText } from "../src/notebook";
 
 const { store, main } = startPage({
   id: "risk",
@@ -201,9 +200,8 @@ resultsCells.push(reactiveCell(main, { id: "risk-results", title: "Results" }, (
   verdict.className = "risk-verdict";
   verdict.textContent = riskVerdict(res);
   const note = document.createElement("p");
-  const on = onDemandAnalysesOn(r.study).map((id) => `the ${SCHEME_DECLARATIONS.find((d) => d.id === id)?.label.toLowerCase() ?? id}`);
-  const left = on.length === 0 ? "" : ` The on-demand 3D analysis of ${new Intl.ListFormat("en", { type: "conjunction" }).format(on)}, switched on in this study, is left out of the draws (seconds a design).`;
-  note.textContent = `${res.samples} draws, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost in ${res.currency}, estimate class ${res.estimateClass.label}. ${res.coverage}${left}`;
+  const left = onDemandLeftOutText(r.study, "of the draws (seconds a design)");
+  note.textContent = `${res.samples} draws, seed ${res.seed}, ${res.designSamples} design draws (designs made per scheme: ${Object.values(res.designsPerScheme).join(", ")}). Cost in ${res.currency}, estimate class ${res.estimateClass.label}. ${res.coverage}${left ? ` ${left}` : ""}`;
   const rows = res.schemes.flatMap((s) =>
     RISK_METRICS.map((metric) => {
       const m = s.metrics[metric];

@@ -1,11 +1,11 @@
 // Span study: every enabled scheme across a range of spans, with the spans where the best one changes.
 import "../src/notebook/style.css";
 import demoStudy from "../data/demo-study.json";
-import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, effect, numberControl, toggleControl, controlGroup, spanStudyRunner, keptRange, keepRange, fmt, chartTurns } from "../src/notebook";
+import { startPage, reactiveCell, staticCell, chartFigure, computed, signal, effect, numberControl, toggleControl, controlGroup, spanStudyRunner, keptRange, keepRange, fmt, chartTurns, onDemandLeftOutText } from "../src/notebook";
 import { spanMetricChart, spanValidityChart, chartCaption, type SpanMetric } from "../src/charts";
 import { describeCrossovers, valuesBySpan, type SpanRange, type SpanPoint } from "../src/comparison";
 import { SCHEME_DECLARATIONS } from "../src/schemes/declarations";
-import { onDemandAnalysesOn, withoutOnDemandAnalyses } from "../src/study/on-demand";
+import { withoutOnDemandAnalyses } from "../src/study/on-demand";
 
 const { store, main } = startPage({
   id: "span-study",
@@ -87,9 +87,8 @@ reactiveCell(main, { id: "status" }, () => {
   const workers = `in ${s.workers} background worker${s.workers > 1 ? "s" : ""}`;
   const passes = s.again.length === 0 ? "" : `: every scheme in ${fmt.int(s.screeningMs)} ms with ${namesOf(s.again)} by the closed form, then again by the 3D analysis, as on the compare page`;
   const kept = s.reused === 0 ? "" : ` ${s.reused === spans ? "Every span" : `${s.reused} of the ${spans} spans`} kept from an earlier run of the same study: only new spans are designed.`;
-  const on = onDemandAnalysesOn(store.study.value);
-  const left = on.length === 0 ? "" : ` The on-demand 3D analysis of ${namesOf(on)}, switched on in this study, is left out here (seconds a design, at every span): their points are designed without it.`;
-  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (${workers}${passes}).${kept}${left}`;
+  const left = onDemandLeftOutText(store.study.value, "here (seconds a design, at every span): their points are designed without it");
+  return `${spans} spans × ${new Set(s.points.map((p) => p.id)).size} schemes computed in ${fmt.int(s.ms)} ms (${workers}${passes}).${kept}${left ? ` ${left}` : ""}`;
 });
 
 const validityCell = reactiveCell(main, { id: "validity", title: "Where each scheme applies" }, () => {

@@ -15,7 +15,7 @@ export { chartTurns, type ChartTurns } from "./chart-turns";
 export { proportionsSentences, proportionText } from "./proportions-text";
 export { briefControls } from "./brief-controls";
 export { keyValues } from "./key-values";
-export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary, schemeStatusLine, onDemandAnalysis, onDemandAnalysisOption } from "./scheme-panel";
+export { schemeOptionControls, memberTable, checkTable, takeoffTable, schemeSummary, schemeStatusLine, onDemandAnalysis, onDemandAnalysisOption, onDemandLeftOutText } from "./scheme-panel";
 export { answerParts, inSentence, metricText, type AnswerPart } from "./answer";
 export { sortableTable, liveSortableTable, type SortColumn, type SortableOptions, type LiveSortableTable } from "./sortable-table";
 export { resultsTable, liveResultsTable, resultColumns } from "./results-table";

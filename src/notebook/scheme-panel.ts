@@ -1,5 +1,7 @@
 import type { Design, OptionSpec, OptionValue, SchemeDeclaration } from "../schemes/types";
-import { ON_DEMAND_ANALYSIS_OPTION } from "../schemes/declarations";
+import { ON_DEMAND_ANALYSIS_OPTION, SCHEME_DECLARATIONS } from "../schemes/declarations";
+import { onDemandAnalysesOn } from "../study/on-demand";
+import type { Study } from "../study/study";
 import { h, type ComponentChild } from "preact";
 import { useMemo } from "preact/hooks";
 import { computed } from "@preact/signals-core";
@@ -65,6 +67,15 @@ export function SchemeOptions({ store, model, chosen }: { store: StudyStore; mod
 /** SchemeOptions mounted on an element of its own, for the compare page's hand-built cells. */
 export function schemeOptionControls(store: StudyStore, model: SchemeDeclaration, chosen: (key: string) => OptionValue | undefined = () => undefined): HTMLElement {
   return mount(h(SchemeOptions, { store, model, chosen }));
+}
+
+/**
+ * Where a page designs every span or draw without the on-demand analysis (withoutOnDemandAnalyses):
+ * the sentence that says so when the study has it switched on, else "". `where`: "here (…)" or "of the draws (…)".
+ */
+export function onDemandLeftOutText(study: Study, where: string): string {
+  const on = onDemandAnalysesOn(study).map((id) => `the ${SCHEME_DECLARATIONS.find((d) => d.id === id)?.label.toLowerCase() ?? id}`);
+  return on.length === 0 ? "" : `The on-demand 3D analysis of ${new Intl.ListFormat("en", { type: "conjunction" }).format(on)}, switched on in this study, is left out ${where}.`;
 }
 
 /** The scheme's on-demand analysis option, or null when it offers none. */
