@@ -81,9 +81,19 @@ function descentEnd(trend: number, values: readonly number[], sampled: readonly 
   return least < trend ? Math.min(...feasible) : Math.max(...feasible);
 }
 
-/** A sampled proportion's choice on the trend through its samples (trendChoice), stepped on with `descend` (descentEnd, descended); `best` is the best feasible sample. */
-function chosenOnTrend(refined: { descend?: boolean }, axis: Axis, sampled: readonly { index: number; value: number }[], best: number, objectiveAt: (index: number) => number): number {
+/**
+ * A sampled proportion's choice on the trend through its samples (trendChoice), stepped on with
+ * `descend` (descentEnd, descended); `best` is the best feasible sample. With `beyond`, a choice at the
+ * outermost sample steps on outwards instead (descended towards the grid's end): one more full design
+ * where the first step does not pay.
+ */
+function chosenOnTrend(refined: { descend?: boolean; beyond?: boolean }, axis: Axis, sampled: readonly { index: number; value: number }[], best: number, objectiveAt: (index: number) => number): number {
   const trend = trendChoice(axis.values, sampled, axis.reference, PROPORTION_TIE_FRACTION);
+  if (refined.beyond) {
+    const indices = sampled.map((s) => s.index);
+    const outward = trend === Math.min(...indices) ? 0 : trend === Math.max(...indices) ? axis.values.length - 1 : trend;
+    if (outward !== trend) return descended(trend, outward, objectiveAt);
+  }
   return refined.descend ? descended(trend, descentEnd(trend, axis.values, sampled, best), objectiveAt) : trend;
 }
 
@@ -120,7 +130,8 @@ function chosenCount(axis: Axis, sampled: readonly { index: number; value: numbe
  * else an option's search reference or default, the preferred rise) — the rise's trend rule (./rise-trend.ts). Where the
  * value so chosen is infeasible, the best feasible sample; where no sample is feasible, the
  * proportion stays. With `descend` the choice then steps towards the fitted least (descentEnd) while each step's
- * full design is better by more than the tie band (descended). A count with `neighbours` is designed at its
+ * full design is better by more than the tie band (descended); with `beyond`, a choice at the outermost sample
+ * steps on past it while each step is so better. A count with `neighbours` is designed at its
  * screened value and its neighbours (chosenCount). Returns the final design (designed once, samples reused), the
  * least of the other feasible full designs (its runner-up, null when there is none), what was refined and how many full designs it took.
  */

@@ -244,12 +244,15 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
    * the other proportions kept; of the values within the tie band of the fitted least, the nearest
    * `reference` (default: the option's search reference or default, the preferred rise). With
    * `descend`, the value so chosen then steps towards the best sample while each step's full design
-   * is better by more than the tie band (the trend misjudged a steep, uneven objective). A count
+   * is better by more than the tie band (the trend misjudged a steep, uneven objective). With
+   * `beyond`, a choice at the outermost sample steps on past it, one grid value at a time, while each
+   * step's full design is better by more than the tie band (the samples missed a better value outside
+   * them). A count
    * declares `neighbours` (and `ratios`) instead: it is designed at the screened value, that many grid
    * steps either side and those multiples of it, steps on from the best to a neighbour while that is
    * better by more than the tie band, and takes the least of the counts designed.
    */
-  refinedInFull?: readonly ({ key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number; descend?: boolean } | { key: keyof O & string; neighbours: number; ratios?: readonly number[] })[];
+  refinedInFull?: readonly ({ key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number; descend?: boolean; beyond?: boolean } | { key: keyof O & string; neighbours: number; ratios?: readonly number[] })[];
 }
 
 /** A scheme: its declaration and its designer (the design registry, ./index.ts: the pipeline, the workers and the command line). */

@@ -132,6 +132,29 @@ describe("descended: the refined choice steps towards the fitted least on the fu
   });
 });
 
+describe("refineInFull: with beyond declared, the choice steps on past the outermost sample (made-up objectives)", () => {
+  const run = (objective: (x: number) => number, beyond: boolean) => {
+    const asked: number[] = [];
+    const result = refineInFull(model([{ key: "depth", samples: [0.6, 0.65], reference: 0.6, beyond }]), { options: { depth: 0.6 }, riseM: 10 }, at, (o, riseM) => {
+      asked.push(o.depth as number);
+      return designed(o, riseM, objective(o.depth as number));
+    }, (d) => d.totalMassKg);
+    return { asked, value: result.refinements[0]!.value, objective: result.full.objective };
+  };
+  it("steps below the lower sample while each step is better by more than the tie band, and stops at the first that is not", () => {
+    const objective = (x: number) => ({ 65: 140, 64: 150, 60: 137, 59: 130, 58: 120, 57: 119 } as Record<number, number>)[Math.round(100 * x)] ?? 200;
+    expect(run(objective, false)).toEqual({ asked: [0.6, 0.65], value: 0.6, objective: 137 });
+    const stepped = run(objective, true);
+    expect(stepped.value).toBe(0.58); // 0.57 is better than 0.58 by less than the 2 % band
+    expect(stepped.asked).toEqual([0.6, 0.65, 0.59, 0.58, 0.57]);
+    expect(stepped.objective).toBe(120);
+  });
+  it("steps above the upper sample when it is the better, and costs one design where the first step does not pay", () => {
+    expect(run((x) => ({ 60: 140, 65: 130, 66: 120 } as Record<number, number>)[Math.round(100 * x)] ?? 125, true)).toEqual({ asked: [0.6, 0.65, 0.66, 0.67], value: 0.66, objective: 120 });
+    expect(run((x) => ({ 60: 130, 65: 140, 59: 129 } as Record<number, number>)[Math.round(100 * x)] ?? 200, true)).toEqual({ asked: [0.6, 0.65, 0.59], value: 0.6, objective: 130 });
+  });
+});
+
 describe("refineInFull: a count refined on its neighbours (made-up objectives)", () => {
   const count: OptionSpec = { key: "count", label: "count", kind: "number", unit: "", min: 3, max: 12, step: 1, integer: true, source: "test", free: true };
   const counted = (refinedInFull: SchemeModel["refinedInFull"]): SchemeModel => ({ ...model(refinedInFull), options: [count, depth], defaults: { count: 6, depth: 0.6 } }) as SchemeModel;
