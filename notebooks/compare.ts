@@ -40,6 +40,7 @@ import { tableGaps, usesRise } from "../src/pipeline";
 import { roofActions, designPressures } from "../src/loads";
 import { envelope } from "../src/takeoff";
 import {
+  drawnRoles,
   sectionChartOptions,
   sectionOutline,
   planChartOptions,
@@ -276,7 +277,7 @@ for (const s of schemes) {
   reactiveCell(detail.body, { id: `${id}-drawing` }, () => {
     const design = s.design.value;
     if (!s.enabled.value || !detail.open.value || design === null) return null;
-    const roles = [...new Set([...design.drawing.section, ...(design.drawing.plan ?? [])].map((l) => l.role))].sort();
+    const roles = drawnRoles([...design.drawing.section, ...(design.drawing.plan ?? [])]);
     const wrap = document.createElement("div");
     wrap.className = "grid charts";
     wrap.append(

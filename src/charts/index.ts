@@ -1,7 +1,7 @@
 // Charts: pure functions from results to Plot options. No DOM access here.
 export { SCHEME_COLOURS, MATERIAL_COLOURS, MATERIAL_KIND_COLOURS, MODULE_PALETTE, materialColour, moduleColour, type ModuleCode } from "./palette";
 export { contrastRatio } from "./contrast";
-export { sectionChartOptions, type SectionChartInput } from "./section-chart";
+export { drawnRoles, sectionChartOptions, type SectionChartInput } from "./section-chart";
 export { sectionOutline, type SectionOutline, type OutlineMark } from "./section-outline";
 export { chartCaption } from "./caption";
 export { massByMaterialChart, carbonByModuleChart, costPerM2Chart, carbonVsCostChart, type ComparisonChartCommon, type DescribedChart } from "./comparison-charts";

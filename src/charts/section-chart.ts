@@ -27,6 +27,18 @@ export interface FloorSpan {
   y2: number;
 }
 
+/** A line that marks the floor (the usable floor as counted, a support's clear zone): shaded on the section, not drawn as a member. */
+const isFloorLine = (l: DrawingLine) => l.role === "usable floor" || l.role === "support zone";
+
+/**
+ * The member roles a scheme's section and plan draw as lines, sorted: one colour order for both
+ * drawings. The floor's lines are left out: the section shades the floor and labels it, so a legend
+ * swatch for it matched nothing drawn.
+ */
+export function drawnRoles(lines: readonly DrawingLine[]): string[] {
+  return [...new Set(lines.filter((l) => !isFloorLine(l)).map((l) => l.role))].sort();
+}
+
 /**
  * What the roof section draws, in metres: the roof profile, the walls, the usable
  * floor (with the support zones and its label), the roof top and a design's members by role.
@@ -44,7 +56,6 @@ export function sectionParts(brief: Brief, lines: readonly DrawingLine[]) {
   ];
   // A design that gives its floor carries the usable floor it counted as lines (role "usable floor",
   // "support zone"): those are shaded, exactly; otherwise the brief's envelope under the roof surface.
-  const isFloorLine = (l: DrawingLine) => l.role === "usable floor" || l.role === "support zone";
   const floorLines = lines.filter(isFloorLine);
   const members = joinByRole(lines.filter((l) => !isFloorLine(l)));
   const spanOf = (l: DrawingLine): FloorSpan => ({ x1: Math.min(...l.points.map((p) => p[0])), x2: Math.max(...l.points.map((p) => p[0])), y1: 0, y2: brief.minClearHeightM });
@@ -56,8 +67,11 @@ export function sectionParts(brief: Brief, lines: readonly DrawingLine[]) {
   // the top of the drawing: the brief's roof, or a design's members where they rise above it (a
   // scheme at its own searched rise, masts), so nothing drawn is cut off
   const top = members.reduce((most, p) => (Number.isFinite(p.y) && p.y > most ? p.y : most), brief.eavesHeightM + brief.riseM);
-  // the axes' extents: a little beyond the walls, a fifth above the top
-  const xDomain: [number, number] = [-a * 1.05, a * 1.05];
+  // the axes' extents: a little beyond the walls or the farthest member (a cable net's backstays run
+  // out past the walls to their ground anchors, and were drawn over the height axis's labels), a
+  // fifth above the top
+  const reach = members.reduce((most, p) => (Number.isFinite(p.x) && Math.abs(p.x) > most ? Math.abs(p.x) : most), a);
+  const xDomain: [number, number] = [-reach * 1.05, reach * 1.05];
   const yDomain: [number, number] = [0, top * 1.2];
   return { roof, walls, usableSpans, supportZones, usableLabel, top, members, xDomain, yDomain };
 }

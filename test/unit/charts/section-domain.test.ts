@@ -3,7 +3,9 @@
 // top, because the scale stopped a fifth above the brief's own 22 m rise).
 import { describe, it, expect } from "vitest";
 import { defaultStudy } from "../../../src/study";
-import { sectionParts } from "../../../src/charts/section-chart";
+import { drawnRoles, sectionParts } from "../../../src/charts/section-chart";
+import { cableNet } from "../../../src/schemes/cable-net";
+import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 
 const brief = defaultStudy().brief;
 const briefTop = brief.eavesHeightM + brief.riseM;
@@ -18,5 +20,29 @@ describe("the section's height scale", () => {
     const top = brief.eavesHeightM + 45.6;
     const { yDomain } = sectionParts(brief, [{ role: "shell", points: [[-brief.spanM / 2, brief.eavesHeightM], [0, top], [brief.spanM / 2, brief.eavesHeightM]] }]);
     expect(yDomain).toEqual([0, top * 1.2]);
+  });
+});
+
+describe("the section's width", () => {
+  it("is a little beyond the walls, or beyond the farthest member where one runs past them (a backstay to its ground anchor)", () => {
+    const a = brief.spanM / 2;
+    expect(sectionParts(brief, []).xDomain).toEqual([-a * 1.05, a * 1.05]);
+    const design = cableNet.design(brief, { ...cableNet.defaults, analysis: "closed-form" }, defaultCatalogue());
+    const farthest = Math.max(...design.drawing.section.flatMap((l) => (l.role === "usable floor" || l.role === "support zone" ? [] : l.points.map((p) => Math.abs(p[0])))));
+    expect(farthest).toBeGreaterThan(a);
+    expect(sectionParts(brief, design.drawing.section).xDomain).toEqual([-farthest * 1.05, farthest * 1.05]);
+  });
+});
+
+describe("the legend of a scheme's section and plan", () => {
+  it("names the members drawn as lines, not the floor the section shades and labels (its swatch matched nothing drawn)", () => {
+    const design = cableNet.design(brief, { ...cableNet.defaults, analysis: "closed-form" }, defaultCatalogue());
+    const lines = [...design.drawing.section, ...(design.drawing.plan ?? [])];
+    expect(lines.some((l) => l.role === "usable floor")).toBe(true);
+    const roles = drawnRoles(lines);
+    expect(roles).not.toContain("usable floor");
+    expect(roles).not.toContain("support zone");
+    expect(roles).toContain("mast");
+    expect(roles).toEqual([...roles].sort());
   });
 });
