@@ -28,6 +28,11 @@ function force(newtons: number): string {
   return Math.abs(newtons) >= 1e6 ? `${sig3(newtons / 1e6)} MN` : `${sig3(newtons / 1e3)} kN`;
 }
 
+/** A moment in kNm below 1 MNm and in MNm above, 3 significant figures: 86,400 N·m → "86.4 kNm". */
+function moment(newtonMetres: number): string {
+  return Math.abs(newtonMetres) >= 1e6 ? `${sig3(newtonMetres / 1e6)} MNm` : `${sig3(newtonMetres / 1e3)} kNm`;
+}
+
 /** A mass in kg below a tonne and in t above: "850 kg", "1,230 t". */
 function mass(kg: number): string {
   return Math.abs(kg) >= 1000 ? `${sig3(kg / 1000)} t` : `${sig3(kg)} kg`;
@@ -80,6 +85,7 @@ export const fmt = {
   pct: (x: number) => `${format(".0f")(x * 100)} %`,
   money,
   force,
+  moment,
   mass,
   unit,
   quantity,

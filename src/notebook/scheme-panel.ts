@@ -109,12 +109,12 @@ export function onDemandAnalysis(store: StudyStore, model: SchemeDeclaration, sp
   return wrap;
 }
 
-/** The member table of a design: forces (kN or MN), sections, utilisations, governing checks. */
+/** The member table of a design: forces (kN or MN) or, for a member in bending, moments (kNm), sections, utilisations, governing checks. */
 export function memberTable(design: Design): HTMLElement {
   return tableElement(
-    ["Element", "Count", "Length (m)", "Section", "Design force", "Resistance", "Utilisation", "Governing check"],
-    design.members.map((m) => [m.element, m.count, m.lengthM, m.section, fmt.force(m.designForceN), fmt.force(m.resistanceN), fmt.two(m.utilisation), fmt.plain(m.governing)]),
-    { caption: "Members (force + tension, − compression)", numeric: [false, true, true, false, true, true, true, false] },
+    ["Element", "Count", "Length (m)", "Section", "Design force or moment", "Resistance", "Utilisation", "Governing check"],
+    design.members.map((m) => [m.element, m.count, m.lengthM, m.section, m.bending ? fmt.moment(m.bending.designMomentNm) : fmt.force(m.designForceN), m.bending ? fmt.moment(m.bending.resistanceNm) : fmt.force(m.resistanceN), fmt.two(m.utilisation), fmt.plain(m.governing)]),
+    { caption: "Members (force + tension, − compression; a member in bending by its moment)", numeric: [false, true, true, false, true, true, true, false] },
   );
 }
 

@@ -80,6 +80,11 @@ export interface MemberGroup {
   utilisation: number;
   /** The check that governs, with its clause, e.g. "flexural buckling, EN 1993-1-1 §6.3.1". */
   governing: string;
+  /**
+   * A member sized in bending alone (a purlin): its design moment and the moment resistance of its
+   * bending check, N·m, shown in place of the force and resistance (0 for such a member).
+   */
+  bending?: { designMomentNm: number; resistanceNm: number };
 }
 
 /** One design check. */

@@ -104,7 +104,8 @@ function timberMembers(r: TimberLatticeResult, charDepthM: number): { members: M
   }
   if (r.purlins) {
     const p = r.purlins;
-    members.push(group("purlins", Math.round(p.totalLengthM / Math.max(...r.bands.map((b) => b.band.maxLengthM))), Math.max(...r.bands.map((b) => b.band.maxLengthM)), p.section, p.check.utilisation, 0, p.check.governing));
+    const moment = p.check.demand.momentNm;
+    members.push({ ...group("purlins", Math.round(p.totalLengthM / Math.max(...r.bands.map((b) => b.band.maxLengthM))), Math.max(...r.bands.map((b) => b.band.maxLengthM)), p.section, p.check.utilisation, 0, p.check.governing), bending: { designMomentNm: moment, resistanceNm: p.check.utilisation > 0 ? moment / p.check.utilisation : 0 } });
     checks.push(check("purlins: bending", "EN 1995-1-1 eq. 6.11", p.check.utilisation, 1, ""));
     checks.push(check("purlins: final deflection", "EN 1995-1-1 §7.2, Table 7.2 (l/250, from memory)", p.deflectionM, p.limitM, "m"));
   }

@@ -60,7 +60,8 @@ function utilisationOf(section: GlulamSection, glulam: GlulamClass, buckling: Se
 }
 
 function checkOf(utilisation: number, demand: MemberDemand): MemberCheck {
-  const governing = demand.forceN >= 0 ? `tension and bending (${demand.label}), EN 1995-1-1 eq. 6.17` : `compression, bending and buckling (${demand.label}), EN 1995-1-1 eqs 6.23/6.24`;
+  // no axial force (a purlin): eq. 6.17 is then σ_m,d ≤ f_m,d, eq. 6.11
+  const governing = demand.forceN === 0 ? `bending (${demand.label}), EN 1995-1-1 eq. 6.11` : demand.forceN > 0 ? `tension and bending (${demand.label}), EN 1995-1-1 eq. 6.17` : `compression, bending and buckling (${demand.label}), EN 1995-1-1 eqs 6.23/6.24`;
   return { utilisation, governing, demand };
 }
 

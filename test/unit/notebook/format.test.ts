@@ -11,9 +11,11 @@ describe("fmt", () => {
     expect(fmt.sig3(0)).toBe("0");
     expect(fmt.sig3(Number.NaN)).toBe("–");
   });
-  it("force writes N as kN below 1 MN and MN above", () => {
+  it("force writes N as kN below 1 MN and MN above, moment N·m as kNm and MNm", () => {
     expect(fmt.force(42_519_682)).toBe("42.5 MN");
     expect(fmt.force(812_345)).toBe("812 kN");
+    expect(fmt.moment(86_420)).toBe("86.4 kNm");
+    expect(fmt.moment(2_345_000)).toBe("2.35 MNm");
     expect(fmt.quantity(-1_500, "N")).toBe("−1.5 kN");
     expect(fmt.quantity(11_000, "m2")).toBe("11,000 m²");
   });

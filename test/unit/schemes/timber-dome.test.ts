@@ -72,3 +72,16 @@ describe("timber dome parts", () => {
     for (const s of GLULAM_SECTIONS) expect(s.depthM / s.widthM).toBeGreaterThanOrEqual(2 - 1e-9);
   });
 });
+
+describe("timber dome: the purlins are shown by their moment", () => {
+  it("carries the purlins' design moment and the moment resistance of their bending check, the utilisation their ratio", () => {
+    const d = timberDome.design(DEFAULT_BRIEF, timberDome.defaults, catalogue);
+    const purlins = d.members.find((m) => m.element === "purlins");
+    expect(purlins?.bending).toBeDefined();
+    const { designMomentNm, resistanceNm } = purlins!.bending!;
+    expect(designMomentNm).toBeGreaterThan(0);
+    expectRelClose(purlins!.utilisation, designMomentNm / resistanceNm, 1e-12);
+    expect(purlins!.governing).toMatch(/^bending \(.*\), EN 1995-1-1 eq\. 6\.11$/); // no axial force: not "tension and bending"
+    expect(d.members.filter((m) => m.bending).map((m) => m.element)).toEqual(["purlins"]);
+  });
+});

@@ -56,3 +56,17 @@ describe("gradedBeamDeflectionM", () => {
     expectRelClose(gradedBeamDeflectionM(12e3, 60, [10, 20, 30], [ei, ei, ei]), simplySupportedUdl(12e3, 60, ei).deflectionM, 1e-9);
   });
 });
+
+describe("truss roof: the purlins are shown by their moment", () => {
+  it("carries the purlins' design moment and moment resistance (their force columns are 0), the utilisation their ratio, and names the check that set W", () => {
+    const d = trussRoof.design(DEFAULT_BRIEF, trussRoof.defaults, catalogue);
+    const purlins = d.members.find((m) => m.element === "purlins");
+    expect(purlins?.bending).toBeDefined();
+    const { designMomentNm, resistanceNm } = purlins!.bending!;
+    expect(designMomentNm).toBeGreaterThan(0);
+    expectRelClose(purlins!.utilisation, designMomentNm / resistanceNm, 1e-12);
+    expect(purlins!.governing).toMatch(purlins!.utilisation > 1 - 1e-9 ? /^bending/ : /^deflection span\/200/);
+    // only a member in bending carries a moment
+    expect(d.members.filter((m) => m.bending).map((m) => m.element)).toEqual(["purlins"]);
+  });
+});
