@@ -25,7 +25,7 @@ function money(x: number, currency: string): string {
 
 /** A force in kN below 1 MN and in MN above, 3 significant figures: 42,519,682 N → "42.5 MN". */
 function force(newtons: number): string {
-  return Math.abs(newtons) >= 1e6 ? `${sig3(newtons / 1e6)} MN` : `${sig3(newtons / 1e3)} kN`;
+  return quantity(newtons, "N");
 }
 
 /** A moment in kNm below 1 MNm and in MNm above, 3 significant figures: 86,400 N·m → "86.4 kNm". */
@@ -41,9 +41,24 @@ function mass(kg: number): string {
 /** Units as a reader writes them: m2 → m², m3 → m³, kgCO2e → kgCO₂e is left as is (a common spelling). */
 const unit = readableUnit;
 
-/** A value with its unit, ready for a table: forces (N) in kN or MN, areas in m². */
-function quantity(value: number, unitText: string): string {
-  if (unitText === "N") return force(value);
+/** The multiples a reader expects of a unit in newtons, largest first (the last below it too): forces in kN or MN, stresses in MPa, pressures in kPa, line forces in kN/m. */
+const MULTIPLES: Record<string, readonly (readonly [number, string])[]> = {
+  N: [[1e6, "MN"], [1e3, "kN"]],
+  Pa: [[1e6, "MPa"], [1e3, "kPa"]],
+  "N/m": [[1e6, "MN/m"], [1e3, "kN/m"]],
+};
+
+/**
+ * A value with its unit, ready for a table: forces (N) in kN or MN, stresses and pressures (Pa) in
+ * kPa or MPa, line forces (N/m) in kN/m or MN/m, areas in m². The multiple is chosen by `scale`
+ * (default the value itself), so a demand and its capacity written with the same `scale` share one unit.
+ */
+function quantity(value: number, unitText: string, scale = value): string {
+  const multiples = MULTIPLES[unitText];
+  if (multiples) {
+    const [factor, name] = multiples.find(([f]) => Math.abs(scale) >= f) ?? multiples[multiples.length - 1]!;
+    return `${sig3(value / factor)} ${name}`;
+  }
   const u = unit(unitText);
   return u ? `${sig3(value)} ${u}` : sig3(value);
 }
