@@ -2,7 +2,7 @@ import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
 import type { Check, DesignParts, MemberGroup } from "../kit";
-import { briefCombinations, capEnvelope, capFloor, check, convergeSelfWeight, drawingWithLazyPlan, UNIFORM_EQUIVALENT_WARNING, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, SchemeError } from "../kit";
+import { briefCombinations, capEnvelope, capLatticePlan, capLatticeSection, capFloor, check, convergeSelfWeight, drawingWithLazyPlan, UNIFORM_EQUIVALENT_WARNING, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, SchemeError } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
 import { CapTooSmallError, geodesicFrequencyFor } from "../../mechanics/geodesic";
@@ -11,7 +11,6 @@ import { hoopSignChangeAngleRad } from "../../mechanics/spherical-membrane";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { bandStrutLengths } from "../../mechanics/lattice-bands";
 import { latticeSelfWeightKPa, sizeLattice, type LatticeInputs, type LatticeResult } from "./sizing";
-import { latticePlan, latticeSection } from "./drawing";
 import { analyseNet } from "./analysis";
 import { frameTooLarge } from "../../analysis/frame";
 import { geodesicDomeDeclaration, type GeodesicDomeOptions } from "./declaration";
@@ -25,7 +24,7 @@ const SINGLE_LAYER_USUAL_MAX_SPAN_M = 100;
  * sizing and the summary read only the bands and counts, the mesh is built for the drawing and the
  * 3D analysis of the design kept. A SchemeError when the mesh cannot be made.
  */
-function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, bands: number, section: ReturnType<typeof latticeSection>): { frequency: number; cut: GeodesicCapCut } {
+function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, bands: number, section: ReturnType<typeof capLatticeSection>): { frequency: number; cut: GeodesicCapCut } {
   const frequency = geodesicFrequencyFor(cap.radiusM, targetStrutLengthM);
   if (frequency > 400) throw new SchemeError(`the mesh would need frequency ${frequency} (over 400): increase the target strut length`, { section });
   try {
@@ -116,7 +115,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
   const double = opts.layers === "double";
   const depthM = double ? (opts.doubleLayerDepthPct / 100) * brief.spanM : 0;
   const cladding = findCladding(catalogue, opts.cladding);
-  const section = latticeSection(brief, depthM);
+  const section = capLatticeSection(brief, depthM);
   const { frequency, cut } = latticeMesh(cap, opts.targetStrutLengthM, opts.bands, section);
   // built only for the drawing and the 3D analysis (remembered: both ask for the same cap)
   const mesh = () => cachedGeodesicCap(frequency, cap.radiusM, cap.edgeAngleRad);
@@ -178,7 +177,7 @@ function design(brief: Brief, opts: GeodesicDomeOptions, catalogue: Catalogue): 
     iterations: converged.iterations,
     floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: drawingWithLazyPlan(section, () => latticePlan(mesh())),
+    drawing: drawingWithLazyPlan(section, () => capLatticePlan(mesh())),
   };
 }
 

@@ -18,4 +18,5 @@ export { CABLE_ROOF_DEFLECTION_RATIO, findFabric, fabricCostItem, fabricAllowabl
 export { uniformCombinations, briefCombinations, characteristicVariableKPa, membraneLoadCases, heaviestCase, UNIFORM_EQUIVALENT_WARNING, type UniformCombination, type MembraneLoadCase, type VariableAction, heaviestByUniformEquivalent } from "./load-combinations";
 export { capFloor } from "./cap-floor";
 export { drawingWithLazyPlan, once, type Lines } from "./lazy-drawing";
+export { capLatticeSection, capLatticePlan } from "./lattice-drawing";
 export { analysedCombinations, unboundedCombinations, planCombinations, uniformPressurePa, type PlanCombination } from "./combination-loads";

@@ -11,12 +11,11 @@ import { creepReducedModulusPa, GLULAM_K_DEF } from "../../mechanics/timber-cree
 import { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "../../mechanics/timber-charring";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { designBasis } from "../../loads/design-basis";
-import { capEnvelope, capFloor, characteristicVariableKPa, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, once, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
+import { capEnvelope, capFloor, capLatticePlan, capLatticeSection, characteristicVariableKPa, check, convergeSelfWeight, defineScheme, drawingWithLazyPlan, once, uniformCombinations, SchemeError, UNIFORM_EQUIVALENT_WARNING } from "../kit";
 import { geodesicCapBands } from "../../mechanics/geodesic-bands";
 import type { LatticeBand } from "../../mechanics/lattice-bands";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
-import { timberPlan, timberSection } from "./drawing";
 import { analyseTimberNet } from "./analysis";
 import { frameTooLarge } from "../../analysis/frame";
 import { timberDomeDeclaration, type TimberDomeOptions } from "./declaration";
@@ -186,7 +185,7 @@ interface MeshDesign {
 /** The lattice sized on the mesh of one frequency; a SchemeError when it cannot be built. */
 function sizeOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue, cap: SphericalCap, frequency: number, warnings: string[]): MeshDesign {
   // drawn only when asked for (a failure's reason): the search sizes dozens of meshes
-  const bare = once(() => timberSection(brief, 0));
+  const bare = once(() => capLatticeSection(brief, 0));
   const failure = { warnings, section: bare };
   const inputs = latticeInputs(brief, opts, catalogue, cap, latticeMeshBands(cap, frequency, opts.bands, failure));
   const converged = convergeSelfWeight<TimberLatticeResult>(
@@ -198,7 +197,7 @@ function sizeOnMesh(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue,
     { section: bare },
   );
   const r = converged.value;
-  if (r.failure) throw new SchemeError(r.failure, { warnings, section: () => timberSection(brief, memberDepthM(r)) });
+  if (r.failure) throw new SchemeError(r.failure, { warnings, section: () => capLatticeSection(brief, memberDepthM(r)) });
   const massKg = timberTakeoff(r, cap.surfaceM2, inputs.glulam.densityMeanKgPerM3).reduce((sum, row) => sum + row.massKg, 0);
   return { massKg, mesh: () => latticeMesh(cap, frequency, failure), frequency, result: r, inputs, iterations: converged.iterations };
 }
@@ -253,7 +252,7 @@ function partsOf(brief: Brief, cap: SphericalCap, d: MeshDesign, warnings: strin
     iterations: d.iterations,
     floor: capFloor(cap, brief.eavesHeightM, depthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: drawingWithLazyPlan(() => timberSection(brief, depthM), () => timberPlan(d.mesh())),
+    drawing: drawingWithLazyPlan(() => capLatticeSection(brief, depthM), () => capLatticePlan(d.mesh())),
   };
 }
 
@@ -293,7 +292,7 @@ function design(brief: Brief, opts: TimberDomeOptions, catalogue: Catalogue): De
       if (frequency === nominal) nominalFailure = e;
     }
   }
-  if (best === null) throw nominalFailure ?? new SchemeError("no mesh near the target member length can be built: change the member length", { warnings, section: () => timberSection(brief, 0) });
+  if (best === null) throw nominalFailure ?? new SchemeError("no mesh near the target member length can be built: change the member length", { warnings, section: () => capLatticeSection(brief, 0) });
   const parts = partsOf(brief, cap, best, warnings);
   return opts.bucklingAnalysis ? withNetAnalysis(brief, cap, best, parts, opts.knockDown) : parts;
 }

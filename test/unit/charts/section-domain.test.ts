@@ -5,6 +5,8 @@ import { describe, it, expect } from "vitest";
 import { defaultStudy } from "../../../src/study";
 import { drawnRoles, sectionParts } from "../../../src/charts/section-chart";
 import { cableNet } from "../../../src/schemes/cable-net";
+import { geodesicDome } from "../../../src/schemes/geodesic-dome";
+import { timberDome } from "../../../src/schemes/timber-dome";
 import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 
 const brief = defaultStudy().brief;
@@ -44,5 +46,13 @@ describe("the legend of a scheme's section and plan", () => {
     expect(roles).not.toContain("support zone");
     expect(roles).toContain("mast");
     expect(roles).toEqual([...roles].sort());
+  });
+
+  it("gives a lattice dome's members one name in its section and its plan (the plan called them struts: two legend entries, two colours)", () => {
+    for (const model of [geodesicDome, timberDome]) {
+      const design = model.design(brief, model.defaults, defaultCatalogue());
+      expect(design.status, model.id).toBe("feasible");
+      expect(drawnRoles([...design.drawing.section, ...(design.drawing.plan ?? [])]), model.id).toEqual(["lattice", "ring", "support"]);
+    }
   });
 });
