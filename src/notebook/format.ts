@@ -50,13 +50,14 @@ const MULTIPLES: Record<string, readonly (readonly [number, string])[]> = {
 
 /**
  * A value with its unit, ready for a table: forces (N) in kN or MN, stresses and pressures (Pa) in
- * kPa or MPa, line forces (N/m) in kN/m or MN/m, areas in m². The multiple is chosen by `scale`
- * (default the value itself), so a demand and its capacity written with the same `scale` share one unit.
+ * kPa or MPa, line forces (N/m) in kN/m or MN/m, areas in m²; each value in its own multiple, as
+ * the member table writes forces (a check's demand and capacity written in one multiple put
+ * "0.896 MN" beside "783 kN" in the rows above it, and wrapped in a narrow column).
  */
-function quantity(value: number, unitText: string, scale = value): string {
+function quantity(value: number, unitText: string): string {
   const multiples = MULTIPLES[unitText];
   if (multiples) {
-    const [factor, name] = multiples.find(([f]) => Math.abs(scale) >= f) ?? multiples[multiples.length - 1]!;
+    const [factor, name] = multiples.find(([f]) => Math.abs(value) >= f) ?? multiples[multiples.length - 1]!;
     return `${sig3(value / factor)} ${name}`;
   }
   const u = unit(unitText);

@@ -118,12 +118,11 @@ export function memberTable(design: Design): HTMLElement {
   );
 }
 
-/** The checks of a design with their clauses; forces in kN or MN, stresses in kPa or MPa, each row's demand and capacity in one unit. */
+/** The checks of a design with their clauses; forces in kN or MN, stresses and pressures in kPa or MPa. */
 export function checkTable(design: Design): HTMLElement {
-  const scale = (c: Design["checks"][number]) => Math.max(...[c.demand, c.capacity].filter(Number.isFinite).map(Math.abs), 0);
   return tableElement(
     ["Check", "Clause / source", "Demand", "Capacity", "Utilisation", "Passes"],
-    design.checks.map((c) => [fmt.plain(c.name), fmt.plain(c.clause), fmt.quantity(c.demand, c.unit, scale(c)), fmt.quantity(c.capacity, c.unit, scale(c)), fmt.two(c.utilisation), c.passed ? "yes" : "NO"]),
+    design.checks.map((c) => [fmt.plain(c.name), fmt.plain(c.clause), fmt.quantity(c.demand, c.unit), fmt.quantity(c.capacity, c.unit), fmt.two(c.utilisation), c.passed ? "yes" : "NO"]),
     { caption: "Checks", numeric: [false, false, true, true, true, false] },
   );
 }

@@ -49,10 +49,10 @@ describe("the legend of a scheme's section and plan", () => {
   });
 
   it("gives a lattice dome's members one name in its section and its plan (the plan called them struts: two legend entries, two colours)", () => {
-    for (const model of [geodesicDome, timberDome]) {
-      const design = model.design(brief, model.defaults, defaultCatalogue());
-      expect(design.status, model.id).toBe("feasible");
-      expect(drawnRoles([...design.drawing.section, ...(design.drawing.plan ?? [])]), model.id).toEqual(["lattice", "ring", "support"]);
+    const designs = { [geodesicDome.id]: geodesicDome.design(brief, geodesicDome.defaults, defaultCatalogue()), [timberDome.id]: timberDome.design(brief, timberDome.defaults, defaultCatalogue()) };
+    for (const [id, design] of Object.entries(designs)) {
+      expect(design.status, id).toBe("feasible");
+      expect(drawnRoles([...design.drawing.section, ...(design.drawing.plan ?? [])]), id).toEqual(["lattice", "ring", "support"]);
     }
   });
 });
