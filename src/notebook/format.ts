@@ -30,7 +30,7 @@ function force(newtons: number): string {
 
 /** A moment in kNm below 1 MNm and in MNm above, 3 significant figures: 86,400 N·m → "86.4 kNm". */
 function moment(newtonMetres: number): string {
-  return Math.abs(newtonMetres) >= 1e6 ? `${sig3(newtonMetres / 1e6)} MNm` : `${sig3(newtonMetres / 1e3)} kNm`;
+  return quantity(newtonMetres, "Nm");
 }
 
 /** A mass in kg below a tonne and in t above: "850 kg", "1,230 t". */
@@ -41,9 +41,10 @@ function mass(kg: number): string {
 /** Units as a reader writes them: m2 → m², m3 → m³, kgCO2e → kgCO₂e is left as is (a common spelling). */
 const unit = readableUnit;
 
-/** The multiples a reader expects of a unit in newtons, largest first (the last below it too): forces in kN or MN, stresses in MPa, pressures in kPa, line forces in kN/m. */
+/** The multiples a reader expects of a unit in newtons, largest first (the last below it too): forces in kN or MN, moments in kNm or MNm, stresses in MPa, pressures in kPa, line forces in kN/m. */
 const MULTIPLES: Record<string, readonly (readonly [number, string])[]> = {
   N: [[1e6, "MN"], [1e3, "kN"]],
+  Nm: [[1e6, "MNm"], [1e3, "kNm"]],
   Pa: [[1e6, "MPa"], [1e3, "kPa"]],
   "N/m": [[1e6, "MN/m"], [1e3, "kN/m"]],
 };
