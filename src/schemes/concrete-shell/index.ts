@@ -229,7 +229,7 @@ function design(brief: Brief, opts: ConcreteShellOptions): DesignParts {
     iterations,
     floor: capFloor(cap, brief.eavesHeightM, soffitDepthM),
     ...capEnvelope(cap, brief.eavesHeightM),
-    drawing: { section: shellSection(brief, soffitDepthM, opts.edgeThickening, q.edgeWidthM, Math.sqrt(tie.ringAreaM2)), plan: shellPlan(cap.baseRadiusM) },
+    drawing: { section: shellSection(brief, soffitDepthM, opts.edgeThickening, q.edgeWidthM, Math.sqrt(tie.ringAreaM2)), plan: shellPlan(cap, "ribSpacingM" in s ? s.ribSpacingM : 0) },
   };
 }
 

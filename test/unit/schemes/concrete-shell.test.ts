@@ -55,3 +55,28 @@ describe("minimumReinforcementRatio (EN 1992-1-1 eq. 9.1N)", () => {
   // C20/25 would give 0.26 × 2.21/500 = 0.00115 < 0.0013: the floor applies.
   it("never falls below 0.0013", () => expect(minimumReinforcementRatio(2.21e6)).toBe(0.0013));
 });
+
+describe("concrete shell: the plan draws the ribs", () => {
+  it("draws a ribbed shell's three-way grid of ribs, a rib through the crown in each family, the next at the rib spacing along the shell; a smooth shell's plan is its edge ring", () => {
+    const ribbed = concreteShell.design(DEFAULT_BRIEF, { ...concreteShell.defaults, form: "ribbed" }, catalogue);
+    const ribs = (ribbed.drawing.plan ?? []).filter((l) => l.role === "rib");
+    const spacing = ribbed.summary.find((s) => s.key === "ribSpacingM")!.value;
+    // the ribs through the crown: three, 60° apart
+    const throughCrown = ribs.filter((l) => {
+      const [p, q] = l.points as [[number, number], [number, number]];
+      return Math.abs(p[0] * q[1] - p[1] * q[0]) < 1e-6;
+    });
+    expect(ribs.length % 3).toBe(0);
+    expect(throughCrown).toHaveLength(3);
+    // each rib is a chord of the plan circle
+    const a = DEFAULT_BRIEF.spanM / 2;
+    for (const l of ribs) for (const [x, y] of l.points) expectRelClose(Math.hypot(x, y), a, 1e-9);
+    // the family along x: its offsets (y) are R sin(k s / R), the first about the spacing
+    const offsets = [...new Set(ribs.filter((l) => Math.abs(l.points[0]![1] - l.points[1]![1]) < 1e-9).map((l) => Math.abs(l.points[0]![1])))].sort((p, q) => p - q);
+    expect(offsets[0]).toBe(0);
+    expect(offsets[1]).toBeGreaterThan(0.99 * spacing);
+    expect(offsets[1]).toBeLessThanOrEqual(spacing);
+    const smooth = concreteShell.design(DEFAULT_BRIEF, { ...concreteShell.defaults, form: "smooth" }, catalogue);
+    expect((smooth.drawing.plan ?? []).map((l) => l.role)).toEqual(["ring"]);
+  });
+});
