@@ -234,8 +234,9 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
   const surface = analysed?.surface;
   // the 3D net as form-found, when its analysis found a prestress (drawn in the section and plan)
   const found = analysis && analysis.reason === "" ? analysis.model : null;
+  const ring = found ? formFoundRing(found) : undefined; // a mean over the ring's nodes: cheap, so not deferred with the drawing
   const checks = sized.groups.map((g) => check(g.element, g.governing, g.designForceN, g.resistanceN, "N"));
-  if (analysis && analysis.reason === "") {
+  if (analysis && found) {
     const largest = Math.max(...analysis.summary.loadCases.map((c) => c.maxDisplacementM));
     checks.push(check("largest displacement (3D analysis, design combinations)", `≤ span × ${CABLE_ROOF_DEFLECTION_RATIO} (common practice for cable roofs, no source; ULS loads, an upper bound of the service value)`, largest, brief.spanM * CABLE_ROOF_DEFLECTION_RATIO, "m"));
   }
@@ -254,7 +255,7 @@ function design(brief: Brief, opts: CableNetOptions, catalogue: Catalogue): Desi
     ...(surface ? { roofSurfaceM2: surface.roofSurfaceM2, enclosedVolumeM3: layout.cap.planAreaM2 * brief.eavesHeightM + surface.enclosedVolumeM3 } : capEnvelope(layout.cap, brief.eavesHeightM)),
     // the 3D net's section: its form-found radial cables, no valley cables (the closed form's are not built)
     // and its central ring where the form finding put it (a free ring finds its own radius and height)
-    drawing: drawingWithLazyPlan(found ? () => cableNetSection(layout, brief.eavesHeightM, mastRadialCables(found), formFoundRing(found)) : section, () => cableNetPlan(layout, found ? formFoundRing(found).radiusM : undefined)),
+    drawing: drawingWithLazyPlan(found && ring ? () => cableNetSection(layout, brief.eavesHeightM, mastRadialCables(found), ring) : section, () => cableNetPlan(layout, ring?.radiusM)),
     ...(analysis ? { analysis: analysis.summary } : {}),
     reason: analysis?.reason ?? "",
   };
