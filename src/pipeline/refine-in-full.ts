@@ -131,7 +131,8 @@ function chosenCount(axis: Axis, sampled: readonly { index: number; value: numbe
  * value so chosen is infeasible, the best feasible sample; where no sample is feasible, the
  * proportion stays. With `descend` the choice then steps towards the fitted least (descentEnd) while each step's
  * full design is better by more than the tie band (descended); with `beyond`, a choice at the outermost sample
- * steps on past it while each step is so better. A count with `neighbours` is designed at its
+ * steps on past it while each step is so better, and where it did, the proportions declared with `descend`
+ * step again from their choice towards their better neighbour. A count with `neighbours` is designed at its
  * screened value and its neighbours (chosenCount). Returns the final design (designed once, samples reused), the
  * least of the other feasible full designs (its runner-up, null when there is none), what was refined and how many full designs it took.
  */
@@ -153,20 +154,48 @@ export function refineInFull(
     return full;
   };
   let current = { ...start };
+  // the design at grid index `index` of `key`'s axis, the other proportions as in `base`
+  const movedFrom = (base: { options: SchemeOptions; riseM: number }, key: string, axis: Axis) => (index: number) =>
+    key === RISE_KEY ? { options: base.options, riseM: axis.values[index] as number } : { options: { ...base.options, [key]: axis.values[index] as OptionValue }, riseM: base.riseM };
+  const valueOf = (key: string) => (key === RISE_KEY ? current.riseM : (current.options[key] as number));
   const refinements: Refinement[] = [];
+  let beyondMoved = false;
   for (const refined of model.refinedInFull ?? []) {
     const { key } = refined;
     const axis = axisOf(model, refined, setting.rise, setting.spanM, setting.pinned, current);
     if (!axis) continue;
-    const moved = (index: number) => (key === RISE_KEY ? { options: current.options, riseM: axis.values[index] as number } : { options: { ...current.options, [key]: axis.values[index] as OptionValue }, riseM: current.riseM });
+    const moved = movedFrom(current, key, axis);
     const sampled = axis.samples.map((index) => ({ index, value: at(moved(index).options, moved(index).riseM).objective }));
     const feasible = sampled.filter((s) => Number.isFinite(s.value)).sort((a, b) => a.value - b.value);
     if (feasible.length === 0) continue;
     const objectiveAt = (index: number) => at(moved(index).options, moved(index).riseM).objective;
     const best = feasible[0]!.index;
-    const chosen = moved("neighbours" in refined ? chosenCount(axis, sampled, best, objectiveAt) : chosenOnTrend(refined, axis, sampled, best, objectiveAt));
-    current = Number.isFinite(at(chosen.options, chosen.riseM).objective) ? chosen : moved(best);
-    refinements.push({ key, value: key === RISE_KEY ? current.riseM : (current.options[key] as number), samples: sampled.map((s) => ({ value: axis.values[s.index] as number, objective: s.value })) });
+    const index = "neighbours" in refined ? chosenCount(axis, sampled, best, objectiveAt) : chosenOnTrend(refined, axis, sampled, best, objectiveAt);
+    const chosen = moved(index);
+    const kept = Number.isFinite(at(chosen.options, chosen.riseM).objective);
+    current = kept ? chosen : moved(best);
+    if (kept && !("neighbours" in refined) && refined.beyond && !axis.samples.includes(index)) beyondMoved = true;
+    refinements.push({ key, value: valueOf(key), samples: sampled.map((s) => ({ value: axis.values[s.index] as number, objective: s.value })) });
+  }
+  // A step beyond the samples put the design where the proportions refined before it were not
+  // sampled: each declared with `descend` steps again from its choice, towards its better neighbour,
+  // while each step is better by more than the tie band (descended).
+  if (beyondMoved) {
+    for (const refined of model.refinedInFull ?? []) {
+      if ("neighbours" in refined || !refined.descend) continue;
+      const axis = axisOf(model, refined, setting.rise, setting.spanM, setting.pinned, current);
+      if (!axis) continue;
+      const moved = movedFrom(current, refined.key, axis);
+      const objectiveAt = (index: number) => at(moved(index).options, moved(index).riseM).objective;
+      const here = nearestIndex(axis.values, valueOf(refined.key));
+      const next = [here - 1, here + 1].filter((i) => i >= 0 && i < axis.values.length).sort((a, b) => objectiveAt(a) - objectiveAt(b))[0];
+      if (next === undefined) continue;
+      const index = descended(here, next < here ? 0 : axis.values.length - 1, objectiveAt);
+      if (index === here) continue;
+      current = moved(index);
+      const entry = refinements.find((r) => r.key === refined.key);
+      if (entry) entry.value = valueOf(refined.key);
+    }
   }
   const full = at(current.options, current.riseM);
   const others = [...designed.values()].filter((d) => d !== full && Number.isFinite(d.objective));

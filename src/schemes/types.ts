@@ -252,7 +252,7 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
    * is better by more than the tie band (the trend misjudged a steep, uneven objective). With
    * `beyond`, a choice at the outermost sample steps on past it, one grid value at a time, while each
    * step's full design is better by more than the tie band (the samples missed a better value outside
-   * them). A count
+   * them); the proportions refined before it with `descend` then step again from their choice. A count
    * declares `neighbours` (and `ratios`) instead: it is designed at the screened value, that many grid
    * steps either side and those multiples of it, steps on from the best to a neighbour while that is
    * better by more than the tie band, and takes the least of the counts designed.

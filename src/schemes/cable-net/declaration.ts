@@ -82,8 +82,8 @@ export const cableNetDeclaration = declareScheme({
   // both studies (better at one: 310 m, demo, −6.3 %) for 6 and 3 fewer 3D designs, but at 5 m steps the count jumped
   // to the screened one where the half lost to it (demo: 10 masts at 275 and 285 m, 6 at 270, 280 and 290 m; default:
   // 8 masts at 285 m), which the smoothness tests caught (5 Dec, measured). Each proportion is refined at the others'
-  // values, not together: at 60 m (demo study) 3 masts at 0.15 on a ring at 0.55 stay where 0.16 on 0.55 is 3.1 %
-  // better (measured, pinned: 119.0 against 115.3 kgCO2e/m² of floor).
+  // values, not together (a better pair can be missed; where the ring steps beyond its samples the mast height steps
+  // again from there, refine-in-full.ts).
   // The mast ring radius is refined last, at the chosen count and height: its default 0.6 and 0.65 (which the closed
   // form chooses at every span of the demo study), the better kept. The 3D objective moves unevenly with it (demo
   // study: 0.65 better by 8.0 % at 120 m and 11.6 % at 300 m, 0.6 better by 3.1 % at 160 m, measured). This one more
@@ -94,7 +94,9 @@ export const cableNetDeclaration = declareScheme({
   // better by more than the 2 % band (`beyond`): at 40 and 60 m the smaller ring 0.55 was 12–13 % better (demo study,
   // 40 m 148.4 → 130.7, 60 m 137.3 → 119.0 kgCO2e/m² of floor; default study 40 m −10.4 %), no other span of either
   // study moved (0.7 never paid where 0.65 won), at one more 3D design a span: the 3D pass +8 % CPU (node, demo 28.3 →
-  // 30.5 s, default 29.9 → 32.3 s, each pair run side by side; 5 Dec, measured).
+  // 30.5 s, default 29.9 → 32.3 s, each pair run side by side; 5 Dec, measured). The mast height, chosen at ring 0.6,
+  // then steps again at the ring found (refine-in-full.ts): demo 60 m 0.15 → 0.16, 119.0 → 115.3 kgCO2e/m² of floor,
+  // nothing else moved in either study, 5 more 3D designs over the demo's 37 spans (374 → 379; 5 Dec, measured).
   refinedInFull: [{ key: "masts", neighbours: 0, ratios: [1 / 2, 2 / 3] }, { key: "mastHeightRatio", samples: [0.1, 0.15, 0.2], reference: 0.15, descend: true }, { key: "mastRingRatio", samples: [0.6, 0.65], reference: 0.6, beyond: true }],
   options: defineOptions(declarations),
 });

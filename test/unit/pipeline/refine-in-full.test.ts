@@ -155,6 +155,35 @@ describe("refineInFull: with beyond declared, the choice steps on past the outer
   });
 });
 
+describe("refineInFull: after a step beyond the samples, the proportions declared with descend step again (made-up objectives)", () => {
+  const ring: OptionSpec = { key: "ring", label: "ring", kind: "number", unit: "", min: 0.3, max: 0.9, step: 0.05, source: "test", free: true };
+  const twoProportions = { ...model([{ key: "depth", samples: [0.1, 0.15, 0.2], reference: 0.15, descend: true }, { key: "ring", samples: [0.6, 0.65], reference: 0.6, beyond: true }]), options: [depth, ring], defaults: { depth: 0.15, ring: 0.6 } } as SchemeModel;
+  const run = (objective: Record<string, number>) => {
+    const asked: string[] = [];
+    const result = refineInFull(twoProportions, { options: { depth: 0.15, ring: 0.6 }, riseM: 10 }, at, (o, riseM) => {
+      const name = `${Math.round(100 * (o.depth as number))}/${Math.round(100 * (o.ring as number))}`;
+      asked.push(name);
+      return designed(o, riseM, objective[name] ?? 100);
+    }, (d) => d.totalMassKg);
+    return { asked, depth: result.full.options.depth, ring: result.full.options.ring, objective: result.full.objective, refined: result.refinements.map((r) => [r.key, r.value]) };
+  };
+  // the depth's samples at ring 0.6 (the trend keeps 0.15), the ring's at depth 0.15 and beyond, then the depth's neighbours at ring 0.55
+  const base = { "10/60": 40, "15/60": 30, "20/60": 40, "15/65": 35, "15/50": 26, "14/55": 24.9, "16/55": 22, "17/55": 21.9, "16/60": 20 };
+  it("steps the depth again from its choice at the ring found beyond the samples, while each step pays more than the band", () => {
+    const r = run({ ...base, "15/55": 25 });
+    expect(r.ring).toBe(0.55);
+    expect(r.depth).toBe(0.16); // 0.17 is better than 0.16 by less than the band
+    expect(r.objective).toBe(22);
+    expect(r.refined).toEqual([["depth", 0.16], ["ring", 0.55]]);
+  });
+  it("does not step the depth again where the ring stayed on a sample (0.16 on 0.6 is better, and never designed)", () => {
+    const r = run({ ...base, "15/55": 29.5 });
+    expect(r.ring).toBe(0.6);
+    expect(r.depth).toBe(0.15);
+    expect(r.asked).not.toContain("16/60");
+  });
+});
+
 describe("refineInFull: a count refined on its neighbours (made-up objectives)", () => {
   const count: OptionSpec = { key: "count", label: "count", kind: "number", unit: "", min: 3, max: 12, step: 1, integer: true, source: "test", free: true };
   const counted = (refinedInFull: SchemeModel["refinedInFull"]): SchemeModel => ({ ...model(refinedInFull), options: [count, depth], defaults: { count: 6, depth: 0.6 } }) as SchemeModel;
