@@ -9,7 +9,6 @@ import { designBasis } from "../../loads/design-basis";
 import { snowShapeMu1 } from "../../loads/snow";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { designTrussRoof, trussLayout, trussRoofSelfWeightKPa, type TrussRoofInputs, type TrussRoofResult } from "./layout";
-import { PURLIN_REDUCTION, PURLIN_YIELD_PA } from "./secondary";
 import { trussPlan, trussSection } from "./drawing";
 import { trussRoofDeclaration, DEPTH_RATIO_RANGE, type TrussRoofOptions } from "./declaration";
 
@@ -100,11 +99,10 @@ function trussMembers(r: TrussRoofResult, layout: Layout, brief: Brief, opts: Tr
   checks.push(check(`truss deflection under total load (span/${opts.deflectionLimitTotal})`, "SLS, common practice limit; EN 1990 A1.4.3", worstTotal.totalDeflectionM, worstTotal.totalDeflectionLimitM, "m"));
   checks.push(pondingCheck(r, layout.spansM));
   const purlinW = r.purlin.modulusM3;
-  const purlinMomentResistance = PURLIN_REDUCTION * PURLIN_YIELD_PA * purlinW;
-  const purlinUtilisation = r.purlin.momentNm / purlinMomentResistance;
-  // W is the least for bending or for the deflection limit: where the deflection set it, bending is below 1
-  const purlinGoverning = purlinUtilisation > 1 - 1e-9 ? "bending M/(0.7 f_y W)" : `deflection span/200 (bending M/(0.7 f_y W) ${purlinUtilisation.toFixed(2)})`;
-  members.push({ element: "purlins", material: "steel-cold-formed", count: Math.round(r.purlinLengthM / layout.spacingM), lengthM: layout.spacingM, section: `cold-formed Z/C ${(r.purlin.depthM * 1000).toFixed(0)} deep, W ${(purlinW * 1e6).toFixed(0)} cm³`, designForceN: 0, resistanceN: 0, utilisation: purlinUtilisation, governing: purlinGoverning, bending: { designMomentNm: r.purlin.momentNm, resistanceNm: purlinMomentResistance } });
+  const { momentNm, momentResistanceNm } = r.purlin;
+  const purlinUtilisation = momentNm / momentResistanceNm;
+  const purlinGoverning = r.purlin.governedBy === "bending" ? "bending M/(0.7 f_y W)" : `deflection span/200 (bending M/(0.7 f_y W) ${purlinUtilisation.toFixed(2)})`;
+  members.push({ element: "purlins", material: "steel-cold-formed", count: Math.round(r.purlinLengthM / layout.spacingM), lengthM: layout.spacingM, section: `cold-formed Z/C ${(r.purlin.depthM * 1000).toFixed(0)} deep, W ${(purlinW * 1e6).toFixed(0)} cm³`, designForceN: 0, resistanceN: 0, utilisation: purlinUtilisation, governing: purlinGoverning, bending: { designMomentNm: momentNm, resistanceNm: momentResistanceNm } });
   if (r.bracing) members.push({ element: "roof bracing", material: "steel-hot-finished-hollow", count: Math.round(r.bracingLengthM / (layout.spacingM * Math.SQRT2)), lengthM: layout.spacingM * Math.SQRT2, section: r.bracing.section.designation, designForceN: -r.bracing.utilisation * r.bracing.resistanceN, resistanceN: r.bracing.resistanceN, utilisation: r.bracing.utilisation, governing: r.bracing.governing });
   if (r.trussColumn) {
     members.push({ element: "truss columns", material: "steel-hot-finished-hollow", count: 2 * n, lengthM: brief.eavesHeightM, section: r.trussColumn.section.designation, designForceN: -r.trussColumnForceN, resistanceN: r.trussColumn.resistanceN, utilisation: r.trussColumn.utilisation, governing: r.trussColumn.governing });

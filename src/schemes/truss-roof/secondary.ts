@@ -20,6 +20,10 @@ export interface PurlinResult {
   modulusM3: number;
   depthM: number;
   momentNm: number;
+  /** Moment resistance of the section chosen, 0.7 f_y W, N·m. */
+  momentResistanceNm: number;
+  /** What set W: the bending strength, or the deflection limit (then bending is below its resistance). */
+  governedBy: "bending" | "deflection";
   deflectionM: number;
 }
 
@@ -37,7 +41,7 @@ export function sizePurlin(spanM: number, ulsNPerM: number, slsNPerM: number): P
   const modulusM3 = Math.max(strengthW, (2 * neededI) / depthM);
   const areaM2 = (3 * modulusM3) / depthM;
   const deflectionM = (5 * slsNPerM * spanM ** 4) / (384 * STEEL_E_PA * ((modulusM3 * depthM) / 2));
-  return { massKgPerM: areaM2 * STEEL_DENSITY_KG_PER_M3, modulusM3, depthM, momentNm, deflectionM };
+  return { massKgPerM: areaM2 * STEEL_DENSITY_KG_PER_M3, modulusM3, depthM, momentNm, momentResistanceNm: PURLIN_REDUCTION * PURLIN_YIELD_PA * modulusM3, governedBy: modulusM3 > strengthW ? "deflection" : "bending", deflectionM };
 }
 
 /** The lightest CHS whose plastic moment resistance W_pl f_y/γ_M0 (EN 1993-1-1 eq. 6.13, class 1–2) carries M. */
