@@ -252,12 +252,15 @@ export interface SchemeDeclaration<O extends SchemeOptions = SchemeOptions, Id e
    * is better by more than the tie band (the trend misjudged a steep, uneven objective). With
    * `beyond`, a choice at the outermost sample steps on past it, one grid value at a time, while each
    * step's full design is better by more than the tie band (the samples missed a better value outside
-   * them); the proportions refined before it with `descend` then step again from their choice. A count
+   * them). With `carries`, each of its values is designed with that proportion scaled by (1 − value) ÷
+   * (1 − its value before): the net's mast height with its mast ring, so the outer radial cables keep
+   * their slope. Where a proportion refined after one with `descend` moved the design, the `descend` one
+   * steps again, from the better of where it was carried and where it was chosen. A count
    * declares `neighbours` (and `ratios`) instead: it is designed at the screened value, that many grid
    * steps either side and those multiples of it, steps on from the best to a neighbour while that is
    * better by more than the tie band, and takes the least of the counts designed.
    */
-  refinedInFull?: readonly ({ key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number; descend?: boolean; beyond?: boolean } | { key: keyof O & string; neighbours: number; ratios?: readonly number[] })[];
+  refinedInFull?: readonly ({ key: (keyof O & string) | "riseM"; samples: readonly number[]; reference?: number; descend?: boolean; beyond?: boolean; carries?: keyof O & string } | { key: keyof O & string; neighbours: number; ratios?: readonly number[] })[];
 }
 
 /** A scheme: its declaration and its designer (the design registry, ./index.ts: the pipeline, the workers and the command line). */

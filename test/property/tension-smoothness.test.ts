@@ -60,8 +60,10 @@ describe("tension roofs are smooth across span (40–400 m at 5 m)", () => {
   // (4 Dec), that step was 18.9 %. Since the mast count is refined on 3D designs (5 Dec) the self-weight holds (4 → 5
   // masts at 60 → 65 m: 5.84 → 5.17 kg/m², then 5.57 at 70 m), and the one step is the total mass per m² of plan at that
   // change of mast count, 387 → 321 kg/m² (−17 %: the ground anchors' dead weight, most of the total, is shared by more
-  // masts; measured): a named regime change, which this stricter test does not exempt, expected exactly.
-  it("cable net with the 3D analysis at its searched proportions, 60–105 m", () => expect(searchedJumps(cableNet as unknown as SchemeModel, spans.filter((s) => s >= 60 && s <= 105), { analysis: "3d" }).map((j) => j.replace(/ [\d.]+ → [\d.]+ /, " "))).toEqual(["total mass per m² of plan between 60 and 65 m"]), 600_000);
+  // masts; measured): a named regime change, which this stricter test does not exempt. Since the mast ring carries the
+  // mast height (5 Dec, later) that step is gone: at 60 m the net takes ring 0.55 and height 0.16 (was 0.65 and 0.11),
+  // carbon 103.0 → 85.7 kgCO2e/m² of floor (measured).
+  it("cable net with the 3D analysis at its searched proportions, 60–105 m", () => expect(searchedJumps(cableNet as unknown as SchemeModel, spans.filter((s) => s >= 60 && s <= 105), { analysis: "3d" })).toEqual([]), 600_000);
   // The demo study, 95–105 m. Before net10 the self-weight stepped +15.5 % at 100 → 105 m (carbon, the objective,
   // +2.9 %): the mast height was chosen at 0.14 on the quadratic through the samples 0.1 / 0.15 / 0.2 (the 3D net
   // at 0.1 needs 11 % more prestress than at 0.11: the trend misjudged it) while its 3D design at 0.12 was 5.7 %

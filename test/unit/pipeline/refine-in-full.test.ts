@@ -184,6 +184,43 @@ describe("refineInFull: after a step beyond the samples, the proportions declare
   });
 });
 
+describe("refineInFull: a proportion that carries another designs its values with the other moved along (made-up objectives)", () => {
+  const ring: OptionSpec = { key: "ring", label: "ring", kind: "number", unit: "", min: 0.3, max: 0.9, step: 0.05, source: "test", free: true };
+  const carrying = { ...model([{ key: "depth", samples: [0.1, 0.15, 0.2], reference: 0.15, descend: true }, { key: "ring", samples: [0.6, 0.65], reference: 0.6, beyond: true, carries: "depth" }]), options: [depth, ring], defaults: { depth: 0.15, ring: 0.6 } } as SchemeModel;
+  const run = (objective: Record<string, number>, pinned: string[] = []) => {
+    const asked: string[] = [];
+    const result = refineInFull(carrying, { options: { depth: 0.15, ring: 0.6 }, riseM: 10 }, { ...at, pinned }, (o, riseM) => {
+      const name = `${Math.round(100 * (o.depth as number))}/${Math.round(100 * (o.ring as number))}`;
+      asked.push(name);
+      return designed(o, riseM, objective[name] ?? 100);
+    }, (d) => d.totalMassKg);
+    return { asked, depth: result.full.options.depth, ring: result.full.options.ring, objective: result.full.objective, refined: result.refinements.map((r) => [r.key, r.value]) };
+  };
+  // the depth's samples at ring 0.6 (the trend keeps 0.15); ring 0.65 is designed at depth 0.15 × (1 − 0.65) ÷ (1 − 0.6) = 0.131 → 0.13
+  const base = { "10/60": 40, "15/60": 30, "20/60": 40 };
+  it("designs the ring's other sample at the carried depth, and keeps the carried depth where it is the better", () => {
+    const r = run({ ...base, "13/65": 20, "15/65": 35 });
+    expect(r.asked).toContain("13/65");
+    expect(r.ring).toBe(0.65);
+    expect(r.depth).toBe(0.13);
+    expect(r.objective).toBe(20);
+    expect(r.refined).toEqual([["depth", 0.13], ["ring", 0.65]]);
+  });
+  it("steps the depth again from the value chosen before the ring moved where that is better at the ring found", () => {
+    // 0.16 on 0.65 is better than 0.15 by less than the band, so the depth stays at 0.15
+    const r = run({ ...base, "13/65": 28, "15/65": 25, "16/65": 24.8 });
+    expect(r.ring).toBe(0.65);
+    expect(r.depth).toBe(0.15);
+    expect(r.objective).toBe(25);
+    expect(r.refined).toEqual([["depth", 0.15], ["ring", 0.65]]);
+  });
+  it("leaves a pinned depth where it is: the ring's samples are designed at it", () => {
+    const r = run({ "15/65": 20 }, ["depth"]);
+    expect(r.asked.every((name) => name.startsWith("15/"))).toBe(true);
+    expect(r.ring).toBe(0.65);
+  });
+});
+
 describe("refineInFull: a count refined on its neighbours (made-up objectives)", () => {
   const count: OptionSpec = { key: "count", label: "count", kind: "number", unit: "", min: 3, max: 12, step: 1, integer: true, source: "test", free: true };
   const counted = (refinedInFull: SchemeModel["refinedInFull"]): SchemeModel => ({ ...model(refinedInFull), options: [count, depth], defaults: { count: 6, depth: 0.6 } }) as SchemeModel;
@@ -252,7 +289,10 @@ describe("refineInFull with the cable net's declared refinements (made-up object
     expect(last.samples.map((s) => s.value)).toEqual([0.6, 0.65]);
     const ringDesigns = at120.asked.filter((o) => o.mastRingRatio === 0.6);
     expect(ringDesigns.length).toBe(1);
-    expect([ringDesigns[0]!.masts, ringDesigns[0]!.mastHeightRatio]).toEqual([at120.full.options.masts, at120.full.options.mastHeightRatio]);
+    // at the count chosen, and at the mast height chosen carried with the ring (× (1 − 0.6) ÷ (1 − 0.65): the outer radial cables keep their slope)
+    const carriedHeight = Math.round((100 * (at120.full.options.mastHeightRatio as number) * 0.4) / 0.35) / 100;
+    expect([ringDesigns[0]!.masts, ringDesigns[0]!.mastHeightRatio]).toEqual([at120.full.options.masts, carriedHeight]);
+    expect(carriedHeight).toBeGreaterThan(at120.full.options.mastHeightRatio as number);
     expect(at120.full.options.mastRingRatio).toBe(0.65);
     const at160 = run(0.15, { "0.6": 114.25, "0.65": 117.93 });
     expect(at160.full.options.mastRingRatio).toBe(0.6);
