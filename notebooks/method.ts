@@ -40,7 +40,7 @@ const methods: [string, string][] = [
   ["Embodied carbon", "EN 15978 modules as in IStructE, How to calculate embodied carbon (2nd ed.): A1–A3 = mass × factor; A4 by distance and mode; A5 wastage with WF = 1/(1−WR) − 1; C1–C4 where given; module D and biogenic storage (EN 16449) reported apart, never netted."],
   ["Cost", "Elemental order of cost: quantity × rate × location factor, on-costs compounding works → preliminaries → overheads and profit → fees → risk → inflation. Estimate class: concept screening, roughly −50 % to +100 %."],
 ];
-staticCell(main, { id: "methods", title: "Methods" }, tableElement(["Topic", "Method and source"], methods));
+staticCell(main, { id: "methods", title: "Methods" }, tableElement(["Topic", "Method and source"], methods, { whole: [false, true] }));
 
 staticCell(
   main,

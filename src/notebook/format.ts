@@ -110,8 +110,33 @@ export const fmt = {
   versusBest,
 };
 
-/** A small table element from rows of cells; the first row is the header. */
-export function tableElement(header: readonly string[], rows: readonly (readonly (string | number)[])[], options: { caption?: string; numeric?: readonly boolean[] } = {}): HTMLTableElement {
+/**
+ * A standard's reference ("EN 1993-1-11:2006") and a command-line flag ("--buckling"): where a
+ * table column broke them at their hyphens (a check's clause read "strand tension, EN 1993-1-" over
+ * "11:2006 §6.2"), they are kept whole (a clause after it may go to the next line).
+ */
+const UNBROKEN = /\b(?:EN|ISO|BS) \d[\d-]*(?::\d{4})?|(?<![\w-])--[a-z][a-z-]*/g;
+
+/** A text in runs, those to be kept whole (UNBROKEN) marked; the runs joined are the text. */
+export function unbrokenRuns(text: string): { text: string; whole: boolean }[] {
+  const runs: { text: string; whole: boolean }[] = [];
+  let at = 0;
+  for (const m of text.matchAll(UNBROKEN)) {
+    if (m.index > at) runs.push({ text: text.slice(at, m.index), whole: false });
+    runs.push({ text: m[0], whole: true });
+    at = m.index + m[0].length;
+  }
+  if (at < text.length || runs.length === 0) runs.push({ text: text.slice(at), whole: false });
+  return runs;
+}
+
+/**
+ * A small table element from rows of cells; the first row is the header. `whole`: the columns whose
+ * standards' references and flags are kept whole (unbrokenRuns), where the column is wide enough for
+ * them (a check table's clauses, the method page's text; in a member table's narrow last column
+ * they pushed the table past its box).
+ */
+export function tableElement(header: readonly string[], rows: readonly (readonly (string | number)[])[], options: { caption?: string; numeric?: readonly boolean[]; whole?: readonly boolean[] } = {}): HTMLTableElement {
   const table = document.createElement("table");
   if (options.caption) {
     const caption = document.createElement("caption");
@@ -133,7 +158,9 @@ export function tableElement(header: readonly string[], rows: readonly (readonly
     const r = document.createElement("tr");
     row.forEach((cell, i) => {
       const td = document.createElement("td");
-      td.textContent = typeof cell === "number" ? fmt.sig3(cell) : cell;
+      if (typeof cell === "number") td.textContent = fmt.sig3(cell);
+      else if (options.whole?.[i]) td.append(...unbrokenRuns(cell).map(({ text, whole }) => (whole ? Object.assign(document.createElement("span"), { className: "whole", textContent: text }) : text)));
+      else td.textContent = cell;
       if (options.numeric?.[i]) td.className = "num";
       r.append(td);
     });

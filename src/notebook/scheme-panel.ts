@@ -123,7 +123,7 @@ export function checkTable(design: Design): HTMLElement {
   return tableElement(
     ["Check", "Clause / source", "Demand", "Capacity", "Utilisation", "Passes"],
     design.checks.map((c) => [fmt.plain(c.name), fmt.plain(c.clause), fmt.quantity(c.demand, c.unit), fmt.quantity(c.capacity, c.unit), fmt.two(c.utilisation), c.passed ? "yes" : "NO"]),
-    { caption: "Checks", numeric: [false, false, true, true, true, false] },
+    { caption: "Checks", numeric: [false, false, true, true, true, false], whole: [false, true] },
   );
 }
 

@@ -17,6 +17,19 @@ afterAll(async () => {
 });
 
 describe("method page (issue 14)", () => {
+  it("keeps the standards' references and the command-line flags in its methods whole, however narrow the page", async () => {
+    for (const width of [1300, 390]) {
+      const { page, errors } = await openPage(browser, `${inject("baseUrl")}/method.html`);
+      await page.setViewportSize({ width, height: 900 });
+      await page.waitForSelector("#cell-methods td");
+      const runs = await page.evaluate(() => [...document.querySelectorAll("#cell-methods td .whole")].map((s) => ({ text: s.textContent, lines: s.getClientRects().length })));
+      expect(runs.map((r) => r.text)).toContain("--buckling");
+      expect(runs.filter((r) => r.lines !== 1)).toEqual([]);
+      expect(errors).toEqual([]);
+      await page.close();
+    }
+  });
+
   it("the search box narrows the record to the rows with every word typed, and says how many match", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/method.html`);
     await page.waitForSelector("#record-rows tbody tr");

@@ -1,6 +1,6 @@
 // The one formatting module (issue 14, "words a project lead uses").
 import { describe, it, expect } from "vitest";
-import { fmt } from "../../../src/notebook/format";
+import { fmt, unbrokenRuns } from "../../../src/notebook/format";
 
 describe("fmt", () => {
   it("sig3 gives three significant figures and keeps the size of large numbers", () => {
@@ -42,5 +42,22 @@ describe("fmt", () => {
     expect(fmt.versusBest(10, 10)).toBe("best");
     expect(fmt.versusBest(11.2, 10)).toBe("+12 %");
     expect(fmt.versusBest(25, 10)).toBe("2.5× the best");
+  });
+});
+
+describe("unbrokenRuns: what a table cell keeps whole", () => {
+  const whole = (text: string) => unbrokenRuns(text).filter((r) => r.whole).map((r) => r.text);
+  it("keeps a standard's reference whole (its clause may go to the next line), and a command-line flag", () => {
+    expect(whole("strand tension, EN 1993-1-11:2006 §6.2")).toEqual(["EN 1993-1-11:2006"]);
+    expect(whole("flexural buckling, EN 1993-1-1 §6.3.1; EN 1990 Table A1.2(A)")).toEqual(["EN 1993-1-1", "EN 1990"]);
+    expect(whole("bending, EN 1995-1-1 eq. 6.11")).toEqual(["EN 1995-1-1"]);
+    expect(whole("on the command line, --buckling; or --sweep F:T:S")).toEqual(["--buckling", "--sweep"]);
+  });
+  it("leaves words with hyphens, minus signs and plain text alone, and the runs joined are the text", () => {
+    for (const text of ["well-kept mid-height", "−12.7 MN", "", "ten-year x--y", "EN 1993-1-11:2006 §6.2 and then --buckling."]) {
+      expect(unbrokenRuns(text).map((r) => r.text).join("")).toBe(text);
+    }
+    expect(whole("well-kept mid-height")).toEqual([]);
+    expect(whole("x--y")).toEqual([]);
   });
 });
