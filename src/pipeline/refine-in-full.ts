@@ -1,4 +1,4 @@
-import type { Design, OptionValue, SchemeModel, SchemeOptions } from "../schemes/types";
+import type { Design, SchemeModel, SchemeOptions } from "../schemes/types";
 import { gridOf, nearestIndex, PROPORTION_TIE_FRACTION, RISE_KEY, type RiseSetting } from "./proportions";
 import { fittedLeast, trendChoice } from "./rise-trend";
 
