@@ -106,7 +106,13 @@ export const cableNetDeclaration = declareScheme({
   // where the ring moved the height steps again (refine-in-full.ts). Demo study 40–400 m every 10 m: 27 of 37 spans
   // lower, by up to 13.5 % (50 m), none higher, the sum −80.7 %-points; default study 17 spans lower, by up to 16.8 % (60 m), none higher; 379 → 467 3D designs
   // (default 366 → 425), the 3D pass about 20 % more CPU (5 Dec, measured). Still one at a time: the pair search finds
-  // up to 2 % more at the same count (160 m: 0.5/0.21, 112.7 against 115.0) and 6 % at 4 masts at 100 m.
+  // up to 2 % more at the same count (160 m: 0.5/0.21, 112.7 against 115.0). The count is the larger miss: chosen at
+  // the screened height and ring, it is not refined again at the ones found, and with height and ring refined at
+  // another count (pinned) the demo's net is lower at 3–4 masts on a smaller ring at 70, 80, 90, 130 and 150 m (by
+  // 4.4, 11.1, 6.6, 3.9 and 1.7 %; 6 masts kept there, measured 5 Dec). Odd counts are 3–12 % worse than the even ones
+  // beside them (110–300 m), so a walk of ±1 does not reach the better count; refining height and ring at a second count
+  // would cost about 60 % more 3D designs and, the even counts within a few per cent of each other, flip between 4 and
+  // 6 masts from span to span. Not done.
   refinedInFull: [{ key: "masts", neighbours: 0, ratios: [1 / 2, 2 / 3] }, { key: "mastHeightRatio", samples: [0.1, 0.15, 0.2], reference: 0.15, descend: true }, { key: "mastRingRatio", samples: [0.6, 0.65], reference: 0.6, beyond: true, carries: "mastHeightRatio" }],
   options: defineOptions(declarations),
 });
