@@ -104,8 +104,8 @@ export const cableNetDeclaration = declareScheme({
   // ring 0.45–0.75) around the choice found 3.0–6.3 % lower at 100, 160, 220 and 280 m (demo). So the ring's samples
   // carry the mast height with them (`carries`: × (1 − ring) ÷ (1 − ring before), the outer cables' slope kept), and
   // where the ring moved the height steps again (refine-in-full.ts). Demo study 40–400 m every 10 m: 27 of 37 spans
-  // lower, by up to 13.5 % (50 m), none higher, the sum −80.7 %-points; default study 17 spans lower, by up to 16.8 % (60 m), none higher; 379 → 467 3D designs
-  // (default 366 → 425), the 3D pass about 20 % more CPU (5 Dec, measured). Still one at a time: the pair search finds
+  // lower, by up to 13.5 % (50 m), none higher, the sum −80.7 %-points; default study 17 spans lower, by up to 16.8 %
+  // (60 m), none higher; 379 → 467 3D designs (default 366 → 425), the 3D pass about 20 % more CPU (5 Dec, measured). Still one at a time: the pair search finds
   // up to 2 % more at the same count (160 m: 0.5/0.21, 112.7 against 115.0). The count is the larger miss: chosen at
   // the screened height and ring, it is not refined again at the ones found, and with height and ring refined at
   // another count (pinned) the demo's net is lower at 3–4 masts on a smaller ring at 70, 80, 90, 130 and 150 m (by
