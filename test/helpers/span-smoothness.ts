@@ -80,7 +80,7 @@ export interface KnownJump {
  * kgCO2e/m² of floor, −1.3 %): the 3D objective has a flat diagonal valley of (ring, mast height)
  * pairs, and the two spans land at different ends of it, 0.65/0.13 and 0.55/0.18. At 110 m the other
  * end is within the 2 % band (0.55/0.18: 81.4 against 82.1, 7.21 kg/m²), so the self-weight there can
- * be either, measured; taller masts on a smaller ring weigh more and need less anchor concrete.
+ * be either, measured.
  */
 export const KNOWN_JUMPS: readonly KnownJump[] = [{ id: "cable-net", from: 110, to: 115, metric: "selfWeightKgPerM2" }];
 /** The demo study's: none (before the mast count was refined on 3D designs its step at 65 → 70 m was 15.0 %, just under the limit). */
