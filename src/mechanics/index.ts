@@ -22,6 +22,7 @@ export { glulamKMod, GLULAM_K_MOD, LOAD_DURATION_CLASSES, type LoadDurationClass
 export { timberDesignStrengthPa, TIMBER_GAMMA_M } from "./timber-gamma-m";
 export { timberCompressionBendingUtilisation, type TimberCompressionBending } from "./timber-combined-compression";
 export { timberTensionBendingUtilisation } from "./timber-combined-tension";
+export { timberCriticalBendingStressPa, timberLateralTorsionalFactor, timberShearUtilisation, LTB_LENGTH_RATIO_UDL, SHEAR_CRACK_FACTOR } from "./timber-beam-stability";
 export { creepReducedModulusPa, GLULAM_K_DEF } from "./timber-creep";
 export { charringDepthM, effectiveCharDepthM, CHARRING_RATE_M_PER_MIN, ZERO_STRENGTH_LAYER_M } from "./timber-charring";
 

@@ -9,6 +9,11 @@ import {
   timberTensionBendingUtilisation,
   creepReducedModulusPa,
   GLULAM_K_DEF,
+  timberCriticalBendingStressPa,
+  timberLateralTorsionalFactor,
+  timberShearUtilisation,
+  LTB_LENGTH_RATIO_UDL,
+  SHEAR_CRACK_FACTOR,
   GLULAM_BETA_C,
 } from "../../src/mechanics";
 import { expectAbsClose, expectRelClose } from "../helpers/close";
@@ -78,4 +83,39 @@ describe("combined tension and bending (EN 1995-1-1 §6.2.3 eqs 6.17/6.18)", () 
   // By hand: σt = 6, ft = 12, σm,y = 4, fm = 16 MPa: 6/12 + 4/16 = 0.75; with σm,z = 2: max(0.75 + 0.7·0.125, 0.5 + 0.7·0.25 + 0.125) = 0.8375.
   it("σt/ft + σm/fm = 0.5 + 0.25 = 0.75", () => expectAbsClose(timberTensionBendingUtilisation(6e6, 12e6, 4e6, 16e6), 0.75, 1e-12));
   it("with bending about both axes: 0.8375 (eq. 6.17 governs)", () => expectAbsClose(timberTensionBendingUtilisation(6e6, 12e6, 4e6, 16e6, 2e6), 0.8375, 1e-12));
+});
+
+describe("lateral-torsional buckling of a glulam beam (EN 1995-1-1 §6.3.3, eqs 6.30–6.34, Table 6.1)", () => {
+  it("ℓ_ef = 0.9 ℓ for a simply supported beam under a uniform load (Table 6.1)", () => expect(LTB_LENGTH_RATIO_UDL).toBe(0.9));
+  // By hand from eq. 6.32: GL24h (E_0,05 = 9.6 GPa, EN 14080 Table 5), 140 × 600 mm, ℓ_ef = 9 m:
+  // 0.78 · 0.14² · 9.6e9 / (0.6 · 9) = 0.78 · 0.0196 · 9.6e9 / 5.4 = 27.179 MPa.
+  it("σ_m,crit = 0.78 b² E_0,05/(h ℓ_ef) = 27.179 MPa (eq. 6.32)", () => expectRelClose(timberCriticalBendingStressPa(0.14, 0.6, 9, 9.6e9), 27.1787e6, 1e-5));
+  // eq. 6.30: λ_rel,m = √(24/27.179) = 0.93970; eq. 6.34: 1.56 − 0.75 · 0.93970 = 0.85522.
+  it("λ_rel,m = √(f_m,k/σ_m,crit) = 0.9397 → k_crit = 1.56 − 0.75 λ_rel,m = 0.8552 (eqs 6.30, 6.34)", () =>
+    expectAbsClose(timberLateralTorsionalFactor(24e6, 27.1787e6), 0.85522, 1e-5));
+  it("k_crit = 1 up to λ_rel,m = 0.75 and 1/λ_rel,m² beyond 1.4 (eq. 6.34)", () => {
+    expect(timberLateralTorsionalFactor(24e6, 24e6 / 0.75 ** 2)).toBe(1);
+    expect(timberLateralTorsionalFactor(24e6, 100e6)).toBe(1);
+    // λ_rel,m = 2: σ_m,crit = 24/4 = 6 MPa, k_crit = 1/4
+    expectAbsClose(timberLateralTorsionalFactor(24e6, 6e6), 0.25, 1e-12);
+  });
+  it("eq. 6.34 is continuous at both breakpoints (0.75: 1.56 − 0.5625 = 0.9975; 1.4: 1.56 − 1.05 = 0.51 against 1/1.96 = 0.5102)", () => {
+    const at = (lambda: number) => timberLateralTorsionalFactor(24e6, 24e6 / lambda ** 2);
+    expectAbsClose(at(0.75 + 1e-9), 0.9975, 1e-6);
+    expectAbsClose(at(1.4), 0.51, 1e-9);
+    expectAbsClose(at(1.4 + 1e-9), 1 / 1.96, 1e-6);
+  });
+  it("names an argument out of range", () => {
+    expect(() => timberCriticalBendingStressPa(0.14, 0.6, 0, 9.6e9)).toThrow(/effective length/);
+    expect(() => timberLateralTorsionalFactor(24e6, -1)).toThrow(/critical bending stress/);
+  });
+});
+
+describe("shear of a glulam beam (EN 1995-1-1:2004+A1:2008 §6.1.7, eqs 6.13/6.13a)", () => {
+  it("k_cr = 0.67 for glulam (§6.1.7(2))", () => expect(SHEAR_CRACK_FACTOR).toBe(0.67));
+  // By hand: V_d = 60 kN on 140 × 600 mm: τ_d = 1.5 · 60e3/(0.67 · 0.14 · 0.6) = 1.59915 MPa;
+  // f_v,d of GL24h (f_v,k = 3.5 MPa), short-term, SC2: 0.9 · 3.5/1.25 = 2.52 MPa; 1.59915/2.52 = 0.63458.
+  it("τ_d = 1.5 V_d/(k_cr b h) against f_v,d: 1.599 MPa of 2.52 MPa = 0.6346", () =>
+    expectAbsClose(timberShearUtilisation(60e3, 0.14, 0.6, timberDesignStrengthPa(3.5e6, glulamKMod("short-term", 2), TIMBER_GAMMA_M.glulam)), 0.63458, 1e-5));
+  it("refuses a negative shear force, naming it", () => expect(() => timberShearUtilisation(-1, 0.14, 0.6, 2.52e6)).toThrow(/shear force/));
 });

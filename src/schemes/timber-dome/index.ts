@@ -17,6 +17,7 @@ import type { LatticeBand } from "../../mechanics/lattice-bands";
 import { GLULAM_SECTIONS } from "./sections";
 import { sizeTimberLattice, timberSelfWeightKPa, withCharLayer, type TimberLatticeInputs, type TimberLatticeResult } from "./sizing";
 import { analyseTimberNet } from "./analysis";
+import type { MemberCheck } from "./member-design";
 import { frameTooLarge } from "../../analysis/frame";
 import { timberDomeDeclaration, type TimberDomeOptions } from "./declaration";
 
@@ -75,10 +76,19 @@ function timberWarnings(opts: TimberDomeOptions): string[] {
     "the roofing is a membrane on the deck with no insulation layer (the metal deck of the steel schemes includes 150 mm of mineral wool)",
     "the deck is priced and counted with the glulam factor as a proxy for softwood boards",
     "the supports under the edge ring (walls or columns to the eaves) are not included",
-    "shear, lateral-torsional stability (the deck restrains the top edge) and the glulam depth factor k_h are not checked",
+    "lateral-torsional buckling (EN 1995-1-1 §6.3.3): a purlin's upper edge is held by the deck and a lattice member's by the purlins framing into it, at the purlin spacing (common practice, no source); under a net uplift the lower edge is free over 0.9 × the span (Table 6.1); the supports are taken as holding the members against twisting",
+    "the depth factor k_h (EN 1995-1-1 eq. 3.2, up to 1.1 on the bending and tension strengths of glulam under 600 mm deep) is taken as 1, the safe side",
   ];
   if (opts.fireMinutes > 0) warnings.push(`fire: ${opts.fireMinutes} min of charring added to the ambient sections; the fire situation itself (EN 1995-1-2 §4.2.2, k_fi, γ_M,fi = 1) is not checked separately`);
   return warnings;
+}
+
+/** A member check's governing text split at its clause: what governs (with its case), and the clause ("EN 1995-1-1 eq. …"). */
+function whatGoverns(c: MemberCheck): string {
+  return c.governing.split(", EN")[0]!;
+}
+function clauseOf(c: MemberCheck): string {
+  return c.governing.slice(whatGoverns(c).length + 2);
 }
 
 function timberMembers(r: TimberLatticeResult, charDepthM: number): { members: MemberGroup[]; checks: Check[] } {
@@ -98,14 +108,14 @@ function timberMembers(r: TimberLatticeResult, charDepthM: number): { members: M
   for (const b of r.bands) {
     const name = b.band.edge ? "members meeting the ring" : `members, band ${b.band.index + 1} of ${r.bands.filter((x) => !x.band.edge).length}`;
     members.push(group(`lattice ${name}`, b.band.count, b.band.meanLengthM, b.section, b.check.utilisation, b.check.demand.forceN, b.check.governing));
-    checks.push(check(`${name}: ${b.check.governing.split(", EN")[0]}`, "EN 1995-1-1 §6.2.3, §6.3.2", b.check.utilisation, 1, ""));
+    checks.push(check(`${name}: ${whatGoverns(b.check)}`, clauseOf(b.check), b.check.utilisation, 1, ""));
     checks.push(check(`${name}: general buckling of the lattice`, "equivalent continuum 4√(DB)/R² × knock-down, E/(1 + k_def) (EN 1995-1-1 Table 3.2)", b.pressurePa, b.bucklingPa, "Pa"));
   }
   if (r.purlins) {
     const p = r.purlins;
     const moment = p.check.demand.momentNm;
     members.push({ ...group("purlins", Math.round(p.totalLengthM / Math.max(...r.bands.map((b) => b.band.maxLengthM))), Math.max(...r.bands.map((b) => b.band.maxLengthM)), p.section, p.check.utilisation, 0, p.check.governing), bending: { designMomentNm: moment, resistanceNm: p.check.utilisation > 0 ? moment / p.check.utilisation : 0 } });
-    checks.push(check("purlins: bending", "EN 1995-1-1 eq. 6.11", p.check.utilisation, 1, ""));
+    checks.push(check(`purlins: ${whatGoverns(p.check)}`, clauseOf(p.check), p.check.utilisation, 1, ""));
     checks.push(check("purlins: final deflection", "EN 1995-1-1 §7.2, Table 7.2 (l/250, from memory)", p.deflectionM, p.limitM, "m"));
   }
   if (r.ringTensionN > 0) checks.push(check("edge tension ring", "EN 1993-1-1 eq. 6.6", r.ringTensionN, r.ringAreaM2 * RING_YIELD_PA, "N"));

@@ -7,7 +7,7 @@ import { simplySupportedMomentNm } from "../../mechanics/beam";
 import { kPaFromKgPerM2 } from "../../mechanics/gravity";
 import { STEEL_DENSITY_KG_PER_M3 } from "../../catalogue/chs";
 import type { LatticeBand } from "../../mechanics/lattice-bands";
-import { pickGlulam, type MemberCheck, type MemberDemand } from "./member-design";
+import { pickGlulam, torsionalLengthM, type MemberCheck, type MemberDemand } from "./member-design";
 import { rectangularSection, type GlulamSection } from "./sections";
 import { deckThicknessM, sizePurlins, type PurlinResult } from "./secondary";
 
@@ -129,9 +129,10 @@ function bandDemands(input: TimberLatticeInputs, band: LatticeBand, c: LoadCase)
   }
   const lineLoad = Math.abs(c.surfacePa + c.planPa) * TRIBUTARY_WIDTH_PER_LENGTH * band.maxLengthM;
   const momentNm = simplySupportedMomentNm(lineLoad, band.maxLengthM);
+  const beam = { momentNm, shearN: (lineLoad * band.maxLengthM) / 2, torsionalLengthM: torsionalLengthM(c, band.maxLengthM, input.purlinSpacingM), kMod: c.kMod, label: c.label };
   return [
-    { forceN: compressionN, momentNm, kMod: c.kMod, label: c.label },
-    { forceN: tensionN, momentNm, kMod: c.kMod, label: c.label },
+    { forceN: compressionN, ...beam },
+    { forceN: tensionN, ...beam },
   ];
 }
 
@@ -208,7 +209,8 @@ export function sizeTimberLattice(input: TimberLatticeInputs, selfWeightKPa: num
   const gravity = cases.filter((c) => c.purpose === "gravity");
   const heaviest = gravity.reduce((worst, c) => (c.surfacePa + c.planPa > worst.surfacePa + worst.planPa ? c : worst));
   const pressurePa = heaviest.surfacePa + heaviest.planPa;
-  const panelCases = gravity.map((c) => ({ pressurePa: c.surfacePa + c.planPa, kMod: c.kMod, label: c.label }));
+  // the deck and the purlins carry every case, uplift too: it bends them the other way, with the purlins' lower edge free
+  const panelCases = cases.map((c) => ({ pressurePa: c.surfacePa + c.planPa, kMod: c.kMod, label: c.label }));
   const serviceLoadPa = (selfWeightKPa + input.servicesKPa + input.slsVariableKPa) * 1000;
   const purlinSpanM = Math.max(...input.bands.map((b) => b.maxLengthM));
   const deckT = deckThicknessM({ bendingPa: input.deckBendingPa }, panelCases, serviceLoadPa, input.purlinSpacingM, input.creepModulusPa, input.gammaMBoards);
