@@ -1,3 +1,4 @@
+import { wholeNumber } from "../kernel/units";
 import * as Plot from "@observablehq/plot";
 import type { AnalysisView } from "../schemes/types";
 
@@ -105,7 +106,7 @@ export function model3dChartOptions(input: Model3dChartInput): Plot.PlotOptions 
       Plot.link(deformed.filter((d) => d.state !== "slack cable"), {
         x1: "x1", y1: "y1", x2: "x2", y2: "y2", stroke: "state",
         strokeWidth: (d: { state: string }) => (d.state === "most utilised" ? 2 : 0.8),
-        title: (d: { state: string; forceKN: number }) => `${d.state}: ${d.forceKN.toFixed(0)} kN`,
+        title: (d: { state: string; forceKN: number }) => `${d.state}: ${wholeNumber(d.forceKN)} kN`,
       }),
       Plot.link(deformed.filter((d) => d.state === "slack cable"), { x1: "x1", y1: "y1", x2: "x2", y2: "y2", stroke: "state", strokeWidth: 1.2, strokeDasharray: "4 3" }),
     ],

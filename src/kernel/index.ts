@@ -7,4 +7,4 @@ export { messageOf, failure } from "./errors";
 export { CAUTION } from "./caution";
 export { CsvError, type CsvProblem } from "./csv-table";
 export { parseSchemaCsv, rowsToCsv, csvRowSpec, type CsvColumn } from "./schema-csv";
-export { readableUnit } from "./units";
+export { readableUnit, wholeNumber } from "./units";

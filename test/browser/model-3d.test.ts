@@ -46,7 +46,7 @@ function checkFigures(figures: Awaited<ReturnType<typeof modelFigures>>, label: 
     expect(f.text).toContain(`magnified ${magnified![1]}×`);
     expect(f.description).toMatch(/\d+ slack cables dashed; the most utilised members marked\./);
     // Members carry their state and force; some are marked the most utilised, and the legend says so.
-    expect(f.marks.some((t) => /^most utilised: -?\d+ kN$/.test(t))).toBe(true);
+    expect(f.marks.some((t) => /^most utilised: −?\d{1,3}(,\d{3})* kN$/.test(t))).toBe(true);
     expect(f.text).toContain("most utilised");
   }
 }

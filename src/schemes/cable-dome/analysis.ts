@@ -1,3 +1,4 @@
+import { wholeNumber } from "../../kernel/units";
 import type { Brief } from "../../brief";
 import { analysedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
@@ -283,7 +284,7 @@ function summarise(input: DomeAnalysisInput, last: Round, n: number, mustStayTau
   const reason = notConverged
     ? `the 3D analysis did not converge under ${notConverged.c.name}: ${notConverged.s.reason ?? "no equilibrium"}`
     : slackTaut
-      ? `cables go slack under ${slackTaut.c.name} even at the largest prestress tried (${(alpha / 1000).toFixed(0)} kN): add hoops or deepen the posts`
+      ? `cables go slack under ${slackTaut.c.name} even at the largest prestress tried (${wholeNumber(alpha / 1000)} kN): add hoops or deepen the posts`
       : "";
   const ring = solved.reduce((w, { c, s }) => {
     const r = ringCompressionOf(model, s, input.layout.trusses);

@@ -1,3 +1,4 @@
+import { wholeNumber } from "../../kernel/units";
 import type { Brief } from "../../brief";
 import type { Catalogue, Fabric } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
@@ -100,10 +101,10 @@ function analysedSizing(input: DomeSizingInput, sized: DomeSizing, selfWeightKPa
 
 /** What set the analysed prestress, in a project lead's words: keeping the cables taut, how far the roof may move, or a lower prestress the analysis could not balance. */
 function prestressWarning(analysis: DomeAnalysis, spanM: number, residualPrestress: number): string {
-  const kN = `${(analysis.prestressN / 1000).toFixed(0)} kN`;
+  const kN = `${wholeNumber(analysis.prestressN / 1000)} kN`;
   const limit = analysis.governedBy;
   if (limit === null) return `prestress ${kN}: the lowest the analysis tried; with it every cable stays taut and the roof moves less than span/${(1 / DEFLECTION_LIMIT_RATIO).toFixed(0)} (no lower prestress was found to fail)`;
-  const lower = `at ${(limit.prestressN / 1000).toFixed(0)} kN`;
+  const lower = `at ${wholeNumber(limit.prestressN / 1000)} kN`;
   if (limit.kind === "displacement") return `prestress ${kN}, set by how far the roof may move: ${lower} it moves more than span/${(1 / DEFLECTION_LIMIT_RATIO).toFixed(0)} (${(spanM * DEFLECTION_LIMIT_RATIO).toFixed(2)} m) under ${limit.caseName}`;
   if (limit.kind === "taut cables") {
     const { name, keptShare } = limit.cable;
@@ -144,7 +145,7 @@ function designWith(brief: Brief, opts: CableDomeOptions, catalogue: Catalogue, 
   if (ring) checks.push(check("compression ring", ring.governing, sized.ringCompressionN, ring.resistanceN, "N"));
   const warnings = [
     analysis
-      ? `members, ring and prestress from the 3D analysis (Newton–Raphson, tension-only cables) of ${analysis.cases.map((c) => c.name).join(", ")} — the combinations with the largest gravity peak, drifted snow and the largest uplift; the closed form (uniform equivalents) seeds it and is the cross-check: prestress ${(closedForm.prestressN / 1000).toFixed(0)} kN there; the ring is taken as rigid in the analysis, the wind's horizontal part is left out, and member stiffness is the closed form's`
+      ? `members, ring and prestress from the 3D analysis (Newton–Raphson, tension-only cables) of ${analysis.cases.map((c) => c.name).join(", ")} — the combinations with the largest gravity peak, drifted snow and the largest uplift; the closed form (uniform equivalents) seeds it and is the cross-check: prestress ${wholeNumber(closedForm.prestressN / 1000)} kN there; the ring is taken as rigid in the analysis, the wind's horizontal part is left out, and member stiffness is the closed form's`
       : "axisymmetric first-order closed form: each design combination is taken at its conservative uniform equivalent (the peak of a gravity map, the most upward value of an uplift map, over the whole plan); the antisymmetric part of drifted snow and one-sided wind is not analysed by it",
     ...(analysis && analysis.reason === "" ? [prestressWarning(analysis, brief.spanM, opts.residualPrestress)] : []),
     "temperature: a uniform change does not change the forces of cables, posts and a steel ring that expand alike; with a concrete ring the small difference of expansion is left out",

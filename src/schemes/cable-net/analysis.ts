@@ -1,3 +1,4 @@
+import { wholeNumber } from "../../kernel/units";
 import type { Brief } from "../../brief";
 import { analysedCombinations, unboundedCombinations, uniformPressurePa, type AnalysisView, type DesignAnalysis, type PlanCombination } from "../kit";
 import { combinationAtPlanKPa, type DesignBasis } from "../../loads";
@@ -221,7 +222,7 @@ function governingText(input: NetAnalysisInput, round: NetRound): string {
   const radius = (Math.hypot(a[0], a[1]) + Math.hypot(b[0], b[1])) / 2;
   const family = round.net.tags[w.member]!.family;
   const share = (100 * w.forceN) / w.prestressN;
-  return `${family === "central ring" ? "the central ring" : `a${family === "outer radial" || family === "inner radial" ? "n" : ""} ${family} cable ${radius.toFixed(0)} m from the centre (the masts stand ${input.layout.mastRadiusM.toFixed(0)} m out)`} under ${w.combination}: it keeps ${share.toFixed(1)} % of its ${(w.prestressN / 1000).toFixed(0)} kN prestress, against ${(100 * input.residualPrestress).toFixed(0)} % required`;
+  return `${family === "central ring" ? "the central ring" : `a${family === "outer radial" || family === "inner radial" ? "n" : ""} ${family} cable ${radius.toFixed(0)} m from the centre (the masts stand ${input.layout.mastRadiusM.toFixed(0)} m out)`} under ${w.combination}: it keeps ${share.toFixed(1)} % of its ${wholeNumber(w.prestressN / 1000)} kN prestress, against ${(100 * input.residualPrestress).toFixed(0)} % required`;
 }
 
 /**
@@ -532,7 +533,7 @@ function supportsOf(net: CableNetModel, solved: Round["solved"]) {
 /** Why the net fails at the last prestress the search tried, in words for a project lead. */
 function failureReason(input: NetAnalysisInput, last: NetRound, cases: readonly { name: string; maxDisplacementM: number }[]): string {
   const { solved, alpha } = last;
-  const tried = `at the largest prestress tried (${(alpha / 1000).toFixed(0)} kN a radial cable)`;
+  const tried = `at the largest prestress tried (${wholeNumber(alpha / 1000)} kN a radial cable)`;
   const notConverged = solved.find(({ s }) => !s.converged);
   if (notConverged) return `the 3D analysis of the net did not converge under ${notConverged.c.name}: ${notConverged.s.reason ?? "no equilibrium"}`;
   const slack = solved.find(({ s }) => s.slack.some(Boolean));

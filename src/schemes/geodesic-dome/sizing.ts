@@ -1,3 +1,4 @@
+import { wholeNumber } from "../../kernel/units";
 import type { ChsSection } from "../../catalogue/types";
 import type { ChsChoice } from "../../catalogue/pick-chs";
 import type { LatticeBand } from "../../mechanics/lattice-bands";
@@ -109,7 +110,7 @@ function sizeBand(input: LatticeInputs, band: LatticeBand, cases: readonly Membr
     const memberOnly = pickChs(input.sections, demands, input.steel);
     const failedWhy =
       memberOnly === null
-        ? `no catalogue hollow section carries the bar force of ${(-compressionN / 1000).toFixed(0)} kN over ${band.maxLengthM.toFixed(1)} m`
+        ? `no catalogue hollow section carries the bar force of ${wholeNumber(-compressionN / 1000)} kN over ${band.maxLengthM.toFixed(1)} m`
         : `no catalogue hollow section gives the lattice enough general-buckling resistance (${(pressurePa / 1000).toFixed(2)} kPa needed)`;
     return { result: null, failedWhy, largestBarForceN };
   }

@@ -1,3 +1,4 @@
+import { wholeNumber } from "../../kernel/units";
 import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { BucklingCurve } from "../../mechanics/flexural-buckling";
@@ -95,7 +96,7 @@ function roofBracing(input: TrussRoofInputs, trusses: readonly TrussResult[], de
   const bayShearN = (bayLoadNPerM * longest) / 2;
   const diagonalM = s * Math.SQRT2;
   const choice = pickChs(catalogue.chs, [{ forceN: -bayShearN * Math.SQRT2, effectiveLengthM: diagonalM / 2 }], steel);
-  const failure = choice === null ? `no catalogue hollow section carries the roof bracing force of ${((bayShearN * Math.SQRT2) / 1000).toFixed(0)} kN` : "";
+  const failure = choice === null ? `no catalogue hollow section carries the roof bracing force of ${wholeNumber((bayShearN * Math.SQRT2) / 1000)} kN` : "";
   const lengthM = 2 * 2 * Math.ceil(longest / s) * diagonalM;
   return { choice, lengthM, massKg: choice ? lengthM * choice.section.massKgPerM : 0, failure };
 }
@@ -121,7 +122,7 @@ function edgeBeamAndColumns(input: TrussRoofInputs, trusses: readonly TrussResul
   if (brief.eavesHeightM > 0) {
     trussColumn = pickColumn(sections, trussColumnForceN, brief.eavesHeightM, steel);
     post = postCount > 0 ? pickColumn(sections, postForceN, brief.eavesHeightM, steel) : null;
-    if ((trussColumn === null || (postCount > 0 && post === null)) && failure === "") failure = `no catalogue hollow section carries the column load of ${(trussColumnForceN / 1000).toFixed(0)} kN over ${brief.eavesHeightM} m`;
+    if ((trussColumn === null || (postCount > 0 && post === null)) && failure === "") failure = `no catalogue hollow section carries the column load of ${wholeNumber(trussColumnForceN / 1000)} kN over ${brief.eavesHeightM} m`;
     columnMassKg = brief.eavesHeightM * (2 * input.spansM.length * (trussColumn?.section.massKgPerM ?? 0) + postCount * (post?.section.massKgPerM ?? 0));
   }
   return { edgeBeam, edgeBeamMomentNm, edgeBeamMassKg, trussColumn, trussColumnForceN, postCount, post, postForceN, columnMassKg, failure };

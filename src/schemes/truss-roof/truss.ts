@@ -1,3 +1,4 @@
+import { wholeNumber } from "../../kernel/units";
 import type { ChsSection } from "../../catalogue/types";
 import type { ChsChoice } from "../../catalogue/pick-chs";
 import type { BucklingCurve } from "../../mechanics/flexural-buckling";
@@ -177,14 +178,14 @@ export function sizeTruss(d: TrussDemand, sections: readonly ChsSection[], steel
     for (const b of zoneBase) {
       const { baseTop, baseBottom, diagonal } = b;
       if (baseTop === null || baseBottom === null) {
-        failure = `no catalogue hollow section carries the chord force of ${(b.chordN / 1000).toFixed(0)} kN`;
+        failure = `no catalogue hollow section carries the chord force of ${wholeNumber(b.chordN / 1000)} kN`;
         break;
       }
       // the deflection's floor on the chords' areas, passed as such: the picker starts its search there
       const top = attempt === 0 ? baseTop : pickChs(sections, b.topForces, steel, b.withBending, areaScale.value * baseTop.section.areaM2);
       const bottom = attempt === 0 ? baseBottom : pickChs(sections, b.bottomForces, steel, undefined, areaScale.value * baseBottom.section.areaM2);
       if (top === null || bottom === null || diagonal === null) {
-        failure = diagonal === null ? `no catalogue hollow section carries the diagonal force of ${(b.diagonalN / 1000).toFixed(0)} kN over ${diagonalLengthM.toFixed(1)} m` : "no catalogue hollow section gives the chords the stiffness the deflection limit needs";
+        failure = diagonal === null ? `no catalogue hollow section carries the diagonal force of ${wholeNumber(b.diagonalN / 1000)} kN over ${diagonalLengthM.toFixed(1)} m` : "no catalogue hollow section gives the chords the stiffness the deflection limit needs";
         break;
       }
       zones.push({ x0M: b.x0, x1M: b.x1, top, bottom, diagonal, topForceN: -b.chordN, topMomentNm: localMomentNm, bottomForceN: b.chordN, diagonalForceN: b.diagonalN });

@@ -5,6 +5,7 @@ import { defaultCatalogue } from "../../../src/catalogue/default-catalogue";
 import { expectRelClose } from "../../helpers/close";
 import { cableNetLayout, circumferentialSpanM } from "../../../src/schemes/cable-net/geometry";
 import { capHeightAt } from "../../../src/mechanics/spherical-cap";
+import { wholeNumber } from "../../../src/kernel/units";
 
 const catalogue = defaultCatalogue();
 const design = (brief = DEFAULT_BRIEF, options = cableNet.defaults) => cableNet.design(brief, options, catalogue);
@@ -224,7 +225,7 @@ describe("cableNet through the 3D analysis (issue 13, option analysis = 3d)", ()
     const fabric = (x: typeof d) => x.takeoff.find((r) => r.element === "fabric")!;
     expectRelClose(fabric(d).quantity, d.roofSurfaceM2 * (1 + cableNet.defaults.fabricAllowancePct / 100), 1e-12);
     expectRelClose(fabric(closed).quantity, closed.roofSurfaceM2 * (1 + cableNet.defaults.fabricAllowancePct / 100), 1e-12);
-    expect(d.warnings.some((w) => w.includes("node to node of the form-found net") && w.includes(`${d.roofSurfaceM2.toFixed(0)} m²`))).toBe(true);
+    expect(d.warnings.some((w) => w.includes("node to node of the form-found net") && w.includes(`${wholeNumber(d.roofSurfaceM2)} m²`))).toBe(true);
     // the section's fabric runs through the mast head (it lies on the net) and down to the edge at the eaves
     const line = d.drawing.section.find((l) => l.role === "fabric")!;
     const top = Math.max(...line.points.map((p) => p[1]));
