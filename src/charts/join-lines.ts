@@ -1,3 +1,4 @@
+import { schemeObservable10 } from "d3";
 import type { DrawingLine } from "../schemes/types";
 
 /**
@@ -15,4 +16,17 @@ export function joinByRole(lines: readonly DrawingLine[]): { x: number; y: numbe
     }
   }
   return out;
+}
+
+/**
+ * The colour scale of a drawing's roles: its legend lists only the roles it draws, each in the
+ * colour its place in the order shared by the section and the plan gives it (Plot's categorical
+ * scheme, observable10), so a role keeps its colour across both and neither lists what only the
+ * other draws (the shell's plan listed "shell", drawn only in the section). No shared order: Plot's own.
+ */
+export function roleColours(lines: readonly DrawingLine[], shared?: readonly string[]): { domain?: string[]; range?: string[] } {
+  if (!shared) return {};
+  const drawn = new Set(lines.map((l) => l.role));
+  const domain = shared.filter((r) => drawn.has(r));
+  return { domain, range: domain.map((r) => schemeObservable10[shared.indexOf(r) % schemeObservable10.length]!) };
 }

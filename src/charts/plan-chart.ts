@@ -1,7 +1,7 @@
 import * as Plot from "@observablehq/plot";
 import type { Brief } from "../brief";
 import type { DrawingLine } from "../schemes/types";
-import { joinByRole } from "./join-lines";
+import { joinByRole, roleColours } from "./join-lines";
 
 export interface PlanChartInput {
   brief: Brief;
@@ -26,7 +26,7 @@ export function planChartOptions(input: PlanChartInput): Plot.PlotOptions {
     height: size,
     x: { label: "x (m)", domain: [-a * 1.05, a * 1.05] },
     y: { label: "y (m)", domain: [-a * 1.05, a * 1.05] },
-    color: { legend: true, ...(input.roles ? { domain: [...input.roles] } : {}) },
+    color: { legend: true, ...roleColours(input.lines, input.roles) },
     marks: [Plot.line(circle, { x: "x", y: "y", stroke: "#999" }), Plot.line(segments, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 0.6 })],
   };
 }

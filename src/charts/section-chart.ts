@@ -2,7 +2,7 @@ import * as Plot from "@observablehq/plot";
 import type { Brief } from "../brief";
 import type { DrawingLine } from "../schemes/types";
 import { roofProfile, envelope } from "../takeoff/envelope";
-import { joinByRole } from "./join-lines";
+import { joinByRole, roleColours } from "./join-lines";
 
 export interface SectionChartInput {
   brief: Brief;
@@ -115,7 +115,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
     marginLeft: 50,
     x: { label: SECTION_STYLE.xLabel, domain: xDomain },
     y: { label: SECTION_STYLE.yLabel, domain: yDomain },
-    color: { legend: members.length > 0, ...(input.roles ? { domain: [...input.roles] } : {}) },
+    color: { legend: members.length > 0, ...roleColours((input.lines ?? []).filter((l) => !isFloorLine(l)), input.roles) },
     marks: [
       Plot.ruleY([0]),
       Plot.rect(usableSpans, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: SECTION_STYLE.usableFill, fillOpacity: SECTION_STYLE.usableOpacity }),

@@ -3,7 +3,10 @@
 // top, because the scale stopped a fifth above the brief's own 22 m rise).
 import { describe, it, expect } from "vitest";
 import { defaultStudy } from "../../../src/study";
-import { drawnRoles, sectionParts } from "../../../src/charts/section-chart";
+import { schemeObservable10 } from "d3";
+import { drawnRoles, sectionChartOptions, sectionParts } from "../../../src/charts/section-chart";
+import { planChartOptions } from "../../../src/charts/plan-chart";
+import { concreteShell } from "../../../src/schemes/concrete-shell";
 import { cableNet } from "../../../src/schemes/cable-net";
 import { geodesicDome } from "../../../src/schemes/geodesic-dome";
 import { timberDome } from "../../../src/schemes/timber-dome";
@@ -54,5 +57,22 @@ describe("the legend of a scheme's section and plan", () => {
       expect(design.status, id).toBe("feasible");
       expect(drawnRoles([...design.drawing.section, ...(design.drawing.plan ?? [])]), id).toEqual(["lattice", "ring", "support"]);
     }
+  });
+
+  it("lists in each drawing only the roles it draws, each in the colour the shared order gives it (the shell's plan listed \"shell\", drawn only in the section)", () => {
+    const design = concreteShell.design(brief, concreteShell.defaults, defaultCatalogue());
+    const plan = design.drawing.plan ?? [];
+    const roles = drawnRoles([...design.drawing.section, ...plan]);
+    expect(roles).toContain("shell");
+    const planScale = planChartOptions({ brief, lines: plan, roles, title: "", caption: "" }).color as { domain: string[]; range: string[] };
+    const sectionScale = sectionChartOptions({ brief, lines: design.drawing.section, roles, title: "", caption: "" }).color as { domain: string[]; range: string[] };
+    expect(planScale.domain).not.toContain("shell");
+    expect(planScale.domain).toEqual(roles.filter((r) => plan.some((l) => l.role === r)));
+    expect(sectionScale.domain).toContain("shell");
+    for (const scale of [planScale, sectionScale]) scale.domain.forEach((r, i) => expect(scale.range[i], r).toBe(schemeObservable10[roles.indexOf(r)]));
+    // a role drawn in both keeps its colour
+    const both = planScale.domain.filter((r) => sectionScale.domain.includes(r));
+    expect(both.length).toBeGreaterThan(0);
+    for (const r of both) expect(planScale.range[planScale.domain.indexOf(r)]).toBe(sectionScale.range[sectionScale.domain.indexOf(r)]);
   });
 });
