@@ -79,13 +79,16 @@ export function decimalCommaProblem(raw: string): string | null {
 }
 
 /** Why a typed number is not allowed, or null. */
-function numberProblem(raw: string, o: NumberControlOptions): string | null {
+export function numberProblem(raw: string, o: NumberControlOptions): string | null {
   if (raw.trim() === "") return `${o.label}: a value is required`;
   const x = Number(raw);
   const comma = decimalCommaProblem(raw);
   if (comma !== null) return `${o.label}: ${comma}`;
-  if (!Number.isFinite(x)) return `${o.label}: "${raw}" is not a number (allowed ${o.min} to ${o.max}${o.unit && o.unit !== "–" ? ` ${o.unit}` : ""})`;
-  if (x < o.min || x > o.max) return `${o.label}: ${x} ${o.unit} is out of range (allowed ${o.min} to ${o.max} ${o.unit})`;
+  const unit = o.unit && o.unit !== "–" ? ` ${o.unit}` : "";
+  if (!Number.isFinite(x)) return `${o.label}: "${raw}" is not a number (allowed ${o.min} to ${o.max}${unit})`;
+  // a sign typed by habit (a suction coefficient written −0.8): say that the size alone is allowed
+  const unsigned = x < 0 && -x >= o.min && -x <= o.max ? `; without the minus sign, ${-x}${unit} is allowed` : "";
+  if (x < o.min || x > o.max) return `${o.label}: ${x}${unit} is out of range (allowed ${o.min} to ${o.max}${unit}${unsigned})`;
   if (o.integer && !Number.isInteger(x)) return `${o.label}: ${x} is not a whole number`;
   return null;
 }

@@ -1,0 +1,19 @@
+import { describe, it, expect } from "vitest";
+import { numberProblem } from "../../../src/notebook/controls";
+
+const coefficient = { label: "Net uplift pressure coefficient", unit: "–", min: 0, max: 2, step: 0.05 };
+const span = { label: "Clear span (plan diameter)", unit: "m", min: 30, max: 500, step: 1 };
+
+describe("what a number field says of a value it refuses (numberProblem)", () => {
+  it("names the field, the value and the range, with the unit once each and none for a pure number", () => {
+    expect(numberProblem("600", span)).toBe("Clear span (plan diameter): 600 m is out of range (allowed 30 to 500 m)");
+    expect(numberProblem("3", coefficient)).toBe("Net uplift pressure coefficient: 3 is out of range (allowed 0 to 2)");
+    expect(numberProblem("abc", coefficient)).toBe('Net uplift pressure coefficient: "abc" is not a number (allowed 0 to 2)');
+  });
+  it("says that the size alone is allowed when a minus sign was typed by habit (a suction written −0.8)", () => {
+    expect(numberProblem("-0.8", coefficient)).toBe("Net uplift pressure coefficient: -0.8 is out of range (allowed 0 to 2; without the minus sign, 0.8 is allowed)");
+    expect(numberProblem("-160", span)).toBe("Clear span (plan diameter): -160 m is out of range (allowed 30 to 500 m; without the minus sign, 160 m is allowed)");
+  });
+  it("says nothing of the sign where the size is out of range too", () => expect(numberProblem("-5", span)).toBe("Clear span (plan diameter): -5 m is out of range (allowed 30 to 500 m)"));
+  it("takes a value in range", () => expect(numberProblem("0.8", coefficient)).toBeNull());
+});
