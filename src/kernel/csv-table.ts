@@ -54,9 +54,32 @@ export function parseDecimal(text: string): number | null {
   return Number.isFinite(value) ? value : null;
 }
 
-/** The message for text that parseDecimal refused: `"five" is not a number`, or for 0x10, 1e999 and the like what is expected. */
+/** Units a person may type after a number in a field that gives its unit beside it. */
+const TYPED_UNITS = /^(%|mm|cm|m|km|m[²2]|m[³3]|N|kN|MN|Pa|kPa|MPa|GPa|m\/s|kg|t|kg\/m[²³23]|kgCO2e\/(kg|m[²³23]|t)|EUR|€|min|years?)$/;
+
+/**
+ * What a person most likely meant by a number written another way, as the end of a message ("" when
+ * nothing fits): a decimal comma (12,5), thousands apart (7,850: either), a unit or % typed after it (5%).
+ * @example numberHint("12,5") // ": write the decimal with a point (12.5)"
+ */
+export function numberHint(raw: string): string {
+  const t = raw.trim();
+  // only for text that is no number at all (1e2 and 0x10 are read, or refused, for what they are)
+  if (t === "" || !Number.isNaN(Number(t))) return "";
+  if (/^[+-]?\d{1,3}(,\d{3})+(\.\d+)?$/.test(t)) {
+    const decimal = /^[+-]?\d{1,3},\d{3}$/.test(t) ? `, or a decimal with a point (${t.replace(",", ".")})` : "";
+    return `: write it without the thousands separator (${t.replace(/,/g, "")})${decimal}`;
+  }
+  if (/^[+-]?\d+,\d+$/.test(t)) return `: write the decimal with a point (${t.replace(",", ".")})`;
+  // a unit written after the number (a stray letter is more likely a typo: "16o" is not "16")
+  const suffixed = /^([+-]?(?:\d+\.?\d*|\.\d+))\s*(\S+)$/.exec(t);
+  if (suffixed && TYPED_UNITS.test(suffixed[2]!)) return `: write the number alone (${suffixed[1]}), without "${suffixed[2]}"`;
+  return "";
+}
+
+/** The message for text that parseDecimal refused: `"five" is not a number` (with a hint where one fits, numberHint), or for 0x10, 1e999 and the like what is expected. */
 export function notDecimal(raw: string): string {
-  return Number.isNaN(Number(raw.trim())) ? `"${shown(raw)}" is not a number` : `"${shown(raw)}" is not a decimal number (expected digits with an optional point and exponent, e.g. 16 or 1.5e3)`;
+  return Number.isNaN(Number(raw.trim())) ? `"${shown(raw)}" is not a number${numberHint(raw)}` : `"${shown(raw)}" is not a decimal number (expected digits with an optional point and exponent, e.g. 16 or 1.5e3)`;
 }
 
 /** Text shown back in a message, shortened so a huge cell cannot make a huge message. */

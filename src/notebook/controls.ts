@@ -6,6 +6,7 @@ import { effect, type ReadonlySignal } from "@preact/signals-core";
 import { h, render, type ComponentChild, type ComponentChildren, type VNode } from "preact";
 import { useLayoutEffect, useRef } from "preact/hooks";
 import { setAttr, setClass, setText } from "./patch";
+import { numberHint } from "../kernel/csv-table";
 
 /**
  * A value a control shows and changes: read reactively, written through a callback. A binding
@@ -73,9 +74,10 @@ export interface NumberControlOptions {
   id?: string;
 }
 
-/** For text such as "12,5": that it is not a number and the point to write instead; else null. */
+/** For text such as "12,5", "7,850" or "5 %": that it is not a number and what to write instead (numberHint); else null. */
 export function decimalCommaProblem(raw: string): string | null {
-  return /^\s*-?\d+,\d+\s*$/.test(raw) ? `"${raw}" is not a number: write the decimal with a point (${raw.trim().replace(",", ".")})` : null;
+  const hint = numberHint(raw);
+  return hint === "" ? null : `"${raw}" is not a number${hint}`;
 }
 
 /** Why a typed number is not allowed, or null. */

@@ -97,9 +97,12 @@ function Cell<R>(props: { table: EditableTableProps<R>; column: TableColumn<R>; 
     const outcome = table.edit(rowKey, column.field, text);
     // The typed text stays while the field holds what it gave (so "2." is not rewritten to "2"
     // mid-typing) or, when refused, while the field keeps the value it was typed against.
-    draft.value = outcome.ok ? { text, against: outcome.value, epoch: props.epoch.peek(), message: "" } : { text, against: value, epoch: props.epoch.peek(), message: outcome.message };
-    if (table.messages !== "cell") props.messageSink.value = outcome.ok ? "" : outcome.message;
-    table.onEntry?.(rowKey, column.field, outcome.ok ? null : outcome.message);
+    // a refusal names the value still in force, as the page's own fields do (controls.ts editField)
+    const shown = shownValue(column, row);
+    const message = outcome.ok ? "" : `${outcome.message} — not applied; in force: ${column.kind === "number" ? shown || "none" : `"${shown}"`}`;
+    draft.value = outcome.ok ? { text, against: outcome.value, epoch: props.epoch.peek(), message: "" } : { text, against: value, epoch: props.epoch.peek(), message };
+    if (table.messages !== "cell") props.messageSink.value = message;
+    table.onEntry?.(rowKey, column.field, outcome.ok ? null : message);
   };
   const common = {
     id,

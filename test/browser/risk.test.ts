@@ -36,11 +36,11 @@ describe("risk page", () => {
     await page.fill("#risk-low-0", "999");
     await page.press("#risk-low-0", "Enter");
     // In the table's own words: the row's name and "least", not the file's id and "low" (audit8)
-    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe("Ground snow load s_k (kPa), least: 999 is not allowed (allowed from 0 to 1 (× study value))");
+    await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe(`Ground snow load s_k (kPa), least: 999 is not allowed (allowed from 0 to 1 (× study value)) — not applied; in force: ${before}`);
     for (const [typed, said] of [["12,5", 'Ground snow load s_k (kPa), least: "12,5" is not a number: write the decimal with a point (12.5)'], ["", "Ground snow load s_k (kPa), least: a value is required (allowed from 0 to 1 (× study value))"]] as const) {
       await page.fill("#risk-low-0", typed);
       await page.press("#risk-low-0", "Enter");
-      await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe(said);
+      await expect.poll(() => page.locator("#risk-msg-0").textContent()).toBe(`${said} — not applied; in force: ${before}`);
     }
     await page.reload();
     await page.waitForSelector("#risk-inputs-table tbody tr");
