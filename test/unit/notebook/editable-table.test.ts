@@ -75,7 +75,7 @@ describe("mountEditableTable", () => {
     input.dispatchEvent(new Event("input", { bubbles: true }));
     await flush();
     expect(rows.peek()[1]?.x).toBe(2);
-    expect(parent.querySelector("#t-b-x-message")?.textContent).toBe('x: x "-4" (expected a number ≥ 0)');
+    expect(parent.querySelector("#t-b-x-message")?.textContent).toBe('x: x "-4" (expected a number ≥ 0) — not applied; in force: 2');
     expect((parent.querySelector("#t-b-x") as HTMLInputElement).value).toBe("-4");
     input.value = "5";
     input.dispatchEvent(new Event("input", { bubbles: true }));

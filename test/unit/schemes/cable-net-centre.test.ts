@@ -12,7 +12,7 @@ import { expectRelClose } from "../../helpers/close";
 const catalogue = defaultCatalogue();
 const brief = { ...DEFAULT_BRIEF, spanM: 160, riseM: 16 };
 const design = (centre: "free" | "held-down", analysis: "closed-form" | "3d") => cableNet.design(brief, { ...cableNet.defaults, centre, analysis }, catalogue);
-const pullOf = (warning: string | undefined) => Number(/\(([\d.]+) kN pull\)/.exec(warning ?? "")?.[1]);
+const pullOf = (warning: string | undefined) => Number(/\(([\d,.]+) kN pull\)/.exec(warning ?? "")?.[1]?.replace(/,/g, ""));
 
 describe("closed form: the free ring against the held one", () => {
   const free = design("free", "closed-form");
