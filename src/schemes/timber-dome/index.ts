@@ -90,6 +90,10 @@ function whatGoverns(c: MemberCheck): string {
 function clauseOf(c: MemberCheck): string {
   return c.governing.slice(whatGoverns(c).length + 2);
 }
+/** The member table's words for a check: without its case, as the other schemes' member rows read (the check table names the case). */
+function memberGoverning(c: MemberCheck): string {
+  return c.governing.replace(` (${c.demand.label})`, "");
+}
 
 function timberMembers(r: TimberLatticeResult, charDepthM: number): { members: MemberGroup[]; checks: Check[] } {
   const members: MemberGroup[] = [];
@@ -107,14 +111,14 @@ function timberMembers(r: TimberLatticeResult, charDepthM: number): { members: M
   });
   for (const b of r.bands) {
     const name = b.band.edge ? "members meeting the ring" : `members, band ${b.band.index + 1} of ${r.bands.filter((x) => !x.band.edge).length}`;
-    members.push(group(`lattice ${name}`, b.band.count, b.band.meanLengthM, b.section, b.check.utilisation, b.check.demand.forceN, b.check.governing));
+    members.push(group(`lattice ${name}`, b.band.count, b.band.meanLengthM, b.section, b.check.utilisation, b.check.demand.forceN, memberGoverning(b.check)));
     checks.push(check(`${name}: ${whatGoverns(b.check)}`, clauseOf(b.check), b.check.utilisation, 1, ""));
     checks.push(check(`${name}: general buckling of the lattice`, "equivalent continuum 4√(DB)/R² × knock-down, E/(1 + k_def) (EN 1995-1-1 Table 3.2)", b.pressurePa, b.bucklingPa, "Pa"));
   }
   if (r.purlins) {
     const p = r.purlins;
     const moment = p.check.demand.momentNm;
-    members.push({ ...group("purlins", Math.round(p.totalLengthM / Math.max(...r.bands.map((b) => b.band.maxLengthM))), Math.max(...r.bands.map((b) => b.band.maxLengthM)), p.section, p.check.utilisation, 0, p.check.governing), bending: { designMomentNm: moment, resistanceNm: p.check.utilisation > 0 ? moment / p.check.utilisation : 0 } });
+    members.push({ ...group("purlins", Math.round(p.totalLengthM / Math.max(...r.bands.map((b) => b.band.maxLengthM))), Math.max(...r.bands.map((b) => b.band.maxLengthM)), p.section, p.check.utilisation, 0, memberGoverning(p.check)), bending: { designMomentNm: moment, resistanceNm: p.check.utilisation > 0 ? moment / p.check.utilisation : 0 } });
     checks.push(check(`purlins: ${whatGoverns(p.check)}`, clauseOf(p.check), p.check.utilisation, 1, ""));
     checks.push(check("purlins: final deflection", "EN 1995-1-1 §7.2, Table 7.2 (l/250, from memory)", p.deflectionM, p.limitM, "m"));
   }
