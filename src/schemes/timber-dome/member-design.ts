@@ -68,7 +68,7 @@ function kCritOf(section: GlulamSection, glulam: GlulamClass, demand: MemberDema
   return timberLateralTorsionalFactor(glulam.bendingPa, timberCriticalBendingStressPa(section.widthM, section.depthM, demand.torsionalLengthM, glulam.modulus5PctPa));
 }
 
-/** The three parts of a member's check under one demand: strength with buckling (eqs 6.17 or 6.23/6.24), lateral-torsional stability (eq. 6.33, or 6.35 with compression) and shear (eq. 6.13, 0 when not asked). */
+/** A member's check under one demand in its three parts (partsOf). */
 interface CheckParts {
   strength: number;
   torsional: number;
@@ -77,6 +77,7 @@ interface CheckParts {
 /** partsOf's answer, written over at each call, not a new object: the section search calls it some hundred thousand times a search. */
 const PARTS: CheckParts = { strength: 0, torsional: 0, shear: 0 };
 
+/** The three parts of a member's check under one demand: strength with buckling (eqs 6.17 or 6.23/6.24), lateral-torsional stability (eq. 6.33, or 6.35 with compression) and shear (eq. 6.13, 0 when not asked). */
 function partsOf(section: GlulamSection, glulam: GlulamClass, buckling: SectionBuckling, demand: MemberDemand, gammaM: number): Readonly<CheckParts> {
   const bendingPa = Math.abs(demand.momentNm) / section.sectionModulusYM3;
   const axialPa = Math.abs(demand.forceN) / section.areaM2;
