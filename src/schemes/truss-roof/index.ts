@@ -1,3 +1,4 @@
+import { wholeNumber } from "../../kernel/units";
 import type { Brief } from "../../brief";
 import type { Catalogue, Cladding } from "../../catalogue/types";
 import type { ChsChoice } from "../../catalogue/pick-chs";
@@ -131,7 +132,6 @@ function trussTakeoff(r: TrussRoofResult, cladding: Cladding, planAreaM2: number
     tonnesRow("purlins", "steel-cold-formed", "steel-secondary", r.purlinMassKg),
     tonnesRow("roof bracing", "steel-hot-finished-hollow", "steel-secondary", r.bracingMassKg),
     { ...tonnesRow("edge beam", "steel-hot-finished-hollow", "steel-secondary", r.edgeBeamMassKg), group: "perimeter" },
-    { ...tonnesRow("perimeter columns to the eaves", "steel-hot-finished-hollow", "steel-column", r.columnMassKg), group: "substructure" },
     { element: "roof deck", material: cladding.material, costItem: claddingCostItem(cladding), quantity: planAreaM2, unit: "m2", massKg: r.deckMassKg },
   ];
 }
@@ -148,7 +148,8 @@ function trussSummary(r: TrussRoofResult, layout: Layout, brief: Brief, ratio: n
     { key: "totalDeflectionMm", label: "Largest truss deflection (total characteristic load)", value: Math.max(...r.trusses.map((t) => t.totalDeflectionM)) * 1000, unit: "mm" },
     { key: "fallM", label: "Fall to the eaves at 1:48 (camber)", value: (brief.spanM / 2) * PONDING_FALL, unit: "m" },
     { key: "clearHeightM", label: "Clear height under the bottom chords", value: brief.eavesHeightM, unit: "m" },
-    { key: "steelKgPerM2", label: "Steel per m² of plan", value: (r.trussMassKg + r.connectionMassKg + r.purlinMassKg + r.bracingMassKg + r.edgeBeamMassKg + r.columnMassKg) / planAreaM2, unit: "kg/m²" },
+    { key: "steelKgPerM2", label: "Steel per m² of plan", value: (r.trussMassKg + r.connectionMassKg + r.purlinMassKg + r.bracingMassKg + r.edgeBeamMassKg) / planAreaM2, unit: "kg/m²" },
+    { key: "columnKgPerM2", label: "Columns to the eaves (designed, not counted)", value: r.columnMassKg / planAreaM2, unit: "kg/m²" },
   ];
 }
 
@@ -156,7 +157,8 @@ function trussSummary(r: TrussRoofResult, layout: Layout, brief: Brief, ratio: n
  * Designs a flat steel truss roof over the circular plan: parallel-chord Warren trusses at a spacing,
  * each on its own chord of the circle, sized from the CHS catalogue (EN 1993-1-1 §6.2.3, §6.3.1)
  * for M = wL²/8 over the depth and V/sin θ in the diagonals, stiffened for deflection; cold-formed
- * purlins, roof bracing, an edge beam and columns to the eaves; self-weight iterated.
+ * purlins, roof bracing, an edge beam and columns to the eaves (designed and checked, not taken off:
+ * no scheme counts the supports under its edge); self-weight iterated.
  * The trusses sit with their bottom chords at eaves height, so the clear height is the eaves height
  * everywhere and the brief's rise is not used. Validity: 20–200 m.
  */
@@ -189,6 +191,7 @@ function design(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue): Des
   const warnings = [
     `flat truss roof: the brief's rise of ${brief.riseM} m is not used; the bottom chords sit at the eaves (${brief.eavesHeightM} m), so the clear height is the eaves height`,
     "vertical wall bracing and wind along the trusses are not included",
+    `the columns to the eaves (two under each truss, posts round the rest: ${wholeNumber(r.columnMassKg / 1000)} t of steel) are designed and checked but not counted in the take-off, carbon or cost: no scheme counts the supports under its edge (walls or columns to the eaves), which the heavier roofs need heavier`,
     `every design combination is checked with uniform loads: the flat roof's snow μ1 s_k (EN 1991-1-3 Table 5.2 at 0°; its drifted case is bounded by it) and the dome wind map's peak values at f/d = depth/span, the nearest shape the shared basis has; uplift checked with ${r.upliftCase || "no uplift combination"}`,
   ];
   if (r.failure !== "") throw new SchemeError(`${r.failure}: use deeper trusses, a closer spacing or a higher steel grade`, { warnings, section: section(r) });
