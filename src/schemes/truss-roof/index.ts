@@ -191,7 +191,7 @@ function design(brief: Brief, opts: TrussRoofOptions, catalogue: Catalogue): Des
   const warnings = [
     `flat truss roof: the brief's rise of ${brief.riseM} m is not used; the bottom chords sit at the eaves (${brief.eavesHeightM} m), so the clear height is the eaves height`,
     "vertical wall bracing and wind along the trusses are not included",
-    `the columns to the eaves (two under each truss, posts round the rest: ${wholeNumber(r.columnMassKg / 1000)} t of steel) are designed and checked but not counted in the take-off, carbon or cost: no scheme counts the supports under its edge (walls or columns to the eaves), which the heavier roofs need heavier`,
+    `the columns to the eaves (two under each truss, posts round the rest: ${wholeNumber(r.columnMassKg / 1000)} t of steel) are designed and checked but not counted in the take-off, carbon or cost: no scheme counts the supports under its edge (walls or columns to the eaves; a heavier roof needs heavier ones)`,
     `every design combination is checked with uniform loads: the flat roof's snow μ1 s_k (EN 1991-1-3 Table 5.2 at 0°; its drifted case is bounded by it) and the dome wind map's peak values at f/d = depth/span, the nearest shape the shared basis has; uplift checked with ${r.upliftCase || "no uplift combination"}`,
   ];
   if (r.failure !== "") throw new SchemeError(`${r.failure}: use deeper trusses, a closer spacing or a higher steel grade`, { warnings, section: section(r) });
