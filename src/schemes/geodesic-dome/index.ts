@@ -1,7 +1,7 @@
 import type { Brief } from "../../brief";
 import type { Catalogue } from "../../catalogue/types";
 import type { TakeoffRow } from "../../takeoff/takeoff-row";
-import type { Check, DesignParts, MemberGroup } from "../kit";
+import type { Check, DesignParts, DrawingLine, MemberGroup } from "../kit";
 import { briefCombinations, capEnvelope, capLatticePlan, capLatticeSection, capFloor, check, convergeSelfWeight, drawingWithLazyPlan, UNIFORM_EQUIVALENT_WARNING, defineScheme, findCladding, claddingCostItem, steelGrade, tonnesRow, SchemeError } from "../kit";
 import { sphericalCap, type SphericalCap } from "../../mechanics/spherical-cap";
 import { cachedGeodesicCap } from "../../mechanics/geodesic-cache";
@@ -24,7 +24,7 @@ const SINGLE_LAYER_USUAL_MAX_SPAN_M = 100;
  * sizing and the summary read only the bands and counts, the mesh is built for the drawing and the
  * 3D analysis of the design kept. A SchemeError when the mesh cannot be made.
  */
-function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, bands: number, section: ReturnType<typeof capLatticeSection>): { frequency: number; cut: GeodesicCapCut } {
+function latticeMesh(cap: SphericalCap, targetStrutLengthM: number, bands: number, section: DrawingLine[]): { frequency: number; cut: GeodesicCapCut } {
   const frequency = geodesicFrequencyFor(cap.radiusM, targetStrutLengthM);
   if (frequency > 400) throw new SchemeError(`the mesh would need frequency ${frequency} (over 400): increase the target strut length`, { section });
   try {
