@@ -75,7 +75,7 @@ export interface NumberControlOptions {
 }
 
 /** For text such as "12,5", "7,850" or "5 %": that it is not a number and what to write instead (numberHint); else null. */
-export function decimalCommaProblem(raw: string): string | null {
+export function writtenNumberProblem(raw: string): string | null {
   const hint = numberHint(raw);
   return hint === "" ? null : `"${raw}" is not a number${hint}`;
 }
@@ -84,8 +84,8 @@ export function decimalCommaProblem(raw: string): string | null {
 export function numberProblem(raw: string, o: NumberControlOptions): string | null {
   if (raw.trim() === "") return `${o.label}: a value is required`;
   const x = Number(raw);
-  const comma = decimalCommaProblem(raw);
-  if (comma !== null) return `${o.label}: ${comma}`;
+  const written = writtenNumberProblem(raw);
+  if (written !== null) return `${o.label}: ${written}`;
   const unit = o.unit && o.unit !== "–" ? ` ${o.unit}` : "";
   if (!Number.isFinite(x)) return `${o.label}: "${raw}" is not a number (allowed ${o.min} to ${o.max}${unit})`;
   // a sign typed by habit (a suction coefficient written −0.8): say that the size alone is allowed

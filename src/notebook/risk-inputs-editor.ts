@@ -10,7 +10,7 @@ import type { StudyStore } from "./study-store";
 import { setIn } from "../study";
 import { checkRiskInputs, defaultRiskSettings, formatPath, resolveInput, DISTRIBUTION_KINDS, RANGE_SCALES, SCALE_RULES, SHAPE_WORDS, type UncertainInput } from "../risk";
 import { mountEditableTable, type EditOutcome, type TableColumn } from "./editable-table";
-import { decimalCommaProblem } from "./controls";
+import { writtenNumberProblem } from "./controls";
 import { fmt } from "./format";
 
 const STYLE_ID = "risk-editor-style";
@@ -92,8 +92,8 @@ function endProblem(stored: UncertainInput, field: "low" | "high", text: string,
   const allowed =
     field === "low" ? (factor ? `from ${rule.lowMin} to ${rule.lowMax} (× study value)` : `0 or less (+ study value)`) : `${rule.highMin} or more (${factor ? "×" : "+"} study value)`;
   if (text.trim() === "") return `${name}: a value is required (allowed ${allowed})`;
-  const comma = decimalCommaProblem(text);
-  if (comma !== null) return `${name}: ${comma}`;
+  const written = writtenNumberProblem(text);
+  if (written !== null) return `${name}: ${written}`;
   if (!Number.isFinite(x)) return `${name}: "${text}" is not a number (allowed ${allowed})`;
   const inside = field === "low" ? x >= rule.lowMin && x <= rule.lowMax : x >= rule.highMin;
   return inside ? null : `${name}: ${x} is not allowed (allowed ${allowed})`;
