@@ -209,8 +209,8 @@ const chartCell = reactiveCell(outputs, { id: "comparison-charts", title: "Optio
   const common = { caption: resultsCaption, includeExcluded: includeExcluded.value };
   charts.draw([
     () => chartFigure(massByMaterialChart(list, { ...common, title: "Roof mass per m² of usable floor, by material" }), "mass-by-material"),
-    () => chartFigure(carbonByModuleChart(list, { ...common, title: "Embodied carbon per m² of usable floor, by life-cycle module (dashed: module D, reported apart)" }), "carbon-by-module"),
-    () => chartFigure(costPerM2Chart(list, { ...common, title: "Cost per m² of usable floor (bar: estimate; line: low–high rates)" }), "cost-per-m2"),
+    () => chartFigure(carbonByModuleChart(list, { ...common, title: "Embodied carbon per m² of usable floor, by life-cycle module" }), "carbon-by-module"),
+    () => chartFigure(costPerM2Chart(list, { ...common, title: "Cost per m² of usable floor" }), "cost-per-m2"),
     () => chartFigure(carbonVsCostChart(list, { ...common, title: "Carbon against cost per m² of usable floor" }), "carbon-vs-cost"),
   ], () => chartCell.element);
   return charts.grid;

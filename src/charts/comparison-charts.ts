@@ -102,6 +102,9 @@ export function massByMaterialChart(results: readonly SchemeResult[], common: Co
   };
 }
 
+/** What the dashed ticks of the carbon-by-module bars are, in the chart's title (every page's copy: the client's had no word for them). */
+const MODULE_D_KEY = "(dashed: module D, the credit for reuse and recycling after the building's life, reported apart and not subtracted)";
+
 /**
  * Stacked bars: counted carbon per m² of usable floor by life-cycle module (the carbon page's data,
  * `carbonByModuleData`, with the one module palette); module D drawn apart as a dashed tick.
@@ -116,7 +119,7 @@ export function carbonByModuleChart(results: readonly SchemeResult[], common: Co
   const totals = new Map(shown.map((r) => [r, metricValue(r, "carbon") ?? 0]));
   const max = axisMax(totals, ranked, common.includeExcluded ?? false);
   return {
-    ...barLayout(common, shown.length),
+    ...barLayout({ ...common, title: `${common.title} ${MODULE_D_KEY}` }, shown.length),
     ariaLabel: common.title,
     ariaDescription: describe(common.title, results, (r) => metricValue(r, "carbon"), "kgCO2e/m²"),
     x: { label: "Embodied carbon (kgCO2e/m² of usable floor)", grid: true, ...(max === undefined ? {} : { domain: [Math.min(0, ...moduleD.map((d) => d.value)), max] }) },
@@ -130,6 +133,9 @@ export function carbonByModuleChart(results: readonly SchemeResult[], common: Co
     ],
   };
 }
+
+/** What the cost bars' lines are, in the chart's title. */
+const COST_RANGE_KEY = "(bar: estimate; line: low–high rates)";
 
 /** Bars: cost per m² of usable floor, with the low–high range of the rates as a rule. */
 export function costPerM2Chart(results: readonly SchemeResult[], common: ComparisonChartCommon): DescribedChart {
@@ -145,7 +151,7 @@ export function costPerM2Chart(results: readonly SchemeResult[], common: Compari
   const totals = new Map(shown.map((r) => [r, (r.cost?.totals.totalHigh ?? 0) / r.design.usableFloorM2]));
   const max = axisMax(totals, ranked, common.includeExcluded ?? false);
   return {
-    ...barLayout(common, shown.length),
+    ...barLayout({ ...common, title: `${common.title} ${COST_RANGE_KEY}` }, shown.length),
     ariaLabel: common.title,
     ariaDescription: describe(common.title, results, (r) => metricValue(r, "cost"), `${currency}/m²`),
     x: { label: `Cost (${currency}/m² of usable floor)`, grid: true, ...(max === undefined ? {} : { domain: [0, max] }) },
@@ -159,6 +165,9 @@ export function costPerM2Chart(results: readonly SchemeResult[], common: Compari
     ],
   };
 }
+
+/** What the scatter's rings are, in its title: on each point's name as well, the names ran into each other and the axis where two schemes cost nearly the same. */
+const FRONT_KEY = "(ringed: no other scheme is both cheaper and lower in carbon)";
 
 /** Scatter: carbon against cost per m² of usable floor; schemes no other beats on both are ringed and named. Schemes outside their range are hollow and only drawn when brought in. */
 export function carbonVsCostChart(results: readonly SchemeResult[], common: ComparisonChartCommon): DescribedChart {
@@ -175,7 +184,7 @@ export function carbonVsCostChart(results: readonly SchemeResult[], common: Comp
   const currency = results.find((r) => r.cost)?.cost?.currency ?? "";
   const described = describe(common.title, results, (r) => metricValue(r, "carbon"), "kgCO2e/m²");
   return {
-    title: common.title,
+    title: `${common.title} ${FRONT_KEY}`,
     caption: common.caption,
     ariaLabel: common.title,
     ariaDescription: `${described} Not beaten on both cost and carbon: ${best.map((d) => d.scheme).join(", ") || "none"}.`,
@@ -191,7 +200,7 @@ export function carbonVsCostChart(results: readonly SchemeResult[], common: Comp
       Plot.dot(best, { x: "cost", y: "carbon", r: 11, stroke: "#111", strokeWidth: 1.5 }),
       Plot.dot(data, { x: "cost", y: "carbon", fill: "scheme", r: 6, tip: true }),
       Plot.dot(outside, { x: "cost", y: "carbon", stroke: "scheme", r: 6, strokeWidth: 2, strokeDasharray: "2 2", tip: true }),
-      Plot.text([...data, ...outside], { x: "cost", y: "carbon", text: (d: { scheme: string; id: string }) => (front.has(d.id) && !d.scheme.includes("outside") ? `${d.scheme} (not beaten on both)` : d.scheme), dy: -16, fontSize: 11, textAnchor: "middle", clip: false }),
+      Plot.text([...data, ...outside], { x: "cost", y: "carbon", text: "scheme", dy: -16, fontSize: 11, textAnchor: "middle", clip: false }),
     ],
   };
 }

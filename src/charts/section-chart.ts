@@ -87,6 +87,8 @@ export const SECTION_STYLE = {
   wallStroke: "#555",
   roofStroke: "#1b1f24",
   lineWidth: 2,
+  /** The usable floor's label sits inside the shaded floor, under the clear-height line (px): above it, it ran through a truss roof's members at the eaves. */
+  floorLabelDy: 13,
 } as const;
 
 /**
@@ -121,7 +123,7 @@ export function sectionChartOptions(input: SectionChartInput): Plot.PlotOptions 
       Plot.rect(usableSpans, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: SECTION_STYLE.usableFill, fillOpacity: SECTION_STYLE.usableOpacity }),
       ...(supportZones.length > 0 ? [Plot.rect(supportZones, { x1: "x1", x2: "x2", y1: "y1", y2: "y2", fill: "#b8b8b8", fillOpacity: 0.8 })] : []),
       Plot.ruleY([brief.minClearHeightM], { stroke: SECTION_STYLE.clearStroke, strokeDasharray: SECTION_STYLE.clearDash }),
-      Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => usableLabel, dy: -6, fill: SECTION_STYLE.clearStroke }),
+      Plot.text([{ x: 0, y: brief.minClearHeightM }], { x: "x", y: "y", text: () => usableLabel, dy: SECTION_STYLE.floorLabelDy, fill: SECTION_STYLE.clearStroke }),
       Plot.line(walls, { x: "x", y: "y", z: "side", stroke: SECTION_STYLE.wallStroke, strokeWidth: SECTION_STYLE.lineWidth }),
       ...(input.briefRoof === false && members.length > 0 ? [] : [Plot.line(roof, { x: "x", y: "y", stroke: SECTION_STYLE.roofStroke, strokeWidth: SECTION_STYLE.lineWidth }), ...roofLabel(roof, brief)]),
       ...(members.length > 0 ? [Plot.line(members, { x: "x", y: "y", z: "role", stroke: "role", strokeWidth: 1.2 })] : []),

@@ -49,7 +49,7 @@ export function sectionOutline(input: { brief: Brief; title: string; caption: st
   const marks: OutlineMark[] = [
     ...parts.usableSpans.map((s): OutlineMark => ({ kind: "rect", x: x(s.x1), y: y(s.y2), width: x(s.x2) - x(s.x1), height: y(s.y1) - y(s.y2), fill: SECTION_STYLE.usableFill, opacity: SECTION_STYLE.usableOpacity })),
     { kind: "path", d: `M${frame.left},${clearY}L${frame.right},${clearY}`, stroke: SECTION_STYLE.clearStroke, width: 1, dash: SECTION_STYLE.clearDash },
-    { kind: "text", x: x(0), y: clearY - 6, text: parts.usableLabel, fill: SECTION_STYLE.clearStroke },
+    { kind: "text", x: x(0), y: clearY + SECTION_STYLE.floorLabelDy, text: parts.usableLabel, fill: SECTION_STYLE.clearStroke },
     ...(["left", "right"] as const).map((side): OutlineMark => ({ kind: "path", d: path(parts.walls.filter((w) => w.side === side)), stroke: SECTION_STYLE.wallStroke, width: SECTION_STYLE.lineWidth })),
     { kind: "path", d: path(parts.roof), stroke: SECTION_STYLE.roofStroke, width: SECTION_STYLE.lineWidth },
   ];

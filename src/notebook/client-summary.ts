@@ -104,7 +104,7 @@ export function recommendationBlock(study: Study): HTMLElement {
   box.className = "recommendation";
   box.id = "client-recommendation";
   const h = document.createElement("h3");
-  h.textContent = study.meta.author ? `Recommendation of the project lead (${study.meta.author})` : "Recommendation of the project lead";
+  h.textContent = study.meta.author ? `Recommendation of the project lead — ${study.meta.author}` : "Recommendation of the project lead";
   const text = (study.meta.recommendation ?? "").trim();
   box.append(h);
   for (const para of text === "" ? ["The project lead has not written a recommendation yet (it is written on the Compare page, under Study)."] : text.split(/\n{2,}/)) {

@@ -4,7 +4,7 @@ import { describe, it, expect } from "vitest";
 import { Window } from "happy-dom";
 import * as Plot from "@observablehq/plot";
 import { defaultStudy } from "../../../src/study";
-import { sectionChartOptions, massByMaterialChart, carbonVsCostChart, spanMetricChart, chartCaption } from "../../../src/charts";
+import { sectionChartOptions, massByMaterialChart, carbonVsCostChart, carbonByModuleChart, costPerM2Chart, spanMetricChart, chartCaption } from "../../../src/charts";
 import { fixtureResults, fixtureSpanPoints } from "../../helpers/fixtures";
 
 const window = new Window();
@@ -24,9 +24,13 @@ describe("chart specifications (snapshots)", () => {
     for (const r of results) expect(html).toContain(r.label);
     expect(html).toMatchSnapshot();
   });
-  it("carbon against cost names the schemes not beaten on both", () => {
-    const html = render(carbonVsCostChart(results, { title: "Carbon against cost", caption }));
-    expect(html).toMatch(/not beaten on both/);
+  it("carbon against cost rings the schemes not beaten on both and says what the rings are", () => {
+    const chart = carbonVsCostChart(results, { title: "Carbon against cost", caption });
+    const html = render(chart);
+    expect(html).toContain("ringed: no other scheme is both cheaper and lower in carbon");
+    // one ring: the cable dome is both cheaper and lower in carbon than the geodesic dome here
+    expect(html.match(/r="11"/g)).toHaveLength(1);
+    expect(chart.ariaDescription).toContain("Not beaten on both cost and carbon: Cable dome.");
     expect(html).toMatchSnapshot();
   });
   it("span study lines carry labelled axes", () => {
@@ -72,5 +76,12 @@ describe("chart specifications (snapshots)", () => {
     expect(caption).toMatch(/^Span 160 m, each scheme its own rise, eaves/); // the default study's rise rule is "own"
     expect(chartCaption({ ...study, brief: { ...study.brief, riseRule: "common" } })).toMatch(/^Span 160 m, rise 24 m/);
     expect(caption).toContain(study.carbon.settings.factorSetName);
+  });
+  it("the carbon and cost bars say in their titles what their ticks and lines are, on every page that draws them", () => {
+    const carbon = carbonByModuleChart(results, { title: "Carbon", caption });
+    expect(carbon.title).toMatch(/^Carbon \(dashed: module D, .*reported apart and not subtracted\)$/);
+    expect(render(carbon)).toContain('stroke-dasharray="3 2"');
+    const cost = costPerM2Chart(results, { title: "Cost", caption });
+    expect(cost.title).toBe("Cost (bar: estimate; line: low–high rates)");
   });
 });
