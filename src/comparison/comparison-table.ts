@@ -51,7 +51,7 @@ export function comparisonTable(results: readonly SchemeResult[]): ComparisonRow
   });
 }
 
-/** The table as header + text rows for display and CSV, formatted with each column's digits. */
+/** The table as header + text rows for display and CSV, formatted with each column's digits; "–" for no value and for none of a material. */
 export function comparisonRows(objects: readonly ComparisonRow[]): { header: string[]; rows: string[][] } {
   return {
     header: COMPARISON_COLUMNS.map((c) => c.heading),
@@ -59,6 +59,8 @@ export function comparisonRows(objects: readonly ComparisonRow[]): { header: str
       COMPARISON_COLUMNS.map((c) => {
         const value = o[c.key];
         if (c.digits === null) return String(value ?? "");
+        // none of a material reads as a dash, as the compare page's table writes it (a "0.0" of fabric read as a rounded amount)
+        if (value === 0 && c.key.endsWith("Tonnes")) return "–";
         return typeof value === "number" && Number.isFinite(value) ? value.toLocaleString("en-GB", { maximumFractionDigits: c.digits, minimumFractionDigits: c.digits }) : "–";
       }),
     ),

@@ -6,14 +6,24 @@ import { fmt } from "./format";
 
 const GOAL: Record<ProportionChoice["objective"], string> = { mass: "the least mass", carbon: "the least embodied carbon", cost: "the least cost" };
 
-/** One proportion as "Target strut length 5.5 m", "rise 24.0 m", "Layers double". */
+/**
+ * An option's name in a sentence: its field label without the note in brackets at its end, which
+ * helps whoever fills the field ("Hoops (0 = automatic)", "Diagonal rise per bay (post depth; feet
+ * kept above the clear height)") but read as clutter in a list of chosen values ("Hoops (0 = automatic) 1").
+ */
+function nameOf(label: string): string {
+  return label.replace(/\s*\([^()]*\)$/, "");
+}
+
+/** One proportion as "Target strut length 5.5 m", "rise 24.0 m", "Layers: double", "Hoops 1". */
 export function proportionText(model: SchemeDeclaration, key: string, value: OptionValue | undefined): string {
   if (key === RISE_KEY) return `rise ${typeof value === "number" ? fmt.one(value) : String(value)} m`;
   const spec = model.options.find((s) => s.key === key);
   if (!spec) return `${key} ${String(value)}`;
-  if (spec.kind === "number") return `${spec.label} ${typeof value === "number" ? fmt.sig3(value) : String(value)}${spec.unit ? ` ${spec.unit}` : ""}`;
-  if (spec.kind === "select") return `${spec.label}: ${spec.choices.find((c) => c.value === value)?.label ?? String(value)}`;
-  return `${spec.label}: ${value ? "on" : "off"}`;
+  const name = nameOf(spec.label);
+  if (spec.kind === "number") return `${name} ${typeof value === "number" ? fmt.sig3(value) : String(value)}${spec.unit ? ` ${spec.unit}` : ""}`;
+  if (spec.kind === "select") return `${name}: ${spec.choices.find((c) => c.value === value)?.label ?? String(value)}`;
+  return `${name}: ${value ? "on" : "off"}`;
 }
 
 /** The proportions that differ between two sets, as words (the runner-up against the chosen). */
@@ -72,7 +82,7 @@ const listed = new Intl.ListFormat("en-GB", { type: "conjunction" });
 /** How the candidates were compared (the screening options) and the chosen ones designed (the full options, some proportions chosen again). */
 function fullSentence(model: SchemeDeclaration, full: NonNullable<ProportionChoice["full"]>): string {
   const words = (options: Record<string, OptionValue>) => Object.entries(options).map(([k, v]) => proportionText(model, k, v)).join("; ");
-  const again = full.refined.length === 0 ? "" : `, where ${listed.format(full.refined.map((k) => (k === RISE_KEY ? "the rise" : (model.options.find((o) => o.key === k)?.label ?? k))))} ${full.refined.length > 1 ? "were" : "was"} chosen again on ${full.evaluations} such designs (how: Method and assumptions, Best proportions)`;
+  const again = full.refined.length === 0 ? "" : `, where ${listed.format(full.refined.map((k) => (k === RISE_KEY ? "the rise" : nameOf(model.options.find((o) => o.key === k)?.label ?? k))))} ${full.refined.length > 1 ? "were" : "was"} chosen again on ${full.evaluations} such designs (how: Method and assumptions, Best proportions)`;
   return `The candidates were compared with ${words(full.screening)} (the fast first estimate); the chosen ones are designed with ${words(full.options)}${again}.`;
 }
 

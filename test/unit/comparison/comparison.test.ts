@@ -92,4 +92,14 @@ describe("comparisonTable", () => {
     expect(rows).toHaveLength(evaluation.results.length);
     for (const row of rows) expect(row).toHaveLength(header.length);
   });
+  it("writes none of a material as a dash and a small amount as a number", () => {
+    const evaluation = evaluateStudy(defaultStudy(), defaultCatalogue());
+    const { header, rows } = comparisonRows(comparisonTable(evaluation.results));
+    const [scheme, concrete, steel] = ["Scheme", "Concrete (t)", "Steel (t)"].map((h) => header.indexOf(h));
+    const shell = rows.find((r) => r[scheme!] === "Thin concrete shell")!;
+    expect(shell[steel!]).toBe("–");
+    expect(shell[concrete!]).toMatch(/^[\d,]+$/);
+    const geodesic = rows.find((r) => r[scheme!] === "Geodesic steel dome")!;
+    expect(geodesic[concrete!]).toBe("–");
+  });
 });

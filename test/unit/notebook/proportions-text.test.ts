@@ -26,6 +26,9 @@ describe("proportions in words", () => {
   it("names each proportion with its label and unit", () => {
     expect(proportionText(model, "targetStrutLengthM", 6.5)).toBe("Target strut length 6.5 m");
     expect(proportionText(model, "riseM", 22.4)).toBe("rise 22.4 m");
+    // without the field's note in brackets ("Hoops (0 = automatic)"); a bracket inside the name stays
+    expect(proportionText(cableDome as unknown as SchemeModel, "hoops", 1)).toBe("Hoops 1");
+    expect(proportionText(cableNet as unknown as SchemeModel, "hangerSpacingM", 6)).toBe("Hanger (circumferential cable) spacing, at most 6 m");
   });
 
   it("says what was chosen for which goal, what is pinned, and how much the runner-up differs in what", () => {
@@ -74,7 +77,9 @@ describe("proportions in words", () => {
     const text = proportionsSentences(dome, full).join(" ");
     expect(text).toContain("The candidates were compared with Analysis: Closed form only (the fast first estimate); the chosen ones are designed with Analysis: 3D nonlinear (sizes from the analysed forces), where the rise and Diagonal rise per bay");
     expect(text).toContain("were chosen again on 8 such designs");
-    const post = "Diagonal rise per bay (post depth; feet kept above the clear height)";
+    // the field's note in brackets stays on the field, not in the sentence
+    expect(text).not.toContain("(post depth");
+    const post = "Diagonal rise per bay";
     expect(text).toContain(`Of those designs: the runner-up (${post} 0.4) is 3.0 % higher.`);
     // the first estimate's runner-up is named against what the first estimate chose, not against the final choice
     expect(text).toContain(`On the first estimate, which chose ${post} 0.53: the least found (${post} 0.45) is 1.0 % lower`);
