@@ -60,6 +60,20 @@ export function model3dMagnification(input: Pick<Model3dChartInput, "view" | "ma
   return largest > 0 ? roundMagnification((0.04 * extent) / largest) : 1;
 }
 
+/** How a member is drawn, each state in its one colour. */
+const MEMBER_STATES = [
+  { state: "cable", colour: "#0072B2" },
+  { state: "strut", colour: "#555555" },
+  { state: "beam", colour: "#009E73" },
+  { state: "slack cable", colour: "#D55E00" },
+  { state: "most utilised", colour: "#E69F00" },
+] as const;
+
+/** Whether the chart draws the buckling mode (asked for, and the view has one) rather than the deformed shape. */
+function drawsModeOf(input: Pick<Model3dChartInput, "mode">, view: AnalysisView): boolean {
+  return input.mode === true && view.modeShape !== undefined;
+}
+
 /**
  * Plot options for a 3D pin-jointed or frame model (an AnalysisView) drawn in plan or in a stated
  * oblique projection: the model as built in light grey, the deformed shape (or the buckling mode)
@@ -86,13 +100,18 @@ export function model3dChartOptions(input: Model3dChartInput): Plot.PlotOptions 
   const built = segment(view.nodes);
   const deformed = segment(moved);
   const slack = view.members.filter((m) => m.slack).length;
+  // the legend names what is drawn (a cable dome has no beam); whether any cable went slack, the caption says
+  const states = new Set(deformed.map((d) => d.state));
+  const legend = MEMBER_STATES.filter((k) => states.has(k.state));
+  const cables = view.members.some((m) => m.kind === "cable");
+  const slackWords = !cables || drawsModeOf(input, view) ? "" : slack === 0 ? "; no cable slack" : `; ${slack} slack cable${slack === 1 ? "" : "s"} dashed`;
   // a mode shape has no size of its own: say how large it is drawn rather than a magnification of arbitrary units
-  const drawsMode = input.mode === true && view.modeShape !== undefined;
+  const drawsMode = drawsModeOf(input, view);
   const scale = drawsMode ? `its largest movement drawn as ${fmtLength(magnification * largest)} (a buckling mode has no size of its own)` : `magnified ${magnification}×`;
   const description = `${view.members.length} members and ${view.nodes.length} nodes in ${projection === "plan" ? "plan" : "an oblique view (azimuth −35°, elevation 25°)"}; ${label} under ${view.caseName}, ${drawsMode ? scale : `${scale} (largest ${largest.toFixed(3)} m)`}; ${slack} slack cables dashed; the most utilised members marked.`;
   return {
     title: input.title,
-    caption: `${input.caption} ${label[0]?.toUpperCase()}${label.slice(1)} under ${view.caseName}, ${scale}; grey: as built.`,
+    caption: `${input.caption} ${label[0]?.toUpperCase()}${label.slice(1)} under ${view.caseName}, ${scale}${slackWords}; grey: as built.`,
     ariaLabel: input.title,
     ariaDescription: description,
     width: input.width ?? 460,
@@ -100,7 +119,7 @@ export function model3dChartOptions(input: Model3dChartInput): Plot.PlotOptions 
     x: { label: projection === "plan" ? "x (m)" : "across the view (m)" },
     y: { label: projection === "plan" ? "y (m)" : "up the view (m)" },
     aspectRatio: 1,
-    color: { legend: true, domain: ["cable", "strut", "beam", "slack cable", "most utilised"], range: ["#0072B2", "#555555", "#009E73", "#D55E00", "#E69F00"] },
+    color: { legend: true, domain: legend.map((k) => k.state), range: legend.map((k) => k.colour) },
     marks: [
       Plot.link(built, { x1: "x1", y1: "y1", x2: "x2", y2: "y2", stroke: "#c8c8c8", strokeWidth: 0.5 }),
       Plot.link(deformed.filter((d) => d.state !== "slack cable"), {

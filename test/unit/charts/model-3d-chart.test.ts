@@ -28,7 +28,20 @@ describe("model3dChartOptions", () => {
     expect(o.caption).toMatch(/drifted snow \(6\.10b\), magnified 5×/);
     expect(o.ariaLabel).toBe("Net: 3D");
     expect(o.ariaDescription).toMatch(/1 slack cables dashed/);
+    expect(o.caption).toMatch(/magnified 5×; 1 slack cable dashed; grey: as built\.$/);
     expect(o.marks?.length).toBe(3);
+  });
+  it("lists in its legend only what it draws, each in its one colour, and says when no cable went slack", () => {
+    const o = model3dChartOptions({ view, projection: "plan", title: "Net", caption: "" });
+    // the largest |force| of three members (5 % of them, at least one) is the most utilised
+    expect(o.color?.domain).toEqual(["strut", "slack cable", "most utilised"]);
+    expect(o.color?.range).toEqual(["#555555", "#D55E00", "#E69F00"]);
+    const taut = { ...view, members: view.members.map((m) => ({ ...m, slack: false, forceN: m.forceN || 1e4 })) };
+    const t = model3dChartOptions({ view: taut, projection: "plan", title: "Net", caption: "" });
+    expect(t.color?.domain).toEqual(["cable", "strut", "most utilised"]);
+    expect(t.caption).toMatch(/; no cable slack; grey: as built\.$/);
+    const frame = { ...view, members: view.members.map((m) => ({ ...m, kind: "beam" as const, slack: false })) };
+    expect(model3dChartOptions({ view: frame, projection: "plan", title: "Lattice", caption: "" }).caption).not.toMatch(/slack/);
   });
   it("draws the buckling mode when asked and the view has one", () => {
     const o = model3dChartOptions({ view, projection: "plan", mode: true, title: "Lattice", caption: "" });
