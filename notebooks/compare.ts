@@ -325,7 +325,7 @@ for (const s of schemes) {
     return wrap;
   });
   const options = lazyDetails(panel, `${id}-options-panel`, "Options");
-  staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model, (key) => s.result.peek()?.proportions?.proportions[key]));
+  staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model, (key) => s.result.value?.proportions?.proportions[key]));
 }
 
 // The study's own lines (title, prepared by, date, notes), at the foot of the brief.

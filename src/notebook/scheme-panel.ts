@@ -3,8 +3,8 @@ import { ON_DEMAND_ANALYSIS_OPTION, SCHEME_DECLARATIONS } from "../schemes/decla
 import { onDemandAnalysesOn } from "../study/on-demand";
 import type { Study } from "../study/study";
 import { h, type ComponentChild } from "preact";
-import { useMemo } from "preact/hooks";
-import { computed } from "@preact/signals-core";
+import { useLayoutEffect, useMemo, useRef } from "preact/hooks";
+import { computed, effect } from "@preact/signals-core";
 import { setIn } from "../kernel/patch";
 import type { SchemeResult } from "../pipeline";
 import { materialInfo } from "../materials";
@@ -34,7 +34,17 @@ function PinControl({ store, model, optionKey, chosen }: { store: StudyStore; mo
       },
     };
   }, [store, model, optionKey, chosen]);
-  return h(ToggleControl, { binding, id: `${model.id}-${optionKey}-pinned`, label: "pinned (not searched)", className: "pin" });
+  // unpinned, the field keeps the study's value while the design shown uses the search's: say which
+  const note = useRef<HTMLSpanElement>(null);
+  useLayoutEffect(
+    () =>
+      effect(() => {
+        const value = binding.value.value ? undefined : chosen(optionKey);
+        if (note.current) note.current.textContent = typeof value === "number" ? `searched: the design shown uses ${fmt.sig3(value)}` : "";
+      }),
+    [binding, chosen, optionKey],
+  );
+  return h("div", { className: "pin" }, [h(ToggleControl, { binding, id: `${model.id}-${optionKey}-pinned`, label: "pinned (not searched)" }), h("span", { className: "chosen-note", ref: note })]);
 }
 
 /** One option's control, bound to the study at the scheme's option path. */

@@ -46,6 +46,22 @@ describe("compare page", () => {
     await page.close();
   });
 
+  it("a searched proportion's field says which value the design shown uses, until it is pinned at that value", async () => {
+    const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
+    await page.waitForSelector("#cell-geodesic-dome-proportions p");
+    await page.click("#geodesic-dome-options-panel summary");
+    const note = page.locator("#cell-geodesic-dome-options .free-option", { has: page.locator("#geodesic-dome-targetStrutLengthM") }).locator(".chosen-note");
+    await expect.poll(() => note.textContent()).toMatch(/^searched: the design shown uses [\d.]+$/);
+    const used = (await note.textContent())!.replace("searched: the design shown uses ", "");
+    // the same value the panel's sentence names as chosen
+    expect(await page.locator("#cell-geodesic-dome-proportions p").first().textContent()).toContain(`Target strut length ${used} m`);
+    await page.check("#geodesic-dome-targetStrutLengthM-pinned");
+    await expect.poll(() => note.textContent()).toBe("");
+    expect(Number(await page.inputValue("#geodesic-dome-targetStrutLengthM"))).toBe(Number(used));
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it("an out-of-range value shows an inline message and changes nothing", async () => {
     const { page, errors } = await openPage(browser, `${inject("baseUrl")}/compare.html`);
     await page.waitForSelector("#cell-geometry dd");
