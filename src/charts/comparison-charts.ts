@@ -169,7 +169,7 @@ export function costPerM2Chart(results: readonly SchemeResult[], common: Compari
 /** What the scatter's rings are, in its title: on each point's name as well, the names ran into each other and the axis where two schemes cost nearly the same. */
 const FRONT_KEY = "(ringed: no other scheme is both cheaper and lower in carbon)";
 
-/** Scatter: carbon against cost per m² of usable floor; schemes no other beats on both are ringed and named. Schemes outside their range are hollow and only drawn when brought in. */
+/** Scatter: carbon against cost per m² of usable floor, every point named; schemes no other beats on both are ringed (FRONT_KEY in the title). Schemes outside their range are hollow and only drawn when brought in. */
 export function carbonVsCostChart(results: readonly SchemeResult[], common: ComparisonChartCommon): DescribedChart {
   const { ranked, apart } = partition(results);
   const point = (r: SchemeResult) => {

@@ -17,7 +17,8 @@ import type { StudyStore } from "./study-store";
 /**
  * A free proportion's "pinned" box (issue 12 item 4): pinned, the search leaves the option at its
  * value; pinning takes the value the search chose (`chosen`), so the design does not move, in one
- * checked edit of the study.
+ * checked edit of the study. Unpinned, a note beside the box names the value the design shown uses
+ * (`chosen` read in an effect: a function that reads the design's signal keeps the note current).
  */
 function PinControl({ store, model, optionKey, chosen }: { store: StudyStore; model: SchemeDeclaration; optionKey: string; chosen: (key: string) => OptionValue | undefined }): ComponentChild {
   const binding = useMemo(() => {
