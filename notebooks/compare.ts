@@ -325,7 +325,8 @@ for (const s of schemes) {
     return wrap;
   });
   const options = lazyDetails(panel, `${id}-options-panel`, "Options");
-  staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model, (key) => s.result.value?.proportions?.proportions[key]));
+  // the chosen value read only while the Options are open: the pinned boxes' notes then follow each arriving design, and do no work when closed
+  staticCell(options.body, { id: `${id}-options` }, schemeOptionControls(store, s.model, (key) => (options.open.value ? s.result.value?.proportions?.proportions[key] : undefined)));
 }
 
 // The study's own lines (title, prepared by, date, notes), at the foot of the brief.
