@@ -51,10 +51,21 @@ export function comparisonTable(results: readonly SchemeResult[]): ComparisonRow
   });
 }
 
-/** The table as header + text rows for display and CSV, formatted with each column's digits; "–" for no value and for none of a material. */
-export function comparisonRows(objects: readonly ComparisonRow[]): { header: string[]; rows: string[][] } {
+/** A column's heading, the cost columns' with the rates' currency where there is one ("Cost (million EUR)"). */
+function headingOf(column: (typeof COMPARISON_COLUMNS)[number], currency: string | null): string {
+  if (!currency) return column.heading;
+  if (column.key === "costMillion") return `Cost (million ${currency})`;
+  if (column.key === "costPerM2Floor") return `Cost (${currency}/m² floor)`;
+  return column.heading;
+}
+
+/**
+ * The table as header + text rows for display and CSV, formatted with each column's digits; "–" for
+ * no value and for none of a material; the cost columns headed with the rates' `currency`.
+ */
+export function comparisonRows(objects: readonly ComparisonRow[], currency: string | null = null): { header: string[]; rows: string[][] } {
   return {
-    header: COMPARISON_COLUMNS.map((c) => c.heading),
+    header: COMPARISON_COLUMNS.map((c) => headingOf(c, currency)),
     rows: objects.map((o) =>
       COMPARISON_COLUMNS.map((c) => {
         const value = o[c.key];

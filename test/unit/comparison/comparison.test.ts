@@ -92,6 +92,13 @@ describe("comparisonTable", () => {
     expect(rows).toHaveLength(evaluation.results.length);
     for (const row of rows) expect(row).toHaveLength(header.length);
   });
+  it("heads the cost columns with the rates' currency when given", () => {
+    const evaluation = evaluateStudy(defaultStudy(), defaultCatalogue());
+    const { header } = comparisonRows(comparisonTable(evaluation.results), "EUR");
+    expect(header).toContain("Cost (million EUR)");
+    expect(header).toContain("Cost (EUR/m² floor)");
+    expect(comparisonRows(comparisonTable(evaluation.results)).header).toContain("Cost (million)");
+  });
   it("writes none of a material as a dash and a small amount as a number", () => {
     const evaluation = evaluateStudy(defaultStudy(), defaultCatalogue());
     const { header, rows } = comparisonRows(comparisonTable(evaluation.results));
