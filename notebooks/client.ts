@@ -41,7 +41,7 @@ window.addEventListener("storage", (event) => {
 });
 
 function headlineTable(list: readonly SchemeResult[], study: Study) {
-  const { header, rows } = comparisonRows(comparisonTable(list), list.find((r) => r.figures.currency !== null)?.figures.currency ?? null);
+  const { header, rows } = comparisonRows(comparisonTable(list));
   return { caption: `The schemes at ${study.brief.spanM} m span (per m² figures on usable floor)`, header, rows };
 }
 

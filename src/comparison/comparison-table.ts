@@ -21,20 +21,21 @@ export const COMPARISON_COLUMNS: readonly { key: ComparisonKey; heading: string;
   { key: "warningCount", heading: "Warnings", digits: 0 },
 ];
 
-type ComparisonKey = "id" | "label" | "usableFloorM2" | "selfWeightKgPerM2" | TonnesKey | "carbonTonnes" | "carbonKgCO2ePerM2Floor" | "costMillion" | "costPerM2Floor" | "governing" | "verdict" | "warningCount";
+type ComparisonKey = "id" | "currency" | "label" | "usableFloorM2" | "selfWeightKgPerM2" | TonnesKey | "carbonTonnes" | "carbonKgCO2ePerM2Floor" | "costMillion" | "costPerM2Floor" | "governing" | "verdict" | "warningCount";
 
-/** One row of the side-by-side comparison: the columns of COMPARISON_COLUMNS, plus `id`. */
+/** One row of the side-by-side comparison: the columns of COMPARISON_COLUMNS, plus `id` and the rates' `currency` (null without costs). */
 export type ComparisonRow = Record<ComparisonKey, string | number | null>;
 
 /**
  * The side-by-side comparison, one row per scheme, with the columns of COMPARISON_COLUMNS (plus
- * `id`), read from each scheme's figures.
+ * `id` and `currency`), read from each scheme's figures.
  */
 export function comparisonTable(results: readonly SchemeResult[]): ComparisonRow[] {
   return results.map(({ figures: f }) => {
     const tonnes = Object.fromEntries(MATERIAL_KINDS.map((k) => [`${k.kind}Tonnes`, f.massByKindKg[k.kind] / 1000])) as Record<TonnesKey, number>;
     return {
       id: f.id,
+      currency: f.currency,
       label: f.label,
       usableFloorM2: f.usableFloorM2,
       selfWeightKgPerM2: f.selfWeightKgPerM2,
@@ -52,7 +53,7 @@ export function comparisonTable(results: readonly SchemeResult[]): ComparisonRow
 }
 
 /** A column's heading, the cost columns' with the rates' currency where there is one ("Cost (million EUR)"). */
-function headingOf(column: (typeof COMPARISON_COLUMNS)[number], currency: string | null): string {
+function headingOf(column: (typeof COMPARISON_COLUMNS)[number], currency: string | undefined): string {
   if (!currency) return column.heading;
   if (column.key === "costMillion") return `Cost (million ${currency})`;
   if (column.key === "costPerM2Floor") return `Cost (${currency}/m² floor)`;
@@ -61,9 +62,10 @@ function headingOf(column: (typeof COMPARISON_COLUMNS)[number], currency: string
 
 /**
  * The table as header + text rows for display and CSV, formatted with each column's digits; "–" for
- * no value and for none of a material; the cost columns headed with the rates' `currency`.
+ * no value and for none of a material; the cost columns headed with the rates' currency.
  */
-export function comparisonRows(objects: readonly ComparisonRow[], currency: string | null = null): { header: string[]; rows: string[][] } {
+export function comparisonRows(objects: readonly ComparisonRow[]): { header: string[]; rows: string[][] } {
+  const currency = objects.find((o) => typeof o.currency === "string")?.currency as string | undefined;
   return {
     header: COMPARISON_COLUMNS.map((c) => headingOf(c, currency)),
     rows: objects.map((o) =>
